@@ -1,0 +1,205 @@
+/**
+ * The public shapes of the calculation core. Everything that leaves calc (to shared, server, ui,
+ * the PDF) is one of these. Values inside calc are SI; `unit` strings are mathjs unit text.
+ */
+
+/** A physical quantity as a user typed it or as the core reports it, e.g. { value: 12, unit: 'kN' }. */
+export interface Quantity {
+  value: number;
+  unit: string;
+}
+
+/** What an input field may hold: a quantity, a plain number (ratios, counts), text (choices) or a flag. */
+export type InputValue = Quantity | number | string | boolean;
+
+/** A sheet's inputs, keyed by the field keys of its sheet type. */
+export type SheetInputs = Record<string, InputValue>;
+
+/** Physical dimension of a field or result; decides which units are accepted and offered. */
+export type Dimension =
+  | 'length'
+  | 'force'
+  | 'torque'
+  | 'power'
+  | 'speed'
+  | 'angularSpeed'
+  | 'mass'
+  | 'inertia'
+  | 'pressure'
+  | 'pv'
+  | 'energy'
+  | 'temperature'
+  | 'temperatureDifference'
+  | 'time'
+  | 'angle'
+  | 'acceleration'
+  | 'stiffness'
+  | 'specificHeat'
+  | 'heatTransferCoefficient'
+  | 'area'
+  | 'frequency'
+  | 'dimensionless';
+
+/** One input field of a sheet type. */
+export interface FieldDefinition {
+  key: string;
+  /** Section id the field is grouped under (e.g. 'duty', 'brake', 'lining'). */
+  section: string;
+  label: string;
+  /** Symbol as printed in derivations, e.g. 'F_s'. */
+  symbol: string;
+  kind: 'quantity' | 'number' | 'integer' | 'choice' | 'boolean';
+  dimension?: Dimension;
+  /** Default SI and US customary display units for a quantity field. */
+  unitSI?: string;
+  unitUS?: string;
+  default: InputValue;
+  /** Inclusive bounds in SI (for quantities) or plain (for numbers). */
+  min?: number;
+  max?: number;
+  /** True when the lower bound itself is not allowed (strictly positive). */
+  exclusiveMin?: boolean;
+  choices?: { value: string; label: string }[];
+  help?: string;
+}
+
+/** A section of a sheet type's inputs or results. */
+export interface SectionDefinition {
+  id: string;
+  title: string;
+}
+
+/** One printed derivation step: the formula text and the substitution come from the same definition that computes the value. */
+export interface DerivationStep {
+  id: string;
+  section: string;
+  label: string;
+  symbol: string;
+  /** Formula in symbols, e.g. 'M_b = μ · N · D'. */
+  formula: string;
+  /** Formula with values and units substituted, e.g. 'M_b = 0.35 · 12.4 kN · 0.4 m'. */
+  substituted: string;
+  /** Result in SI. */
+  value: number;
+  /** SI unit of the result (mathjs text), '' for dimensionless. */
+  unit: string;
+  dimension: Dimension;
+  /** Where the method comes from (book and edition, standard and clause), or 'definition'. */
+  reference: string;
+}
+
+/** A result presented on the sheet (a subset of the derivation values, named). */
+export interface ResultValue {
+  key: string;
+  section: string;
+  label: string;
+  symbol: string;
+  value: number;
+  unit: string;
+  dimension: Dimension;
+}
+
+/** A pass/fail check against an acceptance criterion. */
+export interface CheckResult {
+  id: string;
+  section: string;
+  label: string;
+  /** The computed value and the limit, both in SI `unit`. */
+  value: number;
+  limit: number;
+  unit: string;
+  dimension: Dimension;
+  /** 'max': value must be ≤ limit; 'min': value must be ≥ limit. */
+  kind: 'max' | 'min';
+  /** value/limit for 'max', limit/value for 'min'; 1.0 = exactly at the limit; > 1 fails. */
+  utilisation: number;
+  pass: boolean;
+  /** Where the limit comes from (criteria-set value source). */
+  source: string;
+  message: string;
+}
+
+export interface ChartSeries {
+  name: string;
+  points: { x: number; y: number }[];
+}
+
+/** Data for one chart, in SI; the presentation layer converts units. */
+export interface ChartData {
+  id: string;
+  title: string;
+  xLabel: string;
+  xUnit: string;
+  xDimension: Dimension;
+  yLabel: string;
+  yUnit: string;
+  yDimension: Dimension;
+  series: ChartSeries[];
+  /** Marked points (e.g. the set point) and horizontal/vertical reference lines. */
+  markers?: { label: string; x: number; y: number }[];
+  referenceLines?: { label: string; axis: 'x' | 'y'; value: number }[];
+}
+
+/** Field settings handed to the field team (spring length, strokes, back-off angles…). */
+export interface FieldSetting {
+  key: string;
+  label: string;
+  value: number;
+  unit: string;
+  dimension: Dimension;
+  note?: string;
+}
+
+/** The complete outcome of evaluating one sheet. */
+export interface SheetEvaluation {
+  sheetType: string;
+  coreVersion: string;
+  criteriaSetId: string;
+  criteriaSetVersion: number;
+  results: ResultValue[];
+  checks: CheckResult[];
+  derivation: DerivationStep[];
+  charts: ChartData[];
+  fieldSettings: FieldSetting[];
+  /** Tables for the field team, e.g. the spring setting table. */
+  tables: { id: string; title: string; columns: { key: string; label: string; unit: string; dimension: Dimension }[]; rows: Record<string, number>[] }[];
+  warnings: string[];
+  /** True when every check passes. */
+  pass: boolean;
+}
+
+/** One value of an acceptance-criteria set, with where it comes from. */
+export interface CriterionValue {
+  key: string;
+  label: string;
+  value: number;
+  unit: string;
+  /** e.g. 'published: 29 CFR 1910.179(f)(2)', 'common practice', 'from memory — check the governing standard'. */
+  source: string;
+  confidence: 'published' | 'secondary' | 'common practice' | 'memory';
+}
+
+export interface CriteriaSet {
+  id: string;
+  version: number;
+  name: string;
+  description: string;
+  values: CriterionValue[];
+}
+
+/** A sheet type: its fields, sections and the one evaluate(). */
+export interface SheetTypeDefinition {
+  id: string;
+  title: string;
+  description: string;
+  sections: SectionDefinition[];
+  fields: FieldDefinition[];
+  /** Throws CalcInputError (with field errors) on invalid input. */
+  evaluate(inputs: SheetInputs, criteria: CriteriaSet): SheetEvaluation;
+}
+
+/** A field-level problem with an input. */
+export interface FieldError {
+  field: string;
+  message: string;
+}

@@ -1,0 +1,8 @@
+import { defineConfig } from 'vitest/config';
+
+// One run covers every workspace; each project keeps its own environment and includes.
+export default defineConfig({
+  test: {
+    projects: ['calc', 'shared', 'db', 'server', 'ui', 'verification'],
+  },
+});
