@@ -1,0 +1,3 @@
+export * from './api-error.js';
+export * from './users/user.schema.js';
+export * from './auth/auth.schema.js';

@@ -1,0 +1,50 @@
+import { z } from 'zod';
+
+export const roles = ['engineer', 'checker', 'viewer', 'admin'] as const;
+export const roleSchema = z.enum(roles);
+export type Role = z.infer<typeof roleSchema>;
+
+export const userSchema = z.object({
+  id: z.string().uuid(),
+  email: z.string().email(),
+  displayName: z.string(),
+  initials: z.string(),
+  role: roleSchema,
+  active: z.boolean(),
+  unitSystem: z.enum(['SI', 'US']),
+});
+export type User = z.infer<typeof userSchema>;
+
+const password = z.string().min(12, 'at least 12 characters').max(200);
+
+export const createUserSchema = z
+  .object({
+    email: z.string().trim().toLowerCase().email('not a valid e-mail address'),
+    displayName: z.string().trim().min(2, 'at least 2 characters').max(120),
+    initials: z
+      .string()
+      .trim()
+      .regex(/^[A-Z]{2,4}$/, '2 to 4 capital letters'),
+    role: roleSchema,
+    password,
+  })
+  .strict();
+export type CreateUserInput = z.infer<typeof createUserSchema>;
+
+export const updateUserSchema = z
+  .object({
+    displayName: z.string().trim().min(2).max(120).optional(),
+    initials: z
+      .string()
+      .trim()
+      .regex(/^[A-Z]{2,4}$/, '2 to 4 capital letters')
+      .optional(),
+    role: roleSchema.optional(),
+    active: z.boolean().optional(),
+    unitSystem: z.enum(['SI', 'US']).optional(),
+  })
+  .strict();
+export type UpdateUserInput = z.infer<typeof updateUserSchema>;
+
+export const userListSchema = z.object({ items: z.array(userSchema) });
+export type UserList = z.infer<typeof userListSchema>;
