@@ -1,0 +1,32 @@
+import { promises as fs } from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath, pathToFileURL } from 'node:url';
+import type { Kysely } from 'kysely';
+import type { DB } from './database.js';
+
+/**
+ * Seed modules: every compiled `db/dist/seeds/*.js` exporting `seed(db: Kysely<DB>)`, run in
+ * file-name order (timestamp prefix), so the demo users exist before the demo scenario. Each one
+ * must be idempotent: `npm start` runs them on every start.
+ */
+export const seedFolder = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', 'seeds');
+
+interface SeedModule {
+  seed: (db: Kysely<DB>) => Promise<void>;
+}
+
+export async function listSeeds(): Promise<string[]> {
+  const files = await fs.readdir(seedFolder).catch(() => [] as string[]);
+  return files.filter((f) => f.endsWith('.js')).sort();
+}
+
+/** Run every seed module in order; returns their names. */
+export async function seed(db: Kysely<DB>): Promise<string[]> {
+  const names = await listSeeds();
+  for (const name of names) {
+    const mod = (await import(pathToFileURL(path.join(seedFolder, name)).href)) as Partial<SeedModule>;
+    if (typeof mod.seed !== 'function') throw new Error(`seed file ${name} exports no seed(db)`);
+    await mod.seed(db);
+  }
+  return names.map((n) => n.slice(0, -3));
+}
