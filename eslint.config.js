@@ -1,0 +1,42 @@
+import js from '@eslint/js';
+import tseslint from 'typescript-eslint';
+import importX from 'eslint-plugin-import-x';
+import globals from 'globals';
+
+// Dependency direction is one way: calc ← shared ← {server, ui}; db ← server; ui never imports server or db.
+const zones = [
+  { target: './calc', from: ['./shared', './db', './server', './ui'], message: 'calc is the pure core: it imports no other workspace.' },
+  { target: './shared', from: ['./db', './server', './ui'], message: 'shared depends on calc only.' },
+  { target: './db', from: ['./server', './ui'], message: 'db must not import server or ui.' },
+  { target: './ui', from: ['./server', './db'], message: 'ui never imports server or db.' },
+  { target: './server', from: ['./ui'], message: 'server must not import ui.' },
+];
+const packageBans = {
+  calc: ['@holdfast/shared', '@holdfast/db', '@holdfast/server', '@holdfast/ui'],
+  shared: ['@holdfast/db', '@holdfast/server', '@holdfast/ui'],
+  db: ['@holdfast/server', '@holdfast/ui'],
+  ui: ['@holdfast/server', '@holdfast/db'],
+};
+
+export default tseslint.config(
+  { ignores: ['**/dist/**', '**/node_modules/**', '.data/**', 'test-output/**', 'ui/dist/**'] },
+  js.configs.recommended,
+  ...tseslint.configs.recommended,
+  {
+    plugins: { 'import-x': importX },
+    languageOptions: { globals: { ...globals.node, ...globals.browser } },
+    rules: {
+      'import-x/no-restricted-paths': ['error', { zones }],
+      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_', caughtErrors: 'none' }],
+      '@typescript-eslint/no-explicit-any': 'off',
+      '@typescript-eslint/no-empty-object-type': 'off',
+      'no-empty': ['error', { allowEmptyCatch: true }],
+    },
+  },
+  ...Object.entries(packageBans).map(([ws, banned]) => ({
+    files: [`${ws}/**/*.{ts,tsx,js,mjs}`],
+    rules: {
+      'no-restricted-imports': ['error', { paths: banned.map((name) => ({ name, message: `${ws} must not depend on ${name}.` })) }],
+    },
+  })),
+);

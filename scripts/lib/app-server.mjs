@@ -1,0 +1,57 @@
+import { spawn } from 'node:child_process';
+import path from 'node:path';
+import { run } from './run.mjs';
+import { step, fail } from './log.mjs';
+
+export async function migrateAndSeed(projectDir, databaseUrl) {
+  const cli = path.join(projectDir, 'db', 'dist', 'src', 'cli.js');
+  const env = { ...process.env, DATABASE_URL: databaseUrl };
+  try {
+    step('migrating the database…');
+    await run('node', [cli, 'migrate'], { cwd: projectDir, env });
+    step('seeding the demo scenario…');
+    await run('node', [cli, 'seed'], { cwd: projectDir, env });
+  } catch (e) {
+    fail(`database set-up failed: ${e.message}`);
+  }
+}
+
+/** Start the built server as a child and wait until /api/health answers 200. */
+export async function startAppServer(projectDir, env, { timeoutMs = 60000, inherit = true } = {}) {
+  const child = spawn('node', [path.join(projectDir, 'server', 'dist', 'main.js')], {
+    cwd: projectDir,
+    env: { ...process.env, ...env },
+    stdio: inherit ? 'inherit' : ['ignore', 'pipe', 'pipe'],
+  });
+  let output = '';
+  child.stdout?.on('data', (d) => (output = (output + d).slice(-8000)));
+  child.stderr?.on('data', (d) => (output = (output + d).slice(-8000)));
+  let exited = null;
+  child.on('exit', (code) => (exited = code));
+  const url = `http://127.0.0.1:${env.PORT}`;
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    if (exited !== null) fail(`the server stopped during start-up (exit ${exited})\n${output}`);
+    try {
+      const res = await fetch(`${url}/api/health`);
+      if (res.ok) return { child, url, output: () => output };
+    } catch {
+      /* not listening yet */
+    }
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  child.kill('SIGTERM');
+  fail(`the server did not answer ${url}/api/health within ${timeoutMs / 1000} s\n${output}`);
+}
+
+export function stopChild(child) {
+  return new Promise((resolve) => {
+    if (!child || child.exitCode !== null) return resolve();
+    const t = setTimeout(() => child.kill('SIGKILL'), 8000);
+    child.once('exit', () => {
+      clearTimeout(t);
+      resolve();
+    });
+    child.kill('SIGTERM');
+  });
+}

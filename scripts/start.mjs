@@ -1,0 +1,61 @@
+// `npm start`: install what is missing, start PostgreSQL, migrate, seed, build, serve on 127.0.0.1:3000.
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { ensureNpmDependencies } from './lib/deps.mjs';
+import { ensureDejaVu } from './lib/apt.mjs';
+import { startCluster, portFree } from './lib/postgres.mjs';
+import { buildAll } from './lib/build.mjs';
+import { migrateAndSeed, startAppServer, stopChild } from './lib/app-server.mjs';
+import { step, fail } from './lib/log.mjs';
+
+const projectDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+const port = Number(process.env.PORT ?? 3000);
+const pgPort = Number(process.env.PGPORT ?? 54320);
+const started = Date.now();
+
+if (!Number.isInteger(port) || port < 1 || port > 65535) fail(`PORT=${process.env.PORT} is not a port number`);
+if (!(await portFree(port))) {
+  fail(`port ${port} on 127.0.0.1 is already in use (is Holdfast already running?). ` +
+    `Stop that program or start on another port: PORT=3100 npm start`);
+}
+
+await ensureNpmDependencies(projectDir);
+await ensureDejaVu();
+const cluster = await startCluster({ projectDir, name: 'pg', port: pgPort, durable: true });
+let server = null;
+let stopping = false;
+const shutdown = async (signal) => {
+  if (stopping) return;
+  stopping = true;
+  step(`${signal}: stopping the server and PostgreSQL…`);
+  await stopChild(server?.child);
+  await cluster.stop();
+  step('stopped cleanly');
+  process.exit(0);
+};
+process.on('SIGINT', () => shutdown('SIGINT'));
+process.on('SIGTERM', () => shutdown('SIGTERM'));
+
+await cluster.ensureDatabase('holdfast');
+await buildAll(projectDir);
+const databaseUrl = cluster.url('holdfast');
+await migrateAndSeed(projectDir, databaseUrl);
+
+step(`starting Holdfast on http://127.0.0.1:${port} …`);
+server = await startAppServer(projectDir, {
+  DATABASE_URL: databaseUrl,
+  PORT: String(port),
+  HOST: '127.0.0.1',
+  PUBLIC_URL: process.env.PUBLIC_URL ?? `http://127.0.0.1:${port}`,
+  S3_EMBEDDED: process.env.S3_EMBEDDED ?? '1',
+  MAIL_EMBEDDED: process.env.MAIL_EMBEDDED ?? '1',
+  NODE_ENV: 'production',
+});
+step(`ready in ${((Date.now() - started) / 1000).toFixed(1)} s: http://127.0.0.1:${port}  (API under /api, docs at /api/docs)`);
+step('demo sign-ins (demo only): engineer@holdfast.test, checker@holdfast.test, viewer@holdfast.test, admin@holdfast.test — password holdfast-demo');
+step('press Ctrl-C to stop');
+server.child.on('exit', async (code) => {
+  if (stopping) return;
+  await cluster.stop();
+  fail(`the server stopped unexpectedly (exit ${code})`);
+});
