@@ -1,0 +1,106 @@
+import { z } from 'zod';
+
+/** Kinds of machine in the equipment register. */
+export const machineKinds = ['crane', 'conveyor', 'mill-auxiliary', 'winch', 'other'] as const;
+export const machineKindSchema = z.enum(machineKinds);
+export type MachineKind = z.infer<typeof machineKindSchema>;
+
+/** Motions a brake position can serve. */
+export const motions = [
+  'hoist',
+  'auxiliary-hoist',
+  'trolley',
+  'bridge',
+  'travel',
+  'conveyor',
+  'slew',
+  'other',
+] as const;
+export const motionSchema = z.enum(motions);
+export type Motion = z.infer<typeof motionSchema>;
+
+const tag = z
+  .string()
+  .trim()
+  .min(1, 'required')
+  .max(40)
+  .regex(/^[A-Za-z0-9][A-Za-z0-9._/-]*$/, 'letters, digits, . _ / - only');
+
+export const createSiteSchema = z
+  .object({
+    code: z
+      .string()
+      .trim()
+      .toUpperCase()
+      .regex(/^[A-Z0-9]{2,6}$/, '2 to 6 capital letters or digits'),
+    name: z.string().trim().min(2, 'at least 2 characters').max(120),
+  })
+  .strict();
+export type CreateSiteInput = z.infer<typeof createSiteSchema>;
+
+export const createMachineSchema = z
+  .object({
+    siteId: z.string().uuid(),
+    tag,
+    name: z.string().trim().min(2, 'at least 2 characters').max(120),
+    kind: machineKindSchema,
+  })
+  .strict();
+export type CreateMachineInput = z.infer<typeof createMachineSchema>;
+
+export const createPositionSchema = z
+  .object({
+    machineId: z.string().uuid(),
+    tag,
+    description: z.string().trim().min(2, 'at least 2 characters').max(200),
+    motion: motionSchema,
+  })
+  .strict();
+export type CreatePositionInput = z.infer<typeof createPositionSchema>;
+
+export const currentApprovedSchema = z.object({
+  sheetId: z.string().uuid(),
+  documentNumber: z.string(),
+  revisionId: z.string().uuid(),
+  revisionLabel: z.string(),
+});
+
+export const positionSchema = z.object({
+  id: z.string().uuid(),
+  tag: z.string(),
+  description: z.string(),
+  motion: motionSchema,
+  /** The approved revision currently in force for this position (latest approved sheet), if any. */
+  currentApproved: currentApprovedSchema.nullable(),
+});
+export type Position = z.infer<typeof positionSchema>;
+
+export const machineSchema = z.object({
+  id: z.string().uuid(),
+  tag: z.string(),
+  name: z.string(),
+  kind: machineKindSchema,
+  positions: z.array(positionSchema),
+});
+export type Machine = z.infer<typeof machineSchema>;
+
+export const siteSchema = z.object({
+  id: z.string().uuid(),
+  code: z.string(),
+  name: z.string(),
+  machines: z.array(machineSchema),
+});
+export type Site = z.infer<typeof siteSchema>;
+
+/** GET /api/register */
+export const registerSchema = z.object({ sites: z.array(siteSchema) });
+export type Register = z.infer<typeof registerSchema>;
+
+/** Answers of the three POST /api/register/* routes. */
+export const createdSiteSchema = siteSchema.omit({ machines: true });
+export const createdMachineSchema = machineSchema
+  .omit({ positions: true })
+  .extend({ siteId: z.string().uuid() });
+export const createdPositionSchema = positionSchema
+  .omit({ currentApproved: true })
+  .extend({ machineId: z.string().uuid() });

@@ -1,0 +1,135 @@
+import { z } from 'zod';
+import type { SheetEvaluation, SheetInputs } from '@holdfast/calc';
+
+/** Sheet types of the calc registry (ids are fixed by the API contract). */
+export const sheetTypeIds = [
+  'hoist-shoe-brake',
+  'travel-shoe-brake',
+  'caliper-disc-brake',
+  'disc-spring-stack',
+] as const;
+export const sheetTypeIdSchema = z.enum(sheetTypeIds);
+export type SheetTypeId = z.infer<typeof sheetTypeIdSchema>;
+
+export const revisionStates = ['draft', 'in_check', 'returned', 'approved', 'superseded'] as const;
+export const revisionStateSchema = z.enum(revisionStates);
+export type RevisionState = z.infer<typeof revisionStateSchema>;
+
+export const unitSystemSchema = z.enum(['SI', 'US']);
+
+export const quantitySchema = z
+  .object({ value: z.number().finite(), unit: z.string().min(1) })
+  .strict();
+
+export const inputValueSchema = z.union([
+  quantitySchema,
+  z.number().finite(),
+  z.string(),
+  z.boolean(),
+]);
+
+/**
+ * A sheet's inputs exactly as typed. The shape per field is checked by the calc core on submit
+ * (and on save, as a preview), which names the offending field.
+ */
+export const sheetInputsSchema = z
+  .record(
+    z
+      .string()
+      .regex(/^[A-Za-z][A-Za-z0-9_]*$/, 'not a field key')
+      .max(80),
+    inputValueSchema,
+  )
+  .refine(
+    (r) => Object.keys(r).length <= 500,
+    'too many fields',
+  ) as unknown as z.ZodType<SheetInputs>;
+
+const dimension = z.string();
+
+const derivationStepSchema = z.object({
+  id: z.string(),
+  section: z.string(),
+  label: z.string(),
+  symbol: z.string(),
+  formula: z.string(),
+  substituted: z.string(),
+  value: z.number(),
+  unit: z.string(),
+  dimension,
+  reference: z.string(),
+});
+const resultValueSchema = z.object({
+  key: z.string(),
+  section: z.string(),
+  label: z.string(),
+  symbol: z.string(),
+  value: z.number(),
+  unit: z.string(),
+  dimension,
+});
+export const checkResultSchema = z.object({
+  id: z.string(),
+  section: z.string(),
+  label: z.string(),
+  value: z.number(),
+  limit: z.number(),
+  unit: z.string(),
+  dimension,
+  kind: z.enum(['max', 'min']),
+  utilisation: z.number(),
+  pass: z.boolean(),
+  source: z.string(),
+  message: z.string(),
+});
+const chartSchema = z.object({
+  id: z.string(),
+  title: z.string(),
+  xLabel: z.string(),
+  xUnit: z.string(),
+  xDimension: dimension,
+  yLabel: z.string(),
+  yUnit: z.string(),
+  yDimension: dimension,
+  series: z.array(
+    z.object({ name: z.string(), points: z.array(z.object({ x: z.number(), y: z.number() })) }),
+  ),
+  markers: z.array(z.object({ label: z.string(), x: z.number(), y: z.number() })).optional(),
+  referenceLines: z
+    .array(z.object({ label: z.string(), axis: z.enum(['x', 'y']), value: z.number() }))
+    .optional(),
+});
+
+/** `SheetEvaluation` of @holdfast/calc, for parsing responses. Always computed by the server. */
+export const sheetEvaluationSchema = z.object({
+  sheetType: z.string(),
+  coreVersion: z.string(),
+  criteriaSetId: z.string(),
+  criteriaSetVersion: z.number().int(),
+  results: z.array(resultValueSchema),
+  checks: z.array(checkResultSchema),
+  derivation: z.array(derivationStepSchema),
+  charts: z.array(chartSchema),
+  fieldSettings: z.array(
+    z.object({
+      key: z.string(),
+      label: z.string(),
+      value: z.number(),
+      unit: z.string(),
+      dimension,
+      note: z.string().optional(),
+    }),
+  ),
+  tables: z.array(
+    z.object({
+      id: z.string(),
+      title: z.string(),
+      columns: z.array(
+        z.object({ key: z.string(), label: z.string(), unit: z.string(), dimension }),
+      ),
+      rows: z.array(z.record(z.string(), z.number())),
+    }),
+  ),
+  warnings: z.array(z.string()),
+  pass: z.boolean(),
+}) as unknown as z.ZodType<SheetEvaluation>;

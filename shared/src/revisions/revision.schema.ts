@@ -1,0 +1,131 @@
+import { z } from 'zod';
+import { isoDateSchema, personRefSchema } from '../sheets/person-ref.schema.js';
+import {
+  revisionStateSchema,
+  sheetEvaluationSchema,
+  sheetInputsSchema,
+  sheetTypeIdSchema,
+  unitSystemSchema,
+} from './evaluation.schema.js';
+
+/** One line of a sheet's revision history. */
+export const revisionSummarySchema = z.object({
+  id: z.string().uuid(),
+  label: z.string(),
+  state: revisionStateSchema,
+  author: personRefSchema,
+  checker: personRefSchema.nullable(),
+  changeNote: z.string(),
+  createdAt: isoDateSchema,
+  submittedAt: isoDateSchema.nullable(),
+  approvedAt: isoDateSchema.nullable(),
+  returnedAt: isoDateSchema.nullable(),
+});
+export type RevisionSummary = z.infer<typeof revisionSummarySchema>;
+
+/** GET /api/revisions/:id — a revision with what the caller may do with it. */
+export const revisionSchema = revisionSummarySchema.extend({
+  sheetId: z.string().uuid(),
+  sheetType: sheetTypeIdSchema,
+  documentNumber: z.string(),
+  inputs: sheetInputsSchema,
+  unitSystem: unitSystemSchema,
+  criteriaSetId: z.string(),
+  criteriaSetVersion: z.number().int().positive(),
+  /** Computed by the server: on submit (frozen) or as a preview on save of a draft. */
+  evaluation: sheetEvaluationSchema.nullable(),
+  coreVersion: z.string().nullable(),
+  /** SHA-256 (hex) over canonical JSON of inputs and evaluation; set on submit. */
+  hash: z.string().nullable(),
+  /** Short code printed on the sheet; set on submit. */
+  verificationCode: z.string().nullable(),
+  /** Why the revision was submitted with failing checks. */
+  justification: z.string().nullable(),
+  rowVersion: z.number().int().nonnegative(),
+  supersededBy: z
+    .object({ id: z.string().uuid(), label: z.string(), at: isoDateSchema })
+    .nullable(),
+  canEdit: z.boolean(),
+  canSubmit: z.boolean(),
+  canCheck: z.boolean(),
+});
+export type Revision = z.infer<typeof revisionSchema>;
+
+const rowVersion = z.number().int().nonnegative();
+
+/** PUT /api/revisions/:id — draft save. */
+export const saveRevisionSchema = z
+  .object({
+    inputs: sheetInputsSchema,
+    unitSystem: unitSystemSchema,
+    changeNote: z.string().trim().max(2000),
+    criteriaSetId: z.string().min(1).max(80).optional(),
+    rowVersion,
+  })
+  .strict();
+export type SaveRevisionInput = z.infer<typeof saveRevisionSchema>;
+
+/** POST /api/revisions/:id/submit */
+export const submitRevisionSchema = z
+  .object({
+    rowVersion,
+    justification: z.string().trim().max(4000).optional(),
+  })
+  .strict();
+export type SubmitRevisionInput = z.infer<typeof submitRevisionSchema>;
+
+/** POST /api/revisions/:id/approve */
+export const approveRevisionSchema = z
+  .object({ rowVersion, note: z.string().trim().max(4000).optional() })
+  .strict();
+export type ApproveRevisionInput = z.infer<typeof approveRevisionSchema>;
+
+/** POST /api/revisions/:id/return — the comment is stored as a comment on the revision. */
+export const returnRevisionSchema = z
+  .object({ rowVersion, comment: z.string().trim().min(1, 'say what must change').max(4000) })
+  .strict();
+export type ReturnRevisionInput = z.infer<typeof returnRevisionSchema>;
+
+/** POST /api/sheets/:id/revisions */
+export const newRevisionSchema = z
+  .object({ changeNote: z.string().trim().min(1, 'say why the sheet changes').max(2000) })
+  .strict();
+export type NewRevisionInput = z.infer<typeof newRevisionSchema>;
+
+const movedResultSchema = z.object({
+  key: z.string(),
+  label: z.string(),
+  unit: z.string(),
+  then: z.number(),
+  now: z.number(),
+  delta: z.number(),
+});
+
+const checkStateSchema = z.object({
+  value: z.number(),
+  utilisation: z.number(),
+  pass: z.boolean(),
+});
+
+/** POST /api/revisions/:id/drift */
+export const driftReportSchema = z.object({
+  coreVersionThen: z.string(),
+  coreVersionNow: z.string(),
+  /** Results whose relative change exceeds 1e-9. */
+  moved: z.array(movedResultSchema),
+  checksChanged: z.array(
+    z.object({
+      id: z.string(),
+      label: z.string(),
+      then: checkStateSchema.nullable(),
+      now: checkStateSchema.nullable(),
+    }),
+  ),
+  /** Set when the stored inputs no longer evaluate with today's core. */
+  error: z.string().nullable().optional(),
+});
+export type DriftReport = z.infer<typeof driftReportSchema>;
+
+/** Query of GET /api/revisions/:id/pdf and /field-card. */
+export const printQuerySchema = z.object({ paper: z.enum(['A4', 'LETTER']).default('A4') });
+export type PrintQuery = z.infer<typeof printQuerySchema>;
