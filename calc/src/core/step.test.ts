@@ -1,0 +1,96 @@
+import { describe, expect, it } from 'vitest';
+import { defineFormula, Derivation, CalcDomainError } from './step.js';
+import { nearlyEqual } from '../testing/expect-close.js';
+
+const torque = defineFormula({
+  id: 'drum-torque',
+  label: 'Brake torque (short shoe, two shoes)',
+  symbol: 'M_b',
+  expression: 'mu * N * D',
+  symbols: {
+    mu: { text: 'μ', dimension: 'dimensionless' },
+    N: { text: 'N', dimension: 'force' },
+    D: { text: 'D', dimension: 'length' },
+  },
+  dimension: 'torque',
+  reference: 'definition',
+});
+
+describe('defineFormula', () => {
+  it('computes, prints and substitutes from one definition', () => {
+    const v = { mu: 0.35, N: 12400, D: 0.4 };
+    expect(nearlyEqual(torque.evaluate(v), 1736, 1e-12)).toBe(true);
+    expect(torque.text).toBe('M_b = μ · N · D');
+    expect(torque.substitute(v)).toBe('M_b = 0.3500 · 12.40 kN · 400.0 mm');
+  });
+
+  it('prints squares, roots, trig and pi', () => {
+    const f = defineFormula({
+      id: 'x',
+      label: 'x',
+      symbol: 'a',
+      expression: '4 * r * sin(t2) / (2 * t2 + sin(2 * t2)) + sqrt(J) * pi * w^2',
+      symbols: {
+        r: { text: 'r', dimension: 'length' },
+        t2: { text: 'θ₂', dimension: 'angle' },
+        J: { text: 'J', dimension: 'inertia' },
+        w: { text: 'ω', dimension: 'angularSpeed' },
+      },
+      dimension: 'length',
+      reference: 'x',
+    });
+    expect(f.text).toBe('a = 4 · r · sin(θ₂) / (2 · θ₂ + sin(2 · θ₂)) + √(J) · π · ω²');
+    expect(f.substitute({ r: 0.25, t2: Math.PI / 3, J: 4, w: 2 })).toContain('250.0 mm');
+  });
+
+  it('wraps negative substitutions in parentheses', () => {
+    expect(torque.substitute({ mu: 0.35, N: -100, D: 0.4 })).toContain('(−100.0 N)');
+  });
+
+  it('rejects undeclared symbols at definition time', () => {
+    expect(() =>
+      defineFormula({
+        id: 'bad',
+        label: 'bad',
+        symbol: 'y',
+        expression: 'a * b',
+        symbols: { a: { text: 'a', dimension: 'length' } } as never,
+        dimension: 'length',
+        reference: 'x',
+      }),
+    ).toThrow(/"b" is not declared/);
+  });
+});
+
+describe('Derivation', () => {
+  it('records steps in order with ids, sections and SI units', () => {
+    const d = new Derivation('brake');
+    const a = d.step(torque, { mu: 0.35, N: 12400, D: 0.4 }, { id: 'torque-nom' });
+    d.step(
+      torque,
+      { mu: 0.25, N: 12400, D: 0.4 },
+      { id: 'torque-min', section: 'friction', label: 'At μ min', symbol: 'M_b,min' },
+    );
+    expect(nearlyEqual(a, 1736, 1e-12)).toBe(true);
+    expect(d.steps.map((s) => s.id)).toEqual(['torque-nom', 'torque-min']);
+    expect(d.steps[0]).toMatchObject({
+      section: 'brake',
+      unit: 'N m',
+      dimension: 'torque',
+      reference: 'definition',
+    });
+    expect(d.steps[1].formula).toBe('M_b,min = μ · N · D');
+    expect(d.steps[1].substituted.startsWith('M_b,min = 0.2500')).toBe(true);
+    expect(d.steps[1].section).toBe('friction');
+    expect(nearlyEqual(d.value('torque-min'), 1240, 1e-12)).toBe(true);
+  });
+
+  it('refuses duplicate ids and non-finite results', () => {
+    const d = new Derivation();
+    d.step(torque, { mu: 0.35, N: 1, D: 1 });
+    expect(() => d.step(torque, { mu: 0.35, N: 1, D: 1 })).toThrow(/duplicate/);
+    expect(() => d.step(torque, { mu: 0.35, N: Infinity, D: 1 }, { id: 'inf' })).toThrow(
+      CalcDomainError,
+    );
+  });
+});

@@ -1,0 +1,151 @@
+import type { EvalFunction } from 'mathjs';
+import type { Dimension, DerivationStep } from './types.js';
+import { math } from '../units/math.js';
+import type { Q } from '../units/quantities.js';
+import { formatForDerivation } from '../units/format.js';
+import { DIMENSIONS } from '../units/unit-table.js';
+import { renderPieces, symbolNames, type TextPiece } from './formula-text.js';
+
+/** A symbol of a formula: how it prints and what dimension its values have. */
+export interface SymbolSpec {
+  text: string;
+  dimension: Dimension;
+}
+
+export interface FormulaSpec<S extends string, D extends Dimension> {
+  /** Default step id, e.g. 'motor-torque'. */
+  id: string;
+  label: string;
+  /** Printed result symbol, e.g. 'M_b'. */
+  symbol: string;
+  /** mathjs expression in SI values, e.g. 'mu * N * D'. */
+  expression: string;
+  symbols: Record<S, SymbolSpec>;
+  dimension: D;
+  reference: string;
+}
+
+/**
+ * One formula defined once: the same parsed expression computes the value and prints the formula
+ * text and the substitution, so they cannot drift apart. Expressions compile once when defined
+ * (at module load), not per evaluation.
+ */
+export interface Formula<S extends string, D extends Dimension> {
+  readonly spec: FormulaSpec<S, D>;
+  /** e.g. 'M_b = μ · N · D'. */
+  readonly text: string;
+  evaluate(values: Record<S, number>): Q<D>;
+  /** e.g. 'M_b = 0.35 · 12.40 kN · 400.0 mm'. */
+  substitute(values: Record<S, number>): string;
+}
+
+const ALLOWED_FREE = new Set(['pi', 'e']);
+
+/** Defines a formula; throws at load time if the expression uses an undeclared symbol. */
+export function defineFormula<S extends string, D extends Dimension>(
+  spec: FormulaSpec<S, D>,
+): Formula<S, D> {
+  const node = math.parse(spec.expression);
+  const declared = new Set(Object.keys(spec.symbols));
+  for (const name of symbolNames(node)) {
+    if (!declared.has(name) && !ALLOWED_FREE.has(name)) {
+      throw new Error(`formula ${spec.id}: symbol "${name}" is not declared`);
+    }
+  }
+  const compiled: EvalFunction = node.compile();
+  const pieces: TextPiece[] = renderPieces(node, declared);
+  const symbols = spec.symbols as Record<string, SymbolSpec>;
+  const prefix = `${spec.symbol} = `;
+  const text =
+    prefix + pieces.map((p) => (typeof p === 'string' ? p : symbols[p.symbol].text)).join('');
+  return {
+    spec,
+    text,
+    evaluate(values) {
+      return compiled.evaluate({ ...values }) as Q<D>;
+    },
+    substitute(values) {
+      let out = prefix;
+      for (const p of pieces) {
+        if (typeof p === 'string') {
+          out += p;
+          continue;
+        }
+        const v = (values as Record<string, number>)[p.symbol];
+        const printed = formatForDerivation(v, symbols[p.symbol].dimension);
+        out += v < 0 ? `(${printed})` : printed;
+      }
+      return out;
+    },
+  };
+}
+
+/** Raised when a formula yields NaN or ±Infinity: a guard missed an input; never shown as a number. */
+export class CalcDomainError extends Error {
+  readonly code = 'CALC_DOMAIN' as const;
+  constructor(
+    readonly stepId: string,
+    readonly values: Record<string, number>,
+  ) {
+    super(`step ${stepId} produced a non-finite value from ${JSON.stringify(values)}`);
+    this.name = 'CalcDomainError';
+  }
+}
+
+export interface StepOptions {
+  id?: string;
+  section?: string;
+  label?: string;
+  symbol?: string;
+  reference?: string;
+}
+
+/**
+ * Records derivation steps in order. `step()` computes a formula, checks the result is finite,
+ * records the formula text, the substitution, the value and its SI unit, and returns the value.
+ */
+export class Derivation {
+  readonly steps: DerivationStep[] = [];
+  private readonly ids = new Set<string>();
+
+  constructor(public section = 'general') {}
+
+  step<S extends string, D extends Dimension>(
+    formula: Formula<S, D>,
+    values: Record<S, number>,
+    options: StepOptions = {},
+  ): Q<D> {
+    const spec = formula.spec;
+    const id = options.id ?? spec.id;
+    const value = formula.evaluate(values);
+    if (!Number.isFinite(value)) throw new CalcDomainError(id, values);
+    if (this.ids.has(id)) throw new Error(`derivation: duplicate step id ${id}`);
+    this.ids.add(id);
+    let formulaText = formula.text;
+    let substituted = formula.substitute(values);
+    if (options.symbol) {
+      formulaText = options.symbol + formulaText.slice(spec.symbol.length);
+      substituted = options.symbol + substituted.slice(spec.symbol.length);
+    }
+    this.steps.push({
+      id,
+      section: options.section ?? this.section,
+      label: options.label ?? spec.label,
+      symbol: options.symbol ?? spec.symbol,
+      formula: formulaText,
+      substituted,
+      value,
+      unit: DIMENSIONS[spec.dimension].siUnit,
+      dimension: spec.dimension,
+      reference: options.reference ?? spec.reference,
+    });
+    return value;
+  }
+
+  /** Looks up a recorded step value by id (throws if absent: a programming error). */
+  value(id: string): number {
+    const s = this.steps.find((x) => x.id === id);
+    if (!s) throw new Error(`derivation: no step ${id}`);
+    return s.value;
+  }
+}

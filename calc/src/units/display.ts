@@ -1,0 +1,42 @@
+import type { Dimension } from '../core/types.js';
+import { resolveUnit } from './conversion.js';
+import { formatNumber } from './format.js';
+import { DIMENSIONS } from './unit-table.js';
+
+export type UnitSystem = 'SI' | 'US';
+
+export interface DisplayValue {
+  value: number;
+  /** Parser unit text (mathjs syntax), e.g. 'lbf ft'. */
+  unit: string;
+  /** Printed unit, e.g. 'lbf·ft'. */
+  label: string;
+  /** Value and label, e.g. '1 475 lbf·ft' style text (4 significant figures). */
+  text: string;
+}
+
+/**
+ * Converts an SI value for presentation in SI or US customary units (N·m↔lbf·ft, kW↔hp,
+ * kg·m²↔lb·ft², MPa↔psi, °C↔°F, mm↔in …), or into an explicit `unit` of the same dimension.
+ * @example toDisplay(1000, 'torque', 'US').text // '737.6 lbf·ft'
+ */
+export function toDisplay(
+  valueSI: number,
+  dimension: Dimension,
+  system: UnitSystem,
+  unit?: string,
+  digits = 4,
+): DisplayValue {
+  const info = DIMENSIONS[dimension];
+  const target = unit ?? (system === 'US' ? info.displayUS : info.displaySI);
+  const c = resolveUnit(target, dimension);
+  const value = (valueSI - c.offset) / c.factor;
+  const text = c.label ? `${formatNumber(value, digits)} ${c.label}` : formatNumber(value, digits);
+  return { value, unit: c.unit, label: c.label, text };
+}
+
+/** Default display unit (parser text) of a dimension in a unit system. */
+export function displayUnitFor(dimension: Dimension, system: UnitSystem): string {
+  const info = DIMENSIONS[dimension];
+  return system === 'US' ? info.displayUS : info.displaySI;
+}

@@ -1,0 +1,71 @@
+import type { Dimension } from '../core/types.js';
+
+/** Formats a number to `digits` significant figures without exponent for everyday magnitudes. */
+export function formatNumber(value: number, digits = 4): string {
+  if (value === 0) return '0';
+  if (!Number.isFinite(value)) return String(value);
+  const abs = Math.abs(value);
+  if (abs >= 1e-3 && abs < 1e9) {
+    if (abs >= 10 ** digits) return value.toFixed(0).replace('-', '−');
+    return value.toPrecision(digits).replace('-', '−');
+  }
+  const [mantissa, exponent] = value.toExponential(digits - 1).split('e');
+  return `${mantissa.replace('-', '−')}·10^${Number(exponent)}`;
+}
+
+interface PrintUnit {
+  label: string;
+  factor: number;
+  offset?: number;
+  /** Use this unit when |SI value| is below this bound (first match wins). */
+  below: number;
+}
+
+const p = (label: string, factor: number, below = Infinity, offset = 0): PrintUnit => ({
+  label,
+  factor,
+  below,
+  offset,
+});
+
+/** Units used to print values inside derivation substitutions, chosen by magnitude. */
+const PRINT_UNITS: Record<Dimension, PrintUnit[]> = {
+  length: [p('mm', 1e-3, 1), p('m', 1)],
+  force: [p('N', 1, 1e4), p('kN', 1e3)],
+  torque: [p('N·m', 1, 1e4), p('kN·m', 1e3)],
+  power: [p('W', 1, 1e4), p('kW', 1e3)],
+  speed: [p('m/s', 1)],
+  angularSpeed: [p('rad/s', 1)],
+  mass: [p('kg', 1)],
+  inertia: [p('kg·m²', 1)],
+  pressure: [p('kPa', 1e3, 1e5), p('MPa', 1e6)],
+  pv: [p('MPa·m/s', 1e6)],
+  energy: [p('J', 1, 1e4), p('kJ', 1e3, 1e7), p('MJ', 1e6)],
+  temperature: [p('°C', 1, Infinity, 273.15)],
+  temperatureDifference: [p('K', 1)],
+  time: [p('s', 1)],
+  angle: [p('rad', 1)],
+  acceleration: [p('m/s²', 1)],
+  stiffness: [p('N/mm', 1e3)],
+  specificHeat: [p('J/(kg·K)', 1)],
+  heatTransferCoefficient: [p('W/(m²·K)', 1)],
+  area: [p('mm²', 1e-6, 1e-2), p('m²', 1)],
+  frequency: [p('1/h', 1 / 3600)],
+  dimensionless: [p('', 1)],
+};
+
+/** Prints an SI value with a readable unit for a derivation, e.g. 12400 N → '12.40 kN'. */
+export function formatForDerivation(valueSI: number, dimension: Dimension, digits = 4): string {
+  const units = PRINT_UNITS[dimension];
+  const abs = Math.abs(valueSI);
+  const unit = units.find((x) => abs < x.below) ?? units[units.length - 1];
+  const shown = (valueSI - (unit.offset ?? 0)) / unit.factor;
+  const text = formatNumber(shown, digits);
+  return unit.label ? `${text} ${unit.label}` : text;
+}
+
+/** Printed SI label of a dimension's storage unit, e.g. 'N·m'. */
+export function siLabelFor(dimension: Dimension): string {
+  const units = PRINT_UNITS[dimension];
+  return units.find((x) => x.factor === 1 && !x.offset)?.label ?? '';
+}

@@ -1,0 +1,8 @@
+import { all, create, type MathJsInstance } from 'mathjs';
+
+/**
+ * The one mathjs instance of the core. Custom units are added here once (mathjs has no rpm).
+ */
+export const math: MathJsInstance = create(all, {});
+
+math.createUnit('rpm', { definition: `${Math.PI / 30} rad/s`, aliases: ['rev/min'] });
