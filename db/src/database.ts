@@ -1,4 +1,5 @@
 import type { ColumnType, Generated, Insertable, Selectable, Updateable } from 'kysely';
+import type { SheetTables } from './sheet-tables.js';
 
 /**
  * The typed database interface, written by hand to match `db/migrations`.
@@ -52,8 +53,7 @@ export interface FoundationTables {
   refreshTokens: RefreshTokensTable;
 }
 
-// eslint-disable-next-line @typescript-eslint/no-empty-object-type
-export interface DB extends FoundationTables {}
+export interface DB extends FoundationTables, SheetTables {}
 
 export type UserRow = Selectable<UsersTable>;
 export type NewUserRow = Insertable<UsersTable>;
