@@ -107,3 +107,15 @@ describe('validation', () => {
     );
   });
 });
+
+describe('standard sizes table', () => {
+  it('every row reproduces its listed force at 0.75·(l0 − t) within its source tolerance', async () => {
+    const { STANDARD_DISC_SIZES } = await import('./standard-sizes.js');
+    for (const r of STANDARD_DISC_SIZES) {
+      const d = disc(r.De, r.Di, r.t, r.l0, r.tReduced);
+      const F = discForce(d, 0.75 * (r.l0 - r.t) * mm);
+      const tol = r.confidence === 'published' ? 0.025 : r.confidence === 'secondary' ? 0.005 : 0.01;
+      expect(Math.abs(F / r.force075 - 1), r.designation).toBeLessThan(tol);
+    }
+  });
+});
