@@ -1,0 +1,82 @@
+import { Suspense, useEffect } from 'react';
+import { AppShell, Burger, Group, Text } from '@mantine/core';
+import { useDisclosure } from '@mantine/hooks';
+import { Link, Navigate, Outlet, useLocation } from 'react-router-dom';
+import { Wordmark } from '../components/brand/wordmark';
+import { PageLoader } from '../components/page-loader';
+import { SafetyCaution } from '../components/safety-caution';
+import { paths } from '../config/paths';
+import { UserMenu } from '../features/auth/components/user-menu';
+import { useRouteHandle } from '../lib/route-handle';
+import { useSession } from '../lib/session';
+import { FrameNav } from './frame-nav';
+import classes from './app-frame.module.css';
+
+/** The signed-in frame: header, navigation, page, and the safety caution on calculation pages. */
+export function AppFrame() {
+  const session = useSession();
+  const location = useLocation();
+  const handle = useRouteHandle();
+  const [navOpen, { toggle, close }] = useDisclosure(false);
+
+  useEffect(() => {
+    document.title = handle.title ? `${handle.title} · Holdfast` : 'Holdfast';
+  }, [handle.title]);
+  // Close the mobile navigation after following a link.
+  useEffect(close, [location.pathname, close]);
+
+  if (session.status !== 'signed-in' || !session.user) {
+    return <Navigate to={paths.signIn.build(location.pathname + location.search)} replace />;
+  }
+
+  return (
+    <AppShell
+      header={{ height: 56 }}
+      navbar={{ width: 232, breakpoint: 'sm', collapsed: { mobile: !navOpen } }}
+      footer={handle.caution ? { height: { base: 76, md: 48 } } : undefined}
+      padding="lg"
+      className={classes.shell}
+    >
+      <AppShell.Header className={classes.header}>
+        <Group h="100%" px="md" justify="space-between" wrap="nowrap">
+          <Group gap="sm" wrap="nowrap">
+            <Burger
+              opened={navOpen}
+              onClick={toggle}
+              hiddenFrom="sm"
+              size="sm"
+              color="white"
+              aria-label={navOpen ? 'Close navigation' : 'Open navigation'}
+            />
+            <Link
+              to={paths.home.build()}
+              className={classes.brand}
+              aria-label="Holdfast, work queue"
+            >
+              <Wordmark />
+            </Link>
+            <Text size="xs" className={classes.tagline} visibleFrom="md">
+              brake calculation sheets
+            </Text>
+          </Group>
+          <UserMenu />
+        </Group>
+      </AppShell.Header>
+      <AppShell.Navbar className={classes.navbar}>
+        <FrameNav user={session.user} />
+      </AppShell.Navbar>
+      <AppShell.Main className={classes.main}>
+        <div className={handle.wide ? classes.wide : classes.content}>
+          <Suspense fallback={<PageLoader />}>
+            <Outlet />
+          </Suspense>
+        </div>
+      </AppShell.Main>
+      {handle.caution ? (
+        <AppShell.Footer className={classes.footer}>
+          <SafetyCaution variant="footer" />
+        </AppShell.Footer>
+      ) : null}
+    </AppShell>
+  );
+}

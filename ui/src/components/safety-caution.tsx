@@ -1,0 +1,39 @@
+import { Group, Text, ThemeIcon } from '@mantine/core';
+import { IconAlertTriangle } from '@tabler/icons-react';
+import classes from './safety-caution.module.css';
+
+/** The standard caution, in Holdfast's own words. Shown on every calculation page. */
+export const safetyCautionText =
+  'Results from Holdfast support, and never replace, the judgement of a competent engineer. ' +
+  "The governing standard, the brake maker's data and local codes decide. " +
+  'Work on a brake only with the load lowered or secured and the drive locked out.';
+
+export interface SafetyCautionProps {
+  /** `footer`: one compact band for the frame footer; `block`: a boxed note inside a page. */
+  variant?: 'footer' | 'block';
+}
+
+export function SafetyCaution({ variant = 'block' }: SafetyCautionProps) {
+  return (
+    <Group
+      role="note"
+      aria-label="Safety caution"
+      className={variant === 'footer' ? classes.footer : classes.block}
+      gap="sm"
+      wrap="nowrap"
+      align="center"
+    >
+      <ThemeIcon
+        color="amber"
+        variant="filled"
+        size={variant === 'footer' ? 'md' : 'lg'}
+        radius="sm"
+      >
+        <IconAlertTriangle size={variant === 'footer' ? 16 : 20} stroke={2} aria-hidden />
+      </ThemeIcon>
+      <Text size={variant === 'footer' ? 'xs' : 'sm'} className={classes.text}>
+        <strong>Caution.</strong> {safetyCautionText}
+      </Text>
+    </Group>
+  );
+}

@@ -1,0 +1,25 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { userSchema, type User } from '@holdfast/shared';
+import { api } from '../../../lib/api-client';
+import { sessionStore } from '../../../lib/session';
+import { getMeQueryOptions } from './get-me';
+
+export interface UpdateMeInput {
+  unitSystem: User['unitSystem'];
+}
+
+export function updateMe(input: UpdateMeInput): Promise<User> {
+  return api.patch('/auth/me', { body: input, schema: userSchema });
+}
+
+/** Change the signed-in user's own preferences (unit system). */
+export function useUpdateMe() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateMe,
+    onSuccess: (user) => {
+      sessionStore.updateUser(user);
+      queryClient.setQueryData(getMeQueryOptions().queryKey, user);
+    },
+  });
+}

@@ -1,0 +1,84 @@
+import { createTheme, type MantineColorsTuple } from '@mantine/core';
+
+/** Forged steel: a deep blue-grey, Holdfast's primary colour. */
+const steel: MantineColorsTuple = [
+  '#eef2f6',
+  '#dce3ea',
+  '#b7c5d3',
+  '#8fa5bb',
+  '#6d8aa6',
+  '#587898',
+  '#4a6a8b',
+  '#3b5773',
+  '#2f465d',
+  '#1f3244',
+];
+
+/** Safety amber: the accent, used sparingly for attention and cautions. */
+const amber: MantineColorsTuple = [
+  '#fff7e1',
+  '#ffedc7',
+  '#ffd98f',
+  '#ffc452',
+  '#ffb323',
+  '#ffa806',
+  '#e69500',
+  '#c27a00',
+  '#a66700',
+  '#8a5400',
+];
+
+/** Pass: a plain green, always shown together with an icon and a word. */
+const pass: MantineColorsTuple = [
+  '#e9f8ee',
+  '#d5efdd',
+  '#a8dcb9',
+  '#78c892',
+  '#51b772',
+  '#39ad5e',
+  '#2a9950',
+  '#1f8443',
+  '#176f37',
+  '#0c5a2a',
+];
+
+/** Fail: a brick red, always shown together with an icon and a word. */
+const fail: MantineColorsTuple = [
+  '#ffebe9',
+  '#fcd6d2',
+  '#f3aaa2',
+  '#eb7c70',
+  '#e45546',
+  '#e03d2c',
+  '#c9301f',
+  '#b02618',
+  '#981d12',
+  '#7d140b',
+];
+
+export const theme = createTheme({
+  primaryColor: 'steel',
+  primaryShade: { light: 7, dark: 4 },
+  colors: { steel, amber, pass, fail },
+  fontFamily:
+    'Inter, system-ui, -apple-system, "Segoe UI", Roboto, "Helvetica Neue", Arial, sans-serif',
+  fontFamilyMonospace: '"JetBrains Mono", ui-monospace, "SFMono-Regular", Menlo, monospace',
+  headings: {
+    fontFamily: 'Inter, system-ui, sans-serif',
+    fontWeight: '600',
+  },
+  defaultRadius: 'sm',
+  cursorType: 'pointer',
+  focusRing: 'auto',
+  other: {
+    headerHeight: 56,
+    navbarWidth: 232,
+  },
+  components: {
+    Button: { defaultProps: { radius: 'sm' } },
+    Badge: { defaultProps: { radius: 'sm', variant: 'light' } },
+    Paper: { defaultProps: { withBorder: true, radius: 'sm' } },
+    Tooltip: { defaultProps: { withArrow: true, openDelay: 300 } },
+    Modal: { defaultProps: { centered: true, radius: 'sm' } },
+  },
+});
