@@ -35,8 +35,11 @@ export type ApiError = z.infer<typeof apiErrorSchema>;
 
 /** Turn zod issues into field paths and reasons ('inputs.springForce', 'must be positive'). */
 export function toFieldIssues(error: z.ZodError): FieldIssue[] {
-  return error.issues.map((issue) => ({
-    path: issue.path.map(String).join('.') || '(body)',
-    message: issue.message,
-  }));
+  const join = (path: PropertyKey[]) => path.map(String).join('.') || '(body)';
+  return error.issues.flatMap((issue) =>
+    // An unknown field is reported at its own path, so a form can point at it.
+    issue.code === 'unrecognized_keys'
+      ? issue.keys.map((key) => ({ path: join([...issue.path, key]), message: 'is not a known field' }))
+      : [{ path: join(issue.path), message: issue.message }],
+  );
 }

@@ -1,0 +1,42 @@
+import { NestFactory } from '@nestjs/core';
+import type { NestExpressApplication } from '@nestjs/platform-express';
+import cookieParser from 'cookie-parser';
+import { pinoHttp } from 'pino-http';
+import type { Logger } from 'pino';
+import { AppModule } from './app.module.js';
+import type { AppSettings } from './config/env.js';
+import { setupOpenApi } from './http/openapi.js';
+import { securityHeaders } from './http/security.js';
+import { serveUi } from './http/spa.js';
+import { createLogger } from './logging/logger.js';
+import { PinoLoggerService } from './logging/pino-logger.service.js';
+
+export interface CreatedApp {
+  app: NestExpressApplication;
+  logger: Logger;
+  uiServed: boolean;
+}
+
+/** Builds the whole HTTP application (not yet listening); used by main.ts and the tests. */
+export async function createApp(settings: AppSettings): Promise<CreatedApp> {
+  const logger = createLogger(settings.LOG_LEVEL);
+  const app = await NestFactory.create<NestExpressApplication>(AppModule.forRoot(settings), {
+    bodyParser: false,
+    logger: new PinoLoggerService(logger),
+  });
+  app.disable('x-powered-by');
+  app.use(securityHeaders());
+  app.use(
+    pinoHttp({
+      logger,
+      autoLogging: { ignore: (req) => req.url === '/api/health' },
+      customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : 'info'),
+    }),
+  );
+  app.useBodyParser('json', { limit: '1mb' });
+  app.use(cookieParser());
+  app.setGlobalPrefix('api');
+  setupOpenApi(app);
+  const uiServed = serveUi(app, settings.UI_DIST);
+  return { app, logger, uiServed };
+}

@@ -1,0 +1,49 @@
+import { Injectable, Logger, type CanActivate, type ExecutionContext } from '@nestjs/common';
+import { Reflector } from '@nestjs/core';
+import { JwtService } from '@nestjs/jwt';
+import { forbidden, unauthenticated } from '../common/errors/api-exception.js';
+import { UsersService } from '../users/users.service.js';
+import type { AccessTokenClaims } from './access-token.js';
+import type { AuthenticatedRequest } from './auth-user.js';
+import { policyAdmits, policyOf } from './policy.js';
+
+/**
+ * The global guard: deny by default. A route passes only through its declared policy; the user
+ * is reloaded from the database on every request so a deactivation or role change applies at once.
+ */
+@Injectable()
+export class AuthGuard implements CanActivate {
+  private readonly logger = new Logger('AuthGuard');
+
+  constructor(
+    private readonly reflector: Reflector,
+    private readonly jwt: JwtService,
+    private readonly users: UsersService,
+  ) {}
+
+  async canActivate(context: ExecutionContext): Promise<boolean> {
+    const policy = policyOf(this.reflector, context.getHandler(), context.getClass());
+    if (!policy) {
+      this.logger.error(`${context.getClass().name}.${context.getHandler().name} has no access policy`);
+      throw forbidden('This route declares no access policy and is closed.');
+    }
+    if (policy.kind === 'public') return true;
+
+    const request = context.switchToHttp().getRequest<AuthenticatedRequest>();
+    const [scheme, token] = (request.headers.authorization ?? '').split(' ');
+    if (scheme !== 'Bearer' || !token) throw unauthenticated();
+
+    let claims: AccessTokenClaims;
+    try {
+      claims = await this.jwt.verifyAsync<AccessTokenClaims & object>(token);
+    } catch {
+      throw unauthenticated('Your session has expired or is not valid. Sign in again.');
+    }
+    const user = await this.users.findActive(claims.sub);
+    if (!user) throw unauthenticated('Your account is not active.');
+    request.user = user;
+
+    if (!policyAdmits(policy, user.role)) throw forbidden();
+    return true;
+  }
+}

@@ -1,0 +1,44 @@
+import { Module } from '@nestjs/common';
+import { APP_GUARD } from '@nestjs/core';
+import { JwtModule } from '@nestjs/jwt';
+import { ThrottlerModule } from '@nestjs/throttler';
+import { AppConfig } from '../config/app-config.js';
+import { UsersModule } from '../users/users.module.js';
+import { ACCESS_TOKEN_SECONDS } from './access-token.js';
+import { AuthController } from './auth.controller.js';
+import { AuthGuard } from './auth.guard.js';
+import { AuthService } from './auth.service.js';
+import { LoginThrottlerGuard } from './login-throttler.guard.js';
+import { RefreshTokensRepository } from './refresh-tokens.repository.js';
+
+@Module({
+  imports: [
+    UsersModule,
+    JwtModule.registerAsync({
+      inject: [AppConfig],
+      useFactory: (config: AppConfig) => ({
+        secret: config.settings.JWT_SECRET,
+        signOptions: { algorithm: 'HS256', expiresIn: ACCESS_TOKEN_SECONDS },
+        verifyOptions: { algorithms: ['HS256'] },
+      }),
+    }),
+    ThrottlerModule.forRootAsync({
+      inject: [AppConfig],
+      useFactory: (config: AppConfig) => [
+        {
+          name: 'login',
+          ttl: config.settings.LOGIN_THROTTLE_TTL_SECONDS * 1000,
+          limit: config.settings.LOGIN_THROTTLE_LIMIT,
+        },
+      ],
+    }),
+  ],
+  controllers: [AuthController],
+  providers: [
+    AuthService,
+    RefreshTokensRepository,
+    LoginThrottlerGuard,
+    { provide: APP_GUARD, useClass: AuthGuard },
+  ],
+})
+export class AuthModule {}

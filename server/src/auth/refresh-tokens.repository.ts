@@ -1,0 +1,57 @@
+import { Injectable } from '@nestjs/common';
+import type { RefreshTokenRow } from '@holdfast/db';
+import { Database } from '../database/database.js';
+
+@Injectable()
+export class RefreshTokensRepository {
+  constructor(private readonly db: Database) {}
+
+  async insert(row: {
+    userId: string;
+    tokenHash: string;
+    expiresAt: Date;
+    rotatedFrom?: string;
+  }): Promise<void> {
+    await this.db.insertInto('refreshTokens').values(row).execute();
+  }
+
+  findByHash(tokenHash: string): Promise<RefreshTokenRow | undefined> {
+    return this.db
+      .selectFrom('refreshTokens')
+      .selectAll()
+      .where('tokenHash', '=', tokenHash)
+      .executeTakeFirst();
+  }
+
+  /**
+   * Revokes the token if it is still live; returns false when another request got there first,
+   * which makes rotation single-use even under concurrent refreshes.
+   */
+  async revokeIfLive(id: string): Promise<boolean> {
+    const result = await this.db
+      .updateTable('refreshTokens')
+      .set({ revokedAt: new Date() })
+      .where('id', '=', id)
+      .where('revokedAt', 'is', null)
+      .executeTakeFirst();
+    return result.numUpdatedRows > 0n;
+  }
+
+  async revokeAllForUser(userId: string): Promise<void> {
+    await this.db
+      .updateTable('refreshTokens')
+      .set({ revokedAt: new Date() })
+      .where('userId', '=', userId)
+      .where('revokedAt', 'is', null)
+      .execute();
+  }
+
+  async wasRotated(id: string): Promise<boolean> {
+    const next = await this.db
+      .selectFrom('refreshTokens')
+      .select('id')
+      .where('rotatedFrom', '=', id)
+      .executeTakeFirst();
+    return next !== undefined;
+  }
+}

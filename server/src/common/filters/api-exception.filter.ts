@@ -1,0 +1,99 @@
+import { BadRequestException, Catch, HttpException, Logger, type ArgumentsHost, type ExceptionFilter } from '@nestjs/common';
+import { ThrottlerException } from '@nestjs/throttler';
+import { toFieldIssues, type ApiError, type ErrorCode } from '@holdfast/shared';
+import type { Request, Response } from 'express';
+import { ZodError } from 'zod';
+import { ApiException } from '../errors/api-exception.js';
+import { mapPostgresError } from '../errors/postgres-errors.js';
+
+const codeByStatus: Record<number, ErrorCode> = {
+  400: 'validation_failed',
+  401: 'unauthenticated',
+  403: 'forbidden',
+  404: 'not_found',
+  409: 'conflict',
+  413: 'payload_too_large',
+  415: 'unsupported_media_type',
+  429: 'too_many_requests',
+  503: 'service_unavailable',
+};
+
+function codeFor(status: number): ErrorCode {
+  return codeByStatus[status] ?? (status < 500 ? 'validation_failed' : 'internal_error');
+}
+
+/** body-parser and similar middleware errors: an http-errors object with `expose`. */
+function isExposedHttpError(e: unknown): e is { status: number; message: string; type?: string } {
+  return (
+    typeof e === 'object' && e !== null &&
+    typeof (e as { status?: unknown }).status === 'number' &&
+    (e as { expose?: unknown }).expose === true
+  );
+}
+
+/**
+ * Every failure leaves the API as `{ error: { code, message, fields?, details? } }`.
+ * Internal errors are logged with their stack and answered with a generic message.
+ */
+@Catch()
+export class ApiExceptionFilter implements ExceptionFilter {
+  private readonly logger = new Logger('ApiExceptionFilter');
+
+  catch(exception: unknown, host: ArgumentsHost): void {
+    const http = host.switchToHttp();
+    const res = http.getResponse<Response>();
+    const req = http.getRequest<Request>();
+    const { status, body } = this.toResponse(exception, req);
+    if (status >= 500) {
+      this.logger.error(
+        `${req.method} ${req.originalUrl} failed: ${exception instanceof Error ? exception.message : String(exception)}`,
+        exception instanceof Error ? exception.stack : undefined,
+      );
+    }
+    if (res.headersSent) return;
+    res.status(status).json(body);
+  }
+
+  toResponse(exception: unknown, req: Request): { status: number; body: ApiError } {
+    const make = (status: number, code: ErrorCode, message: string, extra: Partial<ApiError['error']> = {}) => ({
+      status,
+      body: { error: { code, message, ...extra } },
+    });
+    if (exception instanceof ApiException) {
+      const extra: Partial<ApiError['error']> = {};
+      if (exception.fields) extra.fields = exception.fields;
+      if (exception.details) extra.details = exception.details;
+      return make(exception.getStatus(), exception.code, exception.message, extra);
+    }
+    if (exception instanceof ZodError) {
+      return make(400, 'validation_failed', 'Some fields are not valid.', { fields: toFieldIssues(exception) });
+    }
+    if (exception instanceof ThrottlerException) {
+      return make(429, 'too_many_requests', 'Too many attempts. Wait a minute and try again.');
+    }
+    if (exception instanceof HttpException) {
+      const status = exception.getStatus();
+      if (status === 404 && /^Cannot [A-Z]+ /.test(exception.message)) {
+        return make(404, 'not_found', `No API route ${req.method} ${req.path}.`);
+      }
+      if (status === 413) return make(413, 'payload_too_large', 'The request body is too large (limit 1 MB).');
+      if (status === 400 && exception instanceof BadRequestException && /JSON/.test(exception.message)) {
+        return make(400, 'validation_failed', 'The request body is not valid JSON.');
+      }
+      return make(status, codeFor(status), status >= 500 ? 'Internal error.' : exception.message);
+    }
+    const mapped = mapPostgresError(exception);
+    if (mapped) return this.toResponse(mapped, req);
+    if (isExposedHttpError(exception)) {
+      const status = exception.status;
+      const message =
+        exception.type === 'entity.too.large'
+          ? 'The request body is too large.'
+          : exception.type === 'entity.parse.failed'
+            ? 'The request body is not valid JSON.'
+            : exception.message;
+      return make(status, codeFor(status), message);
+    }
+    return make(500, 'internal_error', 'Internal error. It has been logged.');
+  }
+}

@@ -1,0 +1,14 @@
+import type { DynamicModule, Type } from '@nestjs/common';
+import { AuthModule } from './auth/auth.module.js';
+import { HealthModule } from './health/health.module.js';
+import { UsersModule } from './users/users.module.js';
+
+/**
+ * Every feature module of the API. Add a new feature by appending its module here (one line);
+ * its controllers must declare a policy on each route (see auth/policy.ts).
+ */
+export const featureModules: Array<Type<unknown> | DynamicModule> = [
+  AuthModule,
+  UsersModule,
+  HealthModule,
+];

@@ -1,0 +1,43 @@
+import { Controller, Get, Res } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
+import type { Health } from '@holdfast/shared';
+import { sql } from 'kysely';
+import type { Response } from 'express';
+import { serverVersion } from '../config/paths.js';
+import { Database } from '../database/database.js';
+import { Public } from '../auth/policy.js';
+
+const DATABASE_TIMEOUT_MS = 1000;
+
+@ApiTags('health')
+@Controller('health')
+export class HealthController {
+  constructor(private readonly db: Database) {}
+
+  /** 200 when PostgreSQL answers `select 1` within a second, else 503. Never an error body. */
+  @Get()
+  @Public()
+  async check(@Res({ passthrough: true }) res: Response): Promise<Health> {
+    const up = await this.databaseAnswers();
+    res.status(up ? 200 : 503).setHeader('Cache-Control', 'no-store');
+    return up
+      ? { status: 'ok', database: 'ok', version: serverVersion }
+      : { status: 'degraded', database: 'down', version: serverVersion };
+  }
+
+  private async databaseAnswers(): Promise<boolean> {
+    let timer: NodeJS.Timeout | undefined;
+    const timeout = new Promise<false>((resolve) => {
+      timer = setTimeout(() => resolve(false), DATABASE_TIMEOUT_MS);
+    });
+    const query = sql`select 1`
+      .execute(this.db)
+      .then(() => true)
+      .catch(() => false);
+    try {
+      return await Promise.race([query, timeout]);
+    } finally {
+      clearTimeout(timer);
+    }
+  }
+}
