@@ -1,0 +1,84 @@
+import { useState, type ReactNode } from 'react';
+import { Box, Code, Collapse, Group, Stack, Text, Title, UnstyledButton } from '@mantine/core';
+import { IconChevronRight } from '@tabler/icons-react';
+import type { DerivationStep, Dimension, SectionDefinition } from '@holdfast/calc';
+import { sectionOrder } from './results-table';
+import { presentSI, type UnitSystem } from '../utils/units';
+
+export interface DerivationListProps {
+  steps: DerivationStep[];
+  sections: SectionDefinition[];
+  unitSystem: UnitSystem;
+  renderStepAside?: (id: string) => ReactNode;
+}
+
+/** Every derivation step by section; each opens to its formula, substitution and reference. */
+export function DerivationList({ steps, sections, unitSystem, renderStepAside }: DerivationListProps) {
+  const order = sectionOrder(sections, steps.map((s) => s.section));
+  return (
+    <Stack gap="xs">
+      {order.map((section) => {
+        const list = steps.filter((s) => s.section === section.id);
+        if (list.length === 0) return null;
+        return (
+          <div key={section.id}>
+            <Title order={4} size="h6" mt="xs" mb={4}>
+              {section.title}
+            </Title>
+            <Stack gap={2}>
+              {list.map((step) => (
+                <StepRow key={step.id} step={step} unitSystem={unitSystem} aside={renderStepAside?.(step.id)} />
+              ))}
+            </Stack>
+          </div>
+        );
+      })}
+    </Stack>
+  );
+}
+
+function StepRow({ step, unitSystem, aside }: { step: DerivationStep; unitSystem: UnitSystem; aside?: ReactNode }) {
+  const [open, setOpen] = useState(false);
+  const result = presentSI(step.value, step.dimension as Dimension, unitSystem);
+  const bodyId = `step-body-${step.id}`;
+  return (
+    <Box data-step={step.id} style={{ borderBottom: '1px solid var(--mantine-color-gray-2)' }}>
+      <Group gap={4} wrap="nowrap" align="center">
+        <UnstyledButton
+          onClick={() => setOpen((o) => !o)}
+          aria-expanded={open}
+          aria-controls={bodyId}
+          py={4}
+          style={{ flex: 1, minWidth: 0 }}
+        >
+          <Group gap={6} wrap="nowrap">
+            <IconChevronRight
+              size={14}
+              aria-hidden
+              style={{ transform: open ? 'rotate(90deg)' : undefined, transition: 'transform 120ms', flexShrink: 0 }}
+            />
+            <Text size="sm" style={{ flex: 1, minWidth: 0 }} truncate>
+              {step.label}
+            </Text>
+            <Text size="sm" ff="monospace" style={{ whiteSpace: 'nowrap' }}>
+              {step.symbol} = {result.text}
+            </Text>
+          </Group>
+        </UnstyledButton>
+        {aside}
+      </Group>
+      <Collapse expanded={open} id={bodyId} keepMounted={false}>
+        <Stack gap={2} pl={20} pb={6}>
+          <Code block fz="xs">
+            {step.formula}
+            {'\n'}
+            {step.substituted}
+          </Code>
+          <Text size="xs" c="dimmed">
+            Reference: {step.reference}
+          </Text>
+        </Stack>
+      </Collapse>
+    </Box>
+  );
+}

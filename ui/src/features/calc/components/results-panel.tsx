@@ -1,0 +1,121 @@
+import { lazy, Suspense, type ReactNode } from 'react';
+import { Alert, Badge, Box, Group, List, Paper, Skeleton, Stack, Tabs, Text, Title } from '@mantine/core';
+import { IconAlertTriangle, IconBolt } from '@tabler/icons-react';
+import type { SectionDefinition, SheetEvaluation } from '@holdfast/calc';
+import { CheckList } from './check-list';
+import { DerivationList } from './derivation-list';
+import { FieldSettingsView } from './field-settings-view';
+import { ResultsTable } from './results-table';
+import { Verdict } from './verdict';
+import type { UnitSystem } from '../utils/units';
+
+const EvaluationCharts = lazy(() => import('./evaluation-charts'));
+
+export interface ResultsPanelProps {
+  evaluation: SheetEvaluation | null;
+  /** Shown dimmed when the current inputs cannot be evaluated. */
+  stale?: SheetEvaluation | null;
+  sections: SectionDefinition[];
+  unitSystem: UnitSystem;
+  /** Live recalculation time; omitted when showing a stored evaluation. */
+  durationMs?: number;
+  /** Where the numbers come from, e.g. 'Calculated live in your browser' or 'Stored at submission'. */
+  origin: string;
+  failure?: string | null;
+  invalidCount?: number;
+  renderCheckAside?: (id: string) => ReactNode;
+  renderStepAside?: (id: string) => ReactNode;
+}
+
+/** Checks, results, derivation, charts and field settings of one evaluation, in tabs. */
+export function ResultsPanel(props: ResultsPanelProps) {
+  const { evaluation, stale, sections, unitSystem, durationMs, origin, failure, invalidCount = 0 } = props;
+  const shown = evaluation ?? stale ?? null;
+  const failing = shown ? shown.checks.filter((c) => !c.pass).length : 0;
+  return (
+    <Paper p="md" component="section" aria-labelledby="results-title" aria-live="polite" aria-busy={false}>
+      <Group justify="space-between" mb="xs" wrap="nowrap">
+        <Title order={2} size="h4" id="results-title">
+          Results
+        </Title>
+        {shown && evaluation ? <Verdict pass={shown.pass} size="lg" /> : null}
+      </Group>
+      <Group gap="xs" mb="sm">
+        <Text size="xs" c="dimmed">
+          {origin}
+        </Text>
+        {durationMs !== undefined ? (
+          <Badge variant="outline" color="gray" size="sm" leftSection={<IconBolt size={12} aria-hidden />} data-testid="recalc-time">
+            {durationMs.toFixed(1)} ms
+          </Badge>
+        ) : null}
+        {shown ? (
+          <Text size="xs" c="dimmed">
+            {shown.checks.length - failing} of {shown.checks.length} checks pass · core {shown.coreVersion}
+          </Text>
+        ) : null}
+      </Group>
+      {invalidCount > 0 ? (
+        <Alert color="amber" variant="light" icon={<IconAlertTriangle size={18} />} mb="sm" title="Some inputs need attention">
+          {invalidCount === 1 ? 'One input is' : `${invalidCount} inputs are`} not valid (marked beside the field).
+          {stale ? ' The results below are from the last valid inputs.' : ''}
+        </Alert>
+      ) : null}
+      {failure ? (
+        <Alert color="fail" variant="light" icon={<IconAlertTriangle size={18} />} mb="sm" title="The calculation stopped">
+          {failure}
+        </Alert>
+      ) : null}
+      {!shown ? (
+        <Stack gap="xs">
+          <Skeleton h={56} />
+          <Skeleton h={56} />
+          <Skeleton h={56} />
+        </Stack>
+      ) : (
+        <Box style={{ opacity: evaluation ? 1 : 0.55 }}>
+          {shown.warnings.length > 0 ? (
+            <Alert color="amber" variant="outline" mb="sm" title="Warnings">
+              <List size="sm">
+                {shown.warnings.map((w) => (
+                  <List.Item key={w}>{w}</List.Item>
+                ))}
+              </List>
+            </Alert>
+          ) : null}
+          <Tabs defaultValue="checks" keepMounted={false}>
+            <Tabs.List mb="sm">
+              <Tabs.Tab value="checks">Checks {failing > 0 ? `(${failing} failing)` : ''}</Tabs.Tab>
+              <Tabs.Tab value="results">Results</Tabs.Tab>
+              <Tabs.Tab value="steps">Derivation</Tabs.Tab>
+              <Tabs.Tab value="charts">Charts</Tabs.Tab>
+              <Tabs.Tab value="field">Field settings</Tabs.Tab>
+            </Tabs.List>
+            <Tabs.Panel value="checks">
+              <CheckList checks={shown.checks} unitSystem={unitSystem} renderCheckAside={props.renderCheckAside} />
+            </Tabs.Panel>
+            <Tabs.Panel value="results">
+              <ResultsTable results={shown.results} sections={sections} unitSystem={unitSystem} />
+            </Tabs.Panel>
+            <Tabs.Panel value="steps">
+              <DerivationList
+                steps={shown.derivation}
+                sections={sections}
+                unitSystem={unitSystem}
+                renderStepAside={props.renderStepAside}
+              />
+            </Tabs.Panel>
+            <Tabs.Panel value="charts">
+              <Suspense fallback={<Skeleton h={240} />}>
+                <EvaluationCharts charts={shown.charts} unitSystem={unitSystem} />
+              </Suspense>
+            </Tabs.Panel>
+            <Tabs.Panel value="field">
+              <FieldSettingsView evaluation={shown} unitSystem={unitSystem} />
+            </Tabs.Panel>
+          </Tabs>
+        </Box>
+      )}
+    </Paper>
+  );
+}

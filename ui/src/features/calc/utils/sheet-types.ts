@@ -1,0 +1,36 @@
+import * as calc from '@holdfast/calc';
+import type { SheetInputs, SheetTypeDefinition } from '@holdfast/calc';
+
+// The registry lands in calc in stages; reach it through the namespace so the UI keeps building.
+const registry = calc as unknown as {
+  getSheetType?: (id: string) => SheetTypeDefinition | undefined;
+  sheetTypes?: SheetTypeDefinition[] | Record<string, SheetTypeDefinition>;
+};
+
+/** All sheet types of the calc registry. */
+export function listSheetTypes(): SheetTypeDefinition[] {
+  const all = registry.sheetTypes;
+  if (!all) return [];
+  return Array.isArray(all) ? all : Object.values(all);
+}
+
+/** The sheet type with this id, or undefined when the core does not know it. */
+export function findSheetType(id: string): SheetTypeDefinition | undefined {
+  try {
+    return registry.getSheetType?.(id) ?? listSheetTypes().find((t) => t.id === id);
+  } catch {
+    return undefined;
+  }
+}
+
+/** Human title of a sheet type id, falling back to the id. */
+export function sheetTypeTitle(id: string): string {
+  return findSheetType(id)?.title ?? id;
+}
+
+/** The stored inputs over the type's defaults, so a field the sheet lacks shows its default. */
+export function withDefaults(type: SheetTypeDefinition, inputs: SheetInputs): SheetInputs {
+  const out: SheetInputs = {};
+  for (const f of type.fields) out[f.key] = f.default;
+  return { ...out, ...inputs };
+}

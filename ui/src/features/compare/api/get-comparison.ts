@@ -1,0 +1,23 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { compareSchema, type Compare } from '@holdfast/shared';
+import { api } from '../../../lib/api-client';
+
+/** Same root as the sheet's own keys, so invalidating a sheet refreshes its comparisons. */
+export const comparisonKey = (sheetId: string, from: string, to: string) =>
+  ['sheets', 'detail', sheetId, 'compare', from, to] as const;
+
+export function getComparison(sheetId: string, from: string, to: string, signal?: AbortSignal): Promise<Compare> {
+  return api.get(`/sheets/${sheetId}/compare`, { query: { from, to }, schema: compareSchema, signal });
+}
+
+export function comparisonQueryOptions(sheetId: string, from: string, to: string) {
+  return queryOptions({
+    queryKey: comparisonKey(sheetId, from, to),
+    queryFn: ({ signal }) => getComparison(sheetId, from, to, signal),
+    enabled: Boolean(from && to && from !== to),
+  });
+}
+
+export function useComparison(sheetId: string, from: string, to: string) {
+  return useQuery(comparisonQueryOptions(sheetId, from, to));
+}

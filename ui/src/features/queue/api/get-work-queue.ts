@@ -1,0 +1,17 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { workQueueSchema, type WorkQueue } from '@holdfast/shared';
+import { api } from '../../../lib/api-client';
+
+export const workQueueKeys = { all: ['work-queue'] as const };
+
+export function getWorkQueue(signal?: AbortSignal): Promise<WorkQueue> {
+  return api.get('/work-queue', { schema: workQueueSchema, signal });
+}
+
+export function workQueueQueryOptions() {
+  return queryOptions({ queryKey: workQueueKeys.all, queryFn: ({ signal }) => getWorkQueue(signal) });
+}
+
+export function useWorkQueue() {
+  return useQuery(workQueueQueryOptions());
+}

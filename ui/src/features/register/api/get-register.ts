@@ -1,0 +1,17 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { registerSchema, type Register } from '@holdfast/shared';
+import { api } from '../../../lib/api-client';
+
+export const registerKeys = { all: ['register'] as const };
+
+export function getRegister(signal?: AbortSignal): Promise<Register> {
+  return api.get('/register', { schema: registerSchema, signal });
+}
+
+export function registerQueryOptions() {
+  return queryOptions({ queryKey: registerKeys.all, queryFn: ({ signal }) => getRegister(signal) });
+}
+
+export function useRegister() {
+  return useQuery(registerQueryOptions());
+}

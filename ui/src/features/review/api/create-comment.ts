@@ -1,0 +1,16 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { commentSchema, type Comment, type CreateCommentInput } from '@holdfast/shared';
+import { api } from '../../../lib/api-client';
+import { commentsQueryOptions } from './get-comments';
+
+export function createComment(revisionId: string, input: CreateCommentInput): Promise<Comment> {
+  return api.post(`/revisions/${revisionId}/comments`, { body: input, schema: commentSchema });
+}
+
+export function useCreateComment(revisionId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: CreateCommentInput) => createComment(revisionId, input),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: commentsQueryOptions(revisionId).queryKey }),
+  });
+}

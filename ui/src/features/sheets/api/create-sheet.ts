@@ -1,0 +1,21 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { sheetDetailSchema, type CreateSheetInput, type SheetDetail } from '@holdfast/shared';
+import { api } from '../../../lib/api-client';
+import { sheetKeys } from './sheet-keys';
+
+export function createSheet(input: CreateSheetInput): Promise<SheetDetail> {
+  return api.post('/sheets', { body: input, schema: sheetDetailSchema });
+}
+
+export function useCreateSheet() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: createSheet,
+    onSuccess: (sheet) => {
+      queryClient.setQueryData(sheetKeys.detail(sheet.id), sheet);
+      void queryClient.invalidateQueries({ queryKey: sheetKeys.lists() });
+      void queryClient.invalidateQueries({ queryKey: ['work-queue'] });
+      void queryClient.invalidateQueries({ queryKey: ['register'] });
+    },
+  });
+}

@@ -1,0 +1,20 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { verifyResultSchema, type VerifyResult } from '@holdfast/shared';
+import { api } from '../../../lib/api-client';
+
+export function getVerification(code: string, signal?: AbortSignal): Promise<VerifyResult> {
+  // Public: anyone holding a printout may check it, signed in or not.
+  return api.get(`/verify/${encodeURIComponent(code)}`, { schema: verifyResultSchema, signal, auth: false });
+}
+
+export function verificationQueryOptions(code: string) {
+  return queryOptions({
+    queryKey: ['verify', code] as const,
+    queryFn: ({ signal }) => getVerification(code, signal),
+    staleTime: 0,
+  });
+}
+
+export function useVerification(code: string) {
+  return useQuery(verificationQueryOptions(code));
+}
