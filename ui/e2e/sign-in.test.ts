@@ -1,0 +1,71 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { e2eBaseUrl, e2eSkipReason, launchBrowser, type BrowserSession } from './support/browser';
+import { demoUsers, type DemoUserKey } from './support/demo-users';
+import { screenshot } from './support/screenshot';
+import { signInAs, signOut } from './support/sign-in';
+
+const skipReason = e2eSkipReason();
+if (skipReason) console.warn(`[browser] sign-in tests skipped: ${skipReason}`);
+
+describe.skipIf(skipReason !== null)('sign-in in a real browser', () => {
+  const baseUrl = e2eBaseUrl()!;
+  let browser: BrowserSession;
+
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('shows field errors and refuses a wrong password', async () => {
+    const { page } = browser;
+    await page.goto(`${baseUrl}/sign-in`);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await expect(page.getByText('not a valid e-mail address').isVisible()).resolves.toBe(true);
+
+    await page.getByRole('textbox', { name: 'E-mail' }).fill(demoUsers.engineer.email);
+    await page.getByRole('textbox', { name: 'Password' }).fill('not-the-password');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    const alert = page.getByRole('alert').filter({ hasText: /sign|password|credential/i });
+    await alert.first().waitFor();
+    await screenshot(page, 'sign-in-refused');
+  });
+
+  for (const who of Object.keys(demoUsers) as DemoUserKey[]) {
+    it(`signs in as ${who} and sees their name`, async () => {
+      const { page } = browser;
+      const user = demoUsers[who];
+      await signInAs(page, baseUrl, who);
+      await expect(page.getByTestId('current-user-name').textContent()).resolves.toBe(
+        user.displayName,
+      );
+      const usersLink = page.getByRole('link', { name: 'Users' });
+      await expect(usersLink.count()).resolves.toBe(user.role === 'admin' ? 1 : 0);
+      await screenshot(page, `frame-${who}`);
+      if (who === 'admin') {
+        await usersLink.click();
+        await page.getByRole('heading', { name: 'Users' }).waitFor();
+        await page.getByRole('cell', { name: demoUsers.viewer.email }).waitFor();
+        await screenshot(page, 'admin-users');
+      }
+      await signOut(page);
+    });
+  }
+
+  it('keeps the session across a reload and shows a 404 inside the frame', async () => {
+    const { page } = browser;
+    await signInAs(page, baseUrl, 'checker');
+    await page.goto(`${baseUrl}/no-such-page`);
+    await page.getByRole('heading', { name: 'Not found' }).waitFor();
+    await expect(page.getByTestId('current-user-name').textContent()).resolves.toBe(
+      demoUsers.checker.displayName,
+    );
+    await screenshot(page, 'not-found');
+    await signOut(page);
+    await page.goto(`${baseUrl}/sheets`);
+    await page.getByRole('heading', { name: 'Sign in' }).waitFor();
+    expect(new URL(page.url()).searchParams.get('next')).toBe('/sheets');
+    await screenshot(page, 'sign-in');
+  });
+});

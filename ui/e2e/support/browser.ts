@@ -1,0 +1,61 @@
+import { mkdtemp, rm } from 'node:fs/promises';
+import { existsSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+
+export const chromiumPath = process.env.HOLDFAST_CHROMIUM ?? '/usr/bin/chromium';
+
+const chromiumArgs = [
+  '--headless',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
+
+/** The app under test, set by the test runner (built server on a fresh seeded database). */
+export function e2eBaseUrl(): string | null {
+  const url = process.env.HOLDFAST_E2E_URL?.trim();
+  return url ? url.replace(/\/+$/, '') : null;
+}
+
+/** Why browser tests are skipped here, or null when they can run. */
+export function e2eSkipReason(): string | null {
+  if (!e2eBaseUrl())
+    return 'HOLDFAST_E2E_URL is not set: browser tests need a running Holdfast (npm test sets it).';
+  if (!existsSync(chromiumPath))
+    return `No chromium at ${chromiumPath}: install it with apt-get install -y chromium.`;
+  return null;
+}
+
+export interface BrowserSession {
+  context: BrowserContext;
+  page: Page;
+  close: () => Promise<void>;
+}
+
+/** A fresh chromium with its own throwaway profile; `close` removes the profile. */
+export async function launchBrowser(
+  options: { width?: number; height?: number } = {},
+): Promise<BrowserSession> {
+  const profile = await mkdtemp(join(tmpdir(), 'holdfast-chromium-'));
+  const context = await chromium.launchPersistentContext(profile, {
+    executablePath: chromiumPath,
+    headless: true,
+    args: chromiumArgs,
+    viewport: { width: options.width ?? 1280, height: options.height ?? 800 },
+  });
+  const page = context.pages()[0] ?? (await context.newPage());
+  return {
+    context,
+    page,
+    close: async () => {
+      await context.close();
+      await rm(profile, { recursive: true, force: true });
+    },
+  };
+}

@@ -1,0 +1,20 @@
+import { mkdir } from 'node:fs/promises';
+import { dirname, join, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import type { Page } from 'playwright-core';
+
+/** test-output/screens at the repository root (ignored by git). */
+export const screensDir = resolve(
+  dirname(fileURLToPath(import.meta.url)),
+  '../../../test-output/screens',
+);
+
+/** Save a full-page PNG as test-output/screens/<name>.png and return its path. */
+export async function screenshot(page: Page, name: string): Promise<string> {
+  await mkdir(screensDir, { recursive: true });
+  const file = join(screensDir, `${name.replace(/[^a-z0-9-]+/gi, '-')}.png`);
+  // Fonts load asynchronously; wait so screenshots show Inter, not the fallback face.
+  await page.evaluate(() => document.fonts.ready.then(() => undefined));
+  await page.screenshot({ path: file, fullPage: true });
+  return file;
+}
