@@ -43,7 +43,9 @@ export class UsersService {
     if (actorId === id && (input.active === false || (input.role && input.role !== 'admin'))) {
       throw conflict('You cannot deactivate yourself or give up your own admin role.');
     }
-    const row = await this.users.update(id, input);
+    // An empty patch is a no-op read (Kysely cannot build `update ... set` with no columns).
+    const row =
+      Object.keys(input).length === 0 ? await this.users.findById(id) : await this.users.update(id, input);
     if (!row) throw notFound('No such user.');
     if (!row.active) await this.users.revokeSessions(id);
     return toUser(row);

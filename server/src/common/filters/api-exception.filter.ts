@@ -74,7 +74,7 @@ export class ApiExceptionFilter implements ExceptionFilter {
     if (exception instanceof HttpException) {
       const status = exception.getStatus();
       if (status === 404 && /^Cannot [A-Z]+ /.test(exception.message)) {
-        return make(404, 'not_found', `No API route ${req.method} ${req.path}.`);
+        return make(404, 'not_found', `No API route ${req.method} ${req.originalUrl.split('?')[0]}.`);
       }
       if (status === 413) return make(413, 'payload_too_large', 'The request body is too large (limit 1 MB).');
       if (status === 400 && exception instanceof BadRequestException && /JSON/.test(exception.message)) {
