@@ -6,7 +6,7 @@ const finite = (x: number) => typeof x === 'number' && Number.isFinite(x);
 
 /**
  * Checks a disc's geometry and material; throws one CalcInputError naming every bad field.
- * Rules: all lengths finite and positive, Di < De, l0 > t (a cone height), t′ < t when given,
+ * Rules: all lengths finite and positive, Di < De, l0 > t (a cone height), 0.8·t ≤ t′ ≤ t when given,
  * 0 < E, −1 < ν < 0.5.
  */
 export function validateDisc(d: DiscSpring, collector?: FieldErrorCollector): void {
@@ -24,8 +24,9 @@ export function validateDisc(d: DiscSpring, collector?: FieldErrorCollector): vo
   if (d.tReduced !== undefined) {
     if (!finite(d.tReduced) || d.tReduced <= 0) {
       out.add(f('tReduced'), 'reduced thickness t′ must be a positive finite value');
-    } else if (finite(d.t) && d.tReduced > d.t) {
-      out.add(f('tReduced'), 'reduced thickness t′ must not exceed the nominal thickness t');
+    } else if (finite(d.t) && (d.tReduced > d.t || d.tReduced < 0.8 * d.t)) {
+      // Contact flats reduce t by a few per cent (t′/t ≈ 0.94–0.96 in DIN 2093); far less is a typo.
+      out.add(f('tReduced'), 'reduced thickness t′ must lie between 0.8·t and t');
     }
   }
   if (!finite(d.nu) || d.nu <= -1 || d.nu >= 0.5) {
