@@ -11,3 +11,4 @@ export * from './attachments/attachment.schema.js';
 export * from './criteria/criteria.schema.js';
 export * from './work-queue/work-queue.schema.js';
 export * from './verify/verify.schema.js';
+export * from './revisions/canonical-json.js';

@@ -1,0 +1,11 @@
+import { Module } from '@nestjs/common';
+import { RevisionsModule } from '../revisions/revisions.module.js';
+import { CommentsController } from './comments.controller.js';
+import { CommentsService } from './comments.service.js';
+
+@Module({
+  imports: [RevisionsModule],
+  controllers: [CommentsController],
+  providers: [CommentsService],
+})
+export class CommentsModule {}

@@ -1,0 +1,103 @@
+import { Injectable } from '@nestjs/common';
+import type { CriteriaSet, CriterionValue } from '@holdfast/calc';
+import type { Kysely } from 'kysely';
+import type { DB } from '@holdfast/db';
+import { Database } from '../database/database.js';
+
+export interface CriteriaVersionRow {
+  criteriaSetId: string;
+  version: number;
+  values: CriterionValue[];
+  note: string | null;
+  publishedBy: string | null;
+  publishedAt: Date;
+}
+
+@Injectable()
+export class CriteriaRepository {
+  constructor(private readonly db: Database) {}
+
+  /** Insert a shipped set as version 1 unless the set already exists (idempotent). */
+  async ensureShipped(set: CriteriaSet): Promise<void> {
+    await this.db.transaction().execute(async (trx) => {
+      const inserted = await trx
+        .insertInto('criteriaSets')
+        .values({ id: set.id, name: set.name, description: set.description })
+        .onConflict((oc) => oc.column('id').doNothing())
+        .returning('id')
+        .executeTakeFirst();
+      if (!inserted) return;
+      await trx
+        .insertInto('criteriaSetVersions')
+        .values({
+          criteriaSetId: set.id,
+          version: 1,
+          values: JSON.stringify(set.values),
+          note: `Shipped with the calculation core (set version ${set.version}).`,
+        })
+        .execute();
+    });
+  }
+
+  listWithLatest() {
+    return this.db
+      .selectFrom('criteriaSets as s')
+      .innerJoin('criteriaSetVersions as v', 'v.criteriaSetId', 's.id')
+      .select(['s.id', 's.name', 's.description', 'v.version', 'v.publishedAt'])
+      .where(({ eb, selectFrom }) =>
+        eb(
+          'v.version',
+          '=',
+          selectFrom('criteriaSetVersions as x')
+            .select((e) => e.fn.max('x.version').as('m'))
+            .whereRef('x.criteriaSetId', '=', 's.id'),
+        ),
+      )
+      .orderBy('s.id')
+      .execute();
+  }
+
+  findSet(id: string) {
+    return this.db.selectFrom('criteriaSets').selectAll().where('id', '=', id).executeTakeFirst();
+  }
+
+  async versions(id: string, db: Kysely<DB> = this.db): Promise<CriteriaVersionRow[]> {
+    const rows = await db
+      .selectFrom('criteriaSetVersions')
+      .selectAll()
+      .where('criteriaSetId', '=', id)
+      .orderBy('version', 'asc')
+      .execute();
+    return rows.map((r) => ({ ...r, values: r.values as CriterionValue[] }));
+  }
+
+  async version(
+    id: string,
+    version: number | 'latest',
+    db: Kysely<DB> = this.db,
+  ): Promise<CriteriaVersionRow | undefined> {
+    let q = db.selectFrom('criteriaSetVersions').selectAll().where('criteriaSetId', '=', id);
+    q =
+      version === 'latest'
+        ? q.orderBy('version', 'desc').limit(1)
+        : q.where('version', '=', version);
+    const row = await q.executeTakeFirst();
+    return row ? { ...row, values: row.values as CriterionValue[] } : undefined;
+  }
+
+  async insertVersion(
+    trx: Kysely<DB>,
+    row: {
+      criteriaSetId: string;
+      version: number;
+      values: CriterionValue[];
+      note: string;
+      publishedBy: string;
+    },
+  ): Promise<void> {
+    await trx
+      .insertInto('criteriaSetVersions')
+      .values({ ...row, values: JSON.stringify(row.values) })
+      .execute();
+  }
+}

@@ -1,0 +1,68 @@
+import { Injectable, Logger, type OnModuleDestroy, type OnModuleInit } from '@nestjs/common';
+import { CompiledQuery, type Kysely } from 'kysely';
+import PgBoss from 'pg-boss';
+import { AppConfig } from '../config/app-config.js';
+import { loadMailSettings } from '../mail/mail-settings.js';
+
+export const MAIL_QUEUE = 'mail';
+
+/**
+ * pg-boss 10 on the application's database (schema `pgboss`). Jobs are inserted inside the
+ * caller's transaction, so a job exists exactly when the state change that caused it committed.
+ */
+@Injectable()
+export class JobQueue implements OnModuleInit, OnModuleDestroy {
+  private readonly logger = new Logger('JobQueue');
+  private readonly settings = loadMailSettings();
+  readonly boss: PgBoss;
+
+  constructor(config: AppConfig) {
+    this.boss = new PgBoss({
+      connectionString: config.settings.DATABASE_URL,
+      schema: 'pgboss',
+      max: 3,
+    });
+    this.boss.on('error', (e: Error) => this.logger.error(`pg-boss: ${e.message}`));
+  }
+
+  async onModuleInit(): Promise<void> {
+    await this.boss.start();
+    await this.boss.createQueue(MAIL_QUEUE, {
+      name: MAIL_QUEUE,
+      retryLimit: this.settings.MAIL_RETRY_LIMIT,
+      retryDelay: this.settings.MAIL_RETRY_DELAY_SECONDS,
+      retryBackoff: true,
+    });
+  }
+
+  async onModuleDestroy(): Promise<void> {
+    await this.boss.stop({ graceful: true, wait: true, timeout: 5000 });
+  }
+
+  /** Enqueue inside `trx` (any Kysely bound to the open transaction). */
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any
+  async sendIn(trx: Kysely<any>, queue: string, data: object): Promise<void> {
+    const db = {
+      executeSql: async (text: string, values: unknown[]) => {
+        const result = await trx.executeQuery(CompiledQuery.raw(text, values));
+        return { rows: result.rows as unknown[] };
+      },
+    };
+    await this.boss.send(queue, data, {
+      db,
+      retryLimit: this.settings.MAIL_RETRY_LIMIT,
+      retryDelay: this.settings.MAIL_RETRY_DELAY_SECONDS,
+      retryBackoff: true,
+    });
+  }
+
+  async work<T extends object>(queue: string, handler: (data: T) => Promise<void>): Promise<void> {
+    await this.boss.work<T>(
+      queue,
+      { pollingIntervalSeconds: this.settings.OUTBOX_POLL_SECONDS },
+      async (jobs) => {
+        for (const job of jobs) await handler(job.data);
+      },
+    );
+  }
+}

@@ -1,0 +1,68 @@
+import { Injectable, Logger, type OnApplicationBootstrap } from '@nestjs/common';
+import type { Kysely } from 'kysely';
+import type { DB } from '@holdfast/db';
+import { Database } from '../database/database.js';
+import { Mailer, type MailMessage } from '../mail/mailer.js';
+import { JobQueue, MAIL_QUEUE } from './job-queue.js';
+
+interface MailJob {
+  outboxId: string;
+}
+
+/**
+ * Notifications leave through the outbox: the message row and its delivery job are written in
+ * the same transaction as the state change, and a pg-boss worker sends them with retries and
+ * backoff. A mail outage therefore never blocks a workflow step and loses no message.
+ */
+@Injectable()
+export class OutboxService implements OnApplicationBootstrap {
+  private readonly logger = new Logger('Outbox');
+
+  constructor(
+    private readonly db: Database,
+    private readonly queue: JobQueue,
+    private readonly mailer: Mailer,
+  ) {}
+
+  async onApplicationBootstrap(): Promise<void> {
+    await this.queue.work<MailJob>(MAIL_QUEUE, (job) => this.deliver(job.outboxId));
+  }
+
+  /** Queue a mail inside the caller's transaction. No recipients: nothing is queued. */
+  async enqueueMail(trx: Kysely<DB>, message: MailMessage): Promise<void> {
+    if (message.to.length === 0) return;
+    const row = await trx
+      .insertInto('outbox')
+      .values({ kind: 'mail', payload: JSON.stringify(message) })
+      .returning('id')
+      .executeTakeFirstOrThrow();
+    await this.queue.sendIn(trx, MAIL_QUEUE, { outboxId: row.id } satisfies MailJob);
+  }
+
+  /** Send one outbox message; throws (so pg-boss retries) when SMTP fails. */
+  async deliver(outboxId: string): Promise<void> {
+    const row = await this.db
+      .selectFrom('outbox')
+      .selectAll()
+      .where('id', '=', outboxId)
+      .executeTakeFirst();
+    if (!row || row.sentAt) return;
+    try {
+      await this.mailer.send(row.payload as MailMessage);
+    } catch (e) {
+      const reason = e instanceof Error ? e.message : String(e);
+      await this.db
+        .updateTable('outbox')
+        .set((eb) => ({ attempts: eb('attempts', '+', 1), lastError: reason }))
+        .where('id', '=', outboxId)
+        .execute();
+      this.logger.warn(`mail ${outboxId} not sent yet (${reason}); will retry`);
+      throw e;
+    }
+    await this.db
+      .updateTable('outbox')
+      .set((eb) => ({ attempts: eb('attempts', '+', 1), sentAt: new Date(), lastError: null }))
+      .where('id', '=', outboxId)
+      .execute();
+  }
+}

@@ -1,0 +1,62 @@
+import { Body, Controller, Get, HttpCode, Post } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import {
+  createMachineSchema,
+  createPositionSchema,
+  createSiteSchema,
+  type CreateMachineInput,
+  type CreatePositionInput,
+  type CreateSiteInput,
+  type Register,
+} from '@holdfast/shared';
+import { CurrentUser, type AuthUser } from '../auth/auth-user.js';
+import { Roles, SignedIn } from '../auth/policy.js';
+import { ApiBodySchema } from '../common/openapi.js';
+import { ZodValidationPipe } from '../common/pipes/zod-validation.pipe.js';
+import { RegisterService } from './register.service.js';
+
+@ApiTags('register')
+@ApiBearerAuth()
+@Controller('register')
+export class RegisterController {
+  constructor(private readonly register: RegisterService) {}
+
+  @Get()
+  @SignedIn()
+  tree(): Promise<Register> {
+    return this.register.tree();
+  }
+
+  @Post('sites')
+  @HttpCode(201)
+  @Roles('engineer', 'admin')
+  @ApiBodySchema(createSiteSchema)
+  createSite(
+    @CurrentUser() user: AuthUser,
+    @Body(new ZodValidationPipe(createSiteSchema)) input: CreateSiteInput,
+  ) {
+    return this.register.createSite(user, input);
+  }
+
+  @Post('machines')
+  @HttpCode(201)
+  @Roles('engineer', 'admin')
+  @ApiBodySchema(createMachineSchema)
+  createMachine(
+    @CurrentUser() user: AuthUser,
+    @Body(new ZodValidationPipe(createMachineSchema)) input: CreateMachineInput,
+  ) {
+    return this.register.createMachine(user, input);
+  }
+
+  @Post('positions')
+  @HttpCode(201)
+  @Roles('engineer', 'admin')
+  @ApiBodySchema(createPositionSchema)
+  createPosition(
+    @CurrentUser() user: AuthUser,
+    @Body(new ZodValidationPipe(createPositionSchema)) input: CreatePositionInput,
+  ) {
+    return this.register.createPosition(user, input);
+  }
+}

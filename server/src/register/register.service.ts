@@ -1,0 +1,156 @@
+import { Injectable } from '@nestjs/common';
+import type {
+  CreateMachineInput,
+  CreatePositionInput,
+  CreateSiteInput,
+  Register,
+} from '@holdfast/shared';
+import type { AuthUser } from '../auth/auth-user.js';
+import { badRequest } from '../common/errors/api-exception.js';
+import { Database } from '../database/database.js';
+import { AuditService } from '../audit/audit.service.js';
+
+@Injectable()
+export class RegisterService {
+  constructor(
+    private readonly db: Database,
+    private readonly audit: AuditService,
+  ) {}
+
+  /** The whole register as a tree, with each position's approved revision in force. */
+  async tree(): Promise<Register> {
+    const [sites, machines, positions, approved] = await Promise.all([
+      this.db.selectFrom('sites').select(['id', 'code', 'name']).orderBy('code').execute(),
+      this.db
+        .selectFrom('machines')
+        .select(['id', 'siteId', 'tag', 'name', 'kind'])
+        .orderBy('tag')
+        .execute(),
+      this.db
+        .selectFrom('brakePositions')
+        .select(['id', 'machineId', 'tag', 'description', 'motion'])
+        .orderBy('tag')
+        .execute(),
+      this.db
+        .selectFrom('sheets as s')
+        .innerJoin('revisions as r', 'r.id', 's.approvedRevisionId')
+        .select([
+          's.positionId',
+          's.id as sheetId',
+          's.documentNumber',
+          'r.id as revisionId',
+          'r.label',
+          'r.approvedAt',
+        ])
+        .orderBy('r.approvedAt', 'asc')
+        .execute(),
+    ]);
+    // Several sheets may cover one position over time: the most recently approved is in force.
+    const current = new Map(approved.map((a) => [a.positionId, a]));
+    return {
+      sites: sites.map((s) => ({
+        ...s,
+        machines: machines
+          .filter((m) => m.siteId === s.id)
+          .map((m) => ({
+            id: m.id,
+            tag: m.tag,
+            name: m.name,
+            kind: m.kind as Register['sites'][number]['machines'][number]['kind'],
+            positions: positions
+              .filter((p) => p.machineId === m.id)
+              .map((p) => {
+                const a = current.get(p.id);
+                return {
+                  id: p.id,
+                  tag: p.tag,
+                  description: p.description,
+                  motion:
+                    p.motion as Register['sites'][number]['machines'][number]['positions'][number]['motion'],
+                  currentApproved: a
+                    ? {
+                        sheetId: a.sheetId,
+                        documentNumber: a.documentNumber,
+                        revisionId: a.revisionId,
+                        revisionLabel: a.label,
+                      }
+                    : null,
+                };
+              }),
+          })),
+      })),
+    };
+  }
+
+  async createSite(user: AuthUser, input: CreateSiteInput) {
+    return this.db.transaction().execute(async (trx) => {
+      const row = await trx
+        .insertInto('sites')
+        .values(input)
+        .returning(['id', 'code', 'name'])
+        .executeTakeFirstOrThrow();
+      await this.audit.record(trx, {
+        actorId: user.id,
+        action: 'site.created',
+        entity: 'register',
+        entityId: row.id,
+        after: row,
+      });
+      return row;
+    });
+  }
+
+  async createMachine(user: AuthUser, input: CreateMachineInput) {
+    return this.db.transaction().execute(async (trx) => {
+      const site = await trx
+        .selectFrom('sites')
+        .select('id')
+        .where('id', '=', input.siteId)
+        .executeTakeFirst();
+      if (!site)
+        throw badRequest('Some fields are not valid.', [
+          { path: 'siteId', message: 'no such site' },
+        ]);
+      const row = await trx
+        .insertInto('machines')
+        .values(input)
+        .returning(['id', 'siteId', 'tag', 'name', 'kind'])
+        .executeTakeFirstOrThrow();
+      await this.audit.record(trx, {
+        actorId: user.id,
+        action: 'machine.created',
+        entity: 'register',
+        entityId: row.id,
+        after: row,
+      });
+      return row;
+    });
+  }
+
+  async createPosition(user: AuthUser, input: CreatePositionInput) {
+    return this.db.transaction().execute(async (trx) => {
+      const machine = await trx
+        .selectFrom('machines')
+        .select('id')
+        .where('id', '=', input.machineId)
+        .executeTakeFirst();
+      if (!machine)
+        throw badRequest('Some fields are not valid.', [
+          { path: 'machineId', message: 'no such machine' },
+        ]);
+      const row = await trx
+        .insertInto('brakePositions')
+        .values(input)
+        .returning(['id', 'machineId', 'tag', 'description', 'motion'])
+        .executeTakeFirstOrThrow();
+      await this.audit.record(trx, {
+        actorId: user.id,
+        action: 'position.created',
+        entity: 'register',
+        entityId: row.id,
+        after: row,
+      });
+      return row;
+    });
+  }
+}

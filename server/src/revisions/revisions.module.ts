@@ -1,0 +1,15 @@
+import { Module } from '@nestjs/common';
+import { CriteriaModule } from '../criteria/criteria.module.js';
+import { DriftService } from './drift.service.js';
+import { RevisionsController } from './revisions.controller.js';
+import { RevisionsRepository } from './revisions.repository.js';
+import { RevisionsService } from './revisions.service.js';
+import { WorkflowService } from './workflow.service.js';
+
+@Module({
+  imports: [CriteriaModule],
+  controllers: [RevisionsController],
+  providers: [RevisionsRepository, RevisionsService, WorkflowService, DriftService],
+  exports: [RevisionsRepository, RevisionsService],
+})
+export class RevisionsModule {}

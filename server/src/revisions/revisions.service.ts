@@ -1,0 +1,148 @@
+import { Injectable } from '@nestjs/common';
+import type { SheetInputs } from '@holdfast/calc';
+import type { Revision, SaveRevisionInput } from '@holdfast/shared';
+import type { Kysely } from 'kysely';
+import type { DB } from '@holdfast/db';
+import type { AuthUser } from '../auth/auth-user.js';
+import { conflict, forbidden, notFound } from '../common/errors/api-exception.js';
+import { Database } from '../database/database.js';
+import { AuditService } from '../audit/audit.service.js';
+import { CriteriaService } from '../criteria/criteria.service.js';
+import { canCheck, canEdit, canReadContent, isEditableState } from './revision-access.js';
+import { toRevision } from './revision-mapper.js';
+import { RevisionsRepository, type RevisionWithSheet } from './revisions.repository.js';
+import { evaluateOrReject } from './evaluate.js';
+import { coreVersion } from './calc-engine.js';
+
+@Injectable()
+export class RevisionsService {
+  constructor(
+    private readonly db: Database,
+    private readonly repo: RevisionsRepository,
+    private readonly criteria: CriteriaService,
+    private readonly audit: AuditService,
+  ) {}
+
+  /** The revision, 404 when missing, 403 when the caller may not read drafts. */
+  async load(
+    user: AuthUser,
+    id: string,
+    db: Kysely<DB> = this.db,
+    lock = false,
+  ): Promise<RevisionWithSheet> {
+    const rev = await this.repo.find(id, db, lock);
+    if (!rev) throw notFound('Revision not found.');
+    if (!canReadContent(user, rev))
+      throw forbidden('Only approved revisions are open to your role.');
+    return rev;
+  }
+
+  async get(user: AuthUser, id: string): Promise<Revision> {
+    return this.present(user, await this.load(user, id));
+  }
+
+  async present(user: AuthUser, rev: RevisionWithSheet): Promise<Revision> {
+    const people = await this.repo.people([rev.authorId, rev.checkerId]);
+    const editable = canEdit(user, rev);
+    return toRevision(rev, people, {
+      supersededByLabel: rev.supersededById ? await this.repo.label(rev.supersededById) : undefined,
+      canEdit: editable,
+      canSubmit: editable,
+      canCheck: canCheck(user, rev),
+    });
+  }
+
+  /** Refuse a change to a revision that is not the caller's to edit, or is stale. */
+  assertEditable(user: AuthUser, rev: RevisionWithSheet, rowVersion: number): void {
+    if (!isEditableState(rev.state)) {
+      throw conflict(
+        `Revision ${rev.label} is ${rev.state.replace('_', ' ')} and cannot be changed.`,
+        {
+          state: rev.state,
+          currentRowVersion: rev.rowVersion,
+        },
+      );
+    }
+    if (!canEdit(user, rev))
+      throw forbidden('Only the author or the sheet owner can edit this revision.');
+    assertRowVersion(rev, rowVersion);
+  }
+
+  /** Draft save: server-side preview evaluation, optimistic concurrency, audit. */
+  async save(user: AuthUser, id: string, input: SaveRevisionInput): Promise<Revision> {
+    await this.db.transaction().execute(async (trx) => {
+      const rev = await this.load(user, id, trx, true);
+      this.assertEditable(user, rev, input.rowVersion);
+      const criteriaSetId = input.criteriaSetId ?? rev.criteriaSetId;
+      const criteria = await this.criteria.load(criteriaSetId, 'latest', trx);
+      const evaluation = evaluateOrReject(rev.sheetType, input.inputs as SheetInputs, criteria);
+      await trx
+        .updateTable('revisions')
+        .set({
+          inputs: JSON.stringify(input.inputs),
+          unitSystem: input.unitSystem,
+          changeNote: input.changeNote,
+          criteriaSetId,
+          criteriaSetVersion: criteria.version,
+          evaluation: JSON.stringify(evaluation),
+          coreVersion: coreVersion(),
+          // A returned revision's old hash and code no longer describe it.
+          hash: null,
+          verificationCode: null,
+          rowVersion: rev.rowVersion + 1,
+        })
+        .where('id', '=', id)
+        .where('rowVersion', '=', input.rowVersion)
+        .execute();
+      if (criteriaSetId !== rev.criteriaSetId) {
+        await trx
+          .updateTable('sheets')
+          .set({ criteriaSetId })
+          .where('id', '=', rev.sheetId)
+          .execute();
+      }
+      await this.audit.record(trx, {
+        actorId: user.id,
+        action: 'revision.saved',
+        entity: 'revision',
+        entityId: id,
+        sheetId: rev.sheetId,
+        before: snapshot(rev),
+        after: {
+          state: rev.state,
+          rowVersion: rev.rowVersion + 1,
+          inputs: input.inputs,
+          unitSystem: input.unitSystem,
+          changeNote: input.changeNote,
+          criteriaSet: `${criteriaSetId}@${criteria.version}`,
+        },
+      });
+    });
+    return this.get(user, id);
+  }
+}
+
+export function assertRowVersion(
+  rev: { rowVersion: number; label: string },
+  rowVersion: number,
+): void {
+  if (rev.rowVersion !== rowVersion) {
+    throw conflict(
+      `Revision ${rev.label} was changed by someone else (version ${rev.rowVersion}, yours ${rowVersion}). Reload and apply your change again.`,
+      { currentRowVersion: rev.rowVersion },
+    );
+  }
+}
+
+/** What an audit entry records of a revision before a change. */
+export function snapshot(rev: RevisionWithSheet) {
+  return {
+    state: rev.state,
+    rowVersion: rev.rowVersion,
+    inputs: rev.inputs,
+    unitSystem: rev.unitSystem,
+    changeNote: rev.changeNote,
+    criteriaSet: `${rev.criteriaSetId}@${rev.criteriaSetVersion}`,
+    hash: rev.hash,
+  };
+}

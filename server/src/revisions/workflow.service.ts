@@ -1,0 +1,249 @@
+import { Injectable } from '@nestjs/common';
+import type { SheetInputs } from '@holdfast/calc';
+import type {
+  ApproveRevisionInput,
+  ReturnRevisionInput,
+  Revision,
+  SubmitRevisionInput,
+} from '@holdfast/shared';
+import type { Kysely } from 'kysely';
+import type { DB } from '@holdfast/db';
+import type { AuthUser } from '../auth/auth-user.js';
+import { badRequest, conflict, forbidden } from '../common/errors/api-exception.js';
+import { AppConfig } from '../config/app-config.js';
+import { Database } from '../database/database.js';
+import { AuditService } from '../audit/audit.service.js';
+import { CriteriaService } from '../criteria/criteria.service.js';
+import { OutboxService } from '../outbox/outbox.service.js';
+import { coreVersion } from './calc-engine.js';
+import { evaluateOrReject } from './evaluate.js';
+import { approvedMail, returnedMail, submittedMail } from './notifications.js';
+import { canCheck } from './revision-access.js';
+import { contentHash, newVerificationCode } from './revision-codes.js';
+import { RevisionsRepository, type RevisionWithSheet } from './revisions.repository.js';
+import { assertRowVersion, RevisionsService, snapshot } from './revisions.service.js';
+
+/**
+ * The check-and-approve workflow: draft/returned → in check → approved (previous approved →
+ * superseded) or returned. Each step runs in one transaction with its audit event and its
+ * notification (outbox), so either all of it happens or none.
+ */
+@Injectable()
+export class WorkflowService {
+  constructor(
+    private readonly db: Database,
+    private readonly repo: RevisionsRepository,
+    private readonly revisions: RevisionsService,
+    private readonly criteria: CriteriaService,
+    private readonly audit: AuditService,
+    private readonly outbox: OutboxService,
+    private readonly config: AppConfig,
+  ) {}
+
+  private about(rev: RevisionWithSheet) {
+    return {
+      sheetId: rev.sheetId,
+      revisionId: rev.id,
+      documentNumber: rev.documentNumber,
+      title: rev.title,
+      label: rev.label,
+    };
+  }
+
+  /** Validate and evaluate on the server, freeze, hash, and ask the checkers. */
+  async submit(user: AuthUser, id: string, input: SubmitRevisionInput): Promise<Revision> {
+    await this.db.transaction().execute(async (trx) => {
+      const rev = await this.revisions.load(user, id, trx, true);
+      this.revisions.assertEditable(user, rev, input.rowVersion);
+      const criteria = await this.criteria.load(rev.criteriaSetId, 'latest', trx);
+      const evaluation = evaluateOrReject(rev.sheetType, rev.inputs as SheetInputs, criteria);
+      const failing = evaluation.checks.filter((c) => !c.pass);
+      const justification = input.justification?.trim() || null;
+      if (failing.length > 0 && !justification) {
+        throw badRequest('Some checks fail: say why this revision should still be checked.', [
+          {
+            path: 'justification',
+            message: `required because ${failing.length} check(s) fail: ${failing.map((c) => c.label).join(', ')}`,
+          },
+        ]);
+      }
+      const hash = contentHash(rev.inputs, evaluation);
+      const after = {
+        state: 'in_check',
+        rowVersion: rev.rowVersion + 1,
+        evaluation: JSON.stringify(evaluation),
+        criteriaSetVersion: criteria.version,
+        coreVersion: coreVersion(),
+        hash,
+        verificationCode: newVerificationCode(hash),
+        justification,
+        submittedAt: new Date(),
+      };
+      await trx.updateTable('revisions').set(after).where('id', '=', id).execute();
+      await this.audit.record(trx, {
+        actorId: user.id,
+        action: 'revision.submitted',
+        entity: 'revision',
+        entityId: id,
+        sheetId: rev.sheetId,
+        before: snapshot(rev),
+        after: {
+          state: 'in_check',
+          rowVersion: after.rowVersion,
+          hash,
+          coreVersion: after.coreVersion,
+          criteriaSet: `${rev.criteriaSetId}@${criteria.version}`,
+          pass: evaluation.pass,
+          failing: failing.map((c) => c.id),
+          justification,
+        },
+      });
+      const to = await this.repo.checkerEmails(rev.authorId, trx);
+      await this.outbox.enqueueMail(
+        trx,
+        submittedMail(
+          this.config.settings.PUBLIC_URL,
+          this.about(rev),
+          to,
+          user.displayName,
+          failing.length,
+        ),
+      );
+    });
+    return this.revisions.get(user, id);
+  }
+
+  private async loadForCheck(user: AuthUser, id: string, rowVersion: number, trx: Kysely<DB>) {
+    const rev = await this.revisions.load(user, id, trx, true);
+    if (rev.state !== 'in_check') {
+      throw conflict(`Revision ${rev.label} is ${rev.state.replace('_', ' ')}, not in check.`, {
+        state: rev.state,
+        currentRowVersion: rev.rowVersion,
+      });
+    }
+    if (rev.authorId === user.id)
+      throw forbidden('Nobody checks their own revision: ask another checker.');
+    if (!canCheck(user, rev)) throw forbidden('Only a checker can approve or return a revision.');
+    assertRowVersion(rev, rowVersion);
+    return rev;
+  }
+
+  async approve(user: AuthUser, id: string, input: ApproveRevisionInput): Promise<Revision> {
+    await this.db.transaction().execute(async (trx) => {
+      const rev = await this.loadForCheck(user, id, input.rowVersion, trx);
+      const now = new Date();
+      const previous = await trx
+        .selectFrom('revisions')
+        .select(['id', 'label', 'rowVersion'])
+        .where('sheetId', '=', rev.sheetId)
+        .where('state', '=', 'approved')
+        .forUpdate()
+        .executeTakeFirst();
+      if (previous) {
+        await trx
+          .updateTable('revisions')
+          .set({
+            state: 'superseded',
+            supersededAt: now,
+            supersededById: id,
+            rowVersion: previous.rowVersion + 1,
+          })
+          .where('id', '=', previous.id)
+          .execute();
+        await this.audit.record(trx, {
+          actorId: user.id,
+          action: 'revision.superseded',
+          entity: 'revision',
+          entityId: previous.id,
+          sheetId: rev.sheetId,
+          before: { state: 'approved', label: previous.label },
+          after: { state: 'superseded', supersededBy: rev.label },
+        });
+      }
+      await trx
+        .updateTable('revisions')
+        .set({
+          state: 'approved',
+          checkerId: user.id,
+          approvedAt: now,
+          checkNote: input.note?.trim() || null,
+          rowVersion: rev.rowVersion + 1,
+        })
+        .where('id', '=', id)
+        .execute();
+      await this.audit.record(trx, {
+        actorId: user.id,
+        action: 'revision.approved',
+        entity: 'revision',
+        entityId: id,
+        sheetId: rev.sheetId,
+        before: { state: rev.state, rowVersion: rev.rowVersion },
+        after: {
+          state: 'approved',
+          rowVersion: rev.rowVersion + 1,
+          hash: rev.hash,
+          note: input.note ?? null,
+        },
+      });
+      const to = await this.repo.email(rev.authorId, trx);
+      await this.outbox.enqueueMail(
+        trx,
+        approvedMail(
+          this.config.settings.PUBLIC_URL,
+          this.about(rev),
+          to ? [to] : [],
+          user.displayName,
+        ),
+      );
+    });
+    return this.revisions.get(user, id);
+  }
+
+  /** Back to the author; the reason is stored as a comment on the revision. */
+  async return(user: AuthUser, id: string, input: ReturnRevisionInput): Promise<Revision> {
+    await this.db.transaction().execute(async (trx) => {
+      const rev = await this.loadForCheck(user, id, input.rowVersion, trx);
+      await trx
+        .updateTable('revisions')
+        .set({
+          state: 'returned',
+          checkerId: user.id,
+          returnedAt: new Date(),
+          rowVersion: rev.rowVersion + 1,
+        })
+        .where('id', '=', id)
+        .execute();
+      const comment = await trx
+        .insertInto('comments')
+        .values({ revisionId: id, authorId: user.id, body: input.comment })
+        .returning('id')
+        .executeTakeFirstOrThrow();
+      await this.audit.record(trx, {
+        actorId: user.id,
+        action: 'revision.returned',
+        entity: 'revision',
+        entityId: id,
+        sheetId: rev.sheetId,
+        before: { state: rev.state, rowVersion: rev.rowVersion },
+        after: {
+          state: 'returned',
+          rowVersion: rev.rowVersion + 1,
+          commentId: comment.id,
+          comment: input.comment,
+        },
+      });
+      const to = await this.repo.email(rev.authorId, trx);
+      await this.outbox.enqueueMail(
+        trx,
+        returnedMail(
+          this.config.settings.PUBLIC_URL,
+          this.about(rev),
+          to ? [to] : [],
+          user.displayName,
+          input.comment,
+        ),
+      );
+    });
+    return this.revisions.get(user, id);
+  }
+}

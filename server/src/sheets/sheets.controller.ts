@@ -1,0 +1,83 @@
+import { Body, Controller, Get, HttpCode, Param, Post, Query } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import {
+  compareQuerySchema,
+  createSheetSchema,
+  newRevisionSchema,
+  sheetListQuerySchema,
+  type AuditList,
+  type Compare,
+  type CompareQuery,
+  type CreateSheetInput,
+  type NewRevisionInput,
+  type Revision,
+  type SheetDetail,
+  type SheetList,
+  type SheetListQuery,
+} from '@holdfast/shared';
+import { CurrentUser, type AuthUser } from '../auth/auth-user.js';
+import { Roles, SignedIn } from '../auth/policy.js';
+import { ApiBodySchema } from '../common/openapi.js';
+import { UuidParamPipe } from '../common/pipes/uuid-param.pipe.js';
+import { ZodValidationPipe } from '../common/pipes/zod-validation.pipe.js';
+import { SheetsService } from './sheets.service.js';
+
+@ApiTags('sheets')
+@ApiBearerAuth()
+@Controller('sheets')
+export class SheetsController {
+  constructor(private readonly sheets: SheetsService) {}
+
+  @Get()
+  @SignedIn()
+  list(
+    @Query(new ZodValidationPipe(sheetListQuerySchema, 'query')) query: SheetListQuery,
+  ): Promise<SheetList> {
+    return this.sheets.list(query);
+  }
+
+  @Post()
+  @HttpCode(201)
+  @Roles('engineer')
+  @ApiBodySchema(createSheetSchema)
+  create(
+    @CurrentUser() user: AuthUser,
+    @Body(new ZodValidationPipe(createSheetSchema)) input: CreateSheetInput,
+  ): Promise<SheetDetail> {
+    return this.sheets.create(user, input);
+  }
+
+  @Get(':id')
+  @SignedIn()
+  detail(@Param('id', UuidParamPipe) id: string): Promise<SheetDetail> {
+    return this.sheets.detail(id);
+  }
+
+  @Post(':id/revisions')
+  @HttpCode(201)
+  @Roles('engineer')
+  @ApiBodySchema(newRevisionSchema)
+  newRevision(
+    @CurrentUser() user: AuthUser,
+    @Param('id', UuidParamPipe) id: string,
+    @Body(new ZodValidationPipe(newRevisionSchema)) input: NewRevisionInput,
+  ): Promise<Revision> {
+    return this.sheets.newRevision(user, id, input);
+  }
+
+  @Get(':id/compare')
+  @SignedIn()
+  compare(
+    @CurrentUser() user: AuthUser,
+    @Param('id', UuidParamPipe) id: string,
+    @Query(new ZodValidationPipe(compareQuerySchema, 'query')) query: CompareQuery,
+  ): Promise<Compare> {
+    return this.sheets.compare(user, id, query);
+  }
+
+  @Get(':id/audit')
+  @SignedIn()
+  audit(@Param('id', UuidParamPipe) id: string): Promise<AuditList> {
+    return this.sheets.auditTrail(id);
+  }
+}

@@ -1,0 +1,13 @@
+import { Module } from '@nestjs/common';
+import { CriteriaModule } from '../criteria/criteria.module.js';
+import { RevisionsModule } from '../revisions/revisions.module.js';
+import { SheetsController } from './sheets.controller.js';
+import { SheetsRepository } from './sheets.repository.js';
+import { SheetsService } from './sheets.service.js';
+
+@Module({
+  imports: [CriteriaModule, RevisionsModule],
+  controllers: [SheetsController],
+  providers: [SheetsRepository, SheetsService],
+})
+export class SheetsModule {}

@@ -1,0 +1,261 @@
+import { Injectable } from '@nestjs/common';
+import type { SheetInputs } from '@holdfast/calc';
+import type {
+  Compare,
+  CompareQuery,
+  CreateSheetInput,
+  NewRevisionInput,
+  Revision,
+  SheetDetail,
+  SheetList,
+  SheetListQuery,
+} from '@holdfast/shared';
+import type { Kysely } from 'kysely';
+import type { DB } from '@holdfast/db';
+import type { AuthUser } from '../auth/auth-user.js';
+import { badRequest, conflict, forbidden, notFound } from '../common/errors/api-exception.js';
+import { Database } from '../database/database.js';
+import { AuditService } from '../audit/audit.service.js';
+import { CriteriaService } from '../criteria/criteria.service.js';
+import {
+  coreVersion,
+  defaultCriteriaSetId,
+  defaultInputs,
+  evaluateSheet,
+  fieldLabel,
+} from '../revisions/calc-engine.js';
+import { diffChecks, diffInputs, diffResults } from '../revisions/diff.js';
+import { canReadContent } from '../revisions/revision-access.js';
+import { revisionLabel } from '../revisions/revision-codes.js';
+import { toRevisionSummary } from '../revisions/revision-mapper.js';
+import { RevisionsRepository } from '../revisions/revisions.repository.js';
+import { RevisionsService } from '../revisions/revisions.service.js';
+import type { SheetEvaluation } from '@holdfast/calc';
+import { toSheetSummary } from './sheet-mapper.js';
+import { SheetsRepository } from './sheets.repository.js';
+
+/** A preview evaluation for a new draft; a draft may start incomplete, so failures give null. */
+function preview(
+  sheetType: string,
+  inputs: SheetInputs,
+  criteria: Parameters<typeof evaluateSheet>[2],
+) {
+  try {
+    return JSON.stringify(evaluateSheet(sheetType, inputs, criteria));
+  } catch {
+    return null;
+  }
+}
+
+@Injectable()
+export class SheetsService {
+  constructor(
+    private readonly db: Database,
+    private readonly repo: SheetsRepository,
+    private readonly revisionsRepo: RevisionsRepository,
+    private readonly revisions: RevisionsService,
+    private readonly criteria: CriteriaService,
+    private readonly audit: AuditService,
+  ) {}
+
+  async list(query: SheetListQuery): Promise<SheetList> {
+    const { rows, total } = await this.repo.list(query);
+    return { items: rows.map(toSheetSummary), total, page: query.page, pageSize: query.pageSize };
+  }
+
+  async detail(id: string, db: Kysely<DB> = this.db): Promise<SheetDetail> {
+    const row = await this.repo.findSummary(id, db);
+    if (!row) throw notFound('Sheet not found.');
+    const revs = await this.revisionsRepo.listForSheet(id, db);
+    const people = await this.revisionsRepo.people(
+      revs.flatMap((r) => [r.authorId, r.checkerId]),
+      db,
+    );
+    return {
+      ...toSheetSummary(row),
+      criteriaSetId: row.criteriaSetId,
+      revisions: revs.map((r) => toRevisionSummary(r, people)),
+    };
+  }
+
+  async create(user: AuthUser, input: CreateSheetInput): Promise<SheetDetail> {
+    const id = await this.db.transaction().execute(async (trx) => {
+      const position = await this.repo.findPosition(input.positionId, trx);
+      if (!position)
+        throw badRequest('Some fields are not valid.', [
+          { path: 'positionId', message: 'no such brake position' },
+        ]);
+      const criteriaSetId = input.criteriaSetId ?? defaultCriteriaSetId(input.sheetType);
+      const set = await trx
+        .selectFrom('criteriaSets')
+        .select('id')
+        .where('id', '=', criteriaSetId)
+        .executeTakeFirst();
+      if (!set)
+        throw badRequest('Some fields are not valid.', [
+          { path: 'criteriaSetId', message: 'no such criteria set' },
+        ]);
+      const criteria = await this.criteria.load(criteriaSetId, 'latest', trx);
+      const documentNumber = await this.repo.nextDocumentNumber(position.siteId, trx);
+      const sheet = await trx
+        .insertInto('sheets')
+        .values({
+          documentNumber,
+          title: input.title,
+          positionId: position.id,
+          machineId: position.machineId,
+          siteId: position.siteId,
+          tags: `${position.machineTag} ${position.tag}`,
+          sheetType: input.sheetType,
+          ownerId: user.id,
+          criteriaSetId,
+        })
+        .returning('id')
+        .executeTakeFirstOrThrow();
+      const inputs = defaultInputs(input.sheetType);
+      const evaluation = preview(input.sheetType, inputs, criteria);
+      const rev = await trx
+        .insertInto('revisions')
+        .values({
+          sheetId: sheet.id,
+          seq: 1,
+          label: 'A',
+          inputs: JSON.stringify(inputs),
+          unitSystem: user.unitSystem,
+          criteriaSetId,
+          criteriaSetVersion: criteria.version,
+          evaluation,
+          coreVersion: evaluation ? coreVersion() : null,
+          authorId: user.id,
+          changeNote: 'First issue.',
+        })
+        .returning('id')
+        .executeTakeFirstOrThrow();
+      await this.audit.record(trx, {
+        actorId: user.id,
+        action: 'sheet.created',
+        entity: 'sheet',
+        entityId: sheet.id,
+        sheetId: sheet.id,
+        after: {
+          documentNumber,
+          title: input.title,
+          sheetType: input.sheetType,
+          positionId: position.id,
+          criteriaSetId,
+          revisionId: rev.id,
+          label: 'A',
+        },
+      });
+      return sheet.id;
+    });
+    return this.detail(id);
+  }
+
+  /** A new draft copying the latest revision's inputs; refused while a revision is open. */
+  async newRevision(user: AuthUser, sheetId: string, input: NewRevisionInput): Promise<Revision> {
+    const id = await this.db.transaction().execute(async (trx) => {
+      const sheet = await trx
+        .selectFrom('sheets')
+        .selectAll()
+        .where('id', '=', sheetId)
+        .forUpdate()
+        .executeTakeFirst();
+      if (!sheet) throw notFound('Sheet not found.');
+      const latest = await trx
+        .selectFrom('revisions')
+        .selectAll()
+        .where('sheetId', '=', sheetId)
+        .orderBy('seq', 'desc')
+        .limit(1)
+        .executeTakeFirstOrThrow();
+      if (['draft', 'in_check', 'returned'].includes(latest.state)) {
+        throw conflict(
+          `Revision ${latest.label} is still ${latest.state.replace('_', ' ')}; finish it first.`,
+          {
+            openRevisionId: latest.id,
+          },
+        );
+      }
+      const criteria = await this.criteria.load(sheet.criteriaSetId, 'latest', trx);
+      const inputs = latest.inputs as SheetInputs;
+      const evaluation = preview(sheet.sheetType, inputs, criteria);
+      const seq = latest.seq + 1;
+      const rev = await trx
+        .insertInto('revisions')
+        .values({
+          sheetId,
+          seq,
+          label: revisionLabel(seq),
+          inputs: JSON.stringify(inputs),
+          unitSystem: latest.unitSystem,
+          criteriaSetId: sheet.criteriaSetId,
+          criteriaSetVersion: criteria.version,
+          evaluation,
+          coreVersion: evaluation ? coreVersion() : null,
+          authorId: user.id,
+          changeNote: input.changeNote,
+        })
+        .returning('id')
+        .executeTakeFirstOrThrow();
+      await this.audit.record(trx, {
+        actorId: user.id,
+        action: 'revision.created',
+        entity: 'revision',
+        entityId: rev.id,
+        sheetId,
+        before: { latest: latest.label, state: latest.state },
+        after: {
+          label: revisionLabel(seq),
+          state: 'draft',
+          copiedFrom: latest.id,
+          changeNote: input.changeNote,
+        },
+      });
+      return rev.id;
+    });
+    return this.revisions.get(user, id);
+  }
+
+  async compare(user: AuthUser, sheetId: string, query: CompareQuery): Promise<Compare> {
+    const [a, b] = await Promise.all([
+      this.revisionsRepo.find(query.from),
+      this.revisionsRepo.find(query.to),
+    ]);
+    if (!a || !b || a.sheetId !== sheetId || b.sheetId !== sheetId)
+      throw notFound('Both revisions must belong to this sheet.');
+    if (!canReadContent(user, a) || !canReadContent(user, b))
+      throw forbidden('Only approved revisions are open to your role.');
+    const people = await this.revisionsRepo.people([
+      a.authorId,
+      a.checkerId,
+      b.authorId,
+      b.checkerId,
+    ]);
+    return {
+      from: toRevisionSummary(a, people),
+      to: toRevisionSummary(b, people),
+      inputs: diffInputs(a.inputs as SheetInputs, b.inputs as SheetInputs, (k) =>
+        fieldLabel(a.sheetType, k),
+      ),
+      results: diffResults(
+        a.evaluation as SheetEvaluation | null,
+        b.evaluation as SheetEvaluation | null,
+      ),
+      checks: diffChecks(
+        a.evaluation as SheetEvaluation | null,
+        b.evaluation as SheetEvaluation | null,
+      ),
+    };
+  }
+
+  async auditTrail(sheetId: string) {
+    const exists = await this.db
+      .selectFrom('sheets')
+      .select('id')
+      .where('id', '=', sheetId)
+      .executeTakeFirst();
+    if (!exists) throw notFound('Sheet not found.');
+    return { items: await this.audit.forSheet(sheetId) };
+  }
+}
