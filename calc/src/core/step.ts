@@ -149,3 +149,19 @@ export class Derivation {
     return s.value;
   }
 }
+
+/**
+ * Computes a formula, recording a step when a Derivation is given. Without one (sweeps, charts)
+ * only the value is computed; a non-finite result throws CalcDomainError either way.
+ */
+export function compute<S extends string, D extends Dimension>(
+  d: Derivation | undefined,
+  formula: Formula<S, D>,
+  values: Record<S, number>,
+  options: StepOptions = {},
+): Q<D> {
+  if (d) return d.step(formula, values, options);
+  const value = formula.evaluate(values);
+  if (!Number.isFinite(value)) throw new CalcDomainError(options.id ?? formula.spec.id, values);
+  return value;
+}

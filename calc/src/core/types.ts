@@ -23,6 +23,7 @@ export type Dimension =
   | 'power'
   | 'speed'
   | 'angularSpeed'
+  | 'angularAcceleration'
   | 'mass'
   | 'inertia'
   | 'pressure'
@@ -162,7 +163,12 @@ export interface SheetEvaluation {
   charts: ChartData[];
   fieldSettings: FieldSetting[];
   /** Tables for the field team, e.g. the spring setting table. */
-  tables: { id: string; title: string; columns: { key: string; label: string; unit: string; dimension: Dimension }[]; rows: Record<string, number>[] }[];
+  tables: {
+    id: string;
+    title: string;
+    columns: { key: string; label: string; unit: string; dimension: Dimension }[];
+    rows: Record<string, number>[];
+  }[];
   warnings: string[];
   /** True when every check passes. */
   pass: boolean;

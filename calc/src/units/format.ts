@@ -36,6 +36,7 @@ const PRINT_UNITS: Record<Dimension, PrintUnit[]> = {
   power: [p('W', 1, 1e4), p('kW', 1e3)],
   speed: [p('m/s', 1)],
   angularSpeed: [p('rad/s', 1)],
+  angularAcceleration: [p('rad/s²', 1)],
   mass: [p('kg', 1)],
   inertia: [p('kg·m²', 1)],
   pressure: [p('kPa', 1e3, 1e5), p('MPa', 1e6)],

@@ -15,6 +15,8 @@ export type Torque = Q<'torque'>;
 export type Power = Q<'power'>;
 export type Speed = Q<'speed'>;
 export type AngularSpeed = Q<'angularSpeed'>;
+/** rad/s². */
+export type AngularAcceleration = Q<'angularAcceleration'>;
 export type Mass = Q<'mass'>;
 export type Inertia = Q<'inertia'>;
 export type Pressure = Q<'pressure'>;
@@ -47,6 +49,8 @@ export const torque = (nm: number): Torque => nm as Torque;
 export const power = (w: number): Power => w as Power;
 export const speed = (ms: number): Speed => ms as Speed;
 export const angularSpeed = (rads: number): AngularSpeed => rads as AngularSpeed;
+export const angularAcceleration = (rads2: number): AngularAcceleration =>
+  rads2 as AngularAcceleration;
 export const mass = (kg: number): Mass => kg as Mass;
 export const inertia = (kgm2: number): Inertia => kgm2 as Inertia;
 export const pressure = (pa: number): Pressure => pa as Pressure;

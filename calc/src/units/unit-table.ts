@@ -89,6 +89,13 @@ export const DIMENSIONS: Record<Dimension, DimensionInfo> = {
     displayUS: 'rpm',
     units: [u('rad/s', 'rad/s', 'SI', { cu: 'rad/s' }), u('rpm', 'rpm', 'both', { cu: 'rpm' })],
   },
+  angularAcceleration: {
+    siUnit: 'rad/s^2',
+    siLabel: 'rad/s²',
+    displaySI: 'rad/s^2',
+    displayUS: 'rad/s^2',
+    units: [u('rad/s^2', 'rad/s²', 'both')],
+  },
   mass: {
     siUnit: 'kg',
     siLabel: 'kg',
