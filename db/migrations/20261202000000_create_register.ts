@@ -53,4 +53,5 @@ export async function down(db: Kysely<any>): Promise<void> {
   await db.schema.dropTable('brake_positions').execute();
   await db.schema.dropTable('machines').execute();
   await db.schema.dropTable('sites').execute();
+  await sql`drop extension if exists pg_trgm`.execute(db);
 }

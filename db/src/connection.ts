@@ -12,6 +12,8 @@ export interface DatabaseOptions {
   max?: number;
   /** Milliseconds to wait for a connection before failing (health checks use a short one). */
   connectionTimeoutMillis?: number;
+  /** Told about errors on idle pooled connections (they are otherwise ignored). */
+  onIdleError?: (error: Error) => void;
 }
 
 /** The plugins every application-side Kysely instance uses (see database.ts for naming). */
@@ -20,11 +22,15 @@ export function databasePlugins() {
 }
 
 export function createPool(options: DatabaseOptions): pg.Pool {
-  return new pg.Pool({
+  const pool = new pg.Pool({
     connectionString: options.connectionString,
     max: options.max ?? 10,
     connectionTimeoutMillis: options.connectionTimeoutMillis ?? 5000,
   });
+  // An idle connection dropped by the server (restart, admin command) must not crash the
+  // process; the pool discards it and the next query opens a new one.
+  pool.on('error', (error) => options.onIdleError?.(error));
+  return pool;
 }
 
 /** A typed, camelCase Kysely instance over a new pool. Call `destroy()` to close it. */

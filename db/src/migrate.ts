@@ -1,14 +1,11 @@
 import { promises as fs } from 'node:fs';
 import path from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { FileMigrationProvider, Migrator, NO_MIGRATIONS, type Kysely, type MigrationResult } from 'kysely';
 
-/** The compiled migrations: `db/dist/migrations` next to this file's `db/dist/src`. */
-export const migrationFolder = path.resolve(
-  path.dirname(fileURLToPath(import.meta.url)),
-  '..',
-  'migrations',
-);
+import { dbDistDir } from './dist-dir.js';
+
+/** The compiled migrations, `db/dist/migrations`. */
+export const migrationFolder = path.join(dbDistDir, 'migrations');
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
 function migrator(db: Kysely<any>): Migrator {

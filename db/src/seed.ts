@@ -1,15 +1,16 @@
 import { promises as fs } from 'node:fs';
 import path from 'node:path';
-import { fileURLToPath, pathToFileURL } from 'node:url';
+import { pathToFileURL } from 'node:url';
 import type { Kysely } from 'kysely';
 import type { DB } from './database.js';
+import { dbDistDir } from './dist-dir.js';
 
 /**
  * Seed modules: every compiled `db/dist/seeds/*.js` exporting `seed(db: Kysely<DB>)`, run in
  * file-name order (timestamp prefix), so the demo users exist before the demo scenario. Each one
  * must be idempotent: `npm start` runs them on every start.
  */
-export const seedFolder = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', 'seeds');
+export const seedFolder = path.join(dbDistDir, 'seeds');
 
 interface SeedModule {
   seed: (db: Kysely<DB>) => Promise<void>;
