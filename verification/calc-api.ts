@@ -1,0 +1,30 @@
+/**
+ * The calculation-core functions the cases call. Units, quantities and disc springs come from the
+ * package; the formula families are imported from the calc sources so that every case exercises
+ * the same code the sheets use, whatever the package index exports.
+ */
+export {
+  discSprings, toSI, fromSI, length, force, torque, power, speed, angularSpeed, mass, inertia,
+  pressure, energy, time, ratio, degrees, rpm, stiffness, specificHeat, angle,
+} from '@holdfast/calc';
+export { shoeMomentCoefficients, shoeFromActuatingForce, actuatingForce } from '../calc/src/shoe-brake/general-shoe.js';
+export { pivotDistance, pivotedNormalForce, pivotedShoeTorque } from '../calc/src/shoe-brake/pivoted-shoe.js';
+export { shortShoeTorque } from '../calc/src/shoe-brake/short-shoe.js';
+export { caliperTorque, uniformWearRadius, uniformPressureRadius } from '../calc/src/disc-brake/caliper.js';
+export { bandBrake } from '../calc/src/band-brake/band.js';
+export { rotatingEnergy, linearEnergy, potentialEnergy } from '../calc/src/energy/stop-energy.js';
+export { temperatureRise } from '../calc/src/energy/heat.js';
+export { stopping } from '../calc/src/stopping/stopping.js';
+export { tenPercentStoppingDistance } from '../calc/src/stopping/limits.js';
+export { hoistLoadTorques, hoistLoadSpeed } from '../calc/src/duty/hoist-load.js';
+export { motorRatedTorque } from '../calc/src/duty/motor-torque.js';
+export { referRotatingInertia, referLinearMass } from '../calc/src/duty/referral.js';
+export { requiredBrakeTorque } from '../calc/src/duty/required-torque.js';
+export { releaseAndStroke } from '../calc/src/release/release.js';
+export { springLength } from '../calc/src/spring-setting/setting-table.js';
+
+/** Unit helpers for cases: SI ↔ source units. */
+export const IN = 0.0254;
+export const LBF = 4.4482216152605;
+export const PSI = LBF / (IN * IN);
+export const MM = 1e-3;
