@@ -3,6 +3,14 @@ import { defineConfig } from 'vitest/config';
 // One run covers every workspace; each project keeps its own environment and includes.
 export default defineConfig({
   test: {
-    projects: ['calc', 'shared', 'db', 'server', 'ui', 'verification'],
+    projects: [
+      'calc',
+      'shared',
+      'db',
+      'server',
+      'ui/vitest.config.ts',
+      'ui/vitest.browser.config.ts',
+      'verification',
+    ],
   },
 });

@@ -1,30 +1,14 @@
 import { defineConfig } from 'vitest/config';
 import react from '@vitejs/plugin-react';
 
+// Component tests (jsdom). Browser tests have their own config, vitest.browser.config.ts;
+// vitest does not read `projects` nested inside a project listed by the root config.
 export default defineConfig({
   plugins: [react()],
   test: {
-    projects: [
-      {
-        extends: true,
-        test: {
-          name: 'ui',
-          include: ['src/**/*.test.{ts,tsx}'],
-          environment: 'jsdom',
-          setupFiles: ['./src/testing/setup.ts'],
-        },
-      },
-      {
-        extends: true,
-        test: {
-          name: 'browser',
-          include: ['e2e/**/*.test.ts'],
-          environment: 'node',
-          fileParallelism: false,
-          testTimeout: 120000,
-          hookTimeout: 180000,
-        },
-      },
-    ],
+    name: 'ui',
+    include: ['src/**/*.test.{ts,tsx}'],
+    environment: 'jsdom',
+    setupFiles: ['./src/testing/setup.ts'],
   },
 });

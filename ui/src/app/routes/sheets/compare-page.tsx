@@ -1,0 +1,71 @@
+import { Anchor, Group, Paper, Select, Skeleton, Stack, Text } from '@mantine/core';
+import type { QueryClient } from '@tanstack/react-query';
+import { Link, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Page } from '../../../components/layouts/page';
+import { ErrorPanel } from '../../../components/errors/error-panel';
+import type { RouteHandle } from '../../../lib/route-handle';
+import { useCurrentUser } from '../../../lib/session';
+import { useComparison } from '../../../features/compare/api/get-comparison';
+import { CompareView } from '../../../features/compare/components/compare-view';
+import { sheetQueryOptions, useSheet } from '../../../features/sheets/api/get-sheet';
+import { visibleRevisions } from './sheet-page';
+
+export const handle: RouteHandle = { caution: true, wide: true, title: 'Compare revisions' };
+
+export function clientLoader(queryClient: QueryClient) {
+  return async ({ params }: LoaderFunctionArgs) => {
+    await queryClient.ensureQueryData(sheetQueryOptions(params.sheetId!));
+    return null;
+  };
+}
+
+export function Component() {
+  const { sheetId = '' } = useParams();
+  const [search, setSearch] = useSearchParams();
+  const user = useCurrentUser();
+  const sheet = useSheet(sheetId);
+  const from = search.get('from') ?? '';
+  const to = search.get('to') ?? '';
+  const cmp = useComparison(sheetId, from, to);
+  const revisions = sheet.data ? visibleRevisions(sheet.data, user) : [];
+  const options = revisions.map((r) => ({ value: r.id, label: `Revision ${r.label}` }));
+  const pick = (key: 'from' | 'to', v: string | null) =>
+    setSearch((prev) => {
+      const next = new URLSearchParams(prev);
+      if (v) next.set(key, v);
+      return next;
+    });
+
+  return (
+    <Page
+      eyebrow={
+        sheet.data ? (
+          <Anchor component={Link} to={`/sheets/${sheetId}`} size="xs">
+            {sheet.data.documentNumber} · {sheet.data.title}
+          </Anchor>
+        ) : undefined
+      }
+      title="Compare revisions"
+      description="Inputs that changed and how each result and check moved."
+    >
+      <Paper p="sm">
+        <Group gap="md" align="flex-end">
+          <Select label="From" data={options} value={from || null} onChange={(v) => pick('from', v)} w={180} allowDeselect={false} />
+          <Select label="To" data={options} value={to || null} onChange={(v) => pick('to', v)} w={180} allowDeselect={false} />
+        </Group>
+      </Paper>
+      {!from || !to || from === to ? (
+        <Text c="dimmed">Pick two different revisions.</Text>
+      ) : cmp.isPending ? (
+        <Stack>
+          <Skeleton h={120} />
+          <Skeleton h={200} />
+        </Stack>
+      ) : cmp.isError ? (
+        <ErrorPanel error={cmp.error} onRetry={() => void cmp.refetch()} />
+      ) : (
+        <CompareView data={cmp.data} />
+      )}
+    </Page>
+  );
+}

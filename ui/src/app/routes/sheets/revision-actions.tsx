@@ -1,0 +1,141 @@
+import { useState } from 'react';
+import { Button, Group, Menu } from '@mantine/core';
+import { notifications } from '@mantine/notifications';
+import {
+  IconArrowBackUp,
+  IconChevronDown,
+  IconCircleCheck,
+  IconPrinter,
+  IconSend,
+} from '@tabler/icons-react';
+import type { CheckResult } from '@holdfast/calc';
+import type { Revision } from '@holdfast/shared';
+import { errorMessage } from '../../../lib/api-client';
+import { useApproveRevision } from '../../../features/revisions/api/approve-revision';
+import { usePrintRevision, type PrintKind } from '../../../features/revisions/api/print-revision';
+import { useReturnRevision } from '../../../features/revisions/api/return-revision';
+import { useSubmitRevision } from '../../../features/revisions/api/submit-revision';
+import type { WorkbenchContext } from '../../../features/revisions/components/revision-workbench';
+import { ApproveDialog } from '../../../features/review/components/approve-dialog';
+import { ReturnDialog } from '../../../features/review/components/return-dialog';
+import { SubmitDialog } from '../../../features/review/components/submit-dialog';
+
+export interface RevisionActionsProps {
+  revision: Revision;
+  ctx: WorkbenchContext;
+  openComments: number;
+}
+
+/** Only what the server says this user may do with this revision in its state, plus printing. */
+export function RevisionActions({ revision, ctx, openComments }: RevisionActionsProps) {
+  const [dialog, setDialog] = useState<'submit' | 'approve' | 'return' | null>(null);
+  const [failing, setFailing] = useState<CheckResult[]>([]);
+  const [rowVersion, setRowVersion] = useState(revision.rowVersion);
+  const submit = useSubmitRevision(revision.id);
+  const approve = useApproveRevision(revision.id);
+  const ret = useReturnRevision(revision.id);
+  const print = usePrintRevision(revision.id);
+  const close = () => setDialog(null);
+
+  const openSubmit = async () => {
+    const saved = await ctx.flush();
+    if (ctx.hasInputErrors) {
+      notifications.show({
+        color: 'fail',
+        title: 'Not sent',
+        message: 'Fix the inputs marked in red first.',
+      });
+      return;
+    }
+    setRowVersion(saved?.rowVersion ?? revision.rowVersion);
+    setFailing((ctx.evaluation?.checks ?? []).filter((c) => !c.pass));
+    setDialog('submit');
+  };
+
+  const doPrint = (kind: PrintKind) =>
+    print.mutate(
+      { kind },
+      {
+        onError: (e) =>
+          notifications.show({
+            color: 'fail',
+            title: 'Could not open the printout',
+            message: errorMessage(e),
+          }),
+      },
+    );
+
+  return (
+    <Group gap="xs">
+      {revision.canSubmit ? (
+        <Button
+          size="sm"
+          leftSection={<IconSend size={16} aria-hidden />}
+          onClick={() => void openSubmit()}
+        >
+          Send for check
+        </Button>
+      ) : null}
+      {revision.canCheck ? (
+        <>
+          <Button
+            size="sm"
+            color="fail.7"
+            variant="outline"
+            leftSection={<IconArrowBackUp size={16} aria-hidden />}
+            onClick={() => setDialog('return')}
+          >
+            Return
+          </Button>
+          <Button
+            size="sm"
+            color="pass.8"
+            leftSection={<IconCircleCheck size={16} aria-hidden />}
+            onClick={() => setDialog('approve')}
+          >
+            Approve
+          </Button>
+        </>
+      ) : null}
+      <Menu position="bottom-end" withinPortal>
+        <Menu.Target>
+          <Button
+            size="sm"
+            variant="default"
+            leftSection={<IconPrinter size={16} aria-hidden />}
+            rightSection={<IconChevronDown size={14} aria-hidden />}
+            loading={print.isPending}
+          >
+            Print
+          </Button>
+        </Menu.Target>
+        <Menu.Dropdown>
+          <Menu.Label>
+            {revision.state === 'approved' ? 'Approved revision' : 'Marked “not for use”'}
+          </Menu.Label>
+          <Menu.Item onClick={() => doPrint('pdf')}>Calculation sheet (PDF)</Menu.Item>
+          <Menu.Item onClick={() => doPrint('field-card')}>Field setting card (PDF)</Menu.Item>
+        </Menu.Dropdown>
+      </Menu>
+      <SubmitDialog
+        opened={dialog === 'submit'}
+        onClose={close}
+        failingChecks={failing}
+        onSubmit={(justification) => submit.mutateAsync({ rowVersion, justification })}
+      />
+      <ApproveDialog
+        opened={dialog === 'approve'}
+        onClose={close}
+        revisionLabel={revision.label}
+        openComments={openComments}
+        onApprove={(note) => approve.mutateAsync({ rowVersion: revision.rowVersion, note })}
+      />
+      <ReturnDialog
+        opened={dialog === 'return'}
+        onClose={close}
+        authorName={revision.author.displayName}
+        onReturn={(comment) => ret.mutateAsync({ rowVersion: revision.rowVersion, comment })}
+      />
+    </Group>
+  );
+}

@@ -1,0 +1,147 @@
+import { useCallback, useMemo, useState } from 'react';
+import { Alert, Grid, Skeleton, Stack, Tabs } from '@mantine/core';
+import { IconAlertTriangle } from '@tabler/icons-react';
+import type { Comment, User } from '@holdfast/shared';
+import { ErrorPanel } from '../../../components/errors/error-panel';
+import { AttachmentsPanel } from '../../../features/attachments/components/attachments-panel';
+import { fieldDomId } from '../../../features/calc/components/field-input';
+import { ResultsPanel } from '../../../features/calc/components/results-panel';
+import { findSheetType } from '../../../features/calc/utils/sheet-types';
+import { useCriteriaSet } from '../../../features/criteria/api/get-criteria-set';
+import { useComments } from '../../../features/review/api/get-comments';
+import { CommentMarker } from '../../../features/review/components/comment-marker';
+import { CommentsPanel } from '../../../features/review/components/comments-panel';
+import { groupByAnchor } from '../../../features/review/utils/anchors';
+import { useRevision } from '../../../features/revisions/api/get-revision';
+import { RevisionWorkbench } from '../../../features/revisions/components/revision-workbench';
+import { RevisionActions } from './revision-actions';
+
+/** One revision: the live workbench with review markers in place, then comments and files. */
+export function RevisionView({ revisionId, user }: { revisionId: string; user: User }) {
+  const query = useRevision(revisionId);
+  const [tab, setTab] = useState<string | null>('calc');
+  const revision = query.data;
+  const sheetType = revision ? findSheetType(revision.sheetType) : undefined;
+  const criteria = useCriteriaSet(revision?.criteriaSetId ?? '', revision?.criteriaSetVersion);
+  const frozen = revision ? revision.state === 'approved' || revision.state === 'superseded' : true;
+  const commentsQuery = useComments(revisionId);
+  const comments = useMemo(() => commentsQuery.data?.items ?? [], [commentsQuery.data]);
+  const grouped = useMemo(() => groupByAnchor(comments), [comments]);
+  const canComment = user.role !== 'viewer' && !frozen;
+
+  const fieldLabel = useCallback(
+    (key: string) => sheetType?.fields.find((f) => f.key === key)?.label ?? key,
+    [sheetType],
+  );
+  const stepLabel = useCallback(
+    (id: string) => revision?.evaluation?.derivation.find((s) => s.id === id)?.label ?? id,
+    [revision],
+  );
+  const describe = (c: Comment) =>
+    !c.anchor
+      ? ''
+      : c.anchor.kind === 'input'
+        ? fieldLabel(c.anchor.key)
+        : c.anchor.kind === 'step'
+          ? stepLabel(c.anchor.key)
+          : c.anchor.key;
+  const reveal = (c: Comment) => {
+    if (c.anchor?.kind !== 'input') return;
+    const key = c.anchor.key;
+    setTab('calc');
+    // The calculation tab mounts on switch; reach the field once it is in the document.
+    setTimeout(() => {
+      const el = document.getElementById(fieldDomId(key));
+      el?.scrollIntoView({ block: 'center' });
+      el?.focus();
+    }, 50);
+  };
+
+  const marker =
+    (kind: 'input' | 'step' | 'check', label: (k: string) => string) => (key: string) => (
+      <CommentMarker
+        revisionId={revisionId}
+        anchor={{ kind, key }}
+        label={label(key)}
+        comments={grouped.get(`${kind}:${key}`) ?? []}
+        canComment={canComment}
+        canResolve={canComment}
+      />
+    );
+
+  if (query.isPending) return <Skeleton h={420} />;
+  if (query.isError || !revision)
+    return <ErrorPanel error={query.error} onRetry={() => void query.refetch()} />;
+
+  const openComments = comments.filter((c) => !c.resolved).length;
+
+  return (
+    <Tabs value={tab} onChange={setTab} keepMounted={false}>
+      <Tabs.List mb="md">
+        <Tabs.Tab value="calc">Calculation</Tabs.Tab>
+        <Tabs.Tab value="review">
+          Review and files{openComments > 0 ? ` (${openComments} open)` : ''}
+        </Tabs.Tab>
+      </Tabs.List>
+      <Tabs.Panel value="calc">
+        {sheetType ? (
+          criteria.isError && revision.canEdit ? (
+            <ErrorPanel
+              title="The acceptance criteria could not be loaded"
+              error={criteria.error}
+              onRetry={() => void criteria.refetch()}
+            />
+          ) : (
+            <RevisionWorkbench
+              revision={revision}
+              sheetType={sheetType}
+              criteria={criteria.data}
+              renderActions={(ctx) => (
+                <RevisionActions revision={revision} ctx={ctx} openComments={openComments} />
+              )}
+              renderFieldAside={marker('input', fieldLabel)}
+              renderStepAside={marker('step', stepLabel)}
+              renderCheckAside={marker('check', (k) => k)}
+            />
+          )
+        ) : (
+          <Stack>
+            <Alert
+              color="amber"
+              icon={<IconAlertTriangle size={18} />}
+              title="Sheet type not available here"
+            >
+              This build’s calculation core does not know the sheet type “{revision.sheetType}”. The
+              stored results are shown; inputs cannot be edited.
+            </Alert>
+            <ResultsPanel
+              evaluation={revision.evaluation}
+              sections={[]}
+              unitSystem={revision.unitSystem}
+              origin="Stored by the server"
+            />
+          </Stack>
+        )}
+      </Tabs.Panel>
+      <Tabs.Panel value="review">
+        <Grid gap="md">
+          <Grid.Col span={{ base: 12, md: 7 }}>
+            <CommentsPanel
+              revisionId={revisionId}
+              canComment={canComment}
+              canResolve={canComment}
+              describe={describe}
+              onReveal={reveal}
+            />
+          </Grid.Col>
+          <Grid.Col span={{ base: 12, md: 5 }}>
+            <AttachmentsPanel
+              revisionId={revisionId}
+              canUpload={user.role !== 'viewer' && !frozen}
+            />
+          </Grid.Col>
+        </Grid>
+      </Tabs.Panel>
+    </Tabs>
+  );
+}

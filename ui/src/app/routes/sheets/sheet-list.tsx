@@ -1,0 +1,232 @@
+import { useEffect, useMemo, useState } from 'react';
+import {
+  Button,
+  Group,
+  Pagination,
+  Paper,
+  SegmentedControl,
+  Select,
+  Skeleton,
+  Stack,
+  Text,
+  TextInput,
+} from '@mantine/core';
+import { useDebouncedValue } from '@mantine/hooks';
+import { IconPlus, IconSearch } from '@tabler/icons-react';
+import type { QueryClient } from '@tanstack/react-query';
+import { useNavigate, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import {
+  revisionStates,
+  sheetTypeIds,
+  type RevisionState,
+  type SheetTypeId,
+} from '@holdfast/shared';
+import { Page } from '../../../components/layouts/page';
+import { ErrorPanel } from '../../../components/errors/error-panel';
+import type { RouteHandle } from '../../../lib/route-handle';
+import { useCurrentUser } from '../../../lib/session';
+import { sheetTypeTitle } from '../../../features/calc/utils/sheet-types';
+import { useRegister } from '../../../features/register/api/get-register';
+import { sheetsQueryOptions, useSheets } from '../../../features/sheets/api/get-sheets';
+import type { SheetListParams } from '../../../features/sheets/api/sheet-keys';
+import { CreateSheetDialog } from '../../../features/sheets/components/create-sheet-dialog';
+import { SheetsTable, type SortKey } from '../../../features/sheets/components/sheets-table';
+import { stateLabel } from '../../../features/sheets/components/state-badge';
+import { positionGroups } from './position-groups';
+
+export const handle: RouteHandle = { title: 'Sheets', wide: true };
+
+const PAGE_SIZE = 25;
+
+export function paramsFrom(search: URLSearchParams): SheetListParams {
+  const get = (k: string) => search.get(k) || undefined;
+  return {
+    q: get('q'),
+    state: get('state') as RevisionState | undefined,
+    siteId: get('siteId'),
+    machineId: get('machineId'),
+    sheetType: get('sheetType') as SheetTypeId | undefined,
+    ownerId: get('ownerId'),
+    page: Number(get('page') ?? 1),
+    pageSize: PAGE_SIZE,
+    sort: (get('sort') as SortKey | undefined) ?? 'documentNumber',
+    order: (get('order') as 'asc' | 'desc' | undefined) ?? 'asc',
+  };
+}
+
+export function clientLoader(queryClient: QueryClient) {
+  return async ({ request }: LoaderFunctionArgs) => {
+    await queryClient.ensureQueryData(
+      sheetsQueryOptions(paramsFrom(new URL(request.url).searchParams)),
+    );
+    return null;
+  };
+}
+
+export function Component() {
+  const user = useCurrentUser();
+  const navigate = useNavigate();
+  const [search, setSearch] = useSearchParams();
+  const params = paramsFrom(search);
+  const sheets = useSheets(params);
+  const register = useRegister();
+  const [text, setText] = useState(params.q ?? '');
+  const [debounced] = useDebouncedValue(text, 300);
+  const [createOpen, setCreateOpen] = useState(false);
+
+  const set = (patch: Record<string, string | undefined>) =>
+    setSearch((prev) => {
+      const next = new URLSearchParams(prev);
+      for (const [k, v] of Object.entries(patch)) {
+        if (v) next.set(k, v);
+        else next.delete(k);
+      }
+      if (!('page' in patch)) next.delete('page');
+      return next;
+    });
+
+  useEffect(() => {
+    if ((debounced || undefined) !== params.q) set({ q: debounced || undefined });
+    // Only the debounced text drives the URL.
+  }, [debounced]); // eslint-disable-line react-hooks/exhaustive-deps
+
+  const sites = register.data?.sites ?? [];
+  const machines = useMemo(
+    () =>
+      sites
+        .filter((s) => !params.siteId || s.id === params.siteId)
+        .flatMap((s) => s.machines.map((m) => ({ value: m.id, label: `${m.tag} — ${m.name}` }))),
+    [sites, params.siteId],
+  );
+  const canCreate = user.role === 'engineer' || user.role === 'checker';
+  const onSort = (key: SortKey) =>
+    set({ sort: key, order: params.sort === key && params.order === 'asc' ? 'desc' : 'asc' });
+
+  return (
+    <Page
+      title="Sheets"
+      description="Every calculation sheet, by document number. Filter, sort, or start a new one."
+      actions={
+        canCreate ? (
+          <Button
+            leftSection={<IconPlus size={16} aria-hidden />}
+            onClick={() => setCreateOpen(true)}
+          >
+            New sheet
+          </Button>
+        ) : null
+      }
+    >
+      <Paper p="sm">
+        <Group gap="sm" align="flex-end" wrap="wrap">
+          <TextInput
+            label="Search"
+            placeholder="Number, title or tag"
+            leftSection={<IconSearch size={14} aria-hidden />}
+            value={text}
+            onChange={(e) => setText(e.currentTarget.value)}
+            w={220}
+          />
+          <Select
+            label="State"
+            placeholder="Any"
+            clearable
+            w={140}
+            data={revisionStates.map((s) => ({ value: s, label: stateLabel(s) }))}
+            value={params.state ?? null}
+            onChange={(v) => set({ state: v ?? undefined })}
+          />
+          <Select
+            label="Site"
+            placeholder="Any"
+            clearable
+            w={170}
+            data={sites.map((s) => ({ value: s.id, label: `${s.code} — ${s.name}` }))}
+            value={params.siteId ?? null}
+            onChange={(v) => set({ siteId: v ?? undefined, machineId: undefined })}
+          />
+          <Select
+            label="Equipment"
+            placeholder="Any"
+            clearable
+            searchable
+            w={200}
+            data={machines}
+            value={params.machineId ?? null}
+            onChange={(v) => set({ machineId: v ?? undefined })}
+          />
+          <Select
+            label="Sheet type"
+            placeholder="Any"
+            clearable
+            w={190}
+            data={sheetTypeIds.map((id) => ({ value: id, label: sheetTypeTitle(id) }))}
+            value={params.sheetType ?? null}
+            onChange={(v) => set({ sheetType: v ?? undefined })}
+          />
+          <Stack gap={2}>
+            <Text size="sm" fw={500} id="owner-filter">
+              Owner
+            </Text>
+            <SegmentedControl
+              aria-labelledby="owner-filter"
+              size="sm"
+              value={params.ownerId === user.id ? 'me' : 'any'}
+              onChange={(v) => set({ ownerId: v === 'me' ? user.id : undefined })}
+              data={[
+                { value: 'any', label: 'Anyone' },
+                { value: 'me', label: 'Me' },
+              ]}
+            />
+          </Stack>
+        </Group>
+      </Paper>
+      <Paper p={0}>
+        {sheets.isPending ? (
+          <Stack p="sm" gap="xs">
+            {Array.from({ length: 6 }, (_, i) => (
+              <Skeleton key={i} h={32} />
+            ))}
+          </Stack>
+        ) : sheets.isError ? (
+          <ErrorPanel error={sheets.error} onRetry={() => void sheets.refetch()} />
+        ) : sheets.data.items.length === 0 ? (
+          <Text p="lg" c="dimmed">
+            No sheet matches these filters.
+          </Text>
+        ) : (
+          <SheetsTable
+            items={sheets.data.items}
+            sort={params.sort ?? 'documentNumber'}
+            order={params.order ?? 'asc'}
+            onSort={onSort}
+          />
+        )}
+      </Paper>
+      {sheets.data ? (
+        <Group justify="space-between">
+          <Text size="sm" c="dimmed" aria-live="polite">
+            {sheets.data.total} sheet{sheets.data.total === 1 ? '' : 's'}
+            {sheets.isFetching ? ' · updating…' : ''}
+          </Text>
+          <Pagination
+            total={Math.max(1, Math.ceil(sheets.data.total / PAGE_SIZE))}
+            value={params.page ?? 1}
+            onChange={(p) => set({ page: String(p) })}
+            size="sm"
+            aria-label="Pages"
+          />
+        </Group>
+      ) : null}
+      <CreateSheetDialog
+        opened={createOpen}
+        onClose={() => setCreateOpen(false)}
+        positions={positionGroups(sites)}
+        onCreated={(sheet) => {
+          setCreateOpen(false);
+          navigate(`/sheets/${sheet.id}`);
+        }}
+      />
+    </Page>
+  );
+}

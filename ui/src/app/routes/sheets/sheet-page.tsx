@@ -1,0 +1,131 @@
+import { useState } from 'react';
+import { Button, Grid, Paper, Skeleton, Stack, Text, Title } from '@mantine/core';
+import { IconArrowsDiff, IconCopyPlus } from '@tabler/icons-react';
+import type { QueryClient } from '@tanstack/react-query';
+import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import type { RevisionSummary, SheetDetail, User } from '@holdfast/shared';
+import { ErrorPanel } from '../../../components/errors/error-panel';
+import type { RouteHandle } from '../../../lib/route-handle';
+import { useCurrentUser } from '../../../lib/session';
+import { revisionQueryOptions } from '../../../features/revisions/api/get-revision';
+import { sheetQueryOptions, useSheet } from '../../../features/sheets/api/get-sheet';
+import { NewRevisionDialog } from '../../../features/sheets/components/new-revision-dialog';
+import { RevisionTimeline } from '../../../features/sheets/components/revision-timeline';
+import { RevisionView } from './revision-view';
+import { SheetHeader } from './sheet-header';
+
+export const handle: RouteHandle = { caution: true, wide: true, title: 'Sheet' };
+
+export function clientLoader(queryClient: QueryClient) {
+  return async ({ params }: LoaderFunctionArgs) => {
+    const sheet = await queryClient.ensureQueryData(sheetQueryOptions(params.sheetId!));
+    const revisionId = params.revisionId ?? sheet.latest.id;
+    void queryClient.prefetchQuery(revisionQueryOptions(revisionId));
+    return null;
+  };
+}
+
+const FROZEN = new Set(['approved', 'superseded']);
+
+/** What this user sees of the history: viewers only approved and superseded revisions. */
+export function visibleRevisions(sheet: SheetDetail, user: User): RevisionSummary[] {
+  return user.role === 'viewer'
+    ? sheet.revisions.filter((r) => FROZEN.has(r.state))
+    : sheet.revisions;
+}
+
+export function Component() {
+  const { sheetId = '', revisionId } = useParams();
+  const user = useCurrentUser();
+  const navigate = useNavigate();
+  const query = useSheet(sheetId);
+  const [newOpen, setNewOpen] = useState(false);
+
+  if (query.isPending) {
+    return (
+      <Stack>
+        <Skeleton h={110} />
+        <Skeleton h={420} />
+      </Stack>
+    );
+  }
+  if (query.isError) return <ErrorPanel error={query.error} onRetry={() => void query.refetch()} />;
+
+  const sheet = query.data;
+  const revisions = visibleRevisions(sheet, user);
+  const selectedId = revisionId ?? (user.role === 'viewer' ? sheet.approved?.id : sheet.latest.id);
+  const selected = revisions.find((r) => r.id === selectedId);
+  const index = revisions.findIndex((r) => r.id === selectedId);
+  const previous = index > 0 ? revisions[index - 1] : undefined;
+  const latest = sheet.revisions[sheet.revisions.length - 1];
+  const canStartRevision =
+    (user.role === 'engineer' || user.role === 'checker') &&
+    latest !== undefined &&
+    FROZEN.has(latest.state);
+
+  return (
+    <Stack gap="md">
+      <SheetHeader
+        sheet={sheet}
+        revision={selected}
+        actions={
+          <>
+            {previous && selected ? (
+              <Button
+                variant="default"
+                size="sm"
+                component={Link}
+                to={`/sheets/${sheet.id}/compare?from=${previous.id}&to=${selected.id}`}
+                leftSection={<IconArrowsDiff size={16} aria-hidden />}
+              >
+                Compare with {previous.label}
+              </Button>
+            ) : null}
+            {canStartRevision ? (
+              <Button
+                size="sm"
+                variant="light"
+                leftSection={<IconCopyPlus size={16} aria-hidden />}
+                onClick={() => setNewOpen(true)}
+              >
+                New revision
+              </Button>
+            ) : null}
+          </>
+        }
+      />
+      <Grid gap="md">
+        <Grid.Col span={{ base: 12, xl: 'auto' }} style={{ minWidth: 0 }}>
+          {selectedId && selected ? (
+            <RevisionView key={selectedId} revisionId={selectedId} user={user} />
+          ) : (
+            <Paper p="lg">
+              <Text>
+                {user.role === 'viewer'
+                  ? 'This sheet has no approved revision yet. Viewers see approved revisions only.'
+                  : 'This revision is not part of this sheet.'}
+              </Text>
+            </Paper>
+          )}
+        </Grid.Col>
+        <Grid.Col span={{ base: 12, xl: 'content' }} maw={{ xl: 280 }}>
+          <Paper p="md" component="aside" aria-labelledby="history-title">
+            <Title order={2} size="h5" id="history-title" mb="sm">
+              Revisions
+            </Title>
+            <RevisionTimeline sheetId={sheet.id} revisions={revisions} selectedId={selectedId} />
+          </Paper>
+        </Grid.Col>
+      </Grid>
+      <NewRevisionDialog
+        sheetId={sheet.id}
+        opened={newOpen}
+        onClose={() => setNewOpen(false)}
+        onCreated={(id) => {
+          setNewOpen(false);
+          navigate(`/sheets/${sheet.id}/revisions/${id}`);
+        }}
+      />
+    </Stack>
+  );
+}

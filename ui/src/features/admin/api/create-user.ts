@@ -1,0 +1,16 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { userSchema, type CreateUserInput, type User } from '@holdfast/shared';
+import { api } from '../../../lib/api-client';
+import { getUsersQueryOptions } from './get-users';
+
+export function createUser(input: CreateUserInput): Promise<User> {
+  return api.post('/users', { body: input, schema: userSchema });
+}
+
+export function useCreateUser() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: createUser,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: getUsersQueryOptions().queryKey }),
+  });
+}

@@ -1,0 +1,36 @@
+import type { Session, User } from '@holdfast/shared';
+
+export function makeUser(overrides: Partial<User> = {}): User {
+  return {
+    id: '6b1f0c1e-8a52-4c3e-9d7a-2f1e0b9c4a10',
+    email: 'engineer@holdfast.test',
+    displayName: 'Erin Vale',
+    initials: 'EV',
+    role: 'engineer',
+    active: true,
+    unitSystem: 'SI',
+    ...overrides,
+  };
+}
+
+export const testUsers = {
+  engineer: makeUser(),
+  admin: makeUser({
+    id: '0d6a3a7e-1c2b-4f5d-8e9a-7b6c5d4e3f21',
+    email: 'admin@holdfast.test',
+    displayName: 'Sam Ortiz',
+    initials: 'SO',
+    role: 'admin',
+  }),
+  viewer: makeUser({
+    id: '9c8b7a6d-5e4f-4a3b-8c2d-1e0f9a8b7c65',
+    email: 'viewer@holdfast.test',
+    displayName: 'Pia Novak',
+    initials: 'PN',
+    role: 'viewer',
+  }),
+} satisfies Record<string, User>;
+
+export function makeSession(user: User = testUsers.engineer, token = 'access-token-1'): Session {
+  return { accessToken: token, expiresIn: 900, user };
+}
