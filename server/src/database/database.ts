@@ -1,4 +1,4 @@
-import { Injectable, type OnModuleDestroy } from '@nestjs/common';
+import { Injectable, Logger, type OnModuleDestroy } from '@nestjs/common';
 import { Kysely, PostgresDialect } from 'kysely';
 import { createPool, databasePlugins, type DB } from '@holdfast/db';
 import { AppConfig } from '../config/app-config.js';
@@ -13,7 +13,10 @@ export class Database extends Kysely<DB> implements OnModuleDestroy {
   constructor(config: AppConfig) {
     super({
       dialect: new PostgresDialect({
-        pool: createPool({ connectionString: config.settings.DATABASE_URL }),
+        pool: createPool({
+          connectionString: config.settings.DATABASE_URL,
+          onIdleError: (error) => new Logger('Database').warn(`idle connection lost: ${error.message}`),
+        }),
       }),
       plugins: databasePlugins(),
     });
