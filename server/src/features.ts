@@ -2,6 +2,7 @@ import type { DynamicModule, Type } from '@nestjs/common';
 import { AuthModule } from './auth/auth.module.js';
 import { HealthModule } from './health/health.module.js';
 import { UsersModule } from './users/users.module.js';
+import { SheetFeatureModules } from './sheets/sheet-features.js';
 
 /**
  * Every feature module of the API. Add a new feature by appending its module here (one line);
@@ -11,4 +12,5 @@ export const featureModules: Array<Type<unknown> | DynamicModule> = [
   AuthModule,
   UsersModule,
   HealthModule,
+  ...SheetFeatureModules,
 ];

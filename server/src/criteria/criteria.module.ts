@@ -1,9 +1,12 @@
 import { Module } from '@nestjs/common';
+import { CriteriaController } from './criteria.controller.js';
 import { CriteriaRepository } from './criteria.repository.js';
 import { CriteriaService } from './criteria.service.js';
+import { ImpactService } from './impact.service.js';
 
 @Module({
-  providers: [CriteriaRepository, CriteriaService],
+  controllers: [CriteriaController],
+  providers: [CriteriaRepository, CriteriaService, ImpactService],
   exports: [CriteriaService, CriteriaRepository],
 })
 export class CriteriaModule {}

@@ -17,6 +17,7 @@ type Registry = {
   sheetTypes?: readonly SheetTypeDefinition[] | Record<string, SheetTypeDefinition>;
   criteriaSets?: readonly CriteriaSet[] | Record<string, CriteriaSet>;
   shippedCriteriaSets?: readonly CriteriaSet[] | Record<string, CriteriaSet>;
+  CRITERIA_SETS?: readonly CriteriaSet[];
   defaultCriteriaSetId?: string | ((sheetType: string) => string);
 };
 
@@ -42,7 +43,7 @@ export function sheetTypeDefinition(id: string): SheetTypeDefinition {
 
 /** The criteria sets shipped with the core (seeded as version 1 in the database). */
 export function shippedCriteriaSets(): CriteriaSet[] {
-  return asList(registry.criteriaSets ?? registry.shippedCriteriaSets);
+  return asList(registry.CRITERIA_SETS ?? registry.criteriaSets ?? registry.shippedCriteriaSets);
 }
 
 /** The criteria set a new sheet of this type uses unless the engineer picks another. */
@@ -52,7 +53,13 @@ export function defaultCriteriaSetId(sheetType: string): string {
   if (typeof d === 'string') return d;
   const sets = shippedCriteriaSets();
   if (sets.length === 0) throw new Error('the calculation core ships no criteria sets');
-  return sets[0].id;
+  // Hoist brakes to the hoist set, travel brakes to the travel set, the rest to the general one.
+  const prefer = sheetType.startsWith('hoist')
+    ? 'hoist'
+    : sheetType.startsWith('travel')
+      ? 'travel'
+      : 'general';
+  return (sets.find((s) => s.id.includes(prefer)) ?? sets[0]).id;
 }
 
 /** A fresh copy of a sheet type's default inputs. */

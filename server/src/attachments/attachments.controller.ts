@@ -1,0 +1,75 @@
+import {
+  Controller,
+  Get,
+  HttpCode,
+  Param,
+  Post,
+  Res,
+  StreamableFile,
+  UploadedFile,
+  UseInterceptors,
+} from '@nestjs/common';
+import { FileInterceptor } from '@nestjs/platform-express';
+import { ApiBearerAuth, ApiBody, ApiConsumes, ApiTags } from '@nestjs/swagger';
+import { MAX_ATTACHMENT_BYTES, type Attachment, type AttachmentList } from '@holdfast/shared';
+import type { Response } from 'express';
+import { memoryStorage } from 'multer';
+import { CurrentUser, type AuthUser } from '../auth/auth-user.js';
+import { Roles, SignedIn } from '../auth/policy.js';
+import { UuidParamPipe } from '../common/pipes/uuid-param.pipe.js';
+import { AttachmentsService } from './attachments.service.js';
+import { contentDisposition } from './sniff.js';
+
+@ApiTags('attachments')
+@ApiBearerAuth()
+@Controller()
+export class AttachmentsController {
+  constructor(private readonly attachments: AttachmentsService) {}
+
+  @Get('revisions/:id/attachments')
+  @SignedIn()
+  async list(
+    @CurrentUser() user: AuthUser,
+    @Param('id', UuidParamPipe) id: string,
+  ): Promise<AttachmentList> {
+    return { items: await this.attachments.list(user, id) };
+  }
+
+  @Post('revisions/:id/attachments')
+  @HttpCode(201)
+  @Roles('engineer')
+  @ApiConsumes('multipart/form-data')
+  @ApiBody({
+    schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' } } },
+  })
+  @UseInterceptors(
+    FileInterceptor('file', {
+      storage: memoryStorage(),
+      limits: { fileSize: MAX_ATTACHMENT_BYTES, files: 1 },
+    }),
+  )
+  upload(
+    @CurrentUser() user: AuthUser,
+    @Param('id', UuidParamPipe) id: string,
+    @UploadedFile() file: Express.Multer.File | undefined,
+  ): Promise<Attachment> {
+    return this.attachments.upload(user, id, file);
+  }
+
+  @Get('attachments/:id/download')
+  @SignedIn()
+  async download(
+    @CurrentUser() user: AuthUser,
+    @Param('id', UuidParamPipe) id: string,
+    @Res({ passthrough: true }) res: Response,
+  ): Promise<StreamableFile> {
+    const { attachment, bytes } = await this.attachments.download(user, id);
+    res.setHeader('X-Content-Type-Options', 'nosniff');
+    res.setHeader('X-Checksum-SHA256', attachment.sha256);
+    return new StreamableFile(bytes, {
+      type: attachment.contentType,
+      disposition: contentDisposition(attachment.fileName),
+      length: bytes.length,
+    });
+  }
+}

@@ -1,0 +1,162 @@
+import { createHash, randomUUID } from 'node:crypto';
+import { Injectable, Logger } from '@nestjs/common';
+import type { Attachment } from '@holdfast/shared';
+import type { AttachmentRow } from '@holdfast/db';
+import type { AuthUser } from '../auth/auth-user.js';
+import { ApiException, badRequest, notFound } from '../common/errors/api-exception.js';
+import { Database } from '../database/database.js';
+import { AuditService } from '../audit/audit.service.js';
+import { RevisionsRepository } from '../revisions/revisions.repository.js';
+import { RevisionsService } from '../revisions/revisions.service.js';
+import { ObjectStorage } from '../storage/object-storage.js';
+import { sanitizeFileName, sniffContentType } from './sniff.js';
+
+type People = Map<string, { id: string; displayName: string; initials: string }>;
+
+function toAttachment(r: AttachmentRow, people: People): Attachment {
+  return {
+    id: r.id,
+    revisionId: r.revisionId,
+    fileName: r.fileName,
+    contentType: r.contentType as Attachment['contentType'],
+    size: Number(r.size),
+    sha256: r.sha256,
+    uploadedBy: people.get(r.uploadedBy) ?? {
+      id: r.uploadedBy,
+      displayName: 'Unknown user',
+      initials: '??',
+    },
+    createdAt: r.createdAt.toISOString(),
+  };
+}
+
+export interface UploadedFile {
+  originalname: string;
+  buffer: Buffer;
+  size: number;
+}
+
+@Injectable()
+export class AttachmentsService {
+  private readonly logger = new Logger('Attachments');
+
+  constructor(
+    private readonly db: Database,
+    private readonly storage: ObjectStorage,
+    private readonly revisions: RevisionsService,
+    private readonly revisionsRepo: RevisionsRepository,
+    private readonly audit: AuditService,
+  ) {}
+
+  async list(user: AuthUser, revisionId: string): Promise<Attachment[]> {
+    await this.revisions.load(user, revisionId);
+    const rows = await this.db
+      .selectFrom('attachments')
+      .selectAll()
+      .where('revisionId', '=', revisionId)
+      .orderBy('createdAt', 'asc')
+      .execute();
+    const people = await this.revisionsRepo.people(rows.map((r) => r.uploadedBy));
+    return rows.map((r) => toAttachment(r, people));
+  }
+
+  /**
+   * Sniff, hash, store the object, then write the row in a transaction; if the row cannot be
+   * written the object is deleted again, so a failed upload leaves no half record.
+   */
+  async upload(
+    user: AuthUser,
+    revisionId: string,
+    file: UploadedFile | undefined,
+  ): Promise<Attachment> {
+    if (!file)
+      throw badRequest('Some fields are not valid.', [
+        { path: 'file', message: 'attach a file in the field "file"' },
+      ]);
+    const rev = await this.revisions.load(user, revisionId);
+    this.revisions.assertEditable(user, rev, rev.rowVersion);
+    const fileName = sanitizeFileName(file.originalname);
+    const contentType = sniffContentType(file.buffer, fileName);
+    if (!contentType) {
+      throw new ApiException(
+        415,
+        'unsupported_media_type',
+        'Only PDF, PNG, JPEG and plain text or CSV files are accepted (judged by their content).',
+        [{ path: 'file', message: 'content is not PDF, PNG, JPEG or UTF-8 text' }],
+      );
+    }
+    const sha256 = createHash('sha256').update(file.buffer).digest('hex');
+    const storageKey = `revisions/${revisionId}/${randomUUID()}`;
+    await this.storage.put(storageKey, file.buffer, contentType);
+    try {
+      const row = await this.db.transaction().execute(async (trx) => {
+        const created = await trx
+          .insertInto('attachments')
+          .values({
+            revisionId,
+            fileName,
+            contentType,
+            size: file.buffer.length,
+            sha256,
+            storageKey,
+            uploadedBy: user.id,
+          })
+          .returningAll()
+          .executeTakeFirstOrThrow();
+        await this.audit.record(trx, {
+          actorId: user.id,
+          action: 'attachment.uploaded',
+          entity: 'attachment',
+          entityId: created.id,
+          sheetId: rev.sheetId,
+          after: { revision: rev.label, fileName, contentType, size: file.buffer.length, sha256 },
+        });
+        return created;
+      });
+      return toAttachment(row, await this.revisionsRepo.people([user.id]));
+    } catch (e) {
+      await this.storage.delete(storageKey);
+      throw e;
+    }
+  }
+
+  /** The bytes, checked against the stored SHA-256. */
+  async download(user: AuthUser, id: string): Promise<{ attachment: Attachment; bytes: Buffer }> {
+    const row = await this.db
+      .selectFrom('attachments')
+      .selectAll()
+      .where('id', '=', id)
+      .executeTakeFirst();
+    if (!row) throw notFound('Attachment not found.');
+    await this.revisions.load(user, row.revisionId);
+    const bytes = await this.storage.get(row.storageKey);
+    if (!bytes) {
+      this.logger.error(`attachment ${id}: object ${row.storageKey} is missing from storage`);
+      throw new ApiException(
+        500,
+        'internal_error',
+        'The stored file is missing. It has been logged.',
+        undefined,
+        {
+          reason: 'object_missing',
+        },
+      );
+    }
+    const actual = createHash('sha256').update(bytes).digest('hex');
+    if (actual !== row.sha256) {
+      this.logger.error(
+        `attachment ${id}: checksum mismatch (stored ${row.sha256}, read ${actual})`,
+      );
+      throw new ApiException(
+        500,
+        'internal_error',
+        'The stored file does not match its checksum. It has been logged.',
+        undefined,
+        {
+          reason: 'checksum_mismatch',
+        },
+      );
+    }
+    return { attachment: toAttachment(row, new Map()), bytes };
+  }
+}

@@ -1,0 +1,65 @@
+import { Body, Controller, Get, HttpCode, Param, Post, Query } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import {
+  criteriaVersionQuerySchema,
+  publishCriteriaVersionSchema,
+  type CriteriaSetDetail,
+  type CriteriaSetList,
+  type ImpactReport,
+  type PublishCriteriaVersionInput,
+} from '@holdfast/shared';
+import { z } from 'zod';
+import { CurrentUser, type AuthUser } from '../auth/auth-user.js';
+import { Roles, SignedIn } from '../auth/policy.js';
+import { ApiBodySchema } from '../common/openapi.js';
+import { ZodValidationPipe } from '../common/pipes/zod-validation.pipe.js';
+import { CriteriaService } from './criteria.service.js';
+import { ImpactService } from './impact.service.js';
+
+const setId = z.string().regex(/^[a-z0-9][a-z0-9._-]{0,79}$/i, 'not a criteria-set id');
+
+@ApiTags('criteria-sets')
+@ApiBearerAuth()
+@Controller('criteria-sets')
+export class CriteriaController {
+  constructor(
+    private readonly criteria: CriteriaService,
+    private readonly impactService: ImpactService,
+  ) {}
+
+  @Get()
+  @SignedIn()
+  async list(): Promise<CriteriaSetList> {
+    return { items: await this.criteria.list() };
+  }
+
+  @Get(':id')
+  @SignedIn()
+  detail(
+    @Param('id', new ZodValidationPipe(setId, 'id')) id: string,
+    @Query(new ZodValidationPipe(criteriaVersionQuerySchema, 'query')) query: { version?: number },
+  ): Promise<CriteriaSetDetail> {
+    return this.criteria.detail(id, query.version);
+  }
+
+  @Post(':id/versions')
+  @HttpCode(201)
+  @Roles('admin')
+  @ApiBodySchema(publishCriteriaVersionSchema)
+  publish(
+    @CurrentUser() user: AuthUser,
+    @Param('id', new ZodValidationPipe(setId, 'id')) id: string,
+    @Body(new ZodValidationPipe(publishCriteriaVersionSchema)) input: PublishCriteriaVersionInput,
+  ): Promise<CriteriaSetDetail> {
+    return this.criteria.publish(user.id, id, input);
+  }
+
+  @Get(':id/impact')
+  @Roles('admin', 'checker')
+  impact(
+    @Param('id', new ZodValidationPipe(setId, 'id')) id: string,
+    @Query(new ZodValidationPipe(criteriaVersionQuerySchema, 'query')) query: { version?: number },
+  ): Promise<ImpactReport> {
+    return this.impactService.impact(id, query.version);
+  }
+}

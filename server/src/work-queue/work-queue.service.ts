@@ -1,0 +1,83 @@
+import { Injectable } from '@nestjs/common';
+import type { QueueItem, WorkQueue } from '@holdfast/shared';
+import type { AuthUser } from '../auth/auth-user.js';
+import { effectiveRoles } from '../auth/policy.js';
+import { Database } from '../database/database.js';
+
+const LIMIT = 50;
+
+@Injectable()
+export class WorkQueueService {
+  constructor(private readonly db: Database) {}
+
+  private base() {
+    return this.db
+      .selectFrom('revisions as r')
+      .innerJoin('sheets as s', 's.id', 'r.sheetId')
+      .innerJoin('users as a', 'a.id', 'r.authorId')
+      .select([
+        's.id as sheetId',
+        's.documentNumber',
+        's.title',
+        'r.id as revisionId',
+        'r.label',
+        'r.state',
+        'r.updatedAt',
+        'a.id as authorId',
+        'a.displayName',
+        'a.initials',
+      ])
+      .limit(LIMIT);
+  }
+
+  private map(
+    rows: Awaited<ReturnType<ReturnType<WorkQueueService['base']>['execute']>>,
+  ): QueueItem[] {
+    return rows.map((r) => ({
+      sheetId: r.sheetId,
+      documentNumber: r.documentNumber,
+      title: r.title,
+      revisionId: r.revisionId,
+      revisionLabel: r.label,
+      state: r.state as QueueItem['state'],
+      author: { id: r.authorId, displayName: r.displayName, initials: r.initials },
+      updatedAt: r.updatedAt.toISOString(),
+    }));
+  }
+
+  /** Drafts and returned revisions I author or whose sheet I own; checks waiting for me. */
+  async forUser(user: AuthUser): Promise<WorkQueue> {
+    const mine = (q: ReturnType<WorkQueueService['base']>) =>
+      q.where((eb) => eb.or([eb('r.authorId', '=', user.id), eb('s.ownerId', '=', user.id)]));
+    const isChecker = effectiveRoles(user.role).includes('checker');
+    const [myDrafts, returnedToMe, awaitingMyCheck, recentlyApproved] = await Promise.all([
+      mine(this.base()).where('r.state', '=', 'draft').orderBy('r.updatedAt', 'desc').execute(),
+      mine(this.base()).where('r.state', '=', 'returned').orderBy('r.returnedAt', 'desc').execute(),
+      isChecker
+        ? this.base()
+            .where('r.state', '=', 'in_check')
+            .where('r.authorId', '<>', user.id)
+            .orderBy('r.submittedAt', 'asc')
+            .execute()
+        : Promise.resolve([]),
+      this.base()
+        .where('r.state', '=', 'approved')
+        .where((eb) =>
+          eb.or([
+            eb('r.authorId', '=', user.id),
+            eb('s.ownerId', '=', user.id),
+            eb('r.checkerId', '=', user.id),
+          ]),
+        )
+        .orderBy('r.approvedAt', 'desc')
+        .limit(10)
+        .execute(),
+    ]);
+    return {
+      myDrafts: this.map(myDrafts),
+      returnedToMe: this.map(returnedToMe),
+      awaitingMyCheck: this.map(awaitingMyCheck),
+      recentlyApproved: this.map(recentlyApproved),
+    };
+  }
+}

@@ -1,0 +1,201 @@
+// Shared set-up of the sheets e2e suites: SMTP capture, embedded S3, the register and helpers.
+// @ts-expect-error smtp-server ships no types; only its constructor and listen/close are used.
+import { SMTPServer } from 'smtp-server';
+import { expect } from 'vitest';
+import { CriteriaService } from '../src/criteria/criteria.service.js';
+import { createTestContext, type DemoLogin, type TestContext } from './test-context.js';
+
+export interface CapturedMail {
+  to: string[];
+  raw: string;
+}
+
+export interface SmtpFake {
+  port: number;
+  mails: CapturedMail[];
+  stop(): Promise<void>;
+  start(): Promise<void>;
+}
+
+/** smtp-server on 127.0.0.1 capturing every message; stop/start keep the same port. */
+export async function startSmtpFake(port = 0): Promise<SmtpFake> {
+  const mails: CapturedMail[] = [];
+  let server: { listen: Function; close: Function } | undefined;
+  let bound = port;
+  const start = async () => {
+    server = new SMTPServer({
+      authOptional: true,
+      disabledCommands: ['STARTTLS', 'AUTH'],
+      logger: false,
+      onData(
+        stream: NodeJS.ReadableStream,
+        session: { envelope: { rcptTo: { address: string }[] } },
+        cb: () => void,
+      ) {
+        const chunks: Buffer[] = [];
+        stream.on('data', (c: Buffer) => chunks.push(c));
+        stream.on('end', () => {
+          mails.push({
+            to: session.envelope.rcptTo.map((r) => r.address),
+            raw: Buffer.concat(chunks).toString('utf8'),
+          });
+          cb();
+        });
+      },
+    });
+    await new Promise<void>((resolve, reject) => {
+      const s = server as unknown as { server: import('node:net').Server; listen: Function };
+      s.listen(bound, '127.0.0.1', () => resolve());
+      s.server.once('error', reject);
+    });
+    bound = (
+      (server as unknown as { server: import('node:net').Server }).server.address() as {
+        port: number;
+      }
+    ).port;
+  };
+  await start();
+  return {
+    get port() {
+      return bound;
+    },
+    mails,
+    start,
+    stop: () =>
+      new Promise<void>((resolve) => (server ? server.close(() => resolve()) : resolve())),
+  };
+}
+
+export interface SheetsContext extends TestContext {
+  smtp: SmtpFake;
+  /** reset() plus the shipped criteria sets again. */
+  resetAll(): Promise<void>;
+  closeAll(): Promise<void>;
+}
+
+/** The real app with embedded S3 (random port) and mail to a capturing SMTP fake. */
+export async function createSheetsContext(
+  extraEnv: Record<string, string> = {},
+): Promise<SheetsContext> {
+  const smtp = await startSmtpFake();
+  Object.assign(process.env, {
+    S3_EMBEDDED: '1',
+    S3_PORT: '0',
+    S3_BUCKET: 'holdfast-test',
+    SMTP_HOST: '127.0.0.1',
+    SMTP_PORT: String(smtp.port),
+    MAIL_EMBEDDED: '0',
+    MAIL_RETRY_DELAY_SECONDS: '1',
+    MAIL_RETRY_LIMIT: '20',
+    OUTBOX_POLL_SECONDS: '0.5',
+    PUBLIC_URL: 'http://holdfast.test',
+    ...extraEnv,
+  });
+  const ctx = await createTestContext({ env: { PUBLIC_URL: 'http://holdfast.test' } });
+  const criteria = ctx.app.get(CriteriaService);
+  await criteria.onModuleInit();
+  return Object.assign(ctx, {
+    smtp,
+    async resetAll() {
+      await ctx.reset();
+      await criteria.onModuleInit();
+      smtp.mails.length = 0;
+    },
+    async closeAll() {
+      await ctx.close();
+      await smtp.stop();
+    },
+  });
+}
+
+export interface Register {
+  siteId: string;
+  machineId: string;
+  positionId: string;
+}
+
+export async function makeRegister(ctx: TestContext, code = 'TST'): Promise<Register> {
+  const site = await ctx.request('POST', '/api/register/sites', {
+    as: 'engineer',
+    body: { code, name: 'Test works' },
+  });
+  expect(site.status, site.text).toBe(201);
+  const machine = await ctx.request('POST', '/api/register/machines', {
+    as: 'engineer',
+    body: { siteId: site.body.id, tag: 'CR-01', name: 'Ladle crane', kind: 'crane' },
+  });
+  expect(machine.status, machine.text).toBe(201);
+  const position = await ctx.request('POST', '/api/register/positions', {
+    as: 'engineer',
+    body: {
+      machineId: machine.body.id,
+      tag: 'MH-B1',
+      description: 'Main hoist brake 1',
+      motion: 'hoist',
+    },
+  });
+  expect(position.status, position.text).toBe(201);
+  return { siteId: site.body.id, machineId: machine.body.id, positionId: position.body.id };
+}
+
+export async function createSheet(
+  ctx: TestContext,
+  reg: Register,
+  opts: { as?: DemoLogin; sheetType?: string; title?: string } = {},
+) {
+  const res = await ctx.request('POST', '/api/sheets', {
+    as: opts.as ?? 'engineer',
+    body: {
+      title: opts.title ?? 'Main hoist brake',
+      positionId: reg.positionId,
+      sheetType: opts.sheetType ?? 'hoist-shoe-brake',
+    },
+  });
+  expect(res.status, res.text).toBe(201);
+  return res.body as {
+    id: string;
+    documentNumber: string;
+    revisions: { id: string; label: string; state: string }[];
+  };
+}
+
+export async function getRevision(ctx: TestContext, id: string, as: DemoLogin = 'engineer') {
+  const res = await ctx.request('GET', `/api/revisions/${id}`, { as });
+  expect(res.status, res.text).toBe(200);
+  return res.body;
+}
+
+/** Submit with a justification when checks fail, so flows do not depend on the defaults passing. */
+export async function submit(ctx: TestContext, id: string, as: DemoLogin = 'engineer') {
+  const rev = await getRevision(ctx, id, as);
+  const res = await ctx.request('POST', `/api/revisions/${id}/submit`, {
+    as,
+    body: { rowVersion: rev.rowVersion, justification: 'Test justification.' },
+  });
+  expect(res.status, res.text).toBe(200);
+  return res.body;
+}
+
+export async function approve(ctx: TestContext, id: string, as: DemoLogin = 'checker') {
+  const rev = await getRevision(ctx, id, as);
+  const res = await ctx.request('POST', `/api/revisions/${id}/approve`, {
+    as,
+    body: { rowVersion: rev.rowVersion },
+  });
+  expect(res.status, res.text).toBe(200);
+  return res.body;
+}
+
+export async function waitFor<T>(
+  fn: () => T | undefined | false,
+  timeoutMs = 15000,
+  stepMs = 100,
+): Promise<T> {
+  const start = Date.now();
+  for (;;) {
+    const v = fn();
+    if (v) return v;
+    if (Date.now() - start > timeoutMs) throw new Error('timed out waiting');
+    await new Promise((r) => setTimeout(r, stepMs));
+  }
+}
