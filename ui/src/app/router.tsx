@@ -32,6 +32,11 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
           lazy: lazyRoute(() => import('./routes/auth/sign-in'), queryClient),
         },
         {
+          // Public: checking a printout needs no sign-in.
+          path: 'verify/:code?',
+          lazy: lazyRoute(() => import('./routes/verify/verify-page'), queryClient),
+        },
+        {
           id: 'frame',
           Component: AppFrame,
           loader: requireSession,

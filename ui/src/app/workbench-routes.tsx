@@ -19,10 +19,8 @@ import {
   IconScale,
 } from '@tabler/icons-react';
 import type { QueryClient } from '@tanstack/react-query';
-import { Page } from '../components/layouts/page';
-import { PlaceholderPanel } from '../components/placeholder-panel';
+import { lazyRoute, type RouteModule } from '../lib/lazy-route';
 import type { NavItem } from '../lib/nav-item';
-import type { RouteHandle } from '../lib/route-handle';
 
 /** Links in the frame's "Workbench" navigation group, in order. */
 export const workbenchNav: NavItem[] = [
@@ -32,48 +30,16 @@ export const workbenchNav: NavItem[] = [
   { label: 'Criteria sets', to: '/criteria', icon: IconScale },
 ];
 
-function placeholder(title: string, description: string) {
-  return function Placeholder() {
-    return (
-      <Page title={title} description={description}>
-        <PlaceholderPanel />
-      </Page>
-    );
-  };
-}
-
-const calc: RouteHandle = { caution: true };
-
 // The query client is passed in for the route modules' clientLoader.
-export function workbenchRoutes(_queryClient: QueryClient): RouteObject[] {
+export function workbenchRoutes(queryClient: QueryClient): RouteObject[] {
+  const lazy = (load: () => Promise<RouteModule>) => lazyRoute(load, queryClient);
   return [
-    {
-      index: true,
-      handle: { title: 'Work queue' } satisfies RouteHandle,
-      Component: placeholder(
-        'Work queue',
-        'Your drafts, sheets returned to you and checks waiting.',
-      ),
-    },
-    {
-      path: 'sheets',
-      handle: { title: 'Sheets' } satisfies RouteHandle,
-      Component: placeholder('Sheets', 'Every calculation sheet, searchable and filterable.'),
-    },
-    {
-      path: 'sheets/:sheetId',
-      handle: { ...calc, title: 'Sheet' } satisfies RouteHandle,
-      Component: placeholder('Sheet', 'Revisions, inputs, results and review.'),
-    },
-    {
-      path: 'equipment',
-      handle: { title: 'Equipment' } satisfies RouteHandle,
-      Component: placeholder('Equipment', 'Sites, machines and brake positions.'),
-    },
-    {
-      path: 'criteria',
-      handle: { title: 'Criteria sets' } satisfies RouteHandle,
-      Component: placeholder('Criteria sets', 'The acceptance limits the checks use.'),
-    },
+    { index: true, lazy: lazy(() => import('./routes/queue/work-queue')) },
+    { path: 'sheets', lazy: lazy(() => import('./routes/sheets/sheet-list')) },
+    { path: 'sheets/:sheetId', lazy: lazy(() => import('./routes/sheets/sheet-page')) },
+    { path: 'sheets/:sheetId/revisions/:revisionId', lazy: lazy(() => import('./routes/sheets/sheet-page')) },
+    { path: 'sheets/:sheetId/compare', lazy: lazy(() => import('./routes/sheets/compare-page')) },
+    { path: 'equipment', lazy: lazy(() => import('./routes/equipment/equipment')) },
+    { path: 'criteria', lazy: lazy(() => import('./routes/criteria/criteria')) },
   ];
 }

@@ -8,6 +8,7 @@ export async function downloadAttachment(id: string, fallbackName: string): Prom
 
 export function useDownloadAttachment() {
   return useMutation({
-    mutationFn: ({ id, fileName }: { id: string; fileName: string }) => downloadAttachment(id, fileName),
+    mutationFn: ({ id, fileName }: { id: string; fileName: string }) =>
+      downloadAttachment(id, fileName),
   });
 }

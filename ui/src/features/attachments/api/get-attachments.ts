@@ -2,7 +2,8 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { attachmentListSchema, type AttachmentList } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
 
-export const attachmentsKey = (revisionId: string) => ['revisions', 'detail', revisionId, 'attachments'] as const;
+export const attachmentsKey = (revisionId: string) =>
+  ['revisions', 'detail', revisionId, 'attachments'] as const;
 
 export function getAttachments(revisionId: string, signal?: AbortSignal): Promise<AttachmentList> {
   return api.get(`/revisions/${revisionId}/attachments`, { schema: attachmentListSchema, signal });

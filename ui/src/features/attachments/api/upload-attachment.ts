@@ -10,7 +10,10 @@ export function uploadAttachment(
 ): Promise<Attachment> {
   const form = new FormData();
   form.append('file', file, file.name);
-  return apiUpload(`/revisions/${revisionId}/attachments`, form, { schema: attachmentSchema, onProgress });
+  return apiUpload(`/revisions/${revisionId}/attachments`, form, {
+    schema: attachmentSchema,
+    onProgress,
+  });
 }
 
 export function useUploadAttachment(revisionId: string) {
@@ -18,6 +21,7 @@ export function useUploadAttachment(revisionId: string) {
   return useMutation({
     mutationFn: ({ file, onProgress }: { file: File; onProgress?: (p: UploadProgress) => void }) =>
       uploadAttachment(revisionId, file, onProgress),
-    onSettled: () => queryClient.invalidateQueries({ queryKey: attachmentsQueryOptions(revisionId).queryKey }),
+    onSettled: () =>
+      queryClient.invalidateQueries({ queryKey: attachmentsQueryOptions(revisionId).queryKey }),
   });
 }

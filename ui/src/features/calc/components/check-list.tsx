@@ -17,26 +17,48 @@ export function CheckList({ checks, unitSystem, renderCheckAside }: CheckListPro
   return (
     <Stack gap="xs" component="ul" p={0} m={0} style={{ listStyle: 'none' }} aria-label="Checks">
       {checks.map((check) => (
-        <CheckRow key={check.id} check={check} unitSystem={unitSystem} aside={renderCheckAside?.(check.id)} />
+        <CheckRow
+          key={check.id}
+          check={check}
+          unitSystem={unitSystem}
+          aside={renderCheckAside?.(check.id)}
+        />
       ))}
     </Stack>
   );
 }
 
-function CheckRow({ check, unitSystem, aside }: { check: CheckResult; unitSystem: UnitSystem; aside?: ReactNode }) {
+function CheckRow({
+  check,
+  unitSystem,
+  aside,
+}: {
+  check: CheckResult;
+  unitSystem: UnitSystem;
+  aside?: ReactNode;
+}) {
   const dim = check.dimension as Dimension;
   const value = presentSI(check.value, dim, unitSystem);
   const limit = presentSI(check.limit, dim, unitSystem);
   const relation = check.kind === 'max' ? '≤' : '≥';
   return (
-    <Paper component="li" p="sm" data-check={check.id} data-pass={check.pass} aria-label={`${check.label}: ${check.pass ? 'pass' : 'fail'}`}>
+    <Paper
+      component="li"
+      p="sm"
+      data-check={check.id}
+      data-pass={check.pass}
+      aria-label={`${check.label}: ${check.pass ? 'pass' : 'fail'}`}
+    >
       <Group justify="space-between" wrap="nowrap" align="flex-start" gap="sm">
         <Stack gap={2} style={{ minWidth: 0 }}>
           <Text fw={600} size="sm">
             {check.label}
           </Text>
           <Text size="sm" ff="monospace">
-            {value.text} <Text span c="dimmed" ff="monospace">{relation} {limit.text} {check.kind === 'max' ? 'allowed' : 'required'}</Text>
+            {value.text}{' '}
+            <Text span c="dimmed" ff="monospace">
+              {relation} {limit.text} {check.kind === 'max' ? 'allowed' : 'required'}
+            </Text>
           </Text>
         </Stack>
         <Group gap={6} wrap="nowrap">

@@ -13,8 +13,16 @@ export interface DerivationListProps {
 }
 
 /** Every derivation step by section; each opens to its formula, substitution and reference. */
-export function DerivationList({ steps, sections, unitSystem, renderStepAside }: DerivationListProps) {
-  const order = sectionOrder(sections, steps.map((s) => s.section));
+export function DerivationList({
+  steps,
+  sections,
+  unitSystem,
+  renderStepAside,
+}: DerivationListProps) {
+  const order = sectionOrder(
+    sections,
+    steps.map((s) => s.section),
+  );
   return (
     <Stack gap="xs">
       {order.map((section) => {
@@ -27,7 +35,12 @@ export function DerivationList({ steps, sections, unitSystem, renderStepAside }:
             </Title>
             <Stack gap={2}>
               {list.map((step) => (
-                <StepRow key={step.id} step={step} unitSystem={unitSystem} aside={renderStepAside?.(step.id)} />
+                <StepRow
+                  key={step.id}
+                  step={step}
+                  unitSystem={unitSystem}
+                  aside={renderStepAside?.(step.id)}
+                />
               ))}
             </Stack>
           </div>
@@ -37,7 +50,15 @@ export function DerivationList({ steps, sections, unitSystem, renderStepAside }:
   );
 }
 
-function StepRow({ step, unitSystem, aside }: { step: DerivationStep; unitSystem: UnitSystem; aside?: ReactNode }) {
+function StepRow({
+  step,
+  unitSystem,
+  aside,
+}: {
+  step: DerivationStep;
+  unitSystem: UnitSystem;
+  aside?: ReactNode;
+}) {
   const [open, setOpen] = useState(false);
   const result = presentSI(step.value, step.dimension as Dimension, unitSystem);
   const bodyId = `step-body-${step.id}`;
@@ -55,7 +76,11 @@ function StepRow({ step, unitSystem, aside }: { step: DerivationStep; unitSystem
             <IconChevronRight
               size={14}
               aria-hidden
-              style={{ transform: open ? 'rotate(90deg)' : undefined, transition: 'transform 120ms', flexShrink: 0 }}
+              style={{
+                transform: open ? 'rotate(90deg)' : undefined,
+                transition: 'transform 120ms',
+                flexShrink: 0,
+              }}
             />
             <Text size="sm" style={{ flex: 1, minWidth: 0 }} truncate>
               {step.label}

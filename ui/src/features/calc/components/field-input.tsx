@@ -34,14 +34,22 @@ function FieldLabel({ field }: { field: FieldDefinition }) {
 }
 
 /** One input of a sheet type, drawn by its kind: quantity, number, choice or flag. */
-export function FieldInput({ field, value, onChange, unitSystem, error, readOnly }: FieldInputProps) {
+export function FieldInput({
+  field,
+  value,
+  onChange,
+  unitSystem,
+  error,
+  readOnly,
+}: FieldInputProps) {
   const id = fieldDomId(field.key);
   const label: ReactNode = <FieldLabel field={field} />;
   const set = (v: InputValue) => onChange(field.key, v);
 
   if (field.kind === 'quantity' && field.dimension) {
     const fallback =
-      (unitSystem === 'US' ? field.unitUS : field.unitSI) ?? defaultUnit(field.dimension, unitSystem);
+      (unitSystem === 'US' ? field.unitUS : field.unitSI) ??
+      defaultUnit(field.dimension, unitSystem);
     return (
       <UnitField
         id={id}

@@ -3,7 +3,13 @@ import type { Dimension, SheetEvaluation } from '@holdfast/calc';
 import { presentSI, type UnitSystem } from '../utils/units';
 
 /** The numbers the field team sets and measures, and the setting tables. */
-export function FieldSettingsView({ evaluation, unitSystem }: { evaluation: SheetEvaluation; unitSystem: UnitSystem }) {
+export function FieldSettingsView({
+  evaluation,
+  unitSystem,
+}: {
+  evaluation: SheetEvaluation;
+  unitSystem: UnitSystem;
+}) {
   const { fieldSettings, tables } = evaluation;
   if (fieldSettings.length === 0 && tables.length === 0) {
     return <Text c="dimmed">No field settings for this sheet type.</Text>;
@@ -57,7 +63,10 @@ export function FieldSettingsView({ evaluation, unitSystem }: { evaluation: Shee
                   <Table.Tr key={i}>
                     {heads.map((c) => (
                       <Table.Td key={c.key} ff="monospace" ta="right">
-                        {presentSI(row[c.key] ?? Number.NaN, c.dimension as Dimension, unitSystem).number}
+                        {
+                          presentSI(row[c.key] ?? Number.NaN, c.dimension as Dimension, unitSystem)
+                            .number
+                        }
                       </Table.Td>
                     ))}
                   </Table.Tr>

@@ -18,14 +18,27 @@ export interface InputSectionsProps {
 
 /** The sheet type's inputs, grouped by its sections in their declared order. */
 export function InputSections(props: InputSectionsProps) {
-  const { sheetType, inputs, onChange, unitSystem, errors = {}, readOnly, renderFieldAside } = props;
+  const {
+    sheetType,
+    inputs,
+    onChange,
+    unitSystem,
+    errors = {},
+    readOnly,
+    renderFieldAside,
+  } = props;
   return (
     <Stack gap="md">
       {sheetType.sections.map((section) => {
         const fields = sheetType.fields.filter((f) => f.section === section.id);
         if (fields.length === 0) return null;
         return (
-          <Paper key={section.id} p="md" component="section" aria-labelledby={`section-${section.id}`}>
+          <Paper
+            key={section.id}
+            p="md"
+            component="section"
+            aria-labelledby={`section-${section.id}`}
+          >
             <Title order={3} size="h5" mb="sm" id={`section-${section.id}`}>
               {section.title}
             </Title>

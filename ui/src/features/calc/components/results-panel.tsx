@@ -1,5 +1,17 @@
 import { lazy, Suspense, type ReactNode } from 'react';
-import { Alert, Badge, Box, Group, List, Paper, Skeleton, Stack, Tabs, Text, Title } from '@mantine/core';
+import {
+  Alert,
+  Badge,
+  Box,
+  Group,
+  List,
+  Paper,
+  Skeleton,
+  Stack,
+  Tabs,
+  Text,
+  Title,
+} from '@mantine/core';
 import { IconAlertTriangle, IconBolt } from '@tabler/icons-react';
 import type { SectionDefinition, SheetEvaluation } from '@holdfast/calc';
 import { CheckList } from './check-list';
@@ -29,11 +41,26 @@ export interface ResultsPanelProps {
 
 /** Checks, results, derivation, charts and field settings of one evaluation, in tabs. */
 export function ResultsPanel(props: ResultsPanelProps) {
-  const { evaluation, stale, sections, unitSystem, durationMs, origin, failure, invalidCount = 0 } = props;
+  const {
+    evaluation,
+    stale,
+    sections,
+    unitSystem,
+    durationMs,
+    origin,
+    failure,
+    invalidCount = 0,
+  } = props;
   const shown = evaluation ?? stale ?? null;
   const failing = shown ? shown.checks.filter((c) => !c.pass).length : 0;
   return (
-    <Paper p="md" component="section" aria-labelledby="results-title" aria-live="polite" aria-busy={false}>
+    <Paper
+      p="md"
+      component="section"
+      aria-labelledby="results-title"
+      aria-live="polite"
+      aria-busy={false}
+    >
       <Group justify="space-between" mb="xs" wrap="nowrap">
         <Title order={2} size="h4" id="results-title">
           Results
@@ -45,24 +72,44 @@ export function ResultsPanel(props: ResultsPanelProps) {
           {origin}
         </Text>
         {durationMs !== undefined ? (
-          <Badge variant="outline" color="gray" size="sm" leftSection={<IconBolt size={12} aria-hidden />} data-testid="recalc-time">
+          <Badge
+            variant="outline"
+            color="gray"
+            size="sm"
+            leftSection={<IconBolt size={12} aria-hidden />}
+            data-testid="recalc-time"
+          >
             {durationMs.toFixed(1)} ms
           </Badge>
         ) : null}
         {shown ? (
           <Text size="xs" c="dimmed">
-            {shown.checks.length - failing} of {shown.checks.length} checks pass · core {shown.coreVersion}
+            {shown.checks.length - failing} of {shown.checks.length} checks pass · core{' '}
+            {shown.coreVersion}
           </Text>
         ) : null}
       </Group>
       {invalidCount > 0 ? (
-        <Alert color="amber" variant="light" icon={<IconAlertTriangle size={18} />} mb="sm" title="Some inputs need attention">
-          {invalidCount === 1 ? 'One input is' : `${invalidCount} inputs are`} not valid (marked beside the field).
+        <Alert
+          color="amber"
+          variant="light"
+          icon={<IconAlertTriangle size={18} />}
+          mb="sm"
+          title="Some inputs need attention"
+        >
+          {invalidCount === 1 ? 'One input is' : `${invalidCount} inputs are`} not valid (marked
+          beside the field).
           {stale ? ' The results below are from the last valid inputs.' : ''}
         </Alert>
       ) : null}
       {failure ? (
-        <Alert color="fail" variant="light" icon={<IconAlertTriangle size={18} />} mb="sm" title="The calculation stopped">
+        <Alert
+          color="fail"
+          variant="light"
+          icon={<IconAlertTriangle size={18} />}
+          mb="sm"
+          title="The calculation stopped"
+        >
           {failure}
         </Alert>
       ) : null}
@@ -92,7 +139,11 @@ export function ResultsPanel(props: ResultsPanelProps) {
               <Tabs.Tab value="field">Field settings</Tabs.Tab>
             </Tabs.List>
             <Tabs.Panel value="checks">
-              <CheckList checks={shown.checks} unitSystem={unitSystem} renderCheckAside={props.renderCheckAside} />
+              <CheckList
+                checks={shown.checks}
+                unitSystem={unitSystem}
+                renderCheckAside={props.renderCheckAside}
+              />
             </Tabs.Panel>
             <Tabs.Panel value="results">
               <ResultsTable results={shown.results} sections={sections} unitSystem={unitSystem} />

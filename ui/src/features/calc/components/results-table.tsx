@@ -11,7 +11,10 @@ export interface ResultsTableProps {
 
 /** Named results by section, each number with its unit in the chosen system. */
 export function ResultsTable({ results, sections, unitSystem }: ResultsTableProps) {
-  const order = sectionOrder(sections, results.map((r) => r.section));
+  const order = sectionOrder(
+    sections,
+    results.map((r) => r.section),
+  );
   return (
     <>
       {order.map((section) => {
@@ -53,7 +56,10 @@ export function ResultsTable({ results, sections, unitSystem }: ResultsTableProp
 /** Sections in the type's order, then any section only the results name. */
 export function sectionOrder(sections: SectionDefinition[], used: string[]): SectionDefinition[] {
   const known = new Set(sections.map((s) => s.id));
-  const extra = [...new Set(used.filter((id) => !known.has(id)))].map((id) => ({ id, title: titleCase(id) }));
+  const extra = [...new Set(used.filter((id) => !known.has(id)))].map((id) => ({
+    id,
+    title: titleCase(id),
+  }));
   return [...sections, ...extra];
 }
 

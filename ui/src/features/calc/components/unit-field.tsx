@@ -103,7 +103,9 @@ export function UnitField(props: UnitFieldProps) {
       onChange={(e) => handleUnit(e.currentTarget.value)}
       variant="unstyled"
       size="xs"
-      styles={{ input: { fontWeight: 500, paddingInlineStart: 6, paddingInlineEnd: 18, textAlign: 'right' } }}
+      styles={{
+        input: { fontWeight: 500, paddingInlineStart: 6, paddingInlineEnd: 18, textAlign: 'right' },
+      }}
     />
   );
 

@@ -13,7 +13,10 @@ export interface DisplayChart {
   markers: { x: number; y: number; label: string }[];
 }
 
-function converter(dimension: string, system: UnitSystem): { convert: (v: number) => number; unit: string } {
+function converter(
+  dimension: string,
+  system: UnitSystem,
+): { convert: (v: number) => number; unit: string } {
   try {
     const probe = toDisplay(0, dimension as Dimension, system);
     return {
@@ -60,7 +63,11 @@ export function toDisplayChart(chart: ChartData, system: UnitSystem): DisplayCha
       label: `${l.label}: ${presentSI(l.value, (l.axis === 'x' ? chart.xDimension : chart.yDimension) as Dimension, system).text}`,
       value: l.axis === 'x' ? x.convert(l.value) : y.convert(l.value),
     })),
-    markers: (chart.markers ?? []).map((m) => ({ label: m.label, x: x.convert(m.x), y: y.convert(m.y) })),
+    markers: (chart.markers ?? []).map((m) => ({
+      label: m.label,
+      x: x.convert(m.x),
+      y: y.convert(m.y),
+    })),
   };
 }
 

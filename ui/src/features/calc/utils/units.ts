@@ -46,7 +46,11 @@ export function roundSig(value: number, digits = 6): number {
 }
 
 /** Converts a quantity into another unit of the same dimension; undefined when it cannot. */
-export function convertQuantity(q: Quantity, unit: string, dimension: Dimension): Quantity | undefined {
+export function convertQuantity(
+  q: Quantity,
+  unit: string,
+  dimension: Dimension,
+): Quantity | undefined {
   try {
     return { value: roundSig(fromSI(toSI(q.value, q.unit, dimension), unit, dimension)), unit };
   } catch {

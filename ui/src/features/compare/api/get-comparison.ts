@@ -6,8 +6,17 @@ import { api } from '../../../lib/api-client';
 export const comparisonKey = (sheetId: string, from: string, to: string) =>
   ['sheets', 'detail', sheetId, 'compare', from, to] as const;
 
-export function getComparison(sheetId: string, from: string, to: string, signal?: AbortSignal): Promise<Compare> {
-  return api.get(`/sheets/${sheetId}/compare`, { query: { from, to }, schema: compareSchema, signal });
+export function getComparison(
+  sheetId: string,
+  from: string,
+  to: string,
+  signal?: AbortSignal,
+): Promise<Compare> {
+  return api.get(`/sheets/${sheetId}/compare`, {
+    query: { from, to },
+    schema: compareSchema,
+    signal,
+  });
 }
 
 export function comparisonQueryOptions(sheetId: string, from: string, to: string) {

@@ -3,8 +3,16 @@ import { impactReportSchema, type ImpactReport } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
 import { criteriaKeys } from './criteria-keys';
 
-export function getCriteriaImpact(id: string, version?: number, signal?: AbortSignal): Promise<ImpactReport> {
-  return api.get(`/criteria-sets/${encodeURIComponent(id)}/impact`, { query: { version }, schema: impactReportSchema, signal });
+export function getCriteriaImpact(
+  id: string,
+  version?: number,
+  signal?: AbortSignal,
+): Promise<ImpactReport> {
+  return api.get(`/criteria-sets/${encodeURIComponent(id)}/impact`, {
+    query: { version },
+    schema: impactReportSchema,
+    signal,
+  });
 }
 
 export function criteriaImpactQueryOptions(id: string, version?: number) {

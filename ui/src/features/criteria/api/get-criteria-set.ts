@@ -3,7 +3,11 @@ import { criteriaSetDetailSchema, type CriteriaSetDetail } from '@holdfast/share
 import { api } from '../../../lib/api-client';
 import { criteriaKeys } from './criteria-keys';
 
-export function getCriteriaSet(id: string, version?: number, signal?: AbortSignal): Promise<CriteriaSetDetail> {
+export function getCriteriaSet(
+  id: string,
+  version?: number,
+  signal?: AbortSignal,
+): Promise<CriteriaSetDetail> {
   return api.get(`/criteria-sets/${encodeURIComponent(id)}`, {
     query: { version },
     schema: criteriaSetDetailSchema,

@@ -8,7 +8,10 @@ export function getCriteriaSets(signal?: AbortSignal): Promise<CriteriaSetList> 
 }
 
 export function criteriaSetsQueryOptions() {
-  return queryOptions({ queryKey: criteriaKeys.list(), queryFn: ({ signal }) => getCriteriaSets(signal) });
+  return queryOptions({
+    queryKey: criteriaKeys.list(),
+    queryFn: ({ signal }) => getCriteriaSets(signal),
+  });
 }
 
 export function useCriteriaSets() {

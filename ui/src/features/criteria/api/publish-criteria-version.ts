@@ -1,10 +1,20 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { criteriaSetDetailSchema, type CriteriaSetDetail, type PublishCriteriaVersionInput } from '@holdfast/shared';
+import {
+  criteriaSetDetailSchema,
+  type CriteriaSetDetail,
+  type PublishCriteriaVersionInput,
+} from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
 import { criteriaKeys } from './criteria-keys';
 
-export function publishCriteriaVersion(id: string, input: PublishCriteriaVersionInput): Promise<CriteriaSetDetail> {
-  return api.post(`/criteria-sets/${encodeURIComponent(id)}/versions`, { body: input, schema: criteriaSetDetailSchema });
+export function publishCriteriaVersion(
+  id: string,
+  input: PublishCriteriaVersionInput,
+): Promise<CriteriaSetDetail> {
+  return api.post(`/criteria-sets/${encodeURIComponent(id)}/versions`, {
+    body: input,
+    schema: criteriaSetDetailSchema,
+  });
 }
 
 export function usePublishCriteriaVersion(id: string) {

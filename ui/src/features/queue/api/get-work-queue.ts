@@ -9,7 +9,10 @@ export function getWorkQueue(signal?: AbortSignal): Promise<WorkQueue> {
 }
 
 export function workQueueQueryOptions() {
-  return queryOptions({ queryKey: workQueueKeys.all, queryFn: ({ signal }) => getWorkQueue(signal) });
+  return queryOptions({
+    queryKey: workQueueKeys.all,
+    queryFn: ({ signal }) => getWorkQueue(signal),
+  });
 }
 
 export function useWorkQueue() {

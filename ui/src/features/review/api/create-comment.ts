@@ -11,6 +11,7 @@ export function useCreateComment(revisionId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: CreateCommentInput) => createComment(revisionId, input),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: commentsQueryOptions(revisionId).queryKey }),
+    onSuccess: () =>
+      queryClient.invalidateQueries({ queryKey: commentsQueryOptions(revisionId).queryKey }),
   });
 }

@@ -12,6 +12,7 @@ export function useResolveComment(revisionId: string) {
   return useMutation({
     mutationFn: ({ commentId, resolved }: { commentId: string; resolved: boolean }) =>
       resolveComment(commentId, resolved),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: commentsQueryOptions(revisionId).queryKey }),
+    onSuccess: () =>
+      queryClient.invalidateQueries({ queryKey: commentsQueryOptions(revisionId).queryKey }),
   });
 }

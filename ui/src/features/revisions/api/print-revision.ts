@@ -7,7 +7,11 @@ export type PrintKind = 'pdf' | 'field-card';
  * Fetches a revision's PDF (the sheet or the field setting card) with the access token and opens
  * it in a new tab. The tab is opened before the fetch so the browser counts it as the user's click.
  */
-export async function openPrint(revisionId: string, kind: PrintKind, paper: 'A4' | 'LETTER' = 'A4'): Promise<void> {
+export async function openPrint(
+  revisionId: string,
+  kind: PrintKind,
+  paper: 'A4' | 'LETTER' = 'A4',
+): Promise<void> {
   const tab = window.open('', '_blank');
   try {
     const file = await apiDownload(`/revisions/${revisionId}/${kind}`, { query: { paper } });
@@ -23,6 +27,7 @@ export async function openPrint(revisionId: string, kind: PrintKind, paper: 'A4'
 
 export function usePrintRevision(revisionId: string) {
   return useMutation({
-    mutationFn: ({ kind, paper }: { kind: PrintKind; paper?: 'A4' | 'LETTER' }) => openPrint(revisionId, kind, paper),
+    mutationFn: ({ kind, paper }: { kind: PrintKind; paper?: 'A4' | 'LETTER' }) =>
+      openPrint(revisionId, kind, paper),
   });
 }

@@ -15,7 +15,8 @@ export function useReturnRevision(id: string) {
     onSuccess: (revision) => {
       queryClient.setQueryData(revisionKeys.detail(id), revision);
       void queryClient.invalidateQueries({ queryKey: revisionKeys.comments(id) });
-      for (const key of staleAfterStateChange) void queryClient.invalidateQueries({ queryKey: key });
+      for (const key of staleAfterStateChange)
+        void queryClient.invalidateQueries({ queryKey: key });
     },
   });
 }

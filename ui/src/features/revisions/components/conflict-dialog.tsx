@@ -32,15 +32,21 @@ export function ConflictDialog({ opened, onTakeTheirs, onKeepMine }: ConflictDia
     >
       <Stack gap="md">
         <Text size="sm">
-          Someone (or you, in another tab) saved this draft after you opened it. Your latest edits are
-          still here but were not saved.
+          Someone (or you, in another tab) saved this draft after you opened it. Your latest edits
+          are still here but were not saved.
         </Text>
         <Text size="sm">
-          <strong>Load their version</strong> discards your unsaved edits. <strong>Keep mine</strong>{' '}
-          saves your inputs over theirs as a new save.
+          <strong>Load their version</strong> discards your unsaved edits.{' '}
+          <strong>Keep mine</strong> saves your inputs over theirs as a new save.
         </Text>
         <Group justify="flex-end">
-          <Button variant="default" loading={busy === 'theirs'} disabled={busy !== null} onClick={() => run('theirs')} data-autofocus>
+          <Button
+            variant="default"
+            loading={busy === 'theirs'}
+            disabled={busy !== null}
+            onClick={() => run('theirs')}
+            data-autofocus
+          >
             Load their version
           </Button>
           <Button loading={busy === 'mine'} disabled={busy !== null} onClick={() => run('mine')}>

@@ -1,5 +1,15 @@
 import type { ReactNode } from 'react';
-import { Alert, Box, Grid, Group, Paper, SegmentedControl, Stack, Text, TextInput } from '@mantine/core';
+import {
+  Alert,
+  Box,
+  Grid,
+  Group,
+  Paper,
+  SegmentedControl,
+  Stack,
+  Text,
+  TextInput,
+} from '@mantine/core';
 import { IconLock } from '@tabler/icons-react';
 import type { CriteriaSet, SheetEvaluation, SheetTypeDefinition } from '@holdfast/calc';
 import type { Revision } from '@holdfast/shared';
@@ -31,7 +41,8 @@ export interface RevisionWorkbenchProps {
 
 const READ_ONLY_REASON: Record<string, string> = {
   in_check: 'This revision is with a checker. It cannot be edited until it is returned.',
-  approved: 'This revision is approved and can never change. Start a new revision to make a change.',
+  approved:
+    'This revision is approved and can never change. Start a new revision to make a change.',
   superseded: 'This revision has been superseded by a later approval. It is kept as it was.',
 };
 
@@ -65,9 +76,15 @@ export function RevisionWorkbench(props: RevisionWorkbenchProps) {
                 { value: 'US', label: 'US customary' },
               ]}
             />
-            {editable ? <SaveStatusText status={autosave.status} lastSavedAt={autosave.lastSavedAt} /> : null}
+            {editable ? (
+              <SaveStatusText status={autosave.status} lastSavedAt={autosave.lastSavedAt} />
+            ) : null}
           </Group>
-          {props.renderActions?.({ flush: autosave.flush, evaluation: live.evaluation, hasInputErrors: invalidCount > 0 })}
+          {props.renderActions?.({
+            flush: autosave.flush,
+            evaluation: live.evaluation,
+            hasInputErrors: invalidCount > 0,
+          })}
         </Group>
         {autosave.status === 'error' && autosave.errorMessage ? (
           <Text size="xs" c="fail.8" mt={6} role="alert">
@@ -112,7 +129,11 @@ export function RevisionWorkbench(props: RevisionWorkbenchProps) {
               sections={sheetType.sections}
               unitSystem={unitSystem}
               durationMs={stored ? undefined : live.durationMs}
-              origin={stored ? `Stored at submission (${revision.coreVersion ?? 'core'})` : 'Recalculated live in your browser'}
+              origin={
+                stored
+                  ? `Stored at submission (${revision.coreVersion ?? 'core'})`
+                  : 'Recalculated live in your browser'
+              }
               failure={stored ? null : live.failure}
               invalidCount={stored ? 0 : invalidCount}
               renderCheckAside={props.renderCheckAside}
@@ -121,7 +142,11 @@ export function RevisionWorkbench(props: RevisionWorkbenchProps) {
           </Box>
         </Grid.Col>
       </Grid>
-      <ConflictDialog opened={autosave.status === 'conflict'} onTakeTheirs={draft.takeTheirs} onKeepMine={autosave.keepMine} />
+      <ConflictDialog
+        opened={autosave.status === 'conflict'}
+        onTakeTheirs={draft.takeTheirs}
+        onKeepMine={autosave.keepMine}
+      />
     </Stack>
   );
 }

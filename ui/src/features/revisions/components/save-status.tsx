@@ -11,7 +11,13 @@ const TEXT: Record<SaveStatus, string> = {
 };
 
 /** Where the draft stands against the server, in words. */
-export function SaveStatusText({ status, lastSavedAt }: { status: SaveStatus; lastSavedAt: Date | null }) {
+export function SaveStatusText({
+  status,
+  lastSavedAt,
+}: {
+  status: SaveStatus;
+  lastSavedAt: Date | null;
+}) {
   const icon =
     status === 'saving' ? (
       <Loader size={12} />

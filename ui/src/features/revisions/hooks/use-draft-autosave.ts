@@ -77,7 +77,8 @@ export function useDraftAutosave(revision: Revision, enabled: boolean): DraftAut
         } else {
           if (isApiRequestError(error) && error.fields.length > 0) {
             const map: Record<string, string> = {};
-            for (const f of error.fields) map[f.path.replace(/^inputs\./, '').split('.')[0]!] ??= f.message;
+            for (const f of error.fields)
+              map[f.path.replace(/^inputs\./, '').split('.')[0]!] ??= f.message;
             setServerErrors(map);
           }
           setErrorMessage(error instanceof Error ? error.message : 'The draft could not be saved.');

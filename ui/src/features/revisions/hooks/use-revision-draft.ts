@@ -49,7 +49,10 @@ export function useRevisionDraft(revision: Revision, sheetType: SheetTypeDefinit
     [apply],
   );
 
-  const setChangeNote = useCallback((changeNote: string) => apply({ ...contentRef.current, changeNote }), [apply]);
+  const setChangeNote = useCallback(
+    (changeNote: string) => apply({ ...contentRef.current, changeNote }),
+    [apply],
+  );
 
   /** Switches the sheet's units, converting each quantity to the new system's unit for its field. */
   const setUnitSystem = useCallback(
@@ -78,7 +81,11 @@ function fromRevision(revision: Revision, type: SheetTypeDefinition): DraftConte
   };
 }
 
-export function convertInputs(inputs: SheetInputs, type: SheetTypeDefinition, system: UnitSystem): SheetInputs {
+export function convertInputs(
+  inputs: SheetInputs,
+  type: SheetTypeDefinition,
+  system: UnitSystem,
+): SheetInputs {
   const out: SheetInputs = { ...inputs };
   for (const f of type.fields) {
     const v = inputs[f.key];

@@ -10,5 +10,6 @@ export const sheetKeys = {
   details: () => [...sheetKeys.all, 'detail'] as const,
   detail: (id: string) => [...sheetKeys.details(), id] as const,
   audit: (id: string) => [...sheetKeys.detail(id), 'audit'] as const,
-  compare: (id: string, from: string, to: string) => [...sheetKeys.detail(id), 'compare', from, to] as const,
+  compare: (id: string, from: string, to: string) =>
+    [...sheetKeys.detail(id), 'compare', from, to] as const,
 };

@@ -4,7 +4,11 @@ import { api } from '../../../lib/api-client';
 
 export function getVerification(code: string, signal?: AbortSignal): Promise<VerifyResult> {
   // Public: anyone holding a printout may check it, signed in or not.
-  return api.get(`/verify/${encodeURIComponent(code)}`, { schema: verifyResultSchema, signal, auth: false });
+  return api.get(`/verify/${encodeURIComponent(code)}`, {
+    schema: verifyResultSchema,
+    signal,
+    auth: false,
+  });
 }
 
 export function verificationQueryOptions(code: string) {

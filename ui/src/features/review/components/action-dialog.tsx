@@ -1,0 +1,95 @@
+import { useEffect, useState, type ReactNode } from 'react';
+import { Alert, Button, Group, Modal, Stack, Textarea } from '@mantine/core';
+import { errorMessage, isApiRequestError } from '../../../lib/api-client';
+
+export interface ActionDialogProps {
+  opened: boolean;
+  onClose: () => void;
+  title: string;
+  /** Explanation above the text box. */
+  intro: ReactNode;
+  textLabel: string;
+  textDescription?: string;
+  /** The server's field name for the text (errors on it are shown under the box). */
+  textField: string;
+  textRequired: boolean;
+  requiredMessage: string;
+  confirmLabel: string;
+  confirmColor?: string;
+  onConfirm: (text: string) => Promise<unknown>;
+}
+
+/**
+ * A confirm dialog with one text box (justification, approval note, return comment). Focus goes
+ * to the box on open and back to the button that opened it on close; server field errors land
+ * under the box, anything else above the buttons.
+ */
+export function ActionDialog(props: ActionDialogProps) {
+  const { opened, onClose, textRequired } = props;
+  const [text, setText] = useState('');
+  const [fieldError, setFieldError] = useState<string | null>(null);
+  const [formError, setFormError] = useState<string | null>(null);
+  const [busy, setBusy] = useState(false);
+
+  useEffect(() => {
+    if (opened) {
+      setText('');
+      setFieldError(null);
+      setFormError(null);
+    }
+  }, [opened]);
+
+  const confirm = async () => {
+    if (textRequired && !text.trim()) {
+      setFieldError(props.requiredMessage);
+      return;
+    }
+    setBusy(true);
+    setFieldError(null);
+    setFormError(null);
+    try {
+      await props.onConfirm(text.trim());
+      onClose();
+    } catch (error) {
+      const onField = isApiRequestError(error) ? error.fieldErrors()[props.textField] : undefined;
+      if (onField) setFieldError(onField);
+      else setFormError(errorMessage(error));
+    } finally {
+      setBusy(false);
+    }
+  };
+
+  return (
+    <Modal opened={opened} onClose={busy ? () => undefined : onClose} title={props.title} size="lg">
+      <Stack gap="md">
+        {props.intro}
+        <Textarea
+          label={props.textLabel}
+          description={props.textDescription}
+          required={textRequired}
+          autosize
+          minRows={3}
+          maxRows={10}
+          value={text}
+          onChange={(e) => setText(e.currentTarget.value)}
+          error={fieldError}
+          data-autofocus
+          maxLength={4000}
+        />
+        {formError ? (
+          <Alert color="fail" variant="light" role="alert">
+            {formError}
+          </Alert>
+        ) : null}
+        <Group justify="flex-end">
+          <Button variant="default" onClick={onClose} disabled={busy}>
+            Cancel
+          </Button>
+          <Button color={props.confirmColor} onClick={() => void confirm()} loading={busy}>
+            {props.confirmLabel}
+          </Button>
+        </Group>
+      </Stack>
+    </Modal>
+  );
+}

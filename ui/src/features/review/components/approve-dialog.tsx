@@ -1,0 +1,46 @@
+import { Text } from '@mantine/core';
+import { ActionDialog } from './action-dialog';
+
+export interface ApproveDialogProps {
+  opened: boolean;
+  onClose: () => void;
+  revisionLabel: string;
+  openComments: number;
+  onApprove: (note: string | undefined) => Promise<unknown>;
+}
+
+export function ApproveDialog({
+  opened,
+  onClose,
+  revisionLabel,
+  openComments,
+  onApprove,
+}: ApproveDialogProps) {
+  return (
+    <ActionDialog
+      opened={opened}
+      onClose={onClose}
+      title={`Approve revision ${revisionLabel}`}
+      intro={
+        <>
+          <Text size="sm">
+            Approving signs this revision as checked. It can never change afterwards; the previously
+            approved revision of this sheet becomes superseded.
+          </Text>
+          {openComments > 0 ? (
+            <Text size="sm" c="amber.9" fw={500}>
+              {openComments === 1 ? 'One comment is' : `${openComments} comments are`} still open.
+            </Text>
+          ) : null}
+        </>
+      }
+      textLabel="Approval note (optional)"
+      textField="note"
+      textRequired={false}
+      requiredMessage=""
+      confirmLabel="Approve"
+      confirmColor="pass.8"
+      onConfirm={(text) => onApprove(text || undefined)}
+    />
+  );
+}

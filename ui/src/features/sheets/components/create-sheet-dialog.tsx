@@ -1,0 +1,107 @@
+import { useEffect, useState } from 'react';
+import { Button, Group, Modal, Select, Stack, TextInput } from '@mantine/core';
+import { createSheetSchema, sheetTypeIds, toFieldIssues, type SheetDetail } from '@holdfast/shared';
+import { errorMessage, isApiRequestError } from '../../../lib/api-client';
+import { sheetTypeTitle } from '../../calc/utils/sheet-types';
+import { useCreateSheet } from '../api/create-sheet';
+
+export interface PositionGroup {
+  group: string;
+  items: { value: string; label: string }[];
+}
+
+export interface CreateSheetDialogProps {
+  opened: boolean;
+  onClose: () => void;
+  positions: PositionGroup[];
+  onCreated: (sheet: SheetDetail) => void;
+}
+
+/** A new sheet for one brake position: revision A starts as a draft with the core's defaults. */
+export function CreateSheetDialog({
+  opened,
+  onClose,
+  positions,
+  onCreated,
+}: CreateSheetDialogProps) {
+  const [positionId, setPositionId] = useState<string | null>(null);
+  const [sheetType, setSheetType] = useState<string | null>('hoist-shoe-brake');
+  const [title, setTitle] = useState('');
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const create = useCreateSheet();
+
+  useEffect(() => {
+    if (opened) setErrors({});
+  }, [opened]);
+
+  const submit = () => {
+    const parsed = createSheetSchema.safeParse({
+      title,
+      positionId: positionId ?? '',
+      sheetType: sheetType ?? '',
+    });
+    if (!parsed.success) {
+      const map: Record<string, string> = {};
+      for (const issue of toFieldIssues(parsed.error))
+        map[issue.path] ??= issue.path === 'positionId' ? 'choose a brake position' : issue.message;
+      setErrors(map);
+      return;
+    }
+    setErrors({});
+    create.mutate(parsed.data, {
+      onSuccess: (sheet) => {
+        setTitle('');
+        onCreated(sheet);
+      },
+      onError: (e) => {
+        if (isApiRequestError(e) && e.fields.length > 0) setErrors(e.fieldErrors());
+        else setErrors({ form: errorMessage(e) });
+      },
+    });
+  };
+
+  return (
+    <Modal opened={opened} onClose={onClose} title="New calculation sheet" size="lg">
+      <Stack>
+        <Select
+          label="Brake position"
+          description="Site › machine › position, from the equipment register"
+          placeholder="Choose a position"
+          data={positions}
+          value={positionId}
+          onChange={setPositionId}
+          searchable
+          required
+          error={errors.positionId}
+          nothingFoundMessage="No position matches"
+          data-autofocus
+        />
+        <Select
+          label="Sheet type"
+          data={sheetTypeIds.map((id) => ({ value: id, label: sheetTypeTitle(id) }))}
+          value={sheetType}
+          onChange={setSheetType}
+          allowDeselect={false}
+          required
+          error={errors.sheetType}
+        />
+        <TextInput
+          label="Title"
+          placeholder="e.g. Main hoist service brake, heavier ladle"
+          value={title}
+          onChange={(e) => setTitle(e.currentTarget.value)}
+          required
+          error={errors.title ?? errors.form}
+        />
+        <Group justify="flex-end">
+          <Button variant="default" onClick={onClose}>
+            Cancel
+          </Button>
+          <Button onClick={submit} loading={create.isPending}>
+            Create sheet
+          </Button>
+        </Group>
+      </Stack>
+    </Modal>
+  );
+}
