@@ -2,6 +2,7 @@ import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
 import importX from 'eslint-plugin-import-x';
 import globals from 'globals';
+import reactHooks from 'eslint-plugin-react-hooks';
 
 // Dependency direction is one way: calc ← shared ← {server, ui}; db ← server; ui never imports server or db.
 const zones = [
@@ -23,6 +24,7 @@ export default tseslint.config(
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {
+    linterOptions: { reportUnusedDisableDirectives: 'off' },
     plugins: { 'import-x': importX },
     languageOptions: { globals: { ...globals.node, ...globals.browser } },
     rules: {
@@ -32,6 +34,11 @@ export default tseslint.config(
       '@typescript-eslint/no-empty-object-type': 'off',
       'no-empty': ['error', { allowEmptyCatch: true }],
     },
+  },
+  {
+    files: ['ui/**/*.{ts,tsx}'],
+    plugins: { 'react-hooks': reactHooks },
+    rules: { 'react-hooks/rules-of-hooks': 'error', 'react-hooks/exhaustive-deps': 'warn' },
   },
   ...Object.entries(packageBans).map(([ws, banned]) => ({
     files: [`${ws}/**/*.{ts,tsx,js,mjs}`],

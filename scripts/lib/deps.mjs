@@ -12,10 +12,17 @@ export async function ensureNpmDependencies(projectDir) {
   const stamp = path.join(projectDir, 'node_modules', '.holdfast-lock-sha256');
   if (existsSync(stamp) && readFileSync(stamp, 'utf8').trim() === want) return;
   step('installing npm dependencies (npm ci)…');
+  const ci = () => run('npm', ['ci', '--no-audit', '--no-fund', '--loglevel=error'], { cwd: projectDir });
   try {
-    await run('npm', ['ci', '--no-audit', '--no-fund', '--loglevel=error'], { cwd: projectDir });
-  } catch (e) {
-    fail(`npm ci failed: ${e.message}`);
+    await ci();
+  } catch {
+    // A cache folder still being written (ENOTEMPTY) or a registry hiccup: one more try.
+    step('npm ci failed once; trying again…');
+    try {
+      await ci();
+    } catch (e) {
+      fail(`npm ci failed: ${e.message}`);
+    }
   }
   writeFileSync(stamp, want);
 }
