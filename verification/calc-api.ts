@@ -1,12 +1,14 @@
 /**
- * The calculation-core functions the cases call. Units, quantities and disc springs come from the
- * package; the formula families are imported from the calc sources so that every case exercises
- * the same code the sheets use, whatever the package index exports.
+ * The calculation-core functions the cases call, imported from the calc sources (one module graph,
+ * so the branded quantity types agree and no stale dist can be verified by mistake).
  */
+export * as discSprings from '../calc/src/disc-springs/index.js';
+export { toSI, fromSI } from '../calc/src/units/conversion.js';
 export {
-  discSprings, toSI, fromSI, length, force, torque, power, speed, angularSpeed, mass, inertia,
-  pressure, energy, time, ratio, degrees, rpm, stiffness, specificHeat, angle,
-} from '@holdfast/calc';
+  length, force, torque, power, speed, angularSpeed, mass, inertia, pressure, energy, time, ratio,
+  degrees, rpm, stiffness, specificHeat, angle,
+} from '../calc/src/units/quantities.js';
+export { CORE_VERSION } from '../calc/src/version.js';
 export { shoeMomentCoefficients, shoeFromActuatingForce, actuatingForce } from '../calc/src/shoe-brake/general-shoe.js';
 export { pivotDistance, pivotedNormalForce, pivotedShoeTorque } from '../calc/src/shoe-brake/pivoted-shoe.js';
 export { shortShoeTorque } from '../calc/src/shoe-brake/short-shoe.js';

@@ -1,6 +1,6 @@
 import { writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
-import { CORE_VERSION } from '@holdfast/calc';
+import { CORE_VERSION } from './calc-api.js';
 import { describe, expect, it } from 'vitest';
 import { ALL_CASES } from './all-cases.js';
 import { checkCase } from './case.js';

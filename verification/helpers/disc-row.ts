@@ -1,4 +1,4 @@
-import { discSprings } from '@holdfast/calc';
+import { discSprings } from '../calc-api.js';
 import { defineCase, type Confidence, type VerificationCase } from '../case.js';
 
 const mm = 1e-3;

@@ -1,4 +1,4 @@
-import { discSprings } from '@holdfast/calc';
+import { discSprings } from '../../calc-api.js';
 import { defineCase } from '../../case.js';
 
 export const verificationCase = defineCase({

@@ -1,4 +1,4 @@
-import { discSprings, fromSI, toSI } from '@holdfast/calc';
+import { discSprings, fromSI, toSI } from '../../calc-api.js';
 import { defineCase } from '../../case.js';
 
 export const verificationCase = defineCase({
