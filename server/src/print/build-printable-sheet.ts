@@ -1,0 +1,174 @@
+import type { CriteriaSet, SheetEvaluation, SheetInputs, SheetTypeDefinition } from '@holdfast/calc';
+import { convertedText, enteredText } from './format.js';
+import type {
+  Paper,
+  PrintApproval,
+  PrintHistoryRow,
+  PrintPerson,
+  PrintRevisionState,
+  PrintableInput,
+  PrintableSheet,
+  PrintUnitSystem,
+} from './printable-sheet.js';
+
+type When = string | Date;
+/** The sheets API's PersonRef (only the printed fields are read). */
+export interface PersonRefLike {
+  displayName: string;
+  initials: string;
+}
+/** A RevisionSummary of the sheets API. */
+export interface RevisionSummaryLike {
+  label: string;
+  state: PrintRevisionState;
+  author: PersonRefLike;
+  checker: PersonRefLike | null;
+  changeNote: string | null;
+  createdAt: When;
+  approvedAt?: When | null;
+}
+/** The sheets API's Revision (only the printed fields are read). */
+export interface RevisionLike extends RevisionSummaryLike {
+  submittedAt: When | null;
+  inputs: SheetInputs;
+  unitSystem: PrintUnitSystem;
+  criteriaSetVersion: number;
+  evaluation: SheetEvaluation | null;
+  coreVersion: string | null;
+  verificationCode: string | null;
+  justification: string | null;
+  approvalNote?: string | null;
+  supersededBy: { label: string; at: When } | null;
+}
+export interface SheetLike {
+  documentNumber: string;
+  title: string;
+  purpose?: string | null;
+  site: { code: string; name: string };
+  machine: { tag: string; name: string };
+  position: { tag: string; description: string };
+  /** Every revision of the sheet; the history prints those up to the printed one. */
+  revisions: RevisionSummaryLike[];
+}
+export interface BuildPrintableOptions {
+  sheet: SheetLike;
+  revision: RevisionLike;
+  sheetType: Pick<SheetTypeDefinition, 'id' | 'title' | 'description' | 'sections' | 'fields'>;
+  criteriaSet: CriteriaSet;
+  /** Public base URL of Holdfast, e.g. 'https://holdfast.example.com'; the code is appended. */
+  verifyBaseUrl: string;
+  paper?: Paper;
+  generatedAt?: Date;
+  torqueReference?: string;
+  efficiencyTreatment?: string;
+}
+
+const iso = (w: When): string => (w instanceof Date ? w.toISOString() : w);
+const isoOrNull = (w: When | null | undefined): string | null => (w ? iso(w) : null);
+const person = (p: PersonRefLike): PrintPerson => ({ name: p.displayName, initials: p.initials });
+
+/** Orders revision labels A, B, … Z, AA, AB …: shorter first, then alphabetical. */
+export function compareLabels(a: string, b: string): number {
+  return a.length - b.length || a.localeCompare(b);
+}
+
+/** Builds the renderers' input from a revision, its sheet, the calc sheet type and criteria set. */
+export function buildPrintableSheet(o: BuildPrintableOptions): PrintableSheet {
+  const { sheet, revision: r, sheetType } = o;
+  const system = r.unitSystem;
+  const sectionTitle = new Map(sheetType.sections.map((x) => [x.id, x.title]));
+  const inputs: PrintableInput[] = sheetType.fields.map((field) => {
+    const value = r.inputs[field.key] ?? null;
+    return {
+      field,
+      sectionTitle: sectionTitle.get(field.section) ?? field.section,
+      value,
+      entered: enteredText(value, field),
+      converted: convertedText(value, field, system),
+    };
+  });
+  const approvals: PrintApproval[] = [
+    { role: 'Prepared', person: person(r.author), at: isoOrNull(r.submittedAt) },
+  ];
+  if (r.checker) {
+    approvals.push({
+      role: 'Checked and approved',
+      person: person(r.checker),
+      at: isoOrNull(r.approvedAt),
+      note: r.approvalNote ?? null,
+    });
+  }
+  const history: PrintHistoryRow[] = [...sheet.revisions]
+    .filter((x) => compareLabels(x.label, r.label) <= 0)
+    .sort((a, b) => compareLabels(a.label, b.label))
+    .map((x) => ({
+      label: x.label,
+      state: x.label === r.label ? r.state : x.state,
+      date: iso(x.approvedAt ?? x.createdAt),
+      changeNote: x.changeNote ?? '',
+      author: person(x.author),
+      checker: x.checker ? person(x.checker) : null,
+    }));
+  const base = o.verifyBaseUrl.replace(/\/+$/, '');
+  return {
+    documentNumber: sheet.documentNumber,
+    title: sheet.title,
+    purpose:
+      sheet.purpose ??
+      `To show that the ${sheetType.title.toLowerCase()} at position ${sheet.position.tag} ` +
+        `(${sheet.position.description}) of ${sheet.machine.tag} ${sheet.machine.name}, ` +
+        `${sheet.site.name}, meets the acceptance criteria of "${o.criteriaSet.name}" ` +
+        `version ${o.criteriaSet.version}, and to give the field team its settings.`,
+    site: sheet.site,
+    equipment: { tag: sheet.machine.tag, name: sheet.machine.name },
+    position: sheet.position,
+    sheetType: { id: sheetType.id, title: sheetType.title, description: sheetType.description },
+    revision: {
+      label: r.label,
+      state: r.state,
+      createdAt: iso(r.createdAt),
+      submittedAt: isoOrNull(r.submittedAt),
+      approvedAt: isoOrNull(r.approvedAt),
+    },
+    author: person(r.author),
+    checker: r.checker ? person(r.checker) : null,
+    approvals,
+    history,
+    changeNote: r.changeNote ?? '',
+    justification: r.justification,
+    sections: sheetType.sections,
+    inputs,
+    evaluation: r.evaluation,
+    criteria: {
+      id: o.criteriaSet.id,
+      version: o.criteriaSet.version,
+      name: o.criteriaSet.name,
+      values: o.criteriaSet.values,
+    },
+    designBasis: {
+      torqueReference: o.torqueReference ?? describeChoice(inputs, /torque.?(ref|basis)|reference/i),
+      efficiencyTreatment: o.efficiencyTreatment ?? describeEfficiencies(inputs),
+    },
+    coreVersion: r.coreVersion ?? r.evaluation?.coreVersion ?? null,
+    verification: r.verificationCode
+      ? { code: r.verificationCode, url: `${base}/verify/${r.verificationCode}` }
+      : null,
+    supersededBy: r.supersededBy
+      ? { label: r.supersededBy.label, date: iso(r.supersededBy.at) }
+      : null,
+    unitSystem: system,
+    paper: o.paper ?? 'A4',
+    generatedAt: (o.generatedAt ?? new Date()).toISOString(),
+  };
+}
+
+function describeChoice(inputs: PrintableInput[], key: RegExp): string {
+  const hit = inputs.find((i) => key.test(i.field.key) && i.field.kind === 'choice');
+  return hit ? `${hit.field.label}: ${hit.entered}` : 'Not applicable to this sheet type';
+}
+
+function describeEfficiencies(inputs: PrintableInput[]): string {
+  const etas = inputs.filter((i) => /efficien|eta/i.test(i.field.key));
+  if (etas.length === 0) return 'No efficiency enters this sheet type';
+  return etas.map((i) => `${i.field.label} ${i.field.symbol} = ${i.entered}`).join('; ');
+}

@@ -1,0 +1,152 @@
+import type { FieldSetting } from '@holdfast/calc';
+import { Document, Page, Text, View } from '@react-pdf/renderer';
+import { groupFieldSettings, type DiscStackSetup } from './field-card-groups.js';
+import { qty } from './format.js';
+import { Caution } from './parts/caution.js';
+import { SettingTable } from './parts/field-settings.js';
+import { Heading, Table } from './parts/table.js';
+import type { PrintableSheet, PrintUnitSystem } from './printable-sheet.js';
+import { Frame } from './sheet-document.js';
+import { colours, s } from './theme.js';
+
+const Box = (props: { h?: number }) => (
+  <View style={{ borderWidth: 0.8, borderColor: colours.ink, height: props.h ?? 13, backgroundColor: '#ffffff' }} />
+);
+
+/** Target values with empty boxes for what was measured and the setter's initials. */
+function SettingsWithBoxes(props: { items: FieldSetting[]; system: PrintUnitSystem }) {
+  return (
+    <Table
+      columns={[
+        { title: 'Setting', flex: 3 },
+        { title: 'Target', flex: 1.3, align: 'right' },
+        { title: 'Measured', flex: 1.3 },
+        { title: 'Initials', width: 44 },
+      ]}
+      rows={props.items.map((f) => [
+        f.note ? `${f.label} — ${f.note}` : f.label,
+        qty(f.value, f.dimension, props.system),
+        <Box key="m" />,
+        <Box key="i" />,
+      ])}
+    />
+  );
+}
+
+function DiscStack(props: { stack: DiscStackSetup; system: PrintUnitSystem }) {
+  const { stack, system } = props;
+  const q = (f: FieldSetting | null) => (f ? qty(f.value, f.dimension, system, f.dimension === 'angle' ? 3 : 4) : 'see sheet');
+  return (
+    <View wrap={false} style={{ marginBottom: 6 }}>
+      <Text style={{ fontWeight: 700 }}>{stack.name}</Text>
+      <Text>1. Tighten the nut until the disc-spring stack is just flat (solid); do not overtighten.</Text>
+      <Text>
+        2. Back off the nut by <Text style={{ fontWeight: 700 }}>{q(stack.backOff)}</Text> and lock it.
+      </Text>
+      <Text>
+        3. The stack then carries a preload of about <Text style={{ fontWeight: 700 }}>{q(stack.preload)}</Text>.
+      </Text>
+      {stack.others.length > 0 && <SettingsWithBoxes items={stack.others} system={system} />}
+      <View style={{ flexDirection: 'row', marginTop: 3, alignItems: 'center' }}>
+        <Text style={{ width: 150 }}>Back-off applied (measured):</Text>
+        <View style={{ width: 80 }}><Box /></View>
+        <Text style={{ width: 60, marginLeft: 10 }}>Initials:</Text>
+        <View style={{ width: 44 }}><Box /></View>
+      </View>
+    </View>
+  );
+}
+
+const AFTER_SETTING = [
+  'Released: no shoe drags on the drum or disc — check the clearance on both sides and feel the drum after a few minutes running.',
+  'Set and release the brake at least five times, then measure the spring length, the reserve stroke and the clearance again.',
+  'Set: the brake holds the test load the governing standard asks for; a hoist holds the load lifted just clear of the ground.',
+  'Guards refitted, tools removed, limit switches and brake monitoring working.',
+  'After running in (first shift, or the first few hundred operations): re-check reserve stroke, spring length and disc-spring preload.',
+];
+
+/** The field setting card: what to set, what to measure, where to record it. */
+export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | null }) {
+  const { sheet, qr } = props;
+  const system = sheet.unitSystem;
+  const ev = sheet.evaluation;
+  const g = ev ? groupFieldSettings(ev) : null;
+  return (
+    <Document title={`${sheet.documentNumber} rev ${sheet.revision.label} — field setting card`} creator="Holdfast" producer="Holdfast">
+      <Page size={sheet.paper} style={s.page}>
+        <Frame sheet={sheet} qr={qr} kind="Field setting card" />
+        <Text style={{ marginBottom: 2 }}>
+          Settings for {sheet.position.tag} {sheet.position.description} on {sheet.equipment.tag}{' '}
+          {sheet.equipment.name}, from calculation {sheet.documentNumber} rev {sheet.revision.label}.
+          Check the revision is current with the verification code before you start.
+        </Text>
+        <Caution extra={["Do not lift the brake or move its arms by the thruster push rod."]} />
+        {!g ? (
+          <Text>This revision has no evaluation, so there are no settings to print.</Text>
+        ) : (
+          <>
+            {(g.spring.length > 0 || g.springTables.length > 0) && (
+              <View>
+                <Heading>Main spring setting</Heading>
+                <SettingsWithBoxes items={g.spring} system={system} />
+                {g.springTables.map((t) => (
+                  <SettingTable key={t.id} table={t} system={system} />
+                ))}
+              </View>
+            )}
+            {(g.thruster.length > 0 || g.clearance.length > 0) && (
+              <View wrap={false}>
+                <Heading>Thruster stroke and shoe clearance</Heading>
+                <SettingsWithBoxes items={[...g.thruster, ...g.clearance]} system={system} />
+                <Text style={{ fontSize: 7.5 }}>
+                  Keep at least the minimum reserve stroke: when lining wear has used it up, re-adjust
+                  before the brake loses torque.
+                </Text>
+              </View>
+            )}
+            {g.discStacks.length > 0 && (
+              <View>
+                <Heading>Disc-spring stacks</Heading>
+                {g.discStacks.map((st) => (
+                  <DiscStack key={st.name} stack={st} system={system} />
+                ))}
+              </View>
+            )}
+            {g.other.length > 0 && (
+              <View>
+                <Heading>Other settings</Heading>
+                <SettingsWithBoxes items={g.other} system={system} />
+              </View>
+            )}
+            {g.otherTables.map((t) => (
+              <SettingTable key={t.id} table={t} system={system} />
+            ))}
+          </>
+        )}
+        <View wrap={false}>
+          <Heading>After setting</Heading>
+          {AFTER_SETTING.map((line) => (
+            <View key={line} style={{ flexDirection: 'row', marginBottom: 2 }}>
+              <View style={{ width: 8, height: 8, borderWidth: 0.8, borderColor: colours.ink, marginRight: 6, marginTop: 1 }} />
+              <Text style={{ flex: 1 }}>{line}</Text>
+            </View>
+          ))}
+        </View>
+        <View wrap={false}>
+          <Heading>Record</Heading>
+          <Table
+            columns={[
+              { title: 'Role', flex: 1.2 },
+              { title: 'Name', flex: 2 },
+              { title: 'Signature', flex: 2 },
+              { title: 'Date', flex: 1.2 },
+            ]}
+            rows={['Set by', 'Checked by'].map((role) => [role, <Box key="n" h={18} />, <Box key="s" h={18} />, <Box key="d" h={18} />])}
+          />
+          <Text style={{ fontSize: 7 }}>Remarks:</Text>
+          <Box h={40} />
+        </View>
+      </Page>
+    </Document>
+  );
+}

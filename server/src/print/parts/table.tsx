@@ -1,0 +1,112 @@
+import { Text, View } from '@react-pdf/renderer';
+import type { ReactNode } from 'react';
+import { colours, monoFont } from '../theme.js';
+
+export interface Column {
+  title: string;
+  /** Flex weight of the column's width. */
+  flex?: number;
+  /** Fixed width in pt (wins over flex). */
+  width?: number;
+  align?: 'left' | 'right' | 'center';
+  mono?: boolean;
+}
+
+type Cell = string | ReactNode;
+
+/**
+ * A ruled table whose rows never split across pages; the header row stays with at least
+ * the first rows, so a page never ends on a lone header.
+ */
+export function Table(props: { columns: Column[]; rows: Cell[][]; fontSize?: number }) {
+  const { columns, rows } = props;
+  const fontSize = props.fontSize ?? 7.8;
+  const box = (c: Column) =>
+    c.width !== undefined ? { width: c.width } : { flex: c.flex ?? 1 };
+  return (
+    <View style={{ borderTopWidth: 1, borderColor: colours.ink, marginBottom: 6 }}>
+      <View
+        wrap={false}
+        minPresenceAhead={36}
+        style={{ flexDirection: 'row', backgroundColor: colours.band, borderBottomWidth: 0.6, borderColor: colours.ink }}
+      >
+        {columns.map((c, i) => (
+          <Text
+            key={i}
+            style={{
+              ...box(c),
+              padding: 3,
+              fontSize: fontSize - 0.8,
+              fontWeight: 700,
+              textAlign: c.align ?? 'left',
+            }}
+          >
+            {c.title}
+          </Text>
+        ))}
+      </View>
+      {rows.map((row, r) => (
+        <View
+          key={r}
+          wrap={false}
+          style={{ flexDirection: 'row', borderBottomWidth: 0.4, borderColor: colours.rule }}
+        >
+          {row.map((cell, i) => {
+            const c = columns[i];
+            const style = {
+              ...box(c),
+              padding: 3,
+              fontSize,
+              textAlign: c.align ?? 'left',
+              ...(c.mono ? monoFont : {}),
+            } as const;
+            return typeof cell === 'string' ? (
+              <Text key={i} style={style}>
+                {cell}
+              </Text>
+            ) : (
+              <View key={i} style={{ ...box(c), padding: 2 }}>
+                {cell}
+              </View>
+            );
+          })}
+        </View>
+      ))}
+    </View>
+  );
+}
+
+/** A section heading that refuses to sit alone at the foot of a page. */
+export function Heading(props: { children: ReactNode; level?: 1 | 2; id?: string }) {
+  const level = props.level ?? 1;
+  return (
+    <Text
+      minPresenceAhead={60}
+      style={
+        level === 1
+          ? { fontSize: 11.5, fontWeight: 700, color: colours.accent, marginTop: 10, marginBottom: 4 }
+          : { fontSize: 9, fontWeight: 700, marginTop: 6, marginBottom: 3 }
+      }
+    >
+      {props.children}
+    </Text>
+  );
+}
+
+/** Coloured PASS / FAIL badge: the word carries the meaning, the colour only helps. */
+export function Verdict(props: { pass: boolean }) {
+  return (
+    <Text
+      style={{
+        fontSize: 7.5,
+        fontWeight: 700,
+        textAlign: 'center',
+        paddingVertical: 1,
+        color: props.pass ? colours.pass : colours.fail,
+        backgroundColor: props.pass ? colours.passBg : colours.failBg,
+      }}
+    >
+      {props.pass ? 'PASS' : 'FAIL'}
+    </Text>
+  );
+}
