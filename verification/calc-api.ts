@@ -30,3 +30,4 @@ export const IN = 0.0254;
 export const LBF = 4.4482216152605;
 export const PSI = LBF / (IN * IN);
 export const MM = 1e-3;
+export { discSpringStackSheet } from '../calc/src/sheets/disc-spring-stack.js';
