@@ -3,10 +3,11 @@ import { RevisionsModule } from '../revisions/revisions.module.js';
 import { StorageModule } from '../storage/storage.module.js';
 import { AttachmentsController } from './attachments.controller.js';
 import { AttachmentsService } from './attachments.service.js';
+import { DemoAttachments } from './demo-attachments.js';
 
 @Module({
   imports: [RevisionsModule, StorageModule],
   controllers: [AttachmentsController],
-  providers: [AttachmentsService],
+  providers: [AttachmentsService, DemoAttachments],
 })
 export class AttachmentsModule {}

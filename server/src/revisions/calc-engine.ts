@@ -34,16 +34,35 @@ export class UnknownSheetTypeError extends Error {
   }
 }
 
+// Until the registry is exported, any exported value shaped like a definition counts.
+const exported = Object.values(calc as Record<string, unknown>);
+const looseSheetTypes = exported.filter(
+  (v): v is SheetTypeDefinition =>
+    typeof v === 'object' && v !== null && 'evaluate' in v && 'fields' in v && 'id' in v,
+);
+const looseCriteriaSets = exported.filter(
+  (v): v is CriteriaSet =>
+    typeof v === 'object' &&
+    v !== null &&
+    'version' in v &&
+    'id' in v &&
+    Array.isArray((v as { values?: unknown }).values),
+);
+
 /** The sheet type definition, or an UnknownSheetTypeError. */
 export function sheetTypeDefinition(id: string): SheetTypeDefinition {
-  const found = registry.getSheetType?.(id) ?? asList(registry.sheetTypes).find((t) => t.id === id);
+  const found =
+    registry.getSheetType?.(id) ??
+    asList(registry.sheetTypes).find((t) => t.id === id) ??
+    looseSheetTypes.find((t) => t.id === id);
   if (!found) throw new UnknownSheetTypeError(id);
   return found;
 }
 
 /** The criteria sets shipped with the core (seeded as version 1 in the database). */
 export function shippedCriteriaSets(): CriteriaSet[] {
-  return asList(registry.CRITERIA_SETS ?? registry.criteriaSets ?? registry.shippedCriteriaSets);
+  const listed = asList(registry.CRITERIA_SETS ?? registry.criteriaSets ?? registry.shippedCriteriaSets);
+  return listed.length > 0 ? listed : looseCriteriaSets;
 }
 
 /** The criteria set a new sheet of this type uses unless the engineer picks another. */

@@ -1,0 +1,104 @@
+import { createHash, randomBytes } from 'node:crypto';
+import * as calc from '@holdfast/calc';
+import type {
+  CriteriaSet,
+  SheetEvaluation,
+  SheetInputs,
+  SheetTypeDefinition,
+} from '@holdfast/calc';
+import { canonicalJson } from '@holdfast/shared';
+
+// The demo evaluates every revision with the calc core, never with hard-coded numbers. Access
+// goes through the core's registry when exported, else through its exported definitions.
+type Registry = {
+  getSheetType?: (id: string) => SheetTypeDefinition | undefined;
+  CRITERIA_SETS?: readonly CriteriaSet[];
+};
+const registry = calc as unknown as Registry;
+const exported = Object.values(calc as Record<string, unknown>);
+
+export function sheetType(id: string): SheetTypeDefinition | undefined {
+  return (
+    registry.getSheetType?.(id) ??
+    exported.find(
+      (v): v is SheetTypeDefinition =>
+        typeof v === 'object' && v !== null && 'evaluate' in v && (v as { id?: unknown }).id === id,
+    )
+  );
+}
+
+export function shippedCriteriaSets(): CriteriaSet[] {
+  if (registry.CRITERIA_SETS?.length) return [...registry.CRITERIA_SETS];
+  return exported.filter(
+    (v): v is CriteriaSet =>
+      typeof v === 'object' &&
+      v !== null &&
+      'version' in v &&
+      Array.isArray((v as { values?: unknown }).values),
+  );
+}
+
+export function defaults(def: SheetTypeDefinition): SheetInputs {
+  return Object.fromEntries(
+    def.fields.map((f) => [f.key, structuredClone(f.default)]),
+  ) as SheetInputs;
+}
+
+/**
+ * Scale the n-th positive quantity input (within its bounds) so the demo sheets differ from one
+ * another while staying valid.
+ */
+export function vary(
+  def: SheetTypeDefinition,
+  inputs: SheetInputs,
+  n: number,
+  factor: number,
+): SheetInputs {
+  const fields = def.fields.filter((f) => f.kind === 'quantity');
+  if (fields.length === 0) return inputs;
+  const f = fields[n % fields.length];
+  const q = inputs[f.key];
+  if (typeof q !== 'object' || q === null) return inputs;
+  const out = structuredClone(inputs);
+  out[f.key] = { ...q, value: Math.round(q.value * factor * 1000) / 1000 };
+  try {
+    def.evaluate(structuredClone(out), shippedCriteriaSets()[0]);
+    return out;
+  } catch {
+    return inputs;
+  }
+}
+
+export function evaluate(
+  def: SheetTypeDefinition,
+  inputs: SheetInputs,
+  criteria: CriteriaSet,
+): SheetEvaluation {
+  return def.evaluate(structuredClone(inputs), criteria);
+}
+
+/** Same rule as the server: SHA-256 over canonical JSON of inputs and evaluation. */
+export function contentHash(inputs: unknown, evaluation: unknown): string {
+  return createHash('sha256').update(canonicalJson({ inputs, evaluation })).digest('hex');
+}
+
+const BASE32 = 'ABCDEFGHIJKLMNOPQRSTUVWXYZ234567';
+
+/** 10 base32 characters of SHA-256(hash + 16 random bytes), as the server makes them. */
+export function verificationCode(hash: string): string {
+  const digest = createHash('sha256').update(hash).update(randomBytes(16)).digest();
+  let bits = 0;
+  let value = 0;
+  let out = '';
+  for (const byte of digest) {
+    value = ((value << 8) | byte) & 0xffff;
+    bits += 8;
+    while (bits >= 5 && out.length < 10) {
+      out += BASE32[(value >>> (bits - 5)) & 31];
+      bits -= 5;
+    }
+  }
+  return out;
+}
+
+export const coreVersion = (): string => calc.CORE_VERSION;

@@ -1,0 +1,231 @@
+/**
+ * The invented demo plant. No real company, place, person or product: "Northgate Rolling Works"
+ * and everything in it are made up for the demonstration.
+ */
+export const demoSite = { code: 'NRW', name: 'Northgate Rolling Works (demo)' };
+
+export const demoMachines = [
+  {
+    tag: 'LC-1',
+    name: 'Ladle crane 1, melt shop',
+    kind: 'crane',
+    positions: [
+      { tag: 'MH-B1', description: 'Main hoist, brake 1 (high-speed shaft)', motion: 'hoist' },
+      { tag: 'MH-B2', description: 'Main hoist, brake 2 (high-speed shaft)', motion: 'hoist' },
+      { tag: 'AH-B1', description: 'Auxiliary hoist brake', motion: 'auxiliary-hoist' },
+    ],
+  },
+  {
+    tag: 'SB-2',
+    name: 'Scrap bay crane 2',
+    kind: 'crane',
+    positions: [
+      { tag: 'TR-B1', description: 'Trolley travel brake', motion: 'trolley' },
+      { tag: 'BR-B1', description: 'Bridge travel brake, drive side', motion: 'bridge' },
+    ],
+  },
+  {
+    tag: 'CC-4',
+    name: 'Coil conveyor 4',
+    kind: 'conveyor',
+    positions: [{ tag: 'DR-B1', description: 'Drive station brake', motion: 'conveyor' }],
+  },
+  {
+    tag: 'RT-3',
+    name: 'Run-out roller table 3',
+    kind: 'mill-auxiliary',
+    positions: [{ tag: 'DB-1', description: 'Table drive disc brake', motion: 'other' }],
+  },
+] as const;
+
+export type DemoState = 'draft' | 'in_check' | 'returned' | 'approved' | 'superseded';
+
+export interface DemoRevision {
+  state: DemoState;
+  author: string;
+  checker?: string;
+  changeNote: string;
+  /** Which quantity input to vary and by how much (keeps the demo sheets distinct). */
+  vary?: [number, number];
+  justification?: string;
+  comments?: {
+    by: string;
+    body: string;
+    anchor?: { kind: 'input' | 'check'; key: 'first-input' | 'first-check' };
+    reply?: { by: string; body: string };
+    resolved?: boolean;
+  }[];
+  daysAgo: number;
+}
+
+export interface DemoSheet {
+  title: string;
+  machine: string;
+  position: string;
+  sheetType: 'hoist-shoe-brake' | 'travel-shoe-brake' | 'caliper-disc-brake' | 'disc-spring-stack';
+  owner: string;
+  revisions: DemoRevision[];
+}
+
+const E = 'engineer@holdfast.test';
+const E2 = 'engineer2@holdfast.test';
+const C = 'checker@holdfast.test';
+const C2 = 'checker2@holdfast.test';
+
+export const demoSheets: DemoSheet[] = [
+  {
+    title: 'Ladle crane 1 main hoist brake 1, heavier ladle',
+    machine: 'LC-1',
+    position: 'MH-B1',
+    sheetType: 'hoist-shoe-brake',
+    owner: E,
+    revisions: [
+      { state: 'superseded', author: E, checker: C, changeNote: 'First issue.', daysAgo: 120 },
+      {
+        state: 'approved',
+        author: E,
+        checker: C2,
+        changeNote: 'Ladle mass raised; spring re-set.',
+        vary: [0, 1.08],
+        daysAgo: 30,
+      },
+    ],
+  },
+  {
+    title: 'Ladle crane 1 main hoist brake 2',
+    machine: 'LC-1',
+    position: 'MH-B2',
+    sheetType: 'hoist-shoe-brake',
+    owner: E2,
+    revisions: [
+      { state: 'in_check', author: E2, changeNote: 'First issue.', vary: [1, 1.05], daysAgo: 3 },
+    ],
+  },
+  {
+    title: 'Ladle crane 1 auxiliary hoist brake',
+    machine: 'LC-1',
+    position: 'AH-B1',
+    sheetType: 'hoist-shoe-brake',
+    owner: E,
+    revisions: [
+      { state: 'draft', author: E, changeNote: 'First issue.', vary: [2, 0.9], daysAgo: 1 },
+    ],
+  },
+  {
+    title: 'Scrap bay crane 2 trolley travel brake',
+    machine: 'SB-2',
+    position: 'TR-B1',
+    sheetType: 'travel-shoe-brake',
+    owner: E2,
+    revisions: [
+      { state: 'approved', author: E2, checker: C, changeNote: 'First issue.', daysAgo: 60 },
+    ],
+  },
+  {
+    title: 'Scrap bay crane 2 bridge travel brake',
+    machine: 'SB-2',
+    position: 'BR-B1',
+    sheetType: 'travel-shoe-brake',
+    owner: E,
+    revisions: [
+      {
+        state: 'returned',
+        author: E,
+        checker: C2,
+        changeNote: 'First issue.',
+        vary: [1, 1.1],
+        daysAgo: 5,
+        comments: [
+          {
+            by: C2,
+            body: 'Use the wheel load with the trolley at the far end; the figure here is the mid-span one.',
+            anchor: { kind: 'input', key: 'first-input' },
+            reply: {
+              by: E,
+              body: 'Agreed: corrected in the next submission, value taken from the end-carriage drawing.',
+            },
+            resolved: true,
+          },
+          {
+            by: C2,
+            body: 'Please attach the thruster data sheet you used.',
+            reply: { by: E, body: 'Attached to the revision.' },
+            resolved: true,
+          },
+        ],
+      },
+    ],
+  },
+  {
+    title: 'Coil conveyor 4 drive station brake',
+    machine: 'CC-4',
+    position: 'DR-B1',
+    sheetType: 'caliper-disc-brake',
+    owner: E,
+    revisions: [
+      {
+        state: 'draft',
+        author: E,
+        changeNote: 'First issue; thruster data sheet attached.',
+        daysAgo: 2,
+      },
+    ],
+  },
+  {
+    title: 'Run-out roller table 3 drive disc brake',
+    machine: 'RT-3',
+    position: 'DB-1',
+    sheetType: 'caliper-disc-brake',
+    owner: E2,
+    revisions: [
+      {
+        state: 'approved',
+        author: E2,
+        checker: C2,
+        changeNote: 'First issue.',
+        vary: [0, 1.05],
+        daysAgo: 200,
+      },
+      {
+        state: 'draft',
+        author: E2,
+        changeNote: 'New pads with a lower friction class.',
+        vary: [1, 0.95],
+        daysAgo: 4,
+      },
+    ],
+  },
+  {
+    title: 'Main hoist brake 1 shoe holder disc-spring stacks',
+    machine: 'LC-1',
+    position: 'MH-B1',
+    sheetType: 'disc-spring-stack',
+    owner: E,
+    revisions: [
+      { state: 'approved', author: E, checker: C, changeNote: 'First issue.', daysAgo: 29 },
+    ],
+  },
+  {
+    title: 'Main hoist brake 2 equaliser disc-spring stack',
+    machine: 'LC-1',
+    position: 'MH-B2',
+    sheetType: 'disc-spring-stack',
+    owner: E2,
+    revisions: [
+      {
+        state: 'in_check',
+        author: E2,
+        changeNote: 'First issue.',
+        vary: [3, 1.04],
+        daysAgo: 2,
+        comments: [
+          {
+            by: C,
+            body: 'Checking the back-off angle against the thread pitch now.',
+            anchor: { kind: 'check', key: 'first-check' },
+          },
+        ],
+      },
+    ],
+  },
+];

@@ -1,0 +1,273 @@
+import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import type { CriterionValue, SheetEvaluation } from '@holdfast/calc';
+import { evaluateSheet, sheetTypeDefinition } from '../src/revisions/calc-engine.js';
+import { CriteriaService } from '../src/criteria/criteria.service.js';
+import {
+  approve,
+  createSheet,
+  createSheetsContext,
+  getRevision,
+  makeRegister,
+  submit,
+  type Register,
+  type SheetsContext,
+} from './sheets-fixture.js';
+
+/** Publish a version of the set with every value scaled, so that checks move (test-only values). */
+export async function publishScaled(ctx: SheetsContext, setId: string, factor: number) {
+  const current = await ctx.request('GET', `/api/criteria-sets/${setId}`, { as: 'admin' });
+  const values = (current.body.values as CriterionValue[]).map((v) => ({
+    ...v,
+    value: v.value * factor,
+  }));
+  const res = await ctx.request('POST', `/api/criteria-sets/${setId}/versions`, {
+    as: 'admin',
+    body: { values, note: `Test: every value × ${factor}.` },
+  });
+  expect(res.status, res.text).toBe(201);
+  return res.body;
+}
+
+/** Find a scale factor of the criteria that makes this revision's evaluation fail. */
+async function failingFactor(
+  ctx: SheetsContext,
+  sheetType: string,
+  setId: string,
+  inputs: any,
+): Promise<number> {
+  const base = await ctx.app.get(CriteriaService).load(setId, 'latest');
+  for (const f of [1000, 0.001, 1e6, 1e-6]) {
+    try {
+      const e = evaluateSheet(sheetType, inputs, {
+        ...base,
+        values: base.values.map((v) => ({ ...v, value: v.value * f })),
+      });
+      if (!e.pass) return f;
+    } catch {
+      // a factor the core refuses is not useful here
+    }
+  }
+  throw new Error('no scale factor makes the default inputs fail');
+}
+
+describe('revisions: server-side evaluation, validation, justification, audit', () => {
+  let ctx: SheetsContext;
+  let reg: Register;
+  beforeAll(async () => {
+    ctx = await createSheetsContext();
+  });
+  beforeEach(async () => {
+    await ctx.resetAll();
+    reg = await makeRegister(ctx);
+  });
+  afterAll(() => ctx?.closeAll());
+
+  it('ignores client results: extra fields are refused and submit recomputes on the server', async () => {
+    const sheet = await createSheet(ctx, reg);
+    const rev = await getRevision(ctx, sheet.revisions[0].id);
+    const forged = { ...rev.evaluation, pass: true, results: [] };
+    const tampered = await ctx.request('PUT', `/api/revisions/${rev.id}`, {
+      as: 'engineer',
+      body: {
+        inputs: rev.inputs,
+        unitSystem: 'SI',
+        changeNote: 'x',
+        rowVersion: rev.rowVersion,
+        evaluation: forged,
+      },
+    });
+    expect(tampered.status).toBe(400);
+    const tamperedSubmit = await ctx.request('POST', `/api/revisions/${rev.id}/submit`, {
+      as: 'engineer',
+      body: { rowVersion: rev.rowVersion, justification: 'x', evaluation: forged },
+    });
+    expect(tamperedSubmit.status).toBe(400);
+    expect((await getRevision(ctx, rev.id)).state).toBe('draft');
+
+    const submitted = await submit(ctx, rev.id);
+    const criteria = await ctx.app
+      .get(CriteriaService)
+      .load(submitted.criteriaSetId, submitted.criteriaSetVersion);
+    const expected: SheetEvaluation = evaluateSheet(
+      submitted.sheetType,
+      submitted.inputs,
+      criteria,
+    );
+    expect(submitted.evaluation.results.length).toBe(expected.results.length);
+    for (const r of expected.results) {
+      const got = submitted.evaluation.results.find((x: { key: string }) => x.key === r.key);
+      expect(Math.abs(got.value - r.value)).toBeLessThanOrEqual(
+        1e-9 * Math.max(1, Math.abs(r.value)),
+      );
+    }
+    expect(submitted.evaluation.pass).toBe(expected.pass);
+  });
+
+  it('answers bad input with 400 naming inputs.<field> and keeps the stored draft', async () => {
+    const sheet = await createSheet(ctx, reg);
+    const rev = await getRevision(ctx, sheet.revisions[0].id);
+    const def = sheetTypeDefinition(rev.sheetType);
+    const field = def.fields.find(
+      (f) => f.kind === 'quantity' && f.min !== undefined && f.min >= 0,
+    )!;
+    const current = rev.inputs[field.key];
+    const broken = typeof current === 'object' ? { ...current, value: -1e9 } : -1e9;
+    const res = await ctx.request('PUT', `/api/revisions/${rev.id}`, {
+      as: 'engineer',
+      body: {
+        inputs: { ...rev.inputs, [field.key]: broken },
+        unitSystem: 'SI',
+        changeNote: 'x',
+        rowVersion: rev.rowVersion,
+      },
+    });
+    expect(res.status, res.text).toBe(400);
+    expect(res.body.error.code).toBe('validation_failed');
+    expect(res.body.error.fields.map((f: { path: string }) => f.path)).toContain(
+      `inputs.${field.key}`,
+    );
+    const after = await getRevision(ctx, rev.id);
+    expect(after.rowVersion).toBe(rev.rowVersion);
+    expect(after.inputs).toEqual(rev.inputs);
+  });
+
+  it('needs a written justification when checks fail, and keeps it', async () => {
+    const sheet = await createSheet(ctx, reg);
+    const rev = await getRevision(ctx, sheet.revisions[0].id);
+    const factor = await failingFactor(ctx, rev.sheetType, rev.criteriaSetId, rev.inputs);
+    await publishScaled(ctx, rev.criteriaSetId, factor);
+    const without = await ctx.request('POST', `/api/revisions/${rev.id}/submit`, {
+      as: 'engineer',
+      body: { rowVersion: rev.rowVersion },
+    });
+    expect(without.status, without.text).toBe(400);
+    expect(without.body.error.fields[0].path).toBe('justification');
+    const withIt = await ctx.request('POST', `/api/revisions/${rev.id}/submit`, {
+      as: 'engineer',
+      body: {
+        rowVersion: rev.rowVersion,
+        justification: 'Temporary duty; maker confirms margin in writing.',
+      },
+    });
+    expect(withIt.status, withIt.text).toBe(200);
+    expect(withIt.body).toMatchObject({
+      state: 'in_check',
+      criteriaSetVersion: 2,
+      justification: 'Temporary duty; maker confirms margin in writing.',
+    });
+    expect(withIt.body.evaluation.pass).toBe(false);
+  });
+
+  it('records an audit event for every save and state change, with who and before/after', async () => {
+    const sheet = await createSheet(ctx, reg);
+    const id = sheet.revisions[0].id;
+    const rev = await getRevision(ctx, id);
+    await ctx.request('PUT', `/api/revisions/${id}`, {
+      as: 'engineer',
+      body: {
+        inputs: rev.inputs,
+        unitSystem: 'US',
+        changeNote: 'Units.',
+        rowVersion: rev.rowVersion,
+      },
+    });
+    await submit(ctx, id);
+    const checking = await getRevision(ctx, id, 'checker');
+    await ctx.request('POST', `/api/revisions/${id}/return`, {
+      as: 'checker',
+      body: { rowVersion: checking.rowVersion, comment: 'Fix.' },
+    });
+    await submit(ctx, id);
+    await approve(ctx, id, 'checker2');
+    const audit = await ctx.request('GET', `/api/sheets/${sheet.id}/audit`, { as: 'viewer' });
+    expect(audit.status).toBe(200);
+    const items = audit.body.items as {
+      action: string;
+      actor: { displayName: string };
+      before: any;
+      after: any;
+    }[];
+    expect(items.map((i) => i.action)).toEqual([
+      'sheet.created',
+      'revision.saved',
+      'revision.submitted',
+      'revision.returned',
+      'revision.submitted',
+      'revision.approved',
+    ]);
+    expect(items.map((i) => i.actor.displayName)).toEqual([
+      'Erin Vale',
+      'Erin Vale',
+      'Erin Vale',
+      'Mara Lind',
+      'Erin Vale',
+      'Idris Okafor',
+    ]);
+    expect(items[1].before.unitSystem).toBe('SI');
+    expect(items[1].after.unitSystem).toBe('US');
+    expect(items[5].before.state).toBe('in_check');
+    expect(items[5].after.state).toBe('approved');
+  });
+
+  it('compares two revisions: changed inputs with units, moved results and checks', async () => {
+    const sheet = await createSheet(ctx, reg);
+    const a = await getRevision(ctx, sheet.revisions[0].id);
+    await submit(ctx, a.id);
+    await approve(ctx, a.id);
+    const b = (
+      await ctx.request('POST', `/api/sheets/${sheet.id}/revisions`, {
+        as: 'engineer',
+        body: { changeNote: 'Bigger.' },
+      })
+    ).body;
+    const def = sheetTypeDefinition(b.sheetType);
+    // Raise a quantity input by 5 % (within range) and see results move.
+    const field = def.fields.find(
+      (f) =>
+        f.kind === 'quantity' && typeof b.inputs[f.key] === 'object' && b.inputs[f.key].value > 0,
+    )!;
+    const changed = { ...b.inputs[field.key], value: b.inputs[field.key].value * 1.05 };
+    const saved = await ctx.request('PUT', `/api/revisions/${b.id}`, {
+      as: 'engineer',
+      body: {
+        inputs: { ...b.inputs, [field.key]: changed },
+        unitSystem: 'SI',
+        changeNote: 'Bigger.',
+        rowVersion: b.rowVersion,
+      },
+    });
+    expect(saved.status, saved.text).toBe(200);
+    const cmp = await ctx.request(
+      'GET',
+      `/api/sheets/${sheet.id}/compare?from=${a.id}&to=${b.id}`,
+      { as: 'engineer' },
+    );
+    expect(cmp.status, cmp.text).toBe(200);
+    expect(cmp.body.from.label).toBe('A');
+    expect(cmp.body.to.label).toBe('B');
+    expect(cmp.body.inputs).toEqual([
+      { key: field.key, label: field.label, from: a.inputs[field.key], to: changed },
+    ]);
+    expect(cmp.body.results.length).toBeGreaterThan(0);
+    for (const r of cmp.body.results) {
+      if (r.from !== null && r.to !== null) {
+        expect(Math.abs(r.delta - (r.to - r.from))).toBeLessThanOrEqual(
+          1e-9 * Math.max(1, Math.abs(r.to)),
+        );
+      }
+    }
+    const self = await ctx.request(
+      'GET',
+      `/api/sheets/${sheet.id}/compare?from=${a.id}&to=${a.id}`,
+      { as: 'viewer' },
+    );
+    expect(self.body).toMatchObject({ inputs: [], results: [], checks: [] });
+    const other = await createSheet(ctx, reg, { title: 'Other' });
+    const wrong = await ctx.request(
+      'GET',
+      `/api/sheets/${sheet.id}/compare?from=${a.id}&to=${other.revisions[0].id}`,
+      { as: 'engineer' },
+    );
+    expect(wrong.status).toBe(404);
+  });
+});
