@@ -7,11 +7,16 @@ const registry = calc as unknown as {
   sheetTypes?: SheetTypeDefinition[] | Record<string, SheetTypeDefinition>;
 };
 
-/** All sheet types of the calc registry. */
+function isSheetType(v: unknown): v is SheetTypeDefinition {
+  const t = v as Partial<SheetTypeDefinition> | null;
+  return typeof t === 'object' && t !== null && typeof t.id === 'string' && Array.isArray(t.fields) && typeof t.evaluate === 'function';
+}
+
+/** All sheet types of the calc registry (or, before it exists, every sheet type calc exports). */
 export function listSheetTypes(): SheetTypeDefinition[] {
   const all = registry.sheetTypes;
-  if (!all) return [];
-  return Array.isArray(all) ? all : Object.values(all);
+  if (all) return Array.isArray(all) ? all : Object.values(all);
+  return Object.values(calc).filter(isSheetType);
 }
 
 /** The sheet type with this id, or undefined when the core does not know it. */

@@ -67,9 +67,8 @@ export function ActionDialog(props: ActionDialogProps) {
           label={props.textLabel}
           description={props.textDescription}
           required={textRequired}
-          autosize
-          minRows={3}
-          maxRows={10}
+          rows={3}
+          
           value={text}
           onChange={(e) => setText(e.currentTarget.value)}
           error={fieldError}

@@ -39,9 +39,8 @@ export function CommentComposer({
     <Stack gap={6}>
       <Textarea
         label={`Comment on ${target}`}
-        autosize
-        minRows={2}
-        maxRows={6}
+        rows={2}
+        
         value={body}
         onChange={(e) => setBody(e.currentTarget.value)}
         onKeyDown={(e) => {
