@@ -1,8 +1,9 @@
 import type { SheetEvaluation } from '@holdfast/calc';
 import { Text, View } from '@react-pdf/renderer';
-import { qtyParts, qty, unitLabel } from '../format.js';
+import { pct, qtyParts, qty, unitLabel } from '../format.js';
 import type { PrintableSheet, PrintUnitSystem } from '../printable-sheet.js';
 import { colours } from '../theme.js';
+import { limitText } from './summary.js';
 import { Heading, Table, type Column } from './table.js';
 
 type EvalTable = SheetEvaluation['tables'][number];
@@ -67,9 +68,13 @@ export function Justification(props: { sheet: PrintableSheet }) {
     <View wrap={false}>
       <Heading>Justification for failed checks</Heading>
       {failed.map((c) => (
-        <Text key={c.id} style={{ color: colours.fail }}>
-          FAIL — {c.label}: {c.message}
-        </Text>
+        <View key={c.id} style={{ marginBottom: 2 }}>
+          <Text style={{ color: colours.fail, fontWeight: 700 }}>
+            FAIL — {c.label}: {qty(c.value, c.dimension, sheet.unitSystem)} against{' '}
+            {limitText(c, sheet)} ({pct(c.utilisation)})
+          </Text>
+          {c.message && c.message !== c.label && <Text style={{ color: colours.muted }}>{c.message}</Text>}
+        </View>
       ))}
       <View style={{ borderLeftWidth: 2, borderColor: colours.rule, paddingLeft: 6, marginTop: 4 }}>
         <Text>{sheet.justification ?? 'No justification was recorded with this revision.'}</Text>
