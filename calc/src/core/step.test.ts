@@ -94,3 +94,27 @@ describe('Derivation', () => {
     );
   });
 });
+
+describe('closure compilation matches mathjs', () => {
+  it('evaluates like mathjs, and a declared symbol named e is not Euler’s number', async () => {
+    const { math } = await import('../units/math.js');
+    const f = defineFormula({
+      id: 'c',
+      label: 'c',
+      symbol: 'y',
+      expression: 'F + k * e * r ^ 2 / (1 - exp(-x)) + sin(x) * pi - sqrt(F) + -r',
+      symbols: {
+        F: { text: 'F', dimension: 'force' },
+        k: { text: 'k', dimension: 'stiffness' },
+        e: { text: 'ε', dimension: 'length' },
+        r: { text: 'r', dimension: 'dimensionless' },
+        x: { text: 'x', dimension: 'dimensionless' },
+      },
+      dimension: 'force',
+      reference: 'x',
+    });
+    const scope = { F: 5000, k: 1e5, e: 0.001, r: 5, x: 0.7 };
+    const expected = math.evaluate(f.spec.expression, { ...scope }) as number;
+    expect(nearlyEqual(f.evaluate(scope), expected, 1e-12)).toBe(true);
+  });
+});

@@ -5,6 +5,7 @@ import type { Q } from '../units/quantities.js';
 import { formatForDerivation } from '../units/format.js';
 import { DIMENSIONS } from '../units/unit-table.js';
 import { renderPieces, symbolNames, type TextPiece } from './formula-text.js';
+import { compileToClosure } from './closure-compiler.js';
 
 /** A symbol of a formula: how it prints and what dimension its values have. */
 export interface SymbolSpec {
@@ -52,7 +53,8 @@ export function defineFormula<S extends string, D extends Dimension>(
       throw new Error(`formula ${spec.id}: symbol "${name}" is not declared`);
     }
   }
-  const compiled: EvalFunction = node.compile();
+  const closure = compileToClosure(node, declared);
+  const compiled: EvalFunction | undefined = closure ? undefined : node.compile();
   const pieces: TextPiece[] = renderPieces(node, declared);
   const symbols = spec.symbols as Record<string, SymbolSpec>;
   const prefix = `${spec.symbol} = `;
@@ -62,7 +64,8 @@ export function defineFormula<S extends string, D extends Dimension>(
     spec,
     text,
     evaluate(values) {
-      return compiled.evaluate({ ...values }) as Q<D>;
+      const scope = values as Record<string, number>;
+      return (closure ? closure(scope) : compiled!.evaluate({ ...scope })) as Q<D>;
     },
     substitute(values) {
       let out = prefix;

@@ -9,7 +9,7 @@ export const tenPercentRuleFormula = defineFormula({
   symbol: 's_max',
   expression: 'k * v * t_min',
   symbols: {
-    k: { text: '0.10', dimension: 'dimensionless' },
+    k: { text: 'k_10', dimension: 'dimensionless' },
     v: { text: 'v', dimension: 'speed' },
     t_min: { text: '60 s/min', dimension: 'time' },
   },
@@ -39,9 +39,10 @@ export const adhesionNeededFormula = defineFormula({
  * 0.1 × speed in m/min, i.e. s_max = 6 s × v.
  * @example tenPercentStoppingDistance(speed(1)) // 6 m (1 m/s = 60 m/min)
  */
-export function tenPercentStoppingDistance(v: Speed, d?: Derivation): Length {
+export function tenPercentStoppingDistance(v: Speed, d?: Derivation, fraction = 0.1): Length {
   requireRange(v, 'speed', { min: 0 }, 'm/s');
-  return compute(d, tenPercentRuleFormula, { k: 0.1, v, t_min: 60 });
+  requireRange(fraction, 'fraction', { min: 0, exclusiveMin: true });
+  return compute(d, tenPercentRuleFormula, { k: fraction, v, t_min: 60 });
 }
 
 /**

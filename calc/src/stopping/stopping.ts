@@ -178,7 +178,8 @@ export type StoppingResult =
  *   brakeTorque: torque(700), driveTorque: torque(300), setDelay: time(0.2) })
  *   // ω1 = 180 rad/s, α_b = 200 rad/s², t_b = 0.9 s
  */
-export function stopping(input: StoppingInput, d?: Derivation): StoppingResult {
+export function stopping(input: StoppingInput, d?: Derivation, prefix = ''): StoppingResult {
+  const o = (f: { spec: { id: string } }) => ({ id: prefix + f.spec.id });
   requireRange(input.inertia, 'inertia', { min: 0, exclusiveMin: true }, 'kg·m²');
   requireRange(input.speed, 'speed', { min: 0, exclusiveMin: true }, 'rad/s');
   requireRange(input.loadSpeed, 'loadSpeed', { min: 0, exclusiveMin: true }, 'm/s');
@@ -187,8 +188,18 @@ export function stopping(input: StoppingInput, d?: Derivation): StoppingResult {
   requireRange(input.setDelay, 'setDelay', { min: 0 }, 's');
   const J = input.inertia;
   const omega_0 = input.speed;
-  const alpha_d = compute(d, delayAccelerationFormula, { M_d: input.driveTorque, J });
-  const omega_1 = compute(d, speedAfterDelayFormula, { omega_0, alpha_d, t_d: input.setDelay });
+  const alpha_d = compute(
+    d,
+    delayAccelerationFormula,
+    { M_d: input.driveTorque, J },
+    o(delayAccelerationFormula),
+  );
+  const omega_1 = compute(
+    d,
+    speedAfterDelayFormula,
+    { omega_0, alpha_d, t_d: input.setDelay },
+    o(speedAfterDelayFormula),
+  );
   if (!(input.brakeTorque > input.driveTorque)) {
     return {
       stops: false,
@@ -198,18 +209,48 @@ export function stopping(input: StoppingInput, d?: Derivation): StoppingResult {
         `the load (${input.driveTorque.toFixed(0)} N·m): the load keeps accelerating and is never stopped.`,
     };
   }
-  const alpha_b = compute(d, decelerationFormula, {
-    M_b: input.brakeTorque,
-    M_d: input.driveTorque,
-    J,
-  });
-  const t_b = compute(d, brakingTimeFormula, { omega_1, alpha_b });
-  const stoppingTime = compute(d, stopTimeFormula, { t_d: input.setDelay, t_b });
-  const phi_s = compute(d, stopAngleFormula, { omega_0, omega_1, t_d: input.setDelay, t_b });
+  const alpha_b = compute(
+    d,
+    decelerationFormula,
+    {
+      M_b: input.brakeTorque,
+      M_d: input.driveTorque,
+      J,
+    },
+    o(decelerationFormula),
+  );
+  const t_b = compute(d, brakingTimeFormula, { omega_1, alpha_b }, o(brakingTimeFormula));
+  const stoppingTime = compute(
+    d,
+    stopTimeFormula,
+    { t_d: input.setDelay, t_b },
+    o(stopTimeFormula),
+  );
+  const phi_s = compute(
+    d,
+    stopAngleFormula,
+    { omega_0, omega_1, t_d: input.setDelay, t_b },
+    o(stopAngleFormula),
+  );
   const v_0 = input.loadSpeed;
-  const stoppingDistance = compute(d, stopDistanceFormula, { phi_s, v_0, omega_0 });
-  const loadDeceleration = compute(d, loadDecelerationFormula, { alpha_b, v_0, omega_0 });
-  const brakeEnergy = compute(d, brakeWorkFormula, { M_b: input.brakeTorque, omega_1, t_b });
+  const stoppingDistance = compute(
+    d,
+    stopDistanceFormula,
+    { phi_s, v_0, omega_0 },
+    o(stopDistanceFormula),
+  );
+  const loadDeceleration = compute(
+    d,
+    loadDecelerationFormula,
+    { alpha_b, v_0, omega_0 },
+    o(loadDecelerationFormula),
+  );
+  const brakeEnergy = compute(
+    d,
+    brakeWorkFormula,
+    { M_b: input.brakeTorque, omega_1, t_b },
+    o(brakeWorkFormula),
+  );
   return {
     stops: true,
     speedAfterDelay: omega_1,

@@ -1,0 +1,60 @@
+import type { CheckResult, Dimension } from '../core/types.js';
+import { formatForDerivation } from '../units/format.js';
+import { DIMENSIONS } from '../units/unit-table.js';
+
+export interface CheckSpec {
+  id: string;
+  section: string;
+  label: string;
+  value: number;
+  limit: number;
+  dimension: Dimension;
+  /** 'min': value must be ≥ limit; 'max': value must be ≤ limit. */
+  kind: 'min' | 'max';
+  source: string;
+  /** Extra words for a failed check (what it means, what to do). */
+  failHint?: string;
+  /** Strict comparison (value must exceed the limit), e.g. brake torque over a driving torque. */
+  strict?: boolean;
+}
+
+/** Builds a check with utilisation (1.0 at the limit, > 1 fails) and a plain message. */
+export function makeCheck(spec: CheckSpec): CheckResult {
+  const { value, limit, kind } = spec;
+  const utilisation = kind === 'max' ? safeRatio(value, limit) : safeRatio(limit, value);
+  const pass =
+    kind === 'max'
+      ? spec.strict
+        ? value < limit
+        : value <= limit
+      : spec.strict
+        ? value > limit
+        : value >= limit;
+  const v = formatForDerivation(value, spec.dimension);
+  const l = formatForDerivation(limit, spec.dimension);
+  const rel = kind === 'max' ? (spec.strict ? '<' : '≤') : spec.strict ? '>' : '≥';
+  const message = pass
+    ? `${spec.label}: ${v} ${rel} ${l} — pass (utilisation ${(utilisation * 100).toFixed(0)} %).`
+    : `${spec.label}: ${v} is not ${rel} ${l} — FAIL.${spec.failHint ? ` ${spec.failHint}` : ''}`;
+  return {
+    id: spec.id,
+    section: spec.section,
+    label: spec.label,
+    value,
+    limit,
+    unit: DIMENSIONS[spec.dimension].siUnit,
+    dimension: spec.dimension,
+    kind,
+    utilisation,
+    pass,
+    source: spec.source,
+    message,
+  };
+}
+
+/** Ratio that stays finite: 0/0 → 0, x/0 → a large finite number flagged as over the limit. */
+function safeRatio(a: number, b: number): number {
+  if (b === 0) return a === 0 ? 0 : 1e9;
+  const r = a / b;
+  return Number.isFinite(r) ? Math.abs(r) : 1e9;
+}

@@ -1,0 +1,241 @@
+import type {
+  CriteriaSet,
+  FieldDefinition,
+  SheetEvaluation,
+  SheetInputs,
+  SheetTypeDefinition,
+} from '../core/types.js';
+import { CalcInputError } from '../core/errors.js';
+import { Derivation } from '../core/step.js';
+import { criterion } from '../criteria/lookup.js';
+import { motorRatedTorque } from '../duty/motor-torque.js';
+import { hoistLoadSpeed, hoistLoadTorques } from '../duty/hoist-load.js';
+import { referLinearMass, referRotatingInertia } from '../duty/referral.js';
+import { inertiaTotal } from '../duty/inertia-sum.js';
+import {
+  REFERENCE_BASIS_TEXT,
+  requiredBrakeTorque,
+  type ReferenceBasis,
+} from '../duty/required-torque.js';
+import * as q from '../units/quantities.js';
+import { choice, num, qty } from './field-builders.js';
+import { readInputs } from './sheet-inputs.js';
+import { finish, newEvaluation, publishSteps } from './sheet-output.js';
+import { SHOE_BRAKE_FIELDS, SHOE_SECTIONS } from './shoe-brake-fields.js';
+import { evaluateShoeBrake, validateShoeInputs } from './shoe-brake-evaluate.js';
+
+const U = 'duty';
+
+export const ARRANGEMENT_CHOICES = [
+  { value: 'single', label: 'One holding brake, control braking other than mechanical' },
+  { value: 'mechanical', label: 'One holding brake with mechanical control braking' },
+  { value: 'two', label: 'Two holding brakes (this is one of them)' },
+];
+export const ARRANGEMENT_KEY: Record<string, string> = {
+  single: 'torqueFactorSingle',
+  mechanical: 'torqueFactorMechanical',
+  two: 'torqueFactorEachOfTwo',
+};
+
+export const HOIST_DUTY_FIELDS: FieldDefinition[] = [
+  qty(U, 'motorPower', 'Motor rated power', 'P', 'power', 22, 'kW', 'hp', {
+    min: 0,
+    exclusiveMin: true,
+  }),
+  qty(
+    U,
+    'motorSpeed',
+    'Motor rated speed (brake on the motor shaft)',
+    'n',
+    'angularSpeed',
+    975,
+    'rpm',
+    'rpm',
+    { min: 0, exclusiveMin: true, max: 6000 },
+  ),
+  qty(U, 'load', 'Rated load', 'm_L', 'mass', 10_000, 'kg', 'lb', { min: 0, exclusiveMin: true }),
+  qty(U, 'hookBlock', 'Hook block and ropes', 'm_H', 'mass', 300, 'kg', 'lb', { min: 0 }),
+  qty(U, 'ropeDrumDiameter', 'Rope drum pitch diameter', 'D_drum', 'length', 500, 'mm', 'in', {
+    min: 0,
+    exclusiveMin: true,
+  }),
+  num(U, 'reeving', 'Reeving ratio (hook load ÷ rope pull at the drum)', 'i_r', 4, {
+    min: 0,
+    exclusiveMin: true,
+    max: 32,
+  }),
+  num(U, 'gearRatio', 'Gear ratio (brake shaft ÷ drum speed)', 'i_g', 40, {
+    min: 0,
+    exclusiveMin: true,
+    max: 2000,
+  }),
+  num(U, 'efficiency', 'Overall efficiency of gear and reeving', 'η', 0.88, {
+    min: 0,
+    exclusiveMin: true,
+    max: 1,
+  }),
+  choice(
+    U,
+    'referenceBasis',
+    'Reference torque for the required torque',
+    'hoisting',
+    [
+      { value: 'hoisting', label: 'Rated-load hoisting torque at the brake (M_L/η)' },
+      { value: 'holding', label: 'Static holding torque while lowering (M_L·η)' },
+      { value: 'motor', label: 'Motor rated torque' },
+    ],
+    '29 CFR 1910.179(f) states hoist holding-brake torque as a percentage of the rated-load hoisting torque at the brake.',
+  ),
+  choice(U, 'brakeArrangement', 'Holding brake arrangement', 'single', ARRANGEMENT_CHOICES),
+  qty(U, 'motorInertia', 'Motor rotor inertia', 'J_mot', 'inertia', 0.45, 'kg m^2', 'lb ft^2', {
+    min: 0,
+  }),
+  qty(
+    U,
+    'brakeDrumInertia',
+    'Brake drum and coupling inertia',
+    'J_drum',
+    'inertia',
+    1.2,
+    'kg m^2',
+    'lb ft^2',
+    { min: 0 },
+  ),
+  qty(
+    U,
+    'gearInertia',
+    'Gearbox inertia at the brake shaft',
+    'J_gear',
+    'inertia',
+    0.05,
+    'kg m^2',
+    'lb ft^2',
+    { min: 0 },
+  ),
+  qty(
+    U,
+    'ropeDrumInertia',
+    'Rope drum inertia (at drum speed)',
+    'J_rd',
+    'inertia',
+    30,
+    'kg m^2',
+    'lb ft^2',
+    { min: 0 },
+  ),
+  qty(U, 'setDelay', 'Brake set delay (power off to full torque)', 't_d', 'time', 0.3, 's', 's', {
+    min: 0,
+    max: 10,
+  }),
+  qty(
+    U,
+    'maxStoppingDistance',
+    'Allowed stopping distance while lowering (duty specification)',
+    's_max',
+    'length',
+    250,
+    'mm',
+    'in',
+    { min: 0, exclusiveMin: true },
+  ),
+];
+
+const FIELDS = [...HOIST_DUTY_FIELDS, ...SHOE_BRAKE_FIELDS];
+
+/** Evaluates the hoist shoe-brake sheet: the worst stop is lowering the rated load. */
+export function evaluateHoistShoeBrake(
+  inputs: SheetInputs,
+  criteria: CriteriaSet,
+): SheetEvaluation {
+  const v = readInputs(FIELDS, inputs);
+  const cross = validateShoeInputs(v);
+  if (cross.length) throw new CalcInputError(cross);
+  const d = new Derivation(U);
+  const out = newEvaluation('hoist-shoe-brake', criteria, d);
+  const omega = q.angularSpeed(v.num('motorSpeed'));
+  const Mmot = motorRatedTorque(q.power(v.num('motorPower')), omega, d);
+  const load = hoistLoadTorques(
+    {
+      load: q.mass(v.num('load')),
+      hookBlock: q.mass(v.num('hookBlock')),
+      drumDiameter: q.length(v.num('ropeDrumDiameter')),
+      reeving: q.ratio(v.num('reeving')),
+      gearRatio: q.ratio(v.num('gearRatio')),
+      efficiency: q.ratio(v.num('efficiency')),
+    },
+    d,
+  );
+  const vL = hoistLoadSpeed(
+    omega,
+    q.length(v.num('ropeDrumDiameter')),
+    q.ratio(v.num('reeving')),
+    q.ratio(v.num('gearRatio')),
+    d,
+  );
+  const Jout = referRotatingInertia(
+    q.inertia(v.num('ropeDrumInertia')),
+    q.angularSpeed(omega / v.num('gearRatio')),
+    omega,
+    d,
+    { label: 'Rope drum inertia referred to the brake shaft', symbol: 'J_out,b' },
+  );
+  const Jload = referLinearMass(q.mass(v.num('load') + v.num('hookBlock')), vL, omega, d, {
+    label: 'Load and hook block referred to the brake shaft',
+    symbol: 'J_load,b',
+  });
+  const J = inertiaTotal(
+    {
+      motor: q.inertia(v.num('motorInertia')),
+      brakeDrum: q.inertia(v.num('brakeDrumInertia')),
+      gear: q.inertia(v.num('gearInertia')),
+      output: Jout,
+      load: Jload,
+    },
+    d,
+  );
+  const basis = v.str('referenceBasis') as ReferenceBasis;
+  const Mref =
+    basis === 'motor' ? Mmot : basis === 'hoisting' ? load.hoistingTorque : load.holdingTorque;
+  const factor = criterion(criteria, ARRANGEMENT_KEY[v.str('brakeArrangement')]);
+  const Mreq = requiredBrakeTorque(q.ratio(factor.value), Mref, d, basis);
+  out.warnings.push(
+    `Required torque = ${factor.value} × ${REFERENCE_BASIS_TEXT[basis]}; efficiency credit: hoisting torque divides by η, holding torque multiplies by η.`,
+  );
+  evaluateShoeBrake(
+    v,
+    {
+      brakeSpeed: omega,
+      loadSpeed: vL,
+      inertia: J,
+      driveTorque: load.holdingTorque,
+      requiredTorque: Mreq,
+      requiredSource: `${factor.source}; reference: ${REFERENCE_BASIS_TEXT[basis]}`,
+      setDelay: v.num('setDelay'),
+      stopLimit: { value: v.num('maxStoppingDistance'), source: 'duty specification (user input)' },
+      stopCase: 'lowering the rated load',
+    },
+    criteria,
+    d,
+    out,
+  );
+  publishSteps(out, d, [
+    'motor-torque',
+    'hoist-static-torque',
+    'hoisting-torque',
+    'holding-torque',
+    'hoist-load-speed',
+    'inertia-total',
+    'required-torque',
+  ]);
+  return finish(out);
+}
+
+export const hoistShoeBrakeSheet: SheetTypeDefinition = {
+  id: 'hoist-shoe-brake',
+  title: 'Shoe brake on a hoist',
+  description:
+    'Spring-set, thruster-released double-shoe brake on the motor shaft of a crane hoist: required torque, torque over the friction band and at worn lining, lining duty, stop while lowering the rated load, heat, release and stroke, field settings and disc-spring preloads.',
+  sections: [{ id: U, title: 'Hoist duty' }, ...SHOE_SECTIONS],
+  fields: FIELDS,
+  evaluate: evaluateHoistShoeBrake,
+};

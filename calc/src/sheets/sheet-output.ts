@@ -1,0 +1,73 @@
+import type { CriteriaSet, Dimension, ResultValue, SheetEvaluation } from '../core/types.js';
+import type { Derivation } from '../core/step.js';
+import { CORE_VERSION } from '../version.js';
+import { DIMENSIONS } from '../units/unit-table.js';
+
+/** The usual cautions printed on every brake sheet. */
+export const SAFETY_CAUTIONS = [
+  "These results support, and never replace, the judgement of a competent engineer; the governing standard, the brake maker's data and local codes decide.",
+  'Work on a brake only with the load lowered or secured and the drive locked out; release stored spring energy with the provided means.',
+];
+
+/** An empty evaluation bound to a derivation (its steps are the sheet's derivation). */
+export function newEvaluation(
+  sheetType: string,
+  criteria: CriteriaSet,
+  d: Derivation,
+): SheetEvaluation {
+  return {
+    sheetType,
+    coreVersion: CORE_VERSION,
+    criteriaSetId: criteria.id,
+    criteriaSetVersion: criteria.version,
+    results: [],
+    checks: [],
+    derivation: d.steps,
+    charts: [],
+    fieldSettings: [],
+    tables: [],
+    warnings: [...SAFETY_CAUTIONS],
+    pass: true,
+  };
+}
+
+/** Publishes recorded derivation steps as named results (key = step id unless renamed). */
+export function publishSteps(
+  out: SheetEvaluation,
+  d: Derivation,
+  ids: (string | [string, string])[],
+): void {
+  const byId = new Map(d.steps.map((s) => [s.id, s]));
+  for (const entry of ids) {
+    const [id, key] = typeof entry === 'string' ? [entry, entry] : entry;
+    const s = byId.get(id);
+    if (!s) continue;
+    out.results.push({
+      key,
+      section: s.section,
+      label: s.label,
+      symbol: s.symbol,
+      value: s.value,
+      unit: s.unit,
+      dimension: s.dimension,
+    });
+  }
+}
+
+/** A result that is not a derivation step (an input echoed, a choice's consequence). */
+export function result(
+  key: string,
+  section: string,
+  label: string,
+  symbol: string,
+  value: number,
+  dimension: Dimension,
+): ResultValue {
+  return { key, section, label, symbol, value, unit: DIMENSIONS[dimension].siUnit, dimension };
+}
+
+/** Final pass flag; call once everything is pushed. */
+export function finish(out: SheetEvaluation): SheetEvaluation {
+  out.pass = out.checks.length > 0 && out.checks.every((c) => c.pass);
+  return out;
+}

@@ -1,0 +1,302 @@
+import type { FieldDefinition, SectionDefinition } from '../core/types.js';
+import { LININGS } from '../criteria/linings.js';
+import { choice, flag, num, qty } from './field-builders.js';
+
+/** Sections shared by the shoe-brake sheets (after each sheet's own duty section). */
+export const SHOE_SECTIONS: SectionDefinition[] = [
+  { id: 'brake', title: 'Brake, spring and levers' },
+  { id: 'lining', title: 'Lining and friction band' },
+  { id: 'stopping', title: 'Stopping' },
+  { id: 'thermal', title: 'Energy and heat' },
+  { id: 'release', title: 'Release and thruster stroke' },
+  { id: 'setting', title: 'Field settings' },
+  { id: 'discSprings', title: 'Disc springs on shoe holder and equaliser' },
+];
+
+const B = 'brake';
+const L = 'lining';
+const T = 'thermal';
+const R = 'release';
+const S = 'discSprings';
+
+export const BRAKE_FIELDS: FieldDefinition[] = [
+  qty(B, 'drumDiameter', 'Brake drum diameter', 'D', 'length', 400, 'mm', 'in', {
+    min: 50,
+    max: 2000,
+    help: 'Brake wheel (drum) diameter.',
+  }),
+  qty(B, 'shoeWidth', 'Lining width', 'b', 'length', 150, 'mm', 'in', { min: 10, max: 1000 }),
+  qty(B, 'contactAngle', 'Contact angle of one shoe', 'β', 'angle', 70, 'deg', 'deg', {
+    min: 10,
+    max: 170,
+    help: 'Arc covered by one lining; the pivoted-shoe model needs β < 180°.',
+  }),
+  choice(
+    B,
+    'torqueModel',
+    'Torque model',
+    'pivoted',
+    [
+      { value: 'pivoted', label: 'Pivoted long shoe (p = pa·cos θ)' },
+      { value: 'short', label: 'Short shoe (2·μ·N·r)' },
+    ],
+    "Pivoted symmetrical shoes per Budynas & Nisbett, Shigley's MED §16-4; the short-shoe model is conservative for the torque.",
+  ),
+  qty(B, 'springForce', 'Main spring force as set (new lining)', 'F_s', 'force', 1100, 'N', 'lbf', {
+    min: 0,
+    exclusiveMin: true,
+  }),
+  qty(B, 'springRate', 'Main spring rate', 'k_s', 'stiffness', 40, 'N/mm', 'lbf/in', {
+    min: 0,
+    exclusiveMin: true,
+  }),
+  qty(B, 'springFreeLength', 'Main spring free length', 'L_0', 'length', 250, 'mm', 'in', {
+    min: 0,
+    exclusiveMin: true,
+  }),
+  qty(
+    B,
+    'springForceMin',
+    'Adjustable spring force, lowest setting',
+    'F_s,min',
+    'force',
+    500,
+    'N',
+    'lbf',
+    { min: 0 },
+  ),
+  qty(
+    B,
+    'springForceMax',
+    'Adjustable spring force, highest setting',
+    'F_s,max',
+    'force',
+    1600,
+    'N',
+    'lbf',
+    { min: 0, exclusiveMin: true },
+  ),
+  num(B, 'leverRatio', 'Lever ratio (shoe normal force ÷ spring force, ideal)', 'i', 2.5, {
+    min: 0,
+    exclusiveMin: true,
+    max: 50,
+  }),
+  num(B, 'linkageEfficiency', 'Linkage efficiency', 'η_L', 0.95, {
+    min: 0,
+    exclusiveMin: true,
+    max: 1,
+  }),
+  qty(
+    B,
+    'maxBrakeTorque',
+    'Torque rating of the drive train at the brake shaft',
+    'M_max',
+    'torque',
+    1000,
+    'N m',
+    'lbf ft',
+    {
+      min: 0,
+      exclusiveMin: true,
+      help: 'Shaft, coupling and gearbox rating (equipment data): the brake at μ max must not exceed it.',
+    },
+  ),
+];
+
+export const LINING_FIELDS: FieldDefinition[] = [
+  choice(
+    L,
+    'liningMaterial',
+    'Lining material (limits)',
+    'non-asbestos-rigid',
+    LININGS.map((l) => ({ value: l.id, label: l.label })),
+    "Pressure and temperature limits from the Tribology Handbook (Neale, ed.), B8, Table 8.10; the lining maker's data governs.",
+  ),
+  num(L, 'muNominal', 'Friction coefficient, nominal', 'μ_nom', 0.38, {
+    min: 0,
+    exclusiveMin: true,
+    max: 1,
+  }),
+  num(L, 'muMin', 'Friction coefficient, minimum', 'μ_min', 0.3, {
+    min: 0,
+    exclusiveMin: true,
+    max: 1,
+    help: "Design texts advise 50–75 % of the test μ for design (Shigley's MED, Table 16-3 note).",
+  }),
+  num(L, 'muMax', 'Friction coefficient, maximum', 'μ_max', 0.45, {
+    min: 0,
+    exclusiveMin: true,
+    max: 1,
+  }),
+  qty(L, 'wear', 'Lining wear per shoe before re-adjustment', 'w', 'length', 0.4, 'mm', 'in', {
+    min: 0,
+  }),
+  num(L, 'springTravelRatio', 'Spring travel per unit shoe travel', 'r_s', 5, {
+    min: 0,
+    exclusiveMin: true,
+    max: 200,
+    help: 'Ideal symmetric double-shoe linkage: 2 × lever ratio (virtual work).',
+  }),
+  qty(L, 'drumMaxSpeed', 'Drum peripheral speed rating', 'v_max', 'speed', 30, 'm/s', 'ft/min', {
+    min: 0,
+    exclusiveMin: true,
+    help: 'From the drum maker (material and balance). About 30 m/s for grey iron is a value from memory.',
+  }),
+];
+
+export const THERMAL_FIELDS: FieldDefinition[] = [
+  qty(T, 'stopsPerHour', 'Stops per hour', 'z', 'frequency', 60, '1/h', '1/h', { min: 0 }),
+  qty(T, 'drumMass', 'Heat-absorbing drum mass', 'm_d', 'mass', 60, 'kg', 'lb', {
+    min: 0,
+    exclusiveMin: true,
+  }),
+  qty(
+    T,
+    'specificHeat',
+    'Specific heat of the drum',
+    'c',
+    'specificHeat',
+    460,
+    'J/(kg K)',
+    'BTU/(lb degF)',
+    { min: 0, exclusiveMin: true, help: 'Cast iron or steel about 450–500 J/(kg·K).' },
+  ),
+  qty(
+    T,
+    'coolingCoefficient',
+    'Cooling coefficient of the drum surface',
+    'α',
+    'heatTransferCoefficient',
+    20,
+    'W/(m^2 K)',
+    'BTU/(h ft^2 degF)',
+    {
+      min: 0,
+      exclusiveMin: true,
+      help: 'Convection plus radiation; depends on speed and air flow (engineering estimate).',
+    },
+  ),
+  qty(T, 'coolingArea', 'Cooling surface of the drum', 'A_c', 'area', 0.6, 'm^2', 'ft^2', {
+    min: 0,
+    exclusiveMin: true,
+  }),
+  qty(T, 'ambient', 'Ambient temperature', 'T_amb', 'temperature', 30, 'degC', 'degF', {
+    min: -60,
+    max: 150,
+  }),
+];
+
+export const RELEASE_FIELDS: FieldDefinition[] = [
+  qty(R, 'clearance', 'Shoe clearance when released (per shoe)', 'ε', 'length', 0.8, 'mm', 'in', {
+    min: 0,
+    exclusiveMin: true,
+    max: 10,
+  }),
+  num(R, 'thrusterTravelRatio', 'Thruster rod travel per unit shoe travel', 'r_t', 25, {
+    min: 0,
+    exclusiveMin: true,
+    max: 500,
+  }),
+  num(R, 'releaseEfficiency', 'Release linkage efficiency', 'η_r', 0.9, {
+    min: 0,
+    exclusiveMin: true,
+    max: 1,
+  }),
+  qty(R, 'thrusterForce', 'Thruster rated lift force', 'F_th', 'force', 500, 'N', 'lbf', {
+    min: 0,
+    exclusiveMin: true,
+  }),
+  qty(R, 'thrusterStroke', 'Thruster nominal stroke', 's_n', 'length', 50, 'mm', 'in', {
+    min: 0,
+    exclusiveMin: true,
+  }),
+  qty(R, 'reserveStroke', 'Reserve stroke as set (new lining)', 's_r,0', 'length', 20, 'mm', 'in', {
+    min: 0,
+  }),
+  qty(
+    R,
+    'minReserveStroke',
+    "Minimum reserve stroke (maker's data)",
+    's_r,min',
+    'length',
+    5,
+    'mm',
+    'in',
+    { min: 0 },
+  ),
+];
+
+function stackFields(
+  prefix: 'holder' | 'equaliser',
+  title: string,
+  series: number,
+  pitch: number,
+  backOff: number,
+): FieldDefinition[] {
+  return [
+    flag(S, `${prefix}Enabled`, `${title}: include`, true),
+    qty(S, `${prefix}De`, `${title}: disc outer diameter`, 'D_e', 'length', 40, 'mm', 'in', {
+      min: 0,
+      exclusiveMin: true,
+    }),
+    qty(S, `${prefix}Di`, `${title}: disc inner diameter`, 'D_i', 'length', 20.4, 'mm', 'in', {
+      min: 0,
+      exclusiveMin: true,
+    }),
+    qty(S, `${prefix}T`, `${title}: disc thickness`, 't', 'length', 1.5, 'mm', 'in', {
+      min: 0,
+      exclusiveMin: true,
+    }),
+    qty(S, `${prefix}L0`, `${title}: disc free height`, 'l_0', 'length', 2.65, 'mm', 'in', {
+      min: 0,
+      exclusiveMin: true,
+    }),
+    num(
+      S,
+      `${prefix}Series`,
+      `${title}: discs (sets) in series`,
+      'i',
+      series,
+      { min: 1, max: 50 },
+      true,
+    ),
+    num(
+      S,
+      `${prefix}Parallel`,
+      `${title}: discs in parallel per set`,
+      'n',
+      1,
+      { min: 1, max: 6 },
+      true,
+    ),
+    qty(S, `${prefix}Pitch`, `${title}: thread pitch (lead)`, 'P', 'length', pitch, 'mm', 'in', {
+      min: 0,
+      exclusiveMin: true,
+    }),
+    qty(
+      S,
+      `${prefix}BackOff`,
+      `${title}: back-off angle from flat`,
+      'θ',
+      'angle',
+      backOff,
+      'deg',
+      'deg',
+      { min: 0, max: 3600 },
+    ),
+  ];
+}
+
+/** Optional disc-spring stacks (common practice: holder flat then about 60°, equaliser stack of three flat then about 180°). */
+export const DISC_SPRING_FIELDS: FieldDefinition[] = [
+  ...stackFields('holder', 'Shoe holder', 1, 2.5, 60),
+  ...stackFields('equaliser', 'Equaliser', 3, 2, 180),
+];
+
+export const SHOE_BRAKE_FIELDS: FieldDefinition[] = [
+  ...BRAKE_FIELDS,
+  ...LINING_FIELDS,
+  ...THERMAL_FIELDS,
+  ...RELEASE_FIELDS,
+  ...DISC_SPRING_FIELDS,
+];
