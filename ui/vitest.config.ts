@@ -10,5 +10,7 @@ export default defineConfig({
     include: ['src/**/*.test.{ts,tsx}'],
     environment: 'jsdom',
     setupFiles: ['./src/testing/setup.ts'],
+    // Mantine screens mount slowly in jsdom while other suites run beside them.
+    testTimeout: 20000,
   },
 });

@@ -46,7 +46,7 @@ function prepare(options: RenderOptions) {
 /** Render a component inside Mantine (test env), a fresh QueryClient and a MemoryRouter. */
 export function renderWithProviders(ui: ReactElement, options: RenderOptions = {}) {
   const queryClient = prepare(options);
-  const user = userEvent.setup();
+  const user = userEvent.setup({ delay: null });
   const result = render(
     <Providers queryClient={queryClient}>
       <MemoryRouter initialEntries={[options.route ?? '/']}>{ui}</MemoryRouter>
@@ -58,8 +58,11 @@ export function renderWithProviders(ui: ReactElement, options: RenderOptions = {
 /** Render route objects in a memory data router, for loaders, handles and redirects. */
 export function renderRoutes(routes: RouteObject[], options: RenderOptions = {}) {
   const queryClient = prepare(options);
-  const user = userEvent.setup();
-  const router = createMemoryRouter(routes, { initialEntries: [options.route ?? '/'] });
+  const user = userEvent.setup({ delay: null });
+  // A pathless root with a fallback keeps the router quiet while the first loaders run.
+  const router = createMemoryRouter([{ HydrateFallback: () => null, children: routes }], {
+    initialEntries: [options.route ?? '/'],
+  });
   const result = render(
     <Providers queryClient={queryClient}>
       <RouterProvider router={router} />

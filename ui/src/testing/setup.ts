@@ -1,6 +1,9 @@
 import '@testing-library/jest-dom/vitest';
-import { cleanup } from '@testing-library/react';
+import { cleanup, configure } from '@testing-library/react';
 import { afterEach, vi } from 'vitest';
+
+// Mantine pages take a while to mount in jsdom on a busy machine; 1 s is too tight.
+configure({ asyncUtilTimeout: 5000 });
 
 // jsdom lacks a few browser APIs that Mantine calls.
 const { getComputedStyle } = window;

@@ -16,6 +16,12 @@ export function describeRouteError(error: unknown): ErrorDescription | null {
     if (error.status === 404)
       return { status: 404, title: 'Not found', message: 'There is nothing at this address.' };
     const data = typeof error.data === 'string' ? error.data : error.statusText;
+    if (error.status === 403)
+      return {
+        status: 403,
+        title: 'Not allowed',
+        message: data || 'Your role does not allow this.',
+      };
     return {
       status: error.status,
       title: `Error ${error.status}`,
