@@ -38,9 +38,9 @@ export const leverBrakeFixture: SheetTypeDefinition = {
         return fallback;
       }
     };
-    const required = read(() => parseQuantity(inputs.requiredTorque, 'torque', 'requiredTorque'), 0);
-    const force = read(() => parseQuantity(inputs.springForce, 'force', 'springForce'), 0);
-    const diameter = read(() => parseQuantity(inputs.drumDiameter, 'length', 'drumDiameter'), 0);
+    const required = read<number>(() => parseQuantity(inputs.requiredTorque, 'torque', 'requiredTorque'), 0);
+    const force = read<number>(() => parseQuantity(inputs.springForce, 'force', 'springForce'), 0);
+    const diameter = read<number>(() => parseQuantity(inputs.drumDiameter, 'length', 'drumDiameter'), 0);
     const ratio = typeof inputs.leverRatio === 'number' ? inputs.leverRatio : Number.NaN;
     const mu = typeof inputs.mu === 'number' ? inputs.mu : Number.NaN;
     if (!(ratio > 0)) errors.push({ field: 'leverRatio', message: 'must be a number greater than 0' });
