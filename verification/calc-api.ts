@@ -5,14 +5,41 @@
 export * as discSprings from '../calc/src/disc-springs/index.js';
 export { toSI, fromSI } from '../calc/src/units/conversion.js';
 export {
-  length, force, torque, power, speed, angularSpeed, mass, inertia, pressure, energy, time, ratio,
-  degrees, rpm, stiffness, specificHeat, angle,
+  length,
+  force,
+  torque,
+  power,
+  speed,
+  angularSpeed,
+  mass,
+  inertia,
+  pressure,
+  energy,
+  time,
+  ratio,
+  degrees,
+  rpm,
+  stiffness,
+  specificHeat,
+  angle,
 } from '../calc/src/units/quantities.js';
 export { CORE_VERSION } from '../calc/src/version.js';
-export { shoeMomentCoefficients, shoeFromActuatingForce, actuatingForce } from '../calc/src/shoe-brake/general-shoe.js';
-export { pivotDistance, pivotedNormalForce, pivotedShoeTorque } from '../calc/src/shoe-brake/pivoted-shoe.js';
+export {
+  shoeMomentCoefficients,
+  shoeFromActuatingForce,
+  actuatingForce,
+} from '../calc/src/shoe-brake/general-shoe.js';
+export {
+  pivotDistance,
+  pivotedNormalForce,
+  pivotedShoeTorque,
+} from '../calc/src/shoe-brake/pivoted-shoe.js';
 export { shortShoeTorque } from '../calc/src/shoe-brake/short-shoe.js';
-export { caliperTorque, uniformWearRadius, uniformPressureRadius } from '../calc/src/disc-brake/caliper.js';
+export {
+  caliperTorque,
+  uniformWearRadius,
+  uniformPressureRadius,
+} from '../calc/src/disc-brake/caliper.js';
 export { bandBrake } from '../calc/src/band-brake/band.js';
 export { rotatingEnergy, linearEnergy, potentialEnergy } from '../calc/src/energy/stop-energy.js';
 export { temperatureRise } from '../calc/src/energy/heat.js';

@@ -17,8 +17,17 @@ export type Family =
   | 'spring-setting';
 
 export const FAMILIES: readonly Family[] = [
-  'duty', 'shoe-brake', 'pivoted-shoe', 'caliper', 'band-brake', 'energy-heat', 'stopping',
-  'release-stroke', 'disc-springs', 'thread-back-off', 'spring-setting',
+  'duty',
+  'shoe-brake',
+  'pivoted-shoe',
+  'caliper',
+  'band-brake',
+  'energy-heat',
+  'stopping',
+  'release-stroke',
+  'disc-springs',
+  'thread-back-off',
+  'spring-setting',
 ];
 
 /** published: printed in the source; secondary: a copy or derived source; derived: computed by us from a published formula; memory: recalled. */
@@ -77,7 +86,12 @@ export function checkCase(c: VerificationCase): CaseOutcome {
   try {
     got = c.run();
   } catch (e) {
-    return { case: c, rows: [], error: e instanceof Error ? `${e.name}: ${e.message}` : String(e), pass: false };
+    return {
+      case: c,
+      rows: [],
+      error: e instanceof Error ? `${e.name}: ${e.message}` : String(e),
+      pass: false,
+    };
   }
   const rows = c.expected.map((x): CaseRow => {
     const g = got[x.key];
@@ -85,10 +99,22 @@ export function checkCase(c: VerificationCase): CaseOutcome {
     const deviation = x.value !== 0 ? diff / Math.abs(x.value) : diff;
     const okRel = x.rel !== undefined && Math.abs(diff) <= x.rel * Math.abs(x.value);
     const okAbs = x.abs !== undefined && Math.abs(diff) <= x.abs;
-    const tol = [x.rel !== undefined ? `±${+(x.rel * 100).toPrecision(3)} %` : '', x.abs !== undefined ? `±${x.abs} ${x.unit}` : '']
+    const tol = [
+      x.rel !== undefined ? `±${+(x.rel * 100).toPrecision(3)} %` : '',
+      x.abs !== undefined ? `±${x.abs} ${x.unit}` : '',
+    ]
       .filter(Boolean)
       .join(' or ');
-    return { key: x.key, label: x.label, unit: x.unit, expected: x.value, got: g, deviation, tolerance: tol, pass: Number.isFinite(g) && (okRel || okAbs) };
+    return {
+      key: x.key,
+      label: x.label,
+      unit: x.unit,
+      expected: x.value,
+      got: g,
+      deviation,
+      tolerance: tol,
+      pass: Number.isFinite(g) && (okRel || okAbs),
+    };
   });
   return { case: c, rows, pass: rows.length > 0 && rows.every((r) => r.pass) };
 }

@@ -25,7 +25,9 @@ export function renderReport(outcomes: CaseOutcome[], coreVersion: string): stri
   for (const f of FAMILIES) {
     const of = outcomes.filter((o) => o.case.family === f);
     const counts = CONFIDENCES.map((c) => of.filter((o) => o.case.confidence === c).length);
-    lines.push(`| ${f} | ${counts.join(' | ')} | ${of.length} | ${of.filter((o) => o.pass).length} |`);
+    lines.push(
+      `| ${f} | ${counts.join(' | ')} | ${of.length} | ${of.filter((o) => o.pass).length} |`,
+    );
   }
   const totals = CONFIDENCES.map((c) => outcomes.filter((o) => o.case.confidence === c).length);
   lines.push(`| **all** | ${totals.join(' | ')} | ${outcomes.length} | ${passed} |`, '');
@@ -38,12 +40,22 @@ export function renderReport(outcomes: CaseOutcome[], coreVersion: string): stri
       lines.push(`### ${c.id} — ${c.title} ${o.pass ? '✅ pass' : '❌ FAIL'}`, '');
       lines.push(`- Source: ${c.source}`);
       lines.push(`- Confidence: ${c.confidence}`);
-      lines.push(`- Inputs: ${Object.entries(c.inputs).map(([k, v]) => `${k} = ${v}`).join('; ')}`);
+      lines.push(
+        `- Inputs: ${Object.entries(c.inputs)
+          .map(([k, v]) => `${k} = ${v}`)
+          .join('; ')}`,
+      );
       lines.push(`- Tolerance: ${c.toleranceNote}`);
       if (o.error) lines.push(`- **Error:** ${o.error}`);
-      lines.push('', '| quantity | unit | expected | got | deviation | tolerance | pass |', '|---|---|---:|---:|---:|---|---|');
+      lines.push(
+        '',
+        '| quantity | unit | expected | got | deviation | tolerance | pass |',
+        '|---|---|---:|---:|---:|---|---|',
+      );
       for (const r of o.rows) {
-        lines.push(`| ${cell(r.label)} | ${r.unit} | ${num(r.expected)} | ${num(r.got)} | ${pct(r.deviation)} | ${r.tolerance} | ${r.pass ? 'yes' : '**no**'} |`);
+        lines.push(
+          `| ${cell(r.label)} | ${r.unit} | ${num(r.expected)} | ${num(r.got)} | ${pct(r.deviation)} | ${r.tolerance} | ${r.pass ? 'yes' : '**no**'} |`,
+        );
       }
       lines.push('');
     }

@@ -7,7 +7,10 @@ describe('verification cases', () => {
     const outcome = checkCase(c);
     expect(outcome.error, outcome.error).toBeUndefined();
     for (const r of outcome.rows) {
-      expect(r.pass, `${r.label}: expected ${r.expected} ${r.unit} (${r.tolerance}), got ${r.got}`).toBe(true);
+      expect(
+        r.pass,
+        `${r.label}: expected ${r.expected} ${r.unit} (${r.tolerance}), got ${r.got}`,
+      ).toBe(true);
     }
   });
 
@@ -18,7 +21,8 @@ describe('verification cases', () => {
       expect(c.source.length, c.id).toBeGreaterThan(10);
       expect(c.toleranceNote.length, c.id).toBeGreaterThan(5);
       expect(c.expected.length, c.id).toBeGreaterThan(0);
-      for (const x of c.expected) expect(x.rel !== undefined || x.abs !== undefined, `${c.id} ${x.key}`).toBe(true);
+      for (const x of c.expected)
+        expect(x.rel !== undefined || x.abs !== undefined, `${c.id} ${x.key}`).toBe(true);
     }
   });
 

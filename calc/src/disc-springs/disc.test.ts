@@ -1,6 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { isCalcInputError } from '../core/errors.js';
-import { discConstants, discFlatForce, discForce, discStiffness, discStresses, TABLE_STEEL } from './disc.js';
+import {
+  discConstants,
+  discFlatForce,
+  discForce,
+  discStiffness,
+  discStresses,
+  TABLE_STEEL,
+} from './disc.js';
 import { k1, k4 } from './factors.js';
 import { validateDisc, validateDeflection } from './validate.js';
 
@@ -48,7 +55,7 @@ describe('single disc force', () => {
     const c = discConstants(d);
     expect(discFlatForce(d, c)).toBeCloseTo(discForce(d, c.h0, c), 6);
     // flat load of a linear-ish A disc: F_c = 4E/(1−ν²)·t³·h0/(K1·De²)
-    const fc = ((4 * 206e9) / 0.91) * (2.25e-3) ** 3 * 0.9e-3 / (c.K1 * 0.04 ** 2);
+    const fc = (((4 * 206e9) / 0.91) * 2.25e-3 ** 3 * 0.9e-3) / (c.K1 * 0.04 ** 2);
     expect(discFlatForce(d, c) / fc).toBeCloseTo(1, 10);
   });
 
@@ -114,7 +121,8 @@ describe('standard sizes table', () => {
     for (const r of STANDARD_DISC_SIZES) {
       const d = disc(r.De, r.Di, r.t, r.l0, r.tReduced);
       const F = discForce(d, 0.75 * (r.l0 - r.t) * mm);
-      const tol = r.confidence === 'published' ? 0.025 : r.confidence === 'secondary' ? 0.005 : 0.01;
+      const tol =
+        r.confidence === 'published' ? 0.025 : r.confidence === 'secondary' ? 0.005 : 0.01;
       expect(Math.abs(F / r.force075 - 1), r.designation).toBeLessThan(tol);
     }
   });

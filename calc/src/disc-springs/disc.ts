@@ -90,12 +90,16 @@ export function discFlatForce(d: DiscSpring, c: DiscConstants = discConstants(d)
  * Stiffness dF/ds of one disc at s (derivative of the force relation), N/m.
  * Negative beyond the force maximum of discs with K4·h0/t > √2.
  */
-export function discStiffness(d: DiscSpring, s: number, c: DiscConstants = discConstants(d)): number {
+export function discStiffness(
+  d: DiscSpring,
+  s: number,
+  c: DiscConstants = discConstants(d),
+): number {
   const t = c.tCalc;
   const ht = c.h0 / t;
   const st = s / t;
   const k44 = c.K4 * c.K4;
-  const pre = (c.modulusTerm * t ** 3) / (c.K1 * d.De * d.De) * k44;
+  const pre = ((c.modulusTerm * t ** 3) / (c.K1 * d.De * d.De)) * k44;
   return pre * (k44 * (ht * ht - 3 * ht * st + 1.5 * st * st) + 1);
 }
 

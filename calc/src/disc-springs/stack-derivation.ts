@@ -70,28 +70,48 @@ export function deriveStackSet(input: StackSetInput, d: Derivation, prefix = '')
   const setRatio = d.step(f.fRatio, { s, h0 }, o('set-ratio'));
   const base = { E: disc.E, nu: disc.nu, t, K1, K4, De: disc.De, h0 };
   const F1 = d.step(f.fDiscForce, { ...base, s }, o('disc-force'));
-  const Fc = d.step(f.fDiscForce, { ...base, s: h0 }, {
-    ...o('flat-force'), label: 'Flat load of one disc (s = h₀)', symbol: 'F_c',
-  });
+  const Fc = d.step(
+    f.fDiscForce,
+    { ...base, s: h0 },
+    {
+      ...o('flat-force'),
+      label: 'Flat load of one disc (s = h₀)',
+      symbol: 'F_c',
+    },
+  );
   const Fn = d.step(f.fStackNominal, { n, F1 }, o('stack-force'));
   const fr = { Fn, wM: stack.frictionCone, wR: stack.frictionEdge, n };
   const Fload = d.step(f.fStackLoading, fr, o('stack-force-loading'));
   const Funload = d.step(f.fStackUnloading, fr, {
-    ...o('preload'), label: 'Preload after back-off (stack unloading, with friction)', symbol: 'F_V',
+    ...o('preload'),
+    label: 'Preload after back-off (stack unloading, with friction)',
+    symbol: 'F_V',
   });
   const flatNominal = n * Fc;
-  const flatStackLoading = d.step(f.fStackLoading, { ...fr, Fn: flatNominal }, {
-    ...o('flat-stack-force'), label: 'Stack force at flat while tightening', symbol: 'F_c,load',
-  });
+  const flatStackLoading = d.step(
+    f.fStackLoading,
+    { ...fr, Fn: flatNominal },
+    {
+      ...o('flat-stack-force'),
+      label: 'Stack force at flat while tightening',
+      symbol: 'F_c,load',
+    },
+  );
   const sv = { ...base, K2, K3, d: delta, s };
   const OM = d.step(f.fSigmaOM, sv, o('sigma-OM'));
   const I = d.step(f.fSigmaI, sv, o('sigma-I'));
   const II = d.step(f.fSigmaII, sv, o('sigma-II'));
   const III = d.step(f.fSigmaIII, sv, o('sigma-III'));
   const IV = d.step(f.fSigmaIV, sv, o('sigma-IV'));
-  const sigmaOMFlat = d.step(f.fSigmaOM, { ...sv, s: h0 }, {
-    ...o('sigma-OM-flat'), label: 'Stress OM at flat (s = h₀)', symbol: 'σ_OM,c',
-  });
+  const sigmaOMFlat = d.step(
+    f.fSigmaOM,
+    { ...sv, s: h0 },
+    {
+      ...o('sigma-OM-flat'),
+      label: 'Stress OM at flat (s = h₀)',
+      symbol: 'σ_OM,c',
+    },
+  );
   const L0 = d.step(f.fFreeLength, { i, n, l0: disc.l0, t }, o('free-length'));
   const Lc = d.step(f.fFlatLength, { i, n, t }, o('flat-length'));
   const L1 = d.step(f.fSetLength, { L0, i, s }, o('set-length'));

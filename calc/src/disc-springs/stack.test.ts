@@ -29,7 +29,7 @@ describe('stacks', () => {
     // Rule of thumb published by a disc-spring maker (reference-values §1).
     const f = 5000;
     const w = 0.03 * 2;
-    expect(3 * f / (1 - w)).toBeGreaterThan(15900 * 0.99);
+    expect((3 * f) / (1 - w)).toBeGreaterThan(15900 * 0.99);
     const st = stack(1, 3, 0.03, 0);
     const forces = stackForces(st, 0.5e-3);
     expect(forces.loading).toBeGreaterThan(forces.nominal);
@@ -90,7 +90,15 @@ describe('working band and stack validation', () => {
     } catch (e) {
       expect(isCalcInputError(e)).toBe(true);
       const f = (e as { fields: { field: string }[] }).fields.map((x) => x.field);
-      expect(f).toEqual(expect.arrayContaining(['Di', 'seriesCount', 'parallelCount', 'frictionCone', 'frictionEdge']));
+      expect(f).toEqual(
+        expect.arrayContaining([
+          'Di',
+          'seriesCount',
+          'parallelCount',
+          'frictionCone',
+          'frictionEdge',
+        ]),
+      );
     }
   });
 });

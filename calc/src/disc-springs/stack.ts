@@ -54,6 +54,9 @@ export function stackFlatLength(st: DiscStack, c: DiscConstants = discConstants(
 }
 
 /** Total stack travel from free to flat, i·h0, m. */
-export function stackTravelToFlat(st: DiscStack, c: DiscConstants = discConstants(st.disc)): number {
+export function stackTravelToFlat(
+  st: DiscStack,
+  c: DiscConstants = discConstants(st.disc),
+): number {
   return st.seriesCount * c.h0;
 }

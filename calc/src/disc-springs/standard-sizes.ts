@@ -22,10 +22,11 @@ export interface StandardDiscSize {
 }
 
 const CATALOGUE_1992 =
-  'DIN 2093:1992 series A, as reproduced in a disc-spring maker\'s public catalogue (forces scatter −1.3 … +2.0 % about the formula)';
+  "DIN 2093:1992 series A, as reproduced in a disc-spring maker's public catalogue (forces scatter −1.3 … +2.0 % about the formula)";
 const CODE_TABLE_2006 =
   'DIN 2093 group 2, as tabulated to three significant figures in a public source-code constant table (secondary)';
-const MEMORY_G3 = 'DIN 2093 group 3 row recalled from memory: check the standard or the maker\'s catalogue';
+const MEMORY_G3 =
+  "DIN 2093 group 3 row recalled from memory: check the standard or the maker's catalogue";
 
 const row = (
   designation: string,

@@ -19,7 +19,10 @@ export function validateDisc(d: DiscSpring, collector?: FieldErrorCollector): vo
     out.add(f('Di'), 'inner diameter Di must be smaller than outer diameter De');
   }
   if (finite(d.t) && finite(d.l0) && d.l0 <= d.t) {
-    out.add(f('l0'), 'free height l0 must exceed the thickness t (the cone height h0 = l0 − t must be positive)');
+    out.add(
+      f('l0'),
+      'free height l0 must exceed the thickness t (the cone height h0 = l0 − t must be positive)',
+    );
   }
   if (d.tReduced !== undefined) {
     if (!finite(d.tReduced) || d.tReduced <= 0) {
@@ -45,7 +48,8 @@ export function validateStack(st: DiscStack, out = new FieldErrorCollector()): v
     out.add('parallelCount', 'discs in parallel must be a whole number from 1 to 10');
   }
   for (const k of ['frictionCone', 'frictionEdge'] as const) {
-    if (!finite(st[k]) || st[k] < 0 || st[k] >= 0.2) out.add(k, 'friction factor must be in [0, 0.2)');
+    if (!finite(st[k]) || st[k] < 0 || st[k] >= 0.2)
+      out.add(k, 'friction factor must be in [0, 0.2)');
   }
   if (out.errors.length === 0) {
     const n = Number.isInteger(st.parallelCount) ? st.parallelCount : 1;

@@ -1,5 +1,10 @@
 import fc from 'fast-check';
-import type { FieldDefinition, InputValue, SheetInputs, SheetTypeDefinition } from '../core/types.js';
+import type {
+  FieldDefinition,
+  InputValue,
+  SheetInputs,
+  SheetTypeDefinition,
+} from '../core/types.js';
 import { fromSI, toSI } from '../units/conversion.js';
 import { DIMENSIONS } from '../units/unit-table.js';
 
@@ -15,7 +20,8 @@ function bounds(f: FieldDefinition): [number, number] {
 export function defaultSI(f: FieldDefinition): number {
   const d = f.default;
   if (typeof d === 'number') return d;
-  if (typeof d === 'object' && d !== null) return toSI(d.value, d.unit, f.dimension ?? 'dimensionless');
+  if (typeof d === 'object' && d !== null)
+    return toSI(d.value, d.unit, f.dimension ?? 'dimensionless');
   return 0;
 }
 
@@ -32,7 +38,13 @@ export function fieldValueArb(f: FieldDefinition): fc.Arbitrary<InputValue> {
     }
     default: {
       const [lo, hi] = bounds(f);
-      const v = fc.double({ min: lo, max: hi, noNaN: true, noDefaultInfinity: true, minExcluded: f.exclusiveMin === true });
+      const v = fc.double({
+        min: lo,
+        max: hi,
+        noNaN: true,
+        noDefaultInfinity: true,
+        minExcluded: f.exclusiveMin === true,
+      });
       if (f.kind === 'number') return v;
       const unit = f.unitSI ?? DIMENSIONS[f.dimension ?? 'dimensionless'].siUnit;
       return v.map((x) => ({ value: fromSI(x, unit, f.dimension ?? 'dimensionless'), unit }));
@@ -50,7 +62,8 @@ export function nearDefaultArb(f: FieldDefinition): fc.Arbitrary<InputValue> {
   const def = defaultSI(f);
   const [lo, hi] = bounds(f);
   const clip = (x: number) => Math.min(hi, Math.max(lo, x));
-  if (f.kind === 'integer') return fc.integer({ min: Math.ceil(clip(def - 2)), max: Math.floor(clip(def + 2)) });
+  if (f.kind === 'integer')
+    return fc.integer({ min: Math.ceil(clip(def - 2)), max: Math.floor(clip(def + 2)) });
   const v = fc.double({ min: 0.6, max: 1.6, noNaN: true }).map((k) => clip(def * k));
   if (f.kind === 'number') return v;
   const unit = f.unitSI ?? DIMENSIONS[f.dimension ?? 'dimensionless'].siUnit;
@@ -58,7 +71,10 @@ export function nearDefaultArb(f: FieldDefinition): fc.Arbitrary<InputValue> {
 }
 
 /** Random complete inputs for a sheet type, each field inside its bounds (full range or near the default). */
-export function sheetInputsArb(sheet: SheetTypeDefinition, mode: 'full' | 'near' = 'full'): fc.Arbitrary<SheetInputs> {
+export function sheetInputsArb(
+  sheet: SheetTypeDefinition,
+  mode: 'full' | 'near' = 'full',
+): fc.Arbitrary<SheetInputs> {
   const rec: Record<string, fc.Arbitrary<InputValue>> = {};
   for (const f of sheet.fields) rec[f.key] = mode === 'full' ? fieldValueArb(f) : nearDefaultArb(f);
   return fc.record(rec);
@@ -87,9 +103,22 @@ export function invalidValues(f: FieldDefinition): InputValue[] {
       break;
     case 'quantity': {
       const unit = f.unitSI ?? DIMENSIONS[f.dimension ?? 'dimensionless'].siUnit;
-      out.push({ value: Number.NaN, unit }, { value: 1, unit: f.dimension === 'force' ? 'mm' : 'kN' }, 'not a number');
-      if (f.min !== undefined) out.push({ value: fromSI(f.min - Math.max(1e-6, Math.abs(f.min)), unit, f.dimension ?? 'dimensionless'), unit });
-      if (f.max !== undefined) out.push({ value: fromSI(f.max * 2 + 1, unit, f.dimension ?? 'dimensionless'), unit });
+      out.push(
+        { value: Number.NaN, unit },
+        { value: 1, unit: f.dimension === 'force' ? 'mm' : 'kN' },
+        'not a number',
+      );
+      if (f.min !== undefined)
+        out.push({
+          value: fromSI(
+            f.min - Math.max(1e-6, Math.abs(f.min)),
+            unit,
+            f.dimension ?? 'dimensionless',
+          ),
+          unit,
+        });
+      if (f.max !== undefined)
+        out.push({ value: fromSI(f.max * 2 + 1, unit, f.dimension ?? 'dimensionless'), unit });
       break;
     }
     default:

@@ -7,7 +7,13 @@ import { allNumbers, defaultsInUS, invalidValues, sheetInputsArb } from './sheet
 
 /** Sheet types under test; the registry's list once it exists. */
 const SHEETS: SheetTypeDefinition[] = [discSpringStackSheet];
-const criteria: CriteriaSet = { id: 'property-tests', version: 1, name: 'property tests', description: '', values: [] };
+const criteria: CriteriaSet = {
+  id: 'property-tests',
+  version: 1,
+  name: 'property tests',
+  description: '',
+  values: [],
+};
 
 describe.each(SHEETS.map((s) => [s.id, s] as const))('sheet %s: properties', (_id, sheet) => {
   const keys = new Set(sheet.fields.map((f) => f.key));
@@ -26,12 +32,21 @@ describe.each(SHEETS.map((s) => [s.id, s] as const))('sheet %s: properties', (_i
   };
 
   it('never yields NaN or Infinity: any input inside the field bounds evaluates finite or fails with named fields', () => {
-    fc.assert(fc.property(sheetInputsArb(sheet, 'full'), (inputs) => void finiteOrNamedError(inputs)), { numRuns: 300 });
+    fc.assert(
+      fc.property(sheetInputsArb(sheet, 'full'), (inputs) => void finiteOrNamedError(inputs)),
+      { numRuns: 300 },
+    );
   });
 
   it('inputs near the defaults mostly evaluate, and always to finite numbers', () => {
     let evaluated = 0;
-    fc.assert(fc.property(sheetInputsArb(sheet, 'near'), (inputs) => void (finiteOrNamedError(inputs) && evaluated++)), { numRuns: 200 });
+    fc.assert(
+      fc.property(
+        sheetInputsArb(sheet, 'near'),
+        (inputs) => void (finiteOrNamedError(inputs) && evaluated++),
+      ),
+      { numRuns: 200 },
+    );
     expect(evaluated).toBeGreaterThan(50);
   });
 

@@ -24,11 +24,19 @@ describe('unit round trips', () => {
 
   it('SI → US customary display → parse back to SI returns the value', () => {
     fc.assert(
-      fc.property(fc.constantFrom(...dims.filter((d) => d !== 'temperature')), fc.double({ min: 1e-3, max: 1e6, noNaN: true }), (dim, v) => {
-        const shown = toDisplay(v, dim, 'US', undefined, 17);
-        const back = parseQuantity({ value: shown.value, unit: displayUnitFor(dim, 'US') }, dim, 'x');
-        expect(Math.abs(back - v)).toBeLessThanOrEqual(1e-9 * Math.abs(v));
-      }),
+      fc.property(
+        fc.constantFrom(...dims.filter((d) => d !== 'temperature')),
+        fc.double({ min: 1e-3, max: 1e6, noNaN: true }),
+        (dim, v) => {
+          const shown = toDisplay(v, dim, 'US', undefined, 17);
+          const back = parseQuantity(
+            { value: shown.value, unit: displayUnitFor(dim, 'US') },
+            dim,
+            'x',
+          );
+          expect(Math.abs(back - v)).toBeLessThanOrEqual(1e-9 * Math.abs(v));
+        },
+      ),
       { numRuns: 200 },
     );
   });

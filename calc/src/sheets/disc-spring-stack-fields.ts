@@ -12,14 +12,42 @@ export const DISC_STACK_SECTIONS: SectionDefinition[] = [
 export const sectionOf = (k: StackKey) => (k === 'a' ? 'stackA' : 'stackB');
 
 const mm = (value: number) => ({ value, unit: 'mm' });
-const len = (key: string, section: string, label: string, symbol: string, value: number, min: number, max: number, help?: string): FieldDefinition => ({
-  key, section, label, symbol, kind: 'quantity', dimension: 'length', unitSI: 'mm', unitUS: 'in',
-  default: mm(value), min: min / 1000, max: max / 1000, help,
+const len = (
+  key: string,
+  section: string,
+  label: string,
+  symbol: string,
+  value: number,
+  min: number,
+  max: number,
+  help?: string,
+): FieldDefinition => ({
+  key,
+  section,
+  label,
+  symbol,
+  kind: 'quantity',
+  dimension: 'length',
+  unitSI: 'mm',
+  unitUS: 'in',
+  default: mm(value),
+  min: min / 1000,
+  max: max / 1000,
+  help,
 });
 
 interface StackDefaults {
-  De: number; Di: number; t: number; l0: number; series: number; parallel: number;
-  pitch: number; angle: number; required: number; enabled: boolean; size: string;
+  De: number;
+  Di: number;
+  t: number;
+  l0: number;
+  series: number;
+  parallel: number;
+  pitch: number;
+  angle: number;
+  required: number;
+  enabled: boolean;
+  size: string;
 }
 
 /**
@@ -29,33 +57,166 @@ interface StackDefaults {
  * are ISO 261 coarse pitches (M20 2.5 mm, M24 3.0 mm; secondary copy).
  */
 const DEFAULTS: Record<StackKey, StackDefaults> = {
-  a: { De: 40, Di: 20.4, t: 2.25, l0: 3.15, series: 1, parallel: 1, pitch: 2.5, angle: 60, required: 3000, enabled: true, size: 'A 40 on M20' },
-  b: { De: 50, Di: 25.4, t: 2.0, l0: 3.4, series: 3, parallel: 1, pitch: 3.0, angle: 180, required: 3000, enabled: true, size: 'B 50 ×3 on M24' },
+  a: {
+    De: 40,
+    Di: 20.4,
+    t: 2.25,
+    l0: 3.15,
+    series: 1,
+    parallel: 1,
+    pitch: 2.5,
+    angle: 60,
+    required: 3000,
+    enabled: true,
+    size: 'A 40 on M20',
+  },
+  b: {
+    De: 50,
+    Di: 25.4,
+    t: 2.0,
+    l0: 3.4,
+    series: 3,
+    parallel: 1,
+    pitch: 3.0,
+    angle: 180,
+    required: 3000,
+    enabled: true,
+    size: 'B 50 ×3 on M24',
+  },
 };
 
 function stackFields(k: StackKey): FieldDefinition[] {
   const s = sectionOf(k);
   const d = DEFAULTS[k];
   return [
-    { key: `${k}Enabled`, section: s, label: 'Include this stack', symbol: '', kind: 'boolean', default: d.enabled },
+    {
+      key: `${k}Enabled`,
+      section: s,
+      label: 'Include this stack',
+      symbol: '',
+      kind: 'boolean',
+      default: d.enabled,
+    },
     len(`${k}De`, s, 'Outer diameter', 'D_e', d.De, 1, 1000, `Demo: ${d.size}`),
     len(`${k}Di`, s, 'Inner diameter', 'D_i', d.Di, 0.5, 999),
     len(`${k}t`, s, 'Disc thickness', 't', d.t, 0.05, 80),
-    len(`${k}l0`, s, 'Free height of one disc', 'l₀', d.l0, 0.06, 120, 'thickness plus cone height'),
-    len(`${k}tReduced`, s, 'Reduced thickness t′ (group 3 with contact flats, 0 = none)', 't′', 0, 0, 80),
-    { key: `${k}Series`, section: s, label: 'Sets in series', symbol: 'i', kind: 'integer', default: d.series, min: 1, max: 50 },
-    { key: `${k}Parallel`, section: s, label: 'Discs in parallel per set', symbol: 'n', kind: 'integer', default: d.parallel, min: 1, max: 6 },
-    { key: `${k}FrictionCone`, section: s, label: 'Friction factor between nested discs', symbol: 'w_M', kind: 'number', default: 0.02, min: 0, max: 0.15, help: 'DIN EN 16984 typical values (from memory): series A 0.02–0.03, B 0.015–0.025, C 0.01–0.015' },
-    { key: `${k}FrictionEdge`, section: s, label: 'Friction factor at the load edges', symbol: 'w_R', kind: 'number', default: 0.03, min: 0, max: 0.15, help: 'DIN EN 16984 typical values (from memory): series A 0.03–0.05, B 0.02–0.04, C 0.01–0.03' },
+    len(
+      `${k}l0`,
+      s,
+      'Free height of one disc',
+      'l₀',
+      d.l0,
+      0.06,
+      120,
+      'thickness plus cone height',
+    ),
+    len(
+      `${k}tReduced`,
+      s,
+      'Reduced thickness t′ (group 3 with contact flats, 0 = none)',
+      't′',
+      0,
+      0,
+      80,
+    ),
+    {
+      key: `${k}Series`,
+      section: s,
+      label: 'Sets in series',
+      symbol: 'i',
+      kind: 'integer',
+      default: d.series,
+      min: 1,
+      max: 50,
+    },
+    {
+      key: `${k}Parallel`,
+      section: s,
+      label: 'Discs in parallel per set',
+      symbol: 'n',
+      kind: 'integer',
+      default: d.parallel,
+      min: 1,
+      max: 6,
+    },
+    {
+      key: `${k}FrictionCone`,
+      section: s,
+      label: 'Friction factor between nested discs',
+      symbol: 'w_M',
+      kind: 'number',
+      default: 0.02,
+      min: 0,
+      max: 0.15,
+      help: 'DIN EN 16984 typical values (from memory): series A 0.02–0.03, B 0.015–0.025, C 0.01–0.015',
+    },
+    {
+      key: `${k}FrictionEdge`,
+      section: s,
+      label: 'Friction factor at the load edges',
+      symbol: 'w_R',
+      kind: 'number',
+      default: 0.03,
+      min: 0,
+      max: 0.15,
+      help: 'DIN EN 16984 typical values (from memory): series A 0.03–0.05, B 0.02–0.04, C 0.01–0.03',
+    },
     len(`${k}Pitch`, s, 'Thread lead (pitch of a single-start thread)', 'P', d.pitch, 0.2, 12),
-    { key: `${k}BackOff`, section: s, label: 'Back-off angle from flat', symbol: 'θ', kind: 'quantity', dimension: 'angle', unitSI: 'deg', unitUS: 'deg', default: { value: d.angle, unit: 'deg' }, min: 0, max: 6 * Math.PI, help: 'Tighten until every disc is flat (nut torque rises sharply), then back off this angle and lock.' },
-    { key: `${k}RequiredPreload`, section: s, label: 'Required preload (0 = none)', symbol: 'F_req', kind: 'quantity', dimension: 'force', unitSI: 'N', unitUS: 'lbf', default: { value: d.required, unit: 'N' }, min: 0, max: 5e6 },
+    {
+      key: `${k}BackOff`,
+      section: s,
+      label: 'Back-off angle from flat',
+      symbol: 'θ',
+      kind: 'quantity',
+      dimension: 'angle',
+      unitSI: 'deg',
+      unitUS: 'deg',
+      default: { value: d.angle, unit: 'deg' },
+      min: 0,
+      max: 6 * Math.PI,
+      help: 'Tighten until every disc is flat (nut torque rises sharply), then back off this angle and lock.',
+    },
+    {
+      key: `${k}RequiredPreload`,
+      section: s,
+      label: 'Required preload (0 = none)',
+      symbol: 'F_req',
+      kind: 'quantity',
+      dimension: 'force',
+      unitSI: 'N',
+      unitUS: 'lbf',
+      default: { value: d.required, unit: 'N' },
+      min: 0,
+      max: 5e6,
+    },
   ];
 }
 
 export const DISC_STACK_FIELDS: FieldDefinition[] = [
-  { key: 'E', section: 'material', label: "Young's modulus", symbol: 'E', kind: 'quantity', dimension: 'pressure', unitSI: 'MPa', unitUS: 'psi', default: { value: 206000, unit: 'MPa' }, min: 50e9, max: 300e9, help: 'DIN 2093 tables use 206 000 N/mm² for spring steel' },
-  { key: 'nu', section: 'material', label: "Poisson's ratio", symbol: 'ν', kind: 'number', default: 0.3, min: 0.1, max: 0.45 },
+  {
+    key: 'E',
+    section: 'material',
+    label: "Young's modulus",
+    symbol: 'E',
+    kind: 'quantity',
+    dimension: 'pressure',
+    unitSI: 'MPa',
+    unitUS: 'psi',
+    default: { value: 206000, unit: 'MPa' },
+    min: 50e9,
+    max: 300e9,
+    help: 'DIN 2093 tables use 206 000 N/mm² for spring steel',
+  },
+  {
+    key: 'nu',
+    section: 'material',
+    label: "Poisson's ratio",
+    symbol: 'ν',
+    kind: 'number',
+    default: 0.3,
+    min: 0.1,
+    max: 0.45,
+  },
   ...stackFields('a'),
   ...stackFields('b'),
 ];

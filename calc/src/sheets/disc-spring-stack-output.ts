@@ -16,7 +16,7 @@ export const SIGMA_OM_FLAT_DEFAULT = {
   key: 'discSpring.sigmaOMFlatMax',
   value: 1600e6,
   source:
-    'from memory: DIN EN 16984 guidance for statically loaded discs, |σOM| at flat ≲ Rm ≈ 1600 N/mm² for spring steel — check the governing standard and the maker\'s data',
+    "from memory: DIN EN 16984 guidance for statically loaded discs, |σOM| at flat ≲ Rm ≈ 1600 N/mm² for spring steel — check the governing standard and the maker's data",
 };
 
 export interface StackOutputInput {
@@ -35,18 +35,52 @@ type Table = SheetEvaluation['tables'][number];
 /** Results, checks, chart, field settings, table and warnings of one stack. */
 export function stackOutputs(x: StackOutputInput, criteria: CriteriaSet) {
   const { key, section, r, stack } = x;
-  const res = (k: string, label: string, symbol: string, value: number, unit: string, dimension: ResultValue['dimension']): ResultValue => ({
-    key: `${key}.${k}`, section, label, symbol, value, unit, dimension,
+  const res = (
+    k: string,
+    label: string,
+    symbol: string,
+    value: number,
+    unit: string,
+    dimension: ResultValue['dimension'],
+  ): ResultValue => ({
+    key: `${key}.${k}`,
+    section,
+    label,
+    symbol,
+    value,
+    unit,
+    dimension,
   });
   const results: ResultValue[] = [
     res('release', 'Axial release of the back-off', 'Δ', r.release, 'm', 'length'),
     res('setDeflection', 'Deflection per set', 's', r.setDeflection, 'm', 'length'),
     res('setRatio', 'Deflection as a fraction of h0', 's/h₀', r.setRatio, '', 'dimensionless'),
-    res('preload', 'Preload after back-off (unloading, with friction)', 'F_V', r.stackUnloading, 'N', 'force'),
+    res(
+      'preload',
+      'Preload after back-off (unloading, with friction)',
+      'F_V',
+      r.stackUnloading,
+      'N',
+      'force',
+    ),
     res('forceNominal', 'Stack force without friction', 'F_ges', r.stackNominal, 'N', 'force'),
-    res('forceLoading', 'Stack force when loading past the set point', 'F_R,load', r.stackLoading, 'N', 'force'),
+    res(
+      'forceLoading',
+      'Stack force when loading past the set point',
+      'F_R,load',
+      r.stackLoading,
+      'N',
+      'force',
+    ),
     res('flatForce', 'Flat load of one disc', 'F_c', r.flatForce, 'N', 'force'),
-    res('flatStackForce', 'Stack force at flat while tightening', 'F_c,load', r.flatStackLoading, 'N', 'force'),
+    res(
+      'flatStackForce',
+      'Stack force at flat while tightening',
+      'F_c,load',
+      r.flatStackLoading,
+      'N',
+      'force',
+    ),
     res('sigmaOM', 'Stress σOM at the set point', 'σ_OM', r.stresses.OM, 'Pa', 'pressure'),
     res('sigmaI', 'Stress σI at the set point', 'σ_I', r.stresses.I, 'Pa', 'pressure'),
     res('sigmaII', 'Stress σII at the set point', 'σ_II', r.stresses.II, 'Pa', 'pressure'),
@@ -58,7 +92,16 @@ export function stackOutputs(x: StackOutputInput, criteria: CriteriaSet) {
     res('setLength', 'Stack length at the set point', 'L₁', r.setLength, 'm', 'length'),
   ];
   if (r.angleForRequired !== undefined) {
-    results.push(res('angleForRequired', 'Back-off angle for the required preload', 'θ_req', r.angleForRequired, 'rad', 'angle'));
+    results.push(
+      res(
+        'angleForRequired',
+        'Back-off angle for the required preload',
+        'θ_req',
+        r.angleForRequired,
+        'rad',
+        'angle',
+      ),
+    );
   }
 
   const checks: CheckResult[] = [];
@@ -66,57 +109,135 @@ export function stackOutputs(x: StackOutputInput, criteria: CriteriaSet) {
   const limit = crit ? crit.value : SIGMA_OM_FLAT_DEFAULT.value;
   const om = Math.abs(r.sigmaOMFlat);
   checks.push({
-    id: `${key}-sigma-om-flat`, section, label: 'Stress |σOM| at flat (static load)', value: om, limit,
-    unit: 'Pa', dimension: 'pressure', kind: 'max', utilisation: om / limit, pass: om <= limit,
+    id: `${key}-sigma-om-flat`,
+    section,
+    label: 'Stress |σOM| at flat (static load)',
+    value: om,
+    limit,
+    unit: 'Pa',
+    dimension: 'pressure',
+    kind: 'max',
+    utilisation: om / limit,
+    pass: om <= limit,
     source: crit ? crit.source : SIGMA_OM_FLAT_DEFAULT.source,
-    message: om <= limit ? 'within the static-load limit' : 'the disc is overstressed when pressed flat: choose a thicker or larger disc',
+    message:
+      om <= limit
+        ? 'within the static-load limit'
+        : 'the disc is overstressed when pressed flat: choose a thicker or larger disc',
   });
   if (x.required > 0) {
     const v = r.stackUnloading;
     const ok = v >= x.required;
     checks.push({
-      id: `${key}-preload`, section, label: 'Preload after back-off ≥ required', value: v, limit: x.required,
-      unit: 'N', dimension: 'force', kind: 'min', utilisation: v > 0 ? x.required / v : Number.MAX_VALUE, pass: ok,
+      id: `${key}-preload`,
+      section,
+      label: 'Preload after back-off ≥ required',
+      value: v,
+      limit: x.required,
+      unit: 'N',
+      dimension: 'force',
+      kind: 'min',
+      utilisation: v > 0 ? x.required / v : Number.MAX_VALUE,
+      pass: ok,
       source: 'sheet input (required preload)',
-      message: ok ? 'preload reaches the required value' : 'preload below the required value: back off less, or use stiffer discs',
+      message: ok
+        ? 'preload reaches the required value'
+        : 'preload below the required value: back off less, or use stiffer discs',
     });
   }
 
   const curve = stackCurve(stack, 40, r.constants);
   const i = stack.seriesCount;
   const chart: ChartData = {
-    id: `${key}-load-deflection`, title: `${x.title}: load–deflection`, xLabel: 'Stack deflection', xUnit: 'm', xDimension: 'length',
-    yLabel: 'Stack force', yUnit: 'N', yDimension: 'force',
+    id: `${key}-load-deflection`,
+    title: `${x.title}: load–deflection`,
+    xLabel: 'Stack deflection',
+    xUnit: 'm',
+    xDimension: 'length',
+    yLabel: 'Stack force',
+    yUnit: 'N',
+    yDimension: 'force',
     series: [
-      { name: 'loading (with friction)', points: curve.map((p) => ({ x: p.stackDeflection, y: p.loading })) },
-      { name: 'without friction', points: curve.map((p) => ({ x: p.stackDeflection, y: p.nominal })) },
-      { name: 'unloading (with friction)', points: curve.map((p) => ({ x: p.stackDeflection, y: p.unloading })) },
+      {
+        name: 'loading (with friction)',
+        points: curve.map((p) => ({ x: p.stackDeflection, y: p.loading })),
+      },
+      {
+        name: 'without friction',
+        points: curve.map((p) => ({ x: p.stackDeflection, y: p.nominal })),
+      },
+      {
+        name: 'unloading (with friction)',
+        points: curve.map((p) => ({ x: p.stackDeflection, y: p.unloading })),
+      },
     ],
     markers: [{ label: 'set point', x: r.setDeflection * i, y: r.stackUnloading }],
     referenceLines: [
-      { label: `working band min ${WORKING_BAND.min}·h₀ (memory)`, axis: 'x', value: WORKING_BAND.min * r.h0 * i },
-      { label: `working band max ${WORKING_BAND.max}·h₀ (memory)`, axis: 'x', value: WORKING_BAND.max * r.h0 * i },
-      ...(x.required > 0 ? [{ label: 'required preload', axis: 'y' as const, value: x.required }] : []),
+      {
+        label: `working band min ${WORKING_BAND.min}·h₀ (memory)`,
+        axis: 'x',
+        value: WORKING_BAND.min * r.h0 * i,
+      },
+      {
+        label: `working band max ${WORKING_BAND.max}·h₀ (memory)`,
+        axis: 'x',
+        value: WORKING_BAND.max * r.h0 * i,
+      },
+      ...(x.required > 0
+        ? [{ label: 'required preload', axis: 'y' as const, value: x.required }]
+        : []),
     ],
   };
 
   const fieldSettings: FieldSetting[] = [
-    { key: `${key}.backOffAngle`, label: `${x.title}: back-off angle from flat`, value: x.angle, unit: 'rad', dimension: 'angle', note: 'Tighten until every disc is flat, back off this angle, then lock (split pin or lock plate).' },
-    { key: `${key}.preload`, label: `${x.title}: resulting preload`, value: r.stackUnloading, unit: 'N', dimension: 'force' },
-    { key: `${key}.setLength`, label: `${x.title}: stack length when set`, value: r.setLength, unit: 'm', dimension: 'length', note: 'Measure to confirm the setting.' },
+    {
+      key: `${key}.backOffAngle`,
+      label: `${x.title}: back-off angle from flat`,
+      value: x.angle,
+      unit: 'rad',
+      dimension: 'angle',
+      note: 'Tighten until every disc is flat, back off this angle, then lock (split pin or lock plate).',
+    },
+    {
+      key: `${key}.preload`,
+      label: `${x.title}: resulting preload`,
+      value: r.stackUnloading,
+      unit: 'N',
+      dimension: 'force',
+    },
+    {
+      key: `${key}.setLength`,
+      label: `${x.title}: stack length when set`,
+      value: r.setLength,
+      unit: 'm',
+      dimension: 'length',
+      note: 'Measure to confirm the setting.',
+    },
   ];
   if (r.angleForRequired !== undefined) {
-    fieldSettings.push({ key: `${key}.angleForRequired`, label: `${x.title}: back-off angle for the required preload`, value: r.angleForRequired, unit: 'rad', dimension: 'angle' });
+    fieldSettings.push({
+      key: `${key}.angleForRequired`,
+      label: `${x.title}: back-off angle for the required preload`,
+      value: r.angleForRequired,
+      unit: 'rad',
+      dimension: 'angle',
+    });
   }
 
   const rows: Record<string, number>[] = [];
   const maxDeg = (360 * i * r.h0) / x.lead;
   for (let deg = 0; deg <= Math.min(maxDeg, 1080) + 1e-9; deg += 30) {
     const b = backOffPreload(stack, x.lead, deg, r.constants);
-    rows.push({ angle: (deg * Math.PI) / 180, release: b.release, setLength: r.freeLength - b.stackDeflection, preload: b.forces.unloading });
+    rows.push({
+      angle: (deg * Math.PI) / 180,
+      release: b.release,
+      setLength: r.freeLength - b.stackDeflection,
+      preload: b.forces.unloading,
+    });
   }
   const table: Table = {
-    id: `${key}-back-off`, title: `${x.title}: back-off angle against preload`,
+    id: `${key}-back-off`,
+    title: `${x.title}: back-off angle against preload`,
     columns: [
       { key: 'angle', label: 'Back-off from flat', unit: 'rad', dimension: 'angle' },
       { key: 'release', label: 'Axial release', unit: 'm', dimension: 'length' },
@@ -128,15 +249,34 @@ export function stackOutputs(x: StackOutputInput, criteria: CriteriaSet) {
 
   const warnings: string[] = [];
   const prefix = `${x.title}: `;
-  if (r.slack) warnings.push(prefix + 'the back-off exceeds the travel to flat; the stack is loose and gives no preload.');
+  if (r.slack)
+    warnings.push(
+      prefix + 'the back-off exceeds the travel to flat; the stack is loose and gives no preload.',
+    );
   else {
     const w = workingBandWarning(r.setRatio);
     if (w) warnings.push(prefix + w);
   }
   const ht = (r.constants.K4 * r.h0) / r.constants.tCalc;
-  if (ht > Math.SQRT2) warnings.push(prefix + `K4·h0/t = ${ht.toFixed(2)} exceeds √2: the force falls before flat (regressive curve); the flat datum and back-off behave differently (DIN EN 16984).`);
-  if (r.constants.group === 3 && stack.disc.tReduced === undefined) warnings.push(prefix + 'thickness above 6 mm is group 3: enter the reduced thickness t′ of discs with contact flats.');
-  if (r.freeLength > 3 * stack.disc.De) warnings.push(prefix + 'free length exceeds about 3·De: guide the stack well; friction and uneven deflection grow (maker guidance, from memory).');
-  if (stack.parallelCount > 3) warnings.push(prefix + 'more than three discs in parallel: friction makes the force uncertain (maker guidance, from memory).');
+  if (ht > Math.SQRT2)
+    warnings.push(
+      prefix +
+        `K4·h0/t = ${ht.toFixed(2)} exceeds √2: the force falls before flat (regressive curve); the flat datum and back-off behave differently (DIN EN 16984).`,
+    );
+  if (r.constants.group === 3 && stack.disc.tReduced === undefined)
+    warnings.push(
+      prefix +
+        'thickness above 6 mm is group 3: enter the reduced thickness t′ of discs with contact flats.',
+    );
+  if (r.freeLength > 3 * stack.disc.De)
+    warnings.push(
+      prefix +
+        'free length exceeds about 3·De: guide the stack well; friction and uneven deflection grow (maker guidance, from memory).',
+    );
+  if (stack.parallelCount > 3)
+    warnings.push(
+      prefix +
+        'more than three discs in parallel: friction makes the force uncertain (maker guidance, from memory).',
+    );
   return { results, checks, chart, fieldSettings, table, warnings };
 }

@@ -28,7 +28,11 @@ describe('disc-spring-stack sheet', () => {
     expect(result(e, 'a.release')).toBeCloseTo(2.5e-3 / 6, 12);
     expect(result(e, 'a.setDeflection')).toBeCloseTo(0.9e-3 - 2.5e-3 / 6, 12);
     const a40 = { De: 0.04, Di: 0.0204, t: 2.25e-3, l0: 3.15e-3, ...TABLE_STEEL };
-    const ref = backOffPreload({ disc: a40, seriesCount: 1, parallelCount: 1, frictionCone: 0.02, frictionEdge: 0.03 }, 2.5e-3, 60);
+    const ref = backOffPreload(
+      { disc: a40, seriesCount: 1, parallelCount: 1, frictionCone: 0.02, frictionEdge: 0.03 },
+      2.5e-3,
+      60,
+    );
     expect(result(e, 'a.preload')).toBeCloseTo(ref.forces.unloading, 6);
     // three B 50 on M24×3, 180°: Δ = 1.5 mm shared by 3 → s = 1.4 − 0.5 mm.
     expect(result(e, 'b.setDeflection')).toBeCloseTo(0.9e-3, 12);
@@ -38,7 +42,12 @@ describe('disc-spring-stack sheet', () => {
     expect(e.fieldSettings.map((f) => f.key)).toContain('b.backOffAngle');
     expect(e.tables[0].rows[0].preload).toBeGreaterThan(e.tables[0].rows[2].preload);
     expect(e.derivation.some((s) => s.id === 'b-preload' && s.section === 'stackB')).toBe(true);
-    expect(e.checks.map((c) => c.id)).toEqual(['a-sigma-om-flat', 'a-preload', 'b-sigma-om-flat', 'b-preload']);
+    expect(e.checks.map((c) => c.id)).toEqual([
+      'a-sigma-om-flat',
+      'a-preload',
+      'b-sigma-om-flat',
+      'b-preload',
+    ]);
     expect(e.pass).toBe(e.checks.every((c) => c.pass));
     for (const r of e.results) expect(Number.isFinite(r.value)).toBe(true);
   });
@@ -46,7 +55,13 @@ describe('disc-spring-stack sheet', () => {
   it('accepts US customary inputs and gives the same preload', () => {
     const si = sheet.evaluate({ bEnabled: false }, criteria);
     const us = sheet.evaluate(
-      { bEnabled: false, aDe: '1.574803 in', aDi: { value: 20.4 / 25.4, unit: 'in' }, aPitch: { value: 2.5 / 25.4, unit: 'in' }, aRequiredPreload: '674.4 lbf' },
+      {
+        bEnabled: false,
+        aDe: '1.574803 in',
+        aDi: { value: 20.4 / 25.4, unit: 'in' },
+        aPitch: { value: 2.5 / 25.4, unit: 'in' },
+        aRequiredPreload: '674.4 lbf',
+      },
       criteria,
     );
     expect(result(us, 'a.preload') / result(si, 'a.preload')).toBeCloseTo(1, 5);
@@ -61,7 +76,19 @@ describe('disc-spring-stack sheet', () => {
   });
 
   it('uses the σOM limit of the criteria set when it has one', () => {
-    const strict: CriteriaSet = { ...criteria, values: [{ key: 'discSpring.sigmaOMFlatMax', label: 'x', value: 1e6, unit: 'Pa', source: 'test source', confidence: 'memory' }] };
+    const strict: CriteriaSet = {
+      ...criteria,
+      values: [
+        {
+          key: 'discSpring.sigmaOMFlatMax',
+          label: 'x',
+          value: 1e6,
+          unit: 'Pa',
+          source: 'test source',
+          confidence: 'memory',
+        },
+      ],
+    };
     const c = sheet.evaluate({}, strict).checks.find((x) => x.id === 'a-sigma-om-flat');
     expect(c?.pass).toBe(false);
     expect(c?.source).toBe('test source');
@@ -70,7 +97,10 @@ describe('disc-spring-stack sheet', () => {
   it('warns outside the working band and when backed off past flat travel', () => {
     const near = sheet.evaluate({ bEnabled: false, aBackOff: '10 deg' }, criteria);
     expect(near.warnings.join(' ')).toMatch(/above the usual 75 %/);
-    const loose = sheet.evaluate({ bEnabled: false, aBackOff: '180 deg', aRequiredPreload: '0 N' }, criteria);
+    const loose = sheet.evaluate(
+      { bEnabled: false, aBackOff: '180 deg', aRequiredPreload: '0 N' },
+      criteria,
+    );
     expect(loose.warnings.join(' ')).toMatch(/loose/);
     expect(result(loose, 'a.preload')).toBe(0);
   });

@@ -1,17 +1,27 @@
-import type { CriteriaSet, SheetEvaluation, SheetInputs, SheetTypeDefinition } from '../core/types.js';
+import type {
+  CriteriaSet,
+  SheetEvaluation,
+  SheetInputs,
+  SheetTypeDefinition,
+} from '../core/types.js';
 import { CalcInputError, FieldErrorCollector, isCalcInputError } from '../core/errors.js';
 import { Derivation } from '../core/step.js';
 import { deriveStackSet } from '../disc-springs/stack-derivation.js';
 import type { DiscStack } from '../disc-springs/stack.js';
 import { CORE_VERSION } from '../version.js';
-import { DISC_STACK_FIELDS, DISC_STACK_SECTIONS, sectionOf, type StackKey } from './disc-spring-stack-fields.js';
+import {
+  DISC_STACK_FIELDS,
+  DISC_STACK_SECTIONS,
+  sectionOf,
+  type StackKey,
+} from './disc-spring-stack-fields.js';
 import { readSheetInputs } from './disc-spring-stack-inputs.js';
 import { stackOutputs } from './disc-spring-stack-output.js';
 
 const TITLES: Record<StackKey, string> = { a: 'Stack 1 (shoe holder)', b: 'Stack 2 (equaliser)' };
 
 const CAUTIONS = [
-  'Disc-spring values follow DIN EN 16984 (formerly DIN 2092); the maker\'s data and the governing standard decide. Re-check the preload after running-in: discs set slightly in the first cycles.',
+  "Disc-spring values follow DIN EN 16984 (formerly DIN 2092); the maker's data and the governing standard decide. Re-check the preload after running-in: discs set slightly in the first cycles.",
   '"Tighten flat, then back off" assumes a rigid bolt, nut and frame and a single-start thread; it is common practice, no published source.',
 ];
 
@@ -19,7 +29,15 @@ function readStack(v: Record<string, number | boolean | string>, k: StackKey): D
   const num = (name: string) => v[`${k}${name}`] as number;
   const tr = num('tReduced');
   return {
-    disc: { De: num('De'), Di: num('Di'), t: num('t'), l0: num('l0'), tReduced: tr > 0 ? tr : undefined, E: v.E as number, nu: v.nu as number },
+    disc: {
+      De: num('De'),
+      Di: num('Di'),
+      t: num('t'),
+      l0: num('l0'),
+      tReduced: tr > 0 ? tr : undefined,
+      E: v.E as number,
+      nu: v.nu as number,
+    },
     seriesCount: num('Series'),
     parallelCount: num('Parallel'),
     frictionCone: num('FrictionCone'),
@@ -31,16 +49,29 @@ function readStack(v: Record<string, number | boolean | string>, k: StackKey): D
 function renameFields(e: unknown, k: StackKey): never {
   if (!isCalcInputError(e)) throw e;
   const map: Record<string, string> = {
-    De: 'De', Di: 'Di', t: 't', l0: 'l0', tReduced: 'tReduced', seriesCount: 'Series', parallelCount: 'Parallel',
-    frictionCone: 'FrictionCone', frictionEdge: 'FrictionEdge',
+    De: 'De',
+    Di: 'Di',
+    t: 't',
+    l0: 'l0',
+    tReduced: 'tReduced',
+    seriesCount: 'Series',
+    parallelCount: 'Parallel',
+    frictionCone: 'FrictionCone',
+    frictionEdge: 'FrictionEdge',
   };
   throw new CalcInputError(
-    e.fields.map((f) => ({ field: f.field === 'E' || f.field === 'nu' ? f.field : `${k}${map[f.field] ?? f.field}`, message: f.message })),
+    e.fields.map((f) => ({
+      field: f.field === 'E' || f.field === 'nu' ? f.field : `${k}${map[f.field] ?? f.field}`,
+      message: f.message,
+    })),
   );
 }
 
 /** Evaluates the disc-spring stack sheet: one or two stacks set by "flat, then back off θ". */
-export function evaluateDiscSpringStack(inputs: SheetInputs, criteria: CriteriaSet): SheetEvaluation {
+export function evaluateDiscSpringStack(
+  inputs: SheetInputs,
+  criteria: CriteriaSet,
+): SheetEvaluation {
   const v = readSheetInputs(DISC_STACK_FIELDS, inputs);
   const keys: StackKey[] = (['a', 'b'] as const).filter((k) => v[`${k}Enabled`] === true);
   const errors = new FieldErrorCollector();
@@ -48,8 +79,18 @@ export function evaluateDiscSpringStack(inputs: SheetInputs, criteria: CriteriaS
   errors.throwIfAny();
   const d = new Derivation('stackA');
   const out: SheetEvaluation = {
-    sheetType: 'disc-spring-stack', coreVersion: CORE_VERSION, criteriaSetId: criteria.id, criteriaSetVersion: criteria.version,
-    results: [], checks: [], derivation: d.steps, charts: [], fieldSettings: [], tables: [], warnings: [...CAUTIONS], pass: true,
+    sheetType: 'disc-spring-stack',
+    coreVersion: CORE_VERSION,
+    criteriaSetId: criteria.id,
+    criteriaSetVersion: criteria.version,
+    results: [],
+    checks: [],
+    derivation: d.steps,
+    charts: [],
+    fieldSettings: [],
+    tables: [],
+    warnings: [...CAUTIONS],
+    pass: true,
   };
   const computed = keys.map((k) => {
     const stack = readStack(v, k);
@@ -69,7 +110,19 @@ export function evaluateDiscSpringStack(inputs: SheetInputs, criteria: CriteriaS
   errors.throwIfAny();
   for (const c of computed) {
     if (!c.r) continue;
-    const o = stackOutputs({ key: c.k, section: sectionOf(c.k), title: TITLES[c.k], stack: c.stack, lead: c.lead, angle: c.angle, required: c.required, r: c.r }, criteria);
+    const o = stackOutputs(
+      {
+        key: c.k,
+        section: sectionOf(c.k),
+        title: TITLES[c.k],
+        stack: c.stack,
+        lead: c.lead,
+        angle: c.angle,
+        required: c.required,
+        r: c.r,
+      },
+      criteria,
+    );
     out.results.push(...o.results);
     out.checks.push(...o.checks);
     out.charts.push(o.chart);

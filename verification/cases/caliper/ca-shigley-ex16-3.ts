@@ -13,7 +13,8 @@ export const verificationCase = defineCase({
     { key: 're', label: 'Equivalent radius (uniform wear)', value: 4.6875, unit: 'in', rel: 1e-9 },
     { key: 'T', label: 'Torque of the two pads', value: 13000, unit: 'lbf·in', rel: 0.002 },
   ],
-  toleranceNote: 'recalled four-significant-figure force: ±0.2 % on the torque; the radius is exact',
+  toleranceNote:
+    'recalled four-significant-figure force: ±0.2 % on the torque; the radius is exact',
   run() {
     const re = uniformWearRadius(length(5.5 * IN), length(3.875 * IN));
     return { re: re / IN, T: caliperTorque(ratio(0.37), force(3748 * LBF), re, 2, 1) / (LBF * IN) };

@@ -5,7 +5,8 @@ export const verificationCase = defineCase({
   id: 'ds-parallel-friction-three',
   family: 'disc-springs',
   title: 'Three discs in parallel with friction: loading force',
-  source: "rule of thumb published by a disc-spring maker (reference-values.md §1): a disc needing 5000 N for 1 mm, three in parallel need about 15 900 N when loading (about 3 % per interface)",
+  source:
+    'rule of thumb published by a disc-spring maker (reference-values.md §1): a disc needing 5000 N for 1 mm, three in parallel need about 15 900 N when loading (about 3 % per interface)',
   confidence: 'published',
   inputs: { 'single-disc force': '5000 N', n: 3, wM: '0.03 per nested interface', wR: 0 },
   expected: [{ key: 'F', label: 'Stack force while loading', value: 15900, unit: 'N', rel: 0.01 }],
@@ -16,7 +17,13 @@ export const verificationCase = defineCase({
     const s = 1e-3;
     const one = discSprings.discForce(disc, s);
     const scaled = { ...disc, E: (disc.E * 5000) / one };
-    const st = { disc: scaled, seriesCount: 1, parallelCount: 3, frictionCone: 0.03, frictionEdge: 0 };
+    const st = {
+      disc: scaled,
+      seriesCount: 1,
+      parallelCount: 3,
+      frictionCone: 0.03,
+      frictionEdge: 0,
+    };
     return { F: discSprings.stackForces(st, s).loading };
   },
 });

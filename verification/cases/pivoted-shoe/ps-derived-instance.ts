@@ -1,11 +1,20 @@
 import { defineCase } from '../../case.js';
-import { degrees, length, pivotDistance, pivotedNormalForce, pivotedShoeTorque, pressure, ratio } from '../../calc-api.js';
+import {
+  degrees,
+  length,
+  pivotDistance,
+  pivotedNormalForce,
+  pivotedShoeTorque,
+  pressure,
+  ratio,
+} from '../../calc-api.js';
 
 export const verificationCase = defineCase({
   id: 'ps-derived-instance',
   family: 'pivoted-shoe',
   title: 'Pivoted shoe: normal force, pivot distance and torque per shoe',
-  source: "derived instance of Shigley's pivoted-shoe relations (Budynas & Nisbett, 8th ed., §16-4) given in reference-values.md §2",
+  source:
+    "derived instance of Shigley's pivoted-shoe relations (Budynas & Nisbett, 8th ed., §16-4) given in reference-values.md §2",
   confidence: 'derived',
   inputs: { r: '0.25 m', b: '0.10 m', pa: '0.5 MPa', f: 0.35, theta2: '60 deg' },
   expected: [
