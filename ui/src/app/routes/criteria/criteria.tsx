@@ -42,7 +42,10 @@ export function Component() {
   const go = (patch: Record<string, string | undefined>) =>
     setSearch((prev) => {
       const next = new URLSearchParams(prev);
-      for (const [k, v] of Object.entries(patch)) (v ? next.set(k, v) : next.delete(k));
+      for (const [k, v] of Object.entries(patch)) {
+        if (v) next.set(k, v);
+        else next.delete(k);
+      }
       return next;
     });
 

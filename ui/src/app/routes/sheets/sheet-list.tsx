@@ -90,7 +90,7 @@ export function Component() {
     // Only the debounced text drives the URL.
   }, [debounced]); // eslint-disable-line react-hooks/exhaustive-deps
 
-  const sites = register.data?.sites ?? [];
+  const sites = useMemo(() => register.data?.sites ?? [], [register.data]);
   const machines = useMemo(
     () =>
       sites
