@@ -23,12 +23,14 @@ export function Footer(props: { sheet: PrintableSheet }) {
         color: colours.muted,
       }}
     >
-      <Text>
+      <Text style={{ flex: 1, paddingRight: 12 }}>
         {sheet.documentNumber} rev {sheet.revision.label} · printed {stamp(sheet.generatedAt)} ·
         Holdfast calc core {sheet.coreVersion ?? 'n/a'}
         {sheet.verification ? ` · verify: ${sheet.verification.url}` : ''}
       </Text>
-      <Text>Supports, never replaces, a competent engineer&apos;s judgement.</Text>
+      <Text style={{ width: 150, textAlign: 'right' }}>
+        Supports, never replaces, a competent engineer&apos;s judgement.
+      </Text>
     </View>
   );
 }
