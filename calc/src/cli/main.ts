@@ -1,0 +1,85 @@
+#!/usr/bin/env node
+/**
+ * holdfast-calc: evaluate one sheet from a JSON file of inputs (or stdin) and print the full
+ * evaluation as JSON. Exit codes: 0 evaluated (check `pass` for the verdict), 2 bad input or usage.
+ *
+ *   npm run calc -w @holdfast/calc -- hoist-shoe-brake inputs.json [--criteria crane-hoist]
+ *   cat inputs.json | npm run calc -w @holdfast/calc -- travel-shoe-brake -
+ */
+import { readFileSync } from 'node:fs';
+import { isCalcInputError } from '../core/errors.js';
+import { getCriteriaSet } from '../criteria/lookup.js';
+import { getSheetType, sheetTypes } from '../sheets/registry.js';
+import { CORE_VERSION } from '../version.js';
+import { DEFAULT_CRITERIA } from './default-criteria.js';
+
+const USAGE = `usage: holdfast-calc <sheet-type> [inputs.json | -] [--criteria <id>]
+sheet types: ${sheetTypes.map((s) => s.id).join(', ')}
+inputs: a JSON object keyed by field; missing fields take their defaults; '-' or no file reads stdin`;
+
+function fail(message: string, fields?: readonly { field: string; message: string }[]): never {
+  process.stderr.write(`${message}\n`);
+  for (const f of fields ?? []) process.stderr.write(`  ${f.field}: ${f.message}\n`);
+  process.stderr.write(
+    `${JSON.stringify({ error: { code: fields ? 'CALC_INPUT' : 'USAGE', message, fields: fields ?? [] } })}\n`,
+  );
+  process.exit(2);
+}
+
+function parseArgs(argv: string[]): {
+  sheet?: string;
+  file?: string;
+  criteria?: string;
+  help: boolean;
+} {
+  const out: { sheet?: string; file?: string; criteria?: string; help: boolean } = { help: false };
+  const rest: string[] = [];
+  for (let k = 0; k < argv.length; k++) {
+    const a = argv[k];
+    if (a === '--help' || a === '-h') out.help = true;
+    else if (a === '--criteria') out.criteria = argv[++k];
+    else if (a.startsWith('--criteria=')) out.criteria = a.slice('--criteria='.length);
+    else rest.push(a);
+  }
+  [out.sheet, out.file] = rest;
+  return out;
+}
+
+function main(): void {
+  const args = parseArgs(process.argv.slice(2));
+  if (args.help) {
+    process.stdout.write(`${USAGE}\n`);
+    return;
+  }
+  if (!args.sheet) fail(`missing sheet type\n${USAGE}`);
+  const sheet = getSheetType(args.sheet);
+  if (!sheet) fail(`unknown sheet type "${args.sheet}"\n${USAGE}`);
+  const criteriaId = args.criteria ?? DEFAULT_CRITERIA[sheet.id] ?? 'general-industry';
+  const criteria = getCriteriaSet(criteriaId);
+  if (!criteria) fail(`unknown criteria set "${criteriaId}"`);
+  let text: string;
+  try {
+    text = readFileSync(!args.file || args.file === '-' ? 0 : args.file, 'utf8');
+  } catch (e) {
+    fail(`cannot read inputs: ${(e as Error).message}`);
+  }
+  let inputs: unknown;
+  try {
+    inputs = text.trim() === '' ? {} : JSON.parse(text);
+  } catch (e) {
+    fail(`inputs are not valid JSON: ${(e as Error).message}`);
+  }
+  if (typeof inputs !== 'object' || inputs === null || Array.isArray(inputs))
+    fail('inputs must be a JSON object keyed by field');
+  try {
+    const evaluation = sheet.evaluate(inputs as Record<string, never>, criteria);
+    process.stdout.write(
+      `${JSON.stringify({ ...evaluation, coreVersion: CORE_VERSION }, null, 2)}\n`,
+    );
+  } catch (e) {
+    if (isCalcInputError(e)) fail(`invalid input for ${sheet.id}`, e.fields);
+    throw e;
+  }
+}
+
+main();

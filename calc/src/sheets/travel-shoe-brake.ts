@@ -1,0 +1,251 @@
+import type {
+  CriteriaSet,
+  FieldDefinition,
+  InputValue,
+  SheetEvaluation,
+  SheetInputs,
+  SheetTypeDefinition,
+} from '../core/types.js';
+import { CalcInputError } from '../core/errors.js';
+import { Derivation } from '../core/step.js';
+import { criterion } from '../criteria/lookup.js';
+import { motorRatedTorque } from '../duty/motor-torque.js';
+import { referLinearMass } from '../duty/referral.js';
+import { inertiaTotal } from '../duty/inertia-sum.js';
+import { requiredBrakeTorque } from '../duty/required-torque.js';
+import { stopping } from '../stopping/stopping.js';
+import { adhesionNeeded, tenPercentStoppingDistance } from '../stopping/limits.js';
+import * as q from '../units/quantities.js';
+import { makeCheck } from './checks.js';
+import { num, qty } from './field-builders.js';
+import { readInputs } from './sheet-inputs.js';
+import { finish, newEvaluation, publishSteps } from './sheet-output.js';
+import { SHOE_BRAKE_FIELDS, SHOE_SECTIONS } from './shoe-brake-fields.js';
+import { evaluateShoeBrake, validateShoeInputs } from './shoe-brake-evaluate.js';
+
+const U = 'duty';
+
+export const TRAVEL_DUTY_FIELDS: FieldDefinition[] = [
+  qty(U, 'motorPower', 'Motor rated power (one drive)', 'P', 'power', 7.5, 'kW', 'hp', {
+    min: 0,
+    exclusiveMin: true,
+  }),
+  qty(
+    U,
+    'motorSpeed',
+    'Motor rated speed (brake on the motor shaft)',
+    'n',
+    'angularSpeed',
+    1450,
+    'rpm',
+    'rpm',
+    { min: 0, exclusiveMin: true, max: 6000 },
+  ),
+  qty(
+    U,
+    'travelMass',
+    'Travelling mass with rated load (whole motion)',
+    'm',
+    'mass',
+    60_000,
+    'kg',
+    'lb',
+    { min: 0, exclusiveMin: true },
+  ),
+  qty(U, 'travelSpeed', 'Full-load travel speed', 'v', 'speed', 40, 'm/min', 'ft/min', {
+    min: 0,
+    exclusiveMin: true,
+  }),
+  num(
+    U,
+    'brakeCount',
+    'Brakes sharing the motion (one per drive)',
+    'n_br',
+    2,
+    { min: 1, max: 16 },
+    true,
+  ),
+  num(U, 'wheels', 'Wheels carrying the travelling mass', 'n_wheels', 4, { min: 1, max: 64 }, true),
+  num(U, 'brakedWheels', 'Driven (braked) wheels', 'n_braked', 2, { min: 1, max: 64 }, true),
+  num(
+    U,
+    'torqueFactor',
+    'Brake torque ÷ motor rated torque (set by you — check the governing standard)',
+    'k',
+    1.0,
+    { min: 0, exclusiveMin: true, max: 5 },
+  ),
+  qty(
+    U,
+    'driveTorque',
+    'Torque driving the motion at the brake shaft (slope, wind), if any',
+    'M_d',
+    'torque',
+    0,
+    'N m',
+    'lbf ft',
+    { min: 0 },
+  ),
+  qty(U, 'motorInertia', 'Motor rotor inertia', 'J_mot', 'inertia', 0.05, 'kg m^2', 'lb ft^2', {
+    min: 0,
+  }),
+  qty(
+    U,
+    'brakeDrumInertia',
+    'Brake drum and coupling inertia',
+    'J_drum',
+    'inertia',
+    0.12,
+    'kg m^2',
+    'lb ft^2',
+    { min: 0 },
+  ),
+  qty(
+    U,
+    'gearInertia',
+    'Gearbox and wheel inertia at the brake shaft',
+    'J_gear',
+    'inertia',
+    0.02,
+    'kg m^2',
+    'lb ft^2',
+    { min: 0 },
+  ),
+  qty(U, 'setDelay', 'Brake set delay (power off to full torque)', 't_d', 'time', 0.3, 's', 's', {
+    min: 0,
+    max: 10,
+  }),
+];
+
+/** Shoe-brake defaults sized for the travel demo (smaller drum and spring than the hoist). */
+const TRAVEL_DEFAULTS: Record<string, InputValue> = {
+  drumDiameter: { value: 200, unit: 'mm' },
+  shoeWidth: { value: 90, unit: 'mm' },
+  springForce: { value: 520, unit: 'N' },
+  springRate: { value: 20, unit: 'N/mm' },
+  springFreeLength: { value: 150, unit: 'mm' },
+  springForceMin: { value: 250, unit: 'N' },
+  springForceMax: { value: 800, unit: 'N' },
+  maxBrakeTorque: { value: 300, unit: 'N m' },
+  drumMass: { value: 12, unit: 'kg' },
+  coolingArea: { value: 0.2, unit: 'm^2' },
+  stopsPerHour: { value: 30, unit: '1/h' },
+  thrusterForce: { value: 220, unit: 'N' },
+};
+
+const FIELDS: FieldDefinition[] = [
+  ...TRAVEL_DUTY_FIELDS,
+  ...SHOE_BRAKE_FIELDS.map((f) =>
+    f.key in TRAVEL_DEFAULTS ? { ...f, default: TRAVEL_DEFAULTS[f.key] } : f,
+  ),
+];
+
+/** Evaluates the travel shoe-brake sheet: stop from full-load speed, 10 %-of-speed rule, wheel adhesion. */
+export function evaluateTravelShoeBrake(
+  inputs: SheetInputs,
+  criteria: CriteriaSet,
+): SheetEvaluation {
+  const v = readInputs(FIELDS, inputs);
+  const cross = validateShoeInputs(v);
+  if (!(v.num('brakedWheels') <= v.num('wheels')))
+    cross.push({ field: 'brakedWheels', message: 'cannot exceed the number of wheels' });
+  if (cross.length) throw new CalcInputError(cross);
+  const d = new Derivation(U);
+  const out = newEvaluation('travel-shoe-brake', criteria, d);
+  const omega = q.angularSpeed(v.num('motorSpeed'));
+  const vT = q.speed(v.num('travelSpeed'));
+  const Mmot = motorRatedTorque(q.power(v.num('motorPower')), omega, d);
+  const massPerBrake = q.mass(v.num('travelMass') / v.num('brakeCount'));
+  const Jload = referLinearMass(massPerBrake, vT, omega, d, {
+    label: 'Travelling mass per brake referred to the brake shaft',
+    symbol: 'J_load,b',
+  });
+  const J = inertiaTotal(
+    {
+      motor: q.inertia(v.num('motorInertia')),
+      brakeDrum: q.inertia(v.num('brakeDrumInertia')),
+      gear: q.inertia(v.num('gearInertia')),
+      output: q.inertia(0),
+      load: Jload,
+    },
+    d,
+  );
+  const Mreq = requiredBrakeTorque(q.ratio(v.num('torqueFactor')), Mmot, d, 'motor');
+  const frac = criterion(criteria, 'travelStopFraction');
+  d.section = 'stopping';
+  const sMax = tenPercentStoppingDistance(vT, d, frac.value);
+  const outcome = evaluateShoeBrake(
+    v,
+    {
+      brakeSpeed: omega,
+      loadSpeed: vT,
+      inertia: J,
+      driveTorque: v.num('driveTorque'),
+      requiredTorque: Mreq,
+      requiredSource: 'user-set torque factor × motor rated torque — check the governing standard',
+      setDelay: v.num('setDelay'),
+      stopLimit: { value: sMax, source: frac.source },
+      stopCase: 'travelling',
+    },
+    criteria,
+    d,
+    out,
+  );
+  // Wheel adhesion: the hardest stop is at μ max with new lining.
+  d.section = 'stopping';
+  const hard = stopping(
+    {
+      inertia: J,
+      speed: omega,
+      loadSpeed: vT,
+      brakeTorque: q.torque(outcome.torqueMaxNew),
+      driveTorque: q.torque(v.num('driveTorque')),
+      setDelay: q.time(v.num('setDelay')),
+    },
+    d,
+    'hard-',
+  );
+  if (hard.stops) {
+    const mu = adhesionNeeded(
+      q.mass(v.num('travelMass')),
+      hard.loadDeceleration,
+      v.num('brakedWheels'),
+      v.num('wheels'),
+      d,
+    );
+    const lim = criterion(criteria, 'adhesionLimit');
+    out.checks.push(
+      makeCheck({
+        id: 'wheel-adhesion',
+        section: 'stopping',
+        label: 'Adhesion needed at μ max ≤ allowed (no wheel skid)',
+        value: mu,
+        limit: lim.value,
+        kind: 'max',
+        dimension: 'dimensionless',
+        source: lim.source,
+        failHint:
+          'The wheels may skid: lower the torque, lengthen the set time, or brake more wheels.',
+      }),
+    );
+  }
+  publishSteps(out, d, [
+    'motor-torque',
+    'inertia-total',
+    'required-torque',
+    'ten-percent-distance',
+    'hard-load-deceleration',
+    'adhesion-needed',
+  ]);
+  return finish(out);
+}
+
+export const travelShoeBrakeSheet: SheetTypeDefinition = {
+  id: 'travel-shoe-brake',
+  title: 'Shoe brake on a travel drive',
+  description:
+    'Spring-set, thruster-released double-shoe brake on a bridge or trolley travel drive: torque over the friction band and at worn lining, stop from full-load speed against the 10 %-of-speed rule, wheel adhesion, heat, release and field settings.',
+  sections: [{ id: U, title: 'Travel duty' }, ...SHOE_SECTIONS],
+  fields: FIELDS,
+  evaluate: evaluateTravelShoeBrake,
+};
