@@ -62,7 +62,7 @@ describe('core monotonicity', () => {
       ),
       { numRuns: 300 },
     );
-  });
+  }, 30_000);
 
   it('more lining wear gives less spring force and so less torque', () => {
     fc.assert(
@@ -86,7 +86,7 @@ describe('core monotonicity', () => {
       }),
       { numRuns: 300 },
     );
-  });
+  }, 30_000);
 
   it('more stops per hour give more heat, a hotter steady drum and a hotter peak', () => {
     fc.assert(
@@ -121,5 +121,5 @@ describe('core monotonicity', () => {
       ),
       { numRuns: 300 },
     );
-  });
+  }, 30_000);
 });

@@ -37,7 +37,7 @@ describe('disc springs: properties', () => {
       }),
       { numRuns: 300 },
     );
-  });
+  }, 30_000);
 
   it('force increases with deflection when h0/t < 1.4', () => {
     fc.assert(
@@ -49,7 +49,7 @@ describe('disc springs: properties', () => {
       }),
       { numRuns: 300 },
     );
-  });
+  }, 30_000);
 
   it('friction brackets the frictionless stack force, parallel discs multiply it', () => {
     fc.assert(
@@ -72,7 +72,7 @@ describe('disc springs: properties', () => {
       ),
       { numRuns: 200 },
     );
-  });
+  }, 30_000);
 
   it('backing off further never raises the preload when h0/t < 1.4, and the inverse recovers the angle', () => {
     fc.assert(
@@ -102,5 +102,5 @@ describe('disc springs: properties', () => {
       ),
       { numRuns: 100 },
     );
-  });
+  }, 30_000);
 });

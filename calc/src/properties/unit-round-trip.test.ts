@@ -20,7 +20,7 @@ describe('unit round trips', () => {
       }),
       { numRuns: 200 },
     );
-  });
+  }, 30_000);
 
   it('SI → US customary display → parse back to SI returns the value', () => {
     fc.assert(
@@ -39,7 +39,7 @@ describe('unit round trips', () => {
       ),
       { numRuns: 200 },
     );
-  });
+  }, 30_000);
 
   it('temperatures above absolute zero survive °C → °F → K', () => {
     fc.assert(
@@ -50,5 +50,5 @@ describe('unit round trips', () => {
         expect(toSI(c, 'degC', 'temperature')).toBeCloseTo(k, 9);
       }),
     );
-  });
+  }, 30_000);
 });

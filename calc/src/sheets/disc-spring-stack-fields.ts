@@ -1,4 +1,5 @@
 import type { FieldDefinition, SectionDefinition } from '../core/types.js';
+import { STANDARD_DISC_SIZES } from '../disc-springs/standard-sizes.js';
 
 /** Stack prefixes: 'a' is the first stack (demo: shoe holder), 'b' the second (demo: equaliser). */
 export type StackKey = 'a' | 'b';
@@ -96,6 +97,22 @@ function stackFields(k: StackKey): FieldDefinition[] {
       symbol: '',
       kind: 'boolean',
       default: d.enabled,
+    },
+    {
+      key: `${k}Size`,
+      section: s,
+      label: 'Standard size (DIN EN 16983 / DIN 2093), or custom geometry',
+      symbol: '',
+      kind: 'choice',
+      default: 'custom',
+      choices: [
+        { value: 'custom', label: 'custom (use the geometry below)' },
+        ...STANDARD_DISC_SIZES.map((r) => ({
+          value: r.designation,
+          label: `${r.designation}: ${r.De}/${r.Di}/${r.t}${r.tReduced ? ` (t′ ${r.tReduced})` : ''}/${r.l0} mm (${r.confidence})`,
+        })),
+      ],
+      help: 'A standard size replaces the geometry fields below; its source and confidence are listed in the table of sizes.',
     },
     len(`${k}De`, s, 'Outer diameter', 'D_e', d.De, 1, 1000, `Demo: ${d.size}`),
     len(`${k}Di`, s, 'Inner diameter', 'D_i', d.Di, 0.5, 999),

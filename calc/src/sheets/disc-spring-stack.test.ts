@@ -105,6 +105,18 @@ describe('disc-spring-stack sheet', () => {
     expect(result(loose, 'a.preload')).toBe(0);
   });
 
+  it('takes the geometry of a chosen standard size, including t′ of a group 3 disc', () => {
+    const e = sheet.evaluate(
+      { bEnabled: false, aSize: 'A 125', aPitch: '4 mm', aBackOff: '90 deg' },
+      criteria,
+    );
+    expect(e.derivation.some((s) => s.id === 'a-K4')).toBe(true);
+    // h0 = l0 − t′ = 10.6 − 7.5 mm; Δ = 1 mm
+    expect(result(e, 'a.setDeflection')).toBeCloseTo(3.1e-3 - 1e-3, 12);
+    expect(e.warnings.join(' ')).toMatch(/standard size A 125 .*confidence: memory/);
+    expect(fieldsOf({ aSize: 'A 999' })).toEqual(['aSize']);
+  });
+
   it('rejects bad input naming the sheet field', () => {
     expect(fieldsOf({ aDi: '45 mm' })).toEqual(['aDi']);
     expect(fieldsOf({ bt: '0 mm' })).toEqual(['bt']);

@@ -7,6 +7,7 @@ import type {
 import { CalcInputError, FieldErrorCollector, isCalcInputError } from '../core/errors.js';
 import { Derivation } from '../core/step.js';
 import { deriveStackSet } from '../disc-springs/stack-derivation.js';
+import { findStandardDisc } from '../disc-springs/standard-sizes.js';
 import type { DiscStack } from '../disc-springs/stack.js';
 import { CORE_VERSION } from '../version.js';
 import {
@@ -27,17 +28,26 @@ const CAUTIONS = [
 
 function readStack(v: Record<string, number | boolean | string>, k: StackKey): DiscStack {
   const num = (name: string) => v[`${k}${name}`] as number;
+  const size = findStandardDisc(String(v[`${k}Size`]));
   const tr = num('tReduced');
+  const mm = 1e-3;
+  const geometry = size
+    ? {
+        De: size.De * mm,
+        Di: size.Di * mm,
+        t: size.t * mm,
+        l0: size.l0 * mm,
+        tReduced: size.tReduced === undefined ? undefined : size.tReduced * mm,
+      }
+    : {
+        De: num('De'),
+        Di: num('Di'),
+        t: num('t'),
+        l0: num('l0'),
+        tReduced: tr > 0 ? tr : undefined,
+      };
   return {
-    disc: {
-      De: num('De'),
-      Di: num('Di'),
-      t: num('t'),
-      l0: num('l0'),
-      tReduced: tr > 0 ? tr : undefined,
-      E: v.E as number,
-      nu: v.nu as number,
-    },
+    disc: { ...geometry, E: v.E as number, nu: v.nu as number },
     seriesCount: num('Series'),
     parallelCount: num('Parallel'),
     frictionCone: num('FrictionCone'),
@@ -129,6 +139,11 @@ export function evaluateDiscSpringStack(
     out.fieldSettings.push(...o.fieldSettings);
     out.tables.push(o.table);
     out.warnings.push(...o.warnings);
+    const size = findStandardDisc(String(v[`${c.k}Size`]));
+    if (size)
+      out.warnings.push(
+        `${TITLES[c.k]}: geometry of standard size ${size.designation} — ${size.source} (confidence: ${size.confidence}).`,
+      );
   }
   out.pass = out.checks.every((c) => c.pass);
   return out;
