@@ -53,6 +53,47 @@ describe.skipIf(skipReason !== null)('sign-in in a real browser', () => {
     });
   }
 
+  it('lets an admin add a user who can then sign in, and deactivate them again', async () => {
+    const { page } = browser;
+    const email = `e2e.${Date.now()}@holdfast.test`;
+    const password = 'a-long-first-password';
+    await signInAs(page, baseUrl, 'admin');
+    await page.getByRole('link', { name: 'Users' }).click();
+    await page.getByRole('button', { name: 'New user' }).click();
+    const dialog = page.getByRole('dialog');
+    await dialog.getByRole('textbox', { name: 'E-mail' }).fill(email);
+    await dialog.getByRole('textbox', { name: 'Display name' }).fill('Noor Haddad');
+    await dialog.getByRole('textbox', { name: 'Display name' }).blur();
+    await expect(dialog.getByRole('textbox', { name: 'Initials' }).inputValue()).resolves.toBe(
+      'NH',
+    );
+    await dialog.getByRole('textbox', { name: 'First password' }).fill(password);
+    await screenshot(page, 'admin-new-user');
+    await dialog.getByRole('button', { name: 'Create user' }).click();
+    await page.getByRole('cell', { name: email }).waitFor();
+    await signOut(page);
+
+    await page.getByRole('textbox', { name: 'E-mail' }).fill(email);
+    await page.getByRole('textbox', { name: 'Password' }).fill(password);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByTestId('current-user-name').filter({ hasText: 'Noor Haddad' }).waitFor();
+    await signOut(page);
+
+    await signInAs(page, baseUrl, 'admin');
+    await page.goto(`${baseUrl}/admin/users`);
+    await page.getByRole('button', { name: 'Deactivate Noor Haddad' }).click();
+    await page.getByRole('button', { name: 'Reactivate Noor Haddad' }).waitFor();
+    await signOut(page);
+
+    await page.getByRole('textbox', { name: 'E-mail' }).fill(email);
+    await page.getByRole('textbox', { name: 'Password' }).fill(password);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page
+      .getByRole('alert')
+      .filter({ hasText: /not signed in/i })
+      .waitFor();
+  });
+
   it('keeps the session across a reload and shows a 404 inside the frame', async () => {
     const { page } = browser;
     await signInAs(page, baseUrl, 'checker');
