@@ -16,15 +16,19 @@ function Step(props: { step: DerivationStep; n: string; sheet: PrintableSheet })
       style={{ flexDirection: 'row', borderBottomWidth: 0.4, borderColor: colours.rule, paddingVertical: 3 }}
     >
       <Text style={{ width: 26, color: colours.muted, fontSize: 7 }}>{props.n}</Text>
-      <View style={{ flex: 1 }}>
+      {/* One paragraph with spans: a quarter of the layout nodes of one Text per line. */}
+      <Text style={{ flex: 1 }}>
         <Text style={{ fontWeight: 600 }}>{step.label}</Text>
+        {'\n'}
         <Text style={mono}>{step.formula}</Text>
+        {'\n'}
         <Text style={{ ...mono, color: colours.muted }}>{step.substituted}</Text>
+        {'\n'}
         <Text style={{ ...mono, fontWeight: 700 }}>
           {step.symbol} = {shown}
           {shown !== si ? `  (${si})` : ''}
         </Text>
-      </View>
+      </Text>
       <Text style={{ width: 150, fontSize: 6.8, color: colours.muted, paddingLeft: 6 }}>
         {step.reference}
       </Text>
