@@ -97,7 +97,7 @@ describe('deny by default', () => {
     try {
       const { port } = app.getHttpServer().address() as { port: number };
       const token = await base.token('admin');
-      for (const headers of [{}, { authorization: `Bearer ${token}` }]) {
+      for (const headers of [{}, { authorization: `Bearer ${token}` }] as Record<string, string>[]) {
         const res = await fetch(`http://127.0.0.1:${port}/api/forgotten`, { headers });
         expect(res.status).toBe(403);
         expect(((await res.json()) as { error: { code: string } }).error.code).toBe('forbidden');

@@ -17,6 +17,7 @@ import type { Role, Session } from '@holdfast/shared';
 import { createApp } from '../src/app.js';
 import { loadSettings, type AppSettings } from '../src/config/env.js';
 import { Database } from '../src/database/database.js';
+import { workerDatabaseUrl } from './worker-database.js';
 
 /** The demo sign-ins: the part of the e-mail before @holdfast.test. */
 export const demoLogins = ['engineer', 'engineer2', 'checker', 'checker2', 'viewer', 'admin'] as const;
@@ -81,30 +82,38 @@ export interface TestContextOptions {
   database?: boolean;
 }
 
-let migrated: Promise<unknown> | undefined;
+const migrated = new Map<string, Promise<unknown>>();
 function migrateOnce(url: string): Promise<unknown> {
-  migrated ??= (async () => {
-    const plain = createMigrationDatabase(url);
-    try {
-      await migrateToLatest(plain);
-    } finally {
-      await plain.destroy();
-    }
-  })();
-  return migrated;
+  let done = migrated.get(url);
+  if (!done) {
+    done = (async () => {
+      const plain = createMigrationDatabase(url);
+      try {
+        await migrateToLatest(plain);
+      } finally {
+        await plain.destroy();
+      }
+    })();
+    migrated.set(url, done);
+  }
+  return done;
 }
 
-let demoSnapshot: UserRow[] | undefined;
+/** Demo user rows per database, restored by reset() with the same ids. */
+const demoSnapshots = new Map<string, UserRow[]>();
 
-/** Boots the real app on 127.0.0.1:<free port> against process.env.DATABASE_URL. */
+/**
+ * Boots the real app on 127.0.0.1:<free port> against a per-worker database next to
+ * process.env.DATABASE_URL (see worker-database.ts), migrated to latest and reset.
+ */
 export async function createTestContext(options: TestContextOptions = {}): Promise<TestContext> {
-  const url = options.env?.DATABASE_URL ?? process.env.DATABASE_URL;
-  if (!url) throw new Error('DATABASE_URL is not set: export DATABASE_URL=$(node scripts/db-url.mjs holdfast_found --fresh)');
+  const sourceUrl = options.env?.DATABASE_URL ?? process.env.DATABASE_URL;
+  if (!sourceUrl) throw new Error('DATABASE_URL is not set: export DATABASE_URL=$(node scripts/db-url.mjs holdfast_test --fresh)');
   const useDb = options.database !== false;
+  const url = useDb ? await workerDatabaseUrl(sourceUrl) : sourceUrl;
   if (useDb) await migrateOnce(url);
 
   const settings = loadSettings({
-    DATABASE_URL: url,
     PORT: '0',
     HOST: '127.0.0.1',
     JWT_SECRET: 'test-secret-test-secret-test-secret-0123456789',
@@ -113,6 +122,7 @@ export async function createTestContext(options: TestContextOptions = {}): Promi
     UI_DIST: path.join(mkdtempSync(path.join(tmpdir(), 'holdfast-no-ui-')), 'dist'),
     DATA_DIR: mkdtempSync(path.join(tmpdir(), 'holdfast-data-')),
     ...options.env,
+    DATABASE_URL: url,
   });
   const { app } = await createApp(settings);
   await app.listen(0, '127.0.0.1');
@@ -134,7 +144,7 @@ export async function createTestContext(options: TestContextOptions = {}): Promi
       body = JSON.stringify(o.body);
       headers['content-type'] = 'application/json';
     }
-    const res = await fetch(baseUrl + p, { method, headers, body: body as BodyInit | undefined });
+    const res = await fetch(baseUrl + p, { method, headers, body: body as RequestInit['body'] });
     const text = await res.text();
     let parsed: unknown = text;
     if ((res.headers.get('content-type') ?? '').includes('json') && text) parsed = JSON.parse(text);
@@ -173,12 +183,13 @@ export async function createTestContext(options: TestContextOptions = {}): Promi
       if (names.length) {
         await sql`truncate table ${sql.join(names.map((n) => sql.id(n)))} restart identity cascade`.execute(db);
       }
-      if (!demoSnapshot) {
+      const snapshot = demoSnapshots.get(url);
+      if (!snapshot) {
         // One argon2 hash for all demo users keeps resets fast; the password is the demo one.
         await seedDemoUsers(db, await hashPassword(DEMO_PASSWORD));
-        demoSnapshot = await db.selectFrom('users').selectAll().execute();
+        demoSnapshots.set(url, await db.selectFrom('users').selectAll().execute());
       } else {
-        await db.insertInto('users').values(demoSnapshot).execute();
+        await db.insertInto('users').values(snapshot).execute();
       }
     },
     async close() {
