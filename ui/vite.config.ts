@@ -6,6 +6,8 @@ const apiTarget = process.env.HOLDFAST_API_URL ?? 'http://127.0.0.1:3000';
 
 export default defineConfig({
   plugins: [react()],
+  // convert-units (used by the calc core in the browser) carries old lodash code that reads `global`.
+  define: { global: 'globalThis' },
   server: {
     host: '127.0.0.1',
     port: 5173,

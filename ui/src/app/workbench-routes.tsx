@@ -37,7 +37,10 @@ export function workbenchRoutes(queryClient: QueryClient): RouteObject[] {
     { index: true, lazy: lazy(() => import('./routes/queue/work-queue')) },
     { path: 'sheets', lazy: lazy(() => import('./routes/sheets/sheet-list')) },
     { path: 'sheets/:sheetId', lazy: lazy(() => import('./routes/sheets/sheet-page')) },
-    { path: 'sheets/:sheetId/revisions/:revisionId', lazy: lazy(() => import('./routes/sheets/sheet-page')) },
+    {
+      path: 'sheets/:sheetId/revisions/:revisionId',
+      lazy: lazy(() => import('./routes/sheets/sheet-page')),
+    },
     { path: 'sheets/:sheetId/compare', lazy: lazy(() => import('./routes/sheets/compare-page')) },
     { path: 'equipment', lazy: lazy(() => import('./routes/equipment/equipment')) },
     { path: 'criteria', lazy: lazy(() => import('./routes/criteria/criteria')) },

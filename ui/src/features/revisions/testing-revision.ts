@@ -1,6 +1,10 @@
 import type { Revision } from '@holdfast/shared';
 
-const person = { id: '6b1f0c1e-8a52-4c3e-9d7a-2f1e0b9c4a10', displayName: 'Erin Vale', initials: 'EV' };
+const person = {
+  id: '6b1f0c1e-8a52-4c3e-9d7a-2f1e0b9c4a10',
+  displayName: 'Erin Vale',
+  initials: 'EV',
+};
 
 /** A draft revision of the lever-brake test fixture, editable by its author. */
 export function makeRevision(overrides: Partial<Revision> = {}): Revision {

@@ -1,5 +1,17 @@
 import { useEffect, useState } from 'react';
-import { Alert, Button, Group, NavLink, Paper, Select, Skeleton, Stack, Text, TextInput, Title } from '@mantine/core';
+import {
+  Alert,
+  Button,
+  Group,
+  NavLink,
+  Paper,
+  Select,
+  Skeleton,
+  Stack,
+  Text,
+  TextInput,
+  Title,
+} from '@mantine/core';
 import type { QueryClient } from '@tanstack/react-query';
 import { useSearchParams } from 'react-router-dom';
 import type { CriterionValueInput } from '@holdfast/shared';
@@ -9,7 +21,10 @@ import { errorMessage, isApiRequestError } from '../../../lib/api-client';
 import type { RouteHandle } from '../../../lib/route-handle';
 import { useCurrentUser } from '../../../lib/session';
 import { useCriteriaSet } from '../../../features/criteria/api/get-criteria-set';
-import { criteriaSetsQueryOptions, useCriteriaSets } from '../../../features/criteria/api/get-criteria-sets';
+import {
+  criteriaSetsQueryOptions,
+  useCriteriaSets,
+} from '../../../features/criteria/api/get-criteria-sets';
 import { usePublishCriteriaVersion } from '../../../features/criteria/api/publish-criteria-version';
 import { CriteriaValuesTable } from '../../../features/criteria/components/criteria-values-table';
 import { ImpactList } from '../../../features/criteria/components/impact-list';
@@ -66,16 +81,31 @@ export function Component() {
   const noteError = isApiRequestError(publish.error) ? publish.error.fieldErrors().note : undefined;
 
   return (
-    <Page title="Criteria sets" description="The acceptance limits the checks use, each with its source. Publishing a version never changes approved sheets; the impact list shows which no longer pass.">
+    <Page
+      title="Criteria sets"
+      description="The acceptance limits the checks use, each with its source. Publishing a version never changes approved sheets; the impact list shows which no longer pass."
+    >
       {sets.isPending ? (
         <Skeleton h={240} />
       ) : sets.isError ? (
         <ErrorPanel error={sets.error} onRetry={() => void sets.refetch()} />
       ) : (
         <Group align="flex-start" gap="md" wrap="nowrap">
-          <Paper p="xs" w={240} component="nav" aria-label="Criteria sets" style={{ flexShrink: 0 }}>
+          <Paper
+            p="xs"
+            w={240}
+            component="nav"
+            aria-label="Criteria sets"
+            style={{ flexShrink: 0 }}
+          >
             {sets.data.items.map((s) => (
-              <NavLink key={s.id} active={s.id === selected} label={s.name} description={`version ${s.version}`} onClick={() => go({ set: s.id, version: undefined })} />
+              <NavLink
+                key={s.id}
+                active={s.id === selected}
+                label={s.name}
+                description={`version ${s.version}`}
+                onClick={() => go({ set: s.id, version: undefined })}
+              />
             ))}
           </Paper>
           <Stack style={{ flex: 1, minWidth: 0 }} gap="md">
@@ -87,10 +117,15 @@ export function Component() {
               <Paper p="md">
                 <Group justify="space-between" align="flex-start" mb="sm">
                   <div>
-                    <Title order={2} size="h4">{detail.data.name}</Title>
-                    <Text size="sm" c="dimmed">{detail.data.description}</Text>
+                    <Title order={2} size="h4">
+                      {detail.data.name}
+                    </Title>
+                    <Text size="sm" c="dimmed">
+                      {detail.data.description}
+                    </Text>
                     <Text size="xs" c="dimmed" mt={4}>
-                      Version {detail.data.version}, published {new Date(detail.data.publishedAt).toLocaleDateString('en-GB')}
+                      Version {detail.data.version}, published{' '}
+                      {new Date(detail.data.publishedAt).toLocaleDateString('en-GB')}
                       {detail.data.publishedBy ? ` by ${detail.data.publishedBy.displayName}` : ''}
                       {detail.data.note ? ` — ${detail.data.note}` : ''}
                     </Text>
@@ -100,13 +135,19 @@ export function Component() {
                       label="Version"
                       size="xs"
                       w={110}
-                      data={detail.data.versions.map((v) => ({ value: String(v.version), label: `v${v.version}` }))}
+                      data={detail.data.versions.map((v) => ({
+                        value: String(v.version),
+                        label: `v${v.version}`,
+                      }))}
                       value={String(detail.data.version)}
                       onChange={(v) => go({ version: v ?? undefined })}
                       allowDeselect={false}
                     />
                     {user.role === 'admin' && !editing ? (
-                      <Button size="xs" onClick={() => setEditing(detail.data.values.map((v) => ({ ...v })))}>
+                      <Button
+                        size="xs"
+                        onClick={() => setEditing(detail.data.values.map((v) => ({ ...v })))}
+                      >
                         Draft a new version
                       </Button>
                     ) : null}
@@ -114,23 +155,54 @@ export function Component() {
                 </Group>
                 <CriteriaValuesTable
                   values={editing ?? detail.data.values}
-                  onEdit={editing ? (i, patch) => setEditing((cur) => cur && cur.map((v, j) => (j === i ? { ...v, ...patch } : v))) : undefined}
+                  onEdit={
+                    editing
+                      ? (i, patch) =>
+                          setEditing(
+                            (cur) => cur && cur.map((v, j) => (j === i ? { ...v, ...patch } : v)),
+                          )
+                      : undefined
+                  }
                 />
                 {editing ? (
                   <Stack mt="md" gap="xs">
-                    <TextInput label="What changed and why" required value={note} onChange={(e) => setNote(e.currentTarget.value)} error={noteError} />
-                    {publish.isError && !noteError ? <Alert color="fail" role="alert">{errorMessage(publish.error)}</Alert> : null}
+                    <TextInput
+                      label="What changed and why"
+                      required
+                      value={note}
+                      onChange={(e) => setNote(e.currentTarget.value)}
+                      error={noteError}
+                    />
+                    {publish.isError && !noteError ? (
+                      <Alert color="fail" role="alert">
+                        {errorMessage(publish.error)}
+                      </Alert>
+                    ) : null}
                     <Group justify="flex-end">
-                      <Button variant="default" onClick={() => setEditing(null)}>Discard draft</Button>
-                      <Button onClick={doPublish} loading={publish.isPending} disabled={!note.trim()}>Publish version {detail.data.versions.length + 1}</Button>
+                      <Button variant="default" onClick={() => setEditing(null)}>
+                        Discard draft
+                      </Button>
+                      <Button
+                        onClick={doPublish}
+                        loading={publish.isPending}
+                        disabled={!note.trim()}
+                      >
+                        Publish version {detail.data.versions.length + 1}
+                      </Button>
                     </Group>
                   </Stack>
                 ) : null}
               </Paper>
             )}
-            {impactVersion ? <ImpactList setId={selected} version={impactVersion} /> : detail.data && user.role === 'admin' ? (
+            {impactVersion ? (
+              <ImpactList setId={selected} version={impactVersion} />
+            ) : detail.data && user.role === 'admin' ? (
               <Group>
-                <Button variant="light" size="xs" onClick={() => setImpactVersion(detail.data.version)}>
+                <Button
+                  variant="light"
+                  size="xs"
+                  onClick={() => setImpactVersion(detail.data.version)}
+                >
                   Check approved sheets against version {detail.data.version}
                 </Button>
               </Group>

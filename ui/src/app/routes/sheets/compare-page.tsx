@@ -50,8 +50,22 @@ export function Component() {
     >
       <Paper p="sm">
         <Group gap="md" align="flex-end">
-          <Select label="From" data={options} value={from || null} onChange={(v) => pick('from', v)} w={180} allowDeselect={false} />
-          <Select label="To" data={options} value={to || null} onChange={(v) => pick('to', v)} w={180} allowDeselect={false} />
+          <Select
+            label="From"
+            data={options}
+            value={from || null}
+            onChange={(v) => pick('from', v)}
+            w={180}
+            allowDeselect={false}
+          />
+          <Select
+            label="To"
+            data={options}
+            value={to || null}
+            onChange={(v) => pick('to', v)}
+            w={180}
+            allowDeselect={false}
+          />
         </Group>
       </Paper>
       {!from || !to || from === to ? (

@@ -1,5 +1,16 @@
 import { useState } from 'react';
-import { Alert, Button, Center, Group, Loader, Paper, Stack, Text, TextInput, Title } from '@mantine/core';
+import {
+  Alert,
+  Button,
+  Center,
+  Group,
+  Loader,
+  Paper,
+  Stack,
+  Text,
+  TextInput,
+  Title,
+} from '@mantine/core';
 import { IconAlertTriangle, IconCircleCheck, IconCircleX } from '@tabler/icons-react';
 import { useNavigate, useParams } from 'react-router-dom';
 import { verificationCodeSchema } from '@holdfast/shared';
@@ -13,12 +24,24 @@ export const handle: RouteHandle = { title: 'Check a printout' };
 
 function Result({ code }: { code: string }) {
   const q = useVerification(code);
-  if (q.isPending) return <Center h={120}><Loader size="sm" /></Center>;
+  if (q.isPending)
+    return (
+      <Center h={120}>
+        <Loader size="sm" />
+      </Center>
+    );
   if (q.isError) {
     const notFound = isApiRequestError(q.error) && q.error.status === 404;
     return (
-      <Alert color="fail" icon={<IconCircleX size={20} />} title={notFound ? 'Unknown code' : 'Could not check'} role="alert">
-        {notFound ? `No Holdfast sheet carries the code ${code}. Do not use this printout until it is confirmed.` : errorMessage(q.error)}
+      <Alert
+        color="fail"
+        icon={<IconCircleX size={20} />}
+        title={notFound ? 'Unknown code' : 'Could not check'}
+        role="alert"
+      >
+        {notFound
+          ? `No Holdfast sheet carries the code ${code}. Do not use this printout until it is confirmed.`
+          : errorMessage(q.error)}
       </Alert>
     );
   }
@@ -29,11 +52,17 @@ function Result({ code }: { code: string }) {
       color={ok ? 'pass' : 'fail'}
       variant={ok ? 'light' : 'filled'}
       icon={ok ? <IconCircleCheck size={22} /> : <IconAlertTriangle size={22} />}
-      title={ok ? 'Current: this is the approved revision in force' : 'Not current: do not use this printout'}
+      title={
+        ok
+          ? 'Current: this is the approved revision in force'
+          : 'Not current: do not use this printout'
+      }
       data-verified={ok}
     >
       <Stack gap={4}>
-        <Text size="sm" ff="monospace">{r.documentNumber} rev. {r.revisionLabel}</Text>
+        <Text size="sm" ff="monospace">
+          {r.documentNumber} rev. {r.revisionLabel}
+        </Text>
         <Text size="sm">{r.title}</Text>
         <Text size="sm">
           State: {r.state.replace('_', ' ')}
@@ -41,7 +70,8 @@ function Result({ code }: { code: string }) {
         </Text>
         {r.newerApproved ? (
           <Text size="sm" fw={600}>
-            Revision {r.newerApproved.revisionLabel} replaced it on {new Date(r.newerApproved.approvedAt).toLocaleDateString('en-GB')}.
+            Revision {r.newerApproved.revisionLabel} replaced it on{' '}
+            {new Date(r.newerApproved.approvedAt).toLocaleDateString('en-GB')}.
           </Text>
         ) : null}
       </Stack>
@@ -67,8 +97,13 @@ export function Component() {
       <Paper p="xl" w={520} maw="100%">
         <Stack gap="md">
           <Wordmark />
-          <Title order={1} size="h3">Check a printout</Title>
-          <Text size="sm" c="dimmed">Every page of a Holdfast printout carries a verification code. Enter it to see whether that revision is still the approved one in force.</Text>
+          <Title order={1} size="h3">
+            Check a printout
+          </Title>
+          <Text size="sm" c="dimmed">
+            Every page of a Holdfast printout carries a verification code. Enter it to see whether
+            that revision is still the approved one in force.
+          </Text>
           <Group align="flex-end" gap="xs" wrap="nowrap">
             <TextInput
               label="Verification code"
@@ -83,7 +118,9 @@ export function Component() {
             <Button onClick={submit}>Check</Button>
           </Group>
           {raw && parsed.success ? <Result code={parsed.data} /> : null}
-          {raw && !parsed.success ? <Alert color="fail">{parsed.error.issues[0]?.message}</Alert> : null}
+          {raw && !parsed.success ? (
+            <Alert color="fail">{parsed.error.issues[0]?.message}</Alert>
+          ) : null}
           <SafetyCaution />
         </Stack>
       </Paper>

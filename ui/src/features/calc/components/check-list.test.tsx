@@ -24,14 +24,31 @@ describe('CheckList', () => {
     renderWithProviders(
       <CheckList
         unitSystem="SI"
-        checks={[base, { ...base, id: 'pressure', label: 'Lining pressure', kind: 'max', value: 0.5e6, limit: 1e6, unit: 'Pa', dimension: 'pressure', utilisation: 0.5, pass: true }]}
+        checks={[
+          base,
+          {
+            ...base,
+            id: 'pressure',
+            label: 'Lining pressure',
+            kind: 'max',
+            value: 0.5e6,
+            limit: 1e6,
+            unit: 'Pa',
+            dimension: 'pressure',
+            utilisation: 0.5,
+            pass: true,
+          },
+        ]}
       />,
     );
     const torque = screen.getByRole('listitem', { name: /Brake torque at minimum friction: fail/ });
     expect(within(torque).getByText('Fail')).toBeInTheDocument();
     expect(torque).toHaveTextContent('1200 N·m');
     expect(torque).toHaveTextContent('≥ 1500 N·m required');
-    expect(within(torque).getByRole('meter', { name: 'Utilisation' })).toHaveAttribute('aria-valuetext', '125 % of the limit');
+    expect(within(torque).getByRole('meter', { name: 'Utilisation' })).toHaveAttribute(
+      'aria-valuetext',
+      '125 % of the limit',
+    );
     expect(torque).toHaveTextContent('Limit: Demo set v1 — common practice');
     const pressure = screen.getByRole('listitem', { name: /Lining pressure: pass/ });
     expect(within(pressure).getByText('Pass')).toBeInTheDocument();
@@ -40,7 +57,9 @@ describe('CheckList', () => {
   });
 
   it('shows values in US customary units when asked', () => {
-    renderWithProviders(<CheckList unitSystem="US" checks={[{ ...base, value: 1355.82, limit: 1355.82 * 1.25 }]} />);
+    renderWithProviders(
+      <CheckList unitSystem="US" checks={[{ ...base, value: 1355.82, limit: 1355.82 * 1.25 }]} />,
+    );
     expect(screen.getByRole('listitem')).toHaveTextContent('1000 lbf·ft');
   });
 });

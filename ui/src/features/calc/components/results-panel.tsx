@@ -7,6 +7,7 @@ import {
   List,
   Paper,
   Skeleton,
+  Spoiler,
   Stack,
   Tabs,
   Text,
@@ -122,12 +123,20 @@ export function ResultsPanel(props: ResultsPanelProps) {
       ) : (
         <Box style={{ opacity: evaluation ? 1 : 0.55 }}>
           {shown.warnings.length > 0 ? (
-            <Alert color="amber" variant="outline" mb="sm" title="Warnings">
-              <List size="sm">
-                {shown.warnings.map((w) => (
-                  <List.Item key={w}>{w}</List.Item>
-                ))}
-              </List>
+            <Alert
+              color="amber"
+              variant="outline"
+              mb="sm"
+              p="xs"
+              title={`Notes from the calculation (${shown.warnings.length})`}
+            >
+              <Spoiler maxHeight={44} showLabel="Show all" hideLabel="Show less" fz="sm">
+                <List size="xs" spacing={2}>
+                  {shown.warnings.map((w) => (
+                    <List.Item key={w}>{w}</List.Item>
+                  ))}
+                </List>
+              </Spoiler>
             </Alert>
           ) : null}
           <Tabs defaultValue="checks" keepMounted={false}>

@@ -25,7 +25,9 @@ function Harness({ initial, onValue }: { initial: InputValue; onValue: (v: Input
 describe('UnitField', () => {
   it('keeps the chosen unit when a plain number is typed', async () => {
     const onValue = vi.fn();
-    const { user } = renderWithProviders(<Harness initial={{ value: 2000, unit: 'N' }} onValue={onValue} />);
+    const { user } = renderWithProviders(
+      <Harness initial={{ value: 2000, unit: 'N' }} onValue={onValue} />,
+    );
     const input = screen.getByRole('textbox', { name: 'Spring force' });
     await user.clear(input);
     await user.type(input, '2500');
@@ -44,12 +46,16 @@ describe('UnitField', () => {
 
   it('converts the value when another unit is picked, so the force stays the same', async () => {
     const onValue = vi.fn();
-    const { user } = renderWithProviders(<Harness initial={{ value: 4448.22, unit: 'N' }} onValue={onValue} />);
+    const { user } = renderWithProviders(
+      <Harness initial={{ value: 4448.22, unit: 'N' }} onValue={onValue} />,
+    );
     await user.selectOptions(screen.getByRole('combobox', { name: 'Spring force unit' }), 'lbf');
     const last = onValue.mock.calls.at(-1)![0] as { value: number; unit: string };
     expect(last.unit).toBe('lbf');
     expect(Math.abs(last.value - 1000)).toBeLessThan(0.01);
-    expect(Number((screen.getByRole('textbox', { name: 'Spring force' }) as HTMLInputElement).value)).toBeCloseTo(1000, 1);
+    expect(
+      Number((screen.getByRole('textbox', { name: 'Spring force' }) as HTMLInputElement).value),
+    ).toBeCloseTo(1000, 1);
   });
 
   it('keeps text that is not a number so the calc core can name the problem', () => {
@@ -63,10 +69,20 @@ describe('UnitField', () => {
 
   it('shows a field error and offers both unit systems', () => {
     renderWithProviders(
-      <UnitField label="Drum diameter" name="Drum diameter" dimension="length" value={{ value: 400, unit: 'mm' }} fallbackUnit="mm" onChange={() => undefined} error="must be at least 100 mm" />,
+      <UnitField
+        label="Drum diameter"
+        name="Drum diameter"
+        dimension="length"
+        value={{ value: 400, unit: 'mm' }}
+        fallbackUnit="mm"
+        onChange={() => undefined}
+        error="must be at least 100 mm"
+      />,
     );
     expect(screen.getByText('must be at least 100 mm')).toBeInTheDocument();
-    const options = Array.from((screen.getByRole('combobox', { name: 'Drum diameter unit' }) as HTMLSelectElement).options).map((o) => o.value);
+    const options = Array.from(
+      (screen.getByRole('combobox', { name: 'Drum diameter unit' }) as HTMLSelectElement).options,
+    ).map((o) => o.value);
     expect(options).toEqual(expect.arrayContaining(['mm', 'm', 'in', 'ft']));
   });
 });

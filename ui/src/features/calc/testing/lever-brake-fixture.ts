@@ -21,11 +21,57 @@ export const leverBrakeFixture: SheetTypeDefinition = {
     { id: 'brake', title: 'Brake' },
   ],
   fields: [
-    { key: 'requiredTorque', section: 'duty', label: 'Required torque', symbol: 'M_req', kind: 'quantity', dimension: 'torque', unitSI: 'N m', unitUS: 'lbf ft', default: { value: 1000, unit: 'N m' } },
-    { key: 'springForce', section: 'brake', label: 'Spring force', symbol: 'F_s', kind: 'quantity', dimension: 'force', unitSI: 'N', unitUS: 'lbf', default: { value: 2000, unit: 'N' }, min: 0, exclusiveMin: true },
-    { key: 'leverRatio', section: 'brake', label: 'Lever ratio', symbol: 'i', kind: 'number', default: 2 },
-    { key: 'drumDiameter', section: 'brake', label: 'Drum diameter', symbol: 'D', kind: 'quantity', dimension: 'length', unitSI: 'mm', unitUS: 'in', default: { value: 400, unit: 'mm' } },
-    { key: 'mu', section: 'brake', label: 'Friction coefficient', symbol: 'μ', kind: 'number', default: 0.4 },
+    {
+      key: 'requiredTorque',
+      section: 'duty',
+      label: 'Required torque',
+      symbol: 'M_req',
+      kind: 'quantity',
+      dimension: 'torque',
+      unitSI: 'N m',
+      unitUS: 'lbf ft',
+      default: { value: 1000, unit: 'N m' },
+    },
+    {
+      key: 'springForce',
+      section: 'brake',
+      label: 'Spring force',
+      symbol: 'F_s',
+      kind: 'quantity',
+      dimension: 'force',
+      unitSI: 'N',
+      unitUS: 'lbf',
+      default: { value: 2000, unit: 'N' },
+      min: 0,
+      exclusiveMin: true,
+    },
+    {
+      key: 'leverRatio',
+      section: 'brake',
+      label: 'Lever ratio',
+      symbol: 'i',
+      kind: 'number',
+      default: 2,
+    },
+    {
+      key: 'drumDiameter',
+      section: 'brake',
+      label: 'Drum diameter',
+      symbol: 'D',
+      kind: 'quantity',
+      dimension: 'length',
+      unitSI: 'mm',
+      unitUS: 'in',
+      default: { value: 400, unit: 'mm' },
+    },
+    {
+      key: 'mu',
+      section: 'brake',
+      label: 'Friction coefficient',
+      symbol: 'μ',
+      kind: 'number',
+      default: 0.4,
+    },
   ],
   evaluate(inputs: SheetInputs, criteria: CriteriaSet): SheetEvaluation {
     const errors: { field: string; message: string }[] = [];
@@ -38,14 +84,22 @@ export const leverBrakeFixture: SheetTypeDefinition = {
         return fallback;
       }
     };
-    const required = read<number>(() => parseQuantity(inputs.requiredTorque, 'torque', 'requiredTorque'), 0);
+    const required = read<number>(
+      () => parseQuantity(inputs.requiredTorque, 'torque', 'requiredTorque'),
+      0,
+    );
     const force = read<number>(() => parseQuantity(inputs.springForce, 'force', 'springForce'), 0);
-    const diameter = read<number>(() => parseQuantity(inputs.drumDiameter, 'length', 'drumDiameter'), 0);
+    const diameter = read<number>(
+      () => parseQuantity(inputs.drumDiameter, 'length', 'drumDiameter'),
+      0,
+    );
     const ratio = typeof inputs.leverRatio === 'number' ? inputs.leverRatio : Number.NaN;
     const mu = typeof inputs.mu === 'number' ? inputs.mu : Number.NaN;
-    if (!(ratio > 0)) errors.push({ field: 'leverRatio', message: 'must be a number greater than 0' });
+    if (!(ratio > 0))
+      errors.push({ field: 'leverRatio', message: 'must be a number greater than 0' });
     if (!(mu > 0)) errors.push({ field: 'mu', message: 'must be a number greater than 0' });
-    if (!(force > 0) && !errors.some((e) => e.field === 'springForce')) errors.push({ field: 'springForce', message: 'must be greater than 0 N' });
+    if (!(force > 0) && !errors.some((e) => e.field === 'springForce'))
+      errors.push({ field: 'springForce', message: 'must be greater than 0 N' });
     if (errors.length) throw new CalcInputError(errors);
     const factor = criteria.values.find((v) => v.key === 'torqueFactor')?.value ?? 1;
     const torque = 2 * mu * force * ratio * (diameter / 2);
@@ -56,17 +110,45 @@ export const leverBrakeFixture: SheetTypeDefinition = {
       coreVersion: 'test',
       criteriaSetId: criteria.id,
       criteriaSetVersion: criteria.version,
-      results: [{ key: 'brakeTorque', section: 'brake', label: 'Brake torque', symbol: 'M_b', value: torque, unit: 'N m', dimension: 'torque' }],
+      results: [
+        {
+          key: 'brakeTorque',
+          section: 'brake',
+          label: 'Brake torque',
+          symbol: 'M_b',
+          value: torque,
+          unit: 'N m',
+          dimension: 'torque',
+        },
+      ],
       checks: [
         {
-          id: 'torque', section: 'brake', label: 'Brake torque against required', value: torque, limit, unit: 'N m', dimension: 'torque',
-          kind: 'min', utilisation: limit / torque, pass, source: 'test criteria', message: '',
+          id: 'torque',
+          section: 'brake',
+          label: 'Brake torque against required',
+          value: torque,
+          limit,
+          unit: 'N m',
+          dimension: 'torque',
+          kind: 'min',
+          utilisation: limit / torque,
+          pass,
+          source: 'test criteria',
+          message: '',
         },
       ],
       derivation: [
         {
-          id: 'brake-torque', section: 'brake', label: 'Brake torque', symbol: 'M_b', formula: 'M_b = 2 · μ · F_s · i · D/2',
-          substituted: `M_b = 2 · ${mu} · ${force} N · ${ratio} · ${diameter / 2} m`, value: torque, unit: 'N m', dimension: 'torque', reference: 'definition',
+          id: 'brake-torque',
+          section: 'brake',
+          label: 'Brake torque',
+          symbol: 'M_b',
+          formula: 'M_b = 2 · μ · F_s · i · D/2',
+          substituted: `M_b = 2 · ${mu} · ${force} N · ${ratio} · ${diameter / 2} m`,
+          value: torque,
+          unit: 'N m',
+          dimension: 'torque',
+          reference: 'definition',
         },
       ],
       charts: [],
@@ -83,5 +165,14 @@ export const fixtureCriteria: CriteriaSet = {
   version: 1,
   name: 'Test set',
   description: 'for tests',
-  values: [{ key: 'torqueFactor', label: 'Torque factor', value: 1.5, unit: '', source: 'test', confidence: 'memory' }],
+  values: [
+    {
+      key: 'torqueFactor',
+      label: 'Torque factor',
+      value: 1.5,
+      unit: '',
+      source: 'test',
+      confidence: 'memory',
+    },
+  ],
 };

@@ -9,7 +9,13 @@ const registry = calc as unknown as {
 
 function isSheetType(v: unknown): v is SheetTypeDefinition {
   const t = v as Partial<SheetTypeDefinition> | null;
-  return typeof t === 'object' && t !== null && typeof t.id === 'string' && Array.isArray(t.fields) && typeof t.evaluate === 'function';
+  return (
+    typeof t === 'object' &&
+    t !== null &&
+    typeof t.id === 'string' &&
+    Array.isArray(t.fields) &&
+    typeof t.evaluate === 'function'
+  );
 }
 
 /** All sheet types of the calc registry (or, before it exists, every sheet type calc exports). */

@@ -13,7 +13,12 @@ function show(v: unknown): string {
 }
 
 function verdict(pass: boolean | undefined) {
-  if (pass === undefined) return <Text span c="dimmed">—</Text>;
+  if (pass === undefined)
+    return (
+      <Text span c="dimmed">
+        —
+      </Text>
+    );
   return (
     <Badge size="xs" color={pass ? 'pass' : 'fail'} variant={pass ? 'light' : 'filled'}>
       {pass ? 'Pass' : 'Fail'}
@@ -32,7 +37,9 @@ export function CompareView({ data }: { data: Compare }) {
           Inputs changed ({data.inputs.length})
         </Title>
         {data.inputs.length === 0 ? (
-          <Text size="sm" c="dimmed">No input changed.</Text>
+          <Text size="sm" c="dimmed">
+            No input changed.
+          </Text>
         ) : (
           <Table fz="sm" aria-label="Inputs changed">
             <Table.Thead>
@@ -47,9 +54,15 @@ export function CompareView({ data }: { data: Compare }) {
               {data.inputs.map((i) => (
                 <Table.Tr key={i.key} data-changed-input={i.key}>
                   <Table.Td>{i.label}</Table.Td>
-                  <Table.Td ff="monospace" c="dimmed" td="line-through">{show(i.from)}</Table.Td>
-                  <Table.Td><IconArrowRight size={14} aria-label="changed to" /></Table.Td>
-                  <Table.Td ff="monospace" fw={600} bg="amber.0">{show(i.to)}</Table.Td>
+                  <Table.Td ff="monospace" c="dimmed" td="line-through">
+                    {show(i.from)}
+                  </Table.Td>
+                  <Table.Td>
+                    <IconArrowRight size={14} aria-label="changed to" />
+                  </Table.Td>
+                  <Table.Td ff="monospace" fw={600} bg="amber.0">
+                    {show(i.to)}
+                  </Table.Td>
                 </Table.Tr>
               ))}
             </Table.Tbody>
@@ -75,18 +88,31 @@ export function CompareView({ data }: { data: Compare }) {
                 <Table.Tr key={c.id} bg={flipped ? 'amber.0' : undefined}>
                   <Table.Td>
                     {c.label}
-                    {flipped ? <Text span size="xs" fw={600} c="amber.9"> · verdict changed</Text> : null}
+                    {flipped ? (
+                      <Text span size="xs" fw={600} c="amber.9">
+                        {' '}
+                        · verdict changed
+                      </Text>
+                    ) : null}
                   </Table.Td>
                   <Table.Td>
                     <Group gap={6}>
                       {verdict(c.from?.pass)}
-                      {c.from ? <Text span size="xs" ff="monospace">{Math.round(c.from.utilisation * 100)} %</Text> : null}
+                      {c.from ? (
+                        <Text span size="xs" ff="monospace">
+                          {Math.round(c.from.utilisation * 100)} %
+                        </Text>
+                      ) : null}
                     </Group>
                   </Table.Td>
                   <Table.Td>
                     <Group gap={6}>
                       {verdict(c.to?.pass)}
-                      {c.to ? <Text span size="xs" ff="monospace">{Math.round(c.to.utilisation * 100)} %</Text> : null}
+                      {c.to ? (
+                        <Text span size="xs" ff="monospace">
+                          {Math.round(c.to.utilisation * 100)} %
+                        </Text>
+                      ) : null}
                     </Group>
                   </Table.Td>
                 </Table.Tr>
@@ -100,7 +126,9 @@ export function CompareView({ data }: { data: Compare }) {
           Results moved ({data.results.length})
         </Title>
         {data.results.length === 0 ? (
-          <Text size="sm" c="dimmed">No result moved.</Text>
+          <Text size="sm" c="dimmed">
+            No result moved.
+          </Text>
         ) : (
           <Table fz="sm" aria-label="Results moved">
             <Table.Thead>
@@ -116,10 +144,20 @@ export function CompareView({ data }: { data: Compare }) {
               {data.results.map((r) => (
                 <Table.Tr key={r.key}>
                   <Table.Td>{r.label}</Table.Td>
-                  <Table.Td ff="monospace" ta="right">{r.from === null ? '—' : formatNumber(r.from, 4)}</Table.Td>
-                  <Table.Td ff="monospace" ta="right" fw={600}>{r.to === null ? '—' : formatNumber(r.to, 4)}</Table.Td>
-                  <Table.Td ff="monospace" ta="right" c={r.delta && r.delta < 0 ? 'fail.8' : 'pass.9'}>
-                    {r.deltaPct === null ? '—' : `${r.deltaPct > 0 ? '+' : r.deltaPct < 0 ? '−' : ''}${formatNumber(Math.abs(r.deltaPct), 3)} %`}
+                  <Table.Td ff="monospace" ta="right">
+                    {r.from === null ? '—' : formatNumber(r.from, 4)}
+                  </Table.Td>
+                  <Table.Td ff="monospace" ta="right" fw={600}>
+                    {r.to === null ? '—' : formatNumber(r.to, 4)}
+                  </Table.Td>
+                  <Table.Td
+                    ff="monospace"
+                    ta="right"
+                    c={r.delta && r.delta < 0 ? 'fail.8' : 'pass.9'}
+                  >
+                    {r.deltaPct === null
+                      ? '—'
+                      : `${r.deltaPct > 0 ? '+' : r.deltaPct < 0 ? '−' : ''}${formatNumber(Math.abs(r.deltaPct), 3)} %`}
                   </Table.Td>
                   <Table.Td c="dimmed">{r.unit}</Table.Td>
                 </Table.Tr>

@@ -28,11 +28,13 @@ export function CriteriaValuesTable({ values, onEdit }: CriteriaValuesTableProps
       <Table fz="sm" verticalSpacing={6} striped aria-label="Criteria values">
         <Table.Thead>
           <Table.Tr>
-            <Table.Th>Criterion</Table.Th>
-            <Table.Th ta="right" w={140}>Value</Table.Th>
+            <Table.Th w="30%">Criterion</Table.Th>
+            <Table.Th ta="right" w={110}>
+              Value
+            </Table.Th>
             <Table.Th w={90}>Unit</Table.Th>
             <Table.Th>Source</Table.Th>
-            <Table.Th w={150}>Standing</Table.Th>
+            <Table.Th w={160}>Standing</Table.Th>
           </Table.Tr>
         </Table.Thead>
         <Table.Tbody>
@@ -47,16 +49,28 @@ export function CriteriaValuesTable({ values, onEdit }: CriteriaValuesTableProps
                     inputMode="decimal"
                     defaultValue={String(v.value)}
                     onChange={(e) => onEdit(i, { value: Number(e.currentTarget.value) })}
-                    styles={{ input: { textAlign: 'right', fontFamily: 'var(--mantine-font-family-monospace)' } }}
+                    styles={{
+                      input: {
+                        textAlign: 'right',
+                        fontFamily: 'var(--mantine-font-family-monospace)',
+                      },
+                    }}
                   />
                 ) : (
                   v.value
                 )}
               </Table.Td>
-              <Table.Td ff="monospace" c="dimmed">{v.unit || '—'}</Table.Td>
+              <Table.Td ff="monospace" c="dimmed">
+                {v.unit || '—'}
+              </Table.Td>
               <Table.Td>
                 {onEdit ? (
-                  <TextInput size="xs" aria-label={`${v.label} source`} defaultValue={v.source} onChange={(e) => onEdit(i, { source: e.currentTarget.value })} />
+                  <TextInput
+                    size="xs"
+                    aria-label={`${v.label} source`}
+                    defaultValue={v.source}
+                    onChange={(e) => onEdit(i, { source: e.currentTarget.value })}
+                  />
                 ) : (
                   v.source
                 )}

@@ -19,25 +19,34 @@ export function ImpactList({ setId, version }: { setId: string; version: number 
         <ErrorPanel error={impact.error} onRetry={() => void impact.refetch()} />
       ) : impact.data.items.length === 0 ? (
         <Alert color="pass" variant="light" icon={<IconCircleCheck size={18} />}>
-          All {impact.data.checked} approved revision{impact.data.checked === 1 ? '' : 's'} still pass.
+          All {impact.data.checked} approved revision{impact.data.checked === 1 ? '' : 's'} still
+          pass.
         </Alert>
       ) : (
         <>
           <Alert color="fail" variant="light" icon={<IconAlertTriangle size={18} />} mb="sm">
-            {impact.data.items.length} of {impact.data.checked} approved revisions no longer pass. Each needs a
-            new revision.
+            {impact.data.items.length} of {impact.data.checked} approved revisions no longer pass.
+            Each needs a new revision.
           </Alert>
           <List spacing="sm">
             {impact.data.items.map((item) => (
               <List.Item key={item.revisionId}>
-                <Anchor component={Link} to={`/sheets/${item.sheetId}/revisions/${item.revisionId}`} ff="monospace" size="sm">
+                <Anchor
+                  component={Link}
+                  to={`/sheets/${item.sheetId}/revisions/${item.revisionId}`}
+                  ff="monospace"
+                  size="sm"
+                >
                   {item.documentNumber} rev. {item.revisionLabel}
                 </Anchor>{' '}
-                <Text span size="sm">{item.title}</Text>
+                <Text span size="sm">
+                  {item.title}
+                </Text>
                 <List size="xs" withPadding>
                   {item.failing.map((f) => (
                     <List.Item key={f.id}>
-                      Fail: {f.label} — {formatNumber(f.value, 4)} against {formatNumber(f.limit, 4)} {f.unit}
+                      Fail: {f.label} — {formatNumber(f.value, 4)} against{' '}
+                      {formatNumber(f.limit, 4)} {f.unit}
                     </List.Item>
                   ))}
                 </List>

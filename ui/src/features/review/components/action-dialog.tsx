@@ -68,7 +68,7 @@ export function ActionDialog(props: ActionDialogProps) {
           description={props.textDescription}
           required={textRequired}
           rows={3}
-          
+
           value={text}
           onChange={(e) => setText(e.currentTarget.value)}
           error={fieldError}

@@ -40,7 +40,7 @@ export function CommentComposer({
       <Textarea
         label={`Comment on ${target}`}
         rows={2}
-        
+
         value={body}
         onChange={(e) => setBody(e.currentTarget.value)}
         onKeyDown={(e) => {

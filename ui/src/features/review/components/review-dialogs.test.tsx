@@ -8,15 +8,27 @@ import { ReturnDialog } from './return-dialog';
 import { SubmitDialog } from './submit-dialog';
 
 const failing: CheckResult = {
-  id: 'torque', section: 'brake', label: 'Brake torque at worn lining', value: 1, limit: 2, unit: 'N m', dimension: 'torque',
-  kind: 'min', utilisation: 2, pass: false, source: 'test', message: '',
+  id: 'torque',
+  section: 'brake',
+  label: 'Brake torque at worn lining',
+  value: 1,
+  limit: 2,
+  unit: 'N m',
+  dimension: 'torque',
+  kind: 'min',
+  utilisation: 2,
+  pass: false,
+  source: 'test',
+  message: '',
 };
 
 describe('ReturnDialog', () => {
   it('will not return without saying what must change, then sends the comment', async () => {
     const onReturn = vi.fn().mockResolvedValue(undefined);
     const onClose = vi.fn();
-    const { user } = renderWithProviders(<ReturnDialog opened onClose={onClose} authorName="Erin Vale" onReturn={onReturn} />);
+    const { user } = renderWithProviders(
+      <ReturnDialog opened onClose={onClose} authorName="Erin Vale" onReturn={onReturn} />,
+    );
     const box = await screen.findByRole('textbox', { name: /What must change/ });
     await waitFor(() => expect(box).toHaveFocus());
     await user.click(screen.getByRole('button', { name: 'Return' }));
@@ -32,27 +44,48 @@ describe('ReturnDialog', () => {
 describe('SubmitDialog', () => {
   it('requires a justification when checks fail and lists them', async () => {
     const onSubmit = vi.fn().mockResolvedValue(undefined);
-    const { user } = renderWithProviders(<SubmitDialog opened onClose={() => undefined} failingChecks={[failing]} onSubmit={onSubmit} />);
+    const { user } = renderWithProviders(
+      <SubmitDialog
+        opened
+        onClose={() => undefined}
+        failingChecks={[failing]}
+        onSubmit={onSubmit}
+      />,
+    );
     expect(await screen.findByText('Brake torque at worn lining')).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Send for check' }));
     expect(screen.getByText('Give a reason: checks fail.')).toBeInTheDocument();
     expect(onSubmit).not.toHaveBeenCalled();
-    await user.type(screen.getByRole('textbox', { name: /Why this should go to check anyway/ }), 'Re-adjusted before wear limit');
+    await user.type(
+      screen.getByRole('textbox', { name: /Why this should go to check anyway/ }),
+      'Re-adjusted before wear limit',
+    );
     await user.click(screen.getByRole('button', { name: 'Send for check' }));
     expect(onSubmit).toHaveBeenCalledWith('Re-adjusted before wear limit');
   });
 
   it('sends without a note when every check passes', async () => {
     const onSubmit = vi.fn().mockResolvedValue(undefined);
-    const { user } = renderWithProviders(<SubmitDialog opened onClose={() => undefined} failingChecks={[]} onSubmit={onSubmit} />);
+    const { user } = renderWithProviders(
+      <SubmitDialog opened onClose={() => undefined} failingChecks={[]} onSubmit={onSubmit} />,
+    );
     await user.click(await screen.findByRole('button', { name: 'Send for check' }));
     expect(onSubmit).toHaveBeenCalledWith(undefined);
   });
 
   it('shows the server’s field error under the box and stays open', async () => {
-    const error = new ApiRequestError(400, 'validation_failed', 'Invalid', [{ path: 'justification', message: 'required when checks fail' }]);
+    const error = new ApiRequestError(400, 'validation_failed', 'Invalid', [
+      { path: 'justification', message: 'required when checks fail' },
+    ]);
     const onClose = vi.fn();
-    const { user } = renderWithProviders(<SubmitDialog opened onClose={onClose} failingChecks={[]} onSubmit={() => Promise.reject(error)} />);
+    const { user } = renderWithProviders(
+      <SubmitDialog
+        opened
+        onClose={onClose}
+        failingChecks={[]}
+        onSubmit={() => Promise.reject(error)}
+      />,
+    );
     await user.click(await screen.findByRole('button', { name: 'Send for check' }));
     expect(await screen.findByText('required when checks fail')).toBeInTheDocument();
     expect(onClose).not.toHaveBeenCalled();
@@ -62,7 +95,15 @@ describe('SubmitDialog', () => {
 describe('ApproveDialog', () => {
   it('warns about open comments and passes the optional note on', async () => {
     const onApprove = vi.fn().mockResolvedValue(undefined);
-    const { user } = renderWithProviders(<ApproveDialog opened onClose={() => undefined} revisionLabel="B" openComments={2} onApprove={onApprove} />);
+    const { user } = renderWithProviders(
+      <ApproveDialog
+        opened
+        onClose={() => undefined}
+        revisionLabel="B"
+        openComments={2}
+        onApprove={onApprove}
+      />,
+    );
     expect(await screen.findByText('2 comments are still open.')).toBeInTheDocument();
     expect(screen.getByRole('dialog', { name: 'Approve revision B' })).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Approve' }));
@@ -71,8 +112,18 @@ describe('ApproveDialog', () => {
 
   it('shows a refusal plainly', async () => {
     const error = new ApiRequestError(403, 'forbidden', 'You cannot approve your own revision.');
-    const { user } = renderWithProviders(<ApproveDialog opened onClose={() => undefined} revisionLabel="A" openComments={0} onApprove={() => Promise.reject(error)} />);
+    const { user } = renderWithProviders(
+      <ApproveDialog
+        opened
+        onClose={() => undefined}
+        revisionLabel="A"
+        openComments={0}
+        onApprove={() => Promise.reject(error)}
+      />,
+    );
     await user.click(await screen.findByRole('button', { name: 'Approve' }));
-    expect(await screen.findByRole('alert')).toHaveTextContent('You cannot approve your own revision.');
+    expect(await screen.findByRole('alert')).toHaveTextContent(
+      'You cannot approve your own revision.',
+    );
   });
 });

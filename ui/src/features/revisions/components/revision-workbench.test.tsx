@@ -11,7 +11,11 @@ const PUT = 'PUT /api/revisions/11111111-1111-4111-8111-111111111111';
 
 function renderBench(revision = makeRevision()) {
   return renderWithProviders(
-    <RevisionWorkbench revision={revision} sheetType={leverBrakeFixture} criteria={fixtureCriteria} />,
+    <RevisionWorkbench
+      revision={revision}
+      sheetType={leverBrakeFixture}
+      criteria={fixtureCriteria}
+    />,
     { user: testUsers.engineer },
   );
 }
@@ -22,7 +26,9 @@ function torqueCheck() {
 
 describe('RevisionWorkbench', () => {
   it('recalculates live: raising the spring force turns a failed check into a pass', async () => {
-    mockFetch({ [PUT]: (req) => ({ body: { ...makeRevision(), ...(req.body as object), rowVersion: 4 } }) });
+    mockFetch({
+      [PUT]: (req) => ({ body: { ...makeRevision(), ...(req.body as object), rowVersion: 4 } }),
+    });
     renderBench();
     // 2 · 0.4 · 2000 N · 2 · 0.2 m = 640 N·m against 1000 N·m × 1.5 → fail.
     expect(torqueCheck()).toHaveAccessibleName(/fail/);
@@ -40,7 +46,9 @@ describe('RevisionWorkbench', () => {
   it('puts a calc field error on its field and keeps the last results dimmed', () => {
     mockFetch({});
     renderBench();
-    fireEvent.change(screen.getByRole('textbox', { name: /Spring force/ }), { target: { value: '12 parsecs' } });
+    fireEvent.change(screen.getByRole('textbox', { name: /Spring force/ }), {
+      target: { value: '12 parsecs' },
+    });
     expect(screen.getByText(/unit "parsecs" is not a force unit/)).toBeInTheDocument();
     expect(screen.getByText('Some inputs need attention')).toBeInTheDocument();
     expect(screen.getByText(/from the last valid inputs/)).toBeInTheDocument();
@@ -48,12 +56,19 @@ describe('RevisionWorkbench', () => {
   });
 
   it('autosaves after a pause with the row version it was based on', async () => {
-    const api = mockFetch({ [PUT]: (req) => ({ body: { ...makeRevision(), ...(req.body as object), rowVersion: 4 } }) });
+    const api = mockFetch({
+      [PUT]: (req) => ({ body: { ...makeRevision(), ...(req.body as object), rowVersion: 4 } }),
+    });
     renderBench();
-    fireEvent.change(screen.getByRole('textbox', { name: /Spring force/ }), { target: { value: '2600' } });
+    fireEvent.change(screen.getByRole('textbox', { name: /Spring force/ }), {
+      target: { value: '2600' },
+    });
     expect(screen.getByText('Unsaved changes')).toBeInTheDocument();
     await waitFor(() => expect(api.callsTo(PUT)).toHaveLength(1), { timeout: 3000 });
-    const body = api.callsTo(PUT)[0]!.body as { rowVersion: number; inputs: Record<string, unknown> };
+    const body = api.callsTo(PUT)[0]!.body as {
+      rowVersion: number;
+      inputs: Record<string, unknown>;
+    };
     expect(body.rowVersion).toBe(3);
     expect(body.inputs.springForce).toEqual({ value: 2600, unit: 'N' });
     await screen.findByText(/All changes saved/);
@@ -64,33 +79,66 @@ describe('RevisionWorkbench', () => {
     const api = mockFetch({
       [PUT]: (req) => {
         puts += 1;
-        if (puts === 1) return { status: 409, body: { error: { code: 'conflict', message: 'changed', details: { currentRowVersion: 7 } } } };
+        if (puts === 1)
+          return {
+            status: 409,
+            body: {
+              error: { code: 'conflict', message: 'changed', details: { currentRowVersion: 7 } },
+            },
+          };
         return { body: { ...makeRevision(), ...(req.body as object), rowVersion: 8 } };
       },
-      'GET /api/revisions/11111111-1111-4111-8111-111111111111': { body: makeRevision({ rowVersion: 7 }) },
+      'GET /api/revisions/11111111-1111-4111-8111-111111111111': {
+        body: makeRevision({ rowVersion: 7 }),
+      },
     });
     const { user } = renderBench();
-    fireEvent.change(screen.getByRole('textbox', { name: /Spring force/ }), { target: { value: '2700' } });
-    const dialog = await screen.findByRole('dialog', { name: 'This draft was changed elsewhere' }, { timeout: 3000 });
+    fireEvent.change(screen.getByRole('textbox', { name: /Spring force/ }), {
+      target: { value: '2700' },
+    });
+    const dialog = await screen.findByRole(
+      'dialog',
+      { name: 'This draft was changed elsewhere' },
+      { timeout: 3000 },
+    );
     await user.click(within(dialog).getByRole('button', { name: 'Keep mine' }));
     await waitFor(() => expect(api.callsTo(PUT)).toHaveLength(2));
-    const second = api.callsTo(PUT)[1]!.body as { rowVersion: number; inputs: Record<string, unknown> };
+    const second = api.callsTo(PUT)[1]!.body as {
+      rowVersion: number;
+      inputs: Record<string, unknown>;
+    };
     expect(second.rowVersion).toBe(7);
     expect(second.inputs.springForce).toEqual({ value: 2700, unit: 'N' });
     await waitFor(() => expect(screen.queryByRole('dialog')).not.toBeInTheDocument());
   });
 
   it('puts the server’s 400 field errors on the fields', async () => {
-    mockFetch({ [PUT]: jsonError(400, 'validation_failed', 'Invalid', [{ path: 'inputs.leverRatio', message: 'too large for this brake' }]) });
+    mockFetch({
+      [PUT]: jsonError(400, 'validation_failed', 'Invalid', [
+        { path: 'inputs.leverRatio', message: 'too large for this brake' },
+      ]),
+    });
     renderBench();
-    fireEvent.change(screen.getByRole('textbox', { name: /Lever ratio/ }), { target: { value: '3' } });
-    expect(await screen.findByText('too large for this brake', {}, { timeout: 3000 })).toBeInTheDocument();
+    fireEvent.change(screen.getByRole('textbox', { name: /Lever ratio/ }), {
+      target: { value: '3' },
+    });
+    expect(
+      await screen.findByText('too large for this brake', {}, { timeout: 3000 }),
+    ).toBeInTheDocument();
   });
 
   it('renders a frozen revision read-only from its stored evaluation', () => {
     mockFetch({});
     const stored = leverBrakeFixture.evaluate(makeRevision().inputs, fixtureCriteria);
-    renderBench(makeRevision({ state: 'approved', canEdit: false, canSubmit: false, evaluation: stored, coreVersion: '1.0.0' }));
+    renderBench(
+      makeRevision({
+        state: 'approved',
+        canEdit: false,
+        canSubmit: false,
+        evaluation: stored,
+        coreVersion: '1.0.0',
+      }),
+    );
     expect(screen.getByText(/approved and can never change/)).toBeInTheDocument();
     expect(screen.getByRole('textbox', { name: /Spring force/ })).toHaveAttribute('readonly');
     expect(screen.getByText(/Stored at submission/)).toBeInTheDocument();
@@ -98,11 +146,15 @@ describe('RevisionWorkbench', () => {
   });
 
   it('switching to US customary converts the inputs and the results', async () => {
-    mockFetch({ [PUT]: (req) => ({ body: { ...makeRevision(), ...(req.body as object), rowVersion: 4 } }) });
+    mockFetch({
+      [PUT]: (req) => ({ body: { ...makeRevision(), ...(req.body as object), rowVersion: 4 } }),
+    });
     const { user } = renderBench();
     await user.click(screen.getByRole('radio', { name: 'US customary' }));
     expect(screen.getByRole('combobox', { name: 'Spring force unit' })).toHaveValue('lbf');
-    const force = Number((screen.getByRole('textbox', { name: /Spring force/ }) as HTMLInputElement).value);
+    const force = Number(
+      (screen.getByRole('textbox', { name: /Spring force/ }) as HTMLInputElement).value,
+    );
     expect(Math.abs(force - 449.618)).toBeLessThan(0.01);
     expect(torqueCheck()).toHaveTextContent('lbf·ft');
     await act(async () => undefined);

@@ -122,7 +122,16 @@ export function RevisionWorkbench(props: RevisionWorkbenchProps) {
           </Stack>
         </Grid.Col>
         <Grid.Col span={{ base: 12, md: 6 }}>
-          <Box style={{ position: 'sticky', top: 72 }}>
+          <Box
+            style={{
+              position: 'sticky',
+              top: 72,
+              maxHeight: 'calc(100vh - 150px)',
+              overflowY: 'auto',
+              borderRadius: 4,
+            }}
+            tabIndex={-1}
+          >
             <ResultsPanel
               evaluation={evaluation}
               stale={stored ? null : live.lastGood}

@@ -56,7 +56,7 @@ export function SheetsTable({ items, sort, order, onSort }: SheetsTableProps) {
         <Table.Tbody>
           {items.map((s) => (
             <Table.Tr key={s.id} data-sheet={s.documentNumber}>
-              <Table.Td ff="monospace">
+              <Table.Td ff="monospace" style={{ whiteSpace: 'nowrap' }}>
                 <Anchor component={Link} to={`/sheets/${s.id}`} size="sm" ff="monospace">
                   {s.documentNumber}
                 </Anchor>
@@ -69,7 +69,7 @@ export function SheetsTable({ items, sort, order, onSort }: SheetsTableProps) {
                 </Text>
               </Table.Td>
               <Table.Td>{sheetTypeTitle(s.sheetType)}</Table.Td>
-              <Table.Td>
+              <Table.Td miw={150}>
                 <Group gap={6} wrap="nowrap">
                   <Text size="sm" fw={600}>
                     {s.latest.label}
