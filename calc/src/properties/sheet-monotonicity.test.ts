@@ -56,6 +56,18 @@ const RULES: Rule[] = [
     direction: 'up',
     what: 'more clamp force, more torque',
   },
+  {
+    field: 'aBackOff',
+    result: 'a.preload',
+    direction: 'down',
+    what: 'backing off further, less disc-spring preload',
+  },
+  {
+    field: 'aPitch',
+    result: 'a.preload',
+    direction: 'down',
+    what: 'coarser thread, less disc-spring preload for the same angle',
+  },
 ];
 
 function resultWith(
