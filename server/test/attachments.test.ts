@@ -101,11 +101,17 @@ describe('attachments', () => {
   });
 
   it('sanitises path traversal and control characters in names', async () => {
-    const res = await upload(ctx, revisionId, Buffer.from('notes'), '../../etc/pass\u0007wd.txt');
+    const res = await upload(ctx, revisionId, Buffer.from('notes'), '../../etc/pass\twd.txt');
     expect(res.status).toBe(201);
     expect(res.body.fileName).toBe('passwd.txt');
-    const dots = await upload(ctx, revisionId, Buffer.from('notes'), '..');
-    expect(dots.body.fileName).toBe('attachment');
+    const win = await upload(ctx, revisionId, Buffer.from('notes'), '..\\..\\boot.ini');
+    expect(win.body.fileName).toBe('boot.ini');
+    const dots = await upload(ctx, revisionId, Buffer.from('notes'), '...notes.txt');
+    expect(dots.body.fileName).toBe('notes.txt');
+    // A raw control character breaks the multipart header itself: a clean 400, nothing stored.
+    const bell = await upload(ctx, revisionId, Buffer.from('notes'), 'bell\u0007.txt');
+    expect(bell.status).toBe(400);
+    expect(await ctx.db.selectFrom('attachments').selectAll().execute()).toHaveLength(3);
   });
 
   it('refuses files over 25 MB with 413 and keeps no record', async () => {

@@ -33,7 +33,7 @@ async function seedMany(ctx: SheetsContext, n: number) {
            (array['hoist-shoe-brake', 'travel-shoe-brake', 'caliper-disc-brake', 'disc-spring-stack'])[1 + g % 4],
            case when g % 3 = 0 then ${engineer2}::uuid else ${engineer}::uuid end, ${setId}
     from generate_series(1, ${n}) g
-    join lateral (select p.id, p.machine_id from brake_positions p order by p.id offset (g % 200) limit 1) p on true
+    join lateral (select p.id, p.machine_id, p.tag from brake_positions p order by p.id offset (g % 200) limit 1) p on true
     join machines m on m.id = p.machine_id
     join sites site on site.id = m.site_id`.execute(ctx.db);
   await sql`
@@ -44,7 +44,9 @@ async function seedMany(ctx: SheetsContext, n: number) {
       case when n % 2 = 0 then md5(s.id::text) end, case when n % 2 = 0 then upper(substr(md5(s.id::text), 1, 10)) end,
       s.owner_id, case when n % 2 = 0 then ${checker}::uuid end,
       case when n % 2 = 0 then now() end, case when n % 2 = 0 then now() end
-    from (select id, owner_id, row_number() over (order by id) n from sheets) s`.execute(ctx.db);
+    from (select id, owner_id, row_number() over (order by id) n from sheets where latest_revision_id is null) s`.execute(
+    ctx.db,
+  );
   await sql`analyze`.execute(ctx.db);
 }
 
@@ -104,7 +106,7 @@ describe('sheet list: search, filters, sort, pagination', () => {
     expect(literal.body.total).toBe(0);
     const bySite = await ctx.request(
       'GET',
-      `/api/sheets?siteId=${reg.siteId}&machineId=${reg.machineId}&sheetType=hoist-shoe-brake`,
+      `/api/sheets?siteId=${reg.siteId}&machineId=${reg.machineId}&sheetType=${(made[0] as { sheetType?: string }).sheetType}`,
       { as: 'viewer' },
     );
     expect(bySite.body.total).toBe(12);
@@ -128,6 +130,8 @@ describe('sheet list: search, filters, sort, pagination', () => {
   it('lists 10 000 sheets fast (latency measured and printed)', async () => {
     await seedMany(ctx, 10000);
     const cases = [
+      // Baseline: a signed-in request that does almost nothing, to separate machine load from the list.
+      '/api/auth/me',
       '/api/sheets?pageSize=25',
       '/api/sheets?pageSize=25&sort=updatedAt&order=desc',
       '/api/sheets?pageSize=25&sort=title&page=200',
@@ -149,9 +153,9 @@ describe('sheet list: search, filters, sort, pagination', () => {
       runs.sort((a, b) => a - b);
       timings[url] = Math.round(runs[2] * 10) / 10;
     }
-    console.log('[list latency, median of 5, ms, 10 000 sheets]', timings);
+    console.log('[list latency, median of 5, ms, 10 012 sheets]', timings);
     const all = await ctx.request('GET', '/api/sheets?pageSize=1', { as: 'viewer' });
-    expect(all.body.total).toBe(10000);
+    expect(all.body.total).toBe(10012);
     for (const ms of Object.values(timings)) expect(ms).toBeLessThan(500);
   });
 });

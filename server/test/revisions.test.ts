@@ -28,26 +28,48 @@ export async function publishScaled(ctx: SheetsContext, setId: string, factor: n
   return res.body;
 }
 
-/** Find a scale factor of the criteria that makes this revision's evaluation fail. */
-async function failingFactor(
-  ctx: SheetsContext,
-  sheetType: string,
-  setId: string,
-  inputs: any,
-): Promise<number> {
-  const base = await ctx.app.get(CriteriaService).load(setId, 'latest');
+/**
+ * Make a draft's checks fail with test-only data: first by scaling one quantity input within its
+ * bounds, else by publishing a criteria version with every value scaled. Returns how.
+ */
+async function makeFailing(ctx: SheetsContext, rev: any): Promise<void> {
+  const base = await ctx.app.get(CriteriaService).load(rev.criteriaSetId, 'latest');
+  const def = sheetTypeDefinition(rev.sheetType);
+  for (const field of def.fields.filter((f) => f.kind === 'quantity')) {
+    for (const f of [0.2, 5, 0.05, 20]) {
+      const q = rev.inputs[field.key];
+      if (typeof q !== 'object' || q === null) continue;
+      const inputs = { ...rev.inputs, [field.key]: { ...q, value: q.value * f } };
+      try {
+        if (evaluateSheet(rev.sheetType, inputs, base).pass) continue;
+      } catch {
+        continue;
+      }
+      const res = await ctx.request('PUT', `/api/revisions/${rev.id}`, {
+        as: 'engineer',
+        body: {
+          inputs,
+          unitSystem: 'SI',
+          changeNote: 'Failing on purpose.',
+          rowVersion: rev.rowVersion,
+        },
+      });
+      expect(res.status, res.text).toBe(200);
+      return;
+    }
+  }
   for (const f of [1000, 0.001, 1e6, 1e-6]) {
     try {
-      const e = evaluateSheet(sheetType, inputs, {
-        ...base,
-        values: base.values.map((v) => ({ ...v, value: v.value * f })),
-      });
-      if (!e.pass) return f;
+      const values = base.values.map((v) => ({ ...v, value: v.value * f }));
+      if (!evaluateSheet(rev.sheetType, rev.inputs, { ...base, values }).pass) {
+        await publishScaled(ctx, rev.criteriaSetId, f);
+        return;
+      }
     } catch {
       // a factor the core refuses is not useful here
     }
   }
-  throw new Error('no scale factor makes the default inputs fail');
+  throw new Error('could not make the default inputs fail');
 }
 
 describe('revisions: server-side evaluation, validation, justification, audit', () => {
@@ -133,9 +155,8 @@ describe('revisions: server-side evaluation, validation, justification, audit', 
 
   it('needs a written justification when checks fail, and keeps it', async () => {
     const sheet = await createSheet(ctx, reg);
+    await makeFailing(ctx, await getRevision(ctx, sheet.revisions[0].id));
     const rev = await getRevision(ctx, sheet.revisions[0].id);
-    const factor = await failingFactor(ctx, rev.sheetType, rev.criteriaSetId, rev.inputs);
-    await publishScaled(ctx, rev.criteriaSetId, factor);
     const without = await ctx.request('POST', `/api/revisions/${rev.id}/submit`, {
       as: 'engineer',
       body: { rowVersion: rev.rowVersion },
@@ -152,7 +173,6 @@ describe('revisions: server-side evaluation, validation, justification, audit', 
     expect(withIt.status, withIt.text).toBe(200);
     expect(withIt.body).toMatchObject({
       state: 'in_check',
-      criteriaSetVersion: 2,
       justification: 'Temporary duty; maker confirms margin in writing.',
     });
     expect(withIt.body.evaluation.pass).toBe(false);

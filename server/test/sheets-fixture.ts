@@ -37,7 +37,11 @@ export async function startSmtpFake(port = 0): Promise<SmtpFake> {
         stream.on('end', () => {
           mails.push({
             to: session.envelope.rcptTo.map((r) => r.address),
-            raw: Buffer.concat(chunks).toString('utf8'),
+            // Undo quoted-printable soft breaks and escapes so tests can search the text.
+            raw: Buffer.concat(chunks)
+              .toString('utf8')
+              .replace(/=\r?\n/g, '')
+              .replace(/=([0-9A-F]{2})/g, (_m, h: string) => String.fromCharCode(parseInt(h, 16))),
           });
           cb();
         });
@@ -148,7 +152,7 @@ export async function createSheet(
     body: {
       title: opts.title ?? 'Main hoist brake',
       positionId: reg.positionId,
-      sheetType: opts.sheetType ?? 'hoist-shoe-brake',
+      sheetType: opts.sheetType ?? process.env.TEST_SHEET_TYPE ?? 'hoist-shoe-brake',
     },
   });
   expect(res.status, res.text).toBe(201);

@@ -30,6 +30,13 @@ function toAttachment(r: AttachmentRow, people: People): Attachment {
   };
 }
 
+/** multer hands over the multipart file name decoded as latin1; recover its UTF-8 text. */
+function utf8Name(name: string): string {
+  if (!/[\u0080-\u00ff]/.test(name)) return name;
+  const utf8 = Buffer.from(name, 'latin1').toString('utf8');
+  return utf8.includes('\uFFFD') ? name : utf8;
+}
+
 export interface UploadedFile {
   originalname: string;
   buffer: Buffer;
@@ -75,7 +82,7 @@ export class AttachmentsService {
       ]);
     const rev = await this.revisions.load(user, revisionId);
     this.revisions.assertEditable(user, rev, rev.rowVersion);
-    const fileName = sanitizeFileName(file.originalname);
+    const fileName = sanitizeFileName(utf8Name(file.originalname));
     const contentType = sniffContentType(file.buffer, fileName);
     if (!contentType) {
       throw new ApiException(

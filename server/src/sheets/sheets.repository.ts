@@ -18,13 +18,14 @@ const likeEscape = (q: string) => q.replace(/[\\%_]/g, (c) => `\\${c}`);
 export class SheetsRepository {
   constructor(private readonly db: Database) {}
 
-  private summaryQuery(db: Kysely<DB> = this.db) {
-    return db
+  /**
+   * Summary rows for the given sheet ids, in that order. The small lookup tables are read by id
+   * in parallel rather than joined: a seven-way join costs more to plan than to run.
+   */
+  async hydrate(ids: string[], db: Kysely<DB> = this.db) {
+    if (ids.length === 0) return [];
+    const sheets = await db
       .selectFrom('sheets as s')
-      .innerJoin('sites as site', 'site.id', 's.siteId')
-      .innerJoin('machines as m', 'm.id', 's.machineId')
-      .innerJoin('brakePositions as p', 'p.id', 's.positionId')
-      .innerJoin('users as o', 'o.id', 's.ownerId')
       .innerJoin('revisions as lr', 'lr.id', 's.latestRevisionId')
       .leftJoin('revisions as ar', 'ar.id', 's.approvedRevisionId')
       .select([
@@ -35,64 +36,102 @@ export class SheetsRepository {
         's.updatedAt',
         's.criteriaSetId',
         's.ownerId',
-        'site.id as siteId',
-        'site.code as siteCode',
-        'site.name as siteName',
-        'm.id as machineId',
-        'm.tag as machineTag',
-        'm.name as machineName',
-        'p.id as positionId',
-        'p.tag as positionTag',
-        'p.description as positionDescription',
-        'o.displayName as ownerName',
-        'o.initials as ownerInitials',
+        's.siteId',
+        's.machineId',
+        's.positionId',
         'lr.id as latestId',
         'lr.label as latestLabel',
         'lr.state as latestState',
         'ar.id as approvedId',
         'ar.label as approvedLabel',
         'ar.approvedAt as approvedAt',
-      ]);
-  }
-
-  async list(query: SheetListQuery) {
-    let q = this.summaryQuery();
-    if (query.q)
-      q = q.where(
-        sql<boolean>`s.search_text like ${'%' + likeEscape(query.q.toLowerCase()) + '%'}`,
-      );
-    if (query.state) q = q.where('s.latestState', '=', query.state);
-    if (query.siteId) q = q.where('s.siteId', '=', query.siteId);
-    if (query.machineId) q = q.where('s.machineId', '=', query.machineId);
-    if (query.sheetType) q = q.where('s.sheetType', '=', query.sheetType);
-    if (query.ownerId) q = q.where('s.ownerId', '=', query.ownerId);
-    const rows = await q
-      .select(sql<number>`count(*) over ()`.as('total'))
-      .orderBy(sortColumn[query.sort], query.order)
-      .orderBy('s.id', query.order)
-      .limit(query.pageSize)
-      .offset((query.page - 1) * query.pageSize)
+      ])
+      .where('s.id', 'in', ids)
       .execute();
-    let total = rows[0]?.total;
-    if (total === undefined) {
-      // Past the last page: count separately so the client still learns the total.
-      let c = this.db.selectFrom('sheets as s').select((e) => e.fn.countAll<number>().as('n'));
-      if (query.q)
-        c = c.where(
-          sql<boolean>`s.search_text like ${'%' + likeEscape(query.q.toLowerCase()) + '%'}`,
-        );
-      if (query.state) c = c.where('s.latestState', '=', query.state);
-      if (query.siteId) c = c.where('s.siteId', '=', query.siteId);
-      if (query.machineId) c = c.where('s.machineId', '=', query.machineId);
-      if (query.sheetType) c = c.where('s.sheetType', '=', query.sheetType);
-      if (query.ownerId) c = c.where('s.ownerId', '=', query.ownerId);
-      total = Number((await c.executeTakeFirstOrThrow()).n);
-    }
-    return { rows, total: Number(total) };
+    const uniq = (xs: string[]) => [...new Set(xs)];
+    const [sites, machines, positions, owners] = await Promise.all([
+      db
+        .selectFrom('sites')
+        .select(['id', 'code', 'name'])
+        .where('id', 'in', uniq(sheets.map((r) => r.siteId)))
+        .execute(),
+      db
+        .selectFrom('machines')
+        .select(['id', 'tag', 'name'])
+        .where('id', 'in', uniq(sheets.map((r) => r.machineId)))
+        .execute(),
+      db
+        .selectFrom('brakePositions')
+        .select(['id', 'tag', 'description'])
+        .where('id', 'in', uniq(sheets.map((r) => r.positionId)))
+        .execute(),
+      db
+        .selectFrom('users')
+        .select(['id', 'displayName', 'initials'])
+        .where('id', 'in', uniq(sheets.map((r) => r.ownerId)))
+        .execute(),
+    ]);
+    const by = <T extends { id: string }>(rows: T[]) => new Map(rows.map((r) => [r.id, r]));
+    const [site, machine, position, owner] = [by(sites), by(machines), by(positions), by(owners)];
+    const byId = new Map(sheets.map((r) => [r.id, r]));
+    return ids.flatMap((id) => {
+      const r = byId.get(id);
+      if (!r) return [];
+      const si = site.get(r.siteId)!;
+      const m = machine.get(r.machineId)!;
+      const p = position.get(r.positionId)!;
+      const o = owner.get(r.ownerId)!;
+      return [
+        {
+          ...r,
+          siteCode: si.code,
+          siteName: si.name,
+          machineTag: m.tag,
+          machineName: m.name,
+          positionTag: p.tag,
+          positionDescription: p.description,
+          ownerName: o.displayName,
+          ownerInitials: o.initials,
+        },
+      ];
+    });
   }
 
-  findSummary(id: string, db: Kysely<DB> = this.db) {
-    return this.summaryQuery(db).where('s.id', '=', id).executeTakeFirst();
+  /** Filters use sheets' own (denormalised) columns: the page and the count need no joins. */
+  async list(query: SheetListQuery) {
+    const like = query.q ? '%' + likeEscape(query.q.toLowerCase()) + '%' : undefined;
+    let page = this.db.selectFrom('sheets as s').select('s.id');
+    let count = this.db.selectFrom('sheets as s').select((e) => e.fn.countAll<number>().as('n'));
+    if (like) {
+      page = page.where(sql<boolean>`s.search_text like ${like}`);
+      count = count.where(sql<boolean>`s.search_text like ${like}`);
+    }
+    const eq = [
+      ['s.latestState', query.state],
+      ['s.siteId', query.siteId],
+      ['s.machineId', query.machineId],
+      ['s.sheetType', query.sheetType],
+      ['s.ownerId', query.ownerId],
+    ] as const;
+    for (const [column, value] of eq) {
+      if (value === undefined) continue;
+      page = page.where(column, '=', value);
+      count = count.where(column, '=', value);
+    }
+    const [ids, total] = await Promise.all([
+      page
+        .orderBy(sortColumn[query.sort], query.order)
+        .orderBy('s.id', query.order)
+        .limit(query.pageSize)
+        .offset((query.page - 1) * query.pageSize)
+        .execute(),
+      count.executeTakeFirstOrThrow(),
+    ]);
+    return { rows: await this.hydrate(ids.map((r) => r.id)), total: Number(total.n) };
+  }
+
+  async findSummary(id: string, db: Kysely<DB> = this.db) {
+    return (await this.hydrate([id], db))[0];
   }
 
   /** Position with its machine and site, for creating a sheet. */
