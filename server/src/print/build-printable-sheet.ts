@@ -168,7 +168,7 @@ function describeChoice(inputs: PrintableInput[], key: RegExp): string {
 }
 
 function describeEfficiencies(inputs: PrintableInput[]): string {
-  const etas = inputs.filter((i) => /efficien|eta/i.test(i.field.key));
+  const etas = inputs.filter((i) => /efficiency$|^eta/i.test(i.field.key));
   if (etas.length === 0) return 'No efficiency enters this sheet type';
   return etas.map((i) => `${i.field.label} ${i.field.symbol} = ${i.entered}`).join('; ');
 }

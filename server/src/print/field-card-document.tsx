@@ -14,7 +14,12 @@ const Box = (props: { h?: number }) => (
 );
 
 /** Target values with empty boxes for what was measured and the setter's initials. */
-function SettingsWithBoxes(props: { items: FieldSetting[]; system: PrintUnitSystem }) {
+function SettingsWithBoxes(props: { items: FieldSetting[]; system: PrintUnitSystem; prefix?: string }) {
+  const label = (f: FieldSetting) => {
+    const text = props.prefix && f.label.startsWith(props.prefix) ? f.label.slice(props.prefix.length).replace(/^[\s:—-]+/, '') : f.label;
+    const shown = text.charAt(0).toUpperCase() + text.slice(1);
+    return f.note ? `${shown} — ${f.note}` : shown;
+  };
   return (
     <Table
       columns={[
@@ -24,7 +29,7 @@ function SettingsWithBoxes(props: { items: FieldSetting[]; system: PrintUnitSyst
         { title: 'Initials', width: 44 },
       ]}
       rows={props.items.map((f) => [
-        f.note ? `${f.label} — ${f.note}` : f.label,
+        label(f),
         qty(f.value, f.dimension, props.system),
         <Box key="m" />,
         <Box key="i" />,
@@ -46,7 +51,7 @@ function DiscStack(props: { stack: DiscStackSetup; system: PrintUnitSystem }) {
       <Text>
         3. The stack then carries a preload of about <Text style={{ fontWeight: 700 }}>{q(stack.preload)}</Text>.
       </Text>
-      {stack.others.length > 0 && <SettingsWithBoxes items={stack.others} system={system} />}
+      {stack.others.length > 0 && <SettingsWithBoxes items={stack.others} system={system} prefix={stack.name} />}
       <View style={{ flexDirection: 'row', marginTop: 3, alignItems: 'center' }}>
         <Text style={{ width: 150 }}>Back-off applied (measured):</Text>
         <View style={{ width: 80 }}><Box /></View>
@@ -87,7 +92,9 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
           <>
             {(g.spring.length > 0 || g.springTables.length > 0) && (
               <View>
-                <Heading>Main spring setting</Heading>
+                <Heading>
+                  {g.spring.some((f) => /clamp/i.test(f.key)) ? 'Clamp force setting' : 'Main spring setting'}
+                </Heading>
                 <SettingsWithBoxes items={g.spring} system={system} />
                 {g.springTables.map((t) => (
                   <SettingTable key={t.id} table={t} system={system} />
@@ -96,11 +103,15 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
             )}
             {(g.thruster.length > 0 || g.clearance.length > 0) && (
               <View wrap={false}>
-                <Heading>Thruster stroke and shoe clearance</Heading>
+                <Heading>
+                  {g.thruster.some((f) => /thruster|stroke/i.test(`${f.key} ${f.label}`))
+                    ? 'Thruster stroke, reserve and shoe clearance'
+                    : 'Clearance and wear'}
+                </Heading>
                 <SettingsWithBoxes items={[...g.thruster, ...g.clearance]} system={system} />
                 <Text style={{ fontSize: 7.5 }}>
-                  Keep at least the minimum reserve stroke: when lining wear has used it up, re-adjust
-                  before the brake loses torque.
+                  Lining wear uses up the reserve: re-adjust before it falls below the minimum given,
+                  or the brake loses torque.
                 </Text>
               </View>
             )}

@@ -1,9 +1,9 @@
-import { Document, Page, View } from '@react-pdf/renderer';
+import { Document, Page } from '@react-pdf/renderer';
 import { Approvals, RevisionHistory } from './parts/approvals.js';
 import { Caution } from './parts/caution.js';
-import { Chart } from './parts/chart.js';
+import { CHART_BLOCK, Chart } from './parts/chart.js';
 import { DesignBasis } from './parts/design-basis.js';
-import { Derivation } from './parts/derivation.js';
+import { DerivationChunk, planDerivation } from './parts/derivation.js';
 import { FieldSettings, Justification } from './parts/field-settings.js';
 import { Footer } from './parts/footer.js';
 import { Inputs } from './parts/inputs.js';
@@ -12,7 +12,8 @@ import { References } from './parts/references.js';
 import { Purpose, Summary } from './parts/summary.js';
 import { Heading } from './parts/table.js';
 import { TitleBlock } from './parts/title-block.js';
-import { PAPER_SIZE, contentWidth } from './paper.js';
+import { packPages } from './layout-plan.js';
+import { PAPER_SIZE, contentWidth, pageCapacity } from './paper.js';
 import type { PrintableSheet } from './printable-sheet.js';
 import { s } from './theme.js';
 
@@ -35,6 +36,12 @@ export function SheetDocument(props: { sheet: PrintableSheet; qr: string | null 
   const width = contentWidth(sheet.paper);
   const charts = sheet.evaluation?.charts ?? [];
   const kind = 'Brake calculation sheet';
+  const capacity = pageCapacity(sheet);
+  const chartPages = packPages(
+    charts.map((c) => ({ item: c, height: CHART_BLOCK })),
+    capacity,
+    capacity - 30,
+  );
   return (
     <Document
       title={`${sheet.documentNumber} rev ${sheet.revision.label} — ${sheet.title}`}
@@ -58,22 +65,23 @@ export function SheetDocument(props: { sheet: PrintableSheet; qr: string | null 
         <DesignBasis sheet={sheet} />
         <Inputs sheet={sheet} />
       </Page>
-      {sheet.evaluation && sheet.evaluation.derivation.length > 0 && (
-        <Page size={sheet.paper} style={s.page}>
+      {planDerivation(sheet, width, capacity).map((items, i) => (
+        <Page key={`d${i}`} size={sheet.paper} style={s.page}>
           <Frame sheet={sheet} qr={qr} kind={kind} />
-          <Derivation sheet={sheet} />
+          <DerivationChunk items={items} sheet={sheet} />
         </Page>
-      )}
+      ))}
+      {chartPages.map((page, i) => (
+        <Page key={`c${i}`} size={sheet.paper} style={s.page}>
+          <Frame sheet={sheet} qr={qr} kind={kind} />
+          {i === 0 && <Heading>Charts</Heading>}
+          {page.map((b) => (
+            <Chart key={b.item.id} chart={b.item} system={sheet.unitSystem} width={width} />
+          ))}
+        </Page>
+      ))}
       <Page size={sheet.paper} style={s.page}>
         <Frame sheet={sheet} qr={qr} kind={kind} />
-        {charts.length > 0 && (
-          <View>
-            <Heading>Charts</Heading>
-            {charts.map((c) => (
-              <Chart key={c.id} chart={c} system={sheet.unitSystem} width={width} />
-            ))}
-          </View>
-        )}
         <Justification sheet={sheet} />
         <FieldSettings sheet={sheet} />
         <References sheet={sheet} />

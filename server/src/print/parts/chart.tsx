@@ -8,6 +8,9 @@ import { niceTicks, tickLabel } from './ticks.js';
 
 const M = { left: 46, right: 12, top: 10, bottom: 30 };
 
+/** Height of one chart with its title and legend, for page planning. */
+export const CHART_BLOCK = 180 + 12 + 12 + 8;
+
 /** A chart drawn as vector graphics: axes with ticks, series, set points and reference lines. */
 export function Chart(props: { chart: ChartData; system: PrintUnitSystem; width: number; height?: number }) {
   const { chart, system, width } = props;

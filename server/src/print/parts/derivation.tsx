@@ -1,21 +1,34 @@
 import type { DerivationStep } from '@holdfast/calc';
 import { Text, View } from '@react-pdf/renderer';
 import { qty } from '../format.js';
+import { lineHeight, lines, packPages, type Block } from '../layout-plan.js';
 import type { PrintableSheet } from '../printable-sheet.js';
 import { colours, monoFont } from '../theme.js';
 import { Heading } from './table.js';
 
-function Step(props: { step: DerivationStep; n: string; sheet: PrintableSheet }) {
-  const { step, sheet } = props;
+const NUM_W = 26;
+const REF_W = 150;
+
+export type DerivationItem =
+  | { kind: 'title' }
+  | { kind: 'heading'; text: string }
+  | { kind: 'step'; step: DerivationStep; n: string };
+
+function resultText(step: DerivationStep, sheet: PrintableSheet): string {
   const shown = qty(step.value, step.dimension, sheet.unitSystem);
   const si = qty(step.value, step.dimension, 'SI');
+  return `${step.symbol} = ${shown}${shown !== si ? `  (${si})` : ''}`;
+}
+
+function Step(props: { step: DerivationStep; n: string; sheet: PrintableSheet }) {
+  const { step, sheet } = props;
   const mono = { ...monoFont, fontSize: 7.6 } as const;
   return (
     <View
       wrap={false}
       style={{ flexDirection: 'row', borderBottomWidth: 0.4, borderColor: colours.rule, paddingVertical: 3 }}
     >
-      <Text style={{ width: 26, color: colours.muted, fontSize: 7 }}>{props.n}</Text>
+      <Text style={{ width: NUM_W, color: colours.muted, fontSize: 7 }}>{props.n}</Text>
       {/* One paragraph with spans: a quarter of the layout nodes of one Text per line. */}
       <Text style={{ flex: 1 }}>
         <Text style={{ fontWeight: 600 }}>{step.label}</Text>
@@ -24,54 +37,91 @@ function Step(props: { step: DerivationStep; n: string; sheet: PrintableSheet })
         {'\n'}
         <Text style={{ ...mono, color: colours.muted }}>{step.substituted}</Text>
         {'\n'}
-        <Text style={{ ...mono, fontWeight: 700 }}>
-          {step.symbol} = {shown}
-          {shown !== si ? `  (${si})` : ''}
-        </Text>
+        <Text style={{ ...mono, fontWeight: 700 }}>{resultText(step, sheet)}</Text>
       </Text>
-      <Text style={{ width: 150, fontSize: 6.8, color: colours.muted, paddingLeft: 6 }}>
+      <Text style={{ width: REF_W, fontSize: 6.8, color: colours.muted, paddingLeft: 6 }}>
         {step.reference}
       </Text>
     </View>
   );
 }
 
-/** Every derivation step, grouped by section in the sheet type's order. */
-export function Derivation(props: { sheet: PrintableSheet }) {
-  const { sheet } = props;
-  const steps = sheet.evaluation?.derivation ?? [];
-  if (steps.length === 0) return null;
-  const order = sheet.sections.map((x) => x.id);
-  const sectionIds = [...new Set(steps.map((s) => s.section))].sort(
-    (a, b) => rank(order, a) - rank(order, b),
-  );
-  const title = (id: string) => sheet.sections.find((x) => x.id === id)?.title ?? titleCase(id);
-  return (
-    <View>
-      <Heading>Derivation</Heading>
-      <Text style={{ fontSize: 7, color: colours.muted, marginBottom: 2 }}>
-        Each step: formula, the values put in (SI), the result
-        {sheet.unitSystem === 'US' ? ' in US units with SI in brackets' : ''}, and the reference.
-      </Text>
-      {sectionIds.map((id, si) => (
-        <View key={id}>
-          <Heading level={2}>
-            {si + 1}. {title(id)}
-          </Heading>
-          {steps
-            .filter((s) => s.section === id)
-            .map((s, i) => (
-              <Step key={s.id} step={s} n={`${si + 1}.${i + 1}`} sheet={sheet} />
-            ))}
-        </View>
-      ))}
-    </View>
-  );
+function stepHeight(step: DerivationStep, sheet: PrintableSheet, width: number): number {
+  const w = width - NUM_W - REF_W;
+  const left =
+    lines(step.label, w, 8.5) * lineHeight(8.5) +
+    (lines(step.formula, w, 7.6, true) +
+      lines(step.substituted, w, 7.6, true) +
+      lines(resultText(step, sheet), w, 7.6, true)) *
+      lineHeight(7.6, true);
+  const right = lines(step.reference, REF_W - 6, 6.8) * lineHeight(6.8);
+  return Math.max(left, right) + 6.4;
 }
 
-function rank(order: string[], id: string): number {
-  const i = order.indexOf(id);
-  return i === -1 ? order.length : i;
+/**
+ * Cuts the derivation into page-sized chunks, numbered steps grouped by section in the sheet
+ * type's order; a section that runs on to the next chunk repeats its heading "(continued)".
+ */
+export function planDerivation(
+  sheet: PrintableSheet,
+  width: number,
+  capacity: number,
+): DerivationItem[][] {
+  const steps = sheet.evaluation?.derivation ?? [];
+  if (steps.length === 0) return [];
+  const order = sheet.sections.map((x) => x.id);
+  const rank = (id: string) => (order.indexOf(id) === -1 ? order.length : order.indexOf(id));
+  const ids = [...new Set(steps.map((s) => s.section))].sort((a, b) => rank(a) - rank(b));
+  const title = (id: string) => sheet.sections.find((x) => x.id === id)?.title ?? titleCase(id);
+  const blocks: Block<DerivationItem & { section?: string }>[] = [
+    { item: { kind: 'title' }, height: 44, keepWithNext: true },
+  ];
+  ids.forEach((id, si) => {
+    const text = `${si + 1}. ${title(id)}`;
+    blocks.push({ item: { kind: 'heading', text, section: text }, height: 20, keepWithNext: true });
+    steps
+      .filter((s) => s.section === id)
+      .forEach((step, i) =>
+        blocks.push({
+          item: { kind: 'step', step, n: `${si + 1}.${i + 1}`, section: text },
+          height: stepHeight(step, sheet, width),
+        }),
+      );
+  });
+  return packPages(blocks, capacity).map((page) => {
+    const items = page.map((b) => b.item);
+    const first = items[0];
+    if (first.kind === 'step' && first.section) {
+      items.unshift({ kind: 'heading', text: `${first.section} (continued)` });
+    }
+    return items;
+  });
+}
+
+/** One chunk of the derivation (see planDerivation). */
+export function DerivationChunk(props: { items: DerivationItem[]; sheet: PrintableSheet }) {
+  const { sheet } = props;
+  return (
+    <View>
+      {props.items.map((it, i) =>
+        it.kind === 'title' ? (
+          <View key="title">
+            <Heading>Derivation</Heading>
+            <Text style={{ fontSize: 7, color: colours.muted, marginBottom: 2 }}>
+              Each step: formula, the values put in (SI), the result
+              {sheet.unitSystem === 'US' ? ' in US units with SI in brackets' : ''}, and the reference.
+            </Text>
+          </View>
+        ) : it.kind === 'heading' ? (
+          <Heading key={`h${i}`} level={2}>
+            {it.text}
+          </Heading>
+        ) : (
+          <Step key={it.step.id} step={it.step} n={it.n} sheet={sheet} />
+        ),
+      )}
+    </View>
+  );
 }
 
 function titleCase(id: string): string {

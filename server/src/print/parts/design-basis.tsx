@@ -1,7 +1,19 @@
+import { DIMENSIONS, type Dimension } from '@holdfast/calc';
 import { Text, View } from '@react-pdf/renderer';
-import type { PrintableSheet } from '../printable-sheet.js';
+import { qty } from '../format.js';
+import type { PrintableSheet, PrintUnitSystem } from '../printable-sheet.js';
 import { colours } from '../theme.js';
 import { Heading, Table } from './table.js';
+
+/** A criteria value in the sheet's units when its unit is a known SI unit, else as stored. */
+function criterionText(value: number, unit: string, system: PrintUnitSystem): string {
+  if (!unit) return String(value);
+  const dims = (Object.keys(DIMENSIONS) as Dimension[]).filter(
+    (d) => d !== 'dimensionless' && DIMENSIONS[d].siUnit === unit,
+  );
+  // 'K' is both a temperature and a temperature difference: ambiguous units print as stored.
+  return dims.length === 1 ? qty(value, dims[0], system) : `${value} ${unit}`;
+}
 
 function KeyValue(props: { k: string; v: string }) {
   return (
@@ -44,7 +56,7 @@ export function DesignBasis(props: { sheet: PrintableSheet }) {
             ]}
             rows={c.values.map((v) => [
               v.label,
-              v.unit ? `${v.value} ${v.unit}` : String(v.value),
+              criterionText(v.value, v.unit, sheet.unitSystem),
               v.source,
               v.confidence,
             ])}

@@ -1,0 +1,55 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import { renderFieldCardPdf, renderSheetPdf } from './render.js';
+import { realPrintable } from './testing/real-sheet.js';
+import { ensurePoppler, inspectPdf, type PdfFacts } from './testing/poppler.js';
+
+// The same renderers over real calc evaluations of every sheet type's default inputs.
+const SLOW = 300_000;
+const TYPES = ['hoist-shoe-brake', 'travel-shoe-brake', 'caliper-disc-brake', 'disc-spring-stack'];
+
+describe.each(TYPES)('%s, real evaluation', (sheetTypeId) => {
+  const sheet = realPrintable({ sheetTypeId, state: 'approved' });
+  let pdf: PdfFacts;
+  let card: PdfFacts;
+
+  beforeAll(async () => {
+    ensurePoppler();
+    pdf = inspectPdf(await renderSheetPdf(sheet), `real-${sheetTypeId}`);
+    card = inspectPdf(await renderFieldCardPdf(sheet), `real-${sheetTypeId}-card`);
+  }, SLOW);
+
+  it('numbers every page and prints the verification code on each', () => {
+    pdf.pageText.forEach((t, i) => {
+      expect(t).toContain(`Page ${i + 1} of ${pdf.pages}`);
+      expect(t).toContain('K3M9QZ7TXA');
+    });
+  });
+
+  it('gives every check a verdict on page 1', () => {
+    const checks = sheet.evaluation!.checks;
+    const first = pdf.pageText[0] + (pdf.pageText[1] ?? '');
+    const count = (re: RegExp) => (first.match(re) ?? []).length;
+    expect(count(/\bPASS\b/g)).toBe(checks.filter((c) => c.pass).length);
+    expect(count(/\bFAIL\b/g)).toBe(checks.filter((c) => !c.pass).length);
+    const lines = first.split('\n');
+    for (const c of checks.filter((x) => x.label.length <= 40)) {
+      const row = lines.find((l) => l.includes(c.label));
+      expect(row, c.label).toMatch(c.pass ? /\bPASS\b/ : /\bFAIL\b/);
+    }
+  });
+
+  it('prints every derivation step and every field setting', () => {
+    const text = pdf.text.replace(/\s+/g, ' ');
+    for (const step of sheet.evaluation!.derivation) {
+      expect(text, step.id).toContain(step.formula.replace(/\s+/g, ' '));
+    }
+    for (const f of sheet.evaluation!.fieldSettings) {
+      expect(text, f.key).toContain(f.label.replace(/\s+/g, ' ').slice(0, 30));
+    }
+  });
+
+  it('fits the field card on one or two pages', () => {
+    expect(card.pages).toBeLessThanOrEqual(2);
+    expect(card.text).toContain('Set by');
+  });
+});

@@ -1,0 +1,73 @@
+import {
+  CRANE_HOIST,
+  GENERAL_INDUSTRY,
+  TRAVEL_DRIVE,
+  defaultInputs,
+  getSheetType,
+  type CriteriaSet,
+  type SheetInputs,
+} from '@holdfast/calc';
+import { buildPrintableSheet, type RevisionLike } from '../build-printable-sheet.js';
+import type { Paper, PrintableSheet, PrintRevisionState, PrintUnitSystem } from '../printable-sheet.js';
+
+/** The shipped criteria set a sheet type is normally checked against. */
+export function criteriaFor(sheetTypeId: string): CriteriaSet {
+  if (sheetTypeId.startsWith('hoist')) return CRANE_HOIST;
+  if (sheetTypeId.startsWith('travel')) return TRAVEL_DRIVE;
+  return GENERAL_INDUSTRY;
+}
+
+/**
+ * A printable sheet from a real calc evaluation of a sheet type's default inputs, in an
+ * invented demo setting (no real site, person or company).
+ */
+export function realPrintable(o: {
+  sheetTypeId: string;
+  state: PrintRevisionState;
+  paper?: Paper;
+  unitSystem?: PrintUnitSystem;
+  inputs?: SheetInputs;
+}): PrintableSheet {
+  const type = getSheetType(o.sheetTypeId);
+  if (!type) throw new Error(`unknown sheet type ${o.sheetTypeId}`);
+  const criteriaSet = criteriaFor(type.id);
+  const inputs = o.inputs ?? (defaultInputs(type) as SheetInputs);
+  const evaluation = type.evaluate(inputs, criteriaSet);
+  const approvedLike = o.state === 'approved' || o.state === 'superseded';
+  const author = { displayName: 'Dana Demo', initials: 'DD' };
+  const checker = { displayName: 'Chris Checkwell', initials: 'CC' };
+  const revision: RevisionLike = {
+    label: 'A',
+    state: o.state,
+    author,
+    checker: approvedLike ? checker : null,
+    changeNote: 'First issue.',
+    createdAt: '2026-11-10T08:00:00Z',
+    submittedAt: o.state === 'draft' ? null : '2026-11-11T08:00:00Z',
+    approvedAt: approvedLike ? '2026-11-12T08:00:00Z' : null,
+    inputs,
+    unitSystem: o.unitSystem ?? 'SI',
+    criteriaSetVersion: criteriaSet.version,
+    evaluation,
+    coreVersion: evaluation.coreVersion,
+    verificationCode: approvedLike ? 'K3M9QZ7TXA' : null,
+    justification: evaluation.pass ? null : 'Demo: accepted by the checker for the test printout.',
+    supersededBy: o.state === 'superseded' ? { label: 'B', at: '2026-11-20T08:00:00Z' } : null,
+  };
+  return buildPrintableSheet({
+    sheet: {
+      documentNumber: `HF-DEMO-${type.id.toUpperCase().slice(0, 6)}-001`,
+      title: `${type.title} — demo`,
+      site: { code: 'DEMO', name: 'Demo Works (invented)' },
+      machine: { tag: 'CR-1', name: 'Demo crane' },
+      position: { tag: 'BR-1', description: 'brake 1' },
+      revisions: [revision],
+    },
+    revision,
+    sheetType: type,
+    criteriaSet,
+    verifyBaseUrl: 'https://holdfast.example.test',
+    paper: o.paper ?? 'A4',
+    generatedAt: new Date('2026-12-01T12:00:00Z'),
+  });
+}
