@@ -8,34 +8,13 @@ import type {
 } from '@holdfast/calc';
 import { canonicalJson } from '@holdfast/shared';
 
-// The demo evaluates every revision with the calc core, never with hard-coded numbers. Access
-// goes through the core's registry when exported, else through its exported definitions.
-type Registry = {
-  getSheetType?: (id: string) => SheetTypeDefinition | undefined;
-  CRITERIA_SETS?: readonly CriteriaSet[];
-};
-const registry = calc as unknown as Registry;
-const exported = Object.values(calc as Record<string, unknown>);
-
+// The demo evaluates every revision with the calc core, never with hard-coded numbers.
 export function sheetType(id: string): SheetTypeDefinition | undefined {
-  return (
-    registry.getSheetType?.(id) ??
-    exported.find(
-      (v): v is SheetTypeDefinition =>
-        typeof v === 'object' && v !== null && 'evaluate' in v && (v as { id?: unknown }).id === id,
-    )
-  );
+  return calc.getSheetType(id);
 }
 
 export function shippedCriteriaSets(): CriteriaSet[] {
-  if (registry.CRITERIA_SETS?.length) return [...registry.CRITERIA_SETS];
-  return exported.filter(
-    (v): v is CriteriaSet =>
-      typeof v === 'object' &&
-      v !== null &&
-      'version' in v &&
-      Array.isArray((v as { values?: unknown }).values),
-  );
+  return [...calc.CRITERIA_SETS];
 }
 
 export function defaults(def: SheetTypeDefinition): SheetInputs {

@@ -18,7 +18,7 @@ export function evaluateOrReject(
       throw badRequest(
         'Some inputs are not valid.',
         e.fields.map((f) => ({
-          path: f.field.startsWith('inputs.') ? f.field : `inputs.${f.field}`,
+          path: /^(inputs|criteria)\./.test(f.field) ? f.field : `inputs.${f.field}`,
           message: f.message,
         })),
       );
