@@ -2,6 +2,7 @@ import type { DynamicModule, Type } from '@nestjs/common';
 import { AuthModule } from './auth/auth.module.js';
 import { HealthModule } from './health/health.module.js';
 import { UsersModule } from './users/users.module.js';
+import { PrintModule } from './print/print.module.js';
 import { SheetFeatureModules } from './sheets/sheet-features.js';
 
 /**
@@ -13,4 +14,5 @@ export const featureModules: Array<Type<unknown> | DynamicModule> = [
   UsersModule,
   HealthModule,
   ...SheetFeatureModules,
+  PrintModule,
 ];

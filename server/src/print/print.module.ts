@@ -1,0 +1,18 @@
+import { Module } from '@nestjs/common';
+import { CriteriaModule } from '../criteria/criteria.module.js';
+import { RevisionsModule } from '../revisions/revisions.module.js';
+import { SheetsRepository } from '../sheets/sheets.repository.js';
+import { SheetsService } from '../sheets/sheets.service.js';
+import { PrintController } from './print.controller.js';
+import { PrintService } from './print.service.js';
+
+/**
+ * The printed sheet and field card. SheetsModule does not export its service, so this module
+ * provides its own (stateless) SheetsService over the same repositories.
+ */
+@Module({
+  imports: [CriteriaModule, RevisionsModule],
+  controllers: [PrintController],
+  providers: [PrintService, SheetsService, SheetsRepository],
+})
+export class PrintModule {}
