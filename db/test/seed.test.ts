@@ -28,7 +28,7 @@ describe('seed', () => {
     expect(names[0]).toBe('20261201000000_demo_users.js');
     expect([...names].sort()).toEqual(names);
     expect(await seed(db)).toEqual(names.map((n) => n.slice(0, -3)));
-  });
+  }, 180_000); // six argon2id hashes plus every feature's demo data, on a busy machine
 
   it('creates one demo user per role plus a second engineer and checker, password holdfast-demo', async () => {
     const rows = await db.selectFrom('users').selectAll().orderBy('email').execute();
@@ -50,5 +50,5 @@ describe('seed', () => {
     expect(after).toEqual(before);
     const erin = await db.selectFrom('users').select('displayName').where('email', '=', 'engineer@holdfast.test').executeTakeFirstOrThrow();
     expect(erin.displayName).toBe('Erin Vale-Moss');
-  });
+  }, 180_000);
 });
