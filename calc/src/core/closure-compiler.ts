@@ -11,6 +11,7 @@ const FUNCTIONS: Record<string, (...a: number[]) => number> = {
   acos: Math.acos,
   atan: Math.atan,
   exp: Math.exp,
+  expm1: Math.expm1,
   log: Math.log,
   sqrt: Math.sqrt,
   abs: Math.abs,

@@ -89,7 +89,7 @@ export const peakTemperatureFormula = defineFormula({
   id: 'peak-temperature',
   label: 'Peak drum temperature in steady cyclic duty',
   symbol: 'T_peak',
-  expression: 'T_amb + dT / (1 - exp(-1 / (z * tau)))',
+  expression: 'T_amb + dT / (-expm1(-1 / (z * tau)))',
   symbols: {
     T_amb: { text: 'T_amb', dimension: 'temperature' },
     dT: { text: 'ΔT', dimension: 'temperatureDifference' },

@@ -68,3 +68,44 @@ export function potentialEnergy(m: Mass, h: Length, g = 9.80665, d?: Derivation)
   requireRange(m, 'mass', { min: 0 }, 'kg');
   return compute(d, potentialEnergyFormula, { m, g, h });
 }
+
+export const loadWorkFormula = defineFormula({
+  id: 'energy-load-work',
+  label: 'Work of the driving load during braking (potential energy released, after gear losses)',
+  symbol: 'E_load',
+  expression: 'M_d * omega_1 * t_b / 2',
+  symbols: {
+    M_d: { text: 'M_d', dimension: 'torque' },
+    omega_1: { text: 'ω_1', dimension: 'angularSpeed' },
+    t_b: { text: 't_b', dimension: 'time' },
+  },
+  dimension: 'energy',
+  reference: REF.energy,
+});
+
+/**
+ * The brake's work per stop split into its parts: kinetic energy of everything moving when the
+ * brake sets, E_kin = ½·J·ω₁², and the work of a load that keeps driving while braking,
+ * E_load = M_d·φ_b (φ_b = ω₁·t_b/2); for a lowering load that is m·g·h·η. Their sum equals
+ * M_b·φ_b.
+ */
+export function stopEnergyParts(
+  J: Inertia,
+  omega1: AngularSpeed,
+  driveTorque: number,
+  brakingTime: number,
+  d?: Derivation,
+): { kinetic: Energy; load: Energy } {
+  const kinetic = compute(
+    d,
+    rotatingEnergyFormula,
+    { J, omega: omega1 },
+    {
+      id: 'energy-kinetic',
+      label: 'Kinetic energy when the brake sets (all parts, referred)',
+      symbol: 'E_kin',
+    },
+  );
+  const load = compute(d, loadWorkFormula, { M_d: driveTorque, omega_1: omega1, t_b: brakingTime });
+  return { kinetic, load };
+}

@@ -1,3 +1,4 @@
+import { stopEnergyParts } from '../energy/stop-energy.js';
 import type {
   CriteriaSet,
   FieldError,
@@ -48,6 +49,11 @@ function validate(v: ReadInputs): FieldError[] {
     e.push({ field: 'muMin', message: 'μ min must not exceed μ nominal' });
   if (!(v.num('muNominal') <= v.num('muMax')))
     e.push({ field: 'muMax', message: 'μ max must not be below μ nominal' });
+  if (v.str('referenceBasis') !== 'motor' && !(v.num('staticTorque') > 0))
+    e.push({
+      field: 'staticTorque',
+      message: 'must be greater than 0 when the reference is the load torque',
+    });
   if (!(v.num('clampForceMax') > v.num('clampForceMin')))
     e.push({ field: 'clampForceMax', message: 'must exceed the lowest setting' });
   if (!(v.num('clampForce') - v.num('springRate') * v.num('wear') * v.num('wearTravelRatio') > 0))
@@ -118,6 +124,7 @@ export function evaluateCaliperDiscBrake(
     'Brake torque at μ min, worn pads',
     'M_b,w,min',
   );
+  T(muNom, worn.force, 'torque-worn-nominal', 'Brake torque at μ nominal, worn pads', 'M_b,w,nom');
   const p = padPressure(Fc, q.area(v.num('padArea')), d);
   const vMax = compute(
     d,
@@ -253,6 +260,7 @@ export function evaluateCaliperDiscBrake(
       }),
     );
     d.section = 'thermal';
+    stopEnergyParts(q.inertia(v.num('inertia')), stop.speedAfterDelay, Mhold, stop.brakingTime, d);
     const z = q.frequency(v.num('stopsPerHour'));
     const m = q.mass(v.num('discMass'));
     const c = q.specificHeat(v.num('specificHeat'));

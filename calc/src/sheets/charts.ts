@@ -46,8 +46,11 @@ export function torqueWearChart(
   required: number,
   points = 41,
 ): ChartData {
-  const slackWear = springForce / (rate * travelRatio);
-  const maxWear = Math.min(slackWear, Math.max(wearAllowance * 2.5, slackWear * 0.25));
+  // Wear at which the spring would go slack (infinite for a rigid-rate-free spring), and a sweep
+  // to 2.5 × the allowance (2 mm when no wear is allowed) but never past slack.
+  const slackWear =
+    rate * travelRatio > 0 ? springForce / (rate * travelRatio) : Number.POSITIVE_INFINITY;
+  const maxWear = Math.min(slackWear, wearAllowance > 0 ? wearAllowance * 2.5 : 0.002);
   const nominal: { x: number; y: number }[] = [];
   const min: { x: number; y: number }[] = [];
   for (let k = 0; k < points; k++) {

@@ -91,3 +91,21 @@ export function flag(
 
 /** SI label of a dimension (for messages). */
 export const siLabel = (d: Dimension): string => DIMENSIONS[d].siLabel;
+
+/**
+ * Applies realistic [min, max] bounds (in each field's SI display unit, e.g. mm, kW) by key. Every
+ * strictly positive field gets a positive lower bound, so no input inside the bounds can underflow
+ * or overflow a formula into NaN or Infinity.
+ */
+export function withBounds(
+  fields: FieldDefinition[],
+  bounds: Record<string, [number, number]>,
+): FieldDefinition[] {
+  return fields.map((f) => {
+    const b = bounds[f.key];
+    if (!b) return f;
+    const si = (x: number) =>
+      f.kind === 'quantity' && f.dimension && f.unitSI ? toSI(x, f.unitSI, f.dimension) : x;
+    return { ...f, min: si(b[0]), max: si(b[1]), exclusiveMin: undefined };
+  });
+}

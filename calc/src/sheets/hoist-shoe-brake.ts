@@ -18,7 +18,8 @@ import {
   type ReferenceBasis,
 } from '../duty/required-torque.js';
 import * as q from '../units/quantities.js';
-import { choice, num, qty } from './field-builders.js';
+import { choice, num, qty, withBounds } from './field-builders.js';
+import { HOIST_BOUNDS } from './field-bounds.js';
 import { readInputs } from './sheet-inputs.js';
 import { finish, newEvaluation, publishSteps } from './sheet-output.js';
 import { SHOE_BRAKE_FIELDS, SHOE_SECTIONS } from './shoe-brake-fields.js';
@@ -140,7 +141,7 @@ export const HOIST_DUTY_FIELDS: FieldDefinition[] = [
   ),
 ];
 
-const FIELDS = [...HOIST_DUTY_FIELDS, ...SHOE_BRAKE_FIELDS];
+const FIELDS = withBounds([...HOIST_DUTY_FIELDS, ...SHOE_BRAKE_FIELDS], HOIST_BOUNDS);
 
 /** Evaluates the hoist shoe-brake sheet: the worst stop is lowering the rated load. */
 export function evaluateHoistShoeBrake(

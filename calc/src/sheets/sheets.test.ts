@@ -188,3 +188,19 @@ describe('physics of the sheets', () => {
     expect(e.checks.find((c) => c.id === 'wheel-adhesion')!.pass).toBe(false);
   });
 });
+
+describe('energy bookkeeping', () => {
+  it('kinetic energy plus the driving load’s work equals the brake work per stop', () => {
+    for (const [sheet, criteria] of [
+      [hoist, crane],
+      [trav, travel],
+      [caliper, general],
+    ] as const) {
+      const e = sheet.evaluate({}, criteria);
+      const v = (id: string) => e.derivation.find((s) => s.id === id)!.value;
+      expect(nearlyEqual(v('energy-kinetic') + v('energy-load-work'), v('brake-work'), 1e-12)).toBe(
+        true,
+      );
+    }
+  });
+});

@@ -1,3 +1,4 @@
+import { stopEnergyParts } from '../energy/stop-energy.js';
 import type { CriteriaSet, FieldError, SheetEvaluation } from '../core/types.js';
 import { Derivation } from '../core/step.js';
 import { criterion } from '../criteria/lookup.js';
@@ -289,6 +290,13 @@ export function evaluateShoeBrake(
       );
     }
     d.section = 'thermal';
+    stopEnergyParts(
+      q.inertia(duty.inertia),
+      stop.speedAfterDelay,
+      duty.driveTorque,
+      stop.brakingTime,
+      d,
+    );
     const z = q.frequency(v.num('stopsPerHour'));
     const m = q.mass(v.num('drumMass'));
     const c = q.specificHeat(v.num('specificHeat'));

@@ -17,7 +17,8 @@ import { stopping } from '../stopping/stopping.js';
 import { adhesionNeeded, tenPercentStoppingDistance } from '../stopping/limits.js';
 import * as q from '../units/quantities.js';
 import { makeCheck } from './checks.js';
-import { num, qty } from './field-builders.js';
+import { num, qty, withBounds } from './field-builders.js';
+import { TRAVEL_BOUNDS } from './field-bounds.js';
 import { readInputs } from './sheet-inputs.js';
 import { finish, newEvaluation, publishSteps } from './sheet-output.js';
 import { SHOE_BRAKE_FIELDS, SHOE_SECTIONS } from './shoe-brake-fields.js';
@@ -133,12 +134,15 @@ const TRAVEL_DEFAULTS: Record<string, InputValue> = {
   thrusterForce: { value: 220, unit: 'N' },
 };
 
-const FIELDS: FieldDefinition[] = [
-  ...TRAVEL_DUTY_FIELDS,
-  ...SHOE_BRAKE_FIELDS.map((f) =>
-    f.key in TRAVEL_DEFAULTS ? { ...f, default: TRAVEL_DEFAULTS[f.key] } : f,
-  ),
-];
+const FIELDS: FieldDefinition[] = withBounds(
+  [
+    ...TRAVEL_DUTY_FIELDS,
+    ...SHOE_BRAKE_FIELDS.map((f) =>
+      f.key in TRAVEL_DEFAULTS ? { ...f, default: TRAVEL_DEFAULTS[f.key] } : f,
+    ),
+  ],
+  TRAVEL_BOUNDS,
+);
 
 /** Evaluates the travel shoe-brake sheet: stop from full-load speed, 10 %-of-speed rule, wheel adhesion. */
 export function evaluateTravelShoeBrake(
