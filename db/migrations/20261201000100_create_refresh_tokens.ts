@@ -9,7 +9,9 @@ export async function up(db: Kysely<any>): Promise<void> {
     .addColumn('token_hash', 'text', (c) => c.notNull().unique())
     .addColumn('expires_at', 'timestamptz', (c) => c.notNull())
     .addColumn('revoked_at', 'timestamptz')
-    .addColumn('rotated_from', 'uuid', (c) => c.references('refresh_tokens.id').onDelete('set null'))
+    .addColumn('rotated_from', 'uuid', (c) =>
+      c.references('refresh_tokens.id').onDelete('set null'),
+    )
     .addColumn('created_at', 'timestamptz', (c) => c.notNull().defaultTo(sql`now()`))
     .execute();
   await db.schema

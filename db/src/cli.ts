@@ -20,7 +20,9 @@ async function main(): Promise<void> {
     }
     if (command === 'migrate' || command === 'reset') {
       const up = await migrateToLatest(plain);
-      console.log(up.length ? `applied ${up.map((r) => r.migrationName).join(', ')}` : 'schema up to date');
+      console.log(
+        up.length ? `applied ${up.map((r) => r.migrationName).join(', ')}` : 'schema up to date',
+      );
     }
   } finally {
     await plain.destroy();

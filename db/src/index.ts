@@ -1,9 +1,20 @@
 export * from './database.js';
 export * from './connection.js';
-export { migrateToLatest, migrateDownToEmpty, listMigrations, migrationFolder, MigrationError } from './migrate.js';
+export {
+  migrateToLatest,
+  migrateDownToEmpty,
+  listMigrations,
+  migrationFolder,
+  MigrationError,
+} from './migrate.js';
 export { seed, listSeeds, seedFolder } from './seed.js';
 export { hashPassword, verifyPassword } from './passwords.js';
 export { demoUsers, DEMO_PASSWORD, type DemoUser } from './demo-users.js';
 export { seedDemoUsers } from './seed-demo-users.js';
-export { isPostgresError, PG_UNIQUE_VIOLATION, PG_FOREIGN_KEY_VIOLATION, PG_CHECK_VIOLATION } from './pg-errors.js';
+export {
+  isPostgresError,
+  PG_UNIQUE_VIOLATION,
+  PG_FOREIGN_KEY_VIOLATION,
+  PG_CHECK_VIOLATION,
+} from './pg-errors.js';
 export type * from './sheet-tables.js';

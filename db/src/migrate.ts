@@ -1,6 +1,12 @@
 import { promises as fs } from 'node:fs';
 import path from 'node:path';
-import { FileMigrationProvider, Migrator, NO_MIGRATIONS, type Kysely, type MigrationResult } from 'kysely';
+import {
+  FileMigrationProvider,
+  Migrator,
+  NO_MIGRATIONS,
+  type Kysely,
+  type MigrationResult,
+} from 'kysely';
 
 import { dbDistDir } from './dist-dir.js';
 

@@ -25,7 +25,9 @@ export async function listSeeds(): Promise<string[]> {
 export async function seed(db: Kysely<DB>): Promise<string[]> {
   const names = await listSeeds();
   for (const name of names) {
-    const mod = (await import(pathToFileURL(path.join(seedFolder, name)).href)) as Partial<SeedModule>;
+    const mod = (await import(
+      pathToFileURL(path.join(seedFolder, name)).href
+    )) as Partial<SeedModule>;
     if (typeof mod.seed !== 'function') throw new Error(`seed file ${name} exports no seed(db)`);
     await mod.seed(db);
   }

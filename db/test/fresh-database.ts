@@ -5,9 +5,14 @@ import pg from 'pg';
  * A brand-new, empty database on the same PostgreSQL server as DATABASE_URL, so migration tests
  * never disturb the database other suites use. Returns its URL and a drop function.
  */
-export async function createFreshDatabase(label: string): Promise<{ url: string; drop: () => Promise<void> }> {
+export async function createFreshDatabase(
+  label: string,
+): Promise<{ url: string; drop: () => Promise<void> }> {
   const base = process.env.DATABASE_URL;
-  if (!base) throw new Error('DATABASE_URL is not set: export DATABASE_URL=$(node scripts/db-url.mjs holdfast_test)');
+  if (!base)
+    throw new Error(
+      'DATABASE_URL is not set: export DATABASE_URL=$(node scripts/db-url.mjs holdfast_test)',
+    );
   const name = `${label}_${randomBytes(4).toString('hex')}`;
   const admin = new URL(base);
   admin.pathname = '/postgres';

@@ -7,18 +7,34 @@ import { createFreshDatabase } from './fresh-database.js';
 
 // Keys of the hand-written interfaces; the compiler makes these lists complete and exact.
 const usersKeys: Record<keyof UsersTable, true> = {
-  id: true, email: true, displayName: true, initials: true, role: true, passwordHash: true,
-  active: true, unitSystem: true, createdAt: true, updatedAt: true,
+  id: true,
+  email: true,
+  displayName: true,
+  initials: true,
+  role: true,
+  passwordHash: true,
+  active: true,
+  unitSystem: true,
+  createdAt: true,
+  updatedAt: true,
 };
 const refreshKeys: Record<keyof RefreshTokensTable, true> = {
-  id: true, userId: true, tokenHash: true, expiresAt: true, revokedAt: true, rotatedFrom: true, createdAt: true,
+  id: true,
+  userId: true,
+  tokenHash: true,
+  expiresAt: true,
+  revokedAt: true,
+  rotatedFrom: true,
+  createdAt: true,
 };
 const camel = (s: string) => s.replace(/_([a-z0-9])/g, (_, c: string) => c.toUpperCase());
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
 async function tables(db: Kysely<any>): Promise<string[]> {
   const { rows } = await sql<{ t: string }>`
-    select table_name as t from information_schema.tables where table_schema = 'public' order by 1`.execute(db);
+    select table_name as t from information_schema.tables where table_schema = 'public' order by 1`.execute(
+    db,
+  );
   return rows.map((r) => r.t);
 }
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
@@ -49,7 +65,9 @@ describe('migrations', () => {
     expect(names.length).toBeGreaterThanOrEqual(2);
     expect(results.map((r) => r.migrationName)).toEqual(names);
     expect(results.every((r) => r.status === 'Success')).toBe(true);
-    expect(await tables(db)).toEqual(expect.arrayContaining(['users', 'refresh_tokens', 'kysely_migration']));
+    expect(await tables(db)).toEqual(
+      expect.arrayContaining(['users', 'refresh_tokens', 'kysely_migration']),
+    );
     expect(await migrateToLatest(db)).toEqual([]);
   });
 
@@ -60,18 +78,36 @@ describe('migrations', () => {
 
   it('enforce the users constraints in the database itself', async () => {
     const user = (email: string, extra: Record<string, unknown> = {}) =>
-      db.insertInto('users').values({ email, display_name: 'Test Person', initials: 'TP', role: 'viewer', password_hash: 'x', ...extra }).execute();
+      db
+        .insertInto('users')
+        .values({
+          email,
+          display_name: 'Test Person',
+          initials: 'TP',
+          role: 'viewer',
+          password_hash: 'x',
+          ...extra,
+        })
+        .execute();
     await user('one@holdfast.test');
     await expect(user('one@holdfast.test')).rejects.toMatchObject({ code: '23505' });
     await expect(user('One@holdfast.test')).rejects.toMatchObject({ code: '23514' });
-    await expect(user('two@holdfast.test', { role: 'owner' })).rejects.toMatchObject({ code: '23514' });
-    await expect(user('three@holdfast.test', { unit_system: 'metric' })).rejects.toMatchObject({ code: '23514' });
-    await expect(user('four@holdfast.test', { initials: 'toolong' })).rejects.toMatchObject({ code: '23514' });
+    await expect(user('two@holdfast.test', { role: 'owner' })).rejects.toMatchObject({
+      code: '23514',
+    });
+    await expect(user('three@holdfast.test', { unit_system: 'metric' })).rejects.toMatchObject({
+      code: '23514',
+    });
+    await expect(user('four@holdfast.test', { initials: 'toolong' })).rejects.toMatchObject({
+      code: '23514',
+    });
     const before = await db.selectFrom('users').select('updated_at').executeTakeFirstOrThrow();
     await sql`select pg_sleep(0.01)`.execute(db);
     await db.updateTable('users').set({ display_name: 'Renamed Person' }).execute();
     const after = await db.selectFrom('users').select('updated_at').executeTakeFirstOrThrow();
-    expect((after.updated_at as Date).getTime()).toBeGreaterThan((before.updated_at as Date).getTime());
+    expect((after.updated_at as Date).getTime()).toBeGreaterThan(
+      (before.updated_at as Date).getTime(),
+    );
     await db.deleteFrom('users').execute();
   });
 
@@ -83,7 +119,9 @@ describe('migrations', () => {
       select count(*)::int as n from pg_proc p join pg_namespace s on s.oid = p.pronamespace
       where s.nspname = 'public'`.execute(db);
     expect(rows[0]?.n).toBe(0);
-    const { rows: extensions } = await sql<{ name: string }>`select extname as name from pg_extension`.execute(db);
+    const { rows: extensions } = await sql<{
+      name: string;
+    }>`select extname as name from pg_extension`.execute(db);
     expect(extensions.map((e) => e.name)).toEqual(['plpgsql']);
     const { rows: types } = await sql<{ n: number }>`
       select count(*)::int as n from pg_type t join pg_namespace s on s.oid = t.typnamespace

@@ -34,21 +34,36 @@ describe('seed', () => {
     const rows = await db.selectFrom('users').selectAll().orderBy('email').execute();
     const demo = rows.filter((r) => r.email.endsWith('@holdfast.test'));
     expect(demo.map((r) => r.email).sort()).toEqual(demoUsers.map((u) => u.email).sort());
-    expect(new Set(demo.map((r) => r.role))).toEqual(new Set(['engineer', 'checker', 'viewer', 'admin']));
+    expect(new Set(demo.map((r) => r.role))).toEqual(
+      new Set(['engineer', 'checker', 'viewer', 'admin']),
+    );
     const engineer = demo.find((r) => r.email === 'engineer@holdfast.test')!;
-    expect(engineer).toMatchObject({ displayName: 'Erin Vale', initials: 'EV', active: true, unitSystem: 'SI' });
+    expect(engineer).toMatchObject({
+      displayName: 'Erin Vale',
+      initials: 'EV',
+      active: true,
+      unitSystem: 'SI',
+    });
     expect(engineer.passwordHash).toMatch(/^\$argon2id\$/);
     expect(await verifyPassword(engineer.passwordHash, DEMO_PASSWORD)).toBe(true);
     expect(await verifyPassword(engineer.passwordHash, 'something-else')).toBe(false);
   });
 
   it('is idempotent and keeps changes made since', async () => {
-    await db.updateTable('users').set({ displayName: 'Erin Vale-Moss' }).where('email', '=', 'engineer@holdfast.test').execute();
+    await db
+      .updateTable('users')
+      .set({ displayName: 'Erin Vale-Moss' })
+      .where('email', '=', 'engineer@holdfast.test')
+      .execute();
     const before = await db.selectFrom('users').select(['id', 'email']).orderBy('email').execute();
     await seed(db);
     const after = await db.selectFrom('users').select(['id', 'email']).orderBy('email').execute();
     expect(after).toEqual(before);
-    const erin = await db.selectFrom('users').select('displayName').where('email', '=', 'engineer@holdfast.test').executeTakeFirstOrThrow();
+    const erin = await db
+      .selectFrom('users')
+      .select('displayName')
+      .where('email', '=', 'engineer@holdfast.test')
+      .executeTakeFirstOrThrow();
     expect(erin.displayName).toBe('Erin Vale-Moss');
   }, 180_000);
 });

@@ -23,7 +23,9 @@ async function main(): Promise<void> {
     const reason =
       code === 'EADDRINUSE'
         ? `port ${settings.PORT} on ${settings.HOST} is already in use (set PORT to use another)`
-        : error instanceof Error ? error.message : String(error);
+        : error instanceof Error
+          ? error.message
+          : String(error);
     logger.fatal(`cannot listen: ${reason}`);
     console.error(`Holdfast server cannot start: ${reason}`);
     await app.close().catch(() => undefined);

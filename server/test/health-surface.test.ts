@@ -11,7 +11,10 @@ describe('HTTP surface', () => {
   beforeAll(async () => {
     const ui = path.join(mkdtempSync(path.join(tmpdir(), 'holdfast-ui-')), 'dist');
     mkdirSync(path.join(ui, 'assets'), { recursive: true });
-    writeFileSync(path.join(ui, 'index.html'), '<!doctype html><title>Holdfast</title><div id="root"></div>');
+    writeFileSync(
+      path.join(ui, 'index.html'),
+      '<!doctype html><title>Holdfast</title><div id="root"></div>',
+    );
     writeFileSync(path.join(ui, 'assets', 'app.js'), 'console.log("ui")');
     ctx = await createTestContext({ env: { UI_DIST: ui } });
   });
@@ -40,8 +43,11 @@ describe('HTTP surface', () => {
     const doc = await ctx.request('GET', '/api/docs-json');
     expect(doc.status).toBe(200);
     expect(doc.body.openapi).toMatch(/^3\./);
-    expect(Object.keys(doc.body.paths)).toEqual(expect.arrayContaining(['/api/auth/sign-in', '/api/users/{id}', '/api/health']));
-    const signIn = doc.body.paths['/api/auth/sign-in'].post.requestBody.content['application/json'].schema;
+    expect(Object.keys(doc.body.paths)).toEqual(
+      expect.arrayContaining(['/api/auth/sign-in', '/api/users/{id}', '/api/health']),
+    );
+    const signIn =
+      doc.body.paths['/api/auth/sign-in'].post.requestBody.content['application/json'].schema;
     expect(signIn.required).toEqual(expect.arrayContaining(['email', 'password']));
     expect(signIn.additionalProperties).toBe(false);
     const ui = await ctx.request('GET', '/api/docs');
@@ -51,12 +57,21 @@ describe('HTTP surface', () => {
 
   it('limits JSON bodies to 1 MB and explains malformed JSON, in the error shape', async () => {
     const big = JSON.stringify({ email: 'a@holdfast.test', password: 'x'.repeat(1_100_000) });
-    const tooBig = await ctx.request('POST', '/api/auth/sign-in', { raw: big, contentType: 'application/json' });
+    const tooBig = await ctx.request('POST', '/api/auth/sign-in', {
+      raw: big,
+      contentType: 'application/json',
+    });
     expect(tooBig.status).toBe(413);
     expect(tooBig.body.error.code).toBe('payload_too_large');
-    const broken = await ctx.request('POST', '/api/auth/sign-in', { raw: '{"email":', contentType: 'application/json' });
+    const broken = await ctx.request('POST', '/api/auth/sign-in', {
+      raw: '{"email":',
+      contentType: 'application/json',
+    });
     expect(broken.status).toBe(400);
-    expect(broken.body.error).toEqual({ code: 'validation_failed', message: 'The request body is not valid JSON.' });
+    expect(broken.body.error).toEqual({
+      code: 'validation_failed',
+      message: 'The request body is not valid JSON.',
+    });
   });
 });
 
@@ -78,10 +93,21 @@ describe('configuration', () => {
   it('applies defaults and keeps one generated JWT secret across restarts', () => {
     const dataDir = mkdtempSync(path.join(tmpdir(), 'holdfast-secret-'));
     const a = loadSettings({ DATABASE_URL: 'postgres://u:p@127.0.0.1:5/db', DATA_DIR: dataDir });
-    const b = loadSettings({ DATABASE_URL: 'postgres://u:p@127.0.0.1:5/db', DATA_DIR: dataDir, PORT: '' });
-    expect(a).toMatchObject({ PORT: 3000, HOST: '127.0.0.1', PUBLIC_URL: 'http://127.0.0.1:3000', LOGIN_THROTTLE_LIMIT: 10 });
+    const b = loadSettings({
+      DATABASE_URL: 'postgres://u:p@127.0.0.1:5/db',
+      DATA_DIR: dataDir,
+      PORT: '',
+    });
+    expect(a).toMatchObject({
+      PORT: 3000,
+      HOST: '127.0.0.1',
+      PUBLIC_URL: 'http://127.0.0.1:3000',
+      LOGIN_THROTTLE_LIMIT: 10,
+    });
     expect(a.JWT_SECRET.length).toBeGreaterThanOrEqual(32);
     expect(b.JWT_SECRET).toBe(a.JWT_SECRET);
-    expect(() => loadSettings({ DATABASE_URL: 'postgres://x', JWT_SECRET: 'short' })).toThrow(/JWT_SECRET: must be at least 32/);
+    expect(() => loadSettings({ DATABASE_URL: 'postgres://x', JWT_SECRET: 'short' })).toThrow(
+      /JWT_SECRET: must be at least 32/,
+    );
   });
 });

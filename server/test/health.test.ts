@@ -26,7 +26,10 @@ describe('GET /api/health', () => {
     await admin.connect();
     try {
       await admin.query(`alter database "${name}" allow_connections false`);
-      await admin.query('select pg_terminate_backend(pid) from pg_stat_activity where datname = $1', [name]);
+      await admin.query(
+        'select pg_terminate_backend(pid) from pg_stat_activity where datname = $1',
+        [name],
+      );
       const started = Date.now();
       const res = await ctx.request('GET', '/api/health');
       expect(res.status).toBe(503);
@@ -42,7 +45,9 @@ describe('GET /api/health', () => {
   });
 
   it('sends security headers and no CORS permission to other origins', async () => {
-    const res = await ctx.request('GET', '/api/health', { headers: { origin: 'http://elsewhere.test' } });
+    const res = await ctx.request('GET', '/api/health', {
+      headers: { origin: 'http://elsewhere.test' },
+    });
     expect(res.headers.get('content-security-policy')).toContain("script-src 'self'");
     expect(res.headers.get('x-content-type-options')).toBe('nosniff');
     expect(res.headers.get('access-control-allow-origin')).toBeNull();

@@ -16,7 +16,10 @@ export const probePath = (path: string) => path.replace(/:[A-Za-z]\w*/g, NIL_ID)
  * a role the policy does not admit, else 'passes' (the handler answers; validation or a missing
  * row then give 400/404, never 401/403 from the guard).
  */
-export function guardOutcome(policy: RoutePolicy | undefined, caller: Caller): 401 | 403 | 'passes' {
+export function guardOutcome(
+  policy: RoutePolicy | undefined,
+  caller: Caller,
+): 401 | 403 | 'passes' {
   if (!policy) return 403;
   if (caller === 'anonymous') return policyAdmits(policy, null) ? 'passes' : 401;
   return policyAdmits(policy, caller) ? 'passes' : 403;

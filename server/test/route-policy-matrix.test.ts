@@ -8,15 +8,91 @@ type Row = { method: string; path: string; body?: unknown } & Record<Caller, num
 // Exact statuses for the foundation routes. Probes use an empty or harmless body and an id that
 // matches nothing, so allowed callers reach validation (400), a missing row (404) or success.
 const matrix: Row[] = [
-  { method: 'GET', path: '/api/health', anonymous: 200, engineer: 200, checker: 200, viewer: 200, admin: 200 },
-  { method: 'POST', path: '/api/auth/sign-in', body: {}, anonymous: 400, engineer: 400, checker: 400, viewer: 400, admin: 400 },
-  { method: 'POST', path: '/api/auth/refresh', anonymous: 401, engineer: 401, checker: 401, viewer: 401, admin: 401 },
-  { method: 'POST', path: '/api/auth/sign-out', anonymous: 204, engineer: 204, checker: 204, viewer: 204, admin: 204 },
-  { method: 'GET', path: '/api/auth/me', anonymous: 401, engineer: 200, checker: 200, viewer: 200, admin: 200 },
-  { method: 'PATCH', path: '/api/auth/me', body: { unitSystem: 'SI' }, anonymous: 401, engineer: 200, checker: 200, viewer: 200, admin: 200 },
-  { method: 'GET', path: '/api/users', anonymous: 401, engineer: 403, checker: 403, viewer: 403, admin: 200 },
-  { method: 'POST', path: '/api/users', body: {}, anonymous: 401, engineer: 403, checker: 403, viewer: 403, admin: 400 },
-  { method: 'PATCH', path: `/api/users/${NIL_ID}`, body: { displayName: 'Probe User' }, anonymous: 401, engineer: 403, checker: 403, viewer: 403, admin: 404 },
+  {
+    method: 'GET',
+    path: '/api/health',
+    anonymous: 200,
+    engineer: 200,
+    checker: 200,
+    viewer: 200,
+    admin: 200,
+  },
+  {
+    method: 'POST',
+    path: '/api/auth/sign-in',
+    body: {},
+    anonymous: 400,
+    engineer: 400,
+    checker: 400,
+    viewer: 400,
+    admin: 400,
+  },
+  {
+    method: 'POST',
+    path: '/api/auth/refresh',
+    anonymous: 401,
+    engineer: 401,
+    checker: 401,
+    viewer: 401,
+    admin: 401,
+  },
+  {
+    method: 'POST',
+    path: '/api/auth/sign-out',
+    anonymous: 204,
+    engineer: 204,
+    checker: 204,
+    viewer: 204,
+    admin: 204,
+  },
+  {
+    method: 'GET',
+    path: '/api/auth/me',
+    anonymous: 401,
+    engineer: 200,
+    checker: 200,
+    viewer: 200,
+    admin: 200,
+  },
+  {
+    method: 'PATCH',
+    path: '/api/auth/me',
+    body: { unitSystem: 'SI' },
+    anonymous: 401,
+    engineer: 200,
+    checker: 200,
+    viewer: 200,
+    admin: 200,
+  },
+  {
+    method: 'GET',
+    path: '/api/users',
+    anonymous: 401,
+    engineer: 403,
+    checker: 403,
+    viewer: 403,
+    admin: 200,
+  },
+  {
+    method: 'POST',
+    path: '/api/users',
+    body: {},
+    anonymous: 401,
+    engineer: 403,
+    checker: 403,
+    viewer: 403,
+    admin: 400,
+  },
+  {
+    method: 'PATCH',
+    path: `/api/users/${NIL_ID}`,
+    body: { displayName: 'Probe User' },
+    anonymous: 401,
+    engineer: 403,
+    checker: 403,
+    viewer: 403,
+    admin: 404,
+  },
 ];
 const callers: Caller[] = ['anonymous', 'engineer', 'checker', 'viewer', 'admin'];
 
@@ -53,9 +129,15 @@ describe('foundation routes × roles', () => {
 
   it('an unknown /api route is a 404 in the error shape for everyone', async () => {
     for (const caller of callers) {
-      const res = await ctx.request('GET', '/api/no-such-thing', caller === 'anonymous' ? {} : { as: roleLogins[caller] });
+      const res = await ctx.request(
+        'GET',
+        '/api/no-such-thing',
+        caller === 'anonymous' ? {} : { as: roleLogins[caller] },
+      );
       expect(res.status).toBe(404);
-      expect(res.body).toEqual({ error: { code: 'not_found', message: 'No API route GET /api/no-such-thing.' } });
+      expect(res.body).toEqual({
+        error: { code: 'not_found', message: 'No API route GET /api/no-such-thing.' },
+      });
     }
   });
 });

@@ -23,7 +23,9 @@ describe('route policies', () => {
   });
 
   it('every registered route declares @Public(), @SignedIn() or @Roles(...)', () => {
-    const missing = routes.filter((r) => !r.policy).map((r) => `${routeKey(r)} (${r.controller}.${r.handler})`);
+    const missing = routes
+      .filter((r) => !r.policy)
+      .map((r) => `${routeKey(r)} (${r.controller}.${r.handler})`);
     expect(missing).toEqual([]);
   });
 
@@ -31,7 +33,8 @@ describe('route policies', () => {
     const bad = routes.filter(
       (r) =>
         r.policy?.kind === 'roles' &&
-        (r.policy.roles.length === 0 || r.policy.roles.some((x) => !['engineer', 'checker', 'viewer', 'admin'].includes(x))),
+        (r.policy.roles.length === 0 ||
+          r.policy.roles.some((x) => !['engineer', 'checker', 'viewer', 'admin'].includes(x))),
     );
     expect(bad.map(routeKey)).toEqual([]);
   });
@@ -72,8 +75,16 @@ describe('route policies', () => {
 });
 
 /** A 401 that the handler itself gives (refresh without a cookie) is not the guard's. */
-function isHandlerAnswer(route: RouteInfo, status: number, body: { error?: { message?: string } }): boolean {
-  return route.policy?.kind === 'public' && status === 401 && !/^Sign in to continue/.test(body.error?.message ?? '');
+function isHandlerAnswer(
+  route: RouteInfo,
+  status: number,
+  body: { error?: { message?: string } },
+): boolean {
+  return (
+    route.policy?.kind === 'public' &&
+    status === 401 &&
+    !/^Sign in to continue/.test(body.error?.message ?? '')
+  );
 }
 
 // Test files are outside the decorator-enabled tsconfig, so decorators are applied by hand.
@@ -90,14 +101,19 @@ describe('deny by default', () => {
   it('a route without a policy is refused with 403 even for an admin', async () => {
     const base = await createTestContext();
     class WithForgotten {}
-    Module({ imports: [AppModule.forRoot(base.settings)], controllers: [ForgottenController] })(WithForgotten);
+    Module({ imports: [AppModule.forRoot(base.settings)], controllers: [ForgottenController] })(
+      WithForgotten,
+    );
     const app = await NestFactory.create(WithForgotten, { logger: false });
     app.setGlobalPrefix('api');
     await app.listen(0, '127.0.0.1');
     try {
       const { port } = app.getHttpServer().address() as { port: number };
       const token = await base.token('admin');
-      for (const headers of [{}, { authorization: `Bearer ${token}` }] as Record<string, string>[]) {
+      for (const headers of [{}, { authorization: `Bearer ${token}` }] as Record<
+        string,
+        string
+      >[]) {
         const res = await fetch(`http://127.0.0.1:${port}/api/forgotten`, { headers });
         expect(res.status).toBe(403);
         expect(((await res.json()) as { error: { code: string } }).error.code).toBe('forbidden');

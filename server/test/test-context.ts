@@ -20,7 +20,14 @@ import { Database } from '../src/database/database.js';
 import { workerDatabaseUrl } from './worker-database.js';
 
 /** The demo sign-ins: the part of the e-mail before @holdfast.test. */
-export const demoLogins = ['engineer', 'engineer2', 'checker', 'checker2', 'viewer', 'admin'] as const;
+export const demoLogins = [
+  'engineer',
+  'engineer2',
+  'checker',
+  'checker2',
+  'viewer',
+  'admin',
+] as const;
 export type DemoLogin = (typeof demoLogins)[number];
 export const demoEmail = (who: DemoLogin) => `${who}@holdfast.test`;
 export const roleOf = (who: DemoLogin): Role => who.replace(/2$/, '') as Role;
@@ -63,7 +70,11 @@ export interface TestContext {
   baseUrl: string;
   /** The app's own typed Kysely (camelCase). */
   db: Kysely<DB>;
-  request<T = any>(method: string, path: string, options?: RequestOptions): Promise<TestResponse<T>>;
+  request<T = any>(
+    method: string,
+    path: string,
+    options?: RequestOptions,
+  ): Promise<TestResponse<T>>;
   /** Signs in (uncached) and returns the session and the refresh cookie pair `hf_refresh=...`. */
   signIn(who: DemoLogin, password?: string): Promise<{ session: Session; cookie: string }>;
   /** A cached access token for a demo user. */
@@ -108,7 +119,10 @@ const demoSnapshots = new Map<string, UserRow[]>();
  */
 export async function createTestContext(options: TestContextOptions = {}): Promise<TestContext> {
   const sourceUrl = options.env?.DATABASE_URL ?? process.env.DATABASE_URL;
-  if (!sourceUrl) throw new Error('DATABASE_URL is not set: export DATABASE_URL=$(node scripts/db-url.mjs holdfast_test --fresh)');
+  if (!sourceUrl)
+    throw new Error(
+      'DATABASE_URL is not set: export DATABASE_URL=$(node scripts/db-url.mjs holdfast_test --fresh)',
+    );
   const useDb = options.database !== false;
   const url = useDb ? await workerDatabaseUrl(sourceUrl) : sourceUrl;
   if (useDb) await migrateOnce(url);
@@ -131,7 +145,11 @@ export async function createTestContext(options: TestContextOptions = {}): Promi
   const db = app.get(Database);
   const tokens = new Map<DemoLogin, string>();
 
-  const request = async <T>(method: string, p: string, o: RequestOptions = {}): Promise<TestResponse<T>> => {
+  const request = async <T>(
+    method: string,
+    p: string,
+    o: RequestOptions = {},
+  ): Promise<TestResponse<T>> => {
     const headers: Record<string, string> = { ...o.headers };
     const token = o.token ?? (o.as ? await ctx.token(o.as) : undefined);
     if (token) headers.authorization = `Bearer ${token}`;
@@ -173,7 +191,11 @@ export async function createTestContext(options: TestContextOptions = {}): Promi
       return session.accessToken;
     },
     async userId(who) {
-      const row = await db.selectFrom('users').select('id').where('email', '=', demoEmail(who)).executeTakeFirstOrThrow();
+      const row = await db
+        .selectFrom('users')
+        .select('id')
+        .where('email', '=', demoEmail(who))
+        .executeTakeFirstOrThrow();
       return row.id;
     },
     async reset() {
@@ -181,7 +203,9 @@ export async function createTestContext(options: TestContextOptions = {}): Promi
         select tablename from pg_tables where schemaname = 'public'`.execute(db);
       const names = rows.map((r) => r.tablename).filter((t) => !preservedTables.has(t));
       if (names.length) {
-        await sql`truncate table ${sql.join(names.map((n) => sql.id(n)))} restart identity cascade`.execute(db);
+        await sql`truncate table ${sql.join(names.map((n) => sql.id(n)))} restart identity cascade`.execute(
+          db,
+        );
       }
       const snapshot = demoSnapshots.get(url);
       if (!snapshot) {

@@ -36,7 +36,12 @@ describe('users admin API', () => {
   it('creates a user (e-mail lower-cased) who can then sign in', async () => {
     const res = await ctx.request('POST', '/api/users', { as: 'admin', body: newUser });
     expect(res.status).toBe(201);
-    expect(userSchema.parse(res.body)).toMatchObject({ email: 'new.person@holdfast.test', role: 'engineer', active: true, unitSystem: 'SI' });
+    expect(userSchema.parse(res.body)).toMatchObject({
+      email: 'new.person@holdfast.test',
+      role: 'engineer',
+      active: true,
+      unitSystem: 'SI',
+    });
     const signIn = await ctx.request('POST', '/api/auth/sign-in', {
       body: { email: 'new.person@holdfast.test', password: newUser.password },
     });
@@ -44,7 +49,10 @@ describe('users admin API', () => {
   });
 
   it('answers 409 for a duplicate e-mail, whatever its case', async () => {
-    const res = await ctx.request('POST', '/api/users', { as: 'admin', body: { ...newUser, email: 'ENGINEER@holdfast.test' } });
+    const res = await ctx.request('POST', '/api/users', {
+      as: 'admin',
+      body: { ...newUser, email: 'ENGINEER@holdfast.test' },
+    });
     expect(res.status).toBe(409);
     expect(res.body.error.code).toBe('conflict');
   });
@@ -52,7 +60,14 @@ describe('users admin API', () => {
   it('validates the body field by field and rejects unknown fields', async () => {
     const res = await ctx.request('POST', '/api/users', {
       as: 'admin',
-      body: { email: 'bad', displayName: 'X', initials: 'abc', role: 'boss', password: 'short', isAdmin: true },
+      body: {
+        email: 'bad',
+        displayName: 'X',
+        initials: 'abc',
+        role: 'boss',
+        password: 'short',
+        isAdmin: true,
+      },
     });
     expect(res.status).toBe(400);
     const paths = (res.body.error.fields as { path: string }[]).map((f) => f.path).sort();
@@ -62,21 +77,32 @@ describe('users admin API', () => {
   it('changes role and deactivates another user; deactivation ends their sessions', async () => {
     const id = await ctx.userId('engineer2');
     const { cookie } = await ctx.signIn('engineer2');
-    const promoted = await ctx.request('PATCH', `/api/users/${id}`, { as: 'admin', body: { role: 'checker' } });
+    const promoted = await ctx.request('PATCH', `/api/users/${id}`, {
+      as: 'admin',
+      body: { role: 'checker' },
+    });
     expect(promoted.status).toBe(200);
     expect(promoted.body.role).toBe('checker');
-    const off = await ctx.request('PATCH', `/api/users/${id}`, { as: 'admin', body: { active: false } });
+    const off = await ctx.request('PATCH', `/api/users/${id}`, {
+      as: 'admin',
+      body: { active: false },
+    });
     expect(off.status).toBe(200);
     expect(off.body.active).toBe(false);
     expect((await ctx.request('POST', '/api/auth/refresh', { cookie })).status).toBe(401);
-    const signIn = await ctx.request('POST', '/api/auth/sign-in', { body: { email: 'engineer2@holdfast.test', password: 'holdfast-demo' } });
+    const signIn = await ctx.request('POST', '/api/auth/sign-in', {
+      body: { email: 'engineer2@holdfast.test', password: 'holdfast-demo' },
+    });
     expect(signIn.status).toBe(401);
   });
 
   it('a role change applies to the next request of a signed-in user', async () => {
     const token = await ctx.signIn('viewer').then((s) => s.session.accessToken);
     expect((await ctx.request('GET', '/api/users', { token })).status).toBe(403);
-    await ctx.request('PATCH', `/api/users/${await ctx.userId('viewer')}`, { as: 'admin', body: { role: 'admin' } });
+    await ctx.request('PATCH', `/api/users/${await ctx.userId('viewer')}`, {
+      as: 'admin',
+      body: { role: 'admin' },
+    });
     expect((await ctx.request('GET', '/api/users', { token })).status).toBe(200);
   });
 
@@ -87,16 +113,29 @@ describe('users admin API', () => {
       expect(res.status).toBe(409);
       expect(res.body.error.code).toBe('conflict');
     }
-    const renamed = await ctx.request('PATCH', `/api/users/${self}`, { as: 'admin', body: { displayName: 'Sam Ortiz-Lee', role: 'admin' } });
+    const renamed = await ctx.request('PATCH', `/api/users/${self}`, {
+      as: 'admin',
+      body: { displayName: 'Sam Ortiz-Lee', role: 'admin' },
+    });
     expect(renamed.status).toBe(200);
-    expect(renamed.body).toMatchObject({ displayName: 'Sam Ortiz-Lee', role: 'admin', active: true });
+    expect(renamed.body).toMatchObject({
+      displayName: 'Sam Ortiz-Lee',
+      role: 'admin',
+      active: true,
+    });
   });
 
   it('answers 404 for an unknown user id and 400 for a malformed one', async () => {
-    const missing = await ctx.request('PATCH', '/api/users/00000000-0000-4000-8000-000000000000', { as: 'admin', body: { displayName: 'Nobody Here' } });
+    const missing = await ctx.request('PATCH', '/api/users/00000000-0000-4000-8000-000000000000', {
+      as: 'admin',
+      body: { displayName: 'Nobody Here' },
+    });
     expect(missing.status).toBe(404);
     expect(missing.body.error.code).toBe('not_found');
-    const malformed = await ctx.request('PATCH', '/api/users/not-a-uuid', { as: 'admin', body: {} });
+    const malformed = await ctx.request('PATCH', '/api/users/not-a-uuid', {
+      as: 'admin',
+      body: {},
+    });
     expect(malformed.status).toBe(400);
     expect(malformed.body.error.fields).toEqual([{ path: 'id', message: 'must be a UUID' }]);
   });

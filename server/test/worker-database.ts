@@ -32,7 +32,9 @@ export async function workerDatabaseUrl(baseUrl: string): Promise<string> {
     for (const { datname } of rows) {
       const pid = Number(/_(\d+)_w\d+$/.exec(datname)?.[1]);
       if (pid && pid !== runPid && !alive(pid)) {
-        await client.query(`drop database if exists "${datname}" with (force)`).catch(() => undefined);
+        await client
+          .query(`drop database if exists "${datname}" with (force)`)
+          .catch(() => undefined);
       }
     }
     await client.query(`create database "${name}"`).catch((error: { code?: string }) => {

@@ -24,7 +24,9 @@ export class AuthGuard implements CanActivate {
   async canActivate(context: ExecutionContext): Promise<boolean> {
     const policy = policyOf(this.reflector, context.getHandler(), context.getClass());
     if (!policy) {
-      this.logger.error(`${context.getClass().name}.${context.getHandler().name} has no access policy`);
+      this.logger.error(
+        `${context.getClass().name}.${context.getHandler().name} has no access policy`,
+      );
       throw forbidden('This route declares no access policy and is closed.');
     }
     if (policy.kind === 'public') return true;

@@ -8,9 +8,7 @@ import type { Role } from '@holdfast/shared';
  * denies any route without one, and server/test/route-policy.test.ts fails the build for it.
  */
 export type RoutePolicy =
-  | { kind: 'public' }
-  | { kind: 'signed-in' }
-  | { kind: 'roles'; roles: readonly Role[] };
+  { kind: 'public' } | { kind: 'signed-in' } | { kind: 'roles'; roles: readonly Role[] };
 
 export const POLICY_KEY = 'holdfast:route-policy';
 

@@ -7,7 +7,10 @@ import { z } from 'zod';
  * with, so the docs cannot drift from the validation.
  */
 export function ApiBodySchema(schema: z.ZodType): MethodDecorator {
-  const json = z.toJSONSchema(schema, { io: 'input', unrepresentable: 'any' }) as Record<string, unknown>;
+  const json = z.toJSONSchema(schema, { io: 'input', unrepresentable: 'any' }) as Record<
+    string,
+    unknown
+  >;
   delete json.$schema;
   // eslint-disable-next-line @typescript-eslint/no-explicit-any
   return applyDecorators(ApiBody({ schema: json as any }));

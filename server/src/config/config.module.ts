@@ -7,6 +7,10 @@ import type { AppSettings } from './env.js';
 export class ConfigModule {
   static forRoot(settings: AppSettings): DynamicModule {
     const config = new AppConfig(settings);
-    return { module: ConfigModule, providers: [{ provide: AppConfig, useValue: config }], exports: [AppConfig] };
+    return {
+      module: ConfigModule,
+      providers: [{ provide: AppConfig, useValue: config }],
+      exports: [AppConfig],
+    };
   }
 }

@@ -19,7 +19,10 @@ const envSchema = z.object({
   HOST: z.string().min(1).default('127.0.0.1'),
   JWT_SECRET: z.string().min(32, 'must be at least 32 characters').optional(),
   PUBLIC_URL: z.url('must be an absolute URL like http://127.0.0.1:3000').optional(),
-  UI_DIST: z.string().min(1).default(path.join(projectDir, 'ui', 'dist')),
+  UI_DIST: z
+    .string()
+    .min(1)
+    .default(path.join(projectDir, 'ui', 'dist')),
   DATA_DIR: z.string().min(1).default(path.join(projectDir, '.data')),
   LOG_LEVEL: z.enum(logLevels).default('info'),
   LOGIN_THROTTLE_LIMIT: z.coerce.number().int().positive().default(10),

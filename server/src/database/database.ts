@@ -15,7 +15,8 @@ export class Database extends Kysely<DB> implements OnModuleDestroy {
       dialect: new PostgresDialect({
         pool: createPool({
           connectionString: config.settings.DATABASE_URL,
-          onIdleError: (error) => new Logger('Database').warn(`idle connection lost: ${error.message}`),
+          onIdleError: (error) =>
+            new Logger('Database').warn(`idle connection lost: ${error.message}`),
         }),
       }),
       plugins: databasePlugins(),

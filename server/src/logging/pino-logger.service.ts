@@ -30,10 +30,17 @@ export class PinoLoggerService implements LoggerService {
     if (levels.length === 0) this.logger.level = 'silent';
   }
 
-  private write(level: 'info' | 'error' | 'warn' | 'debug' | 'trace' | 'fatal', message: unknown, rest: unknown[]) {
+  private write(
+    level: 'info' | 'error' | 'warn' | 'debug' | 'trace' | 'fatal',
+    message: unknown,
+    rest: unknown[],
+  ) {
     const args = [...rest];
     const context = typeof args[args.length - 1] === 'string' ? (args.pop() as string) : undefined;
-    const stack = typeof args[0] === 'string' && args[0].includes('\n    at ') ? (args.shift() as string) : undefined;
+    const stack =
+      typeof args[0] === 'string' && args[0].includes('\n    at ')
+        ? (args.shift() as string)
+        : undefined;
     const fields: Record<string, unknown> = {};
     if (context) fields.context = context;
     if (stack) fields.stack = stack;

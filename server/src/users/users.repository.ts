@@ -19,7 +19,12 @@ export class UsersRepository {
   }
 
   list(): Promise<UserRow[]> {
-    return this.db.selectFrom('users').selectAll().orderBy('displayName').orderBy('email').execute();
+    return this.db
+      .selectFrom('users')
+      .selectAll()
+      .orderBy('displayName')
+      .orderBy('email')
+      .execute();
   }
 
   insert(row: NewUserRow): Promise<UserRow> {

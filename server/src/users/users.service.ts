@@ -45,7 +45,9 @@ export class UsersService {
     }
     // An empty patch is a no-op read (Kysely cannot build `update ... set` with no columns).
     const row =
-      Object.keys(input).length === 0 ? await this.users.findById(id) : await this.users.update(id, input);
+      Object.keys(input).length === 0
+        ? await this.users.findById(id)
+        : await this.users.update(id, input);
     if (!row) throw notFound('No such user.');
     if (!row.active) await this.users.revokeSessions(id);
     return toUser(row);

@@ -15,11 +15,29 @@ export function mapPostgresError(error: unknown): ApiException | undefined {
   const details = error.constraint ? { constraint: error.constraint } : undefined;
   switch (error.code) {
     case PG_UNIQUE_VIOLATION:
-      return new ApiException(409, 'conflict', 'A record with these values already exists.', undefined, details);
+      return new ApiException(
+        409,
+        'conflict',
+        'A record with these values already exists.',
+        undefined,
+        details,
+      );
     case PG_FOREIGN_KEY_VIOLATION:
-      return new ApiException(400, 'validation_failed', 'A referenced record does not exist.', undefined, details);
+      return new ApiException(
+        400,
+        'validation_failed',
+        'A referenced record does not exist.',
+        undefined,
+        details,
+      );
     case PG_CHECK_VIOLATION:
-      return new ApiException(400, 'validation_failed', 'A value is outside what is allowed.', undefined, details);
+      return new ApiException(
+        400,
+        'validation_failed',
+        'A value is outside what is allowed.',
+        undefined,
+        details,
+      );
     case '22P02': // invalid text representation, e.g. a malformed uuid reaching SQL
       return new ApiException(400, 'validation_failed', 'A value has the wrong format.');
     default:

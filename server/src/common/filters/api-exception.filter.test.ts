@@ -22,7 +22,9 @@ async function pgError(db: Kysely<DB>, statement: string): Promise<unknown> {
   try {
     await db.transaction().execute(async (tx) => {
       await sql`create temporary table t_parent (id int primary key) on commit drop`.execute(tx);
-      await sql`create temporary table t_child (id int primary key, parent int references t_parent(id), n int check (n > 0)) on commit drop`.execute(tx);
+      await sql`create temporary table t_child (id int primary key, parent int references t_parent(id), n int check (n > 0)) on commit drop`.execute(
+        tx,
+      );
       await sql`insert into t_parent values (1)`.execute(tx);
       await sql.raw(statement).execute(tx);
     });
@@ -35,7 +37,8 @@ async function pgError(db: Kysely<DB>, statement: string): Promise<unknown> {
 describe('ApiExceptionFilter', () => {
   let db: Kysely<DB> | undefined;
   beforeAll(() => {
-    if (process.env.DATABASE_URL) db = createDatabase({ connectionString: process.env.DATABASE_URL, max: 1 });
+    if (process.env.DATABASE_URL)
+      db = createDatabase({ connectionString: process.env.DATABASE_URL, max: 1 });
   });
   afterAll(() => db?.destroy());
 
@@ -43,7 +46,10 @@ describe('ApiExceptionFilter', () => {
     if (!db) throw new Error('DATABASE_URL is required');
     const unique = answer(await pgError(db, 'insert into t_parent values (1)'));
     expect(unique.status).toBe(409);
-    expect(unique.body.error).toMatchObject({ code: 'conflict', details: { constraint: 't_parent_pkey' } });
+    expect(unique.body.error).toMatchObject({
+      code: 'conflict',
+      details: { constraint: 't_parent_pkey' },
+    });
     const fk = answer(await pgError(db, 'insert into t_child values (1, 99, 1)'));
     expect(fk.status).toBe(400);
     expect(fk.body.error.code).toBe('validation_failed');
@@ -66,17 +72,24 @@ describe('ApiExceptionFilter', () => {
 
   it('keeps ApiException codes, details and messages', () => {
     const out = answer(conflict('Changed meanwhile.', { version: 3 }));
-    expect(out).toEqual({ status: 409, body: { error: { code: 'conflict', message: 'Changed meanwhile.', details: { version: 3 } } } });
+    expect(out).toEqual({
+      status: 409,
+      body: { error: { code: 'conflict', message: 'Changed meanwhile.', details: { version: 3 } } },
+    });
   });
 
   it('maps Nest exceptions, throttling and unknown routes into the one shape', () => {
     expect(answer(new ThrottlerException()).body.error.code).toBe('too_many_requests');
     expect(answer(new PayloadTooLargeException()).body.error.code).toBe('payload_too_large');
-    expect(answer(new BadRequestException('Unexpected token } in JSON at position 3')).body.error.message).toBe(
-      'The request body is not valid JSON.',
-    );
+    expect(
+      answer(new BadRequestException('Unexpected token } in JSON at position 3')).body.error
+        .message,
+    ).toBe('The request body is not valid JSON.');
     const route = answer(new NotFoundException('Cannot GET /api/x'));
-    expect(route).toEqual({ status: 404, body: { error: { code: 'not_found', message: 'No API route GET /api/x.' } } });
+    expect(route).toEqual({
+      status: 404,
+      body: { error: { code: 'not_found', message: 'No API route GET /api/x.' } },
+    });
   });
 
   it('never leaks the message or stack of an unexpected error', () => {

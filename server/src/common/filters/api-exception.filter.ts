@@ -1,4 +1,11 @@
-import { BadRequestException, Catch, HttpException, Logger, type ArgumentsHost, type ExceptionFilter } from '@nestjs/common';
+import {
+  BadRequestException,
+  Catch,
+  HttpException,
+  Logger,
+  type ArgumentsHost,
+  type ExceptionFilter,
+} from '@nestjs/common';
 import { ThrottlerException } from '@nestjs/throttler';
 import { toFieldIssues, type ApiError, type ErrorCode } from '@holdfast/shared';
 import type { Request, Response } from 'express';
@@ -25,7 +32,8 @@ function codeFor(status: number): ErrorCode {
 /** body-parser and similar middleware errors: an http-errors object with `expose`. */
 function isExposedHttpError(e: unknown): e is { status: number; message: string; type?: string } {
   return (
-    typeof e === 'object' && e !== null &&
+    typeof e === 'object' &&
+    e !== null &&
     typeof (e as { status?: unknown }).status === 'number' &&
     (e as { expose?: unknown }).expose === true
   );
@@ -55,7 +63,12 @@ export class ApiExceptionFilter implements ExceptionFilter {
   }
 
   toResponse(exception: unknown, req: Request): { status: number; body: ApiError } {
-    const make = (status: number, code: ErrorCode, message: string, extra: Partial<ApiError['error']> = {}) => ({
+    const make = (
+      status: number,
+      code: ErrorCode,
+      message: string,
+      extra: Partial<ApiError['error']> = {},
+    ) => ({
       status,
       body: { error: { code, message, ...extra } },
     });
@@ -66,7 +79,9 @@ export class ApiExceptionFilter implements ExceptionFilter {
       return make(exception.getStatus(), exception.code, exception.message, extra);
     }
     if (exception instanceof ZodError) {
-      return make(400, 'validation_failed', 'Some fields are not valid.', { fields: toFieldIssues(exception) });
+      return make(400, 'validation_failed', 'Some fields are not valid.', {
+        fields: toFieldIssues(exception),
+      });
     }
     if (exception instanceof ThrottlerException) {
       return make(429, 'too_many_requests', 'Too many attempts. Wait a minute and try again.');
@@ -74,10 +89,19 @@ export class ApiExceptionFilter implements ExceptionFilter {
     if (exception instanceof HttpException) {
       const status = exception.getStatus();
       if (status === 404 && /^Cannot [A-Z]+ /.test(exception.message)) {
-        return make(404, 'not_found', `No API route ${req.method} ${req.originalUrl.split('?')[0]}.`);
+        return make(
+          404,
+          'not_found',
+          `No API route ${req.method} ${req.originalUrl.split('?')[0]}.`,
+        );
       }
-      if (status === 413) return make(413, 'payload_too_large', 'The request body is too large (limit 1 MB).');
-      if (status === 400 && exception instanceof BadRequestException && /JSON/.test(exception.message)) {
+      if (status === 413)
+        return make(413, 'payload_too_large', 'The request body is too large (limit 1 MB).');
+      if (
+        status === 400 &&
+        exception instanceof BadRequestException &&
+        /JSON/.test(exception.message)
+      ) {
         return make(400, 'validation_failed', 'The request body is not valid JSON.');
       }
       return make(status, codeFor(status), status >= 500 ? 'Internal error.' : exception.message);

@@ -13,7 +13,11 @@ export interface RouteInfo {
 }
 
 const join = (...parts: string[]) =>
-  '/' + parts.flatMap((p) => p.split('/')).filter(Boolean).join('/');
+  '/' +
+  parts
+    .flatMap((p) => p.split('/'))
+    .filter(Boolean)
+    .join('/');
 
 /**
  * Every route of every controller in the app with its declared policy, found through Nest's
@@ -26,14 +30,16 @@ export function listRoutes(app: INestApplication, prefix = 'api'): RouteInfo[] {
   for (const wrapper of discovery.getControllers()) {
     const controller = wrapper.metatype as (new (...args: never[]) => unknown) | null;
     if (!controller) continue;
-    const base = (Reflect.getMetadata(PATH_METADATA, controller) as string | string[] | undefined) ?? '';
+    const base =
+      (Reflect.getMetadata(PATH_METADATA, controller) as string | string[] | undefined) ?? '';
     const proto = controller.prototype as Record<string, unknown>;
     for (const name of Object.getOwnPropertyNames(proto)) {
       const handler = proto[name];
       if (name === 'constructor' || typeof handler !== 'function') continue;
       const method = Reflect.getMetadata(METHOD_METADATA, handler) as RequestMethod | undefined;
       if (method === undefined) continue;
-      const sub = (Reflect.getMetadata(PATH_METADATA, handler) as string | string[] | undefined) ?? '';
+      const sub =
+        (Reflect.getMetadata(PATH_METADATA, handler) as string | string[] | undefined) ?? '';
       for (const b of [base].flat()) {
         for (const s of [sub].flat()) {
           routes.push({
