@@ -36,8 +36,8 @@ export interface Formula<S extends string, D extends Dimension> {
   /** e.g. 'M_b = μ · N · D'. */
   readonly text: string;
   evaluate(values: Record<S, number>): Q<D>;
-  /** e.g. 'M_b = 0.35 · 12.40 kN · 400.0 mm'. */
-  substitute(values: Record<S, number>): string;
+  /** e.g. 'M_b = 0.35 · 12.40 kN · 400.0 mm'; `symbol` replaces the result symbol. */
+  substitute(values: Record<S, number>, symbol?: string): string;
 }
 
 const ALLOWED_FREE = new Set(['pi', 'e']);
@@ -67,8 +67,8 @@ export function defineFormula<S extends string, D extends Dimension>(
       const scope = values as Record<string, number>;
       return (closure ? closure(scope) : compiled!.evaluate({ ...scope })) as Q<D>;
     },
-    substitute(values) {
-      let out = prefix;
+    substitute(values, symbol) {
+      let out = symbol === undefined ? prefix : `${symbol} = `;
       for (const p of pieces) {
         if (typeof p === 'string') {
           out += p;
@@ -124,12 +124,10 @@ export class Derivation {
     if (!Number.isFinite(value)) throw new CalcDomainError(id, values);
     if (this.ids.has(id)) throw new Error(`derivation: duplicate step id ${id}`);
     this.ids.add(id);
-    let formulaText = formula.text;
-    let substituted = formula.substitute(values);
-    if (options.symbol) {
-      formulaText = options.symbol + formulaText.slice(spec.symbol.length);
-      substituted = options.symbol + substituted.slice(spec.symbol.length);
-    }
+    const formulaText = options.symbol
+      ? options.symbol + formula.text.slice(spec.symbol.length)
+      : formula.text;
+    const substituted = formula.substitute(values, options.symbol);
     this.steps.push({
       id,
       section: options.section ?? this.section,

@@ -75,7 +75,13 @@ const PRINT_UNITS: Record<Dimension, PrintUnit[]> = {
 export function formatForDerivation(valueSI: number, dimension: Dimension, digits = 4): string {
   const units = PRINT_UNITS[dimension];
   const abs = Math.abs(valueSI);
-  const unit = units.find((x) => abs < x.below) ?? units[units.length - 1];
+  let unit = units[units.length - 1];
+  for (let k = 0; k < units.length - 1; k++) {
+    if (abs < units[k].below) {
+      unit = units[k];
+      break;
+    }
+  }
   const shown = (valueSI - (unit.offset ?? 0)) / unit.factor;
   const text = formatNumber(shown, digits);
   return unit.label ? `${text} ${unit.label}` : text;
