@@ -285,6 +285,7 @@ export function evaluateCaliperDiscBrake(
         limit: lining.maxOperatingTemperature,
         kind: 'max',
         dimension: 'temperature',
+        base: Tamb,
         source: `${lining.source} (${lining.label})`,
       }),
       makeCheck({
@@ -295,6 +296,7 @@ export function evaluateCaliperDiscBrake(
         limit: lining.maxTemperature,
         kind: 'max',
         dimension: 'temperature',
+        base: Tamb,
         source: `${lining.source} (${lining.label})`,
       }),
     );

@@ -14,6 +14,11 @@ export interface CheckSpec {
   source: string;
   /** Extra words for a failed check (what it means, what to do). */
   failHint?: string;
+  /**
+   * Reference the utilisation is measured from (e.g. ambient temperature: utilisation is then the
+   * used share of the allowed rise, not a ratio of absolute temperatures). Default 0.
+   */
+  base?: number;
   /** Strict comparison (value must exceed the limit), e.g. brake torque over a driving torque. */
   strict?: boolean;
 }
@@ -21,7 +26,9 @@ export interface CheckSpec {
 /** Builds a check with utilisation (1.0 at the limit, > 1 fails) and a plain message. */
 export function makeCheck(spec: CheckSpec): CheckResult {
   const { value, limit, kind } = spec;
-  const utilisation = kind === 'max' ? safeRatio(value, limit) : safeRatio(limit, value);
+  const b = spec.base ?? 0;
+  const utilisation =
+    kind === 'max' ? safeRatio(value - b, limit - b) : safeRatio(limit - b, value - b);
   const pass =
     kind === 'max'
       ? spec.strict

@@ -204,3 +204,12 @@ describe('energy bookkeeping', () => {
     }
   });
 });
+
+describe('temperature checks', () => {
+  it('report the used share of the allowed rise above ambient', () => {
+    const e = hoist.evaluate({}, crane);
+    const c = e.checks.find((x) => x.id === 'temperature-steady')!;
+    const Tamb = 30 + 273.15;
+    expect(nearlyEqual(c.utilisation, (c.value - Tamb) / (c.limit - Tamb), 1e-12)).toBe(true);
+  });
+});

@@ -321,6 +321,7 @@ export function evaluateShoeBrake(
         limit: thermalLining.maxOperatingTemperature,
         kind: 'max',
         dimension: 'temperature',
+        base: Tamb,
         source: `${thermalLining.source} (${thermalLining.label})`,
       }),
       makeCheck({
@@ -331,6 +332,7 @@ export function evaluateShoeBrake(
         limit: thermalLining.maxTemperature,
         kind: 'max',
         dimension: 'temperature',
+        base: Tamb,
         source: `${thermalLining.source} (${thermalLining.label})`,
       }),
     );
