@@ -3,7 +3,7 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { ensureNpmDependencies } from './lib/deps.mjs';
 import { ensureDejaVu } from './lib/apt.mjs';
-import { startCluster, portFree } from './lib/postgres.mjs';
+import { startCluster, portFree, freePortFrom } from './lib/postgres.mjs';
 import { buildAll } from './lib/build.mjs';
 import { migrateAndSeed, startAppServer, stopChild } from './lib/app-server.mjs';
 import { step, fail } from './lib/log.mjs';
@@ -49,6 +49,10 @@ server = await startAppServer(projectDir, {
   PUBLIC_URL: process.env.PUBLIC_URL ?? `http://127.0.0.1:${port}`,
   S3_EMBEDDED: process.env.S3_EMBEDDED ?? '1',
   MAIL_EMBEDDED: process.env.MAIL_EMBEDDED ?? '1',
+  // The local fakes take their usual ports, or the next free ones when something else holds them.
+  S3_PORT: process.env.S3_PORT ?? String(await freePortFrom(4569)),
+  SMTP_PORT: process.env.SMTP_PORT ?? String(await freePortFrom(1025)),
+  MAILDEV_WEB_PORT: process.env.MAILDEV_WEB_PORT ?? String(await freePortFrom(1080)),
   NODE_ENV: 'production',
 });
 step(`ready in ${((Date.now() - started) / 1000).toFixed(1)} s: http://127.0.0.1:${port}  (API under /api, docs at /api/docs)`);

@@ -5,7 +5,7 @@ import { spawn } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { ensureNpmDependencies } from './lib/deps.mjs';
 import { ensureChromium, ensurePoppler, ensureDejaVu } from './lib/apt.mjs';
-import { startCluster, portFree } from './lib/postgres.mjs';
+import { startCluster, freePortFrom } from './lib/postgres.mjs';
 import { buildAll } from './lib/build.mjs';
 import { migrateAndSeed, startAppServer, stopChild } from './lib/app-server.mjs';
 import { step } from './lib/log.mjs';
@@ -30,8 +30,7 @@ await cluster.ensureDatabase('holdfast_e2e', { fresh: true });
 await buildAll(projectDir);
 await migrateAndSeed(projectDir, cluster.url('holdfast_e2e'));
 
-let e2ePort = 3900;
-while (!(await portFree(e2ePort))) e2ePort++;
+const e2ePort = await freePortFrom(3900);
 const app = await startAppServer(
   projectDir,
   {
@@ -40,6 +39,7 @@ const app = await startAppServer(
     HOST: '127.0.0.1',
     PUBLIC_URL: `http://127.0.0.1:${e2ePort}`,
     S3_EMBEDDED: '1',
+    S3_PORT: String(await freePortFrom(4600)),
     MAIL_EMBEDDED: '0',
     LOGIN_THROTTLE_LIMIT: '1000',
     NODE_ENV: 'test',

@@ -152,3 +152,10 @@ export async function startCluster({ projectDir, name, port, durable }) {
 
   return { url, stop, port, dataDir, ensureDatabase, psql };
 }
+
+/** The first free TCP port on 127.0.0.1 at or after `from`. */
+export async function freePortFrom(from) {
+  let port = from;
+  while (!(await portFree(port))) port++;
+  return port;
+}
