@@ -1,7 +1,10 @@
 import { Derivation } from '../core/step.js';
 import { backOffAngleForPreload } from './back-off.js';
 import { discConstants, type DiscConstants } from './disc.js';
-import * as f from './formulas.js';
+import * as fd from './formulas.js';
+import * as fs from './formulas-stack.js';
+
+const f = { ...fd, ...fs };
 import type { DiscStack } from './stack.js';
 import { validateStack } from './validate.js';
 

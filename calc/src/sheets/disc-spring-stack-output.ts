@@ -1,15 +1,8 @@
-import type {
-  ChartData,
-  CheckResult,
-  CriteriaSet,
-  FieldSetting,
-  ResultValue,
-  SheetEvaluation,
-} from '../core/types.js';
-import { backOffPreload } from '../disc-springs/back-off.js';
-import { stackCurve, WORKING_BAND, workingBandWarning } from '../disc-springs/curve.js';
+import type { CheckResult, CriteriaSet, FieldSetting, ResultValue } from '../core/types.js';
+import { workingBandWarning } from '../disc-springs/curve.js';
 import type { StackSetResult } from '../disc-springs/stack-derivation.js';
 import type { DiscStack } from '../disc-springs/stack.js';
+import { backOffTable, loadDeflectionChart } from './disc-spring-stack-chart.js';
 
 /** Default static-load limit for |σOM| at flat when the criteria set has none. */
 export const SIGMA_OM_FLAT_DEFAULT = {
@@ -29,8 +22,6 @@ export interface StackOutputInput {
   required: number;
   r: StackSetResult;
 }
-
-type Table = SheetEvaluation['tables'][number];
 
 /** Results, checks, chart, field settings, table and warnings of one stack. */
 export function stackOutputs(x: StackOutputInput, criteria: CriteriaSet) {
@@ -146,48 +137,7 @@ export function stackOutputs(x: StackOutputInput, criteria: CriteriaSet) {
     });
   }
 
-  const curve = stackCurve(stack, 40, r.constants);
-  const i = stack.seriesCount;
-  const chart: ChartData = {
-    id: `${key}-load-deflection`,
-    title: `${x.title}: load–deflection`,
-    xLabel: 'Stack deflection',
-    xUnit: 'm',
-    xDimension: 'length',
-    yLabel: 'Stack force',
-    yUnit: 'N',
-    yDimension: 'force',
-    series: [
-      {
-        name: 'loading (with friction)',
-        points: curve.map((p) => ({ x: p.stackDeflection, y: p.loading })),
-      },
-      {
-        name: 'without friction',
-        points: curve.map((p) => ({ x: p.stackDeflection, y: p.nominal })),
-      },
-      {
-        name: 'unloading (with friction)',
-        points: curve.map((p) => ({ x: p.stackDeflection, y: p.unloading })),
-      },
-    ],
-    markers: [{ label: 'set point', x: r.setDeflection * i, y: r.stackUnloading }],
-    referenceLines: [
-      {
-        label: `working band min ${WORKING_BAND.min}·h₀ (memory)`,
-        axis: 'x',
-        value: WORKING_BAND.min * r.h0 * i,
-      },
-      {
-        label: `working band max ${WORKING_BAND.max}·h₀ (memory)`,
-        axis: 'x',
-        value: WORKING_BAND.max * r.h0 * i,
-      },
-      ...(x.required > 0
-        ? [{ label: 'required preload', axis: 'y' as const, value: x.required }]
-        : []),
-    ],
-  };
+  const chart = loadDeflectionChart(x);
 
   const fieldSettings: FieldSetting[] = [
     {
@@ -224,28 +174,7 @@ export function stackOutputs(x: StackOutputInput, criteria: CriteriaSet) {
     });
   }
 
-  const rows: Record<string, number>[] = [];
-  const maxDeg = (360 * i * r.h0) / x.lead;
-  for (let deg = 0; deg <= Math.min(maxDeg, 1080) + 1e-9; deg += 30) {
-    const b = backOffPreload(stack, x.lead, deg, r.constants);
-    rows.push({
-      angle: (deg * Math.PI) / 180,
-      release: b.release,
-      setLength: r.freeLength - b.stackDeflection,
-      preload: b.forces.unloading,
-    });
-  }
-  const table: Table = {
-    id: `${key}-back-off`,
-    title: `${x.title}: back-off angle against preload`,
-    columns: [
-      { key: 'angle', label: 'Back-off from flat', unit: 'rad', dimension: 'angle' },
-      { key: 'release', label: 'Axial release', unit: 'm', dimension: 'length' },
-      { key: 'setLength', label: 'Stack length', unit: 'm', dimension: 'length' },
-      { key: 'preload', label: 'Preload (unloading)', unit: 'N', dimension: 'force' },
-    ],
-    rows,
-  };
+  const table = backOffTable(x);
 
   const warnings: string[] = [];
   const prefix = `${x.title}: `;
