@@ -1,17 +1,24 @@
 import { bench, describe } from 'vitest';
 import { renderFieldCardPdf, renderSheetPdf, warmUpPdfRenderer } from './render.js';
 import { hoistPrintable } from './testing/hoist-fixture.js';
+import { realPrintable } from './testing/real-sheet.js';
 
-// Fonts are parsed once per process (warm-up); the figure is the steady-state cost per request.
+// Fonts are parsed once per process (warm-up); the figures are the steady cost per request.
 await warmUpPdfRenderer();
-const approved = hoistPrintable({ state: 'approved' });
+const hoist = realPrintable({ sheetTypeId: 'hoist-shoe-brake', state: 'approved' });
+const small = hoistPrintable({ state: 'approved' });
+const opts = { iterations: 8, warmupIterations: 2, time: 0 };
 
 describe('PDF', () => {
-  bench('calculation sheet, approved hoist, A4', async () => {
-    await renderSheetPdf(approved);
-  }, { iterations: 10, warmupIterations: 1, time: 0 });
+  bench('calculation sheet, approved hoist (calc defaults, 95 steps), A4', async () => {
+    await renderSheetPdf(hoist);
+  }, opts);
+
+  bench('calculation sheet, 6-page fixture, A4', async () => {
+    await renderSheetPdf(small);
+  }, opts);
 
   bench('field setting card, approved hoist, A4', async () => {
-    await renderFieldCardPdf(approved);
-  }, { iterations: 10, warmupIterations: 1, time: 0 });
+    await renderFieldCardPdf(hoist);
+  }, opts);
 });

@@ -57,8 +57,9 @@ export function Approvals(props: { sheet: PrintableSheet }) {
 
 export function RevisionHistory(props: { sheet: PrintableSheet }) {
   const { sheet } = props;
+  // Short table: keep it whole with its heading rather than orphan the heading.
   return (
-    <View>
+    <View wrap={sheet.history.length > 12}>
       <Heading>Revision history</Heading>
       <Table
         columns={[

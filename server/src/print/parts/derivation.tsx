@@ -29,16 +29,13 @@ function Step(props: { step: DerivationStep; n: string; sheet: PrintableSheet })
       style={{ flexDirection: 'row', borderBottomWidth: 0.4, borderColor: colours.rule, paddingVertical: 3 }}
     >
       <Text style={{ width: NUM_W, color: colours.muted, fontSize: 7 }}>{props.n}</Text>
-      {/* One paragraph with spans: a quarter of the layout nodes of one Text per line. */}
-      <Text style={{ flex: 1 }}>
+      {/* One Text per line: a '\n' has no glyph in any font and would pull in Helvetica. */}
+      <View style={{ flex: 1 }}>
         <Text style={{ fontWeight: 600 }}>{step.label}</Text>
-        {'\n'}
         <Text style={mono}>{step.formula}</Text>
-        {'\n'}
         <Text style={{ ...mono, color: colours.muted }}>{step.substituted}</Text>
-        {'\n'}
         <Text style={{ ...mono, fontWeight: 700 }}>{resultText(step, sheet)}</Text>
-      </Text>
+      </View>
       <Text style={{ width: REF_W, fontSize: 6.8, color: colours.muted, paddingLeft: 6 }}>
         {step.reference}
       </Text>

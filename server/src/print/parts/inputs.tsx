@@ -19,12 +19,18 @@ export function Inputs(props: { sheet: PrintableSheet }) {
           <Heading level={2}>{g.title}</Heading>
           <Table
             columns={[
-              { title: 'Input', flex: 3.4 },
+              { title: 'Input', flex: 3.2 },
               { title: 'Symbol', flex: 0.9, mono: true },
-              { title: 'As entered', flex: 1.6, align: 'right' },
-              { title: sheet.unitSystem === 'US' ? 'In US units' : 'In SI units', flex: 1.6, align: 'right' },
+              { title: 'As entered', flex: 2, align: 'right' },
+              { title: sheet.unitSystem === 'US' ? 'In US units' : 'In SI units', flex: 1.4, align: 'right' },
             ]}
-            rows={g.items.map((i) => [i.field.label, i.field.symbol, i.entered, i.converted])}
+            rows={g.items.map((i) => [
+              i.field.label,
+              i.field.symbol,
+              i.entered,
+              // Only quantities change with the unit system; the rest would just repeat.
+              i.field.kind === 'quantity' ? i.converted : '',
+            ])}
           />
         </View>
       ))}
