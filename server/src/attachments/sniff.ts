@@ -8,11 +8,13 @@ function startsWith(buf: Buffer, bytes: number[]): boolean {
   return buf.length >= bytes.length && bytes.every((b, i) => buf[i] === b);
 }
 
+/** C0 control bytes other than tab, LF, FF and CR never occur in plain text or CSV. */
+const CONTROL = /[\x00-\x08\x0b\x0e-\x1f\x7f]/;
+
 function isText(buf: Buffer): boolean {
   if (buf.includes(0)) return false;
   try {
-    new TextDecoder('utf-8', { fatal: true }).decode(buf);
-    return true;
+    return !CONTROL.test(new TextDecoder('utf-8', { fatal: true }).decode(buf));
   } catch {
     return false;
   }
@@ -20,7 +22,7 @@ function isText(buf: Buffer): boolean {
 
 /**
  * PDF (`%PDF-`), PNG (8-byte signature), JPEG (FF D8 FF), or text: valid UTF-8 with no NUL
- * bytes. Text named `.csv` is served as text/csv, otherwise text/plain — the name only labels
+ * or other control bytes (tab, line breaks and form feed allowed). Text named `.csv` is served as text/csv, otherwise text/plain — the name only labels
  * text, it never admits bytes. Anything else: undefined (refused).
  */
 export function sniffContentType(buf: Buffer, fileName: string): SniffedType | undefined {

@@ -4,10 +4,12 @@ import { canonicalJson } from '@holdfast/shared';
 /** Relative change below which a result counts as unchanged (floating-point noise). */
 export const MOVE_TOLERANCE = 1e-9;
 
+/** Absolute floor in SI units (a picometre, a piconewton): below it nothing has moved. */
+export const MOVE_FLOOR = 1e-12;
+
 export function moved(a: number, b: number, tol = MOVE_TOLERANCE): boolean {
-  if (a === b) return false;
-  const scale = Math.max(Math.abs(a), Math.abs(b));
-  return Math.abs(a - b) > tol * (scale === 0 ? 1 : scale);
+  const diff = Math.abs(a - b);
+  return diff > MOVE_FLOOR && diff > tol * Math.max(Math.abs(a), Math.abs(b));
 }
 
 export interface ResultDiff {

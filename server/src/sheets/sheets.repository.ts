@@ -48,6 +48,7 @@ export class SheetsRepository {
       ])
       .where('s.id', 'in', ids)
       .execute();
+    if (sheets.length === 0) return [];
     const uniq = (xs: string[]) => [...new Set(xs)];
     const [sites, machines, positions, owners] = await Promise.all([
       db
