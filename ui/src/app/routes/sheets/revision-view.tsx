@@ -1,4 +1,4 @@
-import { useCallback, useMemo, useState } from 'react';
+import { useCallback, useEffect, useMemo, useState } from 'react';
 import { Alert, Grid, Skeleton, Stack, Tabs } from '@mantine/core';
 import { IconAlertTriangle } from '@tabler/icons-react';
 import type { Comment, User } from '@holdfast/shared';
@@ -6,7 +6,7 @@ import { ErrorPanel } from '../../../components/errors/error-panel';
 import { AttachmentsPanel } from '../../../features/attachments/components/attachments-panel';
 import { fieldDomId } from '../../../features/calc/components/field-input';
 import { ResultsPanel } from '../../../features/calc/components/results-panel';
-import { findSheetType } from '../../../features/calc/utils/sheet-types';
+import { findSheetType, warmUpSheetType } from '../../../features/calc/utils/sheet-types';
 import { useCriteriaSet } from '../../../features/criteria/api/get-criteria-set';
 import { useComments } from '../../../features/review/api/get-comments';
 import { CommentMarker } from '../../../features/review/components/comment-marker';
@@ -22,6 +22,10 @@ export function RevisionView({ revisionId, user }: { revisionId: string; user: U
   const [tab, setTab] = useState<string | null>('calc');
   const revision = query.data;
   const sheetType = revision ? findSheetType(revision.sheetType) : undefined;
+  const typeId = revision?.sheetType;
+  useEffect(() => {
+    if (typeId) warmUpSheetType(typeId);
+  }, [typeId]);
   const criteria = useCriteriaSet(revision?.criteriaSetId ?? '', revision?.criteriaSetVersion);
   const frozen = revision ? revision.state === 'approved' || revision.state === 'superseded' : true;
   const commentsQuery = useComments(revisionId);

@@ -5,6 +5,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import type { RevisionSummary, SheetDetail, User } from '@holdfast/shared';
 import { ErrorPanel } from '../../../components/errors/error-panel';
+import { warmUpSheetType } from '../../../features/calc/utils/sheet-types';
 import type { RouteHandle } from '../../../lib/route-handle';
 import { useCurrentUser } from '../../../lib/session';
 import { revisionQueryOptions } from '../../../features/revisions/api/get-revision';
@@ -21,6 +22,7 @@ export function clientLoader(queryClient: QueryClient) {
     const sheet = await queryClient.ensureQueryData(sheetQueryOptions(params.sheetId!));
     const revisionId = params.revisionId ?? sheet.latest.id;
     void queryClient.prefetchQuery(revisionQueryOptions(revisionId));
+    warmUpSheetType(sheet.sheetType);
     return null;
   };
 }

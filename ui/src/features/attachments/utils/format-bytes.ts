@@ -1,6 +1,7 @@
-/** 25 MB, 340 kB, 812 B: sizes in decimal units as file managers show them. */
+/** 25 MB, 340 kB, 812 B: sizes in binary multiples (1 MB = 1024 kB), as upload limits are set. */
 export function formatBytes(bytes: number): string {
-  if (bytes >= 1e6) return `${(bytes / 1e6).toFixed(bytes >= 1e7 ? 0 : 1)} MB`;
-  if (bytes >= 1e3) return `${Math.round(bytes / 1e3)} kB`;
+  const mb = bytes / (1024 * 1024);
+  if (mb >= 1) return `${mb >= 10 ? Math.round(mb) : mb.toFixed(1)} MB`;
+  if (bytes >= 1024) return `${Math.round(bytes / 1024)} kB`;
   return `${bytes} B`;
 }

@@ -3,6 +3,11 @@ import { LineChart } from '@mantine/charts';
 import { formatNumber } from '@holdfast/calc';
 import type { DisplayChart } from '../utils/chart-data';
 
+/** Axis ticks: three significant figures, no trailing zeros ('0.05', '1200'). */
+function shortTick(v: number): string {
+  return Number(v.toPrecision(3)).toString().replace('-', '−');
+}
+
 const COLORS = ['steel.7', 'amber.7', 'pass.7', 'fail.6', 'grape.6', 'cyan.7'];
 
 /** One engineering chart: series as lines over a numeric x axis, with reference lines and marked points. */
@@ -26,17 +31,18 @@ export function ChartCard({ chart }: { chart: DisplayChart }) {
         yAxisLabel={chart.yLabel}
         gridAxis="xy"
         valueFormatter={(v) => formatNumber(v, 4)}
+        yAxisProps={{ width: 64, tickFormatter: shortTick }}
         xAxisProps={{
           type: 'number',
           domain: ['dataMin', 'dataMax'],
-          tickFormatter: (v: number) => formatNumber(v, 3),
+          tickFormatter: shortTick,
         }}
         referenceLines={chart.referenceLines.map((l) => ({
           ...(l.axis === 'x' ? { x: l.value } : { y: l.value }),
           label: l.label,
           color: 'fail.7',
           strokeDasharray: '6 4',
-          labelPosition: l.axis === 'x' ? 'insideTopRight' : 'insideBottomRight',
+          labelPosition: l.axis === 'x' ? 'insideTopLeft' : 'insideBottomRight',
         }))}
         referenceDots={chart.markers.map((m) => ({
           x: m.x,

@@ -94,6 +94,9 @@ function StepRow({
       </Group>
       <Collapse expanded={open} id={bodyId} keepMounted={false}>
         <Stack gap={2} pl={20} pb={6}>
+          <Text size="xs" fw={500}>
+            {step.label}
+          </Text>
           <Code block fz="xs">
             {step.formula}
             {'\n'}

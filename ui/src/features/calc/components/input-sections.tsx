@@ -44,7 +44,12 @@ export function InputSections(props: InputSectionsProps) {
             </Title>
             <SimpleGrid cols={{ base: 1, xl: 2 }} spacing="md" verticalSpacing="sm">
               {fields.map((field) => (
-                <Box key={field.key} pos="relative" data-field={field.key}>
+                <Box
+                  key={field.key}
+                  pos="relative"
+                  data-field={field.key}
+                  pr={renderFieldAside ? 28 : undefined}
+                >
                   <FieldInput
                     field={field}
                     value={inputs[field.key]}

@@ -140,12 +140,22 @@ export function ResultsPanel(props: ResultsPanelProps) {
             </Alert>
           ) : null}
           <Tabs defaultValue="checks" keepMounted={false}>
-            <Tabs.List mb="sm">
-              <Tabs.Tab value="checks">Checks {failing > 0 ? `(${failing} failing)` : ''}</Tabs.Tab>
-              <Tabs.Tab value="results">Results</Tabs.Tab>
-              <Tabs.Tab value="steps">Derivation</Tabs.Tab>
-              <Tabs.Tab value="charts">Charts</Tabs.Tab>
-              <Tabs.Tab value="field">Field settings</Tabs.Tab>
+            <Tabs.List mb="sm" style={{ flexWrap: 'nowrap', overflowX: 'auto' }}>
+              <Tabs.Tab value="checks" px="xs">
+                Checks {failing > 0 ? `(${failing} failing)` : ''}
+              </Tabs.Tab>
+              <Tabs.Tab value="results" px="xs">
+                Results
+              </Tabs.Tab>
+              <Tabs.Tab value="steps" px="xs">
+                Derivation
+              </Tabs.Tab>
+              <Tabs.Tab value="charts" px="xs">
+                Charts
+              </Tabs.Tab>
+              <Tabs.Tab value="field" px="xs">
+                Field settings
+              </Tabs.Tab>
             </Tabs.List>
             <Tabs.Panel value="checks">
               <CheckList

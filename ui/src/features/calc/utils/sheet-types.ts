@@ -45,3 +45,37 @@ export function withDefaults(type: SheetTypeDefinition, inputs: SheetInputs): Sh
   for (const f of type.fields) out[f.key] = f.default;
   return { ...out, ...inputs };
 }
+
+const warmed = new Set<string>();
+
+/**
+ * The first evaluation in a page pays for the unit tables and the JIT (a few hundred ms); later
+ * ones take a few ms. Run one throw-away evaluation on the type's defaults while the revision
+ * is still loading, so the engineer's first keystroke is already fast.
+ */
+export function warmUpSheetType(id: string): void {
+  if (warmed.has(id)) return;
+  warmed.add(id);
+  const type = findSheetType(id);
+  const sets = (calc as unknown as { CRITERIA_SETS?: unknown }).CRITERIA_SETS;
+  const criteria = Array.isArray(sets)
+    ? sets
+    : sets && typeof sets === 'object'
+      ? Object.values(sets)
+      : [];
+  if (!type || criteria.length === 0) return;
+  const run = () => {
+    for (const set of criteria) {
+      try {
+        type.evaluate(
+          withDefaults(type, {}),
+          set as Parameters<SheetTypeDefinition['evaluate']>[1],
+        );
+        return;
+      } catch {
+        // A set for another duty may lack a value this type needs: try the next one.
+      }
+    }
+  };
+  setTimeout(run, 0);
+}

@@ -137,7 +137,7 @@ export function RevisionWorkbench(props: RevisionWorkbenchProps) {
               stale={stored ? null : live.lastGood}
               sections={sheetType.sections}
               unitSystem={unitSystem}
-              durationMs={stored ? undefined : live.durationMs}
+              durationMs={stored || live.runs === 0 ? undefined : live.durationMs}
               origin={
                 stored
                   ? `Stored at submission (${revision.coreVersion ?? 'core'})`
