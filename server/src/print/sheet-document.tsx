@@ -55,10 +55,10 @@ export function SheetDocument(props: { sheet: PrintableSheet; qr: string | null 
       <Page size={sheet.paper} style={s.page}>
         <Frame sheet={sheet} qr={qr} kind={kind} />
         <Purpose sheet={sheet} />
+        <Caution />
         <Summary sheet={sheet} />
         <Approvals sheet={sheet} />
         <RevisionHistory sheet={sheet} />
-        <Caution />
       </Page>
       <Page size={sheet.paper} style={s.page}>
         <Frame sheet={sheet} qr={qr} kind={kind} />

@@ -17,8 +17,9 @@ export function Caution(props: { extra?: string[] }) {
         borderLeftWidth: 3,
         borderColor: colours.caution,
         backgroundColor: colours.cautionBg,
-        padding: 6,
-        marginVertical: 6,
+        paddingVertical: 4,
+        paddingHorizontal: 6,
+        marginTop: 6,
       }}
     >
       <Text style={{ fontWeight: 700, color: colours.caution, marginBottom: 2 }}>Caution</Text>

@@ -55,7 +55,8 @@ export function Table(props: { columns: Column[]; rows: Cell[][]; fontSize?: num
             const c = columns[i];
             const style = {
               ...box(c),
-              padding: 3,
+              paddingVertical: 2,
+              paddingHorizontal: 3,
               fontSize,
               textAlign: c.align ?? 'left',
               ...(c.mono ? monoFont : {}),
