@@ -1,0 +1,120 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Kysely } from 'kysely';
+import type { DB } from '@holdfast/db';
+import { seed as seedDemoPlant } from '../../db/dist/seeds/20261202100000_demo_plant.js';
+import { DemoAttachments } from '../src/attachments/demo-attachments.js';
+import { CriteriaService } from '../src/criteria/criteria.service.js';
+import { evaluateSheet } from '../src/revisions/calc-engine.js';
+import { contentHash } from '../src/revisions/revision-codes.js';
+import { createSheetsContext, type SheetsContext } from './sheets-fixture.js';
+
+describe('demo plant seed', () => {
+  let ctx: SheetsContext;
+  beforeAll(async () => {
+    ctx = await createSheetsContext();
+    await ctx.resetAll();
+    await seedDemoPlant(ctx.db as unknown as Kysely<DB>);
+  });
+  afterAll(() => ctx?.closeAll());
+
+  it('covers every state and sheet type with at least eight sheets, and runs only once', async () => {
+    const list = await ctx.request('GET', '/api/sheets?pageSize=50', { as: 'viewer' });
+    expect(list.body.total).toBeGreaterThanOrEqual(8);
+    expect(
+      list.body.items.every((s: { site: { name: string } }) => s.site.name.includes('demo')),
+    ).toBe(true);
+    const revs = await ctx.db
+      .selectFrom('revisions as r')
+      .innerJoin('sheets as s', 's.id', 'r.sheetId')
+      .select(['r.state', 's.sheetType'])
+      .execute();
+    expect(new Set(revs.map((r) => r.state))).toEqual(
+      new Set(['draft', 'in_check', 'returned', 'approved', 'superseded']),
+    );
+    expect(new Set(revs.map((r) => r.sheetType))).toEqual(
+      new Set(['hoist-shoe-brake', 'travel-shoe-brake', 'caliper-disc-brake', 'disc-spring-stack']),
+    );
+    await seedDemoPlant(ctx.db as unknown as Kysely<DB>);
+    expect((await ctx.request('GET', '/api/sheets?pageSize=1', { as: 'viewer' })).body.total).toBe(
+      list.body.total,
+    );
+  });
+
+  it('stores evaluations the calc core gives for the stored inputs, with matching hashes', async () => {
+    const rows = await ctx.db
+      .selectFrom('revisions as r')
+      .innerJoin('sheets as s', 's.id', 'r.sheetId')
+      .select([
+        'r.inputs',
+        'r.evaluation',
+        'r.hash',
+        'r.state',
+        'r.criteriaSetId',
+        'r.criteriaSetVersion',
+        's.sheetType',
+      ])
+      .execute();
+    const criteria = ctx.app.get(CriteriaService);
+    for (const r of rows) {
+      const fresh = evaluateSheet(
+        r.sheetType,
+        r.inputs as never,
+        await criteria.load(r.criteriaSetId, r.criteriaSetVersion),
+      );
+      const stored = r.evaluation as typeof fresh;
+      expect(stored.results.length).toBe(fresh.results.length);
+      for (const x of fresh.results) {
+        const y = stored.results.find((v) => v.key === x.key)!;
+        expect(Math.abs(y.value - x.value)).toBeLessThanOrEqual(
+          1e-9 * Math.max(1, Math.abs(x.value)),
+        );
+      }
+      if (r.state !== 'draft') expect(r.hash).toBe(contentHash(r.inputs, r.evaluation));
+    }
+  });
+
+  it('has an approved sheet with a superseded predecessor and a returned revision with answered comments', async () => {
+    const list = await ctx.request('GET', '/api/sheets?q=NRW-0001', { as: 'viewer' });
+    const sheet = await ctx.request('GET', `/api/sheets/${list.body.items[0].id}`, {
+      as: 'viewer',
+    });
+    expect(
+      sheet.body.revisions.map((r: { label: string; state: string }) => `${r.label}:${r.state}`),
+    ).toEqual(['A:superseded', 'B:approved']);
+    const a = await ctx.request('GET', `/api/revisions/${sheet.body.revisions[0].id}`, {
+      as: 'viewer',
+    });
+    expect(a.body.supersededBy.label).toBe('B');
+    const verify = await ctx.request('GET', `/api/verify/${a.body.verificationCode}`);
+    expect(verify.body).toMatchObject({ current: false, newerApproved: { revisionLabel: 'B' } });
+
+    const returned = await ctx.request('GET', '/api/sheets?state=returned', { as: 'engineer' });
+    const rev = returned.body.items[0].latest.id;
+    const comments = await ctx.request('GET', `/api/revisions/${rev}/comments`, { as: 'engineer' });
+    expect(comments.body.items.length).toBeGreaterThan(0);
+    for (const c of comments.body.items) {
+      expect(c.resolved).toBe(true);
+      expect(c.replies.length).toBe(1);
+    }
+    const audit = await ctx.request('GET', `/api/sheets/${returned.body.items[0].id}/audit`, {
+      as: 'viewer',
+    });
+    expect(audit.body.items.map((e: { action: string }) => e.action)).toContain(
+      'revision.returned',
+    );
+  });
+
+  it('attaches the generated data sheet once, through the object storage', async () => {
+    const demo = ctx.app.get(DemoAttachments);
+    // The seed ran after the app started, so the start-up pass found nothing to attach.
+    expect(await demo.ensure()).toBe(2);
+    expect(await demo.ensure()).toBe(0);
+    const rows = await ctx.db.selectFrom('attachments').select(['id', 'fileName']).execute();
+    expect(rows.length).toBeGreaterThanOrEqual(1);
+    const dl = await ctx.request('GET', `/api/attachments/${rows[0].id}/download`, {
+      as: 'engineer',
+    });
+    expect(dl.status).toBe(200);
+    expect(dl.text).toContain('DEMO DATA SHEET');
+  });
+});
