@@ -28,6 +28,8 @@ export interface PdfFacts {
   size: { width: number; height: number };
   /** Text per page (pdftotext -layout). */
   pageText: string[];
+  /** Text per page in content-stream order (pdftotext -raw): table cells stay in row order. */
+  rawPageText: string[];
   text: string;
   fonts: { name: string; embedded: boolean }[];
 }
@@ -41,6 +43,7 @@ export function inspectPdf(pdf: Buffer, name: string): PdfFacts {
   const pages = Number(/Pages:\s+(\d+)/.exec(info)?.[1]);
   const m = /Page size:\s+([\d.]+) x ([\d.]+) pts/.exec(info);
   const text = execFileSync('pdftotext', ['-layout', file, '-']).toString();
+  const raw = execFileSync('pdftotext', ['-raw', file, '-']).toString();
   const fonts = execFileSync('pdffonts', [file])
     .toString()
     .split('\n')
@@ -56,6 +59,7 @@ export function inspectPdf(pdf: Buffer, name: string): PdfFacts {
     pages,
     size: { width: Number(m?.[1]), height: Number(m?.[2]) },
     pageText: text.split('\f').slice(0, pages),
+    rawPageText: raw.split('\f').slice(0, pages),
     text,
     fonts,
   };
