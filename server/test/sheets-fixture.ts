@@ -1,5 +1,4 @@
 // Shared set-up of the sheets e2e suites: SMTP capture, embedded S3, the register and helpers.
-// @ts-expect-error smtp-server ships no types; only its constructor and listen/close are used.
 import { SMTPServer } from 'smtp-server';
 import { expect } from 'vitest';
 import { CriteriaService } from '../src/criteria/criteria.service.js';
@@ -20,7 +19,12 @@ export interface SmtpFake {
 /** smtp-server on 127.0.0.1 capturing every message; stop/start keep the same port. */
 export async function startSmtpFake(port = 0): Promise<SmtpFake> {
   const mails: CapturedMail[] = [];
-  let server: { listen: Function; close: Function } | undefined;
+  type Smtp = {
+    server: import('node:net').Server;
+    listen(port: number, host: string, cb: () => void): void;
+    close(cb: () => void): void;
+  };
+  let server: Smtp | undefined;
   let bound = port;
   const start = async () => {
     server = new SMTPServer({
@@ -48,7 +52,7 @@ export async function startSmtpFake(port = 0): Promise<SmtpFake> {
       },
     });
     await new Promise<void>((resolve, reject) => {
-      const s = server as unknown as { server: import('node:net').Server; listen: Function };
+      const s = server as Smtp;
       s.listen(bound, '127.0.0.1', () => resolve());
       s.server.once('error', reject);
     });

@@ -9,6 +9,7 @@ function startsWith(buf: Buffer, bytes: number[]): boolean {
 }
 
 /** C0 control bytes other than tab, LF, FF and CR never occur in plain text or CSV. */
+// eslint-disable-next-line no-control-regex -- matching control bytes is the point
 const CONTROL = /[\x00-\x08\x0b\x0e-\x1f\x7f]/;
 
 function isText(buf: Buffer): boolean {
@@ -41,6 +42,8 @@ export function sniffContentType(buf: Buffer, fileName: string): SniffedType | u
 export function sanitizeFileName(raw: string): string {
   const base = raw.normalize('NFC').split(/[\\/]/).pop() ?? '';
   let name = base
+    // eslint-disable-next-line no-control-regex -- stripping control characters is the point
+    // eslint-disable-next-line no-control-regex -- stripping control characters is the point
     .replace(/[\u0000-\u001f\u007f-\u009f]/g, '')
     .replace(/[<>:"|?*]/g, '_')
     .replace(/\s+/g, ' ')
