@@ -1,4 +1,5 @@
 import { createHash } from 'node:crypto';
+import { sql } from 'kysely';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { ObjectStorage } from '../src/storage/object-storage.js';
 import {
@@ -127,6 +128,45 @@ describe('attachments', () => {
     expect((await upload(ctx, revisionId, PDF, 'a.pdf', 'viewer')).status).toBe(403);
     await submit(ctx, revisionId);
     expect((await upload(ctx, revisionId, PDF, 'a.pdf')).status).toBe(409);
+  });
+
+  it('removes the stored object again when the database row cannot be written', async () => {
+    const { readdirSync, existsSync } = await import('node:fs');
+    const path = await import('node:path');
+    const storage = ctx.app.get(ObjectStorage);
+    const dir = path.join(storage.settings.directory, storage.settings.S3_BUCKET);
+    const objects = () => {
+      const walk = (d: string): string[] =>
+        existsSync(d)
+          ? readdirSync(d, { withFileTypes: true }).flatMap((e) =>
+              e.isDirectory() ? walk(path.join(d, e.name)) : [e.name],
+            )
+          : [];
+      return walk(dir).filter(
+        (n) =>
+          !n.startsWith('.') &&
+          !n.endsWith('._S3rver_metadata.json') &&
+          !n.endsWith('._S3rver_object.md5'),
+      );
+    };
+    const before = objects().length;
+    await sql`create function refuse_attachment() returns trigger language plpgsql as $$
+      begin raise exception 'simulated database failure'; end $$`.execute(ctx.db);
+    await sql`create trigger refuse_attachment before insert on attachments for each row execute function refuse_attachment()`.execute(
+      ctx.db,
+    );
+    try {
+      const res = await upload(ctx, revisionId, PDF, 'a.pdf');
+      expect(res.status).toBe(500);
+    } finally {
+      await sql`drop trigger refuse_attachment on attachments`.execute(ctx.db);
+      await sql`drop function refuse_attachment()`.execute(ctx.db);
+    }
+    expect(await ctx.db.selectFrom('attachments').selectAll().execute()).toHaveLength(0);
+    expect(objects().length).toBe(before);
+    // And a good upload afterwards does add one object.
+    expect((await upload(ctx, revisionId, PDF, 'a.pdf')).status).toBe(201);
+    expect(objects().length).toBeGreaterThan(before);
   });
 
   it('answers 500 with a clear reason when stored bytes no longer match their SHA-256', async () => {
