@@ -151,11 +151,8 @@ describe.skipIf(skipReason !== null)('the workbench in a real browser', () => {
   it('checker approves', async () => {
     const { page } = browser;
     await as(browser, baseUrl, 'checker');
-    await page
-      .getByRole('link', { name: new RegExp(title.slice(0, 10)) })
-      .first()
-      .waitFor()
-      .catch(() => undefined);
+    // The revision waits in the checker's queue.
+    await page.locator(`[data-queue="check"] a[href^="${sheetUrl}"]`).waitFor();
     await page.goto(baseUrl + sheetUrl);
     await page.getByRole('button', { name: 'Approve' }).click();
     const dialog = page.getByRole('dialog', { name: /^Approve revision A/ });

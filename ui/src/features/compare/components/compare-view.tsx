@@ -153,7 +153,8 @@ export function CompareView({ data }: { data: Compare }) {
                   <Table.Td
                     ff="monospace"
                     ta="right"
-                    c={r.delta && r.delta < 0 ? 'fail.8' : 'pass.9'}
+                    fw={r.deltaPct !== null && Math.abs(r.deltaPct) >= 1 ? 700 : 400}
+                    bg={r.deltaPct !== null && Math.abs(r.deltaPct) >= 1 ? 'amber.0' : undefined}
                   >
                     {r.deltaPct === null
                       ? '—'
