@@ -117,8 +117,12 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
             )}
             {g.discStacks.length > 0 && (
               <View>
-                <Heading>Disc-spring stacks</Heading>
-                {g.discStacks.map((st) => (
+                {/* The heading travels with the first stack: never alone at a page foot. */}
+                <View wrap={false}>
+                  <Heading>Disc-spring stacks</Heading>
+                  <DiscStack stack={g.discStacks[0]} system={system} />
+                </View>
+                {g.discStacks.slice(1).map((st) => (
                   <DiscStack key={st.name} stack={st} system={system} />
                 ))}
               </View>
