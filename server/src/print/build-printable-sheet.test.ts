@@ -17,7 +17,9 @@ describe('buildPrintableSheet', () => {
     // 12 400 N / 4.448 222 N/lbf = 2787.6 lbf
     expect(force.converted).toBe('2788 lbf');
     expect(us.inputs.find((i) => i.field.key === 'hotMetal')!.entered).toBe('Yes');
-    expect(us.inputs.find((i) => i.field.key === 'torqueReference')!.entered).toBe('Motor rated torque');
+    expect(us.inputs.find((i) => i.field.key === 'torqueReference')!.entered).toBe(
+      'Motor rated torque',
+    );
   });
 
   it('prints the history up to the printed revision only, in label order', () => {

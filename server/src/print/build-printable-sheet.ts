@@ -1,4 +1,9 @@
-import type { CriteriaSet, SheetEvaluation, SheetInputs, SheetTypeDefinition } from '@holdfast/calc';
+import type {
+  CriteriaSet,
+  SheetEvaluation,
+  SheetInputs,
+  SheetTypeDefinition,
+} from '@holdfast/calc';
 import { convertedText, enteredText } from './format.js';
 import type {
   Paper,
@@ -146,7 +151,8 @@ export function buildPrintableSheet(o: BuildPrintableOptions): PrintableSheet {
       values: o.criteriaSet.values,
     },
     designBasis: {
-      torqueReference: o.torqueReference ?? describeChoice(inputs, /torque.?(ref|basis)|reference/i),
+      torqueReference:
+        o.torqueReference ?? describeChoice(inputs, /torque.?(ref|basis)|reference/i),
       efficiencyTreatment: o.efficiencyTreatment ?? describeEfficiencies(inputs),
     },
     coreVersion: r.coreVersion ?? r.evaluation?.coreVersion ?? null,

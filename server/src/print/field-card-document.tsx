@@ -10,13 +10,27 @@ import { Frame } from './sheet-document.js';
 import { colours, s } from './theme.js';
 
 const Box = (props: { h?: number }) => (
-  <View style={{ borderWidth: 0.8, borderColor: colours.ink, height: props.h ?? 13, backgroundColor: '#ffffff' }} />
+  <View
+    style={{
+      borderWidth: 0.8,
+      borderColor: colours.ink,
+      height: props.h ?? 13,
+      backgroundColor: '#ffffff',
+    }}
+  />
 );
 
 /** Target values with empty boxes for what was measured and the setter's initials. */
-function SettingsWithBoxes(props: { items: FieldSetting[]; system: PrintUnitSystem; prefix?: string }) {
+function SettingsWithBoxes(props: {
+  items: FieldSetting[];
+  system: PrintUnitSystem;
+  prefix?: string;
+}) {
   const label = (f: FieldSetting) => {
-    const text = props.prefix && f.label.startsWith(props.prefix) ? f.label.slice(props.prefix.length).replace(/^[\s:—-]+/, '') : f.label;
+    const text =
+      props.prefix && f.label.startsWith(props.prefix)
+        ? f.label.slice(props.prefix.length).replace(/^[\s:—-]+/, '')
+        : f.label;
     const shown = text.charAt(0).toUpperCase() + text.slice(1);
     return f.note ? `${shown} — ${f.note}` : shown;
   };
@@ -40,23 +54,34 @@ function SettingsWithBoxes(props: { items: FieldSetting[]; system: PrintUnitSyst
 
 function DiscStack(props: { stack: DiscStackSetup; system: PrintUnitSystem }) {
   const { stack, system } = props;
-  const q = (f: FieldSetting | null) => (f ? qty(f.value, f.dimension, system, f.dimension === 'angle' ? 3 : 4) : 'see sheet');
+  const q = (f: FieldSetting | null) =>
+    f ? qty(f.value, f.dimension, system, f.dimension === 'angle' ? 3 : 4) : 'see sheet';
   return (
     <View wrap={false} style={{ marginBottom: 6 }}>
       <Text style={{ fontWeight: 700 }}>{stack.name}</Text>
-      <Text>1. Tighten the nut until the disc-spring stack is just flat (solid); do not overtighten.</Text>
       <Text>
-        2. Back off the nut by <Text style={{ fontWeight: 700 }}>{q(stack.backOff)}</Text> and lock it.
+        1. Tighten the nut until the disc-spring stack is just flat (solid); do not overtighten.
       </Text>
       <Text>
-        3. The stack then carries a preload of about <Text style={{ fontWeight: 700 }}>{q(stack.preload)}</Text>.
+        2. Back off the nut by <Text style={{ fontWeight: 700 }}>{q(stack.backOff)}</Text> and lock
+        it.
       </Text>
-      {stack.others.length > 0 && <SettingsWithBoxes items={stack.others} system={system} prefix={stack.name} />}
+      <Text>
+        3. The stack then carries a preload of about{' '}
+        <Text style={{ fontWeight: 700 }}>{q(stack.preload)}</Text>.
+      </Text>
+      {stack.others.length > 0 && (
+        <SettingsWithBoxes items={stack.others} system={system} prefix={stack.name} />
+      )}
       <View style={{ flexDirection: 'row', marginTop: 3, alignItems: 'center' }}>
         <Text style={{ width: 150 }}>Back-off applied (measured):</Text>
-        <View style={{ width: 80 }}><Box /></View>
+        <View style={{ width: 80 }}>
+          <Box />
+        </View>
         <Text style={{ width: 60, marginLeft: 10 }}>Initials:</Text>
-        <View style={{ width: 44 }}><Box /></View>
+        <View style={{ width: 44 }}>
+          <Box />
+        </View>
       </View>
     </View>
   );
@@ -77,15 +102,19 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
   const ev = sheet.evaluation;
   const g = ev ? groupFieldSettings(ev) : null;
   return (
-    <Document title={`${sheet.documentNumber} rev ${sheet.revision.label} — field setting card`} creator="Holdfast" producer="Holdfast">
+    <Document
+      title={`${sheet.documentNumber} rev ${sheet.revision.label} — field setting card`}
+      creator="Holdfast"
+      producer="Holdfast"
+    >
       <Page size={sheet.paper} style={s.page}>
         <Frame sheet={sheet} qr={qr} kind="Field setting card" />
         <Text style={{ marginBottom: 2 }}>
           Settings for {sheet.position.tag} {sheet.position.description} on {sheet.equipment.tag}{' '}
-          {sheet.equipment.name}, from calculation {sheet.documentNumber} rev {sheet.revision.label}.
-          Check the revision is current with the verification code before you start.
+          {sheet.equipment.name}, from calculation {sheet.documentNumber} rev {sheet.revision.label}
+          . Check the revision is current with the verification code before you start.
         </Text>
-        <Caution extra={["Do not lift the brake or move its arms by the thruster push rod."]} />
+        <Caution extra={['Do not lift the brake or move its arms by the thruster push rod.']} />
         {!g ? (
           <Text>This revision has no evaluation, so there are no settings to print.</Text>
         ) : (
@@ -93,7 +122,9 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
             {(g.spring.length > 0 || g.springTables.length > 0) && (
               <View>
                 <Heading>
-                  {g.spring.some((f) => /clamp/i.test(f.key)) ? 'Clamp force setting' : 'Main spring setting'}
+                  {g.spring.some((f) => /clamp/i.test(f.key))
+                    ? 'Clamp force setting'
+                    : 'Main spring setting'}
                 </Heading>
                 <SettingsWithBoxes items={g.spring} system={system} />
                 {g.springTables.map((t) => (
@@ -110,8 +141,8 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
                 </Heading>
                 <SettingsWithBoxes items={[...g.thruster, ...g.clearance]} system={system} />
                 <Text style={{ fontSize: 7.5 }}>
-                  Lining wear uses up the reserve: re-adjust before it falls below the minimum given,
-                  or the brake loses torque.
+                  Lining wear uses up the reserve: re-adjust before it falls below the minimum
+                  given, or the brake loses torque.
                 </Text>
               </View>
             )}
@@ -142,7 +173,16 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
           <Heading>After setting</Heading>
           {AFTER_SETTING.map((line) => (
             <View key={line} style={{ flexDirection: 'row', marginBottom: 2 }}>
-              <View style={{ width: 8, height: 8, borderWidth: 0.8, borderColor: colours.ink, marginRight: 6, marginTop: 1 }} />
+              <View
+                style={{
+                  width: 8,
+                  height: 8,
+                  borderWidth: 0.8,
+                  borderColor: colours.ink,
+                  marginRight: 6,
+                  marginTop: 1,
+                }}
+              />
               <Text style={{ flex: 1 }}>{line}</Text>
             </View>
           ))}
@@ -156,7 +196,12 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
               { title: 'Signature', flex: 2 },
               { title: 'Date', flex: 1.2 },
             ]}
-            rows={['Set by', 'Checked by'].map((role) => [role, <Box key="n" h={18} />, <Box key="s" h={18} />, <Box key="d" h={18} />])}
+            rows={['Set by', 'Checked by'].map((role) => [
+              role,
+              <Box key="n" h={18} />,
+              <Box key="s" h={18} />,
+              <Box key="d" h={18} />,
+            ])}
           />
           <Text style={{ fontSize: 7 }}>Remarks:</Text>
           <Box h={40} />

@@ -19,8 +19,10 @@ export interface FieldCardGroups {
 
 const text = (f: FieldSetting) => `${f.key} ${f.label}`;
 const isDisc = (f: FieldSetting) => /disc|stack|back.?off|belleville|preload/i.test(text(f));
-const isSpring = (f: FieldSetting) => /spring|clamp|torque.?mark|scale/i.test(text(f)) && !isDisc(f);
-const isThruster = (f: FieldSetting) => /thruster|magnet|stroke|reserve|re-?adjust|wear/i.test(text(f));
+const isSpring = (f: FieldSetting) =>
+  /spring|clamp|torque.?mark|scale/i.test(text(f)) && !isDisc(f);
+const isThruster = (f: FieldSetting) =>
+  /thruster|magnet|stroke|reserve|re-?adjust|wear/i.test(text(f));
 const isClearance = (f: FieldSetting) => /clearance|gap|lift.?off/i.test(text(f));
 
 /** The stack a disc-spring setting belongs to: key prefix before the first dot, else the label before ':' or '—'. */

@@ -39,9 +39,12 @@ export function registerPdfFonts(): void {
     Font.register({
       family,
       fonts: [400, 600, 700].map((w) => ({
-        src: fontsource('inter', `inter-${subset}-${w}-normal.woff`, `${family}-${WEIGHT_NAMES[w]}`, [
-          'GSUB',
-        ]),
+        src: fontsource(
+          'inter',
+          `inter-${subset}-${w}-normal.woff`,
+          `${family}-${WEIGHT_NAMES[w]}`,
+          ['GSUB'],
+        ),
         fontWeight: w,
       })),
     });

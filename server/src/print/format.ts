@@ -1,8 +1,19 @@
-import { toDisplay, toSI, type Dimension, type FieldDefinition, type InputValue } from '@holdfast/calc';
+import {
+  toDisplay,
+  toSI,
+  type Dimension,
+  type FieldDefinition,
+  type InputValue,
+} from '@holdfast/calc';
 import type { PrintRevisionState, PrintUnitSystem } from './printable-sheet.js';
 
 /** An SI value printed in the sheet's unit system with its unit, e.g. '1 475 lbf·ft'. */
-export function qty(valueSI: number, dimension: Dimension, system: PrintUnitSystem, digits = 4): string {
+export function qty(
+  valueSI: number,
+  dimension: Dimension,
+  system: PrintUnitSystem,
+  digits = 4,
+): string {
   if (!Number.isFinite(valueSI)) return '—';
   return toDisplay(valueSI, dimension, system, undefined, digits).text;
 }

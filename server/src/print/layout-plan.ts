@@ -18,7 +18,11 @@ export interface Block<T> {
 }
 
 /** Greedy packing of blocks into pages of `capacity` pt. */
-export function packPages<T>(blocks: Block<T>[], capacity: number, firstCapacity = capacity): Block<T>[][] {
+export function packPages<T>(
+  blocks: Block<T>[],
+  capacity: number,
+  firstCapacity = capacity,
+): Block<T>[][] {
   const pages: Block<T>[][] = [];
   let page: Block<T>[] = [];
   let used = 0;
@@ -47,9 +51,7 @@ const MONO_CHAR = 0.6;
 /** Estimated number of lines `text` wraps to in `width` pt (explicit newlines respected). */
 export function lines(text: string, width: number, fontSize: number, mono = false): number {
   const perLine = Math.max(1, Math.floor(width / (fontSize * (mono ? MONO_CHAR : SANS_CHAR))));
-  return text
-    .split('\n')
-    .reduce((n, part) => n + Math.max(1, Math.ceil(part.length / perLine)), 0);
+  return text.split('\n').reduce((n, part) => n + Math.max(1, Math.ceil(part.length / perLine)), 0);
 }
 
 /** Line height react-pdf uses for Inter / JetBrains Mono at `fontSize` (font metrics, no lineHeight). */

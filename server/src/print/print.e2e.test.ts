@@ -27,7 +27,9 @@ describe('print endpoints', () => {
     expect(draft.headers.get('content-type')).toContain('application/pdf');
     expect(draft.text.startsWith('%PDF-')).toBe(true);
     // A viewer reads approved revisions only.
-    expect((await ctx.request('GET', `/api/revisions/${draftId}/pdf`, { as: 'viewer' })).status).toBe(403);
+    expect(
+      (await ctx.request('GET', `/api/revisions/${draftId}/pdf`, { as: 'viewer' })).status,
+    ).toBe(403);
 
     const a = await submit(ctx, draftId);
     await approve(ctx, a.id);
@@ -39,9 +41,13 @@ describe('print endpoints', () => {
     }
     const bad = await ctx.request('GET', `/api/revisions/${a.id}/pdf?paper=B5`, { as: 'viewer' });
     expect(bad.status).toBe(400);
-    const missing = await ctx.request('GET', '/api/revisions/00000000-0000-4000-8000-000000000000/pdf', {
-      as: 'viewer',
-    });
+    const missing = await ctx.request(
+      'GET',
+      '/api/revisions/00000000-0000-4000-8000-000000000000/pdf',
+      {
+        as: 'viewer',
+      },
+    );
     expect(missing.status).toBe(404);
     expect((await ctx.request('GET', `/api/revisions/${a.id}/pdf`)).status).toBe(401);
   }, 300_000);

@@ -39,16 +39,24 @@ export class PrintService implements OnModuleInit {
     void warmUpPdfRenderer().catch(() => undefined);
   }
 
-  async print(user: AuthUser, id: string, kind: PrintKind, query: PrintQuery): Promise<PrintedFile> {
+  async print(
+    user: AuthUser,
+    id: string,
+    kind: PrintKind,
+    query: PrintQuery,
+  ): Promise<PrintedFile> {
     const revision = await this.revisions.get(user, id);
     const frozen = revision.state === 'approved' || revision.state === 'superseded';
-    const key = [kind, id, revision.state, revision.supersededBy?.label ?? '', query.paper].join('|');
+    const key = [kind, id, revision.state, revision.supersededBy?.label ?? '', query.paper].join(
+      '|',
+    );
     const fileName = `${revision.documentNumber}-rev-${revision.label}${kind === 'field-card' ? '-field-card' : ''}.pdf`;
     const hit = frozen ? this.cache.get(key) : undefined;
     if (hit) return { bytes: hit, fileName };
 
     const sheetType = getSheetType(revision.sheetType);
-    if (!sheetType) throw new NotFoundException(`Sheet type ${revision.sheetType} is not known to this server.`);
+    if (!sheetType)
+      throw new NotFoundException(`Sheet type ${revision.sheetType} is not known to this server.`);
     const [sheet, criteriaSet] = await Promise.all([
       this.sheets.detail(revision.sheetId),
       this.criteria.load(revision.criteriaSetId, revision.criteriaSetVersion),
@@ -61,7 +69,8 @@ export class PrintService implements OnModuleInit {
       verifyBaseUrl: this.config.settings.PUBLIC_URL,
       paper: query.paper,
     });
-    const bytes = kind === 'sheet' ? await renderSheetPdf(printable) : await renderFieldCardPdf(printable);
+    const bytes =
+      kind === 'sheet' ? await renderSheetPdf(printable) : await renderFieldCardPdf(printable);
     if (frozen) {
       if (this.cache.size >= CACHE_SIZE) this.cache.delete(this.cache.keys().next().value!);
       this.cache.set(key, bytes);

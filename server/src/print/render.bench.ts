@@ -10,15 +10,27 @@ const small = hoistPrintable({ state: 'approved' });
 const opts = { iterations: 8, warmupIterations: 2, time: 0 };
 
 describe('PDF', () => {
-  bench('calculation sheet, approved hoist (calc defaults, 95 steps), A4', async () => {
-    await renderSheetPdf(hoist);
-  }, opts);
+  bench(
+    'calculation sheet, approved hoist (calc defaults, 95 steps), A4',
+    async () => {
+      await renderSheetPdf(hoist);
+    },
+    opts,
+  );
 
-  bench('calculation sheet, 6-page fixture, A4', async () => {
-    await renderSheetPdf(small);
-  }, opts);
+  bench(
+    'calculation sheet, 6-page fixture, A4',
+    async () => {
+      await renderSheetPdf(small);
+    },
+    opts,
+  );
 
-  bench('field setting card, approved hoist, A4', async () => {
-    await renderFieldCardPdf(hoist);
-  }, opts);
+  bench(
+    'field setting card, approved hoist, A4',
+    async () => {
+      await renderFieldCardPdf(hoist);
+    },
+    opts,
+  );
 });

@@ -37,8 +37,16 @@ export async function warmUpPdfRenderer(): Promise<void> {
       createElement(Text, { style: { fontFamily: SANS, fontWeight: 700 } }, 'Holdfast ≤ ≥ √ Δ μ'),
       createElement(Text, { style: { fontFamily: SANS, fontWeight: 600 } }, 'Holdfast ĉ'),
       createElement(Text, { style: { fontFamily: SANS } }, 'Holdfast ĉ μ ≤'),
-      createElement(Text, { style: { fontFamily: MONO, fontFeatureSettings: { calt: false } } }, 'T = μ ≤ ĉ'),
-      createElement(Text, { style: { fontFamily: MONO, fontWeight: 700, fontFeatureSettings: { calt: false } } }, 'T'),
+      createElement(
+        Text,
+        { style: { fontFamily: MONO, fontFeatureSettings: { calt: false } } },
+        'T = μ ≤ ĉ',
+      ),
+      createElement(
+        Text,
+        { style: { fontFamily: MONO, fontWeight: 700, fontFeatureSettings: { calt: false } } },
+        'T',
+      ),
     ),
   );
   await renderToBuffer(doc as never);

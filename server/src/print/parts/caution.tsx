@@ -2,7 +2,7 @@ import { Text, View } from '@react-pdf/renderer';
 import { colours } from '../theme.js';
 
 export const CAUTION_LINES = [
-  "These results support, and never replace, the judgement of a competent engineer.",
+  'These results support, and never replace, the judgement of a competent engineer.',
   "The governing standard, the brake maker's data and local codes decide where they differ from this sheet.",
   'Work on a brake only with the load lowered to the ground or positively secured, and the drive isolated and locked out.',
   'Spring force is stored energy: release it with the adjusting means provided; never knock out pins or cut rods under load.',

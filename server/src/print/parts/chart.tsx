@@ -12,7 +12,12 @@ const M = { left: 46, right: 12, top: 10, bottom: 30 };
 export const CHART_BLOCK = 180 + 12 + 12 + 8;
 
 /** A chart drawn as vector graphics: axes with ticks, series, set points and reference lines. */
-export function Chart(props: { chart: ChartData; system: PrintUnitSystem; width: number; height?: number }) {
+export function Chart(props: {
+  chart: ChartData;
+  system: PrintUnitSystem;
+  width: number;
+  height?: number;
+}) {
   const { chart, system, width } = props;
   const height = props.height ?? 180;
   const cx = (v: number) => toDisplay(v, chart.xDimension, system).value;
@@ -25,8 +30,16 @@ export function Chart(props: { chart: ChartData; system: PrintUnitSystem; width:
     ...r,
     v: r.axis === 'x' ? cx(r.value) : cy(r.value),
   }));
-  const xs = [...series.flat().map((p) => p.x), ...markers.map((m) => m.x), ...refs.filter((r) => r.axis === 'x').map((r) => r.v)];
-  const ys = [...series.flat().map((p) => p.y), ...markers.map((m) => m.y), ...refs.filter((r) => r.axis === 'y').map((r) => r.v)];
+  const xs = [
+    ...series.flat().map((p) => p.x),
+    ...markers.map((m) => m.x),
+    ...refs.filter((r) => r.axis === 'x').map((r) => r.v),
+  ];
+  const ys = [
+    ...series.flat().map((p) => p.y),
+    ...markers.map((m) => m.y),
+    ...refs.filter((r) => r.axis === 'y').map((r) => r.v),
+  ];
   const xt = niceTicks(Math.min(...xs), Math.max(...xs));
   const yt = niceTicks(Math.min(0, ...ys), Math.max(...ys));
   const pw = width - M.left - M.right;
@@ -40,7 +53,14 @@ export function Chart(props: { chart: ChartData; system: PrintUnitSystem; width:
       <Svg width={width} height={height}>
         {yt.ticks.map((t) => (
           <G key={`y${t}`}>
-            <Line x1={M.left} x2={M.left + pw} y1={sy(t)} y2={sy(t)} stroke={colours.rule} strokeWidth={0.4} />
+            <Line
+              x1={M.left}
+              x2={M.left + pw}
+              y1={sy(t)}
+              y2={sy(t)}
+              stroke={colours.rule}
+              strokeWidth={0.4}
+            />
             <Text {...font} x={M.left - 4} y={sy(t) + 2} textAnchor="end">
               {tickLabel(t, yt.step)}
             </Text>
@@ -48,25 +68,68 @@ export function Chart(props: { chart: ChartData; system: PrintUnitSystem; width:
         ))}
         {xt.ticks.map((t) => (
           <G key={`x${t}`}>
-            <Line x1={sx(t)} x2={sx(t)} y1={M.top + ph} y2={M.top + ph + 3} stroke={colours.ink} strokeWidth={0.6} />
+            <Line
+              x1={sx(t)}
+              x2={sx(t)}
+              y1={M.top + ph}
+              y2={M.top + ph + 3}
+              stroke={colours.ink}
+              strokeWidth={0.6}
+            />
             <Text {...font} x={sx(t)} y={M.top + ph + 11} textAnchor="middle">
               {tickLabel(t, xt.step)}
             </Text>
           </G>
         ))}
-        <Line x1={M.left} x2={M.left} y1={M.top} y2={M.top + ph} stroke={colours.ink} strokeWidth={0.8} />
-        <Line x1={M.left} x2={M.left + pw} y1={M.top + ph} y2={M.top + ph} stroke={colours.ink} strokeWidth={0.8} />
+        <Line
+          x1={M.left}
+          x2={M.left}
+          y1={M.top}
+          y2={M.top + ph}
+          stroke={colours.ink}
+          strokeWidth={0.8}
+        />
+        <Line
+          x1={M.left}
+          x2={M.left + pw}
+          y1={M.top + ph}
+          y2={M.top + ph}
+          stroke={colours.ink}
+          strokeWidth={0.8}
+        />
         {refs.map((r) =>
           r.axis === 'y' ? (
             <G key={`r${r.label}`}>
-              <Line x1={M.left} x2={M.left + pw} y1={sy(r.v)} y2={sy(r.v)} stroke={colours.fail} strokeWidth={0.8} strokeDasharray="4 2" />
-              <Text {...font} fill={colours.fail} x={M.left + pw - 2} y={sy(r.v) - 2} textAnchor="end">
+              <Line
+                x1={M.left}
+                x2={M.left + pw}
+                y1={sy(r.v)}
+                y2={sy(r.v)}
+                stroke={colours.fail}
+                strokeWidth={0.8}
+                strokeDasharray="4 2"
+              />
+              <Text
+                {...font}
+                fill={colours.fail}
+                x={M.left + pw - 2}
+                y={sy(r.v) - 2}
+                textAnchor="end"
+              >
                 {r.label}
               </Text>
             </G>
           ) : (
             <G key={`r${r.label}`}>
-              <Line x1={sx(r.v)} x2={sx(r.v)} y1={M.top} y2={M.top + ph} stroke={colours.fail} strokeWidth={0.8} strokeDasharray="4 2" />
+              <Line
+                x1={sx(r.v)}
+                x2={sx(r.v)}
+                y1={M.top}
+                y2={M.top + ph}
+                stroke={colours.fail}
+                strokeWidth={0.8}
+                strokeDasharray="4 2"
+              />
               <Text
                 {...font}
                 fill={colours.fail}
@@ -105,8 +168,18 @@ export function Chart(props: { chart: ChartData; system: PrintUnitSystem; width:
           y: {yUnit ? `${chart.yLabel} (${yUnit})` : chart.yLabel}
         </Text>
         {chart.series.map((s, i) => (
-          <View key={s.name} style={{ flexDirection: 'row', alignItems: 'center', marginRight: 10 }}>
-            <View style={{ width: 12, height: 2, backgroundColor: seriesColours[i % seriesColours.length], marginRight: 3 }} />
+          <View
+            key={s.name}
+            style={{ flexDirection: 'row', alignItems: 'center', marginRight: 10 }}
+          >
+            <View
+              style={{
+                width: 12,
+                height: 2,
+                backgroundColor: seriesColours[i % seriesColours.length],
+                marginRight: 3,
+              }}
+            />
             <Text>{s.name}</Text>
           </View>
         ))}

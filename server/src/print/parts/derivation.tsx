@@ -26,7 +26,12 @@ function Step(props: { step: DerivationStep; n: string; sheet: PrintableSheet })
   return (
     <View
       wrap={false}
-      style={{ flexDirection: 'row', borderBottomWidth: 0.4, borderColor: colours.rule, paddingVertical: 3 }}
+      style={{
+        flexDirection: 'row',
+        borderBottomWidth: 0.4,
+        borderColor: colours.rule,
+        paddingVertical: 3,
+      }}
     >
       <Text style={{ width: NUM_W, color: colours.muted, fontSize: 7 }}>{props.n}</Text>
       {/* One Text per line: a '\n' has no glyph in any font and would pull in Helvetica. */}
@@ -106,7 +111,8 @@ export function DerivationChunk(props: { items: DerivationItem[]; sheet: Printab
             <Heading>Derivation</Heading>
             <Text style={{ fontSize: 7, color: colours.muted, marginBottom: 2 }}>
               Each step: formula, the values put in (SI), the result
-              {sheet.unitSystem === 'US' ? ' in US units with SI in brackets' : ''}, and the reference.
+              {sheet.unitSystem === 'US' ? ' in US units with SI in brackets' : ''}, and the
+              reference.
             </Text>
           </View>
         ) : it.kind === 'heading' ? (

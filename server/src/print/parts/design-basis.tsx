@@ -42,7 +42,11 @@ export function DesignBasis(props: { sheet: PrintableSheet }) {
       />
       <KeyValue
         k="Unit system"
-        v={sheet.unitSystem === 'US' ? 'US customary (inputs kept as typed)' : 'SI (inputs kept as typed)'}
+        v={
+          sheet.unitSystem === 'US'
+            ? 'US customary (inputs kept as typed)'
+            : 'SI (inputs kept as typed)'
+        }
       />
       {c.values.length > 0 && (
         <>

@@ -9,7 +9,11 @@ import { Heading, Table, type Column } from './table.js';
 type EvalTable = SheetEvaluation['tables'][number];
 
 /** A calc table (e.g. the spring setting table) with every column in the sheet's units. */
-export function SettingTable(props: { table: EvalTable; system: PrintUnitSystem; extra?: Column[] }) {
+export function SettingTable(props: {
+  table: EvalTable;
+  system: PrintUnitSystem;
+  extra?: Column[];
+}) {
   const { table, system } = props;
   const columns: Column[] = table.columns.map((c) => {
     const unit = unitLabel(c.dimension, system);
@@ -49,7 +53,11 @@ export function FieldSettings(props: { sheet: PrintableSheet }) {
             { title: 'Value', flex: 1.2, align: 'right' },
             { title: 'Note', flex: 3 },
           ]}
-          rows={ev.fieldSettings.map((f) => [f.label, qty(f.value, f.dimension, sheet.unitSystem), f.note ?? ''])}
+          rows={ev.fieldSettings.map((f) => [
+            f.label,
+            qty(f.value, f.dimension, sheet.unitSystem),
+            f.note ?? '',
+          ])}
         />
       )}
       {ev.tables.map((t) => (
@@ -73,7 +81,9 @@ export function Justification(props: { sheet: PrintableSheet }) {
             FAIL — {c.label}: {qty(c.value, c.dimension, sheet.unitSystem)} against{' '}
             {limitText(c, sheet)} ({pct(c.utilisation)})
           </Text>
-          {c.message && c.message !== c.label && <Text style={{ color: colours.muted }}>{c.message}</Text>}
+          {c.message && c.message !== c.label && (
+            <Text style={{ color: colours.muted }}>{c.message}</Text>
+          )}
         </View>
       ))}
       <View style={{ borderLeftWidth: 2, borderColor: colours.rule, paddingLeft: 6, marginTop: 4 }}>

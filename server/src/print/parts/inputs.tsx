@@ -5,10 +5,17 @@ import { Heading, Table } from './table.js';
 /** Inputs grouped by section, as typed and in the sheet's unit system. */
 export function Inputs(props: { sheet: PrintableSheet }) {
   const { sheet } = props;
-  const sections = sheet.sections.filter((sec) => sheet.inputs.some((i) => i.field.section === sec.id));
-  const orphans = sheet.inputs.filter((i) => !sheet.sections.some((sec) => sec.id === i.field.section));
+  const sections = sheet.sections.filter((sec) =>
+    sheet.inputs.some((i) => i.field.section === sec.id),
+  );
+  const orphans = sheet.inputs.filter(
+    (i) => !sheet.sections.some((sec) => sec.id === i.field.section),
+  );
   const groups = [
-    ...sections.map((sec) => ({ title: sec.title, items: sheet.inputs.filter((i) => i.field.section === sec.id) })),
+    ...sections.map((sec) => ({
+      title: sec.title,
+      items: sheet.inputs.filter((i) => i.field.section === sec.id),
+    })),
     ...(orphans.length ? [{ title: 'Other', items: orphans }] : []),
   ];
   return (
@@ -22,7 +29,11 @@ export function Inputs(props: { sheet: PrintableSheet }) {
               { title: 'Input', flex: 3.2 },
               { title: 'Symbol', flex: 0.9, mono: true },
               { title: 'As entered', flex: 2, align: 'right' },
-              { title: sheet.unitSystem === 'US' ? 'In US units' : 'In SI units', flex: 1.4, align: 'right' },
+              {
+                title: sheet.unitSystem === 'US' ? 'In US units' : 'In SI units',
+                flex: 1.4,
+                align: 'right',
+              },
             ]}
             rows={g.items.map((i) => [
               i.field.label,

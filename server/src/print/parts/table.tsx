@@ -21,14 +21,18 @@ type Cell = string | ReactNode;
 export function Table(props: { columns: Column[]; rows: Cell[][]; fontSize?: number }) {
   const { columns, rows } = props;
   const fontSize = props.fontSize ?? 7.8;
-  const box = (c: Column) =>
-    c.width !== undefined ? { width: c.width } : { flex: c.flex ?? 1 };
+  const box = (c: Column) => (c.width !== undefined ? { width: c.width } : { flex: c.flex ?? 1 });
   return (
     <View style={{ borderTopWidth: 1, borderColor: colours.ink, marginBottom: 6 }}>
       <View
         wrap={false}
         minPresenceAhead={36}
-        style={{ flexDirection: 'row', backgroundColor: colours.band, borderBottomWidth: 0.6, borderColor: colours.ink }}
+        style={{
+          flexDirection: 'row',
+          backgroundColor: colours.band,
+          borderBottomWidth: 0.6,
+          borderColor: colours.ink,
+        }}
       >
         {columns.map((c, i) => (
           <Text
@@ -85,7 +89,13 @@ export function Heading(props: { children: ReactNode; level?: 1 | 2; id?: string
       minPresenceAhead={60}
       style={
         level === 1
-          ? { fontSize: 11.5, fontWeight: 700, color: colours.accent, marginTop: 10, marginBottom: 4 }
+          ? {
+              fontSize: 11.5,
+              fontWeight: 700,
+              color: colours.accent,
+              marginTop: 10,
+              marginBottom: 4,
+            }
           : { fontSize: 9, fontWeight: 700, marginTop: 6, marginBottom: 3 }
       }
     >

@@ -1,6 +1,11 @@
 /** Round axis ticks covering [lo, hi]: 1, 2 or 5 × 10^n steps, about `count` of them. */
-export function niceTicks(lo: number, hi: number, count = 6): { min: number; max: number; step: number; ticks: number[] } {
-  if (!Number.isFinite(lo) || !Number.isFinite(hi)) return { min: 0, max: 1, step: 0.2, ticks: [0, 0.2, 0.4, 0.6, 0.8, 1] };
+export function niceTicks(
+  lo: number,
+  hi: number,
+  count = 6,
+): { min: number; max: number; step: number; ticks: number[] } {
+  if (!Number.isFinite(lo) || !Number.isFinite(hi))
+    return { min: 0, max: 1, step: 0.2, ticks: [0, 0.2, 0.4, 0.6, 0.8, 1] };
   if (hi - lo < 1e-12 * Math.max(1, Math.abs(hi))) {
     const pad = Math.abs(hi) > 0 ? Math.abs(hi) * 0.1 : 1;
     lo -= pad;

@@ -4,7 +4,12 @@ import type { PrintableSheet } from '../printable-sheet.js';
 import { colours, monoFont } from '../theme.js';
 
 const cell = { paddingVertical: 3, paddingHorizontal: 5 } as const;
-const label = { fontSize: 6, color: colours.muted, textTransform: 'uppercase', letterSpacing: 0.4 } as const;
+const label = {
+  fontSize: 6,
+  color: colours.muted,
+  textTransform: 'uppercase',
+  letterSpacing: 0.4,
+} as const;
 
 /** The date a printout stands for: approval, else submission, else creation. */
 export function revisionDate(sheet: PrintableSheet): string {
@@ -47,7 +52,13 @@ export function TitleBlock(props: { sheet: PrintableSheet; kind: string; qr: str
         </View>
       </View>
       <View
-        style={{ ...cell, width: 112, borderLeftWidth: 1, borderColor: colours.ink, flexDirection: 'row' }}
+        style={{
+          ...cell,
+          width: 112,
+          borderLeftWidth: 1,
+          borderColor: colours.ink,
+          flexDirection: 'row',
+        }}
       >
         {sheet.verification && qr ? (
           <>

@@ -8,7 +8,12 @@ import {
   type SheetInputs,
 } from '@holdfast/calc';
 import { buildPrintableSheet, type RevisionLike } from '../build-printable-sheet.js';
-import type { Paper, PrintableSheet, PrintRevisionState, PrintUnitSystem } from '../printable-sheet.js';
+import type {
+  Paper,
+  PrintableSheet,
+  PrintRevisionState,
+  PrintUnitSystem,
+} from '../printable-sheet.js';
 
 /** The shipped criteria set a sheet type is normally checked against. */
 export function criteriaFor(sheetTypeId: string): CriteriaSet {
