@@ -1,4 +1,4 @@
-import type { ReactNode } from 'react';
+import { useState, type ReactNode } from 'react';
 import {
   Alert,
   Box,
@@ -52,7 +52,10 @@ export function RevisionWorkbench(props: RevisionWorkbenchProps) {
   const draft = useRevisionDraft(revision, sheetType);
   const { content, autosave, editable } = draft;
   const live = useLiveEvaluation(sheetType, content.inputs, criteria);
-  const unitSystem = content.unitSystem as UnitSystem;
+  // A frozen revision keeps its stored units; a reader may still view the results in the other system.
+  const [viewSystem, setViewSystem] = useState<UnitSystem | null>(null);
+  const storedSystem = content.unitSystem as UnitSystem;
+  const unitSystem = editable ? storedSystem : (viewSystem ?? storedSystem);
 
   // Frozen revisions show the evaluation the server stored at submission: that is the record.
   const stored = !editable && revision.evaluation ? revision.evaluation : null;
@@ -69,8 +72,9 @@ export function RevisionWorkbench(props: RevisionWorkbenchProps) {
               size="xs"
               aria-label="Units for this sheet"
               value={unitSystem}
-              onChange={(v) => (editable ? draft.setUnitSystem(v as UnitSystem) : undefined)}
-              disabled={!editable}
+              onChange={(v) =>
+                editable ? draft.setUnitSystem(v as UnitSystem) : setViewSystem(v as UnitSystem)
+              }
               data={[
                 { value: 'SI', label: 'SI units' },
                 { value: 'US', label: 'US customary' },
