@@ -15,6 +15,8 @@ import { useApproveRevision } from '../../../features/revisions/api/approve-revi
 import { usePrintRevision, type PrintKind } from '../../../features/revisions/api/print-revision';
 import { useReturnRevision } from '../../../features/revisions/api/return-revision';
 import { useSubmitRevision } from '../../../features/revisions/api/submit-revision';
+import { useDriftRevision } from '../../../features/revisions/api/drift-revision';
+import { DriftDialog } from '../../../features/revisions/components/drift-dialog';
 import type { WorkbenchContext } from '../../../features/revisions/components/revision-workbench';
 import { ApproveDialog } from '../../../features/review/components/approve-dialog';
 import { ReturnDialog } from '../../../features/review/components/return-dialog';
@@ -28,13 +30,14 @@ export interface RevisionActionsProps {
 
 /** Only what the server says this user may do with this revision in its state, plus printing. */
 export function RevisionActions({ revision, ctx, openComments }: RevisionActionsProps) {
-  const [dialog, setDialog] = useState<'submit' | 'approve' | 'return' | null>(null);
+  const [dialog, setDialog] = useState<'submit' | 'approve' | 'return' | 'drift' | null>(null);
   const [failing, setFailing] = useState<CheckResult[]>([]);
   const [rowVersion, setRowVersion] = useState(revision.rowVersion);
   const submit = useSubmitRevision(revision.id);
   const approve = useApproveRevision(revision.id);
   const ret = useReturnRevision(revision.id);
   const print = usePrintRevision(revision.id);
+  const drift = useDriftRevision(revision.id);
   const close = () => setDialog(null);
 
   const openSubmit = async () => {
@@ -115,8 +118,28 @@ export function RevisionActions({ revision, ctx, openComments }: RevisionActions
           </Menu.Label>
           <Menu.Item onClick={() => doPrint('pdf')}>Calculation sheet (PDF)</Menu.Item>
           <Menu.Item onClick={() => doPrint('field-card')}>Field setting card (PDF)</Menu.Item>
+          {revision.state === 'approved' || revision.state === 'superseded' ? (
+            <>
+              <Menu.Divider />
+              <Menu.Item
+                onClick={() => {
+                  setDialog('drift');
+                  drift.mutate();
+                }}
+              >
+                Recalculate with today’s core
+              </Menu.Item>
+            </>
+          ) : null}
         </Menu.Dropdown>
       </Menu>
+      <DriftDialog
+        opened={dialog === 'drift'}
+        onClose={close}
+        report={drift.data}
+        pending={drift.isPending}
+        error={drift.error}
+      />
       <SubmitDialog
         opened={dialog === 'submit'}
         onClose={close}
