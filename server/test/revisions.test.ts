@@ -199,8 +199,14 @@ describe('revisions: server-side evaluation, validation, justification, audit', 
     });
     await submit(ctx, id);
     await approve(ctx, id, 'checker2');
-    const audit = await ctx.request('GET', `/api/sheets/${sheet.id}/audit`, { as: 'viewer' });
+    const audit = await ctx.request('GET', `/api/sheets/${sheet.id}/audit`, { as: 'engineer' });
     expect(audit.status).toBe(200);
+    const forViewer = await ctx.request('GET', `/api/sheets/${sheet.id}/audit`, { as: 'viewer' });
+    expect(forViewer.status).toBe(200);
+    const viewerItems = forViewer.body.items as { before: any; after: any }[];
+    expect(viewerItems[1].after.inputs).toBeUndefined();
+    expect(viewerItems[1].after.unitSystem).toBeUndefined();
+    expect(viewerItems[5].after.state).toBe('approved');
     const items = audit.body.items as {
       action: string;
       actor: { displayName: string };

@@ -77,7 +77,10 @@ export class SheetsController {
 
   @Get(':id/audit')
   @SignedIn()
-  audit(@Param('id', UuidParamPipe) id: string): Promise<AuditList> {
-    return this.sheets.auditTrail(id);
+  audit(
+    @CurrentUser() user: AuthUser,
+    @Param('id', UuidParamPipe) id: string,
+  ): Promise<AuditList> {
+    return this.sheets.auditTrail(user, id);
   }
 }

@@ -249,13 +249,32 @@ export class SheetsService {
     };
   }
 
-  async auditTrail(sheetId: string) {
+  /**
+   * Viewers may read who did what and when, but not the draft content that saves carry
+   * (they only ever see approved revisions), so their copy keeps state and label alone.
+   */
+  async auditTrail(user: AuthUser, sheetId: string) {
     const exists = await this.db
       .selectFrom('sheets')
       .select('id')
       .where('id', '=', sheetId)
       .executeTakeFirst();
     if (!exists) throw notFound('Sheet not found.');
-    return { items: await this.audit.forSheet(sheetId) };
+    const items = await this.audit.forSheet(sheetId);
+    if (user.role !== 'viewer') return { items };
+    return {
+      items: items.map((e) => ({ ...e, before: pickPublic(e.before), after: pickPublic(e.after) })),
+    };
   }
+}
+
+const publicAuditKeys = ['state', 'label'];
+
+function pickPublic(value: unknown): unknown {
+  if (!value || typeof value !== 'object') return value ?? null;
+  const out: Record<string, unknown> = {};
+  for (const key of publicAuditKeys) {
+    if (key in value) out[key] = (value as Record<string, unknown>)[key];
+  }
+  return out;
 }
