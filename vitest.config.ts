@@ -11,6 +11,7 @@ export default defineConfig({
       'ui/vitest.config.ts',
       'ui/vitest.browser.config.ts',
       'verification',
+      'scripts',
     ],
   },
 });
