@@ -53,7 +53,9 @@ describe('the private PostgreSQL cluster', () => {
     const c = cluster as any;
     await c.ensureDatabase('idempotent_db');
     await c.ensureDatabase('idempotent_db');
-    const { out } = await c.psql("SELECT count(*) FROM pg_database WHERE datname = 'idempotent_db'");
+    const { out } = await c.psql(
+      "SELECT count(*) FROM pg_database WHERE datname = 'idempotent_db'",
+    );
     expect(out.trim()).toBe('1');
 
     const again = Date.now();
@@ -69,7 +71,12 @@ describe('the private PostgreSQL cluster', () => {
     const pidFile = path.join(c.dataDir, 'postmaster.pid');
     // A pid that is certainly not a running postgres: this test process's parent is node, not postgres.
     writeFileSync(pidFile, `${process.pid}\n${c.dataDir}\n`);
-    const restarted = await startCluster({ projectDir, name: clusterName, port: c.port, durable: false });
+    const restarted = await startCluster({
+      projectDir,
+      name: clusterName,
+      port: c.port,
+      durable: false,
+    });
     expect(existsSync(pidFile)).toBe(true);
     expect((await (restarted as any).psql('SELECT 1')).out.trim()).toBe('1');
   });
