@@ -6,8 +6,16 @@ import reactHooks from 'eslint-plugin-react-hooks';
 
 // Dependency direction is one way: calc ← shared ← {server, ui}; db ← server; ui never imports server or db.
 const zones = [
-  { target: './calc', from: ['./shared', './db', './server', './ui'], message: 'calc is the pure core: it imports no other workspace.' },
-  { target: './shared', from: ['./db', './server', './ui'], message: 'shared depends on calc only.' },
+  {
+    target: './calc',
+    from: ['./shared', './db', './server', './ui'],
+    message: 'calc is the pure core: it imports no other workspace.',
+  },
+  {
+    target: './shared',
+    from: ['./db', './server', './ui'],
+    message: 'shared depends on calc only.',
+  },
   { target: './db', from: ['./server', './ui'], message: 'db must not import server or ui.' },
   { target: './ui', from: ['./server', './db'], message: 'ui never imports server or db.' },
   { target: './server', from: ['./ui'], message: 'server must not import ui.' },
@@ -29,7 +37,10 @@ export default tseslint.config(
     languageOptions: { globals: { ...globals.node, ...globals.browser } },
     rules: {
       'import-x/no-restricted-paths': ['error', { zones }],
-      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_', caughtErrors: 'none' }],
+      '@typescript-eslint/no-unused-vars': [
+        'error',
+        { argsIgnorePattern: '^_', varsIgnorePattern: '^_', caughtErrors: 'none' },
+      ],
       '@typescript-eslint/no-explicit-any': 'off',
       '@typescript-eslint/no-empty-object-type': 'off',
       'no-empty': ['error', { allowEmptyCatch: true }],
@@ -43,7 +54,10 @@ export default tseslint.config(
   ...Object.entries(packageBans).map(([ws, banned]) => ({
     files: [`${ws}/**/*.{ts,tsx,js,mjs}`],
     rules: {
-      'no-restricted-imports': ['error', { paths: banned.map((name) => ({ name, message: `${ws} must not depend on ${name}.` })) }],
+      'no-restricted-imports': [
+        'error',
+        { paths: banned.map((name) => ({ name, message: `${ws} must not depend on ${name}.` })) },
+      ],
     },
   })),
 );

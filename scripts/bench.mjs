@@ -8,5 +8,8 @@ import { buildAll } from './lib/build.mjs';
 const projectDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 await ensureNpmDependencies(projectDir);
 await buildAll(projectDir);
-const r = spawnSync('npx', ['vitest', 'bench', '--run', ...process.argv.slice(2)], { cwd: projectDir, stdio: 'inherit' });
+const r = spawnSync('npx', ['vitest', 'bench', '--run', ...process.argv.slice(2)], {
+  cwd: projectDir,
+  stdio: 'inherit',
+});
 process.exit(r.status ?? 1);

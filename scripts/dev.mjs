@@ -10,16 +10,30 @@ import { step } from './lib/log.mjs';
 
 const projectDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 await ensureNpmDependencies(projectDir);
-const cluster = await startCluster({ projectDir, name: 'pg', port: Number(process.env.PGPORT ?? 54320), durable: true });
+const cluster = await startCluster({
+  projectDir,
+  name: 'pg',
+  port: Number(process.env.PGPORT ?? 54320),
+  durable: true,
+});
 await cluster.ensureDatabase('holdfast');
 await buildAll(projectDir);
 const databaseUrl = cluster.url('holdfast');
 await migrateAndSeed(projectDir, databaseUrl);
-const env = { ...process.env, DATABASE_URL: databaseUrl, PORT: '3000', S3_EMBEDDED: '1', MAIL_EMBEDDED: '1' };
+const env = {
+  ...process.env,
+  DATABASE_URL: databaseUrl,
+  PORT: '3000',
+  S3_EMBEDDED: '1',
+  MAIL_EMBEDDED: '1',
+};
 const children = [
   spawn('npx', ['tsc', '-b', '-w', '--preserveWatchOutput'], { cwd: projectDir, stdio: 'inherit' }),
   spawn('node', ['--watch', 'server/dist/main.js'], { cwd: projectDir, stdio: 'inherit', env }),
-  spawn('npx', ['vite', '--host', '127.0.0.1'], { cwd: path.join(projectDir, 'ui'), stdio: 'inherit' }),
+  spawn('npx', ['vite', '--host', '127.0.0.1'], {
+    cwd: path.join(projectDir, 'ui'),
+    stdio: 'inherit',
+  }),
 ];
 step('dev: UI on http://127.0.0.1:5173 (proxying /api to :3000); Ctrl-C stops everything');
 process.on('SIGINT', async () => {

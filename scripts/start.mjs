@@ -13,10 +13,13 @@ const port = Number(process.env.PORT ?? 3000);
 const pgPort = Number(process.env.PGPORT ?? 54320);
 const started = Date.now();
 
-if (!Number.isInteger(port) || port < 1 || port > 65535) fail(`PORT=${process.env.PORT} is not a port number`);
+if (!Number.isInteger(port) || port < 1 || port > 65535)
+  fail(`PORT=${process.env.PORT} is not a port number`);
 if (!(await portFree(port))) {
-  fail(`port ${port} on 127.0.0.1 is already in use (is Holdfast already running?). ` +
-    `Stop that program or start on another port: PORT=3100 npm start`);
+  fail(
+    `port ${port} on 127.0.0.1 is already in use (is Holdfast already running?). ` +
+      `Stop that program or start on another port: PORT=3100 npm start`,
+  );
 }
 
 await ensureNpmDependencies(projectDir);
@@ -55,8 +58,12 @@ server = await startAppServer(projectDir, {
   MAILDEV_WEB_PORT: process.env.MAILDEV_WEB_PORT ?? String(await freePortFrom(1080)),
   NODE_ENV: 'production',
 });
-step(`ready in ${((Date.now() - started) / 1000).toFixed(1)} s: http://127.0.0.1:${port}  (API under /api, docs at /api/docs)`);
-step('demo sign-ins (demo only): engineer@holdfast.test, checker@holdfast.test, viewer@holdfast.test, admin@holdfast.test — password holdfast-demo');
+step(
+  `ready in ${((Date.now() - started) / 1000).toFixed(1)} s: http://127.0.0.1:${port}  (API under /api, docs at /api/docs)`,
+);
+step(
+  'demo sign-ins (demo only): engineer@holdfast.test, checker@holdfast.test, viewer@holdfast.test, admin@holdfast.test — password holdfast-demo',
+);
 step('press Ctrl-C to stop');
 server.child.on('exit', async (code) => {
   if (stopping) return;

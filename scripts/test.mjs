@@ -67,17 +67,21 @@ const report = path.join(outDir, 'vitest.json');
 rmSync(report, { force: true });
 step('running every suite (vitest)…');
 const vitestCode = await new Promise((resolve) => {
-  const child = spawn('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`], {
-    cwd: projectDir,
-    stdio: 'inherit',
-    env: {
-      ...process.env,
-      DATABASE_URL: cluster.url('holdfast_test'),
-      HOLDFAST_E2E_URL: app.url,
-      HOLDFAST_TEST_OUTPUT: outDir,
-      NODE_ENV: 'test',
+  const child = spawn(
+    'npx',
+    ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`],
+    {
+      cwd: projectDir,
+      stdio: 'inherit',
+      env: {
+        ...process.env,
+        DATABASE_URL: cluster.url('holdfast_test'),
+        HOLDFAST_E2E_URL: app.url,
+        HOLDFAST_TEST_OUTPUT: outDir,
+        NODE_ENV: 'test',
+      },
     },
-  });
+  );
   child.on('close', resolve);
 });
 
@@ -91,7 +95,9 @@ if (existsSync(report)) {
   passed += r.numPassedTests;
   failed += r.numFailedTests;
   // A file that fails to load has no tests but is still a failure.
-  failed += (r.testResults ?? []).filter((f) => f.status === 'failed' && f.assertionResults.length === 0).length;
+  failed += (r.testResults ?? []).filter(
+    (f) => f.status === 'failed' && f.assertionResults.length === 0,
+  ).length;
 } else {
   failed += 1;
 }

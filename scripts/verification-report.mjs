@@ -6,7 +6,11 @@ import { fileURLToPath } from 'node:url';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
 const run = (args) => {
-  const r = spawnSync('npx', args, { cwd: root, stdio: 'inherit', shell: process.platform === 'win32' });
+  const r = spawnSync('npx', args, {
+    cwd: root,
+    stdio: 'inherit',
+    shell: process.platform === 'win32',
+  });
   if (r.status !== 0) process.exit(r.status ?? 1);
 };
 run(['tsc', '-b']);

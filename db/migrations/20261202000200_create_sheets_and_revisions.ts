@@ -37,7 +37,9 @@ export async function up(db: Kysely<any>): Promise<void> {
     .execute();
   await sql`create trigger sheets_set_updated_at before update on sheets
     for each row execute function set_updated_at()`.execute(db);
-  await sql`create index sheets_search_text_index on sheets using gin (search_text gin_trgm_ops)`.execute(db);
+  await sql`create index sheets_search_text_index on sheets using gin (search_text gin_trgm_ops)`.execute(
+    db,
+  );
   for (const [name, expr] of [
     ['sheets_title_index', sql`lower(title), id`],
     ['sheets_updated_at_index', sql`updated_at, id`],
@@ -111,7 +113,9 @@ export async function up(db: Kysely<any>): Promise<void> {
     where state = 'approved'`.execute(db);
   await sql`create unique index revisions_one_open_index on revisions (sheet_id)
     where state in ('draft', 'in_check', 'returned')`.execute(db);
-  await sql`create index revisions_author_id_state_index on revisions (author_id, state)`.execute(db);
+  await sql`create index revisions_author_id_state_index on revisions (author_id, state)`.execute(
+    db,
+  );
   await sql`create index revisions_state_index on revisions (state)`.execute(db);
 
   await sql`

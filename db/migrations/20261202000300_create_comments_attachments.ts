@@ -21,7 +21,9 @@ export async function up(db: Kysely<any>): Promise<void> {
         or (anchor_kind in ('input', 'step', 'check') and anchor_key is not null)`,
     )
     .execute();
-  await sql`create index comments_revision_id_index on comments (revision_id, created_at)`.execute(db);
+  await sql`create index comments_revision_id_index on comments (revision_id, created_at)`.execute(
+    db,
+  );
 
   await db.schema
     .createTable('attachments')

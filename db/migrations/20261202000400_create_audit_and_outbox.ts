@@ -16,7 +16,9 @@ export async function up(db: Kysely<any>): Promise<void> {
     .addColumn('after', 'jsonb')
     .execute();
   await sql`create index audit_events_sheet_id_index on audit_events (sheet_id, at)`.execute(db);
-  await sql`create index audit_events_entity_index on audit_events (entity, entity_id, at)`.execute(db);
+  await sql`create index audit_events_entity_index on audit_events (entity, entity_id, at)`.execute(
+    db,
+  );
   await sql`
     create or replace function audit_events_append_only() returns trigger language plpgsql as $$
     begin
@@ -35,7 +37,9 @@ export async function up(db: Kysely<any>): Promise<void> {
     .addColumn('last_error', 'text')
     .addColumn('sent_at', 'timestamptz')
     .execute();
-  await sql`create index outbox_unsent_index on outbox (created_at) where sent_at is null`.execute(db);
+  await sql`create index outbox_unsent_index on outbox (created_at) where sent_at is null`.execute(
+    db,
+  );
 }
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any

@@ -8,10 +8,14 @@ let updated = false;
 export async function ensureDebianPackages(packages, why, probe) {
   if (probe()) return;
   if (!hasCommand('apt-get')) {
-    fail(`${why} needs the Debian package(s) ${packages.join(', ')}, and apt-get is not available. Install them and run again.`);
+    fail(
+      `${why} needs the Debian package(s) ${packages.join(', ')}, and apt-get is not available. Install them and run again.`,
+    );
   }
   if (!isRoot()) {
-    fail(`${why} needs the Debian package(s) ${packages.join(', ')}. Run: sudo apt-get install -y ${packages.join(' ')}`);
+    fail(
+      `${why} needs the Debian package(s) ${packages.join(', ')}. Run: sudo apt-get install -y ${packages.join(' ')}`,
+    );
   }
   step(`installing ${packages.join(', ')} from Debian's packages (${why})…`);
   const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
@@ -20,7 +24,10 @@ export async function ensureDebianPackages(packages, why, probe) {
       await run('apt-get', ['update', '-qq'], { env, quiet: true });
       updated = true;
     }
-    await run('apt-get', ['install', '-y', '-qq', '--no-install-recommends', ...packages], { env, quiet: true });
+    await run('apt-get', ['install', '-y', '-qq', '--no-install-recommends', ...packages], {
+      env,
+      quiet: true,
+    });
   } catch (e) {
     fail(`could not install ${packages.join(', ')} with apt-get: ${e.message}`);
   }
@@ -31,7 +38,11 @@ export const chromiumPath = '/usr/bin/chromium';
 export const ensureChromium = () =>
   ensureDebianPackages(['chromium'], 'browser tests', () => existsSync(chromiumPath));
 export const ensurePoppler = () =>
-  ensureDebianPackages(['poppler-utils'], 'PDF checks', () => hasCommand('pdftoppm') && hasCommand('pdffonts'));
+  ensureDebianPackages(
+    ['poppler-utils'],
+    'PDF checks',
+    () => hasCommand('pdftoppm') && hasCommand('pdffonts'),
+  );
 export const ensureDejaVu = () =>
   ensureDebianPackages(['fonts-dejavu-core'], 'math symbols in PDFs', () =>
     existsSync('/usr/share/fonts/truetype/dejavu/DejaVuSans.ttf'),

@@ -1,5 +1,13 @@
 // A private PostgreSQL cluster on 127.0.0.1, from Debian's packages, owned by this project.
-import { existsSync, readdirSync, readFileSync, writeFileSync, mkdirSync, rmSync, chmodSync } from 'node:fs';
+import {
+  existsSync,
+  readdirSync,
+  readFileSync,
+  writeFileSync,
+  mkdirSync,
+  rmSync,
+  chmodSync,
+} from 'node:fs';
 import { randomBytes, createHash } from 'node:crypto';
 import net from 'node:net';
 import path from 'node:path';
@@ -72,7 +80,8 @@ function runningPid(dataDir) {
   const pidFile = path.join(dataDir, 'postmaster.pid');
   if (!existsSync(pidFile)) return null;
   const pid = Number(readFileSync(pidFile, 'utf8').split('\n')[0]);
-  const cmd = pid && pidAlive(pid) ? runSync('ps', ['-o', 'comm=', '-p', String(pid)]).out.trim() : '';
+  const cmd =
+    pid && pidAlive(pid) ? runSync('ps', ['-o', 'comm=', '-p', String(pid)]).out.trim() : '';
   if (cmd.startsWith('postgres')) return pid;
   step(`removing a stale postmaster.pid (pid ${pid} is not a running postgres)`);
   rmSync(pidFile);
@@ -98,7 +107,16 @@ export async function startCluster({ projectDir, name, port, durable }) {
     if (isRoot()) runSync('chown', ['-R', 'postgres:postgres', dataDir]);
     chmodSync(dataDir, 0o700);
     const [c, a] = asDbUser(path.join(bin, 'initdb'), [
-      '-D', dataDir, '-U', USER, '--pwfile', pwFile, '--auth=scram-sha-256', '-E', 'UTF8', '--locale=C.UTF-8',
+      '-D',
+      dataDir,
+      '-U',
+      USER,
+      '--pwfile',
+      pwFile,
+      '--auth=scram-sha-256',
+      '-E',
+      'UTF8',
+      '--locale=C.UTF-8',
     ]);
     try {
       await run(c, a, { cwd: '/', quiet: true });
@@ -111,8 +129,10 @@ export async function startCluster({ projectDir, name, port, durable }) {
 
   if (!runningPid(dataDir)) {
     if (!(await portFree(port))) {
-      fail(`port ${port} on 127.0.0.1 is already taken by another program, so PostgreSQL cannot start there. ` +
-        `Stop that program or choose another port with PGPORT=<port>.`);
+      fail(
+        `port ${port} on 127.0.0.1 is already taken by another program, so PostgreSQL cannot start there. ` +
+          `Stop that program or choose another port with PGPORT=<port>.`,
+      );
     }
     const settings = [
       `-p ${port}`,
@@ -121,11 +141,24 @@ export async function startCluster({ projectDir, name, port, durable }) {
       ...(durable ? [] : ['-c fsync=off', '-c synchronous_commit=off', '-c full_page_writes=off']),
     ].join(' ');
     const logFile = path.join(dataDir, 'server.log');
-    const [c, a] = asDbUser(path.join(bin, 'pg_ctl'), ['-D', dataDir, '-o', settings, '-l', logFile, '-w', '-t', '60', 'start']);
+    const [c, a] = asDbUser(path.join(bin, 'pg_ctl'), [
+      '-D',
+      dataDir,
+      '-o',
+      settings,
+      '-l',
+      logFile,
+      '-w',
+      '-t',
+      '60',
+      'start',
+    ]);
     try {
       await run(c, a, { cwd: '/', quiet: true });
     } catch (e) {
-      const tail = existsSync(logFile) ? readFileSync(logFile, 'utf8').split('\n').slice(-15).join('\n') : '';
+      const tail = existsSync(logFile)
+        ? readFileSync(logFile, 'utf8').split('\n').slice(-15).join('\n')
+        : '';
       fail(`PostgreSQL did not start: ${e.message}\n${tail}`);
     }
     step(`PostgreSQL ${path.basename(path.dirname(bin))} is up on 127.0.0.1:${port}`);
@@ -139,10 +172,28 @@ export async function startCluster({ projectDir, name, port, durable }) {
   };
 
   const psql = (sql, db = 'postgres') =>
-    run(path.join(bin, 'psql'), ['-h', '127.0.0.1', '-p', String(port), '-U', USER, '-d', db, '-v', 'ON_ERROR_STOP=1', '-qAt', '-c', sql], {
-      env: { ...process.env, PGPASSWORD: secret },
-      quiet: true,
-    });
+    run(
+      path.join(bin, 'psql'),
+      [
+        '-h',
+        '127.0.0.1',
+        '-p',
+        String(port),
+        '-U',
+        USER,
+        '-d',
+        db,
+        '-v',
+        'ON_ERROR_STOP=1',
+        '-qAt',
+        '-c',
+        sql,
+      ],
+      {
+        env: { ...process.env, PGPASSWORD: secret },
+        quiet: true,
+      },
+    );
 
   const ensureDatabase = async (db, { fresh = false } = {}) => {
     if (fresh) await psql(`DROP DATABASE IF EXISTS "${db}" WITH (FORCE)`);

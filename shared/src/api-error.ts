@@ -39,7 +39,10 @@ export function toFieldIssues(error: z.ZodError): FieldIssue[] {
   return error.issues.flatMap((issue) =>
     // An unknown field is reported at its own path, so a form can point at it.
     issue.code === 'unrecognized_keys'
-      ? issue.keys.map((key) => ({ path: join([...issue.path, key]), message: 'is not a known field' }))
+      ? issue.keys.map((key) => ({
+          path: join([...issue.path, key]),
+          message: 'is not a known field',
+        }))
       : [{ path: join(issue.path), message: issue.message }],
   );
 }

@@ -77,10 +77,7 @@ export class SheetsController {
 
   @Get(':id/audit')
   @SignedIn()
-  audit(
-    @CurrentUser() user: AuthUser,
-    @Param('id', UuidParamPipe) id: string,
-  ): Promise<AuditList> {
+  audit(@CurrentUser() user: AuthUser, @Param('id', UuidParamPipe) id: string): Promise<AuditList> {
     return this.sheets.auditTrail(user, id);
   }
 }

@@ -29,7 +29,5 @@ export const healthSchema = z.object({
 export type Health = z.infer<typeof healthSchema>;
 
 /** PATCH /api/auth/me: a user's own preferences. */
-export const updateMeSchema = z
-  .object({ unitSystem: z.enum(['SI', 'US']) })
-  .strict();
+export const updateMeSchema = z.object({ unitSystem: z.enum(['SI', 'US']) }).strict();
 export type UpdateMeInput = z.infer<typeof updateMeSchema>;
