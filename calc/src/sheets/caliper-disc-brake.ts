@@ -49,10 +49,11 @@ function validate(v: ReadInputs): FieldError[] {
     e.push({ field: 'muMin', message: 'μ min must not exceed μ nominal' });
   if (!(v.num('muNominal') <= v.num('muMax')))
     e.push({ field: 'muMax', message: 'μ max must not be below μ nominal' });
-  if (v.str('referenceBasis') !== 'motor' && !(v.num('staticTorque') > 0))
+  // 1 mN·m is far below any real duty; smaller values only underflow once efficiency is applied.
+  if (v.str('referenceBasis') !== 'motor' && !(v.num('staticTorque') >= 1e-3))
     e.push({
       field: 'staticTorque',
-      message: 'must be greater than 0 when the reference is the load torque',
+      message: 'must be at least 0.001 N·m when the reference is the load torque',
     });
   if (!(v.num('clampForceMax') > v.num('clampForceMin')))
     e.push({ field: 'clampForceMax', message: 'must exceed the lowest setting' });
