@@ -66,7 +66,8 @@ describe('core monotonicity', () => {
 
   it('more lining wear gives less spring force and so less torque', () => {
     fc.assert(
-      fc.property(pair(0, 5e-3), pos(0.5, 10), pos(0.1, 0.6), ([w1, w2], travel, mu) => {
+      // travel ≤ 9 keeps k·w·travel below F, so the spring never goes slack (that case throws by design).
+      fc.property(pair(0, 5e-3), pos(0.5, 9), pos(0.1, 0.6), ([w1, w2], travel, mu) => {
         const F = 5e4;
         const k = 1e6;
         const a = wornSpringForce(force(F), stiffness(k), length(w1), ratio(travel));
