@@ -24,14 +24,7 @@ import { wornSpringForce } from '../shoe-brake/worn-lining.js';
 import { pvFormula, rubbingSpeedFormula } from '../shoe-brake/lining-duty.js';
 import { releasedSpringForceFormula, forceMarginFormula } from '../release/release.js';
 import { stopping } from '../stopping/stopping.js';
-import {
-  averageHeat,
-  coolingTimeConstant,
-  energyPerHour,
-  peakCycleTemperature,
-  steadyTemperature,
-  temperatureRise,
-} from '../energy/heat.js';
+import { heatBalance } from '../energy/heat-balance.js';
 import { compute } from '../core/step.js';
 import * as q from '../units/quantities.js';
 import { makeCheck } from './checks.js';
@@ -262,21 +255,18 @@ export function evaluateCaliperDiscBrake(
     );
     d.section = 'thermal';
     stopEnergyParts(q.inertia(v.num('inertia')), stop.speedAfterDelay, Mhold, stop.brakingTime, d);
-    const z = q.frequency(v.num('stopsPerHour'));
-    const m = q.mass(v.num('discMass'));
-    const c = q.specificHeat(v.num('specificHeat'));
-    const alpha = q.heatTransferCoefficient(v.num('coolingCoefficient'));
-    const A = q.area(v.num('coolingArea'));
-    const Tamb = q.temperature(v.num('ambient'));
-    energyPerHour(z, stop.brakeEnergy, d);
-    const P = averageHeat(z, stop.brakeEnergy, d);
-    const dT = temperatureRise(stop.brakeEnergy, m, c, d);
-    const Tss = steadyTemperature(
-      { ambient: Tamb, averageHeat: P, coefficient: alpha, area: A },
+    const { z, Tamb, dT, Tss, tau, Tpeak } = heatBalance(
+      {
+        stopsPerHour: v.num('stopsPerHour'),
+        stopEnergy: stop.brakeEnergy,
+        mass: v.num('discMass'),
+        specificHeat: v.num('specificHeat'),
+        coolingCoefficient: v.num('coolingCoefficient'),
+        coolingArea: v.num('coolingArea'),
+        ambient: v.num('ambient'),
+      },
       d,
     );
-    const tau = coolingTimeConstant(m, c, alpha, A, d);
-    const Tpeak = z > 0 ? peakCycleTemperature(Tamb, dT, z, tau, d) : q.temperature(Tamb + dT);
     out.checks.push(
       makeCheck({
         id: 'temperature-steady',

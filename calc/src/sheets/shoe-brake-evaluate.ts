@@ -13,14 +13,7 @@ import {
 import { wornSpringForce } from '../shoe-brake/worn-lining.js';
 import { liningDuty } from '../shoe-brake/lining-duty.js';
 import { stopping, type StoppingResult } from '../stopping/stopping.js';
-import {
-  averageHeat,
-  coolingTimeConstant,
-  energyPerHour,
-  peakCycleTemperature,
-  steadyTemperature,
-  temperatureRise,
-} from '../energy/heat.js';
+import { heatBalance } from '../energy/heat-balance.js';
 import { releaseAndStroke } from '../release/release.js';
 import { settingTable, springLength } from '../spring-setting/setting-table.js';
 import * as q from '../units/quantities.js';
@@ -297,21 +290,18 @@ export function evaluateShoeBrake(
       stop.brakingTime,
       d,
     );
-    const z = q.frequency(v.num('stopsPerHour'));
-    const m = q.mass(v.num('drumMass'));
-    const c = q.specificHeat(v.num('specificHeat'));
-    const alpha = q.heatTransferCoefficient(v.num('coolingCoefficient'));
-    const A = q.area(v.num('coolingArea'));
-    const Tamb = q.temperature(v.num('ambient'));
-    energyPerHour(z, stop.brakeEnergy, d);
-    const P = averageHeat(z, stop.brakeEnergy, d);
-    const dT = temperatureRise(stop.brakeEnergy, m, c, d);
-    const Tss = steadyTemperature(
-      { ambient: Tamb, averageHeat: P, coefficient: alpha, area: A },
+    const { z, Tamb, dT, Tss, tau, Tpeak } = heatBalance(
+      {
+        stopsPerHour: v.num('stopsPerHour'),
+        stopEnergy: stop.brakeEnergy,
+        mass: v.num('drumMass'),
+        specificHeat: v.num('specificHeat'),
+        coolingCoefficient: v.num('coolingCoefficient'),
+        coolingArea: v.num('coolingArea'),
+        ambient: v.num('ambient'),
+      },
       d,
     );
-    const tau = coolingTimeConstant(m, c, alpha, A, d);
-    const Tpeak = z > 0 ? peakCycleTemperature(Tamb, dT, z, tau, d) : q.temperature(Tamb + dT);
     out.checks.push(
       makeCheck({
         id: 'temperature-steady',
