@@ -23,13 +23,20 @@ export function e2eBaseUrl(): string | null {
   return url ? url.replace(/\/+$/, '') : null;
 }
 
-/** Why browser tests are skipped here, or null when they can run. */
+/**
+ * Why browser tests are skipped here, or null when they can run. Only a missing app URL skips:
+ * under `npm test` the URL is always set, so a missing chromium fails loudly instead of hiding.
+ */
 export function e2eSkipReason(): string | null {
   if (!e2eBaseUrl())
     return 'HOLDFAST_E2E_URL is not set: browser tests need a running Holdfast (npm test sets it).';
-  if (!existsSync(chromiumPath))
-    return `No chromium at ${chromiumPath}: install it with apt-get install -y chromium.`;
   return null;
+}
+
+/** Thrown at launch when chromium is missing, so the run fails with the fix in the message. */
+function assertChromium(): void {
+  if (!existsSync(chromiumPath))
+    throw new Error(`No chromium at ${chromiumPath}: install it with apt-get install -y chromium.`);
 }
 
 export interface BrowserSession {
@@ -42,6 +49,7 @@ export interface BrowserSession {
 export async function launchBrowser(
   options: { width?: number; height?: number } = {},
 ): Promise<BrowserSession> {
+  assertChromium();
   const profile = await mkdtemp(join(tmpdir(), 'holdfast-chromium-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: chromiumPath,
