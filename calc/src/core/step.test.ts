@@ -41,6 +41,8 @@ describe('defineFormula', () => {
     });
     expect(f.text).toBe('a = 4 · r · sin(θ₂) / (2 · θ₂ + sin(2 · θ₂)) + √(J) · π · ω²');
     expect(f.substitute({ r: 0.25, t2: Math.PI / 3, J: 4, w: 2 })).toContain('250.0 mm');
+    // A power applies to the value with its unit: (2.000 rad/s)², never 2.000 rad/s².
+    expect(f.substitute({ r: 0.25, t2: Math.PI / 3, J: 4, w: 2 })).toContain('(2.000 rad/s)²');
   });
 
   it('wraps negative substitutions in parentheses', () => {

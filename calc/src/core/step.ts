@@ -57,6 +57,10 @@ export function defineFormula<S extends string, D extends Dimension>(
   const compiled: EvalFunction | undefined = closure ? undefined : node.compile();
   const pieces: TextPiece[] = renderPieces(node, declared);
   const symbols = spec.symbols as Record<string, SymbolSpec>;
+  const poweredAt = pieces.map((p, k) => {
+    const next = pieces[k + 1];
+    return typeof p !== 'string' && typeof next === 'string' && /^[²³^]/.test(next);
+  });
   const prefix = `${spec.symbol} = `;
   const text =
     prefix + pieces.map((p) => (typeof p === 'string' ? p : symbols[p.symbol].text)).join('');
@@ -69,14 +73,17 @@ export function defineFormula<S extends string, D extends Dimension>(
     },
     substitute(values, symbol) {
       let out = symbol === undefined ? prefix : `${symbol} = `;
-      for (const p of pieces) {
+      for (let k = 0; k < pieces.length; k++) {
+        const p = pieces[k];
         if (typeof p === 'string') {
           out += p;
           continue;
         }
         const v = (values as Record<string, number>)[p.symbol];
         const printed = formatForDerivation(v, symbols[p.symbol].dimension);
-        out += v < 0 ? `(${printed})` : printed;
+        // (152.4 mm)², not 152.4 mm²: a power binds to the whole quantity, unit included.
+        const wrap = v < 0 || (poweredAt[k] && printed.includes(' '));
+        out += wrap ? `(${printed})` : printed;
       }
       return out;
     },

@@ -1,5 +1,7 @@
 import { requireRange } from '../units/parse.js';
 import { CalcInputError } from '../core/errors.js';
+import type { Derivation } from '../core/step.js';
+import * as gf from './general-shoe-formulas.js';
 
 /** Geometry of one shoe (Shigley's notation); angles in radians, lengths in m, pressures in Pa. */
 export interface ShoeGeometry {
@@ -72,6 +74,7 @@ export interface ShoeForceResult extends ShoeMomentCoefficients {
  * Maximum pressure and torque of a shoe for an actuating force F at distance c from the hinge:
  * F = (M_N − M_f)/c for a self-energising shoe, (M_N + M_f)/c otherwise.
  * A self-energising shoe with M_f ≥ M_N self-locks: rejected as an input error.
+ * With a Derivation, every step is recorded (formula, substitution, value, reference).
  *
  * Source: Budynas & Nisbett, Shigley's MED 8th ed., §16-2 (Eqs. 16-4, 16-5).
  */
@@ -80,6 +83,7 @@ export function shoeFromActuatingForce(
   force: number,
   c: number,
   selfEnergising: boolean,
+  d?: Derivation,
 ): ShoeForceResult {
   requireRange(force, 'force', { min: 0 });
   requireRange(c, 'c', { min: 0, exclusiveMin: true });
@@ -90,8 +94,62 @@ export function shoeFromActuatingForce(
       { field: 'f', message: 'the shoe self-locks (M_f ≥ M_N): reduce f or move the hinge' },
     ]);
   }
+  if (d) return deriveFromActuatingForce(g, force, c, selfEnergising, d);
   const maxPressure = (force * c) / denominator;
   return { ...k, maxPressure, shoeTorque: k.torque * maxPressure, selfEnergising };
+}
+
+/**
+ * The same solution recorded step by step (θ_a, p_a, M_f, M_N, T, and F back from the moments as
+ * a closing check), so a checker can follow a published shoe problem line by line.
+ */
+function deriveFromActuatingForce(
+  g: ShoeGeometry,
+  force: number,
+  c: number,
+  selfEnergising: boolean,
+  d: Derivation,
+): ShoeForceResult {
+  const { f, b, r, a, theta1, theta2 } = g;
+  const theta_a = d.step(gf.maxPressureAngleFormula, { theta2 });
+  const geometry = { f, b, r, a, theta1, theta2, theta_a };
+  const maxPressure = d.step(
+    selfEnergising ? gf.selfEnergisingPressureFormula : gf.opposingPressureFormula,
+    { F: force, c, ...geometry },
+  );
+  const M_f = d.step(gf.frictionMomentFormula, { p_a: maxPressure, ...geometry });
+  const M_N = d.step(gf.normalMomentFormula, {
+    p_a: maxPressure,
+    b,
+    r,
+    a,
+    theta1,
+    theta2,
+    theta_a,
+  });
+  const shoeTorque = d.step(gf.shoeTorqueFormula, {
+    p_a: maxPressure,
+    f,
+    b,
+    r,
+    theta1,
+    theta2,
+    theta_a,
+  });
+  d.step(selfEnergising ? gf.selfEnergisingForceFormula : gf.opposingForceFormula, {
+    M_N,
+    M_f,
+    c,
+  });
+  return {
+    thetaA: theta_a,
+    mf: M_f / maxPressure,
+    mn: M_N / maxPressure,
+    torque: shoeTorque / maxPressure,
+    maxPressure,
+    shoeTorque,
+    selfEnergising,
+  };
 }
 
 /** Actuating force needed for a given maximum pressure (the forward form of the same equations). */
@@ -100,8 +158,20 @@ export function actuatingForce(
   maxPressure: number,
   c: number,
   selfEnergising: boolean,
+  d?: Derivation,
 ): number {
   requireRange(c, 'c', { min: 0, exclusiveMin: true });
+  requireRange(maxPressure, 'maxPressure', { min: 0 });
   const k = shoeMomentCoefficients(g);
-  return (maxPressure * (selfEnergising ? k.mn - k.mf : k.mn + k.mf)) / c;
+  if (!d) return (maxPressure * (selfEnergising ? k.mn - k.mf : k.mn + k.mf)) / c;
+  const { f, b, r, a, theta1, theta2 } = g;
+  const theta_a = d.step(gf.maxPressureAngleFormula, { theta2 });
+  const p_a = maxPressure;
+  const M_f = d.step(gf.frictionMomentFormula, { p_a, f, b, r, a, theta1, theta2, theta_a });
+  const M_N = d.step(gf.normalMomentFormula, { p_a, b, r, a, theta1, theta2, theta_a });
+  return d.step(selfEnergising ? gf.selfEnergisingForceFormula : gf.opposingForceFormula, {
+    M_N,
+    M_f,
+    c,
+  });
 }

@@ -1,3 +1,4 @@
+import { Derivation } from '../core/step.js';
 import { describe, expect, it } from 'vitest';
 import { shoeNormalForce } from './shoe-force.js';
 import { shortShoeTorque } from './short-shoe.js';
@@ -65,6 +66,32 @@ describe('general shoe moments (Budynas & Nisbett, Shigley MED 8th ed., Problem 
     close(left.shoeTorque, 1310, 5e-3);
     close(right.shoeTorque + left.shoeTorque, 3840, 5e-3);
     close(actuatingForce(g, right.maxPressure, 8.66, true), 500, 1e-12);
+  });
+  it('the recorded derivation reproduces the same values and closes back on F', () => {
+    const d = new Derivation('shoe');
+    const right = shoeFromActuatingForce(g, 500, 8.66, true, d);
+    const plain = shoeFromActuatingForce(g, 500, 8.66, true);
+    expect(d.steps.map((s) => s.id)).toEqual([
+      'theta-a',
+      'max-pressure',
+      'friction-moment',
+      'normal-moment',
+      'shoe-torque',
+      'actuating-force',
+    ]);
+    close(right.maxPressure, plain.maxPressure, 1e-12);
+    close(right.shoeTorque, plain.shoeTorque, 1e-12);
+    close(right.mf, 17.96, 5e-3);
+    close(d.value('actuating-force'), 500, 1e-12);
+    expect(d.steps[1].formula).toContain('p_a = F · c · sin(θ_a)');
+    expect(d.steps[2].substituted).toMatch(/^M_f = 0\.2800 · /);
+    const e = new Derivation('shoe');
+    close(
+      actuatingForce(g, plain.maxPressure, 8.66, false, e),
+      actuatingForce(g, plain.maxPressure, 8.66, false),
+      1e-12,
+    );
+    expect(e.steps.at(-1)?.formula).toBe('F = (M_N + M_f) / c');
   });
   it('a self-locking shoe is an input error', () => {
     expect(() => shoeFromActuatingForce({ ...g, f: 1, a: 1 }, 500, 8.66, true)).toThrow(
