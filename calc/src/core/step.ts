@@ -116,43 +116,54 @@ export interface StepOptions {
  */
 export class Derivation {
   readonly steps: DerivationStep[] = [];
-  private readonly ids = new Set<string>();
+  /**
+   * The same steps by id, filled as they are recorded: it rejects duplicate ids, and lets
+   * publishSteps and value() find a step without scanning or rebuilding an index per call.
+   */
+  private readonly byId = new Map<string, DerivationStep>();
 
   constructor(public section = 'general') {}
 
+  // `options` has no `= {}` default: most steps pass none, and a sheet records ~100 steps per
+  // evaluation, so an empty object per step is avoidable garbage.
   step<S extends string, D extends Dimension>(
     formula: Formula<S, D>,
     values: Record<S, number>,
-    options: StepOptions = {},
+    options?: StepOptions,
   ): Q<D> {
     const spec = formula.spec;
-    const id = options.id ?? spec.id;
+    const id = options?.id ?? spec.id;
     const value = formula.evaluate(values);
     if (!Number.isFinite(value)) throw new CalcDomainError(id, values);
-    if (this.ids.has(id)) throw new Error(`derivation: duplicate step id ${id}`);
-    this.ids.add(id);
-    const formulaText = options.symbol
-      ? options.symbol + formula.text.slice(spec.symbol.length)
-      : formula.text;
-    const substituted = formula.substitute(values, options.symbol);
-    this.steps.push({
+    if (this.byId.has(id)) throw new Error(`derivation: duplicate step id ${id}`);
+    const symbol = options?.symbol;
+    const formulaText = symbol ? symbol + formula.text.slice(spec.symbol.length) : formula.text;
+    const substituted = formula.substitute(values, symbol);
+    const step: DerivationStep = {
       id,
-      section: options.section ?? this.section,
-      label: options.label ?? spec.label,
-      symbol: options.symbol ?? spec.symbol,
+      section: options?.section ?? this.section,
+      label: options?.label ?? spec.label,
+      symbol: symbol ?? spec.symbol,
       formula: formulaText,
       substituted,
       value,
       unit: DIMENSIONS[spec.dimension].siUnit,
       dimension: spec.dimension,
-      reference: options.reference ?? spec.reference,
-    });
+      reference: options?.reference ?? spec.reference,
+    };
+    this.steps.push(step);
+    this.byId.set(id, step);
     return value;
+  }
+
+  /** The recorded step with this id, if any. */
+  find(id: string): DerivationStep | undefined {
+    return this.byId.get(id);
   }
 
   /** Looks up a recorded step value by id (throws if absent: a programming error). */
   value(id: string): number {
-    const s = this.steps.find((x) => x.id === id);
+    const s = this.byId.get(id);
     if (!s) throw new Error(`derivation: no step ${id}`);
     return s.value;
   }
@@ -166,10 +177,10 @@ export function compute<S extends string, D extends Dimension>(
   d: Derivation | undefined,
   formula: Formula<S, D>,
   values: Record<S, number>,
-  options: StepOptions = {},
+  options?: StepOptions,
 ): Q<D> {
   if (d) return d.step(formula, values, options);
   const value = formula.evaluate(values);
-  if (!Number.isFinite(value)) throw new CalcDomainError(options.id ?? formula.spec.id, values);
+  if (!Number.isFinite(value)) throw new CalcDomainError(options?.id ?? formula.spec.id, values);
   return value;
 }

@@ -37,10 +37,10 @@ export function publishSteps(
   d: Derivation,
   ids: (string | [string, string])[],
 ): void {
-  const byId = new Map(d.steps.map((s) => [s.id, s]));
   for (const entry of ids) {
-    const [id, key] = typeof entry === 'string' ? [entry, entry] : entry;
-    const s = byId.get(id);
+    const id = typeof entry === 'string' ? entry : entry[0];
+    const key = typeof entry === 'string' ? entry : entry[1];
+    const s = d.find(id);
     if (!s) continue;
     out.results.push({
       key,

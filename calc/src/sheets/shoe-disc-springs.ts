@@ -69,7 +69,7 @@ export function evaluateShoeDiscSprings(v: ReadInputs, d: Derivation, out: Sheet
       );
     }
     const title = TITLES[p];
-    const preload = d.steps.find((s) => s.id === `${p}-preload`);
+    const preload = d.find(`${p}-preload`);
     if (preload) {
       out.results.push({
         key: `${p}Preload`,
