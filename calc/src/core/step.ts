@@ -2,7 +2,7 @@ import type { EvalFunction } from 'mathjs';
 import type { Dimension, DerivationStep } from './types.js';
 import { math } from '../units/math.js';
 import type { Q } from '../units/quantities.js';
-import { formatForDerivation } from '../units/format.js';
+import { formatInPrintUnits, printUnitsOf, type PrintUnits } from '../units/format.js';
 import { DIMENSIONS } from '../units/unit-table.js';
 import { renderPieces, symbolNames, type TextPiece } from './formula-text.js';
 import { compileToClosure } from './closure-compiler.js';
@@ -42,6 +42,14 @@ export interface Formula<S extends string, D extends Dimension> {
 
 const ALLOWED_FREE = new Set(['pi', 'e']);
 
+/** A value placeholder of a formula's text, prepared for substitute(). */
+interface ValueSlot {
+  symbol: string;
+  units: PrintUnits;
+  /** Followed by a power (², ³, ^): a value with a unit is then wrapped in parentheses. */
+  powered: boolean;
+}
+
 /** Defines a formula; throws at load time if the expression uses an undeclared symbol. */
 export function defineFormula<S extends string, D extends Dimension>(
   spec: FormulaSpec<S, D>,
@@ -57,9 +65,15 @@ export function defineFormula<S extends string, D extends Dimension>(
   const compiled: EvalFunction | undefined = closure ? undefined : node.compile();
   const pieces: TextPiece[] = renderPieces(node, declared);
   const symbols = spec.symbols as Record<string, SymbolSpec>;
-  const poweredAt = pieces.map((p, k) => {
+  // What substitute() needs per value, worked out once here rather than per printed value.
+  const slots: (string | ValueSlot)[] = pieces.map((p, k) => {
+    if (typeof p === 'string') return p;
     const next = pieces[k + 1];
-    return typeof p !== 'string' && typeof next === 'string' && /^[²³^]/.test(next);
+    return {
+      symbol: p.symbol,
+      units: printUnitsOf(symbols[p.symbol].dimension),
+      powered: typeof next === 'string' && /^[²³^]/.test(next),
+    };
   });
   const prefix = `${spec.symbol} = `;
   const text =
@@ -73,16 +87,16 @@ export function defineFormula<S extends string, D extends Dimension>(
     },
     substitute(values, symbol) {
       let out = symbol === undefined ? prefix : `${symbol} = `;
-      for (let k = 0; k < pieces.length; k++) {
-        const p = pieces[k];
+      for (let k = 0; k < slots.length; k++) {
+        const p = slots[k];
         if (typeof p === 'string') {
           out += p;
           continue;
         }
         const v = (values as Record<string, number>)[p.symbol];
-        const printed = formatForDerivation(v, symbols[p.symbol].dimension);
+        const printed = formatInPrintUnits(v, p.units);
         // (152.4 mm)², not 152.4 mm²: a power binds to the whole quantity, unit included.
-        const wrap = v < 0 || (poweredAt[k] && printed.includes(' '));
+        const wrap = v < 0 || (p.powered && printed.includes(' '));
         out += wrap ? `(${printed})` : printed;
       }
       return out;

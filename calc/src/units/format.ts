@@ -17,7 +17,22 @@ export function formatNumber(value: number, digits = 4): string {
     const [mantissa, exponent] = value.toExponential(Math.max(0, digits - 1)).split('e');
     return `${mantissa.replace('-', '−')}·10^${Number(exponent)}`;
   }
-  let e = Math.floor(Math.log10(abs));
+  let e = 0;
+  if (digits <= 12) {
+    // Decimal exponent by comparison with the table: Math.floor(Math.log10(abs)) was a third of
+    // the time of a call. The table gives the exact exponent of every double; log10 may round
+    // across a power of ten within a few ulps of it, and up to 12 digits the carry below then
+    // lands on the same digits, so the output is unchanged. Beyond 12 digits those few ulps show
+    // in the last digit, so the log10 estimate stays there.
+    if (abs >= 1) {
+      while (abs >= POW10[e + 31]) e++;
+    } else {
+      do e--;
+      while (abs < POW10[e + 30]);
+    }
+  } else {
+    e = Math.floor(Math.log10(abs));
+  }
   let m = Math.round(abs * POW10[digits - 1 - e + 30]);
   if (m >= POW10[digits + 30]) {
     m = Math.round(m / 10);
@@ -31,14 +46,20 @@ export function formatNumber(value: number, digits = 4): string {
 
 interface PrintUnit {
   label: string;
+  /** ' ' + label, or '' without a label: appended to the number in one concatenation. */
+  suffix: string;
   factor: number;
-  offset?: number;
+  offset: number;
   /** Use this unit when |SI value| is below this bound (first match wins). */
   below: number;
 }
 
+/** The print units of one dimension, smallest first. */
+export type PrintUnits = readonly PrintUnit[];
+
 const p = (label: string, factor: number, below = Infinity, offset = 0): PrintUnit => ({
   label,
+  suffix: label ? ` ${label}` : '',
   factor,
   below,
   offset,
@@ -73,18 +94,27 @@ const PRINT_UNITS: Record<Dimension, PrintUnit[]> = {
 
 /** Prints an SI value with a readable unit for a derivation, e.g. 12400 N → '12.40 kN'. */
 export function formatForDerivation(valueSI: number, dimension: Dimension, digits = 4): string {
-  const units = PRINT_UNITS[dimension];
-  const abs = Math.abs(valueSI);
+  return formatInPrintUnits(valueSI, PRINT_UNITS[dimension], digits);
+}
+
+/**
+ * The print units of a dimension, for code that prints many values of it: a formula looks its
+ * symbols' units up once when defined instead of once per printed value.
+ */
+export function printUnitsOf(dimension: Dimension): PrintUnits {
+  return PRINT_UNITS[dimension];
+}
+
+/** formatForDerivation with the dimension's print units already looked up (printUnitsOf). */
+export function formatInPrintUnits(valueSI: number, units: PrintUnits, digits = 4): string {
   let unit = units[units.length - 1];
   for (let k = 0; k < units.length - 1; k++) {
-    if (abs < units[k].below) {
+    if (Math.abs(valueSI) < units[k].below) {
       unit = units[k];
       break;
     }
   }
-  const shown = (valueSI - (unit.offset ?? 0)) / unit.factor;
-  const text = formatNumber(shown, digits);
-  return unit.label ? `${text} ${unit.label}` : text;
+  return formatNumber((valueSI - unit.offset) / unit.factor, digits) + unit.suffix;
 }
 
 /** Printed SI label of a dimension's storage unit, e.g. 'N·m'. */

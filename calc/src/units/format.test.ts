@@ -1,0 +1,89 @@
+import { describe, expect, it } from 'vitest';
+import { formatForDerivation, formatInPrintUnits, formatNumber, printUnitsOf } from './format.js';
+
+describe('formatNumber', () => {
+  it('prints significant figures without an exponent for everyday magnitudes', () => {
+    const cases: [number, number | undefined, string][] = [
+      [12.4, undefined, '12.40'],
+      [-0.35, undefined, '−0.3500'],
+      [0, undefined, '0'],
+      [1, undefined, '1.000'],
+      [10, undefined, '10.00'],
+      [100, undefined, '100.0'],
+      [0.001, undefined, '0.001000'],
+      [0.00099995, undefined, '1.000·10^-3'],
+      [9.9995, undefined, '10.00'],
+      [9.99949, undefined, '9.999'],
+      [999.95, undefined, '1000'],
+      [1234.5, undefined, '1235'],
+      [12345, undefined, '12350'],
+      [123456789, undefined, '123500000'],
+      [1e9, undefined, '1.000·10^9'],
+      [0.1, undefined, '0.1000'],
+      [0.15, 2, '0.15'],
+      [152.4, 3, '152'],
+      [1e-7, undefined, '1.000·10^-7'],
+      [99999.5, 6, '99999.5'],
+      [-1e-4, undefined, '−1.000·10^-4'],
+    ];
+    for (const [value, digits, text] of cases) expect(formatNumber(value, digits)).toBe(text);
+  });
+
+  it('prints the same digits as the Math.log10 exponent it replaced, next to every power of ten', () => {
+    // The exponent comes from a table of powers of ten; log10 can round across a power of ten a
+    // few ulps from it. Every double within 200 ulps of each power must print as before.
+    const POW10: number[] = [];
+    for (let k = -30; k <= 30; k++) POW10[k + 30] = 10 ** k;
+    const withLog10 = (value: number, digits: number): string => {
+      const abs = Math.abs(value);
+      const sign = value < 0 ? '−' : '';
+      let e = Math.floor(Math.log10(abs));
+      let m = Math.round(abs * POW10[digits - 1 - e + 30]);
+      if (m >= POW10[digits + 30]) {
+        m = Math.round(m / 10);
+        e += 1;
+      }
+      const s = String(m);
+      if (e >= digits - 1) return sign + s + (e > digits - 1 ? '0'.repeat(e - digits + 1) : '');
+      if (e >= 0) return `${sign}${s.slice(0, e + 1)}.${s.slice(e + 1)}`;
+      return `${sign}0.${'0'.repeat(-e - 1)}${s}`;
+    };
+    const bits = new Float64Array(1);
+    const word = new BigInt64Array(bits.buffer);
+    let mismatches = 0;
+    for (let k = -3; k <= 8; k++) {
+      bits[0] = 10 ** k;
+      const centre = word[0];
+      for (let u = -200n; u <= 200n; u++) {
+        word[0] = centre + u;
+        const x = bits[0];
+        if (x < 1e-3 || x >= 1e9) continue;
+        for (let digits = 1; digits <= 15; digits++) {
+          if (formatNumber(x, digits) !== withLog10(x, digits)) mismatches++;
+          if (formatNumber(-x, digits) !== withLog10(-x, digits)) mismatches++;
+        }
+      }
+    }
+    expect(mismatches).toBe(0);
+  });
+});
+
+describe('formatForDerivation', () => {
+  it('picks a readable unit by magnitude', () => {
+    expect(formatForDerivation(12400, 'force')).toBe('12.40 kN');
+    expect(formatForDerivation(0.4, 'length')).toBe('400.0 mm');
+    expect(formatForDerivation(0.4, 'area')).toBe('0.4000 m²');
+    expect(formatForDerivation(293.15, 'temperature')).toBe('20.00 °C');
+    expect(formatForDerivation(2.5e6, 'pressure')).toBe('2.500 MPa');
+    expect(formatForDerivation(0.3, 'dimensionless')).toBe('0.3000');
+    expect(formatForDerivation(1 / 3600, 'frequency')).toBe('1.000 1/h');
+    expect(formatForDerivation(2e7, 'energy')).toBe('20.00 MJ');
+  });
+
+  it('prints the same with the print units looked up beforehand', () => {
+    const units = printUnitsOf('energy');
+    for (const v of [0, -5, 9999, 1e4, 3.2e6, 1e7, 4.5e8]) {
+      expect(formatInPrintUnits(v, units)).toBe(formatForDerivation(v, 'energy'));
+    }
+  });
+});
