@@ -61,3 +61,4 @@ export { hoistShoeBrakeSheet, evaluateHoistShoeBrake } from './sheets/hoist-shoe
 export { travelShoeBrakeSheet, evaluateTravelShoeBrake } from './sheets/travel-shoe-brake.js';
 export { caliperDiscBrakeSheet, evaluateCaliperDiscBrake } from './sheets/caliper-disc-brake.js';
 export { makeCheck, type CheckSpec } from './sheets/checks.js';
+export { SAFETY_CAUTIONS } from './sheets/sheet-output.js';

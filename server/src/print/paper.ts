@@ -1,3 +1,5 @@
+import type { TextMeasure } from './measure.js';
+import { titleBlockHeight } from './parts/title-block.js';
 import type { Paper, PrintableSheet } from './printable-sheet.js';
 
 /** Page sizes in PostScript points (1/72 in). */
@@ -7,6 +9,11 @@ export const PAPER_SIZE: Record<Paper, { width: number; height: number }> = {
 };
 
 export const MARGIN_X = 34;
+export const PADDING_TOP = 28;
+export const PADDING_BOTTOM = 40;
+
+/** Slack left at the foot of each planned page for rounding in the measured heights, pt. */
+const PLANNING_SLACK = 6;
 
 /** Usable width between the side margins. */
 export function contentWidth(paper: Paper): number {
@@ -14,10 +21,19 @@ export function contentWidth(paper: Paper): number {
 }
 
 /**
- * Estimated height in pt left for content on one page: the page less its paddings, the title
- * block and (when the revision is marked) the state banner, with a margin for estimate error.
+ * Height in pt left for content on one page of `sheet`: the page less its paddings, the title
+ * block and (when the revision is marked) the state banner, less a little slack.
  */
-export function pageCapacity(sheet: PrintableSheet): number {
+export function pageCapacity(sheet: PrintableSheet, m: TextMeasure): number {
   const marked = sheet.revision.state !== 'approved';
-  return (PAPER_SIZE[sheet.paper].height - 28 - 40 - 62 - (marked ? 22 : 0)) * 0.94;
+  // The banner: one 8 pt bold line, 2 × 2 padding, 2 × 1.2 border, margins −4 and 8.
+  const banner = marked ? m.lineHeight({ fontSize: 8, weight: 700 }) + 4 + 2.4 - 4 + 8 : 0;
+  return (
+    PAPER_SIZE[sheet.paper].height -
+    PADDING_TOP -
+    PADDING_BOTTOM -
+    titleBlockHeight(sheet, m, contentWidth(sheet.paper)) -
+    banner -
+    PLANNING_SLACK
+  );
 }

@@ -1,3 +1,4 @@
+import { defaultInputs, getSheetType, type SheetInputs } from '@holdfast/calc';
 import { bench, describe } from 'vitest';
 import { renderFieldCardPdf, renderSheetPdf, warmUpPdfRenderer } from './render.js';
 import { hoistPrintable } from './testing/hoist-fixture.js';
@@ -7,13 +8,38 @@ import { realPrintable } from './testing/real-sheet.js';
 await warmUpPdfRenderer();
 const hoist = realPrintable({ sheetTypeId: 'hoist-shoe-brake', state: 'approved' });
 const small = hoistPrintable({ state: 'approved' });
-const opts = { iterations: 8, warmupIterations: 2, time: 0 };
+
+// Revisions that differ in their numbers (load and spring force), so each render shapes new
+// strings: the shaped-text cache only helps with what sheets share (labels, units, formulas).
+const hoistType = getSheetType('hoist-shoe-brake')!;
+const variants = Array.from({ length: 12 }, (_, k) => {
+  const inputs = defaultInputs(hoistType) as SheetInputs;
+  return realPrintable({
+    sheetTypeId: 'hoist-shoe-brake',
+    state: 'approved',
+    inputs: {
+      ...inputs,
+      load: { value: 9000 + 137 * k, unit: 'kg' },
+      springForce: { value: 1050 + 31 * k, unit: 'N' },
+    },
+  });
+});
+let next = 0;
+const opts = { iterations: 10, warmupIterations: 2, time: 0 };
 
 describe('PDF', () => {
   bench(
     'calculation sheet, approved hoist (calc defaults, 95 steps), A4',
     async () => {
       await renderSheetPdf(hoist);
+    },
+    opts,
+  );
+
+  bench(
+    'calculation sheet, approved hoist, a different revision each time, A4',
+    async () => {
+      await renderSheetPdf(variants[next++ % variants.length]);
     },
     opts,
   );

@@ -1,47 +1,106 @@
 import { Document, Page } from '@react-pdf/renderer';
-import { Approvals, RevisionHistory } from './parts/approvals.js';
-import { Caution } from './parts/caution.js';
-import { CHART_BLOCK, Chart } from './parts/chart.js';
-import { DesignBasis } from './parts/design-basis.js';
-import { DerivationChunk, planDerivation } from './parts/derivation.js';
-import { FieldSettings, Justification } from './parts/field-settings.js';
+import type { BlockContext } from './blocks.js';
+import { headingBlock } from './blocks.js';
+import { paginate, type FlowBlock } from './flow.js';
+import type { TextMeasure } from './measure.js';
+import { approvalsBlock, revisionHistoryBlocks } from './parts/approvals.js';
+import { Caution, cautionHeight } from './parts/caution.js';
+import { chartBlock } from './parts/chart.js';
+import { designBasisBlocks } from './parts/design-basis.js';
+import { derivationBlocks } from './parts/derivation.js';
+import { fieldSettingsBlocks, justificationBlocks } from './parts/field-settings.js';
 import { Footer } from './parts/footer.js';
-import { Inputs } from './parts/inputs.js';
+import { inputsBlocks } from './parts/inputs.js';
 import { StateBanner, StateMarking } from './parts/marking.js';
-import { References } from './parts/references.js';
-import { Purpose, Summary } from './parts/summary.js';
-import { Heading } from './parts/table.js';
-import { TitleBlock } from './parts/title-block.js';
-import { packPages } from './layout-plan.js';
+import { referencesBlocks } from './parts/references.js';
+import { purposeBlocks, summaryBlocks } from './parts/summary.js';
+import { TitleBlock, type PageNumber } from './parts/title-block.js';
 import { PAPER_SIZE, contentWidth, pageCapacity } from './paper.js';
 import type { PrintableSheet } from './printable-sheet.js';
 import { s } from './theme.js';
 
 /** Frame every page of a Holdfast PDF carries: title block, state banner and marking, footer. */
-export function Frame(props: { sheet: PrintableSheet; qr: string | null; kind: string }) {
+export function Frame(props: {
+  sheet: PrintableSheet;
+  qr: string | null;
+  kind: string;
+  page?: PageNumber;
+}) {
   const size = PAPER_SIZE[props.sheet.paper];
   return (
     <>
       <StateMarking sheet={props.sheet} width={size.width} height={size.height} />
-      <TitleBlock sheet={props.sheet} qr={props.qr} kind={props.kind} />
+      <TitleBlock sheet={props.sheet} qr={props.qr} kind={props.kind} page={props.page} />
       <StateBanner sheet={props.sheet} />
       <Footer sheet={props.sheet} />
     </>
   );
 }
 
-/** The calculation sheet: summary page first, then basis, inputs, derivation, charts, settings. */
-export function SheetDocument(props: { sheet: PrintableSheet; qr: string | null }) {
-  const { sheet, qr } = props;
-  const width = contentWidth(sheet.paper);
+/** Marks the first block of a part of the sheet that starts on a new page. */
+function newPage(blocks: FlowBlock[]): FlowBlock[] {
+  return blocks.length === 0
+    ? blocks
+    : [{ ...blocks[0], pageBreakBefore: true }, ...blocks.slice(1)];
+}
+
+/**
+ * The calculation sheet in reading order: summary, design basis and inputs; then the derivation,
+ * the charts, and the settings with the references, each starting a new page.
+ */
+export function sheetBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlock[] {
   const charts = sheet.evaluation?.charts ?? [];
+  return [
+    ...purposeBlocks(ctx, sheet),
+    { key: 'caution', height: cautionHeight(ctx.m, ctx.width), element: <Caution key="caution" /> },
+    ...summaryBlocks(ctx, sheet),
+    approvalsBlock(ctx, sheet),
+    ...revisionHistoryBlocks(ctx, sheet),
+    ...designBasisBlocks(ctx, sheet),
+    ...inputsBlocks(ctx, sheet),
+    ...newPage(derivationBlocks(ctx, sheet)),
+    ...newPage(
+      charts.length === 0
+        ? []
+        : [
+            headingBlock(ctx, 'charts-h', 'Charts'),
+            ...charts.map((c) => chartBlock(ctx, c, sheet.unitSystem)),
+          ],
+    ),
+    ...newPage([
+      ...justificationBlocks(ctx, sheet),
+      ...fieldSettingsBlocks(ctx, sheet),
+      ...referencesBlocks(ctx, sheet),
+    ]),
+  ];
+}
+
+/** The sheet cut into pages with the fonts' measure. */
+export function planSheet(sheet: PrintableSheet, m: TextMeasure): FlowBlock[][] {
+  const ctx = { m, width: contentWidth(sheet.paper) };
+  return paginate(sheetBlocks(ctx, sheet), pageCapacity(sheet, m));
+}
+
+/**
+ * How the planned pages go to react-pdf. 'planned': each page is final (no page breaking by
+ * react-pdf, page numbers printed as text) — about twice as fast, because react-pdf lays out
+ * every page again after each break and again for a dynamic "page n of N". 'flowing': react-pdf
+ * may break a planned page that turned out too long and numbers the pages itself; the renderer
+ * uses it when a planned page overflowed.
+ */
+export type PageMode = 'planned' | 'flowing';
+
+/** The calculation sheet from its planned pages. */
+export function SheetDocument(props: {
+  sheet: PrintableSheet;
+  qr: string | null;
+  pages: FlowBlock[][];
+  mode: PageMode;
+  onRender?: (result: unknown) => void;
+}) {
+  const { sheet, qr, pages, mode } = props;
   const kind = 'Brake calculation sheet';
-  const capacity = pageCapacity(sheet);
-  const chartPages = packPages(
-    charts.map((c) => ({ item: c, height: CHART_BLOCK })),
-    capacity,
-    capacity - 30,
-  );
+  const paper = PAPER_SIZE[sheet.paper];
   return (
     <Document
       title={`${sheet.documentNumber} rev ${sheet.revision.label} — ${sheet.title}`}
@@ -49,43 +108,25 @@ export function SheetDocument(props: { sheet: PrintableSheet; qr: string | null 
       subject={sheet.sheetType.title}
       creator="Holdfast"
       producer="Holdfast"
+      onRender={props.onRender}
     >
-      {/* Separate Page elements: react-pdf re-lays out everything after a page break on every
-          break (page n of N is dynamic), so one long Page costs quadratic time. */}
-      <Page size={sheet.paper} style={s.page}>
-        <Frame sheet={sheet} qr={qr} kind={kind} />
-        <Purpose sheet={sheet} />
-        <Caution />
-        <Summary sheet={sheet} />
-        <Approvals sheet={sheet} />
-        <RevisionHistory sheet={sheet} />
-      </Page>
-      <Page size={sheet.paper} style={s.page}>
-        <Frame sheet={sheet} qr={qr} kind={kind} />
-        <DesignBasis sheet={sheet} />
-        <Inputs sheet={sheet} />
-      </Page>
-      {planDerivation(sheet, width, capacity).map((items, i) => (
-        <Page key={`d${i}`} size={sheet.paper} style={s.page}>
-          <Frame sheet={sheet} qr={qr} kind={kind} />
-          <DerivationChunk items={items} sheet={sheet} />
+      {pages.map((blocks, i) => (
+        <Page
+          key={i}
+          size={sheet.paper}
+          // A page that may not break is as tall as its content: hold it at the paper's height.
+          style={mode === 'planned' ? { ...s.page, minHeight: paper.height } : s.page}
+          wrap={mode === 'flowing'}
+        >
+          <Frame
+            sheet={sheet}
+            qr={qr}
+            kind={kind}
+            page={mode === 'planned' ? { n: i + 1, total: pages.length } : undefined}
+          />
+          {blocks.map((b) => b.element)}
         </Page>
       ))}
-      {chartPages.map((page, i) => (
-        <Page key={`c${i}`} size={sheet.paper} style={s.page}>
-          <Frame sheet={sheet} qr={qr} kind={kind} />
-          {i === 0 && <Heading>Charts</Heading>}
-          {page.map((b) => (
-            <Chart key={b.item.id} chart={b.item} system={sheet.unitSystem} width={width} />
-          ))}
-        </Page>
-      ))}
-      <Page size={sheet.paper} style={s.page}>
-        <Frame sheet={sheet} qr={qr} kind={kind} />
-        <Justification sheet={sheet} />
-        <FieldSettings sheet={sheet} />
-        <References sheet={sheet} />
-      </Page>
     </Document>
   );
 }

@@ -1,4 +1,5 @@
 import { Text, View } from '@react-pdf/renderer';
+import type { TextMeasure } from '../measure.js';
 import { colours } from '../theme.js';
 
 export const CAUTION_LINES = [
@@ -30,4 +31,16 @@ export function Caution(props: { extra?: string[] }) {
       ))}
     </View>
   );
+}
+
+/** Height of the caution block in `width` pt (its 6 pt margin above included). */
+export function cautionHeight(m: TextMeasure, width: number, extra: string[] = []): number {
+  // Left rule 3, padding 2 × 6.
+  const inner = width - 3 - 12;
+  const body = { fontSize: 8.5 };
+  const lines = [...CAUTION_LINES, ...extra].reduce(
+    (sum, line) => sum + m.height(`• ${line}`, inner, body) + 1,
+    0,
+  );
+  return 6 + 2 * 4 + m.lineHeight({ fontSize: 8.5, weight: 700 }) + 2 + lines;
 }

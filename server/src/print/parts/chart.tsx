@@ -3,13 +3,51 @@ import { Circle, G, Line, Polyline, Svg, Text, View } from '@react-pdf/renderer'
 import { toDisplay } from '@holdfast/calc';
 import { SANS } from '../fonts.js';
 import type { PrintUnitSystem } from '../printable-sheet.js';
+import type { BlockContext } from '../blocks.js';
+import type { FlowBlock } from '../flow.js';
 import { colours, seriesColours } from '../theme.js';
 import { niceTicks, tickLabel } from './ticks.js';
 
 const M = { left: 46, right: 12, top: 10, bottom: 30 };
 
-/** Height of one chart with its title and legend, for page planning. */
-export const CHART_BLOCK = 180 + 12 + 12 + 8;
+const CHART_HEIGHT = 180;
+
+/** One chart as a page-planning block: title, drawing and legend, measured. */
+export function chartBlock(
+  ctx: BlockContext,
+  chart: ChartData,
+  system: PrintUnitSystem,
+): FlowBlock {
+  const { m, width } = ctx;
+  const legend = { fontSize: 7 };
+  const yUnit = toDisplay(1, chart.yDimension, system).label;
+  const items = [
+    m.width(`y: ${yUnit ? `${chart.yLabel} (${yUnit})` : chart.yLabel}`, legend) + 10,
+    ...chart.series.map((s) => 12 + 3 + m.width(s.name, legend) + 10),
+  ];
+  // Legend items wrap as whole items.
+  let rows = 1;
+  let used = 0;
+  for (const w of items) {
+    if (used > 0 && used + w > width) {
+      rows += 1;
+      used = 0;
+    }
+    used += w;
+  }
+  const height =
+    m.lineHeight({ fontSize: 8.5, weight: 700 }) +
+    2 +
+    CHART_HEIGHT +
+    rows * m.lineHeight(legend) -
+    2 +
+    8;
+  return {
+    key: `chart-${chart.id}`,
+    height,
+    element: <Chart key={chart.id} chart={chart} system={system} width={width} />,
+  };
+}
 
 /** A chart drawn as vector graphics: axes with ticks, series, set points and reference lines. */
 export function Chart(props: {
@@ -19,7 +57,7 @@ export function Chart(props: {
   height?: number;
 }) {
   const { chart, system, width } = props;
-  const height = props.height ?? 180;
+  const height = props.height ?? CHART_HEIGHT;
   const cx = (v: number) => toDisplay(v, chart.xDimension, system).value;
   const cy = (v: number) => toDisplay(v, chart.yDimension, system).value;
   const xUnit = toDisplay(1, chart.xDimension, system).label;

@@ -1,18 +1,13 @@
 import type { DerivationStep } from '@holdfast/calc';
 import { Text, View } from '@react-pdf/renderer';
 import { qty } from '../format.js';
-import { lineHeight, lines, packPages, type Block } from '../layout-plan.js';
+import { headingBlock, paragraphBlock, type BlockContext } from '../blocks.js';
+import type { FlowBlock } from '../flow.js';
 import type { PrintableSheet } from '../printable-sheet.js';
 import { colours, monoFont } from '../theme.js';
-import { Heading } from './table.js';
 
 const NUM_W = 26;
 const REF_W = 150;
-
-export type DerivationItem =
-  | { kind: 'title' }
-  | { kind: 'heading'; text: string }
-  | { kind: 'step'; step: DerivationStep; n: string };
 
 function resultText(step: DerivationStep, sheet: PrintableSheet): string {
   const shown = qty(step.value, step.dimension, sheet.unitSystem);
@@ -48,83 +43,65 @@ function Step(props: { step: DerivationStep; n: string; sheet: PrintableSheet })
   );
 }
 
-function stepHeight(step: DerivationStep, sheet: PrintableSheet, width: number): number {
-  const w = width - NUM_W - REF_W;
+function stepHeight(ctx: BlockContext, step: DerivationStep, sheet: PrintableSheet): number {
+  const { m } = ctx;
+  const w = ctx.width - NUM_W - REF_W;
+  const mono = { fontSize: 7.6, mono: true };
   const left =
-    lines(step.label, w, 8.5) * lineHeight(8.5) +
-    (lines(step.formula, w, 7.6, true) +
-      lines(step.substituted, w, 7.6, true) +
-      lines(resultText(step, sheet), w, 7.6, true)) *
-      lineHeight(7.6, true);
-  const right = lines(step.reference, REF_W - 6, 6.8) * lineHeight(6.8);
+    m.height(step.label, w, { fontSize: 8.5, weight: 600 }) +
+    m.height(step.formula, w, mono) +
+    m.height(step.substituted, w, mono) +
+    m.height(resultText(step, sheet), w, { ...mono, weight: 700 });
+  const right = m.height(step.reference, REF_W - 6, { fontSize: 6.8 });
+  // 2 × 3 pt padding and the 0.4 pt rule below.
   return Math.max(left, right) + 6.4;
 }
 
+function derivationIntro(sheet: PrintableSheet): string {
+  return `Each step: formula, the values put in (SI), the result${
+    sheet.unitSystem === 'US' ? ' in US units with SI in brackets' : ''
+  }, and the reference.`;
+}
+
 /**
- * Cuts the derivation into page-sized chunks, numbered steps grouped by section in the sheet
- * type's order; a section that runs on to the next chunk repeats its heading "(continued)".
+ * The derivation as blocks: numbered steps grouped by section in the sheet type's order; a
+ * section that runs on to the next page repeats its heading "(continued)".
  */
-export function planDerivation(
-  sheet: PrintableSheet,
-  width: number,
-  capacity: number,
-): DerivationItem[][] {
+export function derivationBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlock[] {
   const steps = sheet.evaluation?.derivation ?? [];
   if (steps.length === 0) return [];
   const order = sheet.sections.map((x) => x.id);
   const rank = (id: string) => (order.indexOf(id) === -1 ? order.length : order.indexOf(id));
   const ids = [...new Set(steps.map((s) => s.section))].sort((a, b) => rank(a) - rank(b));
   const title = (id: string) => sheet.sections.find((x) => x.id === id)?.title ?? titleCase(id);
-  const blocks: Block<DerivationItem & { section?: string }>[] = [
-    { item: { kind: 'title' }, height: 44, keepWithNext: true },
+  const intro = derivationIntro(sheet);
+  const blocks: FlowBlock[] = [
+    headingBlock(ctx, 'derivation-h', 'Derivation', 1, { pageBreakBefore: true }),
+    {
+      ...paragraphBlock(ctx, 'derivation-intro', intro, {
+        fontSize: 7,
+        color: colours.muted,
+        marginBottom: 2,
+      }),
+      keepWithNext: true,
+    },
   ];
   ids.forEach((id, si) => {
     const text = `${si + 1}. ${title(id)}`;
-    blocks.push({ item: { kind: 'heading', text, section: text }, height: 20, keepWithNext: true });
+    blocks.push(headingBlock(ctx, `section-${id}`, text, 2));
+    const carry = [headingBlock(ctx, `section-${id}-cont`, `${text} (continued)`, 2)];
     steps
       .filter((s) => s.section === id)
       .forEach((step, i) =>
         blocks.push({
-          item: { kind: 'step', step, n: `${si + 1}.${i + 1}`, section: text },
-          height: stepHeight(step, sheet, width),
+          key: step.id,
+          height: stepHeight(ctx, step, sheet),
+          element: <Step key={step.id} step={step} n={`${si + 1}.${i + 1}`} sheet={sheet} />,
+          carry,
         }),
       );
   });
-  return packPages(blocks, capacity).map((page) => {
-    const items = page.map((b) => b.item);
-    const first = items[0];
-    if (first.kind === 'step' && first.section) {
-      items.unshift({ kind: 'heading', text: `${first.section} (continued)` });
-    }
-    return items;
-  });
-}
-
-/** One chunk of the derivation (see planDerivation). */
-export function DerivationChunk(props: { items: DerivationItem[]; sheet: PrintableSheet }) {
-  const { sheet } = props;
-  return (
-    <View>
-      {props.items.map((it, i) =>
-        it.kind === 'title' ? (
-          <View key="title">
-            <Heading>Derivation</Heading>
-            <Text style={{ fontSize: 7, color: colours.muted, marginBottom: 2 }}>
-              Each step: formula, the values put in (SI), the result
-              {sheet.unitSystem === 'US' ? ' in US units with SI in brackets' : ''}, and the
-              reference.
-            </Text>
-          </View>
-        ) : it.kind === 'heading' ? (
-          <Heading key={`h${i}`} level={2}>
-            {it.text}
-          </Heading>
-        ) : (
-          <Step key={it.step.id} step={it.step} n={it.n} sheet={sheet} />
-        ),
-      )}
-    </View>
-  );
+  return blocks;
 }
 
 function titleCase(id: string): string {

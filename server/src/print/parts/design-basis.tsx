@@ -3,7 +3,8 @@ import { Text, View } from '@react-pdf/renderer';
 import { qty } from '../format.js';
 import type { PrintableSheet, PrintUnitSystem } from '../printable-sheet.js';
 import { colours } from '../theme.js';
-import { Heading, Table } from './table.js';
+import { headingBlock, tableBlocks, type BlockContext } from '../blocks.js';
+import type { FlowBlock } from '../flow.js';
 
 /** A criteria value in the sheet's units when its unit is a known SI unit, else as stored. */
 function criterionText(value: number, unit: string, system: PrintUnitSystem): string {
@@ -15,58 +16,65 @@ function criterionText(value: number, unit: string, system: PrintUnitSystem): st
   return dims.length === 1 ? qty(value, dims[0], system) : `${value} ${unit}`;
 }
 
-function KeyValue(props: { k: string; v: string }) {
-  return (
-    <View style={{ flexDirection: 'row', marginBottom: 1.5 }} wrap={false}>
-      <Text style={{ width: 130, color: colours.muted }}>{props.k}</Text>
-      <Text style={{ flex: 1 }}>{props.v}</Text>
-    </View>
-  );
+const KEY_W = 130;
+
+function keyValueBlock(ctx: BlockContext, k: string, v: string): FlowBlock {
+  const body = { fontSize: 8.5 };
+  const height =
+    Math.max(ctx.m.height(k, KEY_W, body), ctx.m.height(v, ctx.width - KEY_W, body)) + 1.5;
+  return {
+    key: `basis-${k}`,
+    height,
+    element: (
+      <View key={`basis-${k}`} style={{ flexDirection: 'row', marginBottom: 1.5 }} wrap={false}>
+        <Text style={{ width: KEY_W, color: colours.muted }}>{k}</Text>
+        <Text style={{ flex: 1 }}>{v}</Text>
+      </View>
+    ),
+  };
 }
 
 /** Which method, criteria and software this revision rests on. */
-export function DesignBasis(props: { sheet: PrintableSheet }) {
-  const { sheet } = props;
+export function designBasisBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlock[] {
   const c = sheet.criteria;
-  return (
-    <View>
-      <Heading>Design basis</Heading>
-      <KeyValue k="Sheet type" v={`${sheet.sheetType.title} (${sheet.sheetType.id})`} />
-      <KeyValue k="Scope" v={sheet.sheetType.description} />
-      <KeyValue k="Acceptance criteria" v={`${c.name} (${c.id}), version ${c.version}`} />
-      <KeyValue k="Torque reference" v={sheet.designBasis.torqueReference} />
-      <KeyValue k="Efficiency treatment" v={sheet.designBasis.efficiencyTreatment} />
-      <KeyValue
-        k="Calculation software"
-        v={`Holdfast calculation core ${sheet.coreVersion ?? '(not evaluated)'}`}
-      />
-      <KeyValue
-        k="Unit system"
-        v={
-          sheet.unitSystem === 'US'
-            ? 'US customary (inputs kept as typed)'
-            : 'SI (inputs kept as typed)'
-        }
-      />
-      {c.values.length > 0 && (
-        <>
-          <Heading level={2}>Criteria values and their sources</Heading>
-          <Table
-            columns={[
-              { title: 'Criterion', flex: 2.4 },
-              { title: 'Value', flex: 1, align: 'right' },
-              { title: 'Source', flex: 3.2 },
-              { title: 'Confidence', flex: 1.1 },
-            ]}
-            rows={c.values.map((v) => [
-              v.label,
-              criterionText(v.value, v.unit, sheet.unitSystem),
-              v.source,
-              v.confidence,
-            ])}
-          />
-        </>
-      )}
-    </View>
-  );
+  const rows: [string, string][] = [
+    ['Sheet type', `${sheet.sheetType.title} (${sheet.sheetType.id})`],
+    ['Scope', sheet.sheetType.description],
+    ['Acceptance criteria', `${c.name} (${c.id}), version ${c.version}`],
+    ['Torque reference', sheet.designBasis.torqueReference],
+    ['Efficiency treatment', sheet.designBasis.efficiencyTreatment],
+    ['Calculation software', `Holdfast calculation core ${sheet.coreVersion ?? '(not evaluated)'}`],
+    [
+      'Unit system',
+      sheet.unitSystem === 'US'
+        ? 'US customary (inputs kept as typed)'
+        : 'SI (inputs kept as typed)',
+    ],
+  ];
+  const blocks = [
+    headingBlock(ctx, 'basis-h', 'Design basis'),
+    ...rows.map(([k, v]) => keyValueBlock(ctx, k, v)),
+  ];
+  if (c.values.length > 0) {
+    const title = 'Criteria values and their sources';
+    blocks.push(
+      headingBlock(ctx, 'criteria-h', title, 2),
+      ...tableBlocks(ctx, 'criteria', {
+        continuedTitle: title,
+        columns: [
+          { title: 'Criterion', flex: 2.4 },
+          { title: 'Value', flex: 1, align: 'right' },
+          { title: 'Source', flex: 3.2 },
+          { title: 'Confidence', flex: 1.1 },
+        ],
+        rows: c.values.map((v) => [
+          v.label,
+          criterionText(v.value, v.unit, sheet.unitSystem),
+          v.source,
+          v.confidence,
+        ]),
+      }),
+    );
+  }
+  return blocks;
 }

@@ -3,6 +3,8 @@ import { Text, View } from '@react-pdf/renderer';
 import { pct, qtyParts, qty, unitLabel } from '../format.js';
 import type { PrintableSheet, PrintUnitSystem } from '../printable-sheet.js';
 import { colours } from '../theme.js';
+import { headingBlock, paragraphBlock, tableBlocks, type BlockContext } from '../blocks.js';
+import type { FlowBlock } from '../flow.js';
 import { limitText } from './summary.js';
 import { Heading, Table, type Column } from './table.js';
 
@@ -15,10 +17,7 @@ export function SettingTable(props: {
   extra?: Column[];
 }) {
   const { table, system } = props;
-  const columns: Column[] = table.columns.map((c) => {
-    const unit = unitLabel(c.dimension, system);
-    return { title: unit ? `${c.label} (${unit})` : c.label, flex: 1, align: 'right' as const };
-  });
+  const columns = settingColumns(table, system);
   const extra = props.extra ?? [];
   return (
     <View>
@@ -34,61 +33,114 @@ export function SettingTable(props: {
   );
 }
 
-/** Field settings and tables as printed in the calculation sheet. */
-export function FieldSettings(props: { sheet: PrintableSheet }) {
-  const { sheet } = props;
-  const ev = sheet.evaluation;
-  if (!ev || (ev.fieldSettings.length === 0 && ev.tables.length === 0)) return null;
-  return (
-    <View>
-      <Heading>Field settings</Heading>
-      <Text style={{ fontSize: 7.5, marginBottom: 3 }}>
-        The values the field team sets and measures. The field setting card carries the same values
-        with room to record what was measured.
-      </Text>
-      {ev.fieldSettings.length > 0 && (
-        <Table
-          columns={[
-            { title: 'Setting', flex: 2.6 },
-            { title: 'Value', flex: 1.2, align: 'right' },
-            { title: 'Note', flex: 3 },
-          ]}
-          rows={ev.fieldSettings.map((f) => [
-            f.label,
-            qty(f.value, f.dimension, sheet.unitSystem),
-            f.note ?? '',
-          ])}
-        />
-      )}
-      {ev.tables.map((t) => (
-        <SettingTable key={t.id} table={t} system={sheet.unitSystem} />
-      ))}
-    </View>
-  );
+function settingColumns(table: EvalTable, system: PrintUnitSystem): Column[] {
+  return table.columns.map((c) => {
+    const unit = unitLabel(c.dimension, system);
+    return { title: unit ? `${c.label} (${unit})` : c.label, flex: 1, align: 'right' as const };
+  });
 }
 
-/** The author's reasons for submitting with failed checks. */
-export function Justification(props: { sheet: PrintableSheet }) {
-  const { sheet } = props;
+const SETTINGS_NOTE =
+  'The values the field team sets and measures. The field setting card carries the same values with room to record what was measured.';
+
+/** Field settings and tables as printed in the calculation sheet. */
+export function fieldSettingsBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlock[] {
+  const ev = sheet.evaluation;
+  if (!ev || (ev.fieldSettings.length === 0 && ev.tables.length === 0)) return [];
+  const system = sheet.unitSystem;
+  const blocks: FlowBlock[] = [
+    headingBlock(ctx, 'settings-h', 'Field settings'),
+    { ...paragraphBlock(ctx, 'settings-note', SETTINGS_NOTE, { fontSize: 7.5, marginBottom: 3 }) },
+  ];
+  if (ev.fieldSettings.length > 0) {
+    blocks.push(
+      ...tableBlocks(ctx, 'settings', {
+        continuedTitle: 'Field settings',
+        columns: [
+          { title: 'Setting', flex: 2.6 },
+          { title: 'Value', flex: 1.2, align: 'right' },
+          { title: 'Note', flex: 3 },
+        ],
+        rows: ev.fieldSettings.map((f) => [
+          f.label,
+          qty(f.value, f.dimension, system),
+          f.note ?? '',
+        ]),
+      }),
+    );
+  }
+  ev.tables.forEach((t) => {
+    blocks.push(
+      headingBlock(ctx, `${t.id}-h`, t.title, 2),
+      ...tableBlocks(ctx, t.id, {
+        continuedTitle: t.title,
+        columns: settingColumns(t, system),
+        rows: t.rows.map((row) =>
+          t.columns.map((c) => qtyParts(row[c.key], c.dimension, system).text),
+        ),
+      }),
+    );
+  });
+  return blocks;
+}
+
+/**
+ * The failed checks and the author's reasons for submitting them. Each paragraph of the reasons is
+ * its own block, and none is locked against breaking, so a long justification runs on.
+ */
+export function justificationBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlock[] {
   const failed = sheet.evaluation?.checks.filter((c) => !c.pass) ?? [];
-  if (failed.length === 0) return null;
-  return (
-    <View wrap={false}>
-      <Heading>Justification for failed checks</Heading>
-      {failed.map((c) => (
-        <View key={c.id} style={{ marginBottom: 2 }}>
-          <Text style={{ color: colours.fail, fontWeight: 700 }}>
-            FAIL — {c.label}: {qty(c.value, c.dimension, sheet.unitSystem)} against{' '}
-            {limitText(c, sheet)} ({pct(c.utilisation)})
-          </Text>
-          {c.message && c.message !== c.label && (
-            <Text style={{ color: colours.muted }}>{c.message}</Text>
-          )}
+  if (failed.length === 0) return [];
+  const { m, width } = ctx;
+  const body = { fontSize: 8.5 };
+  const blocks: FlowBlock[] = [
+    headingBlock(ctx, 'justification-h', 'Justification for failed checks'),
+  ];
+  failed.forEach((c, i) => {
+    const head = `FAIL — ${c.label}: ${qty(c.value, c.dimension, sheet.unitSystem)} against ${limitText(c, sheet)} (${pct(c.utilisation)})`;
+    const detail = c.message && c.message !== c.label ? c.message : null;
+    const height =
+      m.height(head, width, { ...body, weight: 700 }) +
+      (detail ? m.height(detail, width, body) : 0) +
+      2;
+    blocks.push({
+      key: `failed-${c.id}`,
+      height,
+      element: (
+        <View key={`failed-${c.id}`} style={{ marginBottom: 2 }} wrap={false}>
+          <Text style={{ color: colours.fail, fontWeight: 700 }}>{head}</Text>
+          {detail && <Text style={{ color: colours.muted }}>{detail}</Text>}
         </View>
-      ))}
-      <View style={{ borderLeftWidth: 2, borderColor: colours.rule, paddingLeft: 6, marginTop: 4 }}>
-        <Text>{sheet.justification ?? 'No justification was recorded with this revision.'}</Text>
-      </View>
-    </View>
-  );
+      ),
+      // The last failed check stays with the start of the reasons.
+      keepWithNext: i === failed.length - 1,
+    });
+  });
+  const reason = sheet.justification ?? 'No justification was recorded with this revision.';
+  const paragraphs = reason.split(/\n+/).filter((p) => p.trim() !== '');
+  const inner = width - 2 - 6;
+  paragraphs.forEach((text, i) => {
+    const key = `justification-${i}`;
+    const first = i === 0;
+    const last = i === paragraphs.length - 1;
+    blocks.push({
+      key,
+      height: m.height(text, inner, body) + (first ? 4 : 0) + (last ? 0 : 3),
+      element: (
+        <View
+          key={key}
+          style={{
+            borderLeftWidth: 2,
+            borderColor: colours.rule,
+            paddingLeft: 6,
+            ...(first ? { marginTop: 4 } : {}),
+            ...(last ? {} : { paddingBottom: 3 }),
+          }}
+        >
+          <Text>{text}</Text>
+        </View>
+      ),
+    });
+  });
+  return blocks;
 }

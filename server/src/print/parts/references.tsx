@@ -1,6 +1,7 @@
 import { Text, View } from '@react-pdf/renderer';
 import type { PrintableSheet } from '../printable-sheet.js';
-import { Heading } from './table.js';
+import { headingBlock, paragraphBlock, type BlockContext } from '../blocks.js';
+import type { FlowBlock } from '../flow.js';
 
 /** Unique references of the derivation steps, the checks and the criteria values, in first-use order. */
 export function collectReferences(sheet: PrintableSheet): string[] {
@@ -17,26 +18,32 @@ export function collectReferences(sheet: PrintableSheet): string[] {
   return [...seen];
 }
 
-export function References(props: { sheet: PrintableSheet }) {
-  const refs = collectReferences(props.sheet);
-  return (
-    <View>
-      <Heading>References</Heading>
-      {refs.length === 0 ? (
-        <Text>No outside references: every step is a definition.</Text>
-      ) : (
-        refs.map((r, i) => (
-          <View key={r} style={{ flexDirection: 'row', marginBottom: 1.5 }} wrap={false}>
-            <Text style={{ width: 22 }}>[{i + 1}]</Text>
-            <Text style={{ flex: 1 }}>{r}</Text>
-          </View>
-        ))
-      )}
-      <Text style={{ marginTop: 4, fontSize: 7 }}>
-        &quot;Common practice&quot; marks a trade fact with no published source; values recalled
-        from memory say so. Steps marked &quot;definition&quot; follow from the definition of the
-        quantity.
-      </Text>
-    </View>
-  );
+const CLOSING_NOTE =
+  '"Common practice" marks a trade fact with no published source; values recalled from memory say so. Steps marked "definition" follow from the definition of the quantity.';
+
+export function referencesBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlock[] {
+  const refs = collectReferences(sheet);
+  const body = { fontSize: 8.5 };
+  const blocks: FlowBlock[] = [headingBlock(ctx, 'refs-h', 'References')];
+  if (refs.length === 0) {
+    blocks.push(
+      paragraphBlock(ctx, 'refs-none', 'No outside references: every step is a definition.'),
+    );
+  }
+  refs.forEach((r, i) => {
+    const key = `ref-${i}`;
+    blocks.push({
+      key,
+      height: ctx.m.height(r, ctx.width - 22, body) + 1.5,
+      element: (
+        <View key={key} style={{ flexDirection: 'row', marginBottom: 1.5 }} wrap={false}>
+          <Text style={{ width: 22 }}>[{i + 1}]</Text>
+          <Text style={{ flex: 1 }}>{r}</Text>
+        </View>
+      ),
+      carry: [headingBlock(ctx, 'refs-cont', 'References (continued)', 2)],
+    });
+  });
+  blocks.push(paragraphBlock(ctx, 'refs-note', CLOSING_NOTE, { fontSize: 7, marginTop: 4 }));
+  return blocks;
 }

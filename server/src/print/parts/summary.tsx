@@ -1,74 +1,96 @@
-import type { CheckResult } from '@holdfast/calc';
-import { Text, View } from '@react-pdf/renderer';
+import { SAFETY_CAUTIONS, type CheckResult } from '@holdfast/calc';
+import { Text } from '@react-pdf/renderer';
+import { headingBlock, paragraphBlock, tableBlocks, type BlockContext } from '../blocks.js';
+import type { FlowBlock } from '../flow.js';
 import { pct, qty } from '../format.js';
 import type { PrintableSheet } from '../printable-sheet.js';
 import { colours } from '../theme.js';
-import { Heading, Table, Verdict } from './table.js';
+import { Verdict, type Column } from './table.js';
 
 /** 'Limit' column text: ≤ for maxima, ≥ for minima, in the sheet's units. */
 export function limitText(c: CheckResult, sheet: PrintableSheet): string {
   return `${c.kind === 'max' ? '≤' : '≥'} ${qty(c.limit, c.dimension, sheet.unitSystem)}`;
 }
 
-export function Purpose(props: { sheet: PrintableSheet }) {
-  return (
-    <View>
-      <Heading>Purpose</Heading>
-      <Text>{props.sheet.purpose}</Text>
-    </View>
-  );
+export function purposeBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlock[] {
+  return [headingBlock(ctx, 'purpose-h', 'Purpose'), paragraphBlock(ctx, 'purpose', sheet.purpose)];
 }
 
+const SUMMARY_COLUMNS: Column[] = [
+  { title: 'Check', flex: 3.2 },
+  { title: 'Value', flex: 1.5, align: 'right' },
+  { title: 'Limit', flex: 1.6, align: 'right' },
+  { title: 'Utilisation', flex: 1.1, align: 'right' },
+  { title: 'Result', width: 40, align: 'center' },
+];
+
+/** Utilisation is explained once, under the heading, in the words the table uses. */
+const UTILISATION_NOTE =
+  'Utilisation is value ÷ limit for an upper limit and limit ÷ value for a lower one; above 100 % fails.';
+
 /** Results against the acceptance criteria: one row per check with a worded verdict. */
-export function Summary(props: { sheet: PrintableSheet }) {
-  const { sheet } = props;
+export function summaryBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlock[] {
   const ev = sheet.evaluation;
+  const heading = headingBlock(ctx, 'summary-h', 'Summary of checks');
   if (!ev) {
-    return (
-      <View>
-        <Heading>Summary of checks</Heading>
-        <Text style={{ color: colours.muted }}>
-          This revision has not been evaluated yet: no results to report.
-        </Text>
-      </View>
-    );
+    return [
+      heading,
+      paragraphBlock(
+        ctx,
+        'summary-none',
+        'This revision has not been evaluated yet: no results to report.',
+        { fontSize: 8.5, color: colours.muted },
+      ),
+    ];
   }
   const failed = ev.checks.filter((c) => !c.pass).length;
-  return (
-    <View>
-      <Heading>Summary of checks</Heading>
-      <Text style={{ marginBottom: 4 }}>
-        {ev.checks.length} checks:{' '}
-        <Text style={{ fontWeight: 700, color: failed ? colours.fail : colours.pass }}>
-          {failed === 0 ? 'all pass' : `${failed} FAIL`}
+  const verdict = failed === 0 ? 'all pass' : `${failed} FAIL`;
+  const tail = failed > 0 ? ' — see "Justification for failed checks".' : '.';
+  const intro = `${ev.checks.length} checks: ${verdict}${tail} ${UTILISATION_NOTE}`;
+  const verdictHeight = ctx.m.lineHeight({ fontSize: 7.5, weight: 700 }) + 2;
+  const blocks: FlowBlock[] = [
+    heading,
+    {
+      key: 'summary-intro',
+      height: ctx.m.height(intro, ctx.width, { fontSize: 8.5 }) + 4,
+      element: (
+        <Text key="summary-intro" style={{ marginBottom: 4 }}>
+          {ev.checks.length} checks:{' '}
+          <Text style={{ fontWeight: 700, color: failed ? colours.fail : colours.pass }}>
+            {verdict}
+          </Text>
+          {tail} {UTILISATION_NOTE}
         </Text>
-        {failed > 0 ? ' — see "Justification for failed checks".' : '.'} Utilisation is value ÷
-        limit for an upper limit and limit ÷ value for a lower one; above 100 % fails.
-      </Text>
-      <Table
-        columns={[
-          { title: 'Check', flex: 3.2 },
-          { title: 'Value', flex: 1.5, align: 'right' },
-          { title: 'Limit', flex: 1.6, align: 'right' },
-          { title: 'Utilisation', flex: 1.1, align: 'right' },
-          { title: 'Result', width: 40, align: 'center' },
-        ]}
-        rows={ev.checks.map((c) => [
-          c.label,
-          qty(c.value, c.dimension, sheet.unitSystem),
-          limitText(c, sheet),
-          pct(c.utilisation),
-          <Verdict key={c.id} pass={c.pass} />,
-        ])}
-      />
-      {ev.warnings.length > 0 && (
-        <View style={{ marginBottom: 4 }}>
-          <Text style={{ fontWeight: 700 }}>Notes from the calculation</Text>
-          {ev.warnings.map((w) => (
-            <Text key={w}>• {w}</Text>
-          ))}
-        </View>
-      )}
-    </View>
-  );
+      ),
+      keepWithNext: true,
+    },
+    ...tableBlocks(ctx, 'summary', {
+      columns: SUMMARY_COLUMNS,
+      continuedTitle: 'Summary of checks',
+      rows: ev.checks.map((c) => [
+        c.label,
+        qty(c.value, c.dimension, sheet.unitSystem),
+        limitText(c, sheet),
+        pct(c.utilisation),
+        { node: <Verdict key={c.id} pass={c.pass} />, height: verdictHeight },
+      ]),
+    }),
+  ];
+  // The cautions every evaluation carries are printed once, in the caution block above.
+  const notes = ev.warnings.filter((w) => !SAFETY_CAUTIONS.includes(w));
+  if (notes.length > 0) {
+    blocks.push(
+      paragraphBlock(ctx, 'notes-h', 'Notes from the calculation', { fontSize: 8.5, weight: 700 }),
+    );
+    blocks[blocks.length - 1].keepWithNext = true;
+    notes.forEach((w, i) =>
+      blocks.push(
+        paragraphBlock(ctx, `note-${i}`, `• ${w}`, {
+          fontSize: 8.5,
+          marginBottom: i === notes.length - 1 ? 4 : 0,
+        }),
+      ),
+    );
+  }
+  return blocks;
 }

@@ -14,68 +14,96 @@ export interface Column {
 
 type Cell = string | ReactNode;
 
+const box = (c: Column) => (c.width !== undefined ? { width: c.width } : { flex: c.flex ?? 1 });
+
+/** Column header row; `ruleAbove` draws the table's top rule (the first piece of a table). */
+export function TableHeader(props: { columns: Column[]; fontSize?: number; ruleAbove?: boolean }) {
+  const fontSize = props.fontSize ?? 7.8;
+  return (
+    <View
+      wrap={false}
+      minPresenceAhead={36}
+      style={{
+        flexDirection: 'row',
+        backgroundColor: colours.band,
+        borderBottomWidth: 0.6,
+        borderColor: colours.ink,
+        ...(props.ruleAbove ? { borderTopWidth: 1 } : {}),
+      }}
+    >
+      {props.columns.map((c, i) => (
+        <Text
+          key={i}
+          style={{
+            ...box(c),
+            padding: 3,
+            fontSize: fontSize - 0.8,
+            fontWeight: 700,
+            textAlign: c.align ?? 'left',
+          }}
+        >
+          {c.title}
+        </Text>
+      ))}
+    </View>
+  );
+}
+
+/** One ruled row; `last` adds the space a table leaves below itself. */
+export function TableRow(props: {
+  columns: Column[];
+  row: Cell[];
+  fontSize?: number;
+  last?: boolean;
+}) {
+  const { columns } = props;
+  const fontSize = props.fontSize ?? 7.8;
+  return (
+    <View
+      wrap={false}
+      style={{
+        flexDirection: 'row',
+        borderBottomWidth: 0.4,
+        borderColor: colours.rule,
+        ...(props.last ? { marginBottom: 6 } : {}),
+      }}
+    >
+      {props.row.map((cell, i) => {
+        const c = columns[i];
+        const style = {
+          ...box(c),
+          paddingVertical: 2,
+          paddingHorizontal: 3,
+          fontSize,
+          textAlign: c.align ?? 'left',
+          ...(c.mono ? monoFont : {}),
+        } as const;
+        return typeof cell === 'string' ? (
+          <Text key={i} style={style}>
+            {cell}
+          </Text>
+        ) : (
+          <View key={i} style={{ ...box(c), padding: 2 }}>
+            {cell}
+          </View>
+        );
+      })}
+    </View>
+  );
+}
+
 /**
  * A ruled table whose rows never split across pages; the header row stays with at least
- * the first rows, so a page never ends on a lone header.
+ * the first rows, so a page never ends on a lone header. (The calculation sheet cuts its tables
+ * into blocks instead: see tableBlocks.)
  */
 export function Table(props: { columns: Column[]; rows: Cell[][]; fontSize?: number }) {
-  const { columns, rows } = props;
-  const fontSize = props.fontSize ?? 7.8;
-  const box = (c: Column) => (c.width !== undefined ? { width: c.width } : { flex: c.flex ?? 1 });
+  const { columns, rows, fontSize } = props;
   return (
     <View style={{ borderTopWidth: 1, borderColor: colours.ink, marginBottom: 6 }}>
-      <View
-        wrap={false}
-        minPresenceAhead={36}
-        style={{
-          flexDirection: 'row',
-          backgroundColor: colours.band,
-          borderBottomWidth: 0.6,
-          borderColor: colours.ink,
-        }}
-      >
-        {columns.map((c, i) => (
-          <Text
-            key={i}
-            style={{
-              ...box(c),
-              padding: 3,
-              fontSize: fontSize - 0.8,
-              fontWeight: 700,
-              textAlign: c.align ?? 'left',
-            }}
-          >
-            {c.title}
-          </Text>
-        ))}
-      </View>
+      <TableHeader columns={columns} fontSize={fontSize} />
       {rows.map((row, r) => (
-        <View
-          key={r}
-          wrap={false}
-          style={{ flexDirection: 'row', borderBottomWidth: 0.4, borderColor: colours.rule }}
-        >
-          {row.map((cell, i) => {
-            const c = columns[i];
-            const style = {
-              ...box(c),
-              paddingVertical: 2,
-              paddingHorizontal: 3,
-              fontSize,
-              textAlign: c.align ?? 'left',
-              ...(c.mono ? monoFont : {}),
-            } as const;
-            return typeof cell === 'string' ? (
-              <Text key={i} style={style}>
-                {cell}
-              </Text>
-            ) : (
-              <View key={i} style={{ ...box(c), padding: 2 }}>
-                {cell}
-              </View>
-            );
-          })}
-        </View>
+        <TableRow key={r} columns={columns} row={row} fontSize={fontSize} />
       ))}
     </View>
   );

@@ -26,6 +26,8 @@ export interface PdfFacts {
   pages: number;
   /** Page size in pt from pdfinfo, e.g. { width: 612, height: 792 }. */
   size: { width: number; height: number };
+  /** Size of every page, in order. */
+  pageSizes: { width: number; height: number }[];
   /** Text per page (pdftotext -layout). */
   pageText: string[];
   /** Text per page in content-stream order (pdftotext -raw): table cells stay in row order. */
@@ -42,6 +44,10 @@ export function inspectPdf(pdf: Buffer, name: string): PdfFacts {
   const info = execFileSync('pdfinfo', [file]).toString();
   const pages = Number(/Pages:\s+(\d+)/.exec(info)?.[1]);
   const m = /Page size:\s+([\d.]+) x ([\d.]+) pts/.exec(info);
+  const perPage = execFileSync('pdfinfo', ['-f', '1', '-l', String(pages), file]).toString();
+  const pageSizes = [...perPage.matchAll(/Page\s+\d+ size:\s+([\d.]+) x ([\d.]+) pts/g)].map(
+    (x) => ({ width: Number(x[1]), height: Number(x[2]) }),
+  );
   const text = execFileSync('pdftotext', ['-layout', file, '-']).toString();
   const raw = execFileSync('pdftotext', ['-raw', file, '-']).toString();
   const fonts = execFileSync('pdffonts', [file])
@@ -58,6 +64,7 @@ export function inspectPdf(pdf: Buffer, name: string): PdfFacts {
     file,
     pages,
     size: { width: Number(m?.[1]), height: Number(m?.[2]) },
+    pageSizes,
     pageText: text.split('\f').slice(0, pages),
     rawPageText: raw.split('\f').slice(0, pages),
     text,
