@@ -1,5 +1,7 @@
+import type { Dimension } from '@holdfast/calc';
 import { describe, expect, it } from 'vitest';
 import { compareLabels } from './build-printable-sheet.js';
+import { enteredText } from './format.js';
 import { markingText } from './parts/marking.js';
 import { collectReferences } from './parts/references.js';
 import { niceTicks, tickLabel } from './parts/ticks.js';
@@ -17,6 +19,13 @@ describe('buildPrintableSheet', () => {
     // 12 400 N / 4.448 222 N/lbf = 2787.6 lbf
     expect(force.converted).toBe('2788 lbf');
     expect(us.inputs.find((i) => i.field.key === 'hotMetal')!.entered).toBe('Yes');
+    // Units print as the unit table labels them, not in the parser's spelling.
+    const field = (dimension: Dimension) => ({ ...width.field, dimension });
+    expect(enteredText({ value: 30, unit: 'degC' }, field('temperature'))).toBe('30 °C');
+    expect(enteredText({ value: 20, unit: 'W/(m^2 K)' }, field('heatTransferCoefficient'))).toBe(
+      '20 W/(m²·K)',
+    );
+    expect(enteredText({ value: 1.2, unit: 'kg m^2' }, field('inertia'))).toBe('1.2 kg·m²');
     expect(us.inputs.find((i) => i.field.key === 'torqueReference')!.entered).toBe(
       'Motor rated torque',
     );

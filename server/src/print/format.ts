@@ -1,4 +1,5 @@
 import {
+  DIMENSIONS,
   toDisplay,
   toSI,
   type Dimension,
@@ -73,7 +74,21 @@ export function enteredText(value: InputValue | null | undefined, field: FieldDe
     return field.choices?.find((c) => c.value === value)?.label ?? value;
   }
   if (typeof value === 'number') return String(value);
-  return `${value.value} ${value.unit.replace(/ /g, '·').replace(/\^2/g, '²')}`;
+  return `${value.value} ${unitText(value.unit, field)}`;
+}
+
+/** A typed unit as printed: the unit table's label when the unit is one it lists ('degC' → '°C'). */
+function unitText(unit: string, field: FieldDefinition): string {
+  const known = field.dimension
+    ? DIMENSIONS[field.dimension].units.find((u) => u.unit === unit)
+    : undefined;
+  if (known?.label) return known.label;
+  return unit
+    .replace(/\bdegC\b/g, '°C')
+    .replace(/\bdegF\b/g, '°F')
+    .replace(/ /g, '·')
+    .replace(/\^2/g, '²')
+    .replace(/\^3/g, '³');
 }
 
 /** Prints a stored input in the sheet's unit system (quantities only; others as entered). */
