@@ -1,4 +1,4 @@
-import { Derivation } from '../core/step.js';
+import { Derivation, type StepOptions } from '../core/step.js';
 import { backOffAngleForPreload } from './back-off.js';
 import { discConstants, type DiscConstants } from './disc.js';
 import * as fd from './formulas.js';
@@ -51,73 +51,56 @@ export function deriveStackSet(input: StackSetInput, d: Derivation, prefix = '')
   validateStack(input.stack);
   const { stack, lead, angle } = input;
   const disc = stack.disc;
-  const o = (id: string) => ({ id: prefix + id });
-  const delta = d.step(f.fDelta, { De: disc.De, Di: disc.Di }, o('delta'));
-  const K1 = d.step(f.fK1, { d: delta }, o('K1'));
-  const K2 = d.step(f.fK2, { d: delta }, o('K2'));
-  const K3 = d.step(f.fK3, { d: delta }, o('K3'));
+  const o = stackStepOptions(prefix);
+  const delta = d.step(f.fDelta, { De: disc.De, Di: disc.Di }, o.delta);
+  const K1 = d.step(f.fK1, { d: delta }, o.K1);
+  const K2 = d.step(f.fK2, { d: delta }, o.K2);
+  const K3 = d.step(f.fK3, { d: delta }, o.K3);
   const c = discConstants(disc);
   let K4 = 1;
   if (c.K4 !== 1) {
-    const g = { tr: c.tCalc, t: disc.t, l0: disc.l0 };
-    const C1 = d.step(f.fC1, g, o('C1'));
-    const C2 = d.step(f.fC2, { C1, ...g }, o('C2'));
-    K4 = d.step(f.fK4, { C1, C2 }, o('K4'));
+    const C1 = d.step(f.fC1, { tr: c.tCalc, t: disc.t, l0: disc.l0 }, o.C1);
+    const C2 = d.step(f.fC2, { C1, tr: c.tCalc, t: disc.t, l0: disc.l0 }, o.C2);
+    K4 = d.step(f.fK4, { C1, C2 }, o.K4);
   }
   const t = c.tCalc;
-  const h0 = d.step(f.fH0, { l0: disc.l0, t }, o('h0'));
-  const release = d.step(f.fRelease, { Pt: lead, theta: angle }, o('release'));
+  const h0 = d.step(f.fH0, { l0: disc.l0, t }, o.h0);
+  const release = d.step(f.fRelease, { Pt: lead, theta: angle }, o.release);
   const i = stack.seriesCount;
   const n = stack.parallelCount;
-  const s = d.step(f.fSetDeflection, { h0, D: release, i }, o('set-deflection'));
-  const setRatio = d.step(f.fRatio, { s, h0 }, o('set-ratio'));
-  const base = { E: disc.E, nu: disc.nu, t, K1, K4, De: disc.De, h0 };
-  const F1 = d.step(f.fDiscForce, { ...base, s }, o('disc-force'));
-  const Fc = d.step(
-    f.fDiscForce,
-    { ...base, s: h0 },
-    {
-      ...o('flat-force'),
-      label: 'Flat load of one disc (s = h₀)',
-      symbol: 'F_c',
-    },
-  );
-  const Fn = d.step(f.fStackNominal, { n, F1 }, o('stack-force'));
-  const fr = { Fn, wM: stack.frictionCone, wR: stack.frictionEdge, n };
-  const Fload = d.step(f.fStackLoading, fr, o('stack-force-loading'));
-  const Funload = d.step(f.fStackUnloading, fr, {
-    ...o('preload'),
-    label: 'Preload after back-off (stack unloading, with friction)',
-    symbol: 'F_V',
-  });
+  const s = d.step(f.fSetDeflection, { h0, D: release, i }, o.setDeflection);
+  const setRatio = d.step(f.fRatio, { s, h0 }, o.setRatio);
+  // The value objects below are written out in full rather than spread from a shared base
+  // ({ ...base, s }): spreading was a visible share of a sheet's evaluation time.
+  const { E, nu, De } = disc;
+  const F1 = d.step(f.fDiscForce, { E, nu, t, K1, K4, De, h0, s }, o.discForce);
+  const Fc = d.step(f.fDiscForce, { E, nu, t, K1, K4, De, h0, s: h0 }, o.flatForce);
+  const Fn = d.step(f.fStackNominal, { n, F1 }, o.stackForce);
+  const wM = stack.frictionCone;
+  const wR = stack.frictionEdge;
+  const fr = { Fn, wM, wR, n };
+  const Fload = d.step(f.fStackLoading, fr, o.stackForceLoading);
+  const Funload = d.step(f.fStackUnloading, fr, o.preload);
   const flatNominal = n * Fc;
   const flatStackLoading = d.step(
     f.fStackLoading,
-    { ...fr, Fn: flatNominal },
-    {
-      ...o('flat-stack-force'),
-      label: 'Stack force at flat while tightening',
-      symbol: 'F_c,load',
-    },
+    { Fn: flatNominal, wM, wR, n },
+    o.flatStackForce,
   );
-  const sv = { ...base, K2, K3, d: delta, s };
-  const OM = d.step(f.fSigmaOM, sv, o('sigma-OM'));
-  const I = d.step(f.fSigmaI, sv, o('sigma-I'));
-  const II = d.step(f.fSigmaII, sv, o('sigma-II'));
-  const III = d.step(f.fSigmaIII, sv, o('sigma-III'));
-  const IV = d.step(f.fSigmaIV, sv, o('sigma-IV'));
+  const sv = { E, nu, t, K1, K4, De, h0, K2, K3, d: delta, s };
+  const OM = d.step(f.fSigmaOM, sv, o.sigmaOM);
+  const I = d.step(f.fSigmaI, sv, o.sigmaI);
+  const II = d.step(f.fSigmaII, sv, o.sigmaII);
+  const III = d.step(f.fSigmaIII, sv, o.sigmaIII);
+  const IV = d.step(f.fSigmaIV, sv, o.sigmaIV);
   const sigmaOMFlat = d.step(
     f.fSigmaOM,
-    { ...sv, s: h0 },
-    {
-      ...o('sigma-OM-flat'),
-      label: 'Stress OM at flat (s = h₀)',
-      symbol: 'σ_OM,c',
-    },
+    { E, nu, t, K1, K4, De, h0, K2, K3, d: delta, s: h0 },
+    o.sigmaOMFlat,
   );
-  const L0 = d.step(f.fFreeLength, { i, n, l0: disc.l0, t }, o('free-length'));
-  const Lc = d.step(f.fFlatLength, { i, n, t }, o('flat-length'));
-  const L1 = d.step(f.fSetLength, { L0, i, s }, o('set-length'));
+  const L0 = d.step(f.fFreeLength, { i, n, l0: disc.l0, t }, o.freeLength);
+  const Lc = d.step(f.fFlatLength, { i, n, t }, o.flatLength);
+  const L1 = d.step(f.fSetLength, { L0, i, s }, o.setLength);
   let angleForRequired: number | undefined;
   if (input.requiredPreload !== undefined && input.requiredPreload > 0) {
     const deg = backOffAngleForPreload(stack, lead, input.requiredPreload, c);
@@ -143,4 +126,53 @@ export function deriveStackSet(input: StackSetInput, d: Derivation, prefix = '')
     setLength: L1,
     angleForRequired,
   };
+}
+
+/** Step ids (prefixed) and label overrides of a stack set's derivation. */
+function stepOptionsFor(prefix: string) {
+  const o = (id: string, label?: string, symbol?: string): StepOptions =>
+    label === undefined ? { id: prefix + id } : { id: prefix + id, label, symbol };
+  return {
+    delta: o('delta'),
+    K1: o('K1'),
+    K2: o('K2'),
+    K3: o('K3'),
+    C1: o('C1'),
+    C2: o('C2'),
+    K4: o('K4'),
+    h0: o('h0'),
+    release: o('release'),
+    setDeflection: o('set-deflection'),
+    setRatio: o('set-ratio'),
+    discForce: o('disc-force'),
+    flatForce: o('flat-force', 'Flat load of one disc (s = h₀)', 'F_c'),
+    stackForce: o('stack-force'),
+    stackForceLoading: o('stack-force-loading'),
+    preload: o('preload', 'Preload after back-off (stack unloading, with friction)', 'F_V'),
+    flatStackForce: o('flat-stack-force', 'Stack force at flat while tightening', 'F_c,load'),
+    sigmaOM: o('sigma-OM'),
+    sigmaI: o('sigma-I'),
+    sigmaII: o('sigma-II'),
+    sigmaIII: o('sigma-III'),
+    sigmaIV: o('sigma-IV'),
+    sigmaOMFlat: o('sigma-OM-flat', 'Stress OM at flat (s = h₀)', 'σ_OM,c'),
+    freeLength: o('free-length'),
+    flatLength: o('flat-length'),
+    setLength: o('set-length'),
+  };
+}
+
+/**
+ * The step options depend only on the prefix, and a program uses a handful of prefixes
+ * ('holder-', 'a-', …), so they are built once per prefix instead of on every evaluation (which
+ * also hands the derivation the same id strings each time, already hashed for its id index).
+ */
+const optionsByPrefix = new Map<string, ReturnType<typeof stepOptionsFor>>();
+function stackStepOptions(prefix: string): ReturnType<typeof stepOptionsFor> {
+  let o = optionsByPrefix.get(prefix);
+  if (!o) {
+    o = stepOptionsFor(prefix);
+    optionsByPrefix.set(prefix, o);
+  }
+  return o;
 }
