@@ -47,6 +47,9 @@ export class ObjectStorage implements OnModuleInit, OnModuleDestroy {
     } else {
       this.endpoint = s.S3_ENDPOINT ?? 'http://127.0.0.1:4569';
     }
+    // Holdfast runs on Node 20 by design; the SDK's notice that later SDK releases will want
+    // Node 22 says nothing about this pinned version and would print on every start and test.
+    process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED ??= 'true';
     this.client = new S3Client({
       endpoint: this.endpoint,
       region: s.S3_REGION,
