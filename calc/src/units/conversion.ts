@@ -12,7 +12,8 @@ export interface UnitConversion {
   offset: number;
 }
 
-const cache = new Map<string, UnitConversion>();
+/** Resolved conversions by dimension, then by the unit text as given. */
+const cache = new Map<Dimension, Map<string, UnitConversion>>();
 
 /** Normalises typed unit text: '·' and '*' products, superscripts, degree signs, spacing. */
 export function normaliseUnitText(text: string): string {
@@ -63,8 +64,14 @@ export function resolveUnit(
   dimension: Dimension,
   field = 'unit',
 ): UnitConversion {
-  const key = `${dimension}|${unitText}`;
-  const hit = cache.get(key);
+  // Two lookups instead of one on a `${dimension}|${unitText}` key: every quantity input of
+  // every evaluation comes through here, and the joined key was a new string to hash each time.
+  let byText = cache.get(dimension);
+  if (!byText) {
+    byText = new Map();
+    cache.set(dimension, byText);
+  }
+  const hit = byText.get(unitText);
   if (hit) return hit;
   const info = DIMENSIONS[dimension];
   let text = normaliseUnitText(unitText);
@@ -89,7 +96,7 @@ export function resolveUnit(
       },
     ]);
   }
-  cache.set(key, conversion);
+  byText.set(unitText, conversion);
   return conversion;
 }
 

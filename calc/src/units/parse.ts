@@ -77,9 +77,9 @@ export function requireRange(
   bounds: { min?: number; max?: number; exclusiveMin?: boolean; exclusiveMax?: boolean },
   unitLabel = '',
 ): void {
-  const u = unitLabel ? ` ${unitLabel}` : '';
   const { min, max, exclusiveMin, exclusiveMax } = bounds;
   if (min !== undefined && (exclusiveMin ? !(value > min) : !(value >= min))) {
+    const u = unitLabel ? ` ${unitLabel}` : '';
     throw new CalcInputError([
       {
         field,
@@ -88,6 +88,7 @@ export function requireRange(
     ]);
   }
   if (max !== undefined && (exclusiveMax ? !(value < max) : !(value <= max))) {
+    const u = unitLabel ? ` ${unitLabel}` : '';
     throw new CalcInputError([
       {
         field,
