@@ -1,0 +1,69 @@
+// Medians for the targets stated as medians (vitest bench prints mean and p75, not the median):
+// full evaluation of each sheet type and the PDF of an approved hoist sheet. Run by
+// `npm run bench` after the vitest benchmarks, on the built workspaces.
+import path from 'node:path';
+import { fileURLToPath, pathToFileURL } from 'node:url';
+
+process.env.NODE_ENV = 'production';
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+const load = (rel) => import(pathToFileURL(path.join(root, rel)).href);
+
+function summary(times) {
+  const t = [...times].sort((a, b) => a - b);
+  const at = (q) => t[Math.min(t.length - 1, Math.floor(q * t.length))];
+  return { median: at(0.5), p10: at(0.1), p90: at(0.9), n: t.length };
+}
+
+const fmt = (ms) => (ms < 10 ? `${ms.toFixed(3)} ms` : `${ms.toFixed(0)} ms`);
+const rows = [];
+
+const calc = await load('calc/dist/index.js');
+const criteria = calc.getCriteriaSet('general-industry');
+for (const sheet of calc.sheetTypes) {
+  const inputs = calc.defaultInputs(sheet);
+  for (let i = 0; i < 500; i++) sheet.evaluate(inputs, criteria);
+  const times = [];
+  for (let i = 0; i < 3000; i++) {
+    const a = performance.now();
+    sheet.evaluate(inputs, criteria);
+    times.push(performance.now() - a);
+  }
+  rows.push([`full evaluation, ${sheet.id}`, summary(times), '≤ 0.5 ms']);
+}
+
+const render = await load('server/dist/print/render.js');
+const { realPrintable } = await load('server/dist/print/testing/real-sheet.js');
+await render.warmUpPdfRenderer();
+const hoistType = calc.getSheetType('hoist-shoe-brake');
+// A different revision each time (load and spring force vary), so every render shapes new numbers.
+const sheets = Array.from({ length: 12 }, (_, k) => {
+  const inputs = calc.defaultInputs(hoistType);
+  return realPrintable({
+    sheetTypeId: 'hoist-shoe-brake',
+    state: 'approved',
+    inputs: {
+      ...inputs,
+      load: { value: 9000 + 137 * k, unit: 'kg' },
+      springForce: { value: 1050 + 31 * k, unit: 'N' },
+    },
+  });
+});
+for (let i = 0; i < 2; i++) await render.renderSheetPdf(sheets[i]);
+const pdfTimes = [];
+let pages = 0;
+for (let i = 0; i < 15; i++) {
+  const a = performance.now();
+  const r = await render.renderSheet(sheets[i % sheets.length]);
+  pdfTimes.push(performance.now() - a);
+  if (r.mode !== 'planned')
+    throw new Error(`PDF fell back to ${r.mode} (pages ${r.overflowPages})`);
+  pages = Number(/\/Type \/Pages[^>]*\/Count (\d+)/.exec(r.pdf.toString('latin1'))?.[1] ?? 0);
+}
+rows.push([`PDF, approved hoist sheet (${pages || '?'} pages), A4`, summary(pdfTimes), '≤ 1 s']);
+
+console.log('\nMedians (p10 … p90, n runs)');
+for (const [name, s, target] of rows) {
+  console.log(
+    `  ${name.padEnd(52)} median ${fmt(s.median).padStart(9)}  (${fmt(s.p10)} … ${fmt(s.p90)}, n=${s.n})  target ${target}`,
+  );
+}
