@@ -45,6 +45,23 @@ describe('defineFormula', () => {
     expect(f.substitute({ r: 0.25, t2: Math.PI / 3, J: 4, w: 2 })).toContain('(2.000 rad/s)²');
   });
 
+  it('prints a symbol used twice the same way, wrapping only where a power follows', () => {
+    const f = defineFormula({
+      id: 'twice',
+      label: 'twice',
+      symbol: 'V',
+      expression: 'a * a^2 + b',
+      symbols: {
+        a: { text: 'a', dimension: 'length' },
+        b: { text: 'b', dimension: 'dimensionless' },
+      },
+      dimension: 'dimensionless',
+      reference: 'x',
+    });
+    expect(f.substitute({ a: 0.15, b: 2 })).toBe('V = 150.0 mm · (150.0 mm)² + 2.000');
+    expect(f.substitute({ a: -0.15, b: 2 })).toBe('V = (−150.0 mm) · (−150.0 mm)² + 2.000');
+  });
+
   it('wraps negative substitutions in parentheses', () => {
     expect(torque.substitute({ mu: 0.35, N: -100, D: 0.4 })).toContain('(−100.0 N)');
   });

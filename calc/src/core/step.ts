@@ -48,6 +48,8 @@ interface ValueSlot {
   units: PrintUnits;
   /** Followed by a power (², ³, ^): a value with a unit is then wrapped in parentheses. */
   powered: boolean;
+  /** Where substitute() keeps the printed value of a symbol used more than once, else −1. */
+  memo: number;
 }
 
 /** Defines a formula; throws at load time if the expression uses an undeclared symbol. */
@@ -66,6 +68,13 @@ export function defineFormula<S extends string, D extends Dimension>(
   const pieces: TextPiece[] = renderPieces(node, declared);
   const symbols = spec.symbols as Record<string, SymbolSpec>;
   // What substitute() needs per value, worked out once here rather than per printed value.
+  // A symbol used more than once gets a memo slot: substitute() prints its value once per call.
+  const uses = new Map<string, number>();
+  for (const p of pieces) {
+    if (typeof p !== 'string') uses.set(p.symbol, (uses.get(p.symbol) ?? 0) + 1);
+  }
+  const memoIndex = new Map<string, number>();
+  for (const [name, count] of uses) if (count > 1) memoIndex.set(name, memoIndex.size);
   const slots: (string | ValueSlot)[] = pieces.map((p, k) => {
     if (typeof p === 'string') return p;
     const next = pieces[k + 1];
@@ -73,6 +82,7 @@ export function defineFormula<S extends string, D extends Dimension>(
       symbol: p.symbol,
       units: printUnitsOf(symbols[p.symbol].dimension),
       powered: typeof next === 'string' && /^[²³^]/.test(next),
+      memo: memoIndex.get(p.symbol) ?? -1,
     };
   });
   const prefix = `${spec.symbol} = `;
@@ -87,6 +97,8 @@ export function defineFormula<S extends string, D extends Dimension>(
     },
     substitute(values, symbol) {
       let out = symbol === undefined ? prefix : `${symbol} = `;
+      // A symbol used more than once (t five times in the disc-force formula) is printed once.
+      const memo = memoIndex.size > 0 ? new Array<string>(memoIndex.size) : undefined;
       for (let k = 0; k < slots.length; k++) {
         const p = slots[k];
         if (typeof p === 'string') {
@@ -94,7 +106,10 @@ export function defineFormula<S extends string, D extends Dimension>(
           continue;
         }
         const v = (values as Record<string, number>)[p.symbol];
-        const printed = formatInPrintUnits(v, p.units);
+        const printed =
+          p.memo < 0
+            ? formatInPrintUnits(v, p.units)
+            : (memo![p.memo] ??= formatInPrintUnits(v, p.units));
         // (152.4 mm)², not 152.4 mm²: a power binds to the whole quantity, unit included.
         const wrap = v < 0 || (p.powered && printed.includes(' '));
         out += wrap ? `(${printed})` : printed;
