@@ -83,8 +83,18 @@ export const STANDARD_DISC_SIZES: readonly StandardDiscSize[] = [
   row('B 100', 100, 51, 3.5, 6.3, 13100, CODE_TABLE_2006, 'secondary'),
 ];
 
+/**
+ * The sizes by designation without spaces, built once: a sheet looks its sizes up on every
+ * evaluation, and scanning the table meant a regular-expression replace per row. The first row
+ * of a designation wins, as a scan would find it.
+ */
+const BY_DESIGNATION = new Map<string, StandardDiscSize>();
+for (const r of STANDARD_DISC_SIZES) {
+  const key = r.designation.replace(/\s+/g, '');
+  if (!BY_DESIGNATION.has(key)) BY_DESIGNATION.set(key, r);
+}
+
 /** Finds a standard size by designation ('A 40', 'A40' and 'a 40' all match). */
 export function findStandardDisc(designation: string): StandardDiscSize | undefined {
-  const key = designation.replace(/\s+/g, '').toUpperCase();
-  return STANDARD_DISC_SIZES.find((r) => r.designation.replace(/\s+/g, '') === key);
+  return BY_DESIGNATION.get(designation.replace(/\s+/g, '').toUpperCase());
 }
