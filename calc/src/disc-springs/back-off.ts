@@ -1,5 +1,5 @@
 import { discConstants, type DiscConstants } from './disc.js';
-import { stackForces, type DiscStack } from './stack.js';
+import { stackForces, stackUnloadingAt, type DiscStack } from './stack.js';
 
 /**
  * "Tighten until flat, then back off θ" on a single-start thread of lead P (common practice for
@@ -58,7 +58,8 @@ export function backOffAngleForPreload(
   targetForce: number,
   c: DiscConstants = discConstants(st.disc),
 ): number | undefined {
-  const f = (s: number) => stackForces(st, s, c).unloading - targetForce;
+  const unloading = stackUnloadingAt(st, c);
+  const f = (s: number) => unloading(s) - targetForce;
   const steps = 200;
   let hi = c.h0;
   let fHi = f(hi);

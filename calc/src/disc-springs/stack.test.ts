@@ -2,8 +2,14 @@ import { describe, expect, it } from 'vitest';
 import { isCalcInputError } from '../core/errors.js';
 import { backOffAngleForPreload, backOffPreload, threadRelease } from './back-off.js';
 import { stackCurve, workingBandWarning } from './curve.js';
-import { discForce, TABLE_STEEL } from './disc.js';
-import { stackFlatLength, stackForces, stackFreeLength, type DiscStack } from './stack.js';
+import { discConstants, discForce, discForceAt, TABLE_STEEL } from './disc.js';
+import {
+  stackFlatLength,
+  stackForces,
+  stackFreeLength,
+  stackUnloadingAt,
+  type DiscStack,
+} from './stack.js';
 import { validateStack } from './validate.js';
 
 const a40 = { De: 0.04, Di: 0.0204, t: 2.25e-3, l0: 3.15e-3, ...TABLE_STEEL };
@@ -20,6 +26,21 @@ describe('stacks', () => {
     const s = 0.5e-3;
     expect(stackForces(stack(1, 3), s).nominal).toBeCloseTo(3 * discForce(a40, s), 6);
     expect(stackForces(stack(4, 1), s).nominal).toBeCloseTo(discForce(a40, s), 6);
+  });
+  it('the force of s alone gives the very same doubles as discForce and stackForces', () => {
+    // discForceAt and stackUnloadingAt serve the preload search; it must not drift from them.
+    const reduced = { ...a40, De: 0.125, Di: 0.064, t: 8e-3, l0: 10.6e-3, tReduced: 7.5e-3 };
+    for (const disc of [a40, reduced]) {
+      const st = { ...stack(3, 2, 0.015, 0.02), disc };
+      const c = discConstants(disc);
+      const force = discForceAt(disc, c);
+      const unloading = stackUnloadingAt(st, c);
+      for (let k = 0; k <= 50; k++) {
+        const s = (c.h0 * k) / 37;
+        expect(force(s)).toBe(discForce(disc, s, c));
+        expect(unloading(s)).toBe(stackForces(st, s, c).unloading);
+      }
+    }
   });
   it('free and flat length: L0 = i·(l0 + (n−1)·t), Lc = i·n·t', () => {
     expect(stackFreeLength(stack(3, 2))).toBeCloseTo(3 * (3.15e-3 + 2.25e-3), 12);

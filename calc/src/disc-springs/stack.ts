@@ -1,4 +1,10 @@
-import { discConstants, discForce, type DiscConstants, type DiscSpring } from './disc.js';
+import {
+  discConstants,
+  discForce,
+  discForceAt,
+  type DiscConstants,
+  type DiscSpring,
+} from './disc.js';
 
 /**
  * A stack of `seriesCount` sets in series, each set of `parallelCount` discs nested in parallel.
@@ -39,8 +45,26 @@ export function stackForces(
   c: DiscConstants = discConstants(st.disc),
 ): StackForces {
   const nominal = st.parallelCount * discForce(st.disc, s, c);
-  const w = st.frictionCone * (st.parallelCount - 1) + st.frictionEdge;
+  const w = frictionFactor(st);
   return { nominal, loading: nominal / (1 - w), unloading: nominal / (1 + w) };
+}
+
+/**
+ * The unloading force of stackForces as a function of s alone, for searches that evaluate it
+ * hundreds of times (same doubles, without building the three forces at every point).
+ */
+export function stackUnloadingAt(
+  st: DiscStack,
+  c: DiscConstants = discConstants(st.disc),
+): (s: number) => number {
+  const force = discForceAt(st.disc, c);
+  const w = frictionFactor(st);
+  return (s) => (st.parallelCount * force(s)) / (1 + w);
+}
+
+/** wM·(n − 1) + wR: the friction share of the stack force. */
+function frictionFactor(st: DiscStack): number {
+  return st.frictionCone * (st.parallelCount - 1) + st.frictionEdge;
 }
 
 /** Free length L0 = i·(l0 + (n−1)·t), m (t′ for group 3). */
