@@ -5,7 +5,7 @@ import { fileURLToPath } from 'node:url';
 import { ensureNpmDependencies } from './lib/deps.mjs';
 import { startCluster } from './lib/postgres.mjs';
 import { buildAll } from './lib/build.mjs';
-import { migrateAndSeed } from './lib/app-server.mjs';
+import { SERVER_NODE_FLAGS, migrateAndSeed } from './lib/app-server.mjs';
 import { step } from './lib/log.mjs';
 
 const projectDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
@@ -29,7 +29,11 @@ const env = {
 };
 const children = [
   spawn('npx', ['tsc', '-b', '-w', '--preserveWatchOutput'], { cwd: projectDir, stdio: 'inherit' }),
-  spawn('node', ['--watch', 'server/dist/main.js'], { cwd: projectDir, stdio: 'inherit', env }),
+  spawn('node', [...SERVER_NODE_FLAGS, '--watch', 'server/dist/main.js'], {
+    cwd: projectDir,
+    stdio: 'inherit',
+    env,
+  }),
   spawn('npx', ['vite', '--host', '127.0.0.1'], {
     cwd: path.join(projectDir, 'ui'),
     stdio: 'inherit',
