@@ -2,6 +2,7 @@ import { renderToBuffer } from '@react-pdf/renderer';
 import { createElement } from 'react';
 import { FieldCardDocument } from './field-card-document.js';
 import { registerPdfFonts } from './fonts.js';
+import { rememberEmbeddedFonts } from './font-switch-cache.js';
 import { memoiseGlyphLayout } from './glyph-layout-cache.js';
 import type { PrintableSheet } from './printable-sheet.js';
 import { qrDataUrl } from './qr.js';
@@ -9,11 +10,17 @@ import { TextMeasure } from './measure.js';
 import { PAPER_SIZE } from './paper.js';
 import { SheetDocument, planSheet, type PageMode } from './sheet-document.js';
 
+/** Fonts registered, and pdfkit's font switching remembered per document (idempotent). */
+function setUpRenderer(): void {
+  registerPdfFonts();
+  rememberEmbeddedFonts();
+}
+
 let measure: Promise<TextMeasure> | null = null;
 
 /** The fonts' text measure, loaded once per process. */
 function textMeasure(): Promise<TextMeasure> {
-  registerPdfFonts();
+  setUpRenderer();
   measure ??= TextMeasure.load();
   return measure;
 }
@@ -75,7 +82,7 @@ interface LaidOutPage {
 
 /** Renders the one- or two-page field setting card for the same revision. */
 export async function renderFieldCardPdf(sheet: PrintableSheet): Promise<Buffer> {
-  registerPdfFonts();
+  setUpRenderer();
   memoiseGlyphLayout();
   const qr = sheet.verification ? await qrDataUrl(sheet.verification.url) : null;
   return renderToBuffer(createElement(FieldCardDocument, { sheet, qr }) as never);
@@ -86,7 +93,7 @@ export async function renderFieldCardPdf(sheet: PrintableSheet): Promise<Buffer>
  * does not pay for font loading (several hundred ms). Call it once at start-up, not awaited.
  */
 export async function warmUpPdfRenderer(): Promise<void> {
-  registerPdfFonts();
+  setUpRenderer();
   const { Document, Page, Text } = await import('@react-pdf/renderer');
   const { MONO, SANS } = await import('./fonts.js');
   const doc = createElement(
