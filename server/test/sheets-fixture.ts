@@ -2,6 +2,7 @@
 import { SMTPServer } from 'smtp-server';
 import { expect } from 'vitest';
 import { CriteriaService } from '../src/criteria/criteria.service.js';
+import { JobQueue, MAIL_QUEUE } from '../src/outbox/job-queue.js';
 import { createTestContext, type DemoLogin, type TestContext } from './test-context.js';
 
 export interface CapturedMail {
@@ -106,6 +107,9 @@ export async function createSheetsContext(
     smtp,
     async resetAll() {
       await ctx.reset();
+      // Jobs left queued by earlier files point at truncated outbox rows; the worker would
+      // spend one poll on each before reaching this test's mail.
+      await ctx.app.get(JobQueue).boss.purgeQueue(MAIL_QUEUE);
       await criteria.onModuleInit();
       smtp.mails.length = 0;
     },
