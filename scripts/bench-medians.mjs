@@ -32,22 +32,10 @@ for (const sheet of calc.sheetTypes) {
 }
 
 const render = await load('server/dist/print/render.js');
-const { realPrintable } = await load('server/dist/print/testing/real-sheet.js');
+const { hoistRevisionVariants } = await load('server/dist/print/testing/real-sheet.js');
 await render.warmUpPdfRenderer();
-const hoistType = calc.getSheetType('hoist-shoe-brake');
 // A different revision each time (load and spring force vary), so every render shapes new numbers.
-const sheets = Array.from({ length: 12 }, (_, k) => {
-  const inputs = calc.defaultInputs(hoistType);
-  return realPrintable({
-    sheetTypeId: 'hoist-shoe-brake',
-    state: 'approved',
-    inputs: {
-      ...inputs,
-      load: { value: 9000 + 137 * k, unit: 'kg' },
-      springForce: { value: 1050 + 31 * k, unit: 'N' },
-    },
-  });
-});
+const sheets = hoistRevisionVariants(12);
 for (let i = 0; i < 2; i++) await render.renderSheetPdf(sheets[i]);
 const pdfTimes = [];
 let pages = 0;

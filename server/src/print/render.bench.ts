@@ -1,29 +1,16 @@
-import { defaultInputs, getSheetType, type SheetInputs } from '@holdfast/calc';
 import { bench, describe } from 'vitest';
 import { renderFieldCardPdf, renderSheetPdf, warmUpPdfRenderer } from './render.js';
 import { hoistPrintable } from './testing/hoist-fixture.js';
-import { realPrintable } from './testing/real-sheet.js';
+import { hoistRevisionVariants, realPrintable } from './testing/real-sheet.js';
 
 // Fonts are parsed once per process (warm-up); the figures are the steady cost per request.
 await warmUpPdfRenderer();
 const hoist = realPrintable({ sheetTypeId: 'hoist-shoe-brake', state: 'approved' });
 const small = hoistPrintable({ state: 'approved' });
 
-// Revisions that differ in their numbers (load and spring force), so each render shapes new
-// strings: the shaped-text cache only helps with what sheets share (labels, units, formulas).
-const hoistType = getSheetType('hoist-shoe-brake')!;
-const variants = Array.from({ length: 12 }, (_, k) => {
-  const inputs = defaultInputs(hoistType) as SheetInputs;
-  return realPrintable({
-    sheetTypeId: 'hoist-shoe-brake',
-    state: 'approved',
-    inputs: {
-      ...inputs,
-      load: { value: 9000 + 137 * k, unit: 'kg' },
-      springForce: { value: 1050 + 31 * k, unit: 'N' },
-    },
-  });
-});
+// Revisions that differ in their numbers, so each render shapes new strings: the shaped-text
+// cache only helps with what sheets share (labels, units, formulas).
+const variants = hoistRevisionVariants(12);
 let next = 0;
 const opts = { iterations: 10, warmupIterations: 2, time: 0 };
 

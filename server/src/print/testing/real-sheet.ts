@@ -76,3 +76,22 @@ export function realPrintable(o: {
     generatedAt: new Date('2026-12-01T12:00:00Z'),
   });
 }
+
+/**
+ * Approved hoist sheets that differ in their numbers (load and spring force), so a benchmark
+ * that renders one after another shapes new strings each time, as real prints do.
+ */
+export function hoistRevisionVariants(count: number): PrintableSheet[] {
+  const type = getSheetType('hoist-shoe-brake')!;
+  return Array.from({ length: count }, (_, k) =>
+    realPrintable({
+      sheetTypeId: type.id,
+      state: 'approved',
+      inputs: {
+        ...(defaultInputs(type) as SheetInputs),
+        load: { value: 9000 + 137 * k, unit: 'kg' },
+        springForce: { value: 1050 + 31 * k, unit: 'N' },
+      },
+    }),
+  );
+}
