@@ -1,6 +1,7 @@
 import type { TextMeasure } from './measure.js';
 import { titleBlockHeight } from './parts/title-block.js';
 import type { Paper, PrintableSheet } from './printable-sheet.js';
+import { s } from './theme.js';
 
 /** Page sizes in PostScript points (1/72 in). */
 export const PAPER_SIZE: Record<Paper, { width: number; height: number }> = {
@@ -8,9 +9,10 @@ export const PAPER_SIZE: Record<Paper, { width: number; height: number }> = {
   LETTER: { width: 612, height: 792 },
 };
 
-export const MARGIN_X = 34;
-export const PADDING_TOP = 28;
-export const PADDING_BOTTOM = 40;
+// The page's margins as the page style sets them.
+const MARGIN_X = s.page.paddingHorizontal;
+const PADDING_TOP = s.page.paddingTop;
+const PADDING_BOTTOM = s.page.paddingBottom;
 
 /** Slack left at the foot of each planned page for rounding in the measured heights, pt. */
 const PLANNING_SLACK = 6;

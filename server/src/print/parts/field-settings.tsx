@@ -50,7 +50,7 @@ export function fieldSettingsBlocks(ctx: BlockContext, sheet: PrintableSheet): F
   const system = sheet.unitSystem;
   const blocks: FlowBlock[] = [
     headingBlock(ctx, 'settings-h', 'Field settings'),
-    { ...paragraphBlock(ctx, 'settings-note', SETTINGS_NOTE, { fontSize: 7.5, marginBottom: 3 }) },
+    paragraphBlock(ctx, 'settings-note', SETTINGS_NOTE, { fontSize: 7.5, marginBottom: 3 }),
   ];
   if (ev.fieldSettings.length > 0) {
     blocks.push(
