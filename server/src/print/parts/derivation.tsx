@@ -76,7 +76,7 @@ export function derivationBlocks(ctx: BlockContext, sheet: PrintableSheet): Flow
   const title = (id: string) => sheet.sections.find((x) => x.id === id)?.title ?? titleCase(id);
   const intro = derivationIntro(sheet);
   const blocks: FlowBlock[] = [
-    headingBlock(ctx, 'derivation-h', 'Derivation', 1, { pageBreakBefore: true }),
+    headingBlock(ctx, 'derivation-h', 'Derivation'),
     {
       ...paragraphBlock(ctx, 'derivation-intro', intro, {
         fontSize: 7,
