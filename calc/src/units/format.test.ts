@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { formatForDerivation, formatInPrintUnits, formatNumber, printUnitsOf } from './format.js';
+import {
+  formatForDerivation,
+  formatInPrintUnits,
+  formatNumber,
+  placeDigits,
+  printUnitsOf,
+} from './format.js';
 
 describe('formatNumber', () => {
   it('prints significant figures without an exponent for everyday magnitudes', () => {
@@ -32,22 +38,13 @@ describe('formatNumber', () => {
   it('prints the same digits as the Math.log10 exponent it replaced, next to every power of ten', () => {
     // The exponent comes from a table of powers of ten; log10 can round across a power of ten a
     // few ulps from it. Every double within 200 ulps of each power must print as before.
-    const POW10: number[] = [];
-    for (let k = -30; k <= 30; k++) POW10[k + 30] = 10 ** k;
-    const withLog10 = (value: number, digits: number): string => {
-      const abs = Math.abs(value);
-      const sign = value < 0 ? '−' : '';
-      let e = Math.floor(Math.log10(abs));
-      let m = Math.round(abs * POW10[digits - 1 - e + 30]);
-      if (m >= POW10[digits + 30]) {
-        m = Math.round(m / 10);
-        e += 1;
-      }
-      const s = String(m);
-      if (e >= digits - 1) return sign + s + (e > digits - 1 ? '0'.repeat(e - digits + 1) : '');
-      if (e >= 0) return `${sign}${s.slice(0, e + 1)}.${s.slice(e + 1)}`;
-      return `${sign}0.${'0'.repeat(-e - 1)}${s}`;
-    };
+    const withLog10 = (value: number, digits: number): string =>
+      placeDigits(
+        Math.abs(value),
+        value < 0 ? '−' : '',
+        digits,
+        Math.floor(Math.log10(Math.abs(value))),
+      );
     const bits = new Float64Array(1);
     const word = new BigInt64Array(bits.buffer);
     let mismatches = 0;

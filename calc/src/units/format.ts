@@ -17,13 +17,14 @@ export function formatNumber(value: number, digits = 4): string {
     const [mantissa, exponent] = value.toExponential(Math.max(0, digits - 1)).split('e');
     return `${mantissa.replace('-', '−')}·10^${Number(exponent)}`;
   }
-  let e = 0;
+  let e: number;
   if (digits <= 12) {
     // Decimal exponent by comparison with the table: Math.floor(Math.log10(abs)) was a third of
     // the time of a call. The table gives the exact exponent of every double; log10 may round
-    // across a power of ten within a few ulps of it, and up to 12 digits the carry below then
-    // lands on the same digits, so the output is unchanged. Beyond 12 digits those few ulps show
-    // in the last digit, so the log10 estimate stays there.
+    // across a power of ten within a few ulps of it, and up to 12 digits the carry in placeDigits
+    // then lands on the same digits, so the output is unchanged. Beyond 12 digits those few ulps
+    // show in the last digit, so the log10 estimate stays there.
+    e = 0;
     if (abs >= 1) {
       while (abs >= POW10[e + 31]) e++;
     } else {
@@ -33,6 +34,15 @@ export function formatNumber(value: number, digits = 4): string {
   } else {
     e = Math.floor(Math.log10(abs));
   }
+  return placeDigits(abs, sign, digits, e);
+}
+
+/**
+ * `abs` rounded to `digits` significant figures and written out with its decimal point, given an
+ * estimate `e` of its decimal exponent (a rounding carry into the next power of ten corrects it).
+ * Exported for the test that compares exponent estimates; use formatNumber.
+ */
+export function placeDigits(abs: number, sign: string, digits: number, e: number): string {
   let m = Math.round(abs * POW10[digits - 1 - e + 30]);
   if (m >= POW10[digits + 30]) {
     m = Math.round(m / 10);
