@@ -3,6 +3,7 @@ import type { ReactElement, ReactNode } from 'react';
 import type { FlowBlock } from './flow.js';
 import type { TextMeasure, TextStyle } from './measure.js';
 import { Heading, TableHeader, TableRow, type Column } from './parts/table.js';
+import { ROW_RULE } from './theme.js';
 
 /** What a block builder needs: the fonts' measure and the width of the text column. */
 export interface BlockContext {
@@ -102,7 +103,7 @@ export function tableBlocks(
     });
     blocks.push({
       key: `${key}-r${r}`,
-      height: Math.max(...cellHeights) + 0.4 + (last ? 6 : 0),
+      height: Math.max(...cellHeights) + ROW_RULE + (last ? 6 : 0),
       element: (
         <TableRow
           key={`${key}-r${r}`}

@@ -21,6 +21,14 @@ export const colours = {
 /** Series colours for charts, distinguishable in greyscale print too (dark → light). */
 export const seriesColours = ['#0f5e6b', '#c2611f', '#5b3f8c', '#2f7d32', '#8a8f98'];
 
+/** Thin rule under a table row or a derivation step; its width counts in planned heights. */
+export const ROW_RULE = 0.4;
+export const ruledRow = {
+  flexDirection: 'row',
+  borderBottomWidth: ROW_RULE,
+  borderColor: colours.rule,
+} as const;
+
 export const monoFont = { fontFamily: MONO, fontFeatureSettings: { calt: false } } as const;
 
 export const s = StyleSheet.create({

@@ -4,7 +4,7 @@ import { qty } from '../format.js';
 import { headingBlock, paragraphBlock, type BlockContext } from '../blocks.js';
 import type { FlowBlock } from '../flow.js';
 import type { PrintableSheet } from '../printable-sheet.js';
-import { colours, monoFont } from '../theme.js';
+import { ROW_RULE, colours, monoFont, ruledRow } from '../theme.js';
 
 const NUM_W = 26;
 const REF_W = 150;
@@ -19,15 +19,7 @@ function Step(props: { step: DerivationStep; n: string; sheet: PrintableSheet })
   const { step, sheet } = props;
   const mono = { ...monoFont, fontSize: 7.6 } as const;
   return (
-    <View
-      wrap={false}
-      style={{
-        flexDirection: 'row',
-        borderBottomWidth: 0.4,
-        borderColor: colours.rule,
-        paddingVertical: 3,
-      }}
-    >
+    <View wrap={false} style={{ ...ruledRow, paddingVertical: 3 }}>
       <Text style={{ width: NUM_W, color: colours.muted, fontSize: 7 }}>{props.n}</Text>
       {/* One Text per line: a '\n' has no glyph in any font and would pull in Helvetica. */}
       <View style={{ flex: 1 }}>
@@ -53,8 +45,8 @@ function stepHeight(ctx: BlockContext, step: DerivationStep, sheet: PrintableShe
     m.height(step.substituted, w, mono) +
     m.height(resultText(step, sheet), w, { ...mono, weight: 700 });
   const right = m.height(step.reference, REF_W - 6, { fontSize: 6.8 });
-  // 2 × 3 pt padding and the 0.4 pt rule below.
-  return Math.max(left, right) + 6.4;
+  // 2 × 3 pt padding and the rule below.
+  return Math.max(left, right) + 6 + ROW_RULE;
 }
 
 function derivationIntro(sheet: PrintableSheet): string {

@@ -1,6 +1,6 @@
 import { Text, View } from '@react-pdf/renderer';
 import type { ReactNode } from 'react';
-import { colours, monoFont } from '../theme.js';
+import { colours, monoFont, ruledRow } from '../theme.js';
 
 export interface Column {
   title: string;
@@ -59,15 +59,7 @@ export function TableRow(props: {
   const { columns } = props;
   const fontSize = props.fontSize ?? 7.8;
   return (
-    <View
-      wrap={false}
-      style={{
-        flexDirection: 'row',
-        borderBottomWidth: 0.4,
-        borderColor: colours.rule,
-        ...(props.last ? { marginBottom: 6 } : {}),
-      }}
-    >
+    <View wrap={false} style={{ ...ruledRow, ...(props.last ? { marginBottom: 6 } : {}) }}>
       {props.row.map((cell, i) => {
         const c = columns[i];
         const style = {
