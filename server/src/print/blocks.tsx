@@ -44,17 +44,17 @@ export function elementBlock(key: string, height: number, element: ReactElement)
 }
 
 /** A table cell that is not plain text (a verdict badge, a box to write in) with its height. */
-export interface NodeCell {
+interface NodeCell {
   node: ReactNode;
   height: number;
 }
 
-export type BlockCell = string | NodeCell;
+type BlockCell = string | NodeCell;
 
 const isNode = (c: BlockCell): c is NodeCell => typeof c !== 'string';
 
 /** Widths in pt of the columns of a `width`-wide row (fixed widths first, then flex shares). */
-export function columnWidths(columns: Column[], width: number): number[] {
+function columnWidths(columns: Column[], width: number): number[] {
   const fixed = columns.reduce((sum, c) => sum + (c.width ?? 0), 0);
   const flex = columns.reduce((sum, c) => sum + (c.width === undefined ? (c.flex ?? 1) : 0), 0);
   return columns.map((c) =>

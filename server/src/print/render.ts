@@ -65,7 +65,7 @@ export async function renderSheetPdf(sheet: PrintableSheet): Promise<Buffer> {
  * Pages of react-pdf's layout that grew taller than the paper: a page that may not break
  * takes the height of its content.
  */
-export function overflowingPages(result: unknown, paperHeight: number): number[] {
+function overflowingPages(result: unknown, paperHeight: number): number[] {
   const layout = (result as { _INTERNAL__LAYOUT__DATA_?: { children?: LaidOutPage[] } } | undefined)
     ?._INTERNAL__LAYOUT__DATA_;
   const pages = layout?.children ?? [];

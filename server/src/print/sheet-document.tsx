@@ -48,7 +48,7 @@ function newPage(blocks: FlowBlock[]): FlowBlock[] {
  * The calculation sheet in reading order: summary, design basis and inputs; then the derivation,
  * the charts, and the settings with the references, each starting a new page.
  */
-export function sheetBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlock[] {
+function sheetBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlock[] {
   const charts = sheet.evaluation?.charts ?? [];
   return [
     ...purposeBlocks(ctx, sheet),
