@@ -3,19 +3,28 @@
  * holdfast-calc: evaluate one sheet from a JSON file of inputs (or stdin) and print the full
  * evaluation as JSON. Exit codes: 0 evaluated (check `pass` for the verdict), 2 bad input or usage.
  *
- *   npm run calc -w @holdfast/calc -- hoist-shoe-brake inputs.json [--criteria crane-hoist]
- *   cat inputs.json | npm run calc -w @holdfast/calc -- travel-shoe-brake -
+ *   npm run calc -- hoist-shoe-brake inputs.json [--criteria crane-hoist]
+ *   cat inputs.json | npm run calc -- travel-shoe-brake -
+ *   npm run calc -- hoist-shoe-brake --demo > my-hoist.json   (the demo duty, to edit)
+ *
+ * Every required field must be present and every key must be a field of the sheet type: a missing
+ * field or a misspelt key is refused (exit 2, naming each), never replaced by a value of the core.
+ * A relative inputs path is taken from the directory the command was run in (INIT_CWD under npm,
+ * which starts scripts in the workspace folder).
  */
 import { readFileSync } from 'node:fs';
+import path from 'node:path';
 import { isCalcInputError } from '../core/errors.js';
 import { getCriteriaSet } from '../criteria/lookup.js';
-import { getSheetType, sheetTypes } from '../sheets/registry.js';
+import { demoInputs, getSheetType, sheetTypes } from '../sheets/registry.js';
+import { unknownInputKeys } from '../sheets/sheet-inputs.js';
 import { CORE_VERSION } from '../version.js';
 import { DEFAULT_CRITERIA } from './default-criteria.js';
 
 const USAGE = `usage: holdfast-calc <sheet-type> [inputs.json | -] [--criteria <id>]
+       holdfast-calc <sheet-type> --demo     print the demo inputs (an invented duty) to start from
 sheet types: ${sheetTypes.map((s) => s.id).join(', ')}
-inputs: a JSON object keyed by field; missing fields take their defaults; '-' or no file reads stdin`;
+inputs: a JSON object with every field of the sheet type; '-' or no file reads stdin`;
 
 function fail(message: string, fields?: readonly { field: string; message: string }[]): never {
   process.stderr.write(`${message}\n`);
@@ -31,18 +40,28 @@ function parseArgs(argv: string[]): {
   file?: string;
   criteria?: string;
   help: boolean;
+  demo: boolean;
 } {
-  const out: { sheet?: string; file?: string; criteria?: string; help: boolean } = { help: false };
+  const out: { sheet?: string; file?: string; criteria?: string; help: boolean; demo: boolean } = {
+    help: false,
+    demo: false,
+  };
   const rest: string[] = [];
   for (let k = 0; k < argv.length; k++) {
     const a = argv[k];
     if (a === '--help' || a === '-h') out.help = true;
+    else if (a === '--demo') out.demo = true;
     else if (a === '--criteria') out.criteria = argv[++k];
     else if (a.startsWith('--criteria=')) out.criteria = a.slice('--criteria='.length);
     else rest.push(a);
   }
   [out.sheet, out.file] = rest;
   return out;
+}
+
+/** The inputs file against the directory the user ran the command from, not npm's workspace folder. */
+function inputsPath(file: string): string {
+  return path.resolve(process.env.INIT_CWD || process.cwd(), file);
 }
 
 function main(): void {
@@ -54,12 +73,16 @@ function main(): void {
   if (!args.sheet) fail(`missing sheet type\n${USAGE}`);
   const sheet = getSheetType(args.sheet);
   if (!sheet) fail(`unknown sheet type "${args.sheet}"\n${USAGE}`);
+  if (args.demo) {
+    process.stdout.write(`${JSON.stringify(demoInputs(sheet), null, 2)}\n`);
+    return;
+  }
   const criteriaId = args.criteria ?? DEFAULT_CRITERIA[sheet.id] ?? 'general-industry';
   const criteria = getCriteriaSet(criteriaId);
   if (!criteria) fail(`unknown criteria set "${criteriaId}"`);
   let text: string;
   try {
-    text = readFileSync(!args.file || args.file === '-' ? 0 : args.file, 'utf8');
+    text = readFileSync(!args.file || args.file === '-' ? 0 : inputsPath(args.file), 'utf8');
   } catch (e) {
     fail(`cannot read inputs: ${(e as Error).message}`);
   }
@@ -71,6 +94,8 @@ function main(): void {
   }
   if (typeof inputs !== 'object' || inputs === null || Array.isArray(inputs))
     fail('inputs must be a JSON object keyed by field');
+  const unknown = unknownInputKeys(sheet.fields, inputs as Record<string, never>);
+  if (unknown.length) fail(`unknown input keys for ${sheet.id}`, unknown);
   try {
     const evaluation = sheet.evaluate(inputs as Record<string, never>, criteria);
     process.stdout.write(

@@ -54,7 +54,18 @@ export interface FieldDefinition {
   /** Default SI and US customary display units for a quantity field. */
   unitSI?: string;
   unitUS?: string;
-  default: InputValue;
+  /**
+   * The value of the invented demo duty: shown in examples, the demo seed and a sheet started from
+   * the example. Never used in place of a missing input.
+   */
+  demo: InputValue;
+  /** A required field must be present in the inputs; a missing one is a CalcInputError for it. */
+  required: boolean;
+  /**
+   * Key of a flag field: when set, this field is required only while that flag is true (the
+   * geometry of a disc-spring stack the sheet leaves out, for example).
+   */
+  requiredIf?: string;
   /** Inclusive bounds in SI (for quantities) or plain (for numbers). */
   min?: number;
   max?: number;
@@ -199,7 +210,7 @@ export interface SheetTypeDefinition {
   title: string;
   description: string;
   sections: SectionDefinition[];
-  fields: FieldDefinition[];
+  fields: readonly FieldDefinition[];
   /** Throws CalcInputError (with field errors) on invalid input. */
   evaluate(inputs: SheetInputs, criteria: CriteriaSet): SheetEvaluation;
 }

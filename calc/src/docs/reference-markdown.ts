@@ -22,10 +22,15 @@ function bound(f: FieldDefinition, v: number | undefined): string {
   return `${formatNumber(fromSI(v, f.unitSI, f.dimension), 6)} ${unitLabel(f.unitSI, f)}`;
 }
 
-function defaultText(f: FieldDefinition): string {
-  const d = f.default;
+function demoText(f: FieldDefinition): string {
+  const d = f.demo;
   if (typeof d === 'object' && d !== null) return `${d.value} ${unitLabel(d.unit, f)}`;
   return String(d);
+}
+
+function requiredText(f: FieldDefinition): string {
+  if (!f.required) return 'no';
+  return f.requiredIf ? `when \`${f.requiredIf}\`` : 'yes';
 }
 
 function range(f: FieldDefinition): string {
@@ -48,13 +53,13 @@ export function sheetInputsMarkdown(sheet: SheetTypeDefinition): string {
     lines.push(
       `**${section.title}** (\`${section.id}\`)`,
       '',
-      '| key | label | symbol | SI unit | US unit | default | valid range |',
-      '|---|---|---|---|---|---|---|',
+      '| key | label | symbol | SI unit | US unit | demo value | required | valid range |',
+      '|---|---|---|---|---|---|---|---|',
     );
     for (const f of fields) {
       const label = f.help ? `${f.label} — ${f.help}` : f.label;
       lines.push(
-        `| \`${f.key}\` | ${esc(label)} | ${esc(f.symbol)} | ${unitLabel(f.unitSI, f)} | ${unitLabel(f.unitUS, f)} | ${esc(defaultText(f))} | ${esc(range(f))} |`,
+        `| \`${f.key}\` | ${esc(label)} | ${esc(f.symbol)} | ${unitLabel(f.unitSI, f)} | ${unitLabel(f.unitUS, f)} | ${esc(demoText(f))} | ${requiredText(f)} | ${esc(range(f))} |`,
       );
     }
     lines.push('');

@@ -18,7 +18,7 @@ function bounds(f: FieldDefinition): [number, number] {
 
 /** The default of a field in SI (quantities) or plain (numbers). */
 export function defaultSI(f: FieldDefinition): number {
-  const d = f.default;
+  const d = f.demo;
   if (typeof d === 'number') return d;
   if (typeof d === 'object' && d !== null)
     return toSI(d.value, d.unit, f.dimension ?? 'dimensionless');
@@ -86,7 +86,7 @@ export function defaultsInUS(sheet: SheetTypeDefinition): SheetInputs {
   for (const f of sheet.fields) {
     if (f.kind === 'quantity' && f.unitUS && f.dimension) {
       out[f.key] = { value: fromSI(defaultSI(f), f.unitUS, f.dimension), unit: f.unitUS };
-    } else out[f.key] = f.default;
+    } else out[f.key] = f.demo;
   }
   return out;
 }

@@ -1,3 +1,4 @@
+import { demoInputs } from '../sheets/registry.js';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { isCalcInputError } from '../core/errors.js';
@@ -78,11 +79,11 @@ function resultWith(
 ): number | undefined {
   const f = sheet.fields.find((x) => x.key === key);
   if (!f) return undefined;
-  const d = f.default;
+  const d = f.demo;
   const input = typeof d === 'object' && d !== null ? { value, unit: d.unit } : value;
   try {
     return sheet
-      .evaluate({ [key]: input } as SheetInputs, CRITERIA_SETS[0])
+      .evaluate({ ...demoInputs(sheet), [key]: input } as SheetInputs, CRITERIA_SETS[0])
       .results.find((r) => r.key === result)?.value;
   } catch (e) {
     if (isCalcInputError(e)) return undefined;
@@ -91,7 +92,9 @@ function resultWith(
 }
 
 describe.each(sheetTypes.map((s) => [s.id, s] as const))('sheet %s: monotonicity', (_id, sheet) => {
-  const reported = new Set(sheet.evaluate({}, CRITERIA_SETS[0]).results.map((r) => r.key));
+  const reported = new Set(
+    sheet.evaluate(demoInputs(sheet), CRITERIA_SETS[0]).results.map((r) => r.key),
+  );
   const rules = RULES.filter(
     (r) => sheet.fields.some((f) => f.key === r.field) && reported.has(r.result),
   );
@@ -99,8 +102,7 @@ describe.each(sheetTypes.map((s) => [s.id, s] as const))('sheet %s: monotonicity
   it.each(rules.map((r) => [r.what, r] as const))(
     '%s',
     (_what, rule) => {
-      const d = sheet.fields.find((x) => x.key === rule.field)!.default as
-        { value: number } | number;
+      const d = sheet.fields.find((x) => x.key === rule.field)!.demo as { value: number } | number;
       const base = typeof d === 'number' ? d : d.value;
       let compared = 0;
       fc.assert(

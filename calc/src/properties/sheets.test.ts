@@ -1,3 +1,4 @@
+import { demoInputs } from '../sheets/registry.js';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { isCalcInputError } from '../core/errors.js';
@@ -47,7 +48,7 @@ describe.each(SHEETS.map((s) => [s.id, s] as const))('sheet %s: properties', (_i
   }, 30_000);
 
   it('the defaults evaluate and give the same results when entered in US customary units', () => {
-    const si = sheet.evaluate({}, criteria);
+    const si = sheet.evaluate(demoInputs(sheet), criteria);
     const us = sheet.evaluate(defaultsInUS(sheet), criteria);
     expect(us.results.length).toBe(si.results.length);
     si.results.forEach((r, i) => {
@@ -61,7 +62,7 @@ describe.each(SHEETS.map((s) => [s.id, s] as const))('sheet %s: properties', (_i
       for (const bad of invalidValues(f)) {
         let fields: string[] = [];
         try {
-          sheet.evaluate({ [f.key]: bad }, criteria);
+          sheet.evaluate({ ...demoInputs(sheet), [f.key]: bad }, criteria);
         } catch (err) {
           if (!isCalcInputError(err)) throw err;
           fields = err.fields.map((x) => x.field);

@@ -1,6 +1,6 @@
-import type { FieldDefinition, SectionDefinition } from '../core/types.js';
+import type { SectionDefinition } from '../core/types.js';
 import { LININGS } from '../criteria/linings.js';
-import { choice, num, qty, withBounds } from './field-builders.js';
+import { choice, num, qty, withBounds, type InputsOf } from './field-builders.js';
 import { CALIPER_BOUNDS } from './field-bounds.js';
 import { ARRANGEMENT_CHOICES } from './hoist-shoe-brake.js';
 
@@ -21,7 +21,7 @@ const T = 'thermal';
 const R = 'release';
 
 /** Demo: a caliper brake on a hoist rope drum (low-speed shaft). */
-export const CALIPER_FIELDS: FieldDefinition[] = withBounds(
+export const CALIPER_FIELDS = withBounds(
   [
     qty(U, 'motorPower', 'Motor rated power', 'P', 'power', 22, 'kW', 'hp', {
       min: 0,
@@ -244,6 +244,9 @@ export const CALIPER_FIELDS: FieldDefinition[] = withBounds(
       'lbf',
       { min: 0, exclusiveMin: true },
     ),
-  ],
+  ] as const,
   CALIPER_BOUNDS,
 );
+
+/** The caliper sheet's inputs as its formulas read them (SI). */
+export type CaliperInputs = InputsOf<typeof CALIPER_FIELDS>;

@@ -31,13 +31,14 @@ const len = (
   dimension: 'length',
   unitSI: 'mm',
   unitUS: 'in',
-  default: mm(value),
+  demo: mm(value),
+  required: true,
   min: min / 1000,
   max: max / 1000,
   help,
 });
 
-interface StackDefaults {
+interface StackDemo {
   De: number;
   Di: number;
   t: number;
@@ -57,7 +58,7 @@ interface StackDefaults {
  * shaft, flat then backed off about 180°. Sizes are DIN 2093 rows (A 40, B 50); pitches
  * are ISO 261 coarse pitches (M20 2.5 mm, M24 3.0 mm; secondary copy).
  */
-const DEFAULTS: Record<StackKey, StackDefaults> = {
+const DEMO: Record<StackKey, StackDemo> = {
   a: {
     De: 40,
     Di: 20.4,
@@ -87,8 +88,14 @@ const DEFAULTS: Record<StackKey, StackDefaults> = {
 };
 
 function stackFields(k: StackKey): FieldDefinition[] {
+  return stackFieldList(k).map((f) =>
+    f.key === `${k}Enabled` ? f : { ...f, requiredIf: `${k}Enabled` },
+  );
+}
+
+function stackFieldList(k: StackKey): FieldDefinition[] {
   const s = sectionOf(k);
-  const d = DEFAULTS[k];
+  const d = DEMO[k];
   return [
     {
       key: `${k}Enabled`,
@@ -96,7 +103,8 @@ function stackFields(k: StackKey): FieldDefinition[] {
       label: 'Include this stack',
       symbol: '',
       kind: 'boolean',
-      default: d.enabled,
+      demo: d.enabled,
+      required: true,
     },
     {
       key: `${k}Size`,
@@ -104,7 +112,8 @@ function stackFields(k: StackKey): FieldDefinition[] {
       label: 'Standard size (DIN EN 16983 / DIN 2093), or custom geometry',
       symbol: '',
       kind: 'choice',
-      default: 'custom',
+      demo: 'custom',
+      required: true,
       choices: [
         { value: 'custom', label: 'custom (use the geometry below)' },
         ...STANDARD_DISC_SIZES.map((r) => ({
@@ -142,7 +151,8 @@ function stackFields(k: StackKey): FieldDefinition[] {
       label: 'Sets in series',
       symbol: 'i',
       kind: 'integer',
-      default: d.series,
+      demo: d.series,
+      required: true,
       min: 1,
       max: 50,
     },
@@ -152,7 +162,8 @@ function stackFields(k: StackKey): FieldDefinition[] {
       label: 'Discs in parallel per set',
       symbol: 'n',
       kind: 'integer',
-      default: d.parallel,
+      demo: d.parallel,
+      required: true,
       min: 1,
       max: 6,
     },
@@ -162,7 +173,8 @@ function stackFields(k: StackKey): FieldDefinition[] {
       label: 'Friction factor between nested discs',
       symbol: 'w_M',
       kind: 'number',
-      default: 0.02,
+      demo: 0.02,
+      required: true,
       min: 0,
       max: 0.15,
       help: 'DIN EN 16984 typical values (from memory): series A 0.02–0.03, B 0.015–0.025, C 0.01–0.015',
@@ -173,7 +185,8 @@ function stackFields(k: StackKey): FieldDefinition[] {
       label: 'Friction factor at the load edges',
       symbol: 'w_R',
       kind: 'number',
-      default: 0.03,
+      demo: 0.03,
+      required: true,
       min: 0,
       max: 0.15,
       help: 'DIN EN 16984 typical values (from memory): series A 0.03–0.05, B 0.02–0.04, C 0.01–0.03',
@@ -188,7 +201,8 @@ function stackFields(k: StackKey): FieldDefinition[] {
       dimension: 'angle',
       unitSI: 'deg',
       unitUS: 'deg',
-      default: { value: d.angle, unit: 'deg' },
+      demo: { value: d.angle, unit: 'deg' },
+      required: true,
       min: 0,
       max: 6 * Math.PI,
       help: 'Tighten until every disc is flat (nut torque rises sharply), then back off this angle and lock.',
@@ -202,7 +216,8 @@ function stackFields(k: StackKey): FieldDefinition[] {
       dimension: 'force',
       unitSI: 'N',
       unitUS: 'lbf',
-      default: { value: d.required, unit: 'N' },
+      demo: { value: d.required, unit: 'N' },
+      required: true,
       min: 0,
       max: 5e6,
     },
@@ -219,7 +234,8 @@ export const DISC_STACK_FIELDS: FieldDefinition[] = [
     dimension: 'pressure',
     unitSI: 'MPa',
     unitUS: 'psi',
-    default: { value: 206000, unit: 'MPa' },
+    demo: { value: 206000, unit: 'MPa' },
+    required: true,
     min: 50e9,
     max: 300e9,
     help: 'DIN 2093 tables use 206 000 N/mm² for spring steel',
@@ -230,7 +246,8 @@ export const DISC_STACK_FIELDS: FieldDefinition[] = [
     label: "Poisson's ratio",
     symbol: 'ν',
     kind: 'number',
-    default: 0.3,
+    demo: 0.3,
+    required: true,
     min: 0.1,
     max: 0.45,
   },

@@ -1,3 +1,4 @@
+import { demoInputs } from './registry.js';
 import { describe, expect, it } from 'vitest';
 import { isCalcInputError } from '../core/errors.js';
 import type { CriteriaSet, SheetInputs } from '../core/types.js';
@@ -13,7 +14,7 @@ const result = (e: ReturnType<typeof sheet.evaluate>, key: string) => {
 };
 const fieldsOf = (inputs: SheetInputs) => {
   try {
-    sheet.evaluate(inputs, criteria);
+    sheet.evaluate({ ...demoInputs(sheet), ...inputs }, criteria);
   } catch (e) {
     if (isCalcInputError(e)) return e.fields.map((f) => f.field);
     throw e;
@@ -23,7 +24,7 @@ const fieldsOf = (inputs: SheetInputs) => {
 
 describe('disc-spring-stack sheet', () => {
   it('evaluates the demo: shoe-holder disc backed off 60°, equaliser stack of three backed off 180°', () => {
-    const e = sheet.evaluate({}, criteria);
+    const e = sheet.evaluate(demoInputs(sheet), criteria);
     // A 40 on M20×2.5, 60°: Δ = 0.4167 mm, s = 0.9 − 0.4167 mm.
     expect(result(e, 'a.release')).toBeCloseTo(2.5e-3 / 6, 12);
     expect(result(e, 'a.setDeflection')).toBeCloseTo(0.9e-3 - 2.5e-3 / 6, 12);
@@ -53,9 +54,10 @@ describe('disc-spring-stack sheet', () => {
   });
 
   it('accepts US customary inputs and gives the same preload', () => {
-    const si = sheet.evaluate({ bEnabled: false }, criteria);
+    const si = sheet.evaluate({ ...demoInputs(sheet), bEnabled: false }, criteria);
     const us = sheet.evaluate(
       {
+        ...demoInputs(sheet),
         bEnabled: false,
         aDe: '1.574803 in',
         aDi: { value: 20.4 / 25.4, unit: 'in' },
@@ -68,7 +70,10 @@ describe('disc-spring-stack sheet', () => {
   });
 
   it('fails the preload check when the required preload is not reached', () => {
-    const e = sheet.evaluate({ bEnabled: false, aRequiredPreload: '50 kN' }, criteria);
+    const e = sheet.evaluate(
+      { ...demoInputs(sheet), bEnabled: false, aRequiredPreload: '50 kN' },
+      criteria,
+    );
     const c = e.checks.find((x) => x.id === 'a-preload');
     expect(c?.pass).toBe(false);
     expect(e.pass).toBe(false);
@@ -89,16 +94,21 @@ describe('disc-spring-stack sheet', () => {
         },
       ],
     };
-    const c = sheet.evaluate({}, strict).checks.find((x) => x.id === 'a-sigma-om-flat');
+    const c = sheet
+      .evaluate(demoInputs(sheet), strict)
+      .checks.find((x) => x.id === 'a-sigma-om-flat');
     expect(c?.pass).toBe(false);
     expect(c?.source).toBe('test source');
   });
 
   it('warns outside the working band and when backed off past flat travel', () => {
-    const near = sheet.evaluate({ bEnabled: false, aBackOff: '10 deg' }, criteria);
+    const near = sheet.evaluate(
+      { ...demoInputs(sheet), bEnabled: false, aBackOff: '10 deg' },
+      criteria,
+    );
     expect(near.warnings.join(' ')).toMatch(/above the usual 75 %/);
     const loose = sheet.evaluate(
-      { bEnabled: false, aBackOff: '180 deg', aRequiredPreload: '0 N' },
+      { ...demoInputs(sheet), bEnabled: false, aBackOff: '180 deg', aRequiredPreload: '0 N' },
       criteria,
     );
     expect(loose.warnings.join(' ')).toMatch(/loose/);
@@ -107,7 +117,7 @@ describe('disc-spring-stack sheet', () => {
 
   it('takes the geometry of a chosen standard size, including t′ of a group 3 disc', () => {
     const e = sheet.evaluate(
-      { bEnabled: false, aSize: 'A 125', aPitch: '4 mm', aBackOff: '90 deg' },
+      { ...demoInputs(sheet), bEnabled: false, aSize: 'A 125', aPitch: '4 mm', aBackOff: '90 deg' },
       criteria,
     );
     expect(e.derivation.some((s) => s.id === 'a-K4')).toBe(true);

@@ -16,7 +16,7 @@ import {
   sectionOf,
   type StackKey,
 } from './disc-spring-stack-fields.js';
-import { readSheetInputs } from './disc-spring-stack-inputs.js';
+import { readInputs } from './sheet-inputs.js';
 import { stackOutputs } from './disc-spring-stack-output.js';
 
 const TITLES: Record<StackKey, string> = { a: 'Stack 1 (shoe holder)', b: 'Stack 2 (equaliser)' };
@@ -82,7 +82,10 @@ export function evaluateDiscSpringStack(
   inputs: SheetInputs,
   criteria: CriteriaSet,
 ): SheetEvaluation {
-  const v = readSheetInputs(DISC_STACK_FIELDS, inputs);
+  const v: Readonly<Record<string, number | boolean | string>> = readInputs(
+    DISC_STACK_FIELDS,
+    inputs,
+  );
   const keys: StackKey[] = (['a', 'b'] as const).filter((k) => v[`${k}Enabled`] === true);
   const errors = new FieldErrorCollector();
   if (keys.length === 0) errors.add('aEnabled', 'include at least one stack');

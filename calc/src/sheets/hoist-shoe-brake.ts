@@ -1,6 +1,5 @@
 import type {
   CriteriaSet,
-  FieldDefinition,
   SheetEvaluation,
   SheetInputs,
   SheetTypeDefinition,
@@ -38,7 +37,7 @@ export const ARRANGEMENT_KEY: Record<string, string> = {
   two: 'torqueFactorEachOfTwo',
 };
 
-export const HOIST_DUTY_FIELDS: FieldDefinition[] = [
+export const HOIST_DUTY_FIELDS = [
   qty(U, 'motorPower', 'Motor rated power', 'P', 'power', 22, 'kW', 'hp', {
     min: 0,
     exclusiveMin: true,
@@ -139,9 +138,9 @@ export const HOIST_DUTY_FIELDS: FieldDefinition[] = [
     'in',
     { min: 0, exclusiveMin: true },
   ),
-];
+] as const;
 
-const FIELDS = withBounds([...HOIST_DUTY_FIELDS, ...SHOE_BRAKE_FIELDS], HOIST_BOUNDS);
+const FIELDS = withBounds([...HOIST_DUTY_FIELDS, ...SHOE_BRAKE_FIELDS] as const, HOIST_BOUNDS);
 
 /** Evaluates the hoist shoe-brake sheet: the worst stop is lowering the rated load. */
 export function evaluateHoistShoeBrake(
@@ -153,51 +152,51 @@ export function evaluateHoistShoeBrake(
   if (cross.length) throw new CalcInputError(cross);
   const d = new Derivation(U);
   const out = newEvaluation('hoist-shoe-brake', criteria, d);
-  const omega = q.angularSpeed(v.num('motorSpeed'));
-  const Mmot = motorRatedTorque(q.power(v.num('motorPower')), omega, d);
+  const omega = q.angularSpeed(v.motorSpeed);
+  const Mmot = motorRatedTorque(q.power(v.motorPower), omega, d);
   const load = hoistLoadTorques(
     {
-      load: q.mass(v.num('load')),
-      hookBlock: q.mass(v.num('hookBlock')),
-      drumDiameter: q.length(v.num('ropeDrumDiameter')),
-      reeving: q.ratio(v.num('reeving')),
-      gearRatio: q.ratio(v.num('gearRatio')),
-      efficiency: q.ratio(v.num('efficiency')),
+      load: q.mass(v.load),
+      hookBlock: q.mass(v.hookBlock),
+      drumDiameter: q.length(v.ropeDrumDiameter),
+      reeving: q.ratio(v.reeving),
+      gearRatio: q.ratio(v.gearRatio),
+      efficiency: q.ratio(v.efficiency),
     },
     d,
   );
   const vL = hoistLoadSpeed(
     omega,
-    q.length(v.num('ropeDrumDiameter')),
-    q.ratio(v.num('reeving')),
-    q.ratio(v.num('gearRatio')),
+    q.length(v.ropeDrumDiameter),
+    q.ratio(v.reeving),
+    q.ratio(v.gearRatio),
     d,
   );
   const Jout = referRotatingInertia(
-    q.inertia(v.num('ropeDrumInertia')),
-    q.angularSpeed(omega / v.num('gearRatio')),
+    q.inertia(v.ropeDrumInertia),
+    q.angularSpeed(omega / v.gearRatio),
     omega,
     d,
     { label: 'Rope drum inertia referred to the brake shaft', symbol: 'J_out,b' },
   );
-  const Jload = referLinearMass(q.mass(v.num('load') + v.num('hookBlock')), vL, omega, d, {
+  const Jload = referLinearMass(q.mass(v.load + v.hookBlock), vL, omega, d, {
     label: 'Load and hook block referred to the brake shaft',
     symbol: 'J_load,b',
   });
   const J = inertiaTotal(
     {
-      motor: q.inertia(v.num('motorInertia')),
-      brakeDrum: q.inertia(v.num('brakeDrumInertia')),
-      gear: q.inertia(v.num('gearInertia')),
+      motor: q.inertia(v.motorInertia),
+      brakeDrum: q.inertia(v.brakeDrumInertia),
+      gear: q.inertia(v.gearInertia),
       output: Jout,
       load: Jload,
     },
     d,
   );
-  const basis = v.str('referenceBasis') as ReferenceBasis;
+  const basis = v.referenceBasis as ReferenceBasis;
   const Mref =
     basis === 'motor' ? Mmot : basis === 'hoisting' ? load.hoistingTorque : load.holdingTorque;
-  const factor = criterion(criteria, ARRANGEMENT_KEY[v.str('brakeArrangement')]);
+  const factor = criterion(criteria, ARRANGEMENT_KEY[v.brakeArrangement]);
   const Mreq = requiredBrakeTorque(q.ratio(factor.value), Mref, d, basis);
   out.warnings.push(
     `Required torque = ${factor.value} × ${REFERENCE_BASIS_TEXT[basis]}; efficiency credit: hoisting torque divides by η, holding torque multiplies by η.`,
@@ -211,8 +210,8 @@ export function evaluateHoistShoeBrake(
       driveTorque: load.holdingTorque,
       requiredTorque: Mreq,
       requiredSource: `${factor.source}; reference: ${REFERENCE_BASIS_TEXT[basis]}`,
-      setDelay: v.num('setDelay'),
-      stopLimit: { value: v.num('maxStoppingDistance'), source: 'duty specification (user input)' },
+      setDelay: v.setDelay,
+      stopLimit: { value: v.maxStoppingDistance, source: 'duty specification (user input)' },
       stopCase: 'lowering the rated load',
     },
     criteria,

@@ -1,4 +1,4 @@
-import type { SheetTypeDefinition } from '../core/types.js';
+import type { SheetInputs, SheetTypeDefinition } from '../core/types.js';
 import { caliperDiscBrakeSheet } from './caliper-disc-brake.js';
 import { discSpringStackSheet } from './disc-spring-stack.js';
 import { hoistShoeBrakeSheet } from './hoist-shoe-brake.js';
@@ -17,9 +17,13 @@ export function getSheetType(id: string): SheetTypeDefinition | undefined {
   return sheetTypes.find((s) => s.id === id);
 }
 
-/** Default inputs of a sheet type (each field's default), e.g. to start a new sheet. */
-export function defaultInputs(
-  sheet: SheetTypeDefinition,
-): Record<string, SheetTypeDefinition['fields'][number]['default']> {
-  return Object.fromEntries(sheet.fields.map((f) => [f.key, f.default]));
+/**
+ * The invented demo duty of a sheet type (each field's demo value, as a fresh copy): for examples,
+ * the demo seed and a sheet started from the example. Never a fallback for a missing input.
+ */
+export function demoInputs(sheet: SheetTypeDefinition): SheetInputs {
+  return Object.fromEntries(sheet.fields.map((f) => [f.key, structuredClone(f.demo)]));
 }
+
+/** @deprecated the demo values are not defaults: use `demoInputs`. */
+export const defaultInputs = demoInputs;

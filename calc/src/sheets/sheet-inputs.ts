@@ -1,67 +1,123 @@
 import { CalcInputError, FieldErrorCollector, isCalcInputError } from '../core/errors.js';
-import type { FieldDefinition, SheetInputs } from '../core/types.js';
+import type { FieldDefinition, FieldError, SheetInputs } from '../core/types.js';
 import { parseQuantity, requireRange } from '../units/parse.js';
 import { DIMENSIONS } from '../units/unit-table.js';
+import type { InputsOf } from './field-builders.js';
 
-/** Sheet inputs read into SI numbers, with typed getters. */
-export interface ReadInputs {
-  num(key: string): number;
-  str(key: string): string;
-  bool(key: string): boolean;
-}
-
-/** Position of each field by key, per fields array: fixed for a sheet type, so built once. */
-const positionsByFields = new WeakMap<readonly FieldDefinition[], Map<string, number>>();
-
-function positionsOf(fields: readonly FieldDefinition[]): Map<string, number> {
-  let positions = positionsByFields.get(fields);
-  if (!positions) {
-    positions = new Map();
-    for (let k = 0; k < fields.length; k++) positions.set(fields[k].key, k);
-    positionsByFields.set(fields, positions);
-  }
-  return positions;
-}
+/** The message a missing required field carries (the core, the API and the CLI all say this). */
+export const MISSING_MESSAGE = 'required: enter a value';
 
 /**
- * Reads every field of a sheet (falling back to its default) into SI numbers, checking bounds.
- * All field errors are collected and thrown together as one CalcInputError. Unknown keys in the
- * inputs are ignored (a later core version may drop a field without breaking old revisions).
+ * Reads every declared field of a sheet into SI numbers, choice values and flags, checking bounds,
+ * and returns them as one typed object keyed by field. A missing required field is an error for
+ * that field: the core never puts a value of its own in place of one the engineer did not enter.
+ * All field errors are collected and thrown together as one CalcInputError. Keys the sheet does
+ * not declare are ignored here (a stored revision may hold a key an older core version knew);
+ * `unknownInputKeys` is what refuses them where new inputs come in.
  */
-export function readInputs(fields: readonly FieldDefinition[], inputs: SheetInputs): ReadInputs {
+export function readInputs<const Fs extends readonly FieldDefinition[]>(
+  fields: Fs,
+  inputs: SheetInputs,
+): InputsOf<Fs> {
   if (typeof inputs !== 'object' || inputs === null || Array.isArray(inputs)) {
     throw new CalcInputError([
       { field: 'inputs', message: 'inputs must be an object keyed by field' },
     ]);
   }
-  // Values by field position rather than a Map filled per call: a sheet reads ~60 fields on
-  // every evaluation, and the key → position index is the same each time.
-  const positions = positionsOf(fields);
-  const values: (number | string | boolean)[] = new Array(fields.length);
+  const values: Record<string, number | string | boolean> = {};
   const errors = new FieldErrorCollector();
   for (let k = 0; k < fields.length; k++) {
     const f = fields[k];
+    const raw = inputs[f.key];
+    if (raw === undefined || raw === null) {
+      if (isRequired(f, inputs)) errors.errors.push({ field: f.key, message: MISSING_MESSAGE });
+      continue;
+    }
     try {
-      values[k] = readOne(f, inputs[f.key] ?? f.default);
+      values[f.key] = readOne(f, raw);
     } catch (e) {
       if (!isCalcInputError(e)) throw e;
       errors.errors.push(...e.fields);
     }
   }
   errors.throwIfAny();
-  const get = (key: string) => values[positions.get(key) ?? -1];
-  return {
-    num: (k) => get(k) as number,
-    str: (k) => get(k) as string,
-    bool: (k) => get(k) as boolean,
-  };
+  return values as InputsOf<Fs>;
+}
+
+/** Whether the field must be present in these inputs (its `requiredIf` flag, if any, is on). */
+export function isRequired(f: FieldDefinition, inputs: SheetInputs): boolean {
+  return f.required && (f.requiredIf === undefined || inputs[f.requiredIf] !== false);
+}
+
+/** The required fields missing from `inputs`, one error each, in the sheet's field order. */
+export function missingInputs(
+  fields: readonly FieldDefinition[],
+  inputs: SheetInputs,
+): FieldError[] {
+  return fields
+    .filter((f) => isRequired(f, inputs) && (inputs[f.key] === undefined || inputs[f.key] === null))
+    .map((f) => ({ field: f.key, message: MISSING_MESSAGE }));
+}
+
+/**
+ * Keys in `inputs` that the sheet does not declare, one error each, with the closest declared key
+ * as a suggestion when it is near enough to be a slip of the keyboard.
+ */
+export function unknownInputKeys(
+  fields: readonly FieldDefinition[],
+  inputs: SheetInputs,
+): FieldError[] {
+  const known = new Set(fields.map((f) => f.key));
+  const out: FieldError[] = [];
+  for (const key of Object.keys(inputs)) {
+    if (known.has(key)) continue;
+    const near = closestKey(
+      key,
+      fields.map((f) => f.key),
+    );
+    out.push({
+      field: key,
+      message: `not a field of this sheet type${near ? `; did you mean "${near}"?` : ''}`,
+    });
+  }
+  return out;
+}
+
+/** The declared key nearest to `key` (case-insensitive edit distance), if it is close enough. */
+export function closestKey(key: string, keys: readonly string[]): string | undefined {
+  const a = key.toLowerCase();
+  let best: string | undefined;
+  let bestDistance = Infinity;
+  for (const k of keys) {
+    const d = editDistance(a, k.toLowerCase());
+    if (d < bestDistance) {
+      bestDistance = d;
+      best = k;
+    }
+  }
+  // A third of the key's length: 'sprngRate' finds 'springRate', 'bogusField' finds nothing.
+  return bestDistance <= Math.max(1, Math.floor(key.length / 3)) ? best : undefined;
+}
+
+/** Levenshtein distance (insert, delete, substitute; each costs one). */
+export function editDistance(a: string, b: string): number {
+  let prev = Array.from({ length: b.length + 1 }, (_, j) => j);
+  for (let i = 1; i <= a.length; i++) {
+    const cur = [i];
+    for (let j = 1; j <= b.length; j++) {
+      cur[j] = Math.min(prev[j] + 1, cur[j - 1] + 1, prev[j - 1] + (a[i - 1] === b[j - 1] ? 0 : 1));
+    }
+    prev = cur;
+  }
+  return prev[b.length];
 }
 
 function fail(f: FieldDefinition, message: string): never {
   throw new CalcInputError([{ field: f.key, message }]);
 }
 
-function readOne(f: FieldDefinition, raw: unknown): number | string | boolean {
+/** One field's entered value in SI (quantities), as a number, a choice value or a flag. */
+export function readOne(f: FieldDefinition, raw: unknown): number | string | boolean {
   switch (f.kind) {
     case 'boolean':
       if (typeof raw !== 'boolean') fail(f, 'expected true or false');

@@ -1,3 +1,4 @@
+import { demoInputs } from './registry.js';
 import { describe, expect, it } from 'vitest';
 import type { SheetEvaluation } from '../core/types.js';
 import { CalcInputError } from '../core/errors.js';
@@ -103,8 +104,8 @@ describe.each([
   it('gives the same results for US customary inputs', () => {
     const us = Object.fromEntries(
       sheet.fields.map((f) => {
-        const d = f.default as { value: number; unit: string };
-        if (f.kind !== 'quantity' || !f.unitUS || f.unitUS === f.unitSI) return [f.key, f.default];
+        const d = f.demo as { value: number; unit: string };
+        if (f.kind !== 'quantity' || !f.unitUS || f.unitUS === f.unitSI) return [f.key, f.demo];
         return [f.key, `${convert(d.value, d.unit, f.unitUS, f.dimension!)} ${f.unitUS}`];
       }),
     );
@@ -127,6 +128,7 @@ describe('invalid input', () => {
     const fields = fieldsOf(() =>
       hoist.evaluate(
         {
+          ...demoInputs(hoist),
           load: '10 kN',
           drumDiameter: { value: -1, unit: 'mm' },
           muNominal: Number.NaN,
@@ -140,18 +142,24 @@ describe('invalid input', () => {
     );
   });
   it('rejects inconsistent friction band and spring range', () => {
-    expect(fieldsOf(() => hoist.evaluate({ muMin: 0.5 }, crane))).toContain('muMin');
-    expect(fieldsOf(() => trav.evaluate({ springForceMax: '100 N' }, travel))).toContain(
-      'springForceMax',
+    expect(fieldsOf(() => hoist.evaluate({ ...demoInputs(hoist), muMin: 0.5 }, crane))).toContain(
+      'muMin',
     );
-    expect(fieldsOf(() => caliper.evaluate({ padInnerRadius: '600 mm' }, general))).toContain(
-      'padInnerRadius',
-    );
-    expect(fieldsOf(() => trav.evaluate({ brakedWheels: 9 }, travel))).toContain('brakedWheels');
+    expect(
+      fieldsOf(() => trav.evaluate({ ...demoInputs(trav), springForceMax: '100 N' }, travel)),
+    ).toContain('springForceMax');
+    expect(
+      fieldsOf(() =>
+        caliper.evaluate({ ...demoInputs(caliper), padInnerRadius: '600 mm' }, general),
+      ),
+    ).toContain('padInnerRadius');
+    expect(
+      fieldsOf(() => trav.evaluate({ ...demoInputs(trav), brakedWheels: 9 }, travel)),
+    ).toContain('brakedWheels');
   });
   it('maps disc-spring errors to the sheet fields', () => {
     expect(
-      fieldsOf(() => hoist.evaluate({ holderDi: '50 mm' }, crane)).some((f) =>
+      fieldsOf(() => hoist.evaluate({ ...demoInputs(hoist), holderDi: '50 mm' }, crane)).some((f) =>
         f.startsWith('holder'),
       ),
     ).toBe(true);
@@ -161,7 +169,7 @@ describe('invalid input', () => {
 describe('physics of the sheets', () => {
   it('a brake too weak to stop the lowering load is a failed check with a message, not an exception', () => {
     const e = hoist.evaluate(
-      { springForce: '550 N', springForceMin: '100 N', load: '30 t' },
+      { ...demoInputs(hoist), springForce: '550 N', springForceMin: '100 N', load: '30 t' },
       crane,
     );
     const stop = e.checks.find((c) => c.id === 'stops-load')!;
@@ -172,19 +180,25 @@ describe('physics of the sheets', () => {
     expect(allNumbers(e).every(Number.isFinite)).toBe(true);
   });
   it('crane-hoist asks 1.25 × hoisting torque; general-industry 1.5 ×', () => {
-    const a = hoist.evaluate({}, crane).results.find((r) => r.key === 'required-torque')!.value;
-    const b = hoist.evaluate({}, general).results.find((r) => r.key === 'required-torque')!.value;
-    const h = hoist.evaluate({}, crane).results.find((r) => r.key === 'hoisting-torque')!.value;
+    const a = hoist
+      .evaluate(demoInputs(hoist), crane)
+      .results.find((r) => r.key === 'required-torque')!.value;
+    const b = hoist
+      .evaluate(demoInputs(hoist), general)
+      .results.find((r) => r.key === 'required-torque')!.value;
+    const h = hoist
+      .evaluate(demoInputs(hoist), crane)
+      .results.find((r) => r.key === 'hoisting-torque')!.value;
     expect(nearlyEqual(a, 1.25 * h, 1e-12)).toBe(true);
     expect(nearlyEqual(b, 1.5 * h, 1e-12)).toBe(true);
   });
   it('zero reserve stroke at worn lining fails the reserve check and warns', () => {
-    const e = hoist.evaluate({ reserveStroke: '8 mm' }, crane);
+    const e = hoist.evaluate({ ...demoInputs(hoist), reserveStroke: '8 mm' }, crane);
     expect(e.checks.find((c) => c.id === 'reserve-stroke-worn')!.pass).toBe(false);
     expect(e.warnings.join(' ')).toMatch(/loses torque/);
   });
   it('a travel brake that is too strong fails the adhesion check', () => {
-    const e = trav.evaluate({ springForce: '780 N', torqueFactor: 1 }, travel);
+    const e = trav.evaluate({ ...demoInputs(trav), springForce: '780 N', torqueFactor: 1 }, travel);
     expect(e.checks.find((c) => c.id === 'wheel-adhesion')!.pass).toBe(false);
   });
 });
@@ -196,7 +210,7 @@ describe('energy bookkeeping', () => {
       [trav, travel],
       [caliper, general],
     ] as const) {
-      const e = sheet.evaluate({}, criteria);
+      const e = sheet.evaluate(demoInputs(sheet), criteria);
       const v = (id: string) => e.derivation.find((s) => s.id === id)!.value;
       expect(nearlyEqual(v('energy-kinetic') + v('energy-load-work'), v('brake-work'), 1e-12)).toBe(
         true,
@@ -207,7 +221,7 @@ describe('energy bookkeeping', () => {
 
 describe('temperature checks', () => {
   it('report the used share of the allowed rise above ambient', () => {
-    const e = hoist.evaluate({}, crane);
+    const e = hoist.evaluate(demoInputs(hoist), crane);
     const c = e.checks.find((x) => x.id === 'temperature-steady')!;
     const Tamb = 30 + 273.15;
     expect(nearlyEqual(c.utilisation, (c.value - Tamb) / (c.limit - Tamb), 1e-12)).toBe(true);

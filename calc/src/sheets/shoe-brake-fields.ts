@@ -1,6 +1,6 @@
 import type { FieldDefinition, SectionDefinition } from '../core/types.js';
 import { LININGS } from '../criteria/linings.js';
-import { choice, flag, num, qty } from './field-builders.js';
+import { choice, flag, num, qty, type InputsOf } from './field-builders.js';
 
 /** Sections shared by the shoe-brake sheets (after each sheet's own duty section). */
 export const SHOE_SECTIONS: SectionDefinition[] = [
@@ -19,7 +19,7 @@ const T = 'thermal';
 const R = 'release';
 const S = 'discSprings';
 
-export const BRAKE_FIELDS: FieldDefinition[] = [
+export const BRAKE_FIELDS = [
   qty(B, 'drumDiameter', 'Brake drum diameter', 'D', 'length', 400, 'mm', 'in', {
     min: 50,
     max: 2000,
@@ -101,9 +101,9 @@ export const BRAKE_FIELDS: FieldDefinition[] = [
       help: 'Shaft, coupling and gearbox rating (equipment data): the brake at μ max must not exceed it.',
     },
   ),
-];
+] as const;
 
-export const LINING_FIELDS: FieldDefinition[] = [
+export const LINING_FIELDS = [
   choice(
     L,
     'liningMaterial',
@@ -142,9 +142,9 @@ export const LINING_FIELDS: FieldDefinition[] = [
     exclusiveMin: true,
     help: 'From the drum maker (material and balance). About 30 m/s for grey iron is a value from memory.',
   }),
-];
+] as const;
 
-export const THERMAL_FIELDS: FieldDefinition[] = [
+export const THERMAL_FIELDS = [
   qty(T, 'stopsPerHour', 'Stops per hour', 'z', 'frequency', 60, '1/h', '1/h', { min: 0 }),
   qty(T, 'drumMass', 'Heat-absorbing drum mass', 'm_d', 'mass', 60, 'kg', 'lb', {
     min: 0,
@@ -184,9 +184,9 @@ export const THERMAL_FIELDS: FieldDefinition[] = [
     min: -60,
     max: 150,
   }),
-];
+] as const;
 
-export const RELEASE_FIELDS: FieldDefinition[] = [
+export const RELEASE_FIELDS = [
   qty(R, 'clearance', 'Shoe clearance when released (per shoe)', 'ε', 'length', 0.8, 'mm', 'in', {
     min: 0,
     exclusiveMin: true,
@@ -224,15 +224,15 @@ export const RELEASE_FIELDS: FieldDefinition[] = [
     'in',
     { min: 0 },
   ),
-];
+] as const;
 
-function stackFields(
-  prefix: 'holder' | 'equaliser',
+function stackFields<P extends 'holder' | 'equaliser'>(
+  prefix: P,
   title: string,
   series: number,
   pitch: number,
   backOff: number,
-): FieldDefinition[] {
+) {
   return [
     flag(S, `${prefix}Enabled`, `${title}: include`, true),
     qty(S, `${prefix}De`, `${title}: disc outer diameter`, 'D_e', 'length', 40, 'mm', 'in', {
@@ -284,19 +284,29 @@ function stackFields(
       'deg',
       { min: 0, max: 3600 },
     ),
-  ];
+  ] as const;
+}
+
+/** A stack's fields other than its flag are needed only while the stack is included. */
+function ifEnabled<const Fs extends readonly FieldDefinition[]>(prefix: string, fields: Fs): Fs {
+  return fields.map((f) =>
+    f.kind === 'boolean' ? f : { ...f, requiredIf: `${prefix}Enabled` },
+  ) as unknown as Fs;
 }
 
 /** Optional disc-spring stacks (common practice: holder flat then about 60°, equaliser stack of three flat then about 180°). */
-export const DISC_SPRING_FIELDS: FieldDefinition[] = [
-  ...stackFields('holder', 'Shoe holder', 1, 2.5, 60),
-  ...stackFields('equaliser', 'Equaliser', 3, 2, 180),
-];
+export const DISC_SPRING_FIELDS = [
+  ...ifEnabled('holder', stackFields('holder', 'Shoe holder', 1, 2.5, 60)),
+  ...ifEnabled('equaliser', stackFields('equaliser', 'Equaliser', 3, 2, 180)),
+] as const;
 
-export const SHOE_BRAKE_FIELDS: FieldDefinition[] = [
+export const SHOE_BRAKE_FIELDS = [
   ...BRAKE_FIELDS,
   ...LINING_FIELDS,
   ...THERMAL_FIELDS,
   ...RELEASE_FIELDS,
   ...DISC_SPRING_FIELDS,
-];
+] as const;
+
+/** The shoe-brake inputs as the shared shoe-brake formulas read them (SI). */
+export type ShoeInputs = InputsOf<typeof SHOE_BRAKE_FIELDS>;

@@ -6,7 +6,7 @@ import { TABLE_STEEL } from '../disc-springs/disc.js';
 import { WORKING_BAND, workingBandWarning } from '../disc-springs/curve.js';
 import type { DiscStack } from '../disc-springs/stack.js';
 import { makeCheck } from './checks.js';
-import type { ReadInputs } from './sheet-inputs.js';
+import type { ShoeInputs } from './shoe-brake-fields.js';
 
 const SECTION = 'discSprings';
 // Friction factors for series-stacked discs (recalled from DIN EN 16984's table, memory): only
@@ -28,17 +28,17 @@ const PRACTICE = {
     'common practice, no published source: a stack of three disc springs on an equaliser shaft is tightened flat, then backed off about 180°',
 } as const;
 
-function stackOf(v: ReadInputs, p: 'holder' | 'equaliser'): DiscStack {
+function stackOf(v: ShoeInputs, p: 'holder' | 'equaliser'): DiscStack {
   return {
     disc: {
-      De: v.num(`${p}De`),
-      Di: v.num(`${p}Di`),
-      t: v.num(`${p}T`),
-      l0: v.num(`${p}L0`),
+      De: v[`${p}De`],
+      Di: v[`${p}Di`],
+      t: v[`${p}T`],
+      l0: v[`${p}L0`],
       ...TABLE_STEEL,
     },
-    seriesCount: v.num(`${p}Series`),
-    parallelCount: v.num(`${p}Parallel`),
+    seriesCount: v[`${p}Series`],
+    parallelCount: v[`${p}Parallel`],
     ...FRICTION,
   };
 }
@@ -47,18 +47,14 @@ function stackOf(v: ReadInputs, p: 'holder' | 'equaliser'): DiscStack {
  * Back-off preload of the optional shoe-holder and equaliser disc-spring stacks, computed by the
  * disc-spring core (DIN EN 16984 relations) and recorded in the sheet's derivation.
  */
-export function evaluateShoeDiscSprings(v: ReadInputs, d: Derivation, out: SheetEvaluation): void {
+export function evaluateShoeDiscSprings(v: ShoeInputs, d: Derivation, out: SheetEvaluation): void {
   for (const p of ['holder', 'equaliser'] as const) {
-    if (!v.bool(`${p}Enabled`)) continue;
+    if (!v[`${p}Enabled`]) continue;
     d.section = SECTION;
     const stack = stackOf(v, p);
     let r;
     try {
-      r = deriveStackSet(
-        { stack, lead: v.num(`${p}Pitch`), angle: v.num(`${p}BackOff`) },
-        d,
-        `${p}-`,
-      );
+      r = deriveStackSet({ stack, lead: v[`${p}Pitch`], angle: v[`${p}BackOff`] }, d, `${p}-`);
     } catch (e) {
       if (!isCalcInputError(e)) throw e;
       throw new CalcInputError(
@@ -85,7 +81,7 @@ export function evaluateShoeDiscSprings(v: ReadInputs, d: Derivation, out: Sheet
       {
         key: `${p}BackOff`,
         label: `${title}: tighten until flat, then back off`,
-        value: v.num(`${p}BackOff`),
+        value: v[`${p}BackOff`],
         unit: 'rad',
         dimension: 'angle',
         note: PRACTICE[p],

@@ -1,6 +1,5 @@
 import type {
   CriteriaSet,
-  FieldDefinition,
   InputValue,
   SheetEvaluation,
   SheetInputs,
@@ -26,7 +25,7 @@ import { evaluateShoeBrake, validateShoeInputs } from './shoe-brake-evaluate.js'
 
 const U = 'duty';
 
-export const TRAVEL_DUTY_FIELDS: FieldDefinition[] = [
+export const TRAVEL_DUTY_FIELDS = [
   qty(U, 'motorPower', 'Motor rated power (one drive)', 'P', 'power', 7.5, 'kW', 'hp', {
     min: 0,
     exclusiveMin: true,
@@ -116,10 +115,10 @@ export const TRAVEL_DUTY_FIELDS: FieldDefinition[] = [
     min: 0,
     max: 10,
   }),
-];
+] as const;
 
-/** Shoe-brake defaults sized for the travel demo (smaller drum and spring than the hoist). */
-const TRAVEL_DEFAULTS: Record<string, InputValue> = {
+/** Shoe-brake demo values sized for the travel demo (smaller drum and spring than the hoist). */
+const TRAVEL_DEMO: Record<string, InputValue> = {
   drumDiameter: { value: 200, unit: 'mm' },
   shoeWidth: { value: 90, unit: 'mm' },
   springForce: { value: 520, unit: 'N' },
@@ -134,13 +133,13 @@ const TRAVEL_DEFAULTS: Record<string, InputValue> = {
   thrusterForce: { value: 220, unit: 'N' },
 };
 
-const FIELDS: FieldDefinition[] = withBounds(
+const FIELDS = withBounds(
   [
     ...TRAVEL_DUTY_FIELDS,
-    ...SHOE_BRAKE_FIELDS.map((f) =>
-      f.key in TRAVEL_DEFAULTS ? { ...f, default: TRAVEL_DEFAULTS[f.key] } : f,
-    ),
-  ],
+    ...(SHOE_BRAKE_FIELDS.map((f) =>
+      f.key in TRAVEL_DEMO ? { ...f, demo: TRAVEL_DEMO[f.key] } : f,
+    ) as unknown as typeof SHOE_BRAKE_FIELDS),
+  ] as const,
   TRAVEL_BOUNDS,
 );
 
@@ -151,30 +150,30 @@ export function evaluateTravelShoeBrake(
 ): SheetEvaluation {
   const v = readInputs(FIELDS, inputs);
   const cross = validateShoeInputs(v);
-  if (!(v.num('brakedWheels') <= v.num('wheels')))
+  if (!(v.brakedWheels <= v.wheels))
     cross.push({ field: 'brakedWheels', message: 'cannot exceed the number of wheels' });
   if (cross.length) throw new CalcInputError(cross);
   const d = new Derivation(U);
   const out = newEvaluation('travel-shoe-brake', criteria, d);
-  const omega = q.angularSpeed(v.num('motorSpeed'));
-  const vT = q.speed(v.num('travelSpeed'));
-  const Mmot = motorRatedTorque(q.power(v.num('motorPower')), omega, d);
-  const massPerBrake = q.mass(v.num('travelMass') / v.num('brakeCount'));
+  const omega = q.angularSpeed(v.motorSpeed);
+  const vT = q.speed(v.travelSpeed);
+  const Mmot = motorRatedTorque(q.power(v.motorPower), omega, d);
+  const massPerBrake = q.mass(v.travelMass / v.brakeCount);
   const Jload = referLinearMass(massPerBrake, vT, omega, d, {
     label: 'Travelling mass per brake referred to the brake shaft',
     symbol: 'J_load,b',
   });
   const J = inertiaTotal(
     {
-      motor: q.inertia(v.num('motorInertia')),
-      brakeDrum: q.inertia(v.num('brakeDrumInertia')),
-      gear: q.inertia(v.num('gearInertia')),
+      motor: q.inertia(v.motorInertia),
+      brakeDrum: q.inertia(v.brakeDrumInertia),
+      gear: q.inertia(v.gearInertia),
       output: q.inertia(0),
       load: Jload,
     },
     d,
   );
-  const Mreq = requiredBrakeTorque(q.ratio(v.num('torqueFactor')), Mmot, d, 'motor');
+  const Mreq = requiredBrakeTorque(q.ratio(v.torqueFactor), Mmot, d, 'motor');
   const frac = criterion(criteria, 'travelStopFraction');
   d.section = 'stopping';
   const sMax = tenPercentStoppingDistance(vT, d, frac.value);
@@ -184,10 +183,10 @@ export function evaluateTravelShoeBrake(
       brakeSpeed: omega,
       loadSpeed: vT,
       inertia: J,
-      driveTorque: v.num('driveTorque'),
+      driveTorque: v.driveTorque,
       requiredTorque: Mreq,
       requiredSource: 'user-set torque factor × motor rated torque — check the governing standard',
-      setDelay: v.num('setDelay'),
+      setDelay: v.setDelay,
       stopLimit: { value: sMax, source: frac.source },
       stopCase: 'travelling',
     },
@@ -203,18 +202,18 @@ export function evaluateTravelShoeBrake(
       speed: omega,
       loadSpeed: vT,
       brakeTorque: q.torque(outcome.torqueMaxNew),
-      driveTorque: q.torque(v.num('driveTorque')),
-      setDelay: q.time(v.num('setDelay')),
+      driveTorque: q.torque(v.driveTorque),
+      setDelay: q.time(v.setDelay),
     },
     d,
     'hard-',
   );
   if (hard.stops) {
     const mu = adhesionNeeded(
-      q.mass(v.num('travelMass')),
+      q.mass(v.travelMass),
       hard.loadDeceleration,
-      v.num('brakedWheels'),
-      v.num('wheels'),
+      v.brakedWheels,
+      v.wheels,
       d,
     );
     const lim = criterion(criteria, 'adhesionLimit');

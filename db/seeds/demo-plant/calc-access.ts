@@ -17,10 +17,9 @@ export function shippedCriteriaSets(): CriteriaSet[] {
   return [...calc.CRITERIA_SETS];
 }
 
+/** The demo duty of the sheet type, from its one definition in calc. */
 export function defaults(def: SheetTypeDefinition): SheetInputs {
-  return Object.fromEntries(
-    def.fields.map((f) => [f.key, structuredClone(f.default)]),
-  ) as SheetInputs;
+  return calc.demoInputs(def);
 }
 
 /**

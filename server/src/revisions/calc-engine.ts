@@ -1,6 +1,7 @@
 import {
   CORE_VERSION,
   CRITERIA_SETS,
+  demoInputs,
   getSheetType,
   isCalcInputError as calcInputErrorGuard,
   type CriteriaSet,
@@ -48,13 +49,13 @@ export function defaultCriteriaSetId(sheetType: string): string {
   return (sets.find((s) => s.id.includes(prefer)) ?? sets[0]).id;
 }
 
-/** A fresh copy of a sheet type's default inputs. */
-export function defaultInputs(sheetType: string): SheetInputs {
-  const def = sheetTypeDefinition(sheetType);
-  return Object.fromEntries(
-    def.fields.map((f) => [f.key, structuredClone(f.default)]),
-  ) as SheetInputs;
+/** A fresh copy of a sheet type's demo inputs (the invented example duty). */
+export function demoInputsOf(sheetType: string): SheetInputs {
+  return demoInputs(sheetTypeDefinition(sheetType));
 }
+
+/** @deprecated the demo values are not defaults: use `demoInputsOf`. */
+export const defaultInputs = demoInputsOf;
 
 /** Current calculation-core version (stored with each evaluation). */
 export function coreVersion(): string {

@@ -38,7 +38,13 @@ export const verificationCase = defineCase({
     const e = discSpringStackSheet.evaluate(
       {
         E: { value: 206000e6 / 6894.757293168361, unit: 'psi' },
+        nu: 0.3,
         bEnabled: false,
+        aEnabled: true,
+        aSize: 'custom',
+        atReduced: '0 mm',
+        aSeries: 1,
+        aParallel: 1,
         aDe: '1.574803 in',
         aDi: '0.80315 in',
         at: '0.088583 in',

@@ -25,7 +25,8 @@ const fields: FieldDefinition[] = [
     dimension: 'power',
     unitSI: 'kW',
     unitUS: 'hp',
-    default: { value: 90, unit: 'kW' },
+    demo: { value: 90, unit: 'kW' },
+    required: true,
   },
   {
     key: 'motorSpeed',
@@ -36,7 +37,8 @@ const fields: FieldDefinition[] = [
     dimension: 'angularSpeed',
     unitSI: 'rpm',
     unitUS: 'rpm',
-    default: { value: 985, unit: 'rpm' },
+    demo: { value: 985, unit: 'rpm' },
+    required: true,
   },
   {
     key: 'torqueReference',
@@ -44,7 +46,8 @@ const fields: FieldDefinition[] = [
     label: 'Torque reference',
     symbol: 'ref',
     kind: 'choice',
-    default: 'motor',
+    demo: 'motor',
+    required: true,
     choices: [
       { value: 'motor', label: 'Motor rated torque' },
       { value: 'load', label: 'Static load torque' },
@@ -56,7 +59,8 @@ const fields: FieldDefinition[] = [
     label: 'Gear efficiency (load driving)',
     symbol: 'η_g',
     kind: 'number',
-    default: 0.94,
+    demo: 0.94,
+    required: true,
   },
   {
     key: 'drumDiameter',
@@ -67,7 +71,8 @@ const fields: FieldDefinition[] = [
     dimension: 'length',
     unitSI: 'mm',
     unitUS: 'in',
-    default: { value: 500, unit: 'mm' },
+    demo: { value: 500, unit: 'mm' },
+    required: true,
   },
   {
     key: 'springForce',
@@ -78,7 +83,8 @@ const fields: FieldDefinition[] = [
     dimension: 'force',
     unitSI: 'kN',
     unitUS: 'lbf',
-    default: { value: 12.4, unit: 'kN' },
+    demo: { value: 12.4, unit: 'kN' },
+    required: true,
   },
   {
     key: 'leverRatio',
@@ -86,7 +92,8 @@ const fields: FieldDefinition[] = [
     label: 'Lever ratio',
     symbol: 'i_L',
     kind: 'number',
-    default: 2.6,
+    demo: 2.6,
+    required: true,
   },
   {
     key: 'muMin',
@@ -94,7 +101,8 @@ const fields: FieldDefinition[] = [
     label: 'Friction coefficient, minimum',
     symbol: 'μ_min',
     kind: 'number',
-    default: 0.35,
+    demo: 0.35,
+    required: true,
   },
   {
     key: 'liningWidth',
@@ -105,7 +113,8 @@ const fields: FieldDefinition[] = [
     dimension: 'length',
     unitSI: 'mm',
     unitUS: 'in',
-    default: { value: 190, unit: 'mm' },
+    demo: { value: 190, unit: 'mm' },
+    required: true,
   },
   {
     key: 'hotMetal',
@@ -113,7 +122,8 @@ const fields: FieldDefinition[] = [
     label: 'Hot-metal duty',
     symbol: 'HM',
     kind: 'boolean',
-    default: true,
+    demo: true,
+    required: true,
   },
 ];
 

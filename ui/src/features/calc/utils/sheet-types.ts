@@ -42,7 +42,7 @@ export function sheetTypeTitle(id: string): string {
 /** The stored inputs over the type's defaults, so a field the sheet lacks shows its default. */
 export function withDefaults(type: SheetTypeDefinition, inputs: SheetInputs): SheetInputs {
   const out: SheetInputs = {};
-  for (const f of type.fields) out[f.key] = f.default;
+  for (const f of type.fields) out[f.key] = f.demo;
   return { ...out, ...inputs };
 }
 

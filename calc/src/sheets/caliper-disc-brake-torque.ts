@@ -1,0 +1,221 @@
+import type { CheckResult, CriteriaSet } from '../core/types.js';
+import { compute, type Derivation } from '../core/step.js';
+import { criterion } from '../criteria/lookup.js';
+import type { LiningMaterial } from '../criteria/linings.js';
+import { motorRatedTorque } from '../duty/motor-torque.js';
+import { referTorque } from '../duty/referral.js';
+import { hoistingTorqueFormula, holdingTorqueFormula } from '../duty/hoist-load.js';
+import {
+  REFERENCE_BASIS_TEXT,
+  requiredBrakeTorque,
+  type ReferenceBasis,
+} from '../duty/required-torque.js';
+import { caliperTorque, uniformWearRadius } from '../disc-brake/caliper.js';
+import { padPressure } from '../disc-brake/pad-duty.js';
+import { wornSpringForce } from '../shoe-brake/worn-lining.js';
+import { pvFormula, rubbingSpeedFormula } from '../shoe-brake/lining-duty.js';
+import * as q from '../units/quantities.js';
+import { makeCheck } from './checks.js';
+import type { CaliperInputs } from './caliper-disc-brake-fields.js';
+import { ARRANGEMENT_KEY } from './hoist-shoe-brake.js';
+
+/** The duty at the brake shaft (section 'duty'). */
+export interface CaliperDuty {
+  brakeSpeed: q.AngularSpeed;
+  /** Torque the overhauling load keeps driving with during the stop. */
+  holdingTorque: number;
+  requiredTorque: number;
+  requiredSource: string;
+}
+
+/** Torques over the friction band, at worn pads, and the pads' duty (sections 'brake', 'lining'). */
+export interface CaliperTorques {
+  clampForce: q.Force;
+  nominal: q.Torque;
+  min: q.Torque;
+  max: q.Torque;
+  wornClampForce: q.Force;
+  wornMin: q.Torque;
+  padPressure: number;
+  rubbingSpeedOuter: number;
+  pv: number;
+}
+
+/** Motor torque, load torques and the required brake torque at the brake shaft. */
+export function caliperDuty(v: CaliperInputs, criteria: CriteriaSet, d: Derivation): CaliperDuty {
+  const omegaMot = q.angularSpeed(v.motorSpeed);
+  const omega = q.angularSpeed(omegaMot / v.ratioToBrake);
+  const Mmot = motorRatedTorque(q.power(v.motorPower), omegaMot, d);
+  const eta = v.efficiency;
+  const ML = v.staticTorque;
+  const Mhoist = compute(d, hoistingTorqueFormula, { M_L: ML, eta });
+  const Mhold = compute(d, holdingTorqueFormula, { M_L: ML, eta });
+  // Motor torque referred to the brake shaft without efficiency loss: the brake must hold what the motor can drive.
+  const MmotB = referTorque(Mmot, q.ratio(1 / v.ratioToBrake), q.ratio(1), 'driving', d, {
+    id: 'motor-torque-at-brake',
+    label: 'Motor rated torque referred to the brake shaft',
+    symbol: 'M_mot,b',
+  });
+  const basis = v.referenceBasis as ReferenceBasis;
+  const Mref = basis === 'motor' ? MmotB : basis === 'hoisting' ? Mhoist : Mhold;
+  const factor = criterion(criteria, ARRANGEMENT_KEY[v.brakeArrangement]);
+  const Mreq = requiredBrakeTorque(q.ratio(factor.value), q.torque(Mref), d, basis);
+  return {
+    brakeSpeed: omega,
+    holdingTorque: Mhold,
+    requiredTorque: Mreq,
+    requiredSource: `${factor.source}; reference: ${REFERENCE_BASIS_TEXT[basis]}`,
+  };
+}
+
+/** Effective radius, torque new and worn, pad pressure, rubbing speed and p·v. */
+export function caliperTorques(v: CaliperInputs, duty: CaliperDuty, d: Derivation): CaliperTorques {
+  d.section = 'brake';
+  const re = uniformWearRadius(q.length(v.padOuterRadius), q.length(v.padInnerRadius), d);
+  const Fc = q.force(v.clampForce);
+  const T = (mu: number, F: number, id: string, label: string, symbol: string) =>
+    caliperTorque(q.ratio(mu), q.force(F), re, v.faces, v.calipers, d, { id, label, symbol });
+  const nominal = T(
+    v.muNominal,
+    Fc,
+    'torque-nominal',
+    'Brake torque at μ nominal, new pads',
+    'M_b,nom',
+  );
+  const min = T(v.muMin, Fc, 'torque-min', 'Brake torque at μ min, new pads', 'M_b,min');
+  const max = T(v.muMax, Fc, 'torque-max', 'Brake torque at μ max, new pads', 'M_b,max');
+  d.section = 'lining';
+  const worn = wornSpringForce(
+    Fc,
+    q.stiffness(v.springRate),
+    q.length(v.wear),
+    q.ratio(v.wearTravelRatio),
+    d,
+  );
+  const wornMin = T(
+    v.muMin,
+    worn.force,
+    'torque-worn-min',
+    'Brake torque at μ min, worn pads',
+    'M_b,w,min',
+  );
+  T(
+    v.muNominal,
+    worn.force,
+    'torque-worn-nominal',
+    'Brake torque at μ nominal, worn pads',
+    'M_b,w,nom',
+  );
+  const p = padPressure(Fc, q.area(v.padArea), d);
+  const omega = duty.brakeSpeed;
+  const vMax = compute(
+    d,
+    rubbingSpeedFormula,
+    { omega, D: 2 * v.padOuterRadius },
+    { label: 'Rubbing speed at the pad outer radius', symbol: 'v_o' },
+  );
+  const vE = compute(
+    d,
+    rubbingSpeedFormula,
+    { omega, D: 2 * re },
+    {
+      id: 'rubbing-speed-effective',
+      label: 'Rubbing speed at the effective radius',
+      symbol: 'v_e',
+    },
+  );
+  const pv = compute(d, pvFormula, { p_m: p, v_r: vE });
+  return {
+    clampForce: Fc,
+    nominal,
+    min,
+    max,
+    wornClampForce: worn.force,
+    wornMin,
+    padPressure: p,
+    rubbingSpeedOuter: vMax,
+    pv,
+  };
+}
+
+/** Torque against the requirement and the shaft rating, pad duty, and that the load stops at all. */
+export function caliperTorqueChecks(
+  v: CaliperInputs,
+  duty: CaliperDuty,
+  t: CaliperTorques,
+  lining: LiningMaterial,
+  criteria: CriteriaSet,
+): CheckResult[] {
+  const tq = (id: string, label: string, value: number) =>
+    makeCheck({
+      id,
+      section: 'brake',
+      label,
+      value,
+      limit: duty.requiredTorque,
+      kind: 'min',
+      dimension: 'torque',
+      source: duty.requiredSource,
+      failHint: 'Raise the clamp force, add a caliper, or use a larger disc.',
+    });
+  const pad = (id: string, label: string, limit: number) =>
+    makeCheck({
+      id,
+      section: 'lining',
+      label,
+      value: t.padPressure,
+      limit,
+      kind: 'max',
+      dimension: 'pressure',
+      source: `${lining.source} (${lining.label})`,
+    });
+  return [
+    tq('torque-nominal', 'Brake torque at μ nominal ≥ required', t.nominal),
+    tq('torque-min-friction', 'Brake torque at μ min ≥ required', t.min),
+    tq('torque-worn-min-friction', 'Brake torque at μ min and worn pads ≥ required', t.wornMin),
+    makeCheck({
+      id: 'torque-max-friction',
+      section: 'brake',
+      label: 'Brake torque at μ max ≤ shaft rating',
+      value: t.max,
+      limit: v.maxBrakeTorque,
+      kind: 'max',
+      dimension: 'torque',
+      source: 'equipment data (user input): shaft and hub torque rating',
+    }),
+    pad('pad-pressure-max', 'Pad pressure ≤ pad maximum', lining.maxPressure),
+    pad('pad-pressure-working', 'Pad pressure ≤ upper working pressure', lining.workingPressureMax),
+    makeCheck({
+      id: 'rubbing-speed',
+      section: 'lining',
+      label: 'Rubbing speed at the outer radius ≤ disc rating',
+      value: t.rubbingSpeedOuter,
+      limit: v.discMaxSpeed,
+      kind: 'max',
+      dimension: 'speed',
+      source: "equipment data (user input): disc maker's speed rating",
+    }),
+    makeCheck({
+      id: 'pv',
+      section: 'lining',
+      label: 'p·v ≤ limit',
+      value: t.pv,
+      limit: criterion(criteria, 'pvLimit').value,
+      kind: 'max',
+      dimension: 'pv',
+      source: criterion(criteria, 'pvLimit').source,
+    }),
+    makeCheck({
+      id: 'stops-load',
+      section: 'stopping',
+      label: 'Brake torque (μ min, worn) exceeds the overhauling torque',
+      value: t.wornMin,
+      limit: duty.holdingTorque,
+      kind: 'min',
+      strict: true,
+      dimension: 'torque',
+      source: 'rigid-body dynamics: the load stops only if M_b > M_d',
+      failHint: 'The load is never stopped.',
+    }),
+  ];
+}
