@@ -57,6 +57,17 @@ export { LININGS, getLining, type LiningMaterial } from './criteria/linings.js';
 export { CRITERIA_SETS, GENERAL_INDUSTRY, CRANE_HOIST, TRAVEL_DRIVE } from './criteria/sets.js';
 export { getCriteriaSet, criterion } from './criteria/lookup.js';
 export { sheetTypes, getSheetType, demoInputs, defaultInputs } from './sheets/registry.js';
+export { SHEET_TYPE_IDS, DIMENSION_IDS, type SheetTypeId } from './ids.js';
+export {
+  closestKey,
+  isRequired,
+  missingInputs,
+  MISSING_MESSAGE,
+  readInputs,
+  resolveInputs,
+  unknownInputKeys,
+} from './sheets/sheet-inputs.js';
+export type { InputsOf } from './sheets/field-builders.js';
 export { hoistShoeBrakeSheet, evaluateHoistShoeBrake } from './sheets/hoist-shoe-brake.js';
 export { travelShoeBrakeSheet, evaluateTravelShoeBrake } from './sheets/travel-shoe-brake.js';
 export { caliperDiscBrakeSheet, evaluateCaliperDiscBrake } from './sheets/caliper-disc-brake.js';

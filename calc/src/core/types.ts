@@ -2,6 +2,7 @@
  * The public shapes of the calculation core. Everything that leaves calc (to shared, server, ui,
  * the PDF) is one of these. Values inside calc are SI; `unit` strings are mathjs unit text.
  */
+import type { DIMENSION_IDS } from '../ids.js';
 
 /** A physical quantity as a user typed it or as the core reports it, e.g. { value: 12, unit: 'kN' }. */
 export interface Quantity {
@@ -16,30 +17,7 @@ export type InputValue = Quantity | number | string | boolean;
 export type SheetInputs = Record<string, InputValue>;
 
 /** Physical dimension of a field or result; decides which units are accepted and offered. */
-export type Dimension =
-  | 'length'
-  | 'force'
-  | 'torque'
-  | 'power'
-  | 'speed'
-  | 'angularSpeed'
-  | 'angularAcceleration'
-  | 'mass'
-  | 'inertia'
-  | 'pressure'
-  | 'pv'
-  | 'energy'
-  | 'temperature'
-  | 'temperatureDifference'
-  | 'time'
-  | 'angle'
-  | 'acceleration'
-  | 'stiffness'
-  | 'specificHeat'
-  | 'heatTransferCoefficient'
-  | 'area'
-  | 'frequency'
-  | 'dimensionless';
+export type Dimension = (typeof DIMENSION_IDS)[number];
 
 /** One input field of a sheet type. */
 export interface FieldDefinition {
@@ -162,6 +140,17 @@ export interface FieldSetting {
   note?: string;
 }
 
+/** One input as the core used it: what was entered, and its value in SI. */
+export interface ResolvedInput {
+  key: string;
+  /** The value exactly as entered (quantity with its unit, number, choice value or flag). */
+  entered: InputValue;
+  /** SI value for quantities and numbers, the choice value or the flag otherwise. */
+  si: number | string | boolean;
+  /** SI unit (mathjs text) of `si` for quantities, '' otherwise. */
+  siUnit: string;
+}
+
 /** The complete outcome of evaluating one sheet. */
 export interface SheetEvaluation {
   sheetType: string;
@@ -183,6 +172,12 @@ export interface SheetEvaluation {
   warnings: string[];
   /** True when every check passes. */
   pass: boolean;
+  /**
+   * The inputs the core used, as entered and in SI, in the sheet's field order. Not set by
+   * `evaluate` (a live evaluation has the inputs beside it); attached to the frozen record when a
+   * revision is submitted, so the record and its printout show exactly what was calculated.
+   */
+  resolvedInputs?: ResolvedInput[];
 }
 
 /** One value of an acceptance-criteria set, with where it comes from. */
@@ -205,8 +200,8 @@ export interface CriteriaSet {
 }
 
 /** A sheet type: its fields, sections and the one evaluate(). */
-export interface SheetTypeDefinition {
-  id: string;
+export interface SheetTypeDefinition<Id extends string = string> {
+  id: Id;
   title: string;
   description: string;
   sections: SectionDefinition[];

@@ -117,7 +117,7 @@ const CALIPER_PUBLISHED_STEPS = [
   'thruster-force-ratio',
 ];
 
-export const caliperDiscBrakeSheet: SheetTypeDefinition = {
+export const caliperDiscBrakeSheet: SheetTypeDefinition<'caliper-disc-brake'> = {
   id: 'caliper-disc-brake',
   title: 'Caliper disc brake',
   description:

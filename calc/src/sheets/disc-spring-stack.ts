@@ -153,7 +153,7 @@ export function evaluateDiscSpringStack(
 }
 
 /** The 'disc-spring-stack' sheet type (registered by the sheet-type registry). */
-export const discSpringStackSheet: SheetTypeDefinition = {
+export const discSpringStackSheet: SheetTypeDefinition<'disc-spring-stack'> = {
   id: 'disc-spring-stack',
   title: 'Disc-spring stack',
   description:

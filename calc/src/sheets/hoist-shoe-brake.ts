@@ -230,7 +230,7 @@ export function evaluateHoistShoeBrake(
   return finish(out);
 }
 
-export const hoistShoeBrakeSheet: SheetTypeDefinition = {
+export const hoistShoeBrakeSheet: SheetTypeDefinition<'hoist-shoe-brake'> = {
   id: 'hoist-shoe-brake',
   title: 'Shoe brake on a hoist',
   description:

@@ -1,20 +1,26 @@
 import type { SheetInputs, SheetTypeDefinition } from '../core/types.js';
+import type { SheetTypeId } from '../ids.js';
 import { caliperDiscBrakeSheet } from './caliper-disc-brake.js';
 import { discSpringStackSheet } from './disc-spring-stack.js';
 import { hoistShoeBrakeSheet } from './hoist-shoe-brake.js';
 import { travelShoeBrakeSheet } from './travel-shoe-brake.js';
 
 /** Every sheet type of this core version, in the order a UI lists them. */
-export const sheetTypes: readonly SheetTypeDefinition[] = [
+export const sheetTypes = [
   hoistShoeBrakeSheet,
   travelShoeBrakeSheet,
   caliperDiscBrakeSheet,
   discSpringStackSheet,
-];
+] as const satisfies readonly SheetTypeDefinition[];
+
+// The registry lists exactly the ids of ../ids.ts, in its order (the sheets test checks it too).
+type RegistryIds = (typeof sheetTypes)[number]['id'];
+const sameIds: [RegistryIds, SheetTypeId] extends [SheetTypeId, RegistryIds] ? true : never = true;
+void sameIds;
 
 /** The sheet type with this id, or undefined. */
 export function getSheetType(id: string): SheetTypeDefinition | undefined {
-  return sheetTypes.find((s) => s.id === id);
+  return (sheetTypes as readonly SheetTypeDefinition[]).find((s) => s.id === id);
 }
 
 /**

@@ -1,5 +1,5 @@
 import { CalcInputError, FieldErrorCollector, isCalcInputError } from '../core/errors.js';
-import type { FieldDefinition, FieldError, SheetInputs } from '../core/types.js';
+import type { FieldDefinition, FieldError, ResolvedInput, SheetInputs } from '../core/types.js';
 import { parseQuantity, requireRange } from '../units/parse.js';
 import { DIMENSIONS } from '../units/unit-table.js';
 import type { InputsOf } from './field-builders.js';
@@ -142,4 +142,28 @@ export function readOne(f: FieldDefinition, raw: unknown): number | string | boo
       return v as number;
     }
   }
+}
+
+/**
+ * The inputs the core evaluates, resolved field by field in the sheet's order: what a frozen
+ * revision stores beside its evaluation and the printed inputs table shows. Fields left out (only
+ * those not required) are omitted; throws CalcInputError as `readInputs` does.
+ */
+export function resolveInputs(
+  fields: readonly FieldDefinition[],
+  inputs: SheetInputs,
+): ResolvedInput[] {
+  readInputs(fields, inputs);
+  const out: ResolvedInput[] = [];
+  for (const f of fields) {
+    const raw = inputs[f.key];
+    if (raw === undefined || raw === null) continue;
+    out.push({
+      key: f.key,
+      entered: structuredClone(raw),
+      si: readOne(f, raw),
+      siUnit: f.kind === 'quantity' ? DIMENSIONS[f.dimension ?? 'dimensionless'].siUnit : '',
+    });
+  }
+  return out;
 }

@@ -243,7 +243,7 @@ export function evaluateTravelShoeBrake(
   return finish(out);
 }
 
-export const travelShoeBrakeSheet: SheetTypeDefinition = {
+export const travelShoeBrakeSheet: SheetTypeDefinition<'travel-shoe-brake'> = {
   id: 'travel-shoe-brake',
   title: 'Shoe brake on a travel drive',
   description:

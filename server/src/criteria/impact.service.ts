@@ -2,7 +2,7 @@ import { Injectable, Logger } from '@nestjs/common';
 import type { SheetInputs } from '@holdfast/calc';
 import type { ImpactReport } from '@holdfast/shared';
 import { Database } from '../database/database.js';
-import { evaluateSheet } from '../revisions/calc-engine.js';
+import { evaluateStoredRecord } from '../revisions/calc-engine.js';
 import { CriteriaService } from './criteria.service.js';
 
 /**
@@ -40,7 +40,7 @@ export class ImpactService {
     for (const rev of approved) {
       let failing: ImpactReport['items'][number]['failing'];
       try {
-        const evaluation = evaluateSheet(rev.sheetType, rev.inputs as SheetInputs, criteria);
+        const evaluation = evaluateStoredRecord(rev.sheetType, rev.inputs as SheetInputs, criteria);
         failing = evaluation.checks
           .filter((c) => !c.pass)
           .map((c) => ({ id: c.id, label: c.label, value: c.value, limit: c.limit, unit: c.unit }));

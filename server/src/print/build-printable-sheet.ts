@@ -82,8 +82,13 @@ export function buildPrintableSheet(o: BuildPrintableOptions): PrintableSheet {
   const { sheet, revision: r, sheetType } = o;
   const system = r.unitSystem;
   const sectionTitle = new Map(sheetType.sections.map((x) => [x.id, x.title]));
-  const inputs: PrintableInput[] = sheetType.fields.map((field) => {
-    const value = r.inputs[field.key] ?? null;
+  // A frozen revision prints exactly the inputs the core used (as entered); a record frozen
+  // before those were kept, and a draft, print the stored inputs field by field.
+  const resolved = r.evaluation?.resolvedInputs;
+  const used = resolved ? new Map(resolved.map((x) => [x.key, x.entered])) : null;
+  const printed = used ? sheetType.fields.filter((f) => used.has(f.key)) : sheetType.fields;
+  const inputs: PrintableInput[] = printed.map((field) => {
+    const value = (used ? used.get(field.key) : r.inputs[field.key]) ?? null;
     return {
       field,
       sectionTitle: sectionTitle.get(field.section) ?? field.section,

@@ -2,9 +2,14 @@ import {
   CORE_VERSION,
   CRITERIA_SETS,
   demoInputs,
+  missingInputs,
+  resolveInputs,
+  unknownInputKeys,
+  type ResolvedInput,
   getSheetType,
   isCalcInputError as calcInputErrorGuard,
   type CriteriaSet,
+  type FieldError,
   type SheetEvaluation,
   type SheetInputs,
   type SheetTypeDefinition,
@@ -69,6 +74,45 @@ export function evaluateSheet(
   criteria: CriteriaSet,
 ): SheetEvaluation {
   return sheetTypeDefinition(sheetType).evaluate(structuredClone(inputs), criteria);
+}
+
+/** Keys in the inputs that the sheet type does not declare, with a suggestion where close. */
+export function unknownInputsOf(sheetType: string, inputs: SheetInputs): FieldError[] {
+  return unknownInputKeys(sheetTypeDefinition(sheetType).fields, inputs);
+}
+
+/** The inputs as the core uses them, as entered and in SI (throws CalcInputError like evaluate). */
+export function resolveInputsOf(sheetType: string, inputs: SheetInputs): ResolvedInput[] {
+  return resolveInputs(sheetTypeDefinition(sheetType).fields, inputs);
+}
+
+/** Required fields absent from the inputs. */
+export function missingInputsOf(sheetType: string, inputs: SheetInputs): FieldError[] {
+  return missingInputs(sheetTypeDefinition(sheetType).fields, inputs);
+}
+
+/**
+ * Re-evaluate a stored record (drift and impact checks). Records frozen before inputs had to be
+ * complete were evaluated with the core's then values for the fields they leave out, which are
+ * today's demo values; they are filled back in here only, so those records keep evaluating as
+ * they did. New inputs never get this (see evaluate.ts).
+ */
+export function evaluateStoredRecord(
+  sheetType: string,
+  inputs: SheetInputs,
+  criteria: CriteriaSet,
+): SheetEvaluation {
+  const def = sheetTypeDefinition(sheetType);
+  const missing = missingInputs(def.fields, inputs);
+  const filled = missing.length
+    ? {
+        ...Object.fromEntries(
+          missing.map((f) => [f.field, def.fields.find((x) => x.key === f.field)!.demo]),
+        ),
+        ...inputs,
+      }
+    : inputs;
+  return def.evaluate(structuredClone(filled), criteria);
 }
 
 /** Field label for compare and messages; the key itself when the field is unknown. */

@@ -4,7 +4,7 @@ import type { DriftReport } from '@holdfast/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { conflict } from '../common/errors/api-exception.js';
 import { CriteriaService } from '../criteria/criteria.service.js';
-import { coreVersion, evaluateSheet } from './calc-engine.js';
+import { coreVersion, evaluateStoredRecord } from './calc-engine.js';
 import { diffChecks, diffResults } from './diff.js';
 import { RevisionsService } from './revisions.service.js';
 
@@ -27,7 +27,7 @@ export class DriftService {
     const criteria = await this.criteria.load(rev.criteriaSetId, rev.criteriaSetVersion);
     let now: SheetEvaluation;
     try {
-      now = evaluateSheet(rev.sheetType, rev.inputs as SheetInputs, criteria);
+      now = evaluateStoredRecord(rev.sheetType, rev.inputs as SheetInputs, criteria);
     } catch (e) {
       return {
         coreVersionThen: rev.coreVersion,

@@ -11,7 +11,7 @@ import { CriteriaService } from '../criteria/criteria.service.js';
 import { canCheck, canEdit, canReadContent, isEditableState } from './revision-access.js';
 import { toRevision } from './revision-mapper.js';
 import { RevisionsRepository, type RevisionWithSheet } from './revisions.repository.js';
-import { evaluateOrReject } from './evaluate.js';
+import { previewOrReject, rejectUnknownInputs } from './evaluate.js';
 import { coreVersion } from './calc-engine.js';
 
 @Injectable()
@@ -75,7 +75,10 @@ export class RevisionsService {
       this.assertEditable(user, rev, input.rowVersion);
       const criteriaSetId = input.criteriaSetId ?? rev.criteriaSetId;
       const criteria = await this.criteria.load(criteriaSetId, 'latest', trx);
-      const evaluation = evaluateOrReject(rev.sheetType, input.inputs as SheetInputs, criteria);
+      const inputs = input.inputs as SheetInputs;
+      rejectUnknownInputs(rev.sheetType, inputs);
+      // A draft may still lack fields: it is previewed when complete, and submit insists on it.
+      const evaluation = previewOrReject(rev.sheetType, inputs, criteria);
       await trx
         .updateTable('revisions')
         .set({
@@ -84,8 +87,8 @@ export class RevisionsService {
           changeNote: input.changeNote,
           criteriaSetId,
           criteriaSetVersion: criteria.version,
-          evaluation: JSON.stringify(evaluation),
-          coreVersion: coreVersion(),
+          evaluation: evaluation ? JSON.stringify(evaluation) : null,
+          coreVersion: evaluation ? coreVersion() : null,
           // A returned revision's old hash and code no longer describe it.
           hash: null,
           verificationCode: null,

@@ -15,8 +15,8 @@ import { Database } from '../database/database.js';
 import { AuditService } from '../audit/audit.service.js';
 import { CriteriaService } from '../criteria/criteria.service.js';
 import { OutboxService } from '../outbox/outbox.service.js';
-import { coreVersion } from './calc-engine.js';
-import { evaluateOrReject } from './evaluate.js';
+import { coreVersion, resolveInputsOf } from './calc-engine.js';
+import { evaluateCompleteOrReject } from './evaluate.js';
 import { approvedMail, returnedMail, submittedMail } from './notifications.js';
 import { canCheck } from './revision-access.js';
 import { contentHash, newVerificationCode } from './revision-codes.js';
@@ -56,7 +56,12 @@ export class WorkflowService {
       const rev = await this.revisions.load(user, id, trx, true);
       this.revisions.assertEditable(user, rev, input.rowVersion);
       const criteria = await this.criteria.load(rev.criteriaSetId, 'latest', trx);
-      const evaluation = evaluateOrReject(rev.sheetType, rev.inputs as SheetInputs, criteria);
+      const inputs = rev.inputs as SheetInputs;
+      // The frozen record keeps the inputs exactly as the core used them, beside its results.
+      const evaluation = {
+        ...evaluateCompleteOrReject(rev.sheetType, inputs, criteria),
+        resolvedInputs: resolveInputsOf(rev.sheetType, inputs),
+      };
       const failing = evaluation.checks.filter((c) => !c.pass);
       const justification = input.justification?.trim() || null;
       if (failing.length > 0 && !justification) {

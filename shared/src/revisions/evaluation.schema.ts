@@ -1,13 +1,10 @@
 import { z } from 'zod';
-import type { SheetEvaluation, SheetInputs } from '@holdfast/calc';
+import type { ResolvedInput, SheetEvaluation, SheetInputs } from '@holdfast/calc';
+// The dependency-free ids module: the API schemas derive from calc without loading the core.
+import { DIMENSION_IDS, SHEET_TYPE_IDS } from '@holdfast/calc/ids';
 
-/** Sheet types of the calc registry (ids are fixed by the API contract). */
-export const sheetTypeIds = [
-  'hoist-shoe-brake',
-  'travel-shoe-brake',
-  'caliper-disc-brake',
-  'disc-spring-stack',
-] as const;
+/** Sheet types of the calc registry, taken from calc. */
+export const sheetTypeIds = SHEET_TYPE_IDS;
 export const sheetTypeIdSchema = z.enum(sheetTypeIds);
 export type SheetTypeId = z.infer<typeof sheetTypeIdSchema>;
 
@@ -32,7 +29,7 @@ export const inputValueSchema = z.union([
  * A sheet's inputs exactly as typed. The shape per field is checked by the calc core on submit
  * (and on save, as a preview), which names the offending field.
  */
-export const sheetInputsSchema = z
+export const sheetInputsSchema: z.ZodType<SheetInputs> = z
   .record(
     z
       .string()
@@ -40,12 +37,16 @@ export const sheetInputsSchema = z
       .max(80),
     inputValueSchema,
   )
-  .refine(
-    (r) => Object.keys(r).length <= 500,
-    'too many fields',
-  ) as unknown as z.ZodType<SheetInputs>;
+  .refine((r) => Object.keys(r).length <= 500, 'too many fields');
 
-const dimension = z.string();
+const dimension = z.enum(DIMENSION_IDS);
+
+const resolvedInputSchema: z.ZodType<ResolvedInput> = z.object({
+  key: z.string(),
+  entered: inputValueSchema,
+  si: z.union([z.number(), z.string(), z.boolean()]),
+  siUnit: z.string(),
+});
 
 const derivationStepSchema = z.object({
   id: z.string(),
@@ -100,8 +101,11 @@ const chartSchema = z.object({
     .optional(),
 });
 
-/** `SheetEvaluation` of @holdfast/calc, for parsing responses. Always computed by the server. */
-export const sheetEvaluationSchema = z.object({
+/**
+ * `SheetEvaluation` of @holdfast/calc, for parsing responses. Always computed by the server. Typed
+ * against calc's interface (no cast), so a field calc adds or changes fails to compile here.
+ */
+export const sheetEvaluationSchema: z.ZodType<SheetEvaluation> = z.object({
   sheetType: z.string(),
   coreVersion: z.string(),
   criteriaSetId: z.string(),
@@ -132,4 +136,5 @@ export const sheetEvaluationSchema = z.object({
   ),
   warnings: z.array(z.string()),
   pass: z.boolean(),
-}) as unknown as z.ZodType<SheetEvaluation>;
+  resolvedInputs: z.array(resolvedInputSchema).optional(),
+});

@@ -22,7 +22,7 @@ function isSheetType(v: unknown): v is SheetTypeDefinition {
 export function listSheetTypes(): SheetTypeDefinition[] {
   const all = registry.sheetTypes;
   if (all) return Array.isArray(all) ? all : Object.values(all);
-  return Object.values(calc).filter(isSheetType);
+  return (Object.values(calc) as unknown[]).filter(isSheetType);
 }
 
 /** The sheet type with this id, or undefined when the core does not know it. */
