@@ -199,6 +199,26 @@ export interface CriteriaSet {
   values: CriterionValue[];
 }
 
+/** The block of the field setting card a field setting prints in. */
+export type FieldCardGroup = 'spring' | 'thruster' | 'clearance' | 'discStack' | 'other';
+
+/** Where one field setting (by its key) goes on the field card, and what it is there. */
+export interface FieldCardPlacement {
+  group: FieldCardGroup;
+  /** For a disc-spring stack: the stack's name as printed, e.g. 'Shoe holder'. */
+  stack?: string;
+  /** For a disc-spring stack: the back-off angle and the preload get their own places. */
+  role?: 'backOff' | 'preload';
+}
+
+/** The field setting card of a sheet type, declared with the sheet (never guessed from labels). */
+export interface FieldCardLayout {
+  /** Placement of each field setting key the sheet produces; a key not listed prints under 'other'. */
+  settings: Readonly<Record<string, FieldCardPlacement>>;
+  /** Tables that print in the spring block (setting tables); the others print after it. */
+  springTables: readonly string[];
+}
+
 /** A sheet type: its fields, sections and the one evaluate(). */
 export interface SheetTypeDefinition<Id extends string = string> {
   id: Id;
@@ -206,6 +226,7 @@ export interface SheetTypeDefinition<Id extends string = string> {
   description: string;
   sections: SectionDefinition[];
   fields: readonly FieldDefinition[];
+  fieldCard: FieldCardLayout;
   /** Throws CalcInputError (with field errors) on invalid input. */
   evaluate(inputs: SheetInputs, criteria: CriteriaSet): SheetEvaluation;
 }

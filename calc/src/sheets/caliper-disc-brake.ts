@@ -10,6 +10,7 @@ import { Derivation } from '../core/step.js';
 import { getLining } from '../criteria/linings.js';
 import { frictionBandChart, torqueWearChart } from './charts.js';
 import { readInputs } from './sheet-inputs.js';
+import { CALIPER_FIELD_CARD } from './field-card-layouts.js';
 import { finish, newEvaluation, publishSteps } from './sheet-output.js';
 import {
   CALIPER_FIELDS,
@@ -124,5 +125,6 @@ export const caliperDiscBrakeSheet: SheetTypeDefinition<'caliper-disc-brake'> = 
     'Spring-applied caliper disc brake (demo: on a hoist rope drum): clamp force, effective radius (uniform wear), faces and calipers, torque over the friction band and at worn pads, pad duty, stop, heat, release and setting table.',
   sections: CALIPER_SECTIONS,
   fields: CALIPER_FIELDS,
+  fieldCard: CALIPER_FIELD_CARD,
   evaluate: evaluateCaliperDiscBrake,
 };

@@ -18,8 +18,9 @@ import {
 } from './disc-spring-stack-fields.js';
 import { readInputs } from './sheet-inputs.js';
 import { stackOutputs } from './disc-spring-stack-output.js';
+import { DISC_STACK_FIELD_CARD, DISC_STACK_TITLES } from './field-card-layouts.js';
 
-const TITLES: Record<StackKey, string> = { a: 'Stack 1 (shoe holder)', b: 'Stack 2 (equaliser)' };
+const TITLES: Record<StackKey, string> = DISC_STACK_TITLES;
 
 const CAUTIONS = [
   "Disc-spring values follow DIN EN 16984 (formerly DIN 2092); the maker's data and the governing standard decide. Re-check the preload after running-in: discs set slightly in the first cycles.",
@@ -160,5 +161,6 @@ export const discSpringStackSheet: SheetTypeDefinition<'disc-spring-stack'> = {
     'Disc springs per DIN EN 16984 (formerly DIN 2092): force, stresses σOM and σI–σIV, stacks in series and parallel with friction, and the preload left by tightening flat then backing off an angle. Demo: shoe-holder disc and equaliser stack.',
   sections: DISC_STACK_SECTIONS,
   fields: DISC_STACK_FIELDS,
+  fieldCard: DISC_STACK_FIELD_CARD,
   evaluate: evaluateDiscSpringStack,
 };

@@ -20,6 +20,7 @@ import * as q from '../units/quantities.js';
 import { choice, num, qty, withBounds } from './field-builders.js';
 import { HOIST_BOUNDS } from './field-bounds.js';
 import { readInputs } from './sheet-inputs.js';
+import { SHOE_FIELD_CARD } from './field-card-layouts.js';
 import { finish, newEvaluation, publishSteps } from './sheet-output.js';
 import { SHOE_BRAKE_FIELDS, SHOE_SECTIONS } from './shoe-brake-fields.js';
 import { evaluateShoeBrake, validateShoeInputs } from './shoe-brake-evaluate.js';
@@ -237,5 +238,6 @@ export const hoistShoeBrakeSheet: SheetTypeDefinition<'hoist-shoe-brake'> = {
     'Spring-set, thruster-released double-shoe brake on the motor shaft of a crane hoist: required torque, torque over the friction band and at worn lining, lining duty, stop while lowering the rated load, heat, release and stroke, field settings and disc-spring preloads.',
   sections: [{ id: U, title: 'Hoist duty' }, ...SHOE_SECTIONS],
   fields: FIELDS,
+  fieldCard: SHOE_FIELD_CARD,
   evaluate: evaluateHoistShoeBrake,
 };

@@ -6,6 +6,7 @@ import { TABLE_STEEL } from '../disc-springs/disc.js';
 import { WORKING_BAND, workingBandWarning } from '../disc-springs/curve.js';
 import type { DiscStack } from '../disc-springs/stack.js';
 import { makeCheck } from './checks.js';
+import { SHOE_STACK_TITLES } from './field-card-layouts.js';
 import type { ShoeInputs } from './shoe-brake-fields.js';
 
 const SECTION = 'discSprings';
@@ -20,7 +21,7 @@ const FIELD_MAP: Record<string, string> = {
   seriesCount: 'Series',
   parallelCount: 'Parallel',
 };
-const TITLES = { holder: 'Shoe holder', equaliser: 'Equaliser' } as const;
+const TITLES = SHOE_STACK_TITLES;
 const PRACTICE = {
   holder:
     'common practice, no published source: a disc spring under a castle nut on a shoe holder is tightened flat, then backed off about 60°',

@@ -19,6 +19,7 @@ import { makeCheck } from './checks.js';
 import { num, qty, withBounds } from './field-builders.js';
 import { TRAVEL_BOUNDS } from './field-bounds.js';
 import { readInputs } from './sheet-inputs.js';
+import { SHOE_FIELD_CARD } from './field-card-layouts.js';
 import { finish, newEvaluation, publishSteps } from './sheet-output.js';
 import { SHOE_BRAKE_FIELDS, SHOE_SECTIONS } from './shoe-brake-fields.js';
 import { evaluateShoeBrake, validateShoeInputs } from './shoe-brake-evaluate.js';
@@ -250,5 +251,6 @@ export const travelShoeBrakeSheet: SheetTypeDefinition<'travel-shoe-brake'> = {
     'Spring-set, thruster-released double-shoe brake on a bridge or trolley travel drive: torque over the friction band and at worn lining, stop from full-load speed against the 10 %-of-speed rule, wheel adhesion, heat, release and field settings.',
   sections: [{ id: U, title: 'Travel duty' }, ...SHOE_SECTIONS],
   fields: FIELDS,
+  fieldCard: SHOE_FIELD_CARD,
   evaluate: evaluateTravelShoeBrake,
 };

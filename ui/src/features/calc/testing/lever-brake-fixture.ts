@@ -16,6 +16,7 @@ export const leverBrakeFixture: SheetTypeDefinition = {
   id: 'test-lever-brake',
   title: 'Lever brake (test)',
   description: 'Test fixture',
+  fieldCard: { settings: {}, springTables: [] },
   sections: [
     { id: 'duty', title: 'Duty' },
     { id: 'brake', title: 'Brake' },
