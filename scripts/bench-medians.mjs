@@ -20,7 +20,7 @@ const rows = [];
 const calc = await load('calc/dist/index.js');
 const criteria = calc.getCriteriaSet('general-industry');
 for (const sheet of calc.sheetTypes) {
-  const inputs = calc.defaultInputs(sheet);
+  const inputs = calc.demoInputs(sheet);
   for (let i = 0; i < 500; i++) sheet.evaluate(inputs, criteria);
   const times = [];
   for (let i = 0; i < 3000; i++) {

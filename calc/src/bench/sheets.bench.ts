@@ -1,6 +1,6 @@
 import { bench, describe } from 'vitest';
 import { getCriteriaSet } from '../criteria/lookup.js';
-import { defaultInputs, sheetTypes } from '../sheets/registry.js';
+import { demoInputs, sheetTypes } from '../sheets/registry.js';
 import { wornTorqueFraction } from '../shoe-brake/worn-lining.js';
 import { pivotedTorqueFormula } from '../shoe-brake/pivoted-shoe.js';
 
@@ -8,7 +8,7 @@ const criteria = getCriteriaSet('general-industry')!;
 
 describe('full sheet evaluation (inputs parsed, every step with formula text and substitution)', () => {
   for (const sheet of sheetTypes) {
-    const inputs = defaultInputs(sheet);
+    const inputs = demoInputs(sheet);
     bench(sheet.id, () => {
       sheet.evaluate(inputs, criteria);
     });

@@ -186,7 +186,7 @@ describe('field setting card PDF', () => {
     expect(t).toContain('Spring setting table');
     expect(t).toMatch(/Minimum reserve stroke to keep 10\.00 mm/);
     expect(t).toMatch(/Shoe clearance each side 0\.8000 mm/);
-    expect(t).toContain('Shoe-holder stack');
+    expect(t).toContain('Disc-spring stacks Shoe holder 1. Tighten the nut');
     expect(t).toContain('Tighten the nut until the disc-spring stack is just flat');
     expect(t).toMatch(/Back off the nut by 60\.0 ° and lock it/);
     expect(t).toMatch(/Back off the nut by 180 ° and lock it/);

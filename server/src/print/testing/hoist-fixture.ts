@@ -406,7 +406,7 @@ export function hoistEvaluation(opts: { failing?: boolean } = {}): SheetEvaluati
         dimension: 'force',
       },
       {
-        key: 'thrusterStroke',
+        key: 'workingStroke',
         label: 'Thruster working stroke',
         value: 0.05,
         unit: 'm',
@@ -427,7 +427,7 @@ export function hoistEvaluation(opts: { failing?: boolean } = {}): SheetEvaluati
         dimension: 'length',
       },
       {
-        key: 'holder.backOff',
+        key: 'holderBackOff',
         label: 'Shoe-holder stack: back-off angle',
         value: Math.PI / 3,
         unit: 'rad',
@@ -435,14 +435,14 @@ export function hoistEvaluation(opts: { failing?: boolean } = {}): SheetEvaluati
         note: 'common practice, no published source',
       },
       {
-        key: 'holder.preload',
+        key: 'holderPreload',
         label: 'Shoe-holder stack: preload',
         value: 3100,
         unit: 'N',
         dimension: 'force',
       },
       {
-        key: 'equaliser.backOff',
+        key: 'equaliserBackOff',
         label: 'Equaliser stack: back-off angle',
         value: Math.PI,
         unit: 'rad',
@@ -450,7 +450,7 @@ export function hoistEvaluation(opts: { failing?: boolean } = {}): SheetEvaluati
         note: 'common practice, no published source',
       },
       {
-        key: 'equaliser.preload',
+        key: 'equaliserPreload',
         label: 'Equaliser stack: preload',
         value: 5200,
         unit: 'N',
@@ -459,7 +459,7 @@ export function hoistEvaluation(opts: { failing?: boolean } = {}): SheetEvaluati
     ],
     tables: [
       {
-        id: 'springSetting',
+        id: 'spring-setting',
         title: 'Spring setting table',
         columns: [
           { key: 'torque', label: 'Brake torque', unit: 'N m', dimension: 'torque' },

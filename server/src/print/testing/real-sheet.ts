@@ -2,7 +2,7 @@ import {
   CRANE_HOIST,
   GENERAL_INDUSTRY,
   TRAVEL_DRIVE,
-  defaultInputs,
+  demoInputs,
   getSheetType,
   type CriteriaSet,
   type SheetInputs,
@@ -36,7 +36,7 @@ export function realPrintable(o: {
   const type = getSheetType(o.sheetTypeId);
   if (!type) throw new Error(`unknown sheet type ${o.sheetTypeId}`);
   const criteriaSet = criteriaFor(type.id);
-  const inputs = o.inputs ?? (defaultInputs(type) as SheetInputs);
+  const inputs = o.inputs ?? demoInputs(type);
   const evaluation = type.evaluate(inputs, criteriaSet);
   const approvedLike = o.state === 'approved' || o.state === 'superseded';
   const author = { displayName: 'Dana Demo', initials: 'DD' };
@@ -88,7 +88,7 @@ export function hoistRevisionVariants(count: number): PrintableSheet[] {
       sheetTypeId: type.id,
       state: 'approved',
       inputs: {
-        ...(defaultInputs(type) as SheetInputs),
+        ...demoInputs(type),
         load: { value: 9000 + 137 * k, unit: 'kg' },
         springForce: { value: 1050 + 31 * k, unit: 'N' },
       },
