@@ -51,6 +51,8 @@ export * from './energy/stop-energy.js';
 export * from './energy/heat.js';
 export * from './stopping/stopping.js';
 export * from './stopping/limits.js';
+export * from './stopping/speed-at-set.js';
+export { limitCheck, type LimitCheck } from './core/limit-check.js';
 export * from './release/release.js';
 export * from './spring-setting/setting-table.js';
 export { LININGS, getLining, type LiningMaterial } from './criteria/linings.js';
