@@ -52,6 +52,7 @@ export * from './energy/heat.js';
 export * from './stopping/stopping.js';
 export * from './stopping/limits.js';
 export * from './stopping/speed-at-set.js';
+export * from './stopping/overspeed.js';
 export { limitCheck, type LimitCheck } from './core/limit-check.js';
 export * from './release/release.js';
 export * from './spring-setting/setting-table.js';
