@@ -62,3 +62,4 @@ export const MM = 1e-3;
 export { discSpringStackSheet } from '../calc/src/sheets/disc-spring-stack.js';
 export { speedAtSet } from '../calc/src/stopping/speed-at-set.js';
 export { overspeedChecks, maxSetDelay } from '../calc/src/stopping/overspeed.js';
+export { driveTrainOverload } from '../calc/src/duty/drive-train-overload.js';
