@@ -63,3 +63,4 @@ export { discSpringStackSheet } from '../calc/src/sheets/disc-spring-stack.js';
 export { speedAtSet } from '../calc/src/stopping/speed-at-set.js';
 export { overspeedChecks, maxSetDelay } from '../calc/src/stopping/overspeed.js';
 export { driveTrainOverload } from '../calc/src/duty/drive-train-overload.js';
+export { loadConsistency } from '../calc/src/duty/load-consistency.js';

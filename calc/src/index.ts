@@ -39,6 +39,7 @@ export * from './duty/hoist-load.js';
 export * from './duty/inertia-sum.js';
 export * from './duty/required-torque.js';
 export * from './duty/drive-train-overload.js';
+export * from './duty/load-consistency.js';
 export * from './shoe-brake/shoe-force.js';
 export * from './shoe-brake/short-shoe.js';
 export * from './shoe-brake/pivoted-shoe.js';
