@@ -64,3 +64,4 @@ export { speedAtSet } from '../calc/src/stopping/speed-at-set.js';
 export { overspeedChecks, maxSetDelay } from '../calc/src/stopping/overspeed.js';
 export { driveTrainOverload } from '../calc/src/duty/drive-train-overload.js';
 export { loadConsistency } from '../calc/src/duty/load-consistency.js';
+export { travelRatioCheck } from '../calc/src/shoe-brake/travel-ratio.js';

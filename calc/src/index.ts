@@ -46,6 +46,7 @@ export * from './shoe-brake/pivoted-shoe.js';
 export * from './shoe-brake/general-shoe.js';
 export * from './shoe-brake/worn-lining.js';
 export * from './shoe-brake/lining-duty.js';
+export * from './shoe-brake/travel-ratio.js';
 export * from './disc-brake/caliper.js';
 export * from './disc-brake/pad-duty.js';
 export * from './band-brake/band.js';
