@@ -65,3 +65,4 @@ export { overspeedChecks, maxSetDelay } from '../calc/src/stopping/overspeed.js'
 export { driveTrainOverload } from '../calc/src/duty/drive-train-overload.js';
 export { loadConsistency } from '../calc/src/duty/load-consistency.js';
 export { travelRatioCheck } from '../calc/src/shoe-brake/travel-ratio.js';
+export { compressionSpring } from '../calc/src/helical-spring/compression-spring.js';

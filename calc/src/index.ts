@@ -59,6 +59,8 @@ export * from './stopping/overspeed.js';
 export { limitCheck, type LimitCheck } from './core/limit-check.js';
 export * from './release/release.js';
 export * from './spring-setting/setting-table.js';
+export * from './helical-spring/formulas.js';
+export * from './helical-spring/compression-spring.js';
 export { LININGS, getLining, type LiningMaterial } from './criteria/linings.js';
 export { CRITERIA_SETS, GENERAL_INDUSTRY, CRANE_HOIST, TRAVEL_DRIVE } from './criteria/sets.js';
 export { getCriteriaSet, criterion } from './criteria/lookup.js';
