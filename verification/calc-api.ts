@@ -66,3 +66,4 @@ export { driveTrainOverload } from '../calc/src/duty/drive-train-overload.js';
 export { loadConsistency } from '../calc/src/duty/load-consistency.js';
 export { travelRatioCheck } from '../calc/src/shoe-brake/travel-ratio.js';
 export { compressionSpring } from '../calc/src/helical-spring/compression-spring.js';
+export { strokeWearChain, torqueWearPoints } from '../calc/src/release/stroke-wear.js';
