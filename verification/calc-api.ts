@@ -67,3 +67,4 @@ export { loadConsistency } from '../calc/src/duty/load-consistency.js';
 export { travelRatioCheck } from '../calc/src/shoe-brake/travel-ratio.js';
 export { compressionSpring } from '../calc/src/helical-spring/compression-spring.js';
 export { strokeWearChain, torqueWearPoints } from '../calc/src/release/stroke-wear.js';
+export { holdingBrakeRedundancy } from '../calc/src/duty/redundancy.js';
