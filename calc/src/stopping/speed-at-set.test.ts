@@ -80,6 +80,23 @@ describe('speedAtSet', () => {
     expect(strict.speedRatio).toBeGreaterThan(r.speedRatio);
   });
 
+  it('caliper demo: 6315 N·m · 0.95 on 2800 kg·m² for 0.3 s lifts 2.553 rad/s to 3.195 rad/s', () => {
+    // caliper sheet defaults: ω = 975 rpm / 40, pad pressure 22 kN / 200 cm², r_e 450 mm
+    const r = speedAtSet({
+      inertia: q.inertia(2800),
+      speed: q.rpm(975 / 40),
+      loadTorque: q.torque(6315),
+      backDrivingEfficiency: q.ratio(0.95),
+      setDelay: q.time(0.3),
+      frictionRadius: q.length(0.45),
+      pressure: q.pressure(1.1e6),
+      brakeTorque: q.torque(10_800),
+    });
+    close(r.setSpeed, 3.19532, 1e-5);
+    close(r.speedRatio, 1.2517, 1e-4);
+    close(r.pv, 1.1e6 * 0.45 * 3.19532, 1e-5); // 1.58 MPa·m/s instead of the 1.26 printed
+  });
+
   it('zero set delay: the brake sets at the power-off speed', () => {
     const r = speedAtSet({ ...base, setDelay: q.time(0) });
     expect(r.setSpeed).toBe(100);
