@@ -1,5 +1,5 @@
 import { compute, Derivation } from '../core/step.js';
-import { CalcInputError } from '../core/errors.js';
+import { CalcInputError, requireField } from '../core/errors.js';
 import { limitCheck, type LimitCheck } from '../core/limit-check.js';
 import { requireRange } from '../units/parse.js';
 import type { Force, Length, Pressure, Ratio, Stiffness } from '../units/quantities.js';
@@ -75,7 +75,11 @@ function validate(s: CompressionSpringInput): void {
   requireRange(s.wireDiameter, 'wireDiameter', pos, 'm');
   requireRange(s.meanDiameter, 'meanDiameter', pos, 'm');
   // Below C ≈ 3 the correction factors lose meaning and the spring cannot be coiled.
-  requireRange(s.meanDiameter / s.wireDiameter, 'meanDiameter', { min: 3 }, '(spring index D/d)');
+  requireField(
+    s.meanDiameter / s.wireDiameter >= 3,
+    'meanDiameter',
+    `spring index D/d must be at least 3 (got ${(s.meanDiameter / s.wireDiameter).toPrecision(3)})`,
+  );
   requireRange(s.activeCoils, 'activeCoils', { min: 1 });
   if (!(s.endType in END_TYPES))
     throw new CalcInputError([{ field: 'endType', message: `unknown end type "${s.endType}"` }]);
