@@ -22,6 +22,8 @@ export {
   stiffness,
   specificHeat,
   angle,
+  angularAcceleration,
+  pv,
 } from '../calc/src/units/quantities.js';
 export { CORE_VERSION } from '../calc/src/version.js';
 export {
@@ -58,3 +60,11 @@ export const LBF = 4.4482216152605;
 export const PSI = LBF / (IN * IN);
 export const MM = 1e-3;
 export { discSpringStackSheet } from '../calc/src/sheets/disc-spring-stack.js';
+export { speedAtSet } from '../calc/src/stopping/speed-at-set.js';
+export { overspeedChecks, maxSetDelay } from '../calc/src/stopping/overspeed.js';
+export { driveTrainOverload } from '../calc/src/duty/drive-train-overload.js';
+export { loadConsistency } from '../calc/src/duty/load-consistency.js';
+export { travelRatioCheck } from '../calc/src/shoe-brake/travel-ratio.js';
+export { compressionSpring } from '../calc/src/helical-spring/compression-spring.js';
+export { strokeWearChain, torqueWearPoints } from '../calc/src/release/stroke-wear.js';
+export { holdingBrakeRedundancy } from '../calc/src/duty/redundancy.js';

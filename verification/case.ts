@@ -14,7 +14,8 @@ export type Family =
   | 'release-stroke'
   | 'disc-springs'
   | 'thread-back-off'
-  | 'spring-setting';
+  | 'spring-setting'
+  | 'helical-spring';
 
 export const FAMILIES: readonly Family[] = [
   'duty',
@@ -28,6 +29,7 @@ export const FAMILIES: readonly Family[] = [
   'disc-springs',
   'thread-back-off',
   'spring-setting',
+  'helical-spring',
 ];
 
 /** published: printed in the source; secondary: a copy or derived source; derived: computed by us from a published formula; memory: recalled. */
