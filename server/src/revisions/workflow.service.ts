@@ -18,10 +18,10 @@ import { OutboxService } from '../outbox/outbox.service.js';
 import { coreVersion } from './calc-engine.js';
 import { evaluateOrReject } from './evaluate.js';
 import { approvedMail, returnedMail, submittedMail } from './notifications.js';
-import { canCheck } from './revision-access.js';
+import { canCheck, ownPart } from './revision-access.js';
 import { contentHash, newVerificationCode } from './revision-codes.js';
 import { RevisionsRepository, type RevisionWithSheet } from './revisions.repository.js';
-import { assertRowVersion, RevisionsService, snapshot } from './revisions.service.js';
+import { assertRowVersion, RevisionsService, snapshot, withPerson } from './revisions.service.js';
 
 /**
  * The check-and-approve workflow: draft/returned → in check → approved (previous approved →
@@ -78,6 +78,7 @@ export class WorkflowService {
         verificationCode: newVerificationCode(hash),
         justification,
         submittedAt: new Date(),
+        submitterIds: withPerson(rev.submitterIds, user.id),
       };
       await trx.updateTable('revisions').set(after).where('id', '=', id).execute();
       await this.audit.record(trx, {
@@ -121,8 +122,11 @@ export class WorkflowService {
         currentRowVersion: rev.rowVersion,
       });
     }
-    if (rev.authorId === user.id)
-      throw forbidden('Nobody checks their own revision: ask another checker.');
+    const own = ownPart(user.id, rev);
+    if (own)
+      throw forbidden(
+        `Four eyes: you ${own} revision ${rev.label}, and nobody checks their own revision: ask another checker.`,
+      );
     if (!canCheck(user, rev)) throw forbidden('Only a checker can approve or return a revision.');
     assertRowVersion(rev, rowVersion);
     return rev;
