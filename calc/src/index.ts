@@ -56,6 +56,13 @@ export * from './spring-setting/setting-table.js';
 export { LININGS, getLining, type LiningMaterial } from './criteria/linings.js';
 export { CRITERIA_SETS, GENERAL_INDUSTRY, CRANE_HOIST, TRAVEL_DRIVE } from './criteria/sets.js';
 export { getCriteriaSet, criterion } from './criteria/lookup.js';
+export {
+  CRITERION_SPECS,
+  criterionSpec,
+  criterionValueProblem,
+  criteriaValueProblems,
+  type CriterionSpec,
+} from './criteria/catalogue.js';
 export { sheetTypes, getSheetType, defaultInputs } from './sheets/registry.js';
 export { hoistShoeBrakeSheet, evaluateHoistShoeBrake } from './sheets/hoist-shoe-brake.js';
 export { travelShoeBrakeSheet, evaluateTravelShoeBrake } from './sheets/travel-shoe-brake.js';

@@ -1,5 +1,5 @@
 import { Injectable, Logger, type OnModuleInit } from '@nestjs/common';
-import type { CriteriaSet } from '@holdfast/calc';
+import { criterionSpec, type CriteriaSet } from '@holdfast/calc';
 import type {
   CriteriaSetDetail,
   CriteriaSetSummary,
@@ -118,7 +118,8 @@ export class CriteriaService implements OnModuleInit {
       await this.repo.insertVersion(trx, {
         criteriaSetId: id,
         version,
-        values: input.values,
+        // An empty unit means the declared one; the record always names it.
+        values: input.values.map((v) => ({ ...v, unit: criterionSpec(v.key)?.unit ?? v.unit })),
         note: input.note,
         publishedBy: actorId,
       });

@@ -1,3 +1,4 @@
+import { criteriaValueProblems } from '@holdfast/calc';
 import { z } from 'zod';
 import { isoDateSchema, personRefSchema } from '../sheets/person-ref.schema.js';
 
@@ -43,10 +44,38 @@ export const criteriaVersionQuerySchema = z
   .object({ version: z.coerce.number().int().positive().optional() })
   .strict();
 
+/**
+ * A list of criterion values that an engineer can stand behind: known keys, each once, in its
+ * declared unit and inside its bounds (calc's criteria catalogue), and a value marked "from
+ * memory" only while its source still says so.
+ */
+export const criterionValuesSchema = z
+  .array(criterionValueSchema)
+  .min(1)
+  .superRefine((values, ctx) => {
+    for (const problem of criteriaValueProblems(values)) {
+      ctx.addIssue({
+        code: 'custom',
+        path: problem.field.split('.').map((p) => (/^\d+$/.test(p) ? Number(p) : p)),
+        message: problem.message,
+      });
+    }
+    values.forEach((v, i) => {
+      if (v.confidence === 'memory' && !/memory/i.test(v.source)) {
+        ctx.addIssue({
+          code: 'custom',
+          path: [i, 'confidence'],
+          message:
+            'the source no longer says the value is from memory: say how sure it is (published, secondary, common practice)',
+        });
+      }
+    });
+  });
+
 /** POST /api/criteria-sets/:id/versions (admin). Every key of the set must be present. */
 export const publishCriteriaVersionSchema = z
   .object({
-    values: z.array(criterionValueSchema).min(1),
+    values: criterionValuesSchema,
     note: z.string().trim().min(1, 'say what changed and why').max(2000),
   })
   .strict();
