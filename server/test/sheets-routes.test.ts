@@ -287,6 +287,34 @@ const matrix: Row[] = [
   },
   {
     method: 'GET',
+    path: `/api/revisions/${N}/criteria-review`,
+    anonymous: 401,
+    engineer: 404,
+    checker: 404,
+    viewer: 404,
+    admin: 404,
+  },
+  {
+    method: 'POST',
+    path: `/api/revisions/${N}/criteria-review/disposition`,
+    body: {},
+    anonymous: 401,
+    engineer: 403,
+    checker: 400,
+    viewer: 403,
+    admin: 403,
+  },
+  {
+    method: 'GET',
+    path: '/api/work-queue/under-review',
+    anonymous: 401,
+    engineer: 200,
+    checker: 200,
+    viewer: 200,
+    admin: 200,
+  },
+  {
+    method: 'GET',
     path: '/api/verify/AAAAAAAAAA',
     anonymous: 404,
     engineer: 404,
@@ -306,6 +334,7 @@ const controllers = [
   'WorkQueueController',
   'VerifyController',
   'PrintController',
+  'ReviewsController',
 ];
 
 describe('sheets feature routes × roles', () => {

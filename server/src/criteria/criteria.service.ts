@@ -11,6 +11,7 @@ import { badRequest, notFound } from '../common/errors/api-exception.js';
 import { Database } from '../database/database.js';
 import { AuditService } from '../audit/audit.service.js';
 import { shippedCriteriaSets } from '../revisions/calc-engine.js';
+import { ReviewsService } from '../reviews/reviews.service.js';
 import { CriteriaRepository } from './criteria.repository.js';
 
 @Injectable()
@@ -21,6 +22,7 @@ export class CriteriaService implements OnModuleInit {
     private readonly db: Database,
     private readonly repo: CriteriaRepository,
     private readonly audit: AuditService,
+    private readonly reviews: ReviewsService,
   ) {}
 
   /** The calc core's shipped sets exist in the database as version 1. */
@@ -131,6 +133,9 @@ export class CriteriaService implements OnModuleInit {
         before: { version: latest.version, values: latest.values },
         after: { version, values: input.values, note: input.note },
       });
+      // Approvals follow criteria changes: in the same transaction, so no version is ever
+      // published without its flags.
+      await this.reviews.flagAfterPublish(trx, actorId, await this.load(id, version, trx));
       return version;
     });
     return this.detail(id, next);

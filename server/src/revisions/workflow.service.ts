@@ -15,6 +15,7 @@ import { Database } from '../database/database.js';
 import { AuditService } from '../audit/audit.service.js';
 import { CriteriaService } from '../criteria/criteria.service.js';
 import { OutboxService } from '../outbox/outbox.service.js';
+import { ReviewsService } from '../reviews/reviews.service.js';
 import { coreVersion } from './calc-engine.js';
 import { evaluateOrReject } from './evaluate.js';
 import { approvedMail, returnedMail, submittedMail } from './notifications.js';
@@ -38,6 +39,7 @@ export class WorkflowService {
     private readonly audit: AuditService,
     private readonly outbox: OutboxService,
     private readonly config: AppConfig,
+    private readonly reviews: ReviewsService,
   ) {}
 
   private about(rev: RevisionWithSheet) {
@@ -175,6 +177,7 @@ export class WorkflowService {
         })
         .where('id', '=', id)
         .execute();
+      await this.reviews.clearOnApproval(trx, user.id, rev.sheetId, id, rev.label);
       await this.audit.record(trx, {
         actorId: user.id,
         action: 'revision.approved',
