@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import type { CriterionValue } from '@holdfast/calc';
+import { ensurePoppler, inspectPdf } from '../src/print/testing/poppler.js';
 import { stricterValues } from './criteria-fixture.js';
 import {
   approve,
@@ -129,6 +130,33 @@ describe('approvals follow criteria changes ("under review")', () => {
     const audit = await ctx.request('GET', `/api/sheets/${sheet.id}/audit`, { as: 'engineer' });
     expect(JSON.stringify(audit.body)).toContain(text);
   });
+
+  async function pdfText(revisionId: string, name: string): Promise<string> {
+    const res = await fetch(`${ctx.baseUrl}/api/revisions/${revisionId}/pdf`, {
+      headers: { authorization: `Bearer ${await ctx.token('viewer')}` },
+    });
+    expect(res.status).toBe(200);
+    // pdftotext breaks long lines: compare with single spaces.
+    return inspectPdf(Buffer.from(await res.arrayBuffer()), name).text.replace(/\s+/g, ' ');
+  }
+
+  it('prints the open flag, then the disposition, on the next print of the sheet', async () => {
+    ensurePoppler();
+    const { a, setName } = await flaggedScenario();
+    const flagged = await pdfText(a.id, 'under-review-open');
+    expect(flagged).toContain(`Under review since`);
+    expect(flagged).toContain(`criteria ${setName} version 2`);
+    const text = 'Reviewed with the lining maker: stands because the duty is occasional.';
+    const ok = await ctx.request('POST', `/api/revisions/${a.id}/criteria-review/disposition`, {
+      as: 'checker2',
+      body: { disposition: text },
+    });
+    expect(ok.status, ok.text).toBe(200);
+    const disposed = await pdfText(a.id, 'under-review-disposed');
+    expect(disposed).not.toContain('Under review since');
+    expect(disposed).toContain(`Stands because: ${text}`);
+    // Two PDF renders on a shared, loaded machine.
+  }, 120_000);
 
   it('approving a new revision of the sheet clears the flag', async () => {
     const { sheet, a } = await flaggedScenario();

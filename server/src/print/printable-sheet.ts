@@ -48,6 +48,19 @@ export interface PrintableInput {
   converted: string;
 }
 
+/** A criteria review of an approved revision: open (no disposition) or disposed by a checker. */
+export interface PrintCriteriaReview {
+  criteriaSetName: string;
+  criteriaSetVersion: number;
+  flaggedAt: string;
+  /** Labels of the checks that fail under that version. */
+  failing: string[];
+  disposition: string | null;
+  /** 'Name (initials)' of the checker who wrote the disposition. */
+  checker: string | null;
+  clearedAt: string | null;
+}
+
 /** A criteria-set value with its source, printed in the design basis. */
 export type PrintCriterion = CriterionValue;
 
@@ -94,6 +107,8 @@ export interface PrintableSheet {
   /** Present for revisions that have a verification code (approved and superseded ones). */
   verification: { code: string; url: string } | null;
   supersededBy: { label: string; date: string } | null;
+  /** Open flag and dispositions of criteria reviews (approved revisions only). */
+  criteriaReviews?: PrintCriteriaReview[];
   unitSystem: PrintUnitSystem;
   paper: Paper;
   /** ISO date-time the PDF was generated. */

@@ -5,6 +5,7 @@ import type { FailingCheck } from '../criteria/failing-checks.js';
 import { Database } from '../database/database.js';
 
 export type ReviewWithSet = CriteriaReviewRow & { criteriaSetName: string };
+export type Person = { id: string; displayName: string; initials: string };
 
 /** All Kysely code of the "under review" flags. */
 @Injectable()
@@ -120,6 +121,18 @@ export class ReviewsRepository {
       .where('clearedAt', 'is', null)
       .returning(['id', 'clearedAt'])
       .executeTakeFirst();
+  }
+
+  /** Users by id, for who wrote a disposition. */
+  async people(ids: (string | null)[]): Promise<Map<string, Person>> {
+    const wanted = [...new Set(ids.filter((x): x is string => !!x))];
+    if (wanted.length === 0) return new Map();
+    const rows = await this.db
+      .selectFrom('users')
+      .select(['id', 'displayName', 'initials'])
+      .where('id', 'in', wanted)
+      .execute();
+    return new Map(rows.map((r) => [r.id, r]));
   }
 
   /** Open flags on sheets I own or revisions I checked. */

@@ -18,7 +18,7 @@ import { AuditService } from '../audit/audit.service.js';
 import { OutboxService } from '../outbox/outbox.service.js';
 import { canReadContent } from '../revisions/revision-access.js';
 import { underReviewMail } from './review-mail.js';
-import { ReviewsRepository, type ReviewWithSet } from './reviews.repository.js';
+import { ReviewsRepository, type Person, type ReviewWithSet } from './reviews.repository.js';
 
 /**
  * Approvals follow criteria changes. Publishing a criteria version re-evaluates every approved
@@ -121,7 +121,7 @@ export class ReviewsService {
       this.repo.openFor(revisionId),
       this.repo.clearedFor(revisionId),
     ]);
-    const people = await this.people(cleared.map((c) => c.clearedBy));
+    const people = await this.repo.people(cleared.map((c) => c.clearedBy));
     return {
       open: open ? present(open, people) : null,
       cleared: cleared.map((c) => present(c, people)),
@@ -187,20 +187,7 @@ export class ReviewsService {
       .execute();
     return rows.map((r) => r.email);
   }
-
-  private async people(ids: (string | null)[]) {
-    const wanted = [...new Set(ids.filter((x): x is string => !!x))];
-    if (wanted.length === 0) return new Map<string, Person>();
-    const rows = await this.db
-      .selectFrom('users')
-      .select(['id', 'displayName', 'initials'])
-      .where('id', 'in', wanted)
-      .execute();
-    return new Map(rows.map((r) => [r.id, r]));
-  }
 }
-
-type Person = { id: string; displayName: string; initials: string };
 
 /**
  * The checks failing under the new version that the approved record did not already fail: a
