@@ -58,6 +58,7 @@ export { CRITERIA_SETS, GENERAL_INDUSTRY, CRANE_HOIST, TRAVEL_DRIVE } from './cr
 export { getCriteriaSet, criterion } from './criteria/lookup.js';
 export {
   CRITERION_SPECS,
+  REQUIRED_CRITERIA,
   criterionSpec,
   criterionValueProblem,
   criteriaValueProblems,

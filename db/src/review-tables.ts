@@ -19,8 +19,21 @@ export interface CriteriaReviewsTable {
   disposition: Nullable<string>;
 }
 
+/** db/migrations/20261203020200_criteria_confirmations.ts: values checked against documents. */
+export interface CriteriaConfirmationsTable {
+  id: Generated<string>;
+  criteriaSetId: string;
+  version: number;
+  key: string;
+  document: string;
+  clause: string;
+  confirmedBy: string;
+  confirmedAt: CreatedAt;
+}
+
 export interface ReviewTables {
   criteriaReviews: CriteriaReviewsTable;
+  criteriaConfirmations: CriteriaConfirmationsTable;
 }
 
 export type CriteriaReviewRow = Selectable<CriteriaReviewsTable>;

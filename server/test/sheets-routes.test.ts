@@ -250,6 +250,26 @@ const matrix: Row[] = [
     admin: 400,
   },
   {
+    method: 'POST',
+    path: '/api/criteria-sets',
+    body: {},
+    anonymous: 401,
+    engineer: 403,
+    checker: 403,
+    viewer: 403,
+    admin: 400,
+  },
+  {
+    method: 'POST',
+    path: `/api/criteria-sets/${N}/versions/1/confirmations`,
+    body: {},
+    anonymous: 401,
+    engineer: 403,
+    checker: 400,
+    viewer: 403,
+    admin: 400,
+  },
+  {
     method: 'GET',
     path: `/api/criteria-sets/${N}/impact`,
     anonymous: 401,
@@ -350,7 +370,7 @@ describe('sheets feature routes × roles', () => {
     const covered = new Set(
       matrix.map(
         (r) =>
-          `${r.method} ${r.path.split('?')[0].replaceAll(N, ':id').replace('AAAAAAAAAA', ':code')}`,
+          `${r.method} ${r.path.split('?')[0].replaceAll(N, ':id').replace('AAAAAAAAAA', ':code').replace('/versions/1/', '/versions/:version/')}`,
       ),
     );
     expect(routes.map(routeKey).filter((k) => !covered.has(k))).toEqual([]);

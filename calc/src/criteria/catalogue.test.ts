@@ -1,7 +1,12 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { CalcInputError } from '../core/errors.js';
-import { CRITERION_SPECS, criteriaValueProblems, criterionSpec } from './catalogue.js';
+import {
+  CRITERION_SPECS,
+  REQUIRED_CRITERIA,
+  criteriaValueProblems,
+  criterionSpec,
+} from './catalogue.js';
 import { criterion } from './lookup.js';
 import { CRITERIA_SETS } from './sets.js';
 
@@ -12,6 +17,15 @@ describe('criteria catalogue', () => {
     for (const set of CRITERIA_SETS) {
       expect(criteriaValueProblems(set.values), set.id).toEqual([]);
       for (const v of set.values) expect(v.unit, v.key).toBe(criterionSpec(v.key)!.unit);
+    }
+  });
+
+  it('every shipped set carries every required criterion', () => {
+    for (const set of CRITERIA_SETS) {
+      expect(
+        REQUIRED_CRITERIA.filter((k) => !set.values.some((v) => v.key === k)),
+        set.id,
+      ).toEqual([]);
     }
   });
 

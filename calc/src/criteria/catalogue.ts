@@ -22,6 +22,8 @@ export interface CriterionSpec {
   max: number;
   /** Why the bounds are where they are, shown beside a refused value. */
   why: string;
+  /** A set may leave it out (the sheet then uses its own stated default). */
+  optional?: boolean;
 }
 
 const ratio = (
@@ -108,8 +110,14 @@ export const CRITERION_SPECS: readonly CriterionSpec[] = [
     minExclusive: true,
     max: 5e9,
     why: 'spring steels stay well below 5 000 N/mm²',
+    optional: true,
   },
 ];
+
+/** Keys every criteria set must carry, so any sheet type can be checked against it. */
+export const REQUIRED_CRITERIA: readonly string[] = CRITERION_SPECS.filter((s) => !s.optional).map(
+  (s) => s.key,
+);
 
 const BY_KEY = new Map(CRITERION_SPECS.map((s) => [s.key, s]));
 

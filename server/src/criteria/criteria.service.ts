@@ -13,6 +13,7 @@ import { AuditService } from '../audit/audit.service.js';
 import { shippedCriteriaSets } from '../revisions/calc-engine.js';
 import { ReviewsService } from '../reviews/reviews.service.js';
 import { CriteriaRepository } from './criteria.repository.js';
+import { confirmationsFor } from './confirmations.js';
 
 @Injectable()
 export class CriteriaService implements OnModuleInit {
@@ -82,7 +83,14 @@ export class CriteriaService implements OnModuleInit {
         version: v.version,
         publishedAt: v.publishedAt.toISOString(),
       })),
+      confirmations: confirmationsFor(row.version, versions, await this.repo.confirmations(id)),
     };
+  }
+
+  /** The confirmations holding for one version (for print). */
+  async confirmations(id: string, version: number) {
+    const versions = await this.repo.versions(id);
+    return confirmationsFor(version, versions, await this.repo.confirmations(id));
   }
 
   /** Publish the next version. Values must cover exactly the keys of the latest version. */
