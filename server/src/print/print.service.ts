@@ -5,7 +5,8 @@ import type { AuthUser } from '../auth/auth-user.js';
 import { AppConfig } from '../config/app-config.js';
 import { CriteriaService } from '../criteria/criteria.service.js';
 import { ReviewsRepository } from '../reviews/reviews.repository.js';
-import type { PrintCriteriaReview } from './printable-sheet.js';
+import type { CriterionConfirmation } from '@holdfast/shared';
+import type { PrintCriteriaReview, PrintCriterion } from './printable-sheet.js';
 import { RevisionsService } from '../revisions/revisions.service.js';
 import { SheetsService } from '../sheets/sheets.service.js';
 import { buildPrintableSheet } from './build-printable-sheet.js';
@@ -51,6 +52,10 @@ export class PrintService implements OnModuleInit {
     const revision = await this.revisions.get(user, id);
     const frozen = revision.state === 'approved' || revision.state === 'superseded';
     const criteriaReviews = frozen ? await this.criteriaReviews(id, revision.state) : [];
+    const confirmations = await this.criteria.confirmations(
+      revision.criteriaSetId,
+      revision.criteriaSetVersion,
+    );
     // A new flag or disposition changes the print of a frozen revision: it is part of the key.
     const key = [
       kind,
@@ -59,6 +64,7 @@ export class PrintService implements OnModuleInit {
       revision.supersededBy?.label ?? '',
       query.paper,
       JSON.stringify(criteriaReviews),
+      JSON.stringify(confirmations),
     ].join('|');
     const fileName = `${revision.documentNumber}-rev-${revision.label}${kind === 'field-card' ? '-field-card' : ''}.pdf`;
     const hit = frozen ? this.cache.get(key) : undefined;
@@ -80,6 +86,7 @@ export class PrintService implements OnModuleInit {
       paper: query.paper,
     });
     printable.criteriaReviews = criteriaReviews;
+    printable.criteria.values = withConfirmations(printable.criteria.values, confirmations);
     const bytes =
       kind === 'sheet' ? await renderSheetPdf(printable) : await renderFieldCardPdf(printable);
     if (frozen) {
@@ -111,4 +118,25 @@ export class PrintService implements OnModuleInit {
       },
     );
   }
+}
+
+/** Each value with the document that confirms it, if any. */
+function withConfirmations(
+  values: PrintCriterion[],
+  confirmations: CriterionConfirmation[],
+): PrintCriterion[] {
+  return values.map((v) => {
+    const c = confirmations.find((x) => x.key === v.key);
+    return c
+      ? {
+          ...v,
+          confirmation: {
+            document: c.document,
+            clause: c.clause,
+            by: c.confirmedBy.initials,
+            at: c.confirmedAt,
+          },
+        }
+      : v;
+  });
 }

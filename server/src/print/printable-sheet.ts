@@ -62,7 +62,10 @@ export interface PrintCriteriaReview {
 }
 
 /** A criteria-set value with its source, printed in the design basis. */
-export type PrintCriterion = CriterionValue;
+export type PrintCriterion = CriterionValue & {
+  /** Confirmed against a document the plant holds: replaces "from memory" on paper. */
+  confirmation?: { document: string; clause: string; by: string; at: string };
+};
 
 /**
  * Everything the calculation-sheet PDF and the field card need, as plain data. Build it with
