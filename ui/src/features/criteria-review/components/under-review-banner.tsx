@@ -14,10 +14,12 @@ function OpenReview({
   review,
   revisionId,
   canDispose,
+  revisionLabel,
 }: {
   review: CriteriaReview;
   revisionId: string;
   canDispose: boolean;
+  revisionLabel?: string;
 }) {
   const [opened, setOpened] = useState(false);
   const dispose = useDisposeReview(revisionId);
@@ -26,7 +28,7 @@ function OpenReview({
       color="fail"
       variant="light"
       icon={<IconAlertTriangle size={18} />}
-      title={`Under review since ${day(review.flaggedAt)}: criteria ${review.criteriaSetName} v${review.criteriaSetVersion}`}
+      title={`${revisionLabel ? `Approved revision ${revisionLabel}: under review` : 'Under review'} since ${day(review.flaggedAt)}: criteria ${review.criteriaSetName} v${review.criteriaSetVersion}`}
       data-under-review
       role="status"
     >
@@ -81,9 +83,12 @@ function OpenReview({
 export function UnderReviewBanner({
   revisionId,
   approved,
+  revisionLabel,
 }: {
   revisionId: string;
   approved: boolean;
+  /** Named when the banner stands above another revision than the one flagged. */
+  revisionLabel?: string;
 }) {
   const query = useCriteriaReview(revisionId, approved);
   if (!approved || !query.data) return null;
@@ -92,7 +97,14 @@ export function UnderReviewBanner({
   if (!open && disposed.length === 0) return null;
   return (
     <Stack gap="xs" mb="md">
-      {open ? <OpenReview review={open} revisionId={revisionId} canDispose={canDispose} /> : null}
+      {open ? (
+        <OpenReview
+          review={open}
+          revisionId={revisionId}
+          canDispose={canDispose}
+          revisionLabel={revisionLabel}
+        />
+      ) : null}
       {disposed.map((c) => (
         <Alert
           key={c.id}
