@@ -66,6 +66,14 @@ export * from './helical-spring/compression-spring.js';
 export { LININGS, getLining, type LiningMaterial } from './criteria/linings.js';
 export { CRITERIA_SETS, GENERAL_INDUSTRY, CRANE_HOIST, TRAVEL_DRIVE } from './criteria/sets.js';
 export { getCriteriaSet, criterion } from './criteria/lookup.js';
+export {
+  CRITERION_SPECS,
+  REQUIRED_CRITERIA,
+  criterionSpec,
+  criterionValueProblem,
+  criteriaValueProblems,
+  type CriterionSpec,
+} from './criteria/catalogue.js';
 export { sheetTypes, getSheetType, demoInputs, defaultInputs } from './sheets/registry.js';
 export { SHEET_TYPE_IDS, DIMENSION_IDS, type SheetTypeId } from './ids.js';
 export {

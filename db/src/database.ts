@@ -1,5 +1,6 @@
 import type { ColumnType, Generated, Insertable, Selectable, Updateable } from 'kysely';
 import type { SheetTables } from './sheet-tables.js';
+import type { ReviewTables } from './review-tables.js';
 
 /**
  * The typed database interface, written by hand to match `db/migrations`.
@@ -53,7 +54,7 @@ export interface FoundationTables {
   refreshTokens: RefreshTokensTable;
 }
 
-export interface DB extends FoundationTables, SheetTables {}
+export interface DB extends FoundationTables, SheetTables, ReviewTables {}
 
 export type UserRow = Selectable<UsersTable>;
 export type NewUserRow = Insertable<UsersTable>;

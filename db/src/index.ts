@@ -18,3 +18,4 @@ export {
   PG_CHECK_VIOLATION,
 } from './pg-errors.js';
 export type * from './sheet-tables.js';
+export type * from './review-tables.js';

@@ -99,6 +99,10 @@ export interface RevisionsTable {
   returnedAt: NullableDate;
   supersededAt: NullableDate;
   supersededById: Nullable<string>;
+  /** Everyone who saved a change (four-eyes by person; the list only grows). */
+  editorIds: Generated<string[]>;
+  /** Everyone who submitted it for check. */
+  submitterIds: Generated<string[]>;
 }
 
 export interface CommentsTable {

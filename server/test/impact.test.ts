@@ -1,8 +1,9 @@
 import { sql } from 'kysely';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import type { CriterionValue } from '@holdfast/calc';
 import { CriteriaService } from '../src/criteria/criteria.service.js';
 import { evaluateSheet } from '../src/revisions/calc-engine.js';
+import type { CriterionValue } from '@holdfast/calc';
+import { stricterValues } from './criteria-fixture.js';
 import {
   approve,
   createSheet,
@@ -79,19 +80,11 @@ describe('criteria sets, impact check and drift check', () => {
     const failingNow = rev.evaluation.pass ? 0 : 1;
     expect(before.body.items).toHaveLength(failingNow);
     expect(before.body.checked).toBe(1);
-    // A version whose values make the stored inputs fail (found by trying factors against calc).
-    let chosen: CriterionValue[] | undefined;
-    for (const f of [1000, 0.001, 1e6, 1e-6]) {
-      const values = base.values.map((v) => ({ ...v, value: v.value * f }));
-      try {
-        if (!evaluateSheet(rev.sheetType, rev.inputs, { ...base, values }).pass) {
-          chosen = values;
-          break;
-        }
-      } catch {
-        /* refused by the core: try the next */
-      }
-    }
+    // A version whose values make the stored inputs fail, inside every criterion's bounds.
+    const stricter = stricterValues(base.values);
+    const chosen = evaluateSheet(rev.sheetType, rev.inputs, { ...base, values: stricter }).pass
+      ? undefined
+      : stricter;
     expect(chosen).toBeDefined();
     const pub = await ctx.request('POST', `/api/criteria-sets/${setId}/versions`, {
       as: 'admin',

@@ -250,6 +250,26 @@ const matrix: Row[] = [
     admin: 400,
   },
   {
+    method: 'POST',
+    path: '/api/criteria-sets',
+    body: {},
+    anonymous: 401,
+    engineer: 403,
+    checker: 403,
+    viewer: 403,
+    admin: 400,
+  },
+  {
+    method: 'POST',
+    path: `/api/criteria-sets/${N}/versions/1/confirmations`,
+    body: {},
+    anonymous: 401,
+    engineer: 403,
+    checker: 400,
+    viewer: 403,
+    admin: 400,
+  },
+  {
     method: 'GET',
     path: `/api/criteria-sets/${N}/impact`,
     anonymous: 401,
@@ -287,6 +307,34 @@ const matrix: Row[] = [
   },
   {
     method: 'GET',
+    path: `/api/revisions/${N}/criteria-review`,
+    anonymous: 401,
+    engineer: 404,
+    checker: 404,
+    viewer: 404,
+    admin: 404,
+  },
+  {
+    method: 'POST',
+    path: `/api/revisions/${N}/criteria-review/disposition`,
+    body: {},
+    anonymous: 401,
+    engineer: 403,
+    checker: 400,
+    viewer: 403,
+    admin: 403,
+  },
+  {
+    method: 'GET',
+    path: '/api/work-queue/under-review',
+    anonymous: 401,
+    engineer: 200,
+    checker: 200,
+    viewer: 200,
+    admin: 200,
+  },
+  {
+    method: 'GET',
     path: '/api/verify/AAAAAAAAAA',
     anonymous: 404,
     engineer: 404,
@@ -306,6 +354,7 @@ const controllers = [
   'WorkQueueController',
   'VerifyController',
   'PrintController',
+  'ReviewsController',
 ];
 
 describe('sheets feature routes × roles', () => {
@@ -321,7 +370,7 @@ describe('sheets feature routes × roles', () => {
     const covered = new Set(
       matrix.map(
         (r) =>
-          `${r.method} ${r.path.split('?')[0].replaceAll(N, ':id').replace('AAAAAAAAAA', ':code')}`,
+          `${r.method} ${r.path.split('?')[0].replaceAll(N, ':id').replace('AAAAAAAAAA', ':code').replace('/versions/1/', '/versions/:version/')}`,
       ),
     );
     expect(routes.map(routeKey).filter((k) => !covered.has(k))).toEqual([]);

@@ -32,6 +32,7 @@ describe('printout verification', () => {
         'revisionLabel',
         'state',
         'title',
+        'underReview',
       ].sort(),
     );
     expect(res.body).toMatchObject({

@@ -12,3 +12,4 @@ export * from './criteria/criteria.schema.js';
 export * from './work-queue/work-queue.schema.js';
 export * from './verify/verify.schema.js';
 export * from './revisions/canonical-json.js';
+export * from './reviews/criteria-review.schema.js';

@@ -39,7 +39,7 @@ const COMMON: CriterionValue[] = [
     key: 'travelStopFraction',
     label: 'Travel stopping distance (ft) ÷ full-load speed (ft/min), at most',
     value: 0.1,
-    unit: '',
+    unit: 'min',
     source:
       'published: 29 CFR 1910.179 (bridge and trolley brakes: stop within a distance in ft equal to 10 % of full-load speed in ft/min)',
     confidence: 'published',

@@ -1,8 +1,12 @@
 import { Body, Controller, Get, HttpCode, Param, Post, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import {
+  confirmCriterionSchema,
+  createCriteriaSetSchema,
   criteriaVersionQuerySchema,
   publishCriteriaVersionSchema,
+  type ConfirmCriterionInput,
+  type CreateCriteriaSetInput,
   type CriteriaSetDetail,
   type CriteriaSetList,
   type ImpactReport,
@@ -13,9 +17,11 @@ import { CurrentUser, type AuthUser } from '../auth/auth-user.js';
 import { Roles, SignedIn } from '../auth/policy.js';
 import { ApiBodySchema } from '../common/openapi.js';
 import { ZodValidationPipe } from '../common/pipes/zod-validation.pipe.js';
+import { CriteriaAdminService } from './criteria-admin.service.js';
 import { CriteriaService } from './criteria.service.js';
 import { ImpactService } from './impact.service.js';
 
+const versionParam = z.coerce.number().int().positive().max(1_000_000);
 const setId = z.string().regex(/^[a-z0-9][a-z0-9._-]{0,79}$/i, 'not a criteria-set id');
 
 @ApiTags('criteria-sets')
@@ -25,12 +31,37 @@ export class CriteriaController {
   constructor(
     private readonly criteria: CriteriaService,
     private readonly impactService: ImpactService,
+    private readonly admin: CriteriaAdminService,
   ) {}
 
   @Get()
   @SignedIn()
   async list(): Promise<CriteriaSetList> {
     return { items: await this.criteria.list() };
+  }
+
+  @Post()
+  @HttpCode(201)
+  @Roles('admin')
+  @ApiBodySchema(createCriteriaSetSchema)
+  create(
+    @CurrentUser() user: AuthUser,
+    @Body(new ZodValidationPipe(createCriteriaSetSchema)) input: CreateCriteriaSetInput,
+  ): Promise<CriteriaSetDetail> {
+    return this.admin.create(user.id, input);
+  }
+
+  @Post(':id/versions/:version/confirmations')
+  @HttpCode(201)
+  @Roles('admin', 'checker')
+  @ApiBodySchema(confirmCriterionSchema)
+  confirm(
+    @CurrentUser() user: AuthUser,
+    @Param('id', new ZodValidationPipe(setId, 'id')) id: string,
+    @Param('version', new ZodValidationPipe(versionParam, 'version')) version: number,
+    @Body(new ZodValidationPipe(confirmCriterionSchema)) input: ConfirmCriterionInput,
+  ): Promise<CriteriaSetDetail> {
+    return this.admin.confirm(user.id, id, version, input);
   }
 
   @Get(':id')

@@ -85,6 +85,58 @@ export class CriteriaRepository {
     return row ? { ...row, values: row.values as CriterionValue[] } : undefined;
   }
 
+  /** A new set with its first version (the caller audits it). */
+  async createSet(
+    trx: Kysely<DB>,
+    set: { id: string; name: string; description: string },
+    values: CriterionValue[],
+    note: string,
+    publishedBy: string,
+  ): Promise<void> {
+    await trx.insertInto('criteriaSets').values(set).execute();
+    await this.insertVersion(trx, {
+      criteriaSetId: set.id,
+      version: 1,
+      values,
+      note,
+      publishedBy,
+    });
+  }
+
+  /** Every confirmation of the set's values, oldest first, with who made it. */
+  confirmations(id: string) {
+    return this.db
+      .selectFrom('criteriaConfirmations as c')
+      .innerJoin('users as u', 'u.id', 'c.confirmedBy')
+      .select([
+        'c.key',
+        'c.version',
+        'c.document',
+        'c.clause',
+        'c.confirmedAt',
+        'u.id as userId',
+        'u.displayName',
+        'u.initials',
+      ])
+      .where('c.criteriaSetId', '=', id)
+      .orderBy('c.confirmedAt', 'asc')
+      .execute();
+  }
+
+  async insertConfirmation(
+    trx: Kysely<DB>,
+    row: {
+      criteriaSetId: string;
+      version: number;
+      key: string;
+      document: string;
+      clause: string;
+      confirmedBy: string;
+    },
+  ): Promise<void> {
+    await trx.insertInto('criteriaConfirmations').values(row).execute();
+  }
+
   async insertVersion(
     trx: Kysely<DB>,
     row: {

@@ -1,5 +1,5 @@
 import { Injectable, Logger, type OnModuleInit } from '@nestjs/common';
-import type { CriteriaSet } from '@holdfast/calc';
+import { criterionSpec, type CriteriaSet } from '@holdfast/calc';
 import type {
   CriteriaSetDetail,
   CriteriaSetSummary,
@@ -11,7 +11,9 @@ import { badRequest, notFound } from '../common/errors/api-exception.js';
 import { Database } from '../database/database.js';
 import { AuditService } from '../audit/audit.service.js';
 import { shippedCriteriaSets } from '../revisions/calc-engine.js';
+import { ReviewsService } from '../reviews/reviews.service.js';
 import { CriteriaRepository } from './criteria.repository.js';
+import { confirmationsFor } from './confirmations.js';
 
 @Injectable()
 export class CriteriaService implements OnModuleInit {
@@ -21,6 +23,7 @@ export class CriteriaService implements OnModuleInit {
     private readonly db: Database,
     private readonly repo: CriteriaRepository,
     private readonly audit: AuditService,
+    private readonly reviews: ReviewsService,
   ) {}
 
   /** The calc core's shipped sets exist in the database as version 1. */
@@ -80,7 +83,14 @@ export class CriteriaService implements OnModuleInit {
         version: v.version,
         publishedAt: v.publishedAt.toISOString(),
       })),
+      confirmations: confirmationsFor(row.version, versions, await this.repo.confirmations(id)),
     };
+  }
+
+  /** The confirmations holding for one version (for print). */
+  async confirmations(id: string, version: number) {
+    const versions = await this.repo.versions(id);
+    return confirmationsFor(version, versions, await this.repo.confirmations(id));
   }
 
   /** Publish the next version. Values must cover exactly the keys of the latest version. */
@@ -118,7 +128,8 @@ export class CriteriaService implements OnModuleInit {
       await this.repo.insertVersion(trx, {
         criteriaSetId: id,
         version,
-        values: input.values,
+        // An empty unit means the declared one; the record always names it.
+        values: input.values.map((v) => ({ ...v, unit: criterionSpec(v.key)?.unit ?? v.unit })),
         note: input.note,
         publishedBy: actorId,
       });
@@ -130,6 +141,9 @@ export class CriteriaService implements OnModuleInit {
         before: { version: latest.version, values: latest.values },
         after: { version, values: input.values, note: input.note },
       });
+      // Approvals follow criteria changes: in the same transaction, so no version is ever
+      // published without its flags.
+      await this.reviews.flagAfterPublish(trx, actorId, await this.load(id, version, trx));
       return version;
     });
     return this.detail(id, next);

@@ -1,8 +1,7 @@
 import { Injectable, Logger } from '@nestjs/common';
-import type { SheetInputs } from '@holdfast/calc';
 import type { ImpactReport } from '@holdfast/shared';
 import { Database } from '../database/database.js';
-import { evaluateStoredRecord } from '../revisions/calc-engine.js';
+import { failingChecks } from './failing-checks.js';
 import { CriteriaService } from './criteria.service.js';
 
 /**
@@ -38,26 +37,11 @@ export class ImpactService {
       .execute();
     const items: ImpactReport['items'] = [];
     for (const rev of approved) {
-      let failing: ImpactReport['items'][number]['failing'];
-      try {
-        const evaluation = evaluateStoredRecord(rev.sheetType, rev.inputs as SheetInputs, criteria);
-        failing = evaluation.checks
-          .filter((c) => !c.pass)
-          .map((c) => ({ id: c.id, label: c.label, value: c.value, limit: c.limit, unit: c.unit }));
-      } catch (e) {
+      const failing = failingChecks(rev.sheetType, rev.inputs, criteria, (e) =>
         this.logger.warn(
           `impact: ${rev.documentNumber} rev. ${rev.label} no longer evaluates: ${String(e)}`,
-        );
-        failing = [
-          {
-            id: 'evaluation',
-            label: 'Stored inputs no longer evaluate',
-            value: 0,
-            limit: 0,
-            unit: '',
-          },
-        ];
-      }
+        ),
+      );
       if (failing.length > 0) {
         items.push({
           sheetId: rev.sheetId,

@@ -1,6 +1,7 @@
 import { Module } from '@nestjs/common';
 import { CriteriaModule } from '../criteria/criteria.module.js';
 import { RevisionsModule } from '../revisions/revisions.module.js';
+import { ReviewsModule } from '../reviews/reviews.module.js';
 import { SheetsRepository } from '../sheets/sheets.repository.js';
 import { SheetsService } from '../sheets/sheets.service.js';
 import { PrintController } from './print.controller.js';
@@ -11,7 +12,7 @@ import { PrintService } from './print.service.js';
  * provides its own (stateless) SheetsService over the same repositories.
  */
 @Module({
-  imports: [CriteriaModule, RevisionsModule],
+  imports: [CriteriaModule, RevisionsModule, ReviewsModule],
   controllers: [PrintController],
   providers: [PrintService, SheetsService, SheetsRepository],
 })

@@ -48,8 +48,24 @@ export interface PrintableInput {
   converted: string;
 }
 
+/** A criteria review of an approved revision: open (no disposition) or disposed by a checker. */
+export interface PrintCriteriaReview {
+  criteriaSetName: string;
+  criteriaSetVersion: number;
+  flaggedAt: string;
+  /** Labels of the checks that fail under that version. */
+  failing: string[];
+  disposition: string | null;
+  /** 'Name (initials)' of the checker who wrote the disposition. */
+  checker: string | null;
+  clearedAt: string | null;
+}
+
 /** A criteria-set value with its source, printed in the design basis. */
-export type PrintCriterion = CriterionValue;
+export type PrintCriterion = CriterionValue & {
+  /** Confirmed against a document the plant holds: replaces "from memory" on paper. */
+  confirmation?: { document: string; clause: string; by: string; at: string };
+};
 
 /**
  * Everything the calculation-sheet PDF and the field card need, as plain data. Build it with
@@ -94,6 +110,8 @@ export interface PrintableSheet {
   /** Present for revisions that have a verification code (approved and superseded ones). */
   verification: { code: string; url: string } | null;
   supersededBy: { label: string; date: string } | null;
+  /** Open flag and dispositions of criteria reviews (approved revisions only). */
+  criteriaReviews?: PrintCriteriaReview[];
   unitSystem: PrintUnitSystem;
   paper: Paper;
   /** ISO date-time the PDF was generated. */

@@ -6,6 +6,7 @@ import type { TextMeasure } from './measure.js';
 import { approvalsBlock, revisionHistoryBlocks } from './parts/approvals.js';
 import { Caution, cautionHeight } from './parts/caution.js';
 import { chartBlock } from './parts/chart.js';
+import { criteriaReviewBlocks } from './parts/criteria-reviews.js';
 import { designBasisBlocks } from './parts/design-basis.js';
 import { derivationBlocks } from './parts/derivation.js';
 import { fieldSettingsBlocks, justificationBlocks } from './parts/field-settings.js';
@@ -55,6 +56,7 @@ function sheetBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlock[] {
     { key: 'caution', height: cautionHeight(ctx.m, ctx.width), element: <Caution key="caution" /> },
     ...summaryBlocks(ctx, sheet),
     approvalsBlock(ctx, sheet),
+    ...criteriaReviewBlocks(ctx, sheet),
     ...revisionHistoryBlocks(ctx, sheet),
     ...designBasisBlocks(ctx, sheet),
     ...inputsBlocks(ctx, sheet),

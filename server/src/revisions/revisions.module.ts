@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { CriteriaModule } from '../criteria/criteria.module.js';
+import { ReviewsModule } from '../reviews/reviews.module.js';
 import { DriftService } from './drift.service.js';
 import { RevisionsController } from './revisions.controller.js';
 import { RevisionsRepository } from './revisions.repository.js';
@@ -7,7 +8,7 @@ import { RevisionsService } from './revisions.service.js';
 import { WorkflowService } from './workflow.service.js';
 
 @Module({
-  imports: [CriteriaModule],
+  imports: [CriteriaModule, ReviewsModule],
   controllers: [RevisionsController],
   providers: [RevisionsRepository, RevisionsService, WorkflowService, DriftService],
   exports: [RevisionsRepository, RevisionsService],

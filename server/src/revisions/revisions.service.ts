@@ -92,6 +92,8 @@ export class RevisionsService {
           // A returned revision's old hash and code no longer describe it.
           hash: null,
           verificationCode: null,
+          // Four-eyes by person: whoever saves a change may not approve this revision.
+          editorIds: withPerson(rev.editorIds, user.id),
           rowVersion: rev.rowVersion + 1,
         })
         .where('id', '=', id)
@@ -123,6 +125,11 @@ export class RevisionsService {
     });
     return this.get(user, id);
   }
+}
+
+/** The list with the person added once. */
+export function withPerson(ids: readonly string[], id: string): string[] {
+  return ids.includes(id) ? [...ids] : [...ids, id];
 }
 
 export function assertRowVersion(

@@ -15,13 +15,14 @@ import { Database } from '../database/database.js';
 import { AuditService } from '../audit/audit.service.js';
 import { CriteriaService } from '../criteria/criteria.service.js';
 import { OutboxService } from '../outbox/outbox.service.js';
+import { ReviewsService } from '../reviews/reviews.service.js';
 import { coreVersion, resolveInputsOf } from './calc-engine.js';
 import { evaluateCompleteOrReject } from './evaluate.js';
 import { approvedMail, returnedMail, submittedMail } from './notifications.js';
-import { canCheck } from './revision-access.js';
+import { canCheck, ownPart } from './revision-access.js';
 import { contentHash, newVerificationCode } from './revision-codes.js';
 import { RevisionsRepository, type RevisionWithSheet } from './revisions.repository.js';
-import { assertRowVersion, RevisionsService, snapshot } from './revisions.service.js';
+import { assertRowVersion, RevisionsService, snapshot, withPerson } from './revisions.service.js';
 
 /**
  * The check-and-approve workflow: draft/returned → in check → approved (previous approved →
@@ -38,6 +39,7 @@ export class WorkflowService {
     private readonly audit: AuditService,
     private readonly outbox: OutboxService,
     private readonly config: AppConfig,
+    private readonly reviews: ReviewsService,
   ) {}
 
   private about(rev: RevisionWithSheet) {
@@ -83,6 +85,7 @@ export class WorkflowService {
         verificationCode: newVerificationCode(hash),
         justification,
         submittedAt: new Date(),
+        submitterIds: withPerson(rev.submitterIds, user.id),
       };
       await trx.updateTable('revisions').set(after).where('id', '=', id).execute();
       await this.audit.record(trx, {
@@ -126,8 +129,11 @@ export class WorkflowService {
         currentRowVersion: rev.rowVersion,
       });
     }
-    if (rev.authorId === user.id)
-      throw forbidden('Nobody checks their own revision: ask another checker.');
+    const own = ownPart(user.id, rev);
+    if (own)
+      throw forbidden(
+        `Four eyes: you ${own} revision ${rev.label}, and nobody checks their own revision: ask another checker.`,
+      );
     if (!canCheck(user, rev)) throw forbidden('Only a checker can approve or return a revision.');
     assertRowVersion(rev, rowVersion);
     return rev;
@@ -176,6 +182,7 @@ export class WorkflowService {
         })
         .where('id', '=', id)
         .execute();
+      await this.reviews.clearOnApproval(trx, user.id, rev.sheetId, id, rev.label);
       await this.audit.record(trx, {
         actorId: user.id,
         action: 'revision.approved',

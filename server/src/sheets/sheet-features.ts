@@ -6,6 +6,7 @@ import { CriteriaModule } from '../criteria/criteria.module.js';
 import { OutboxModule } from '../outbox/outbox.module.js';
 import { RegisterModule } from '../register/register.module.js';
 import { RevisionsModule } from '../revisions/revisions.module.js';
+import { ReviewsModule } from '../reviews/reviews.module.js';
 import { VerifyModule } from '../verify/verify.module.js';
 import { WorkQueueModule } from '../work-queue/work-queue.module.js';
 import { SheetsModule } from './sheets.module.js';
@@ -14,6 +15,7 @@ import { SheetsModule } from './sheets.module.js';
 export const SheetFeatureModules: Type<unknown>[] = [
   AuditModule,
   OutboxModule,
+  ReviewsModule,
   CriteriaModule,
   RegisterModule,
   RevisionsModule,

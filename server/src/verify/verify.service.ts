@@ -32,6 +32,16 @@ export class VerifyService {
             .where('id', '=', rev.approvedRevisionId)
             .executeTakeFirst()
         : undefined;
+    const review =
+      rev.state === 'approved'
+        ? await this.db
+            .selectFrom('criteriaReviews as c')
+            .innerJoin('criteriaSets as cs', 'cs.id', 'c.criteriaSetId')
+            .select(['c.flaggedAt', 'c.criteriaSetVersion', 'cs.name'])
+            .where('c.revisionId', '=', rev.id)
+            .where('c.clearedAt', 'is', null)
+            .executeTakeFirst()
+        : undefined;
     return {
       documentNumber: rev.documentNumber,
       title: rev.title,
@@ -41,6 +51,14 @@ export class VerifyService {
       current: rev.state === 'approved',
       newerApproved: newer?.approvedAt
         ? { revisionLabel: newer.label, approvedAt: newer.approvedAt.toISOString() }
+        : null,
+      // Only the set's name, its version and the date: no failing values on a public page.
+      underReview: review
+        ? {
+            since: review.flaggedAt.toISOString(),
+            criteriaSetName: review.name,
+            criteriaSetVersion: review.criteriaSetVersion,
+          }
         : null,
     };
   }

@@ -1,4 +1,5 @@
 import { Injectable } from '@nestjs/common';
+import { sql } from 'kysely';
 import type { QueueItem, WorkQueue } from '@holdfast/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { effectiveRoles } from '../auth/policy.js';
@@ -57,6 +58,16 @@ export class WorkQueueService {
         ? this.base()
             .where('r.state', '=', 'in_check')
             .where('r.authorId', '<>', user.id)
+            // Four-eyes by person: not the checks of revisions I edited or submitted.
+            .where((eb) =>
+              eb.not(
+                eb(
+                  sql<string>`${user.id}::uuid`,
+                  '=',
+                  eb.fn.any(sql<string[]>`r.editor_ids || r.submitter_ids`),
+                ),
+              ),
+            )
             .orderBy('r.submittedAt', 'asc')
             .execute()
         : Promise.resolve([]),

@@ -1,3 +1,4 @@
+import { criteriaValueProblems, REQUIRED_CRITERIA } from '@holdfast/calc';
 import { z } from 'zod';
 import { isoDateSchema, personRefSchema } from '../sheets/person-ref.schema.js';
 
@@ -25,6 +26,21 @@ export type CriteriaSetSummary = z.infer<typeof criteriaSetSummarySchema>;
 export const criteriaSetListSchema = z.object({ items: z.array(criteriaSetSummarySchema) });
 export type CriteriaSetList = z.infer<typeof criteriaSetListSchema>;
 
+/**
+ * A value confirmed against a document the plant holds. It replaces "from memory" on screen and
+ * on paper for as long as the value stays what was confirmed.
+ */
+export const criterionConfirmationSchema = z.object({
+  key: z.string(),
+  /** The version the confirmation was made on (it may be older than the one shown). */
+  version: z.number().int().positive(),
+  document: z.string(),
+  clause: z.string(),
+  confirmedAt: isoDateSchema,
+  confirmedBy: personRefSchema,
+});
+export type CriterionConfirmation = z.infer<typeof criterionConfirmationSchema>;
+
 /** GET /api/criteria-sets/:id?version= — calc's CriteriaSet plus its history. */
 export const criteriaSetDetailSchema = z.object({
   id: z.string(),
@@ -36,6 +52,8 @@ export const criteriaSetDetailSchema = z.object({
   publishedAt: isoDateSchema,
   publishedBy: personRefSchema.nullable(),
   versions: z.array(z.object({ version: z.number().int().positive(), publishedAt: isoDateSchema })),
+  /** Confirmations that hold for this version's values, one per key at most. */
+  confirmations: z.array(criterionConfirmationSchema),
 });
 export type CriteriaSetDetail = z.infer<typeof criteriaSetDetailSchema>;
 
@@ -43,14 +61,80 @@ export const criteriaVersionQuerySchema = z
   .object({ version: z.coerce.number().int().positive().optional() })
   .strict();
 
+/**
+ * A list of criterion values that an engineer can stand behind: known keys, each once, in its
+ * declared unit and inside its bounds (calc's criteria catalogue), and a value marked "from
+ * memory" only while its source still says so.
+ */
+export const criterionValuesSchema = z
+  .array(criterionValueSchema)
+  .min(1)
+  .superRefine((values, ctx) => {
+    for (const problem of criteriaValueProblems(values)) {
+      ctx.addIssue({
+        code: 'custom',
+        path: problem.field.split('.').map((p) => (/^\d+$/.test(p) ? Number(p) : p)),
+        message: problem.message,
+      });
+    }
+    values.forEach((v, i) => {
+      if (v.confidence === 'memory' && !/memory/i.test(v.source)) {
+        ctx.addIssue({
+          code: 'custom',
+          path: [i, 'confidence'],
+          message:
+            'the source no longer says the value is from memory: say how sure it is (published, secondary, common practice)',
+        });
+      }
+    });
+  });
+
 /** POST /api/criteria-sets/:id/versions (admin). Every key of the set must be present. */
 export const publishCriteriaVersionSchema = z
   .object({
-    values: z.array(criterionValueSchema).min(1),
+    values: criterionValuesSchema,
     note: z.string().trim().min(1, 'say what changed and why').max(2000),
   })
   .strict();
 export type PublishCriteriaVersionInput = z.infer<typeof publishCriteriaVersionSchema>;
+
+/** POST /api/criteria-sets (admin): a new set, e.g. the plant's own standard, as version 1. */
+export const createCriteriaSetSchema = z
+  .object({
+    id: z
+      .string()
+      .trim()
+      .regex(/^[a-z0-9][a-z0-9-]{2,59}$/, 'lower-case letters, digits and hyphens, 3 to 60'),
+    name: z.string().trim().min(3, 'name the set').max(200),
+    description: z
+      .string()
+      .trim()
+      .min(10, 'say what the set is for and which standard governs')
+      .max(2000),
+    values: criterionValuesSchema.superRefine((values, ctx) => {
+      for (const key of REQUIRED_CRITERIA) {
+        if (!values.some((v) => v.key === key))
+          ctx.addIssue({ code: 'custom', path: [], message: `value "${key}" is missing` });
+      }
+    }),
+    note: z.string().trim().min(1, 'say where the values come from').max(2000),
+  })
+  .strict();
+export type CreateCriteriaSetInput = z.infer<typeof createCriteriaSetSchema>;
+
+/** POST /api/criteria-sets/:id/versions/:version/confirmations (admin, checker). */
+export const confirmCriterionSchema = z
+  .object({
+    key: z.string().min(1).max(80),
+    document: z
+      .string()
+      .trim()
+      .min(3, 'name the document the plant holds (title, number, edition)')
+      .max(300),
+    clause: z.string().trim().min(1, 'name the clause, table or page').max(120),
+  })
+  .strict();
+export type ConfirmCriterionInput = z.infer<typeof confirmCriterionSchema>;
 
 /** GET /api/criteria-sets/:id/impact?version= */
 export const impactReportSchema = z.object({

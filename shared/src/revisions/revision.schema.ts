@@ -123,6 +123,20 @@ export const driftReportSchema = z.object({
   ),
   /** Set when the stored inputs no longer evaluate with today's core. */
   error: z.string().nullable().optional(),
+  /**
+   * The same inputs against the newest version of the criteria set, when the revision used an
+   * older one: the checks that fail under it (empty when all pass).
+   */
+  newestCriteria: z
+    .object({
+      criteriaSetId: z.string(),
+      versionThen: z.number().int().positive(),
+      versionNow: z.number().int().positive(),
+      failing: z.array(z.object({ id: z.string(), label: z.string() })),
+      error: z.string().nullable(),
+    })
+    .nullable()
+    .optional(),
 });
 export type DriftReport = z.infer<typeof driftReportSchema>;
 

@@ -19,5 +19,9 @@ export const verifyResultSchema = z.object({
   /** True when this revision is the sheet's approved revision in force. */
   current: z.boolean(),
   newerApproved: z.object({ revisionLabel: z.string(), approvedAt: isoDateSchema }).nullable(),
+  /** Set while a newer criteria-set version makes this approved revision fail (no details). */
+  underReview: z
+    .object({ since: isoDateSchema, criteriaSetName: z.string(), criteriaSetVersion: z.number() })
+    .nullable(),
 });
 export type VerifyResult = z.infer<typeof verifyResultSchema>;

@@ -1,7 +1,7 @@
 import { DIMENSIONS, type Dimension } from '@holdfast/calc';
 import { Text, View } from '@react-pdf/renderer';
-import { qty } from '../format.js';
-import type { PrintableSheet, PrintUnitSystem } from '../printable-sheet.js';
+import { day, qty } from '../format.js';
+import type { PrintableSheet, PrintCriterion, PrintUnitSystem } from '../printable-sheet.js';
 import { colours } from '../theme.js';
 import { headingBlock, tableBlocks, type BlockContext } from '../blocks.js';
 import type { FlowBlock } from '../flow.js';
@@ -14,6 +14,19 @@ function criterionText(value: number, unit: string, system: PrintUnitSystem): st
   );
   // 'K' is both a temperature and a temperature difference: ambiguous units print as stored.
   return dims.length === 1 ? qty(value, dims[0], system) : `${value} ${unit}`;
+}
+
+/** Printed beside a value still recalled from memory, in the value cell itself. */
+export const FROM_MEMORY_MARK = '[from memory]';
+
+// Marked when recalled from memory, by its standing or in its source's own words.
+const fromMemory = (v: PrintCriterion) =>
+  !v.confirmation && (v.confidence === 'memory' || /from memory/i.test(v.source));
+
+/** How sure the value is: the confirming document when there is one. */
+function standing(v: PrintCriterion): string {
+  const c = v.confirmation;
+  return c ? `confirmed: ${c.document}, ${c.clause} (${c.by}, ${day(c.at)})` : v.confidence;
 }
 
 const KEY_W = 130;
@@ -69,9 +82,11 @@ export function designBasisBlocks(ctx: BlockContext, sheet: PrintableSheet): Flo
         ],
         rows: c.values.map((v) => [
           v.label,
-          criterionText(v.value, v.unit, sheet.unitSystem),
+          fromMemory(v)
+            ? `${criterionText(v.value, v.unit, sheet.unitSystem)} ${FROM_MEMORY_MARK}`
+            : criterionText(v.value, v.unit, sheet.unitSystem),
           v.source,
-          v.confidence,
+          standing(v),
         ]),
       }),
     );

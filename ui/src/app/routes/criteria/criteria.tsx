@@ -28,6 +28,8 @@ import {
 import { usePublishCriteriaVersion } from '../../../features/criteria/api/publish-criteria-version';
 import { CriteriaValuesTable } from '../../../features/criteria/components/criteria-values-table';
 import { ImpactList } from '../../../features/criteria/components/impact-list';
+import { ConfirmValueDialog } from '../../../features/criteria/components/confirm-value-dialog';
+import { CreateCriteriaSetDialog } from '../../../features/criteria/components/create-criteria-set-dialog';
 
 export const handle: RouteHandle = { title: 'Criteria sets', wide: true, caution: true };
 
@@ -49,6 +51,9 @@ export function Component() {
   const [editing, setEditing] = useState<CriterionValueInput[] | null>(null);
   const [note, setNote] = useState('');
   const [impactVersion, setImpactVersion] = useState<number | null>(null);
+  const [confirming, setConfirming] = useState<CriterionValueInput | null>(null);
+  const [creating, setCreating] = useState(false);
+  const canConfirm = user.role === 'admin' || user.role === 'checker';
   useEffect(() => {
     setEditing(null);
     setImpactVersion(null);
@@ -78,7 +83,13 @@ export function Component() {
       },
     );
   };
-  const noteError = isApiRequestError(publish.error) ? publish.error.fieldErrors().note : undefined;
+  const publishFields = isApiRequestError(publish.error) ? publish.error.fieldErrors() : {};
+  const noteError = publishFields.note;
+  const valueErrors = Object.fromEntries(
+    Object.entries(publishFields)
+      .filter(([k]) => k.startsWith('values.'))
+      .map(([k, m]) => [k.slice('values.'.length), m]),
+  );
 
   return (
     <Page
@@ -144,6 +155,11 @@ export function Component() {
                       allowDeselect={false}
                     />
                     {user.role === 'admin' && !editing ? (
+                      <Button size="xs" variant="default" onClick={() => setCreating(true)}>
+                        New set from this one
+                      </Button>
+                    ) : null}
+                    {user.role === 'admin' && !editing ? (
                       <Button
                         size="xs"
                         onClick={() => setEditing(detail.data.values.map((v) => ({ ...v })))}
@@ -155,6 +171,9 @@ export function Component() {
                 </Group>
                 <CriteriaValuesTable
                   values={editing ?? detail.data.values}
+                  errors={valueErrors}
+                  confirmations={editing ? [] : detail.data.confirmations}
+                  onConfirm={canConfirm && !editing ? setConfirming : undefined}
                   onEdit={
                     editing
                       ? (i, patch) =>
@@ -194,6 +213,23 @@ export function Component() {
                 ) : null}
               </Paper>
             )}
+            {detail.data ? (
+              <>
+                <ConfirmValueDialog
+                  setId={detail.data.id}
+                  version={detail.data.version}
+                  value={confirming}
+                  onClose={() => setConfirming(null)}
+                />
+                <CreateCriteriaSetDialog
+                  opened={creating}
+                  onClose={() => setCreating(false)}
+                  startFrom={detail.data.values}
+                  startName={detail.data.name}
+                  onCreated={(id) => go({ set: id, version: undefined })}
+                />
+              </>
+            ) : null}
             {impactVersion ? (
               <ImpactList setId={selected} version={impactVersion} />
             ) : detail.data && user.role === 'admin' ? (

@@ -7,6 +7,7 @@ import { useCurrentUser } from '../../../lib/session';
 import { useWorkQueue, workQueueQueryOptions } from '../../../features/queue/api/get-work-queue';
 import { QueueSection } from '../../../features/queue/components/queue-section';
 import { StateBadge } from '../../../features/sheets/components/state-badge';
+import { UnderReviewQueue } from '../../../features/criteria-review/components/under-review-queue';
 
 export const handle: RouteHandle = { title: 'Work queue' };
 
@@ -33,6 +34,7 @@ export function Component() {
         <ErrorPanel error={queue.error} onRetry={() => void queue.refetch()} />
       ) : (
         <SimpleGrid cols={{ base: 1, md: 2 }} spacing="md">
+          <UnderReviewQueue />
           <QueueSection
             id="returned"
             title="Returned to me"

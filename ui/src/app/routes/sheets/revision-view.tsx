@@ -14,6 +14,7 @@ import { CommentsPanel } from '../../../features/review/components/comments-pane
 import { groupByAnchor } from '../../../features/review/utils/anchors';
 import { useRevision } from '../../../features/revisions/api/get-revision';
 import { RevisionWorkbench } from '../../../features/revisions/components/revision-workbench';
+import { UnderReviewBanner } from '../../../features/criteria-review/components/under-review-banner';
 import { RevisionActions } from './revision-actions';
 
 /** One revision: the live workbench with review markers in place, then comments and files. */
@@ -80,72 +81,75 @@ export function RevisionView({ revisionId, user }: { revisionId: string; user: U
   const openComments = comments.filter((c) => !c.resolved).length;
 
   return (
-    <Tabs value={tab} onChange={setTab} keepMounted={false}>
-      <Tabs.List mb="md">
-        <Tabs.Tab value="calc">Calculation</Tabs.Tab>
-        <Tabs.Tab value="review">
-          Review and files{openComments > 0 ? ` (${openComments} open)` : ''}
-        </Tabs.Tab>
-      </Tabs.List>
-      <Tabs.Panel value="calc">
-        {sheetType ? (
-          criteria.isError && revision.canEdit ? (
-            <ErrorPanel
-              title="The acceptance criteria could not be loaded"
-              error={criteria.error}
-              onRetry={() => void criteria.refetch()}
-            />
+    <>
+      <UnderReviewBanner revisionId={revisionId} approved={revision.state === 'approved'} />
+      <Tabs value={tab} onChange={setTab} keepMounted={false}>
+        <Tabs.List mb="md">
+          <Tabs.Tab value="calc">Calculation</Tabs.Tab>
+          <Tabs.Tab value="review">
+            Review and files{openComments > 0 ? ` (${openComments} open)` : ''}
+          </Tabs.Tab>
+        </Tabs.List>
+        <Tabs.Panel value="calc">
+          {sheetType ? (
+            criteria.isError && revision.canEdit ? (
+              <ErrorPanel
+                title="The acceptance criteria could not be loaded"
+                error={criteria.error}
+                onRetry={() => void criteria.refetch()}
+              />
+            ) : (
+              <RevisionWorkbench
+                revision={revision}
+                sheetType={sheetType}
+                criteria={criteria.data}
+                renderActions={(ctx) => (
+                  <RevisionActions revision={revision} ctx={ctx} openComments={openComments} />
+                )}
+                renderFieldAside={marker('input', fieldLabel)}
+                renderStepAside={marker('step', stepLabel)}
+                renderCheckAside={marker('check', (k) => k)}
+              />
+            )
           ) : (
-            <RevisionWorkbench
-              revision={revision}
-              sheetType={sheetType}
-              criteria={criteria.data}
-              renderActions={(ctx) => (
-                <RevisionActions revision={revision} ctx={ctx} openComments={openComments} />
-              )}
-              renderFieldAside={marker('input', fieldLabel)}
-              renderStepAside={marker('step', stepLabel)}
-              renderCheckAside={marker('check', (k) => k)}
-            />
-          )
-        ) : (
-          <Stack>
-            <Alert
-              color="amber"
-              icon={<IconAlertTriangle size={18} />}
-              title="Sheet type not available here"
-            >
-              This build’s calculation core does not know the sheet type “{revision.sheetType}”. The
-              stored results are shown; inputs cannot be edited.
-            </Alert>
-            <ResultsPanel
-              evaluation={revision.evaluation}
-              sections={[]}
-              unitSystem={revision.unitSystem}
-              origin="Stored by the server"
-            />
-          </Stack>
-        )}
-      </Tabs.Panel>
-      <Tabs.Panel value="review">
-        <Grid gap="md">
-          <Grid.Col span={{ base: 12, md: 7 }}>
-            <CommentsPanel
-              revisionId={revisionId}
-              canComment={canComment}
-              canResolve={canComment}
-              describe={describe}
-              onReveal={reveal}
-            />
-          </Grid.Col>
-          <Grid.Col span={{ base: 12, md: 5 }}>
-            <AttachmentsPanel
-              revisionId={revisionId}
-              canUpload={user.role !== 'viewer' && !frozen}
-            />
-          </Grid.Col>
-        </Grid>
-      </Tabs.Panel>
-    </Tabs>
+            <Stack>
+              <Alert
+                color="amber"
+                icon={<IconAlertTriangle size={18} />}
+                title="Sheet type not available here"
+              >
+                This build’s calculation core does not know the sheet type “{revision.sheetType}”.
+                The stored results are shown; inputs cannot be edited.
+              </Alert>
+              <ResultsPanel
+                evaluation={revision.evaluation}
+                sections={[]}
+                unitSystem={revision.unitSystem}
+                origin="Stored by the server"
+              />
+            </Stack>
+          )}
+        </Tabs.Panel>
+        <Tabs.Panel value="review">
+          <Grid gap="md">
+            <Grid.Col span={{ base: 12, md: 7 }}>
+              <CommentsPanel
+                revisionId={revisionId}
+                canComment={canComment}
+                canResolve={canComment}
+                describe={describe}
+                onReveal={reveal}
+              />
+            </Grid.Col>
+            <Grid.Col span={{ base: 12, md: 5 }}>
+              <AttachmentsPanel
+                revisionId={revisionId}
+                canUpload={user.role !== 'viewer' && !frozen}
+              />
+            </Grid.Col>
+          </Grid>
+        </Tabs.Panel>
+      </Tabs>
+    </>
   );
 }

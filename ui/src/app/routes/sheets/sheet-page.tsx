@@ -12,6 +12,7 @@ import { revisionQueryOptions } from '../../../features/revisions/api/get-revisi
 import { sheetQueryOptions, useSheet } from '../../../features/sheets/api/get-sheet';
 import { NewRevisionDialog } from '../../../features/sheets/components/new-revision-dialog';
 import { RevisionTimeline } from '../../../features/sheets/components/revision-timeline';
+import { UnderReviewBanner } from '../../../features/criteria-review/components/under-review-banner';
 import { RevisionView } from './revision-view';
 import { SheetHeader } from './sheet-header';
 
@@ -96,6 +97,14 @@ export function Component() {
           </>
         }
       />
+      {sheet.approved && sheet.approved.id !== selectedId ? (
+        // The approval in force may be under review while another revision is on screen.
+        <UnderReviewBanner
+          revisionId={sheet.approved.id}
+          approved
+          revisionLabel={sheet.approved.label}
+        />
+      ) : null}
       <Grid gap="md">
         <Grid.Col span={{ base: 12, xl: 'auto' }} style={{ minWidth: 0 }}>
           {selectedId && selected ? (

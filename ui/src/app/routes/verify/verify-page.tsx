@@ -49,7 +49,7 @@ function Result({ code }: { code: string }) {
   const ok = r.current && r.state === 'approved';
   return (
     <Alert
-      color={ok ? 'pass' : 'fail'}
+      color={ok ? (r.underReview ? 'amber' : 'pass') : 'fail'}
       variant={ok ? 'light' : 'filled'}
       icon={ok ? <IconCircleCheck size={22} /> : <IconAlertTriangle size={22} />}
       title={
@@ -68,6 +68,11 @@ function Result({ code }: { code: string }) {
           State: {r.state.replace('_', ' ')}
           {r.approvedAt ? `, approved ${new Date(r.approvedAt).toLocaleDateString('en-GB')}` : ''}
         </Text>
+        {r.underReview ? (
+          <Text size="sm" fw={600} data-under-review>
+            {`approved; under review since ${new Date(r.underReview.since).toLocaleDateString('en-GB')}: criteria ${r.underReview.criteriaSetName} v${r.underReview.criteriaSetVersion}`}
+          </Text>
+        ) : null}
         {r.newerApproved ? (
           <Text size="sm" fw={600}>
             Revision {r.newerApproved.revisionLabel} replaced it on{' '}

@@ -32,7 +32,34 @@ export function DriftDialog({ opened, onClose, report, pending, error }: DriftDi
               {report.error}
             </Alert>
           ) : null}
-          {report.moved.length === 0 && report.checksChanged.length === 0 && !report.error ? (
+          {report.newestCriteria ? (
+            <Alert
+              color={
+                report.newestCriteria.failing.length || report.newestCriteria.error
+                  ? 'fail'
+                  : 'pass'
+              }
+              title={`Against the newest criteria (version ${report.newestCriteria.versionNow}; approved under ${report.newestCriteria.versionThen})`}
+              data-newest-criteria
+            >
+              {report.newestCriteria.error ? (
+                <Text size="sm">{report.newestCriteria.error}</Text>
+              ) : report.newestCriteria.failing.length === 0 ? (
+                <Text size="sm">Every check passes.</Text>
+              ) : (
+                report.newestCriteria.failing.map((f) => (
+                  <Text key={f.id} size="sm">
+                    Fails: {f.label}
+                  </Text>
+                ))
+              )}
+            </Alert>
+          ) : null}
+          {report.moved.length === 0 &&
+          report.checksChanged.length === 0 &&
+          !report.error &&
+          !report.newestCriteria?.failing.length &&
+          !report.newestCriteria?.error ? (
             <Alert color="pass">No result moved and no check changed. The printout stands.</Alert>
           ) : null}
           {report.checksChanged.length > 0 ? (

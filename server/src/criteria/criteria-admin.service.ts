@@ -1,0 +1,93 @@
+import { Injectable } from '@nestjs/common';
+import { criterionSpec } from '@holdfast/calc';
+import type {
+  ConfirmCriterionInput,
+  CreateCriteriaSetInput,
+  CriteriaSetDetail,
+} from '@holdfast/shared';
+import { badRequest, conflict, notFound } from '../common/errors/api-exception.js';
+import { Database } from '../database/database.js';
+import { AuditService } from '../audit/audit.service.js';
+import { CriteriaRepository } from './criteria.repository.js';
+import { CriteriaService } from './criteria.service.js';
+
+/** Admins create criteria sets of their own; admins and checkers confirm values against documents. */
+@Injectable()
+export class CriteriaAdminService {
+  constructor(
+    private readonly db: Database,
+    private readonly repo: CriteriaRepository,
+    private readonly criteria: CriteriaService,
+    private readonly audit: AuditService,
+  ) {}
+
+  async create(actorId: string, input: CreateCriteriaSetInput): Promise<CriteriaSetDetail> {
+    await this.db.transaction().execute(async (trx) => {
+      const taken = await trx
+        .selectFrom('criteriaSets')
+        .select('id')
+        .where('id', '=', input.id)
+        .executeTakeFirst();
+      if (taken) throw conflict(`A criteria set with the id "${input.id}" exists already.`);
+      const values = input.values.map((v) => ({
+        ...v,
+        unit: criterionSpec(v.key)?.unit ?? v.unit,
+      }));
+      await this.repo.createSet(
+        trx,
+        { id: input.id, name: input.name, description: input.description },
+        values,
+        input.note,
+        actorId,
+      );
+      await this.audit.record(trx, {
+        actorId,
+        action: 'criteria-set.created',
+        entity: 'criteria-set',
+        entityId: input.id,
+        after: { name: input.name, version: 1, values, note: input.note },
+      });
+    });
+    return this.criteria.detail(input.id, 1);
+  }
+
+  async confirm(
+    actorId: string,
+    id: string,
+    version: number,
+    input: ConfirmCriterionInput,
+  ): Promise<CriteriaSetDetail> {
+    await this.db.transaction().execute(async (trx) => {
+      const row = await this.repo.version(id, version, trx);
+      if (!row) throw notFound(`Criteria set ${id} has no version ${version}.`);
+      const value = row.values.find((v) => v.key === input.key);
+      if (!value) {
+        throw badRequest('The set has no such value.', [
+          { path: 'key', message: `version ${version} of "${id}" has no value "${input.key}"` },
+        ]);
+      }
+      await this.repo.insertConfirmation(trx, {
+        criteriaSetId: id,
+        version,
+        key: input.key,
+        document: input.document,
+        clause: input.clause,
+        confirmedBy: actorId,
+      });
+      await this.audit.record(trx, {
+        actorId,
+        action: 'criteria-set.value-confirmed',
+        entity: 'criteria-set',
+        entityId: id,
+        after: {
+          version,
+          key: input.key,
+          value: value.value,
+          document: input.document,
+          clause: input.clause,
+        },
+      });
+    });
+    return this.criteria.detail(id, version);
+  }
+}

@@ -1,0 +1,161 @@
+import { Injectable } from '@nestjs/common';
+import type { Kysely } from 'kysely';
+import type { CriteriaReviewRow, DB } from '@holdfast/db';
+import type { FailingCheck } from '../criteria/failing-checks.js';
+import { Database } from '../database/database.js';
+
+export type ReviewWithSet = CriteriaReviewRow & { criteriaSetName: string };
+export type Person = { id: string; displayName: string; initials: string };
+
+/** All Kysely code of the "under review" flags. */
+@Injectable()
+export class ReviewsRepository {
+  constructor(private readonly db: Database) {}
+
+  private withSet(db: Kysely<DB>) {
+    return db
+      .selectFrom('criteriaReviews as c')
+      .innerJoin('criteriaSets as cs', 'cs.id', 'c.criteriaSetId')
+      .selectAll('c')
+      .select('cs.name as criteriaSetName');
+  }
+
+  /** Approved revisions that use a criteria set, with what the flag and its mail need. */
+  approvedUsing(trx: Kysely<DB>, setId: string) {
+    return trx
+      .selectFrom('revisions as r')
+      .innerJoin('sheets as s', 's.id', 'r.sheetId')
+      .select([
+        'r.id',
+        'r.label',
+        'r.inputs',
+        'r.evaluation',
+        'r.checkerId',
+        's.id as sheetId',
+        's.ownerId',
+        's.sheetType',
+        's.documentNumber',
+        's.title',
+      ])
+      .where('r.state', '=', 'approved')
+      .where('r.criteriaSetId', '=', setId)
+      .orderBy('s.documentNumber')
+      .execute();
+  }
+
+  openFor(revisionId: string, db: Kysely<DB> = this.db): Promise<ReviewWithSet | undefined> {
+    return this.withSet(db)
+      .where('c.revisionId', '=', revisionId)
+      .where('c.clearedAt', 'is', null)
+      .executeTakeFirst();
+  }
+
+  clearedFor(revisionId: string, db: Kysely<DB> = this.db): Promise<ReviewWithSet[]> {
+    return this.withSet(db)
+      .where('c.revisionId', '=', revisionId)
+      .where('c.clearedAt', 'is not', null)
+      .orderBy('c.clearedAt', 'asc')
+      .execute();
+  }
+
+  /**
+   * Flag (or keep flagged) a revision under a criteria version. A flag already open keeps the date
+   * it was first raised and now names the newest version that fails. Returns whether it is new.
+   */
+  async flag(
+    trx: Kysely<DB>,
+    row: {
+      revisionId: string;
+      sheetId: string;
+      setId: string;
+      version: number;
+      failing: FailingCheck[];
+    },
+  ): Promise<{ id: string; isNew: boolean }> {
+    const open = await trx
+      .selectFrom('criteriaReviews')
+      .select('id')
+      .where('revisionId', '=', row.revisionId)
+      .where('clearedAt', 'is', null)
+      .forUpdate()
+      .executeTakeFirst();
+    if (open) {
+      await trx
+        .updateTable('criteriaReviews')
+        .set({ criteriaSetVersion: row.version, failing: JSON.stringify(row.failing) })
+        .where('id', '=', open.id)
+        .execute();
+      return { id: open.id, isNew: false };
+    }
+    const inserted = await trx
+      .insertInto('criteriaReviews')
+      .values({
+        revisionId: row.revisionId,
+        sheetId: row.sheetId,
+        criteriaSetId: row.setId,
+        criteriaSetVersion: row.version,
+        failing: JSON.stringify(row.failing),
+      })
+      .returning('id')
+      .executeTakeFirstOrThrow();
+    return { id: inserted.id, isNew: true };
+  }
+
+  /** Clear every open flag of the sheet's earlier revisions; returns the cleared flags. */
+  clearForSheet(trx: Kysely<DB>, sheetId: string, exceptRevisionId: string) {
+    return trx
+      .updateTable('criteriaReviews')
+      .set({ clearedAt: new Date(), clearedHow: 'superseded' })
+      .where('sheetId', '=', sheetId)
+      .where('revisionId', '<>', exceptRevisionId)
+      .where('clearedAt', 'is', null)
+      .returning(['id', 'revisionId', 'criteriaSetId', 'criteriaSetVersion'])
+      .execute();
+  }
+
+  dispose(trx: Kysely<DB>, id: string, userId: string, disposition: string) {
+    return trx
+      .updateTable('criteriaReviews')
+      .set({ clearedAt: new Date(), clearedHow: 'disposition', clearedBy: userId, disposition })
+      .where('id', '=', id)
+      .where('clearedAt', 'is', null)
+      .returning(['id', 'clearedAt'])
+      .executeTakeFirst();
+  }
+
+  /** Users by id, for who wrote a disposition. */
+  async people(ids: (string | null)[]): Promise<Map<string, Person>> {
+    const wanted = [...new Set(ids.filter((x): x is string => !!x))];
+    if (wanted.length === 0) return new Map();
+    const rows = await this.db
+      .selectFrom('users')
+      .select(['id', 'displayName', 'initials'])
+      .where('id', 'in', wanted)
+      .execute();
+    return new Map(rows.map((r) => [r.id, r]));
+  }
+
+  /** Open flags on sheets I own or revisions I checked. */
+  queueFor(userId: string) {
+    return this.db
+      .selectFrom('criteriaReviews as c')
+      .innerJoin('criteriaSets as cs', 'cs.id', 'c.criteriaSetId')
+      .innerJoin('revisions as r', 'r.id', 'c.revisionId')
+      .innerJoin('sheets as s', 's.id', 'c.sheetId')
+      .select([
+        's.id as sheetId',
+        's.documentNumber',
+        's.title',
+        'r.id as revisionId',
+        'r.label as revisionLabel',
+        'cs.name as criteriaSetName',
+        'c.criteriaSetVersion',
+        'c.flaggedAt',
+      ])
+      .where('c.clearedAt', 'is', null)
+      .where((eb) => eb.or([eb('s.ownerId', '=', userId), eb('r.checkerId', '=', userId)]))
+      .orderBy('c.flaggedAt', 'asc')
+      .limit(100)
+      .execute();
+  }
+}

@@ -1,0 +1,19 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { underReviewQueueSchema, type UnderReviewQueue } from '@holdfast/shared';
+import { api } from '../../../lib/api-client';
+import { reviewKeys } from './review-keys';
+
+export function getUnderReviewQueue(signal?: AbortSignal): Promise<UnderReviewQueue> {
+  return api.get('/work-queue/under-review', { schema: underReviewQueueSchema, signal });
+}
+
+export function underReviewQueueQueryOptions() {
+  return queryOptions({
+    queryKey: reviewKeys.queue(),
+    queryFn: ({ signal }) => getUnderReviewQueue(signal),
+  });
+}
+
+export function useUnderReviewQueue() {
+  return useQuery(underReviewQueueQueryOptions());
+}
