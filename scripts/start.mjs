@@ -42,12 +42,12 @@ process.on('SIGTERM', () => shutdown('SIGTERM'));
 
 await cluster.ensureDatabase('holdfast');
 await buildAll(projectDir);
-const databaseUrl = cluster.url('holdfast');
-await migrateAndSeed(projectDir, databaseUrl);
+// Migrations and seeds run as the owner role; the server signs in as the app role.
+await migrateAndSeed(projectDir, cluster.url('holdfast', 'owner'));
 
 step(`starting Holdfast on http://127.0.0.1:${port} …`);
 const serverEnv = {
-  DATABASE_URL: databaseUrl,
+  DATABASE_URL: cluster.url('holdfast', 'app'),
   PORT: String(port),
   HOST: '127.0.0.1',
   PUBLIC_URL: process.env.PUBLIC_URL ?? `http://127.0.0.1:${port}`,

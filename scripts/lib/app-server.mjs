@@ -3,12 +3,18 @@ import path from 'node:path';
 import { run } from './run.mjs';
 import { step, fail } from './log.mjs';
 
+/**
+ * Migrate, install the job queues and seed, signed in as the owner role (`cluster.url(db,
+ * 'owner')`); the server itself then runs as the app role (see db-roles.mjs).
+ */
 export async function migrateAndSeed(projectDir, databaseUrl) {
   const cli = path.join(projectDir, 'db', 'dist', 'src', 'cli.js');
+  const queues = path.join(projectDir, 'server', 'dist', 'outbox', 'queue-install.js');
   const env = { ...process.env, DATABASE_URL: databaseUrl };
   try {
     step('migrating the database…');
     await run('node', [cli, 'migrate'], { cwd: projectDir, env });
+    await run('node', [queues], { cwd: projectDir, env });
     step('seeding the demo scenario…');
     await run('node', [cli, 'seed'], { cwd: projectDir, env });
   } catch (e) {
