@@ -13,7 +13,7 @@ import net from 'node:net';
 import path from 'node:path';
 import { run, runSync, isRoot } from './run.mjs';
 import { ensureDebianPackages } from './apt.mjs';
-import { step, fail } from './log.mjs';
+import { step, fail as failAndExit } from './log.mjs';
 import {
   APP_ROLE,
   OWNER_ROLE,
@@ -101,7 +101,13 @@ function runningPid(dataDir) {
  * cluster's superuser (tests that create databases need it), `url(db, 'owner')` as the role that
  * migrates and seeds, `url(db, 'app')` as the server's least-privileged role (see db-roles.mjs).
  */
-export async function startCluster({ projectDir, name, port, durable }) {
+export async function startCluster({ projectDir, name, port, durable, throwOnFail = false }) {
+  // Tests that pick ports themselves retry elsewhere instead of ending the process.
+  const fail = throwOnFail
+    ? (msg) => {
+        throw new Error(msg);
+      }
+    : failAndExit;
   const bin = await ensurePostgresInstalled();
   const dataDir = clusterDir(projectDir, name);
   const secretFile = path.join(path.dirname(dataDir), `${name}.secret`);

@@ -44,11 +44,22 @@ export async function startFaultCluster(
   ports: { postgres: number; servers: number },
 ): Promise<FaultCluster> {
   const name = `pg-${label}-${process.pid}`;
-  const port: number = await freePortFrom(ports.postgres);
+  let port = 0;
   // Durable like production: with synchronous_commit off (the shared test cluster's setting) a
   // crash loses commits already acknowledged, which is exactly what these tests look for.
-  const open = () => startCluster({ projectDir, name, port, durable: true });
-  const cluster = await open();
+  const open = () => startCluster({ projectDir, name, port, durable: true, throwOnFail: true });
+  // A port that looked free can still be taken by the time PostgreSQL binds it (loopback
+  // clients use this range for their own ends too): try a few.
+  let cluster: any;
+  for (let attempt = 0; ; attempt++) {
+    port = await freePortFrom(ports.postgres + Math.floor(Math.random() * 40));
+    try {
+      cluster = await open();
+      break;
+    } catch (e) {
+      if (attempt >= 4) throw e;
+    }
+  }
   await cluster.ensureDatabase('holdfast');
   const ownerUrl: string = cluster.url('holdfast', 'owner');
   const env = { ...process.env, DATABASE_URL: ownerUrl };
@@ -71,7 +82,15 @@ export async function startFaultCluster(
     adminUrl,
     crash: () => cluster.stop('immediate'),
     restart: async () => {
-      await open();
+      for (let attempt = 0; ; attempt++) {
+        try {
+          await open();
+          return;
+        } catch (e) {
+          if (attempt >= 20) throw e;
+          await new Promise((r) => setTimeout(r, 50));
+        }
+      }
     },
     async startServer(extra = {}) {
       const serverPort: number = await freePortFrom(ports.servers + servers.length * 5);
