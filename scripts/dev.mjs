@@ -18,11 +18,11 @@ const cluster = await startCluster({
 });
 await cluster.ensureDatabase('holdfast');
 await buildAll(projectDir);
-const databaseUrl = cluster.url('holdfast');
-await migrateAndSeed(projectDir, databaseUrl);
+// Migrations and seeds run as the owner role; the server signs in as the app role.
+await migrateAndSeed(projectDir, cluster.url('holdfast', 'owner'));
 const env = {
   ...process.env,
-  DATABASE_URL: databaseUrl,
+  DATABASE_URL: cluster.url('holdfast', 'app'),
   PORT: '3000',
   S3_EMBEDDED: '1',
   MAIL_EMBEDDED: '1',

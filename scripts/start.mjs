@@ -5,7 +5,8 @@ import { ensureNpmDependencies } from './lib/deps.mjs';
 import { ensureDejaVu } from './lib/apt.mjs';
 import { startCluster, portFree, freePortFrom } from './lib/postgres.mjs';
 import { buildAll } from './lib/build.mjs';
-import { migrateAndSeed, startAppServer, stopChild } from './lib/app-server.mjs';
+import { migrateAndSeed, startAppServer, tryStartAppServer, stopChild } from './lib/app-server.mjs';
+import { supervise } from './lib/supervise.mjs';
 import { step, fail } from './lib/log.mjs';
 
 const projectDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
@@ -25,13 +26,13 @@ if (!(await portFree(port))) {
 await ensureNpmDependencies(projectDir);
 await ensureDejaVu();
 const cluster = await startCluster({ projectDir, name: 'pg', port: pgPort, durable: true });
-let server = null;
+let supervisor = null;
 let stopping = false;
 const shutdown = async (signal) => {
   if (stopping) return;
   stopping = true;
   step(`${signal}: stopping the server and PostgreSQL…`);
-  await stopChild(server?.child);
+  await stopChild(supervisor?.stop()?.child);
   await cluster.stop();
   step('stopped cleanly');
   process.exit(0);
@@ -41,12 +42,12 @@ process.on('SIGTERM', () => shutdown('SIGTERM'));
 
 await cluster.ensureDatabase('holdfast');
 await buildAll(projectDir);
-const databaseUrl = cluster.url('holdfast');
-await migrateAndSeed(projectDir, databaseUrl);
+// Migrations and seeds run as the owner role; the server signs in as the app role.
+await migrateAndSeed(projectDir, cluster.url('holdfast', 'owner'));
 
 step(`starting Holdfast on http://127.0.0.1:${port} …`);
-server = await startAppServer(projectDir, {
-  DATABASE_URL: databaseUrl,
+const serverEnv = {
+  DATABASE_URL: cluster.url('holdfast', 'app'),
   PORT: String(port),
   HOST: '127.0.0.1',
   PUBLIC_URL: process.env.PUBLIC_URL ?? `http://127.0.0.1:${port}`,
@@ -57,7 +58,11 @@ server = await startAppServer(projectDir, {
   SMTP_PORT: process.env.SMTP_PORT ?? String(await freePortFrom(1025)),
   MAILDEV_WEB_PORT: process.env.MAILDEV_WEB_PORT ?? String(await freePortFrom(1080)),
   NODE_ENV: 'production',
-});
+};
+const server = await startAppServer(projectDir, serverEnv);
+// From here on a dying server is restarted with back-off; PostgreSQL stays up throughout.
+supervisor = supervise(() => tryStartAppServer(projectDir, serverEnv));
+supervisor.adopt(server);
 step(
   `ready in ${((Date.now() - started) / 1000).toFixed(1)} s: http://127.0.0.1:${port}  (API under /api, docs at /api/docs)`,
 );
@@ -65,8 +70,3 @@ step(
   'demo sign-ins (demo only): engineer@holdfast.test, checker@holdfast.test, viewer@holdfast.test, admin@holdfast.test — password holdfast-demo',
 );
 step('press Ctrl-C to stop');
-server.child.on('exit', async (code) => {
-  if (stopping) return;
-  await cluster.stop();
-  fail(`the server stopped unexpectedly (exit ${code})`);
-});

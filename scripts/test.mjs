@@ -28,13 +28,15 @@ const cluster = await startCluster({
 await cluster.ensureDatabase('holdfast_test', { fresh: true });
 await cluster.ensureDatabase('holdfast_e2e', { fresh: true });
 await buildAll(projectDir);
-await migrateAndSeed(projectDir, cluster.url('holdfast_e2e'));
+// As in `npm start`: migrate and seed as the owner role, serve as the app role. The suites get
+// the superuser (DATABASE_URL), since they create a database per worker and reset tables.
+await migrateAndSeed(projectDir, cluster.url('holdfast_e2e', 'owner'));
 
 const e2ePort = await freePortFrom(3900);
 const app = await startAppServer(
   projectDir,
   {
-    DATABASE_URL: cluster.url('holdfast_e2e'),
+    DATABASE_URL: cluster.url('holdfast_e2e', 'app'),
     PORT: String(e2ePort),
     HOST: '127.0.0.1',
     PUBLIC_URL: `http://127.0.0.1:${e2ePort}`,

@@ -12,7 +12,10 @@ export interface DatabaseOptions {
   max?: number;
   /** Milliseconds to wait for a connection before failing (health checks use a short one). */
   connectionTimeoutMillis?: number;
-  /** Told about errors on idle pooled connections (they are otherwise ignored). */
+  /**
+   * Told about errors on pooled connections, idle or checked out (they are otherwise ignored).
+   * The connection is discarded either way; the next query opens a new one.
+   */
   onIdleError?: (error: Error) => void;
 }
 
@@ -27,9 +30,15 @@ export function createPool(options: DatabaseOptions): pg.Pool {
     max: options.max ?? 10,
     connectionTimeoutMillis: options.connectionTimeoutMillis ?? 5000,
   });
-  // An idle connection dropped by the server (restart, admin command) must not crash the
-  // process; the pool discards it and the next query opens a new one.
+  // A connection dropped by the server (restart, crash, admin command) emits 'error' on its
+  // client. pg-pool listens only while the client is idle; a client checked out for a
+  // transaction, or between two queries, has no listener, and an unhandled 'error' event ends
+  // the process. Every client therefore gets its own listener for its whole life. The failed
+  // query still rejects (and answers 503); pg-pool drops the dead client on release.
   pool.on('error', (error) => options.onIdleError?.(error));
+  pool.on('connect', (client) => {
+    client.on('error', (error) => options.onIdleError?.(error));
+  });
   return pool;
 }
 

@@ -13,6 +13,7 @@ export { demoUsers, DEMO_PASSWORD, type DemoUser } from './demo-users.js';
 export { seedDemoUsers } from './seed-demo-users.js';
 export {
   isPostgresError,
+  isConnectionError,
   PG_UNIQUE_VIOLATION,
   PG_FOREIGN_KEY_VIOLATION,
   PG_CHECK_VIOLATION,

@@ -3,12 +3,18 @@ import path from 'node:path';
 import { run } from './run.mjs';
 import { step, fail } from './log.mjs';
 
+/**
+ * Migrate, install the job queues and seed, signed in as the owner role (`cluster.url(db,
+ * 'owner')`); the server itself then runs as the app role (see db-roles.mjs).
+ */
 export async function migrateAndSeed(projectDir, databaseUrl) {
   const cli = path.join(projectDir, 'db', 'dist', 'src', 'cli.js');
+  const queues = path.join(projectDir, 'server', 'dist', 'outbox', 'queue-install.js');
   const env = { ...process.env, DATABASE_URL: databaseUrl };
   try {
     step('migrating the database…');
     await run('node', [cli, 'migrate'], { cwd: projectDir, env });
+    await run('node', [queues], { cwd: projectDir, env });
     step('seeding the demo scenario…');
     await run('node', [cli, 'seed'], { cwd: projectDir, env });
   } catch (e) {
@@ -23,8 +29,21 @@ export async function migrateAndSeed(projectDir, databaseUrl) {
  */
 export const SERVER_NODE_FLAGS = ['--max-semi-space-size=64'];
 
-/** Start the built server as a child and wait until /api/health answers 200. */
-export async function startAppServer(projectDir, env, { timeoutMs = 60000, inherit = true } = {}) {
+/** Start the built server as a child and wait until /api/health answers 200; exits on failure. */
+export async function startAppServer(projectDir, env, options = {}) {
+  try {
+    return await tryStartAppServer(projectDir, env, options);
+  } catch (e) {
+    fail(e.message);
+  }
+}
+
+/** The same, but a failed start rejects (the supervisor retries it) instead of exiting. */
+export async function tryStartAppServer(
+  projectDir,
+  env,
+  { timeoutMs = 60000, inherit = true } = {},
+) {
   const main = path.join(projectDir, 'server', 'dist', 'main.js');
   const child = spawn('node', [...SERVER_NODE_FLAGS, main], {
     cwd: projectDir,
@@ -35,11 +54,12 @@ export async function startAppServer(projectDir, env, { timeoutMs = 60000, inher
   child.stdout?.on('data', (d) => (output = (output + d).slice(-8000)));
   child.stderr?.on('data', (d) => (output = (output + d).slice(-8000)));
   let exited = null;
-  child.on('exit', (code) => (exited = code));
+  child.on('exit', (code, signal) => (exited = code ?? signal));
   const url = `http://127.0.0.1:${env.PORT}`;
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
-    if (exited !== null) fail(`the server stopped during start-up (exit ${exited})\n${output}`);
+    if (exited !== null)
+      throw new Error(`the server stopped during start-up (exit ${exited})\n${output}`);
     try {
       const res = await fetch(`${url}/api/health`);
       if (res.ok) return { child, url, output: () => output };
@@ -49,7 +69,9 @@ export async function startAppServer(projectDir, env, { timeoutMs = 60000, inher
     await new Promise((r) => setTimeout(r, 250));
   }
   child.kill('SIGTERM');
-  fail(`the server did not answer ${url}/api/health within ${timeoutMs / 1000} s\n${output}`);
+  throw new Error(
+    `the server did not answer ${url}/api/health within ${timeoutMs / 1000} s\n${output}`,
+  );
 }
 
 export function stopChild(child) {

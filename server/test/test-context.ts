@@ -203,9 +203,14 @@ export async function createTestContext(options: TestContextOptions = {}): Promi
         select tablename from pg_tables where schemaname = 'public'`.execute(db);
       const names = rows.map((r) => r.tablename).filter((t) => !preservedTables.has(t));
       if (names.length) {
-        await sql`truncate table ${sql.join(names.map((n) => sql.id(n)))} restart identity cascade`.execute(
-          db,
-        );
+        // Revisions and the audit trail refuse TRUNCATE (a trigger); tests sign in as the
+        // cluster's superuser, which alone may switch triggers off for this transaction.
+        await db.transaction().execute(async (tx) => {
+          await sql`set local session_replication_role = replica`.execute(tx);
+          await sql`truncate table ${sql.join(names.map((n) => sql.id(n)))} restart identity cascade`.execute(
+            tx,
+          );
+        });
       }
       const snapshot = demoSnapshots.get(url);
       if (!snapshot) {

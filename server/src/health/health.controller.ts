@@ -20,6 +20,7 @@ export class HealthController {
   async check(@Res({ passthrough: true }) res: Response): Promise<Health> {
     const up = await this.databaseAnswers();
     res.status(up ? 200 : 503).setHeader('Cache-Control', 'no-store');
+    if (!up) res.setHeader('Retry-After', '2');
     return up
       ? { status: 'ok', database: 'ok', version: serverVersion }
       : { status: 'degraded', database: 'down', version: serverVersion };

@@ -1,6 +1,8 @@
 import { Injectable, Logger, type OnModuleDestroy, type OnModuleInit } from '@nestjs/common';
 import { CompiledQuery, type Kysely } from 'kysely';
 import PgBoss from 'pg-boss';
+import type pg from 'pg';
+import { createPool } from '@holdfast/db';
 import { AppConfig } from '../config/app-config.js';
 import { loadMailSettings } from '../mail/mail-settings.js';
 
@@ -15,13 +17,20 @@ export class JobQueue implements OnModuleInit, OnModuleDestroy {
   private readonly logger = new Logger('JobQueue');
   private readonly settings = loadMailSettings();
   readonly boss: PgBoss;
+  private readonly pool: pg.Pool;
 
   constructor(config: AppConfig) {
-    this.boss = new PgBoss({
+    // pg-boss runs on a pool of ours, so its connections get the same error handling as the
+    // application's (a lost connection is logged, never an unhandled 'error' event).
+    this.pool = createPool({
       connectionString: config.settings.DATABASE_URL,
-      schema: 'pgboss',
       max: 3,
+      onIdleError: (e) => this.logger.warn(`job queue connection lost: ${e.message}`),
     });
+    const db = {
+      executeSql: (text: string, values?: unknown[]) => this.pool.query(text, values),
+    };
+    this.boss = new PgBoss({ db, schema: 'pgboss' });
     this.boss.on('error', (e: Error) => this.logger.error(`pg-boss: ${e.message}`));
   }
 
@@ -37,6 +46,7 @@ export class JobQueue implements OnModuleInit, OnModuleDestroy {
 
   async onModuleDestroy(): Promise<void> {
     await this.boss.stop({ graceful: true, wait: true, timeout: 5000 });
+    await this.pool.end();
   }
 
   /** Enqueue inside `trx` (any Kysely bound to the open transaction). */

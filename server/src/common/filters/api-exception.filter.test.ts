@@ -60,6 +60,36 @@ describe('ApiExceptionFilter', () => {
     expect(other.body.error.message).not.toMatch(/division/);
   });
 
+  it('answers 503 when PostgreSQL cannot be reached (refused, terminated, shutting down)', async () => {
+    const net = await import('node:net');
+    const closed = net.createServer();
+    const port = await new Promise<number>((r) =>
+      closed.listen(0, '127.0.0.1', () => r((closed.address() as { port: number }).port)),
+    );
+    await new Promise((r) => closed.close(r));
+    const dead = createDatabase({
+      connectionString: `postgres://x:y@127.0.0.1:${port}/none`,
+      max: 1,
+    });
+    const refused = await sql`select 1`.execute(dead).catch((e: unknown) => e);
+    await dead.destroy();
+    const shutdown = Object.assign(
+      new Error('terminating connection due to administrator command'),
+      {
+        code: '57P01',
+        severity: 'FATAL',
+      },
+    );
+    for (const e of [refused, new Error('Connection terminated unexpectedly'), shutdown]) {
+      const out = answer(e);
+      expect(out.status).toBe(503);
+      expect(out.body).toEqual({
+        error: { code: 'service_unavailable', message: expect.stringMatching(/database/) },
+      });
+    }
+    expect(answer(new Error('Connection settings are odd')).status).toBe(500);
+  });
+
   it('turns a ZodError into 400 with field paths', () => {
     const result = z.object({ a: z.number() }).strict().safeParse({ a: 'x', b: 1 });
     const out = answer(result.error);

@@ -11,7 +11,7 @@ import { toFieldIssues, type ApiError, type ErrorCode } from '@holdfast/shared';
 import type { Request, Response } from 'express';
 import { ZodError } from 'zod';
 import { ApiException } from '../errors/api-exception.js';
-import { mapPostgresError } from '../errors/postgres-errors.js';
+import { DATABASE_RETRY_AFTER_SECONDS, mapPostgresError } from '../errors/postgres-errors.js';
 
 const codeByStatus: Record<number, ErrorCode> = {
   400: 'validation_failed',
@@ -52,13 +52,17 @@ export class ApiExceptionFilter implements ExceptionFilter {
     const res = http.getResponse<Response>();
     const req = http.getRequest<Request>();
     const { status, body } = this.toResponse(exception, req);
-    if (status >= 500) {
+    if (status === 503) {
+      // A dependency is down (database, storage): expected during an outage, so no stack.
+      this.logger.warn(`${req.method} ${req.originalUrl}: ${body.error.message}`);
+    } else if (status >= 500) {
       this.logger.error(
         `${req.method} ${req.originalUrl} failed: ${exception instanceof Error ? exception.message : String(exception)}`,
         exception instanceof Error ? exception.stack : undefined,
       );
     }
     if (res.headersSent) return;
+    if (status === 503) res.setHeader('Retry-After', String(DATABASE_RETRY_AFTER_SECONDS));
     res.status(status).json(body);
   }
 

@@ -1,0 +1,251 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+// @ts-expect-error plain ESM helper without type declarations
+import { freePortFrom } from '../lib/postgres.mjs';
+import {
+  call,
+  projectDir,
+  signIn,
+  startFaultCluster,
+  type FaultCluster,
+  type Instance,
+} from './support/fault-cluster.js';
+import { startSmtpCapture, type SmtpCapture } from './support/smtp-capture.js';
+
+/**
+ * Faults on a real server process against a PostgreSQL cluster of its own (see
+ * support/fault-cluster.ts), a real SMTP capture and an S3 fake outside the server, so each can
+ * be taken away and brought back. Timings are measured from outside, as a client would see them.
+ *
+ * Scaled down to keep `npm test` short: the mail relay is down for SMTP_OUTAGE_MS (5 s; override
+ * with HOLDFAST_FAULT_SMTP_OUTAGE_MS) with a first retry delay of 1 s, where production has 10 s;
+ * the ratio of outage to retry delay is that of a one-minute outage.
+ */
+const SMTP_OUTAGE_MS = Number(process.env.HOLDFAST_FAULT_SMTP_OUTAGE_MS ?? 5000);
+const PG_ROUNDS = 5;
+const RECOVERY_LIMIT_MS = 2000;
+const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
+
+async function startS3(port: number, directory: string) {
+  const mod = await import(path.join(projectDir, 'server/dist/storage/local-s3.js'));
+  return mod.startLocalS3({ directory, bucket: 'holdfast-faults', port }) as Promise<{
+    close(): Promise<void>;
+  }>;
+}
+
+describe('faults on a running server', () => {
+  let fc: FaultCluster;
+  let srv: Instance;
+  let smtp: SmtpCapture;
+  let s3: { close(): Promise<void> };
+  let s3Port: number;
+  const s3Dir = mkdtempSync(path.join(tmpdir(), 'holdfast-faults-s3-'));
+  let engineer: string;
+  let positionId: string;
+
+  beforeAll(async () => {
+    smtp = await startSmtpCapture();
+    s3Port = await freePortFrom(4750);
+    s3 = await startS3(s3Port, s3Dir);
+    fc = await startFaultCluster('faults', { postgres: 54610, servers: 3960 });
+    srv = await fc.startServer({
+      SMTP_HOST: '127.0.0.1',
+      SMTP_PORT: String(smtp.port),
+      MAIL_RETRY_DELAY_SECONDS: '1',
+      MAIL_RETRY_LIMIT: '30',
+      OUTBOX_POLL_SECONDS: '0.5',
+      S3_EMBEDDED: '0',
+      S3_ENDPOINT: `http://127.0.0.1:${s3Port}`,
+      S3_BUCKET: 'holdfast-faults',
+      S3_TIMEOUT_MS: '2000',
+    });
+    engineer = (await signIn(srv.url, 'engineer')).token;
+    const site = await call(srv.url, 'POST', '/api/register/sites', {
+      token: engineer,
+      body: { code: 'FLT', name: 'Fault works' },
+    });
+    const machine = await call(srv.url, 'POST', '/api/register/machines', {
+      token: engineer,
+      body: { siteId: site.body.id, tag: 'CR-01', name: 'Ladle crane', kind: 'crane' },
+    });
+    const position = await call(srv.url, 'POST', '/api/register/positions', {
+      token: engineer,
+      body: {
+        machineId: machine.body.id,
+        tag: 'MH-B1',
+        description: 'Main hoist brake 1',
+        motion: 'hoist',
+      },
+    });
+    expect(position.status, JSON.stringify(position.body)).toBe(201);
+    positionId = position.body.id;
+  }, 150000);
+
+  afterAll(async () => {
+    await fc?.dispose();
+    await smtp?.stop().catch(() => undefined);
+    await s3?.close().catch(() => undefined);
+  });
+
+  it(`stays up through ${PG_ROUNDS} PostgreSQL crashes under a write load, loses no acknowledged write and is back within 2 s`, async () => {
+    const acked: string[] = [];
+    const okAt: number[] = [];
+    const failures: { status: number; code?: string; retryAfter: string | null }[] = [];
+    let n = 0;
+    let running = true;
+    const writer = async () => {
+      while (running) {
+        const code = `W${(n++).toString(36).toUpperCase().padStart(4, '0')}`;
+        try {
+          const res = await call(srv.url, 'POST', '/api/register/sites', {
+            token: engineer,
+            body: { code, name: `Load site ${code}` },
+          });
+          if (res.status === 201) {
+            acked.push(code);
+            okAt.push(Date.now());
+            continue;
+          }
+          failures.push({
+            status: res.status,
+            code: res.body?.error?.code,
+            retryAfter: res.headers.get('retry-after'),
+          });
+        } catch {
+          failures.push({ status: 0, retryAfter: null }); // no answer at all: the server is gone
+        }
+        await sleep(25);
+      }
+    };
+    const alive = () => srv.child.exitCode === null && srv.child.signalCode === null;
+    const writers = Array.from({ length: 4 }, writer);
+    const recoveries: number[] = [];
+    for (let round = 0; round < PG_ROUNDS; round++) {
+      // A few writes acknowledged before each crash (the machine may be slow: wait for them).
+      const before = acked.length;
+      const waitFrom = Date.now();
+      while (acked.length < before + 3 && Date.now() - waitFrom < 15000 && alive()) await sleep(10);
+      expect(alive(), `the server died:\n${srv.output()}`).toBe(true);
+      expect(acked.length, 'writes go through before the crash').toBeGreaterThanOrEqual(before + 3);
+      await fc.crash();
+      await sleep(700);
+      await fc.restart();
+      const upAt = Date.now();
+      const deadline = upAt + 15000;
+      while (!okAt.some((t) => t > upAt) && Date.now() < deadline) await sleep(5);
+      recoveries.push(Math.min(...okAt.filter((t) => t > upAt)) - upAt);
+    }
+    running = false;
+    await Promise.all(writers);
+    console.log(
+      `PostgreSQL crash test: ${acked.length} writes acknowledged, ${failures.length} refused; ` +
+        `first acknowledged write after restart: ${recoveries.map((r) => `${r} ms`).join(', ')}`,
+    );
+
+    expect(srv.child.exitCode, srv.output()).toBeNull();
+    expect(srv.child.signalCode).toBeNull();
+    expect(failures.length, 'the outages were seen').toBeGreaterThan(0);
+    for (const f of failures)
+      expect(f).toEqual({ status: 503, code: 'service_unavailable', retryAfter: '2' });
+    for (const r of recoveries) expect(r).toBeLessThan(RECOVERY_LIMIT_MS);
+    const stored = await fc.query<{ code: string }>(`select code from sites where code = any($1)`, [
+      acked,
+    ]);
+    expect(new Set(stored.map((r) => r.code))).toEqual(new Set(acked));
+    expect((await call(srv.url, 'GET', '/api/health')).status).toBe(200);
+  }, 120000);
+
+  async function submittedSheet(title: string) {
+    const sheet = await call(srv.url, 'POST', '/api/sheets', {
+      token: engineer,
+      body: { title, positionId, sheetType: 'hoist-shoe-brake' },
+    });
+    expect(sheet.status, JSON.stringify(sheet.body)).toBe(201);
+    const id = sheet.body.revisions[0].id as string;
+    const rev = await call(srv.url, 'GET', `/api/revisions/${id}`, { token: engineer });
+    const sub = await call(srv.url, 'POST', `/api/revisions/${id}/submit`, {
+      token: engineer,
+      body: { rowVersion: rev.body.rowVersion, justification: 'Fault test.' },
+    });
+    expect(sub.status, JSON.stringify(sub.body)).toBe(200);
+    return { documentNumber: sheet.body.documentNumber as string, revisionId: id };
+  }
+
+  it('delivers every mail exactly once after the mail relay was down', async () => {
+    await smtp.stop();
+    const sheets = [];
+    for (let i = 0; i < 4; i++) sheets.push(await submittedSheet(`Mail outage ${i}`));
+    await sleep(SMTP_OUTAGE_MS);
+    const tried = await fc.query<{ attempts: number; sent_at: Date | null }>(
+      `select attempts, sent_at from outbox`,
+    );
+    expect(tried.length).toBe(sheets.length);
+    for (const row of tried) {
+      expect(row.sent_at).toBeNull();
+      expect(row.attempts, 'delivery was tried during the outage').toBeGreaterThanOrEqual(1);
+    }
+    const back = Date.now();
+    await smtp.start();
+    const found = (doc: string) => smtp.mails.filter((m) => m.raw.includes(doc));
+    while (!sheets.every((s) => found(s.documentNumber).length > 0) && Date.now() - back < 40000)
+      await sleep(100);
+    const deliveredIn = Date.now() - back;
+    await sleep(3000); // time for a duplicate to show up, if there were one
+    console.log(
+      `SMTP outage test: ${SMTP_OUTAGE_MS} ms down, all mail delivered ${deliveredIn} ms after it came back`,
+    );
+    for (const s of sheets) expect(found(s.documentNumber), s.documentNumber).toHaveLength(1);
+    expect(smtp.mails).toHaveLength(sheets.length);
+    const rows = await fc.query<{ n: number }>(
+      `select count(*)::int as n from outbox where sent_at is null`,
+    );
+    expect(rows[0]!.n).toBe(0);
+  }, 90000);
+
+  it('answers 503 while object storage is down and keeps no half record', async () => {
+    const draft = await call(srv.url, 'POST', '/api/sheets', {
+      token: engineer,
+      body: { title: 'Storage outage draft', positionId, sheetType: 'hoist-shoe-brake' },
+    });
+    const draftId = draft.body.revisions[0].id as string;
+    const upload = async () => {
+      const form = new FormData();
+      const pdf =
+        '%PDF-1.4\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n';
+      form.append('file', new Blob([pdf]), 'datasheet.pdf');
+      const res = await fetch(`${srv.url}/api/revisions/${draftId}/attachments`, {
+        method: 'POST',
+        headers: { authorization: `Bearer ${engineer}` },
+        body: form,
+      });
+      return {
+        status: res.status,
+        body: await res.json(),
+        retryAfter: res.headers.get('retry-after'),
+      };
+    };
+    const count = async () =>
+      (
+        await fc.query<{ a: number; e: number }>(
+          `select (select count(*)::int from attachments where revision_id = $1) as a,
+                  (select count(*)::int from audit_events where entity = 'attachment') as e`,
+          [draftId],
+        )
+      )[0]!;
+    const before = await count();
+    await s3.close();
+    const down = await upload();
+    expect(down.status).toBe(503);
+    expect(down.body).toEqual({
+      error: { code: 'service_unavailable', message: expect.any(String) },
+    });
+    expect(down.retryAfter).toBe('2');
+    expect(await count()).toEqual(before);
+    s3 = await startS3(s3Port, s3Dir);
+    const up = await upload();
+    expect(up.status, JSON.stringify(up.body)).toBe(201);
+    expect((await count()).a).toBe(before.a + 1);
+  }, 60000);
+});

@@ -1,0 +1,130 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import {
+  call,
+  signIn,
+  startFaultCluster,
+  type FaultCluster,
+  type Instance,
+} from './support/fault-cluster.js';
+import { startSmtpCapture, type SmtpCapture } from './support/smtp-capture.js';
+
+const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
+
+/**
+ * Two server processes on one database, as behind a load balancer: nothing a request needs may
+ * live in one process's memory, background work must not run twice, and races between the
+ * processes must be settled by PostgreSQL.
+ */
+describe('two server processes on one database', () => {
+  let fc: FaultCluster;
+  let a: Instance;
+  let b: Instance;
+  let smtp: SmtpCapture;
+  let engineer: string;
+  let positionId: string;
+
+  beforeAll(async () => {
+    smtp = await startSmtpCapture();
+    fc = await startFaultCluster('twins', { postgres: 54660, servers: 3930 });
+    const env = (label: string) => ({
+      SMTP_HOST: '127.0.0.1',
+      SMTP_PORT: String(smtp.port),
+      MAIL_RETRY_DELAY_SECONDS: '1',
+      OUTBOX_POLL_SECONDS: '0.5',
+      DATA_DIR: mkdtempSync(path.join(tmpdir(), `holdfast-twin-${label}-`)),
+    });
+    [a, b] = await Promise.all([fc.startServer(env('a')), fc.startServer(env('b'))]);
+    engineer = (await signIn(a.url, 'engineer')).token;
+    const site = await call(b.url, 'POST', '/api/register/sites', {
+      token: engineer,
+      body: { code: 'TWN', name: 'Twin works' },
+    });
+    const machine = await call(a.url, 'POST', '/api/register/machines', {
+      token: engineer,
+      body: { siteId: site.body.id, tag: 'CR-01', name: 'Ladle crane', kind: 'crane' },
+    });
+    const position = await call(b.url, 'POST', '/api/register/positions', {
+      token: engineer,
+      body: {
+        machineId: machine.body.id,
+        tag: 'MH-B1',
+        description: 'Main hoist brake 1',
+        motion: 'hoist',
+      },
+    });
+    expect(position.status, JSON.stringify(position.body)).toBe(201);
+    positionId = position.body.id;
+  }, 150000);
+
+  afterAll(async () => {
+    await fc?.dispose();
+    await smtp?.stop().catch(() => undefined);
+  });
+
+  async function submittedOn(server: Instance, title: string) {
+    const sheet = await call(server.url, 'POST', '/api/sheets', {
+      token: engineer,
+      body: { title, positionId, sheetType: 'hoist-shoe-brake' },
+    });
+    expect(sheet.status, JSON.stringify(sheet.body)).toBe(201);
+    const id = sheet.body.revisions[0].id as string;
+    const rev = await call(server.url, 'GET', `/api/revisions/${id}`, { token: engineer });
+    const sub = await call(server.url, 'POST', `/api/revisions/${id}/submit`, {
+      token: engineer,
+      body: { rowVersion: rev.body.rowVersion, justification: 'Two-process test.' },
+    });
+    expect(sub.status, JSON.stringify(sub.body)).toBe(200);
+    return { documentNumber: sheet.body.documentNumber as string, revisionId: id };
+  }
+
+  it('signs in on one and refreshes on the other; either accepts the access token', async () => {
+    const session = await signIn(a.url, 'viewer');
+    expect((await call(b.url, 'GET', '/api/auth/me', { token: session.token })).status).toBe(200);
+    const refreshed = await call(b.url, 'POST', '/api/auth/refresh', { cookie: session.cookie });
+    expect(refreshed.status, JSON.stringify(refreshed.body)).toBe(200);
+    const next = refreshed.body.accessToken as string;
+    expect((await call(a.url, 'GET', '/api/auth/me', { token: next })).status).toBe(200);
+    const cookie = (refreshed.headers.get('set-cookie') ?? '').split(';')[0] ?? '';
+    expect((await call(a.url, 'POST', '/api/auth/refresh', { cookie })).status).toBe(200);
+  });
+
+  it('runs a mail job once although both processes work the queue', async () => {
+    const first = smtp.mails.length;
+    const sheets = [await submittedOn(a, 'Mail once A'), await submittedOn(b, 'Mail once B')];
+    const found = (doc: string) => smtp.mails.filter((m) => m.raw.includes(doc));
+    const started = Date.now();
+    while (!sheets.every((s) => found(s.documentNumber).length > 0) && Date.now() - started < 20000)
+      await sleep(100);
+    await sleep(3000); // both workers poll every 0.5 s: a second delivery would be here by now
+    for (const s of sheets) expect(found(s.documentNumber), s.documentNumber).toHaveLength(1);
+    expect(smtp.mails.length - first).toBe(sheets.length);
+  });
+
+  it('gives one winner when two checkers approve the same revision on different processes', async () => {
+    const { revisionId } = await submittedOn(a, 'Approval race');
+    const [checker, checker2] = await Promise.all([
+      signIn(a.url, 'checker'),
+      signIn(b.url, 'checker2'),
+    ]);
+    const rev = await call(a.url, 'GET', `/api/revisions/${revisionId}`, { token: checker.token });
+    const body = { rowVersion: rev.body.rowVersion };
+    const results = await Promise.all([
+      call(a.url, 'POST', `/api/revisions/${revisionId}/approve`, { token: checker.token, body }),
+      call(b.url, 'POST', `/api/revisions/${revisionId}/approve`, { token: checker2.token, body }),
+    ]);
+    const statuses = results.map((r) => r.status).sort();
+    expect(statuses).toEqual([200, 409]);
+    const loser = results.find((r) => r.status === 409)!;
+    expect(loser.body.error.code).toBe('conflict');
+    const rows = await fc.query<{ state: string; approved: number }>(
+      `select state, (select count(*)::int from audit_events
+                      where entity_id = $1::text and action = 'revision.approved') as approved
+       from revisions where id::text = $1::text`,
+      [revisionId],
+    );
+    expect(rows[0]).toEqual({ state: 'approved', approved: 1 });
+  });
+});
