@@ -5,6 +5,7 @@ import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
 import { AppModule } from './app.module.js';
 import type { AppSettings } from './config/env.js';
+import { JSON_BODY_LIMIT_BYTES } from './http/body-limits.js';
 import { setupOpenApi } from './http/openapi.js';
 import { securityHeaders } from './http/security.js';
 import { serveUi } from './http/spa.js';
@@ -33,7 +34,7 @@ export async function createApp(settings: AppSettings): Promise<CreatedApp> {
       customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : 'info'),
     }),
   );
-  app.useBodyParser('json', { limit: '1mb' });
+  app.useBodyParser('json', { limit: JSON_BODY_LIMIT_BYTES });
   app.use(cookieParser());
   app.setGlobalPrefix('api');
   setupOpenApi(app);

@@ -1,4 +1,5 @@
 export * from './api-error.js';
+export * from './text/plain-text.js';
 export * from './users/user.schema.js';
 export * from './auth/auth.schema.js';
 export * from './sheets/person-ref.schema.js';
