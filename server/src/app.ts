@@ -4,6 +4,7 @@ import cookieParser from 'cookie-parser';
 import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
 import { AppModule } from './app.module.js';
+import { AppConfig } from './config/app-config.js';
 import type { AppSettings } from './config/env.js';
 import { JSON_BODY_LIMIT_BYTES } from './http/body-limits.js';
 import { setupOpenApi } from './http/openapi.js';
@@ -26,6 +27,8 @@ export async function createApp(settings: AppSettings): Promise<CreatedApp> {
     logger: new PinoLoggerService(logger),
   });
   app.disable('x-powered-by');
+  // Behind a reverse proxy, req.ip (sign-in throttling, logs) must come from X-Forwarded-For.
+  app.set('trust proxy', new AppConfig(settings).trustProxy);
   app.use(securityHeaders());
   app.use(
     pinoHttp({
@@ -37,7 +40,7 @@ export async function createApp(settings: AppSettings): Promise<CreatedApp> {
   app.useBodyParser('json', { limit: JSON_BODY_LIMIT_BYTES });
   app.use(cookieParser());
   app.setGlobalPrefix('api');
-  setupOpenApi(app);
+  setupOpenApi(app, settings);
   const uiServed = serveUi(app, settings.UI_DIST);
   return { app, logger, uiServed };
 }

@@ -16,7 +16,7 @@ export const userSchema = z.object({
 });
 export type User = z.infer<typeof userSchema>;
 
-const password = z.string().min(12, 'at least 12 characters').max(200);
+const password = z.string().min(12, 'at least 12 characters').max(200, 'at most 200 characters');
 
 export const createUserSchema = z
   .object({
