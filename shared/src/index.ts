@@ -13,3 +13,4 @@ export * from './criteria/criteria.schema.js';
 export * from './work-queue/work-queue.schema.js';
 export * from './verify/verify.schema.js';
 export * from './revisions/canonical-json.js';
+export * from './mail/failed-mail.schema.js';
