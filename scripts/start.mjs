@@ -40,6 +40,10 @@ const shutdown = async (signal) => {
 process.on('SIGINT', () => shutdown('SIGINT'));
 process.on('SIGTERM', () => shutdown('SIGTERM'));
 
+// `npm start` is the demo: it seeds the demo users and plant unless HOLDFAST_DEMO=0.
+process.env.HOLDFAST_DEMO ??= '1';
+const demo = !['0', 'false', 'no'].includes(process.env.HOLDFAST_DEMO.trim().toLowerCase());
+
 await cluster.ensureDatabase('holdfast');
 await buildAll(projectDir);
 // Migrations and seeds run as the owner role; the server signs in as the app role.
@@ -66,7 +70,11 @@ supervisor.adopt(server);
 step(
   `ready in ${((Date.now() - started) / 1000).toFixed(1)} s: http://127.0.0.1:${port}  (API under /api, docs at /api/docs)`,
 );
-step(
-  'demo sign-ins (demo only): engineer@holdfast.test, checker@holdfast.test, viewer@holdfast.test, admin@holdfast.test — password holdfast-demo',
-);
+if (demo) {
+  step(
+    'demo sign-ins (demo only): engineer@holdfast.test, checker@holdfast.test, viewer@holdfast.test, admin@holdfast.test — password holdfast-demo',
+  );
+} else {
+  step('no demo (HOLDFAST_DEMO=0): create the first admin with `npm run create-admin`');
+}
 step('press Ctrl-C to stop');

@@ -1,4 +1,5 @@
 import type { ColumnType, Generated, Insertable, Selectable, Updateable } from 'kysely';
+import type { AccountTables } from './account-tables.js';
 import type { SheetTables } from './sheet-tables.js';
 import type { ReviewTables } from './review-tables.js';
 
@@ -33,6 +34,8 @@ export interface UsersTable {
   passwordHash: string;
   active: Generated<boolean>;
   unitSystem: Generated<UnitSystemValue>;
+  /** Raised by sign-out and password changes; access tokens of an older version are refused. */
+  sessionVersion: Generated<number>;
   createdAt: CreatedAt;
   updatedAt: UpdatedAt;
 }
@@ -54,7 +57,7 @@ export interface FoundationTables {
   refreshTokens: RefreshTokensTable;
 }
 
-export interface DB extends FoundationTables, SheetTables, ReviewTables {}
+export interface DB extends FoundationTables, SheetTables, ReviewTables, AccountTables {}
 
 export type UserRow = Selectable<UsersTable>;
 export type NewUserRow = Insertable<UsersTable>;

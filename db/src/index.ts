@@ -20,3 +20,7 @@ export {
 } from './pg-errors.js';
 export type * from './sheet-tables.js';
 export type * from './review-tables.js';
+export type * from './account-tables.js';
+export { checkPasswordStrength, type PasswordVerdict } from './password-strength.js';
+export { demoRequested } from './demo-flag.js';
+export { createAdmin, type NewAdmin } from './create-admin.js';

@@ -3,6 +3,7 @@ import path from 'node:path';
 import { pathToFileURL } from 'node:url';
 import type { Kysely } from 'kysely';
 import type { DB } from './database.js';
+import { demoRequested } from './demo-flag.js';
 import { dbDistDir } from './dist-dir.js';
 
 /**
@@ -21,9 +22,12 @@ export async function listSeeds(): Promise<string[]> {
   return files.filter((f) => f.endsWith('.js')).sort();
 }
 
-/** Run every seed module in order; returns their names. */
-export async function seed(db: Kysely<DB>): Promise<string[]> {
-  const names = await listSeeds();
+/** Demo seeds (`*_demo_*`) publish a password: they run only when the demo is asked for. */
+const isDemoSeed = (name: string) => /_demo_/.test(name);
+
+/** Run every seed module in order (demo ones only with `demo`); returns their names. */
+export async function seed(db: Kysely<DB>, demo = demoRequested()): Promise<string[]> {
+  const names = (await listSeeds()).filter((n) => demo || !isDemoSeed(n));
   for (const name of names) {
     const mod = (await import(
       pathToFileURL(path.join(seedFolder, name)).href

@@ -4,7 +4,9 @@ import cookieParser from 'cookie-parser';
 import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
 import { AppModule } from './app.module.js';
+import { AppConfig } from './config/app-config.js';
 import type { AppSettings } from './config/env.js';
+import { JSON_BODY_LIMIT_BYTES } from './http/body-limits.js';
 import { setupOpenApi } from './http/openapi.js';
 import { securityHeaders } from './http/security.js';
 import { serveUi } from './http/spa.js';
@@ -25,6 +27,8 @@ export async function createApp(settings: AppSettings): Promise<CreatedApp> {
     logger: new PinoLoggerService(logger),
   });
   app.disable('x-powered-by');
+  // Behind a reverse proxy, req.ip (sign-in throttling, logs) must come from X-Forwarded-For.
+  app.set('trust proxy', new AppConfig(settings).trustProxy);
   app.use(securityHeaders());
   app.use(
     pinoHttp({
@@ -33,10 +37,10 @@ export async function createApp(settings: AppSettings): Promise<CreatedApp> {
       customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : 'info'),
     }),
   );
-  app.useBodyParser('json', { limit: '1mb' });
+  app.useBodyParser('json', { limit: JSON_BODY_LIMIT_BYTES });
   app.use(cookieParser());
   app.setGlobalPrefix('api');
-  setupOpenApi(app);
+  setupOpenApi(app, settings);
   const uiServed = serveUi(app, settings.UI_DIST);
   return { app, logger, uiServed };
 }

@@ -98,7 +98,8 @@ describe('attachments', () => {
     );
     expect(png.body.contentType).toBe('image/png');
     const rows = await ctx.db.selectFrom('attachments').select('fileName').execute();
-    expect(rows.map((r) => r.fileName).sort()).toEqual(['photo.txt', 'stops.csv']);
+    // The stored name ends in the sniffed type's extension, so it never opens as text.
+    expect(rows.map((r) => r.fileName).sort()).toEqual(['photo.txt.png', 'stops.csv']);
   });
 
   it('sanitises path traversal and control characters in names', async () => {
@@ -106,7 +107,7 @@ describe('attachments', () => {
     expect(res.status).toBe(201);
     expect(res.body.fileName).toBe('passwd.txt');
     const win = await upload(ctx, revisionId, Buffer.from('notes'), '..\\..\\boot.ini');
-    expect(win.body.fileName).toBe('boot.ini');
+    expect(win.body.fileName).toBe('boot.ini.txt');
     const dots = await upload(ctx, revisionId, Buffer.from('notes'), '...notes.txt');
     expect(dots.body.fileName).toBe('notes.txt');
     // A raw control character breaks the multipart header itself: a clean 400, nothing stored.

@@ -145,7 +145,13 @@ describe('auth: sign-in, me, refresh, sign-out', () => {
       200,
     );
 
-    // Presenting the old token again looks like theft: refused, and the new one dies too.
+    // Presenting the old token again after the grace window (REFRESH_GRACE_SECONDS) for a
+    // second tab looks like theft: refused, and the new one dies too.
+    await ctx.db
+      .updateTable('refreshTokens')
+      .set({ revokedAt: new Date(Date.now() - 60_000) })
+      .where('revokedAt', 'is not', null)
+      .execute();
     expect((await ctx.request('POST', '/api/auth/refresh', { cookie })).status).toBe(401);
     expect((await ctx.request('POST', '/api/auth/refresh', { cookie: rotated })).status).toBe(401);
   });

@@ -93,6 +93,35 @@ const matrix: Row[] = [
     viewer: 403,
     admin: 404,
   },
+  {
+    method: 'POST',
+    path: '/api/auth/password',
+    body: {},
+    anonymous: 401,
+    engineer: 400,
+    checker: 400,
+    viewer: 400,
+    admin: 400,
+  },
+  {
+    method: 'POST',
+    path: '/api/auth/password-reset',
+    body: {},
+    anonymous: 400,
+    engineer: 400,
+    checker: 400,
+    viewer: 400,
+    admin: 400,
+  },
+  {
+    method: 'POST',
+    path: `/api/users/${NIL_ID}/password-reset`,
+    anonymous: 401,
+    engineer: 403,
+    checker: 403,
+    viewer: 403,
+    admin: 404,
+  },
 ];
 const callers: Caller[] = ['anonymous', 'engineer', 'checker', 'viewer', 'admin'];
 
@@ -106,7 +135,9 @@ describe('foundation routes × roles', () => {
 
   it('covers every route of the foundation controllers', () => {
     const foundation = listRoutes(ctx.app).filter((r) =>
-      ['AuthController', 'UsersController', 'HealthController'].includes(r.controller),
+      ['AuthController', 'UsersController', 'UserPasswordController', 'HealthController'].includes(
+        r.controller,
+      ),
     );
     const covered = new Set(matrix.map((r) => `${r.method} ${r.path.replace(NIL_ID, ':id')}`));
     expect(foundation.map(routeKey).filter((k) => !covered.has(k))).toEqual([]);

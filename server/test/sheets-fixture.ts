@@ -100,7 +100,7 @@ export async function createSheetsContext(
     PUBLIC_URL: 'http://holdfast.test',
     ...extraEnv,
   });
-  const ctx = await createTestContext({ env: { PUBLIC_URL: 'http://holdfast.test' } });
+  const ctx = await createTestContext({ env: { PUBLIC_URL: 'http://holdfast.test', ...extraEnv } });
   const criteria = ctx.app.get(CriteriaService);
   await criteria.onModuleInit();
   return Object.assign(ctx, {

@@ -1,4 +1,5 @@
 export * from './api-error.js';
+export * from './text/plain-text.js';
 export * from './users/user.schema.js';
 export * from './auth/auth.schema.js';
 export * from './sheets/person-ref.schema.js';
@@ -13,3 +14,4 @@ export * from './work-queue/work-queue.schema.js';
 export * from './verify/verify.schema.js';
 export * from './revisions/canonical-json.js';
 export * from './reviews/criteria-review.schema.js';
+export * from './mail/failed-mail.schema.js';

@@ -1,7 +1,8 @@
 import { createHash, randomUUID } from 'node:crypto';
 import { Injectable, Logger } from '@nestjs/common';
 import type { Attachment } from '@holdfast/shared';
-import type { AttachmentRow } from '@holdfast/db';
+import type { AttachmentRow, DB } from '@holdfast/db';
+import type { Kysely } from 'kysely';
 import type { AuthUser } from '../auth/auth-user.js';
 import { ApiException, badRequest, notFound } from '../common/errors/api-exception.js';
 import { Database } from '../database/database.js';
@@ -9,7 +10,8 @@ import { AuditService } from '../audit/audit.service.js';
 import { RevisionsRepository } from '../revisions/revisions.repository.js';
 import { RevisionsService } from '../revisions/revisions.service.js';
 import { ObjectStorage } from '../storage/object-storage.js';
-import { sanitizeFileName, sniffContentType } from './sniff.js';
+import { AppConfig } from '../config/app-config.js';
+import { nameForType, sanitizeFileName, sniffContentType } from './sniff.js';
 
 type People = Map<string, { id: string; displayName: string; initials: string }>;
 
@@ -53,6 +55,7 @@ export class AttachmentsService {
     private readonly revisions: RevisionsService,
     private readonly revisionsRepo: RevisionsRepository,
     private readonly audit: AuditService,
+    private readonly config: AppConfig,
   ) {}
 
   async list(user: AuthUser, revisionId: string): Promise<Attachment[]> {
@@ -82,8 +85,9 @@ export class AttachmentsService {
       ]);
     const rev = await this.revisions.load(user, revisionId);
     this.revisions.assertEditable(user, rev, rev.rowVersion);
-    const fileName = sanitizeFileName(utf8Name(file.originalname));
-    const contentType = sniffContentType(file.buffer, fileName);
+    await this.assertQuota(this.db, revisionId, file.buffer.length);
+    const givenName = sanitizeFileName(utf8Name(file.originalname));
+    const contentType = sniffContentType(file.buffer, givenName);
     if (!contentType) {
       throw new ApiException(
         415,
@@ -92,11 +96,20 @@ export class AttachmentsService {
         [{ path: 'file', message: 'content is not PDF, PNG, JPEG or UTF-8 text' }],
       );
     }
+    const fileName = nameForType(givenName, contentType);
     const sha256 = createHash('sha256').update(file.buffer).digest('hex');
     const storageKey = `revisions/${revisionId}/${randomUUID()}`;
     await this.storage.put(storageKey, file.buffer, contentType);
     try {
       const row = await this.db.transaction().execute(async (trx) => {
+        // The revision row lock serialises uploads to one revision, so the quota holds under races.
+        await trx
+          .selectFrom('revisions')
+          .select('id')
+          .where('id', '=', revisionId)
+          .forUpdate()
+          .execute();
+        await this.assertQuota(trx, revisionId, file.buffer.length);
         const created = await trx
           .insertInto('attachments')
           .values({
@@ -124,6 +137,29 @@ export class AttachmentsService {
     } catch (e) {
       await this.storage.delete(storageKey);
       throw e;
+    }
+  }
+
+  /** Refuses an upload that would take the revision past its file count or byte quota. */
+  private async assertQuota(db: Kysely<DB>, revisionId: string, adding: number): Promise<void> {
+    const { ATTACHMENTS_PER_REVISION: maxFiles, ATTACHMENT_MB_PER_REVISION: maxMb } =
+      this.config.settings;
+    const used = await db
+      .selectFrom('attachments')
+      .select((eb) => [eb.fn.countAll<string>().as('files'), eb.fn.sum<string>('size').as('bytes')])
+      .where('revisionId', '=', revisionId)
+      .executeTakeFirstOrThrow();
+    const files = Number(used.files);
+    const bytes = Number(used.bytes ?? 0);
+    const maxBytes = maxMb * 1024 * 1024;
+    if (files + 1 > maxFiles || bytes + adding > maxBytes) {
+      throw new ApiException(
+        413,
+        'payload_too_large',
+        `A revision holds at most ${maxFiles} files and ${maxMb} MB in all; this one has ${files} files and ${(bytes / 1024 / 1024).toFixed(1)} MB.`,
+        [{ path: 'file', message: 'the revision has no room for this file' }],
+        { maxFiles, maxBytes, files, bytes },
+      );
     }
   }
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { contentDisposition, sanitizeFileName, sniffContentType } from './sniff.js';
+import { contentDisposition, nameForType, sanitizeFileName, sniffContentType } from './sniff.js';
 
 describe('sniffContentType', () => {
   it('recognises PDF, PNG and JPEG by their first bytes whatever the name says', () => {
@@ -39,10 +39,27 @@ describe('sanitizeFileName', () => {
     expect(sanitizeFileName('Bremsscheibe Ø400 – Blatt.pdf')).toBe('Bremsscheibe Ø400 – Blatt.pdf');
   });
 
+  it('removes bidi controls and zero-width characters that disguise the extension', () => {
+    expect(sanitizeFileName('photo\u202Egnp.exe')).toBe('photognp.exe');
+    expect(sanitizeFileName('re\u200Bport\u2066.pdf\u2069')).toBe('report.pdf');
+    expect(sanitizeFileName('\u200B\u200F')).toBe('attachment');
+  });
+
   it('limits length but keeps the extension', () => {
     const n = sanitizeFileName('x'.repeat(300) + '.pdf');
     expect(n.length).toBe(200);
     expect(n.endsWith('.pdf')).toBe(true);
+  });
+});
+
+describe('nameForType', () => {
+  it('makes the extension follow the sniffed type', () => {
+    expect(nameForType('report.html', 'text/plain')).toBe('report.html.txt');
+    expect(nameForType('notes', 'text/plain')).toBe('notes.txt');
+    expect(nameForType('Notes.TXT', 'text/plain')).toBe('Notes.TXT');
+    expect(nameForType('scan.JPEG', 'image/jpeg')).toBe('scan.JPEG');
+    expect(nameForType('scan.png', 'application/pdf')).toBe('scan.png.pdf');
+    expect(nameForType('x'.repeat(200), 'image/png')).toBe('x'.repeat(196) + '.png');
   });
 });
 

@@ -1,3 +1,5 @@
+import { stripInvisible } from '@holdfast/shared';
+
 /** What the bytes of an upload say they are; the file name never decides. */
 export type SniffedType =
   'application/pdf' | 'image/png' | 'image/jpeg' | 'text/plain' | 'text/csv';
@@ -37,12 +39,12 @@ export function sniffContentType(buf: Buffer, fileName: string): SniffedType | u
 
 /**
  * A file name safe to store and to send back: the last path segment only, no control or
- * reserved characters, no leading dots, at most 200 characters (keeping the extension).
+ * reserved characters, no bidi controls or zero-width characters (they disguise the
+ * extension), no leading dots, at most 200 characters (keeping the extension).
  */
 export function sanitizeFileName(raw: string): string {
-  const base = raw.normalize('NFC').split(/[\\/]/).pop() ?? '';
+  const base = stripInvisible(raw.normalize('NFC')).split(/[\\/]/).pop() ?? '';
   let name = base
-    // eslint-disable-next-line no-control-regex -- stripping control characters is the point
     // eslint-disable-next-line no-control-regex -- stripping control characters is the point
     .replace(/[\u0000-\u001f\u007f-\u009f]/g, '')
     .replace(/[<>:"|?*]/g, '_')
@@ -56,6 +58,28 @@ export function sanitizeFileName(raw: string): string {
     name = name.slice(0, 200 - ext.length) + ext;
   }
   return name || 'attachment';
+}
+
+/** The extensions that name each sniffed type; the first is added when the name has none of them. */
+const extensions: Record<SniffedType, string[]> = {
+  'application/pdf': ['.pdf'],
+  'image/png': ['.png'],
+  'image/jpeg': ['.jpg', '.jpeg'],
+  'text/plain': ['.txt'],
+  'text/csv': ['.csv'],
+};
+
+/**
+ * The stored name ends in an extension of the sniffed type, so a download never opens as
+ * something else: text uploaded as `report.html` is kept as `report.html.txt`.
+ */
+export function nameForType(fileName: string, type: SniffedType): string {
+  const allowed = extensions[type];
+  if (allowed.some((ext) => fileName.toLowerCase().endsWith(ext))) return fileName;
+  const ext = allowed[0]!;
+  return fileName.length + ext.length > 200
+    ? fileName.slice(0, 200 - ext.length) + ext
+    : fileName + ext;
 }
 
 /** `attachment; filename="ascii"; filename*=UTF-8''percent-encoded` (RFC 6266 / RFC 5987). */

@@ -8,6 +8,10 @@ export interface AccessTokenClaims {
   sub: string;
   role: Role;
   name: string;
+  /** The user's session version when issued; sign-out and password changes raise it. */
+  sv: number;
+  /** Set by the signer; a token without it is refused. */
+  exp?: number;
 }
 
 export const REFRESH_COOKIE = 'hf_refresh';

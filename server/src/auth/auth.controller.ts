@@ -1,8 +1,12 @@
 import { Body, Controller, Get, HttpCode, Patch, Post, Req, Res, UseGuards } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import {
+  changePasswordSchema,
+  completePasswordResetSchema,
   signInSchema,
   updateMeSchema,
+  type ChangePasswordInput,
+  type CompletePasswordResetInput,
   type Session,
   type SignInInput,
   type UpdateMeInput,
@@ -17,6 +21,7 @@ import { REFRESH_COOKIE, REFRESH_COOKIE_PATH } from './access-token.js';
 import { CurrentUser, type AuthUser } from './auth-user.js';
 import { AuthService, type IssuedSession } from './auth.service.js';
 import { LoginThrottlerGuard } from './login-throttler.guard.js';
+import { PasswordResetService } from './password-reset.service.js';
 import { Public, SignedIn } from './policy.js';
 
 @ApiTags('auth')
@@ -26,6 +31,7 @@ export class AuthController {
     private readonly auth: AuthService,
     private readonly users: UsersService,
     private readonly config: AppConfig,
+    private readonly resets: PasswordResetService,
   ) {}
 
   @Post('sign-in')
@@ -71,6 +77,32 @@ export class AuthController {
     @Body(new ZodValidationPipe(updateMeSchema)) input: UpdateMeInput,
   ): Promise<User> {
     return this.users.updatePreferences(user.id, input);
+  }
+
+  /** Change one's own password; other sessions end, this one continues with a new cookie. */
+  @Post('password')
+  @SignedIn()
+  @HttpCode(200)
+  @ApiBearerAuth()
+  @ApiBodySchema(changePasswordSchema)
+  async changePassword(
+    @CurrentUser() user: AuthUser,
+    @Body(new ZodValidationPipe(changePasswordSchema)) input: ChangePasswordInput,
+    @Res({ passthrough: true }) res: Response,
+  ): Promise<Session> {
+    return this.withCookie(res, await this.auth.changePassword(user.id, input));
+  }
+
+  /** Set a new password with the one-time token from an admin reset mail. */
+  @Post('password-reset')
+  @Public()
+  @UseGuards(LoginThrottlerGuard)
+  @HttpCode(204)
+  @ApiBodySchema(completePasswordResetSchema)
+  async completeReset(
+    @Body(new ZodValidationPipe(completePasswordResetSchema)) input: CompletePasswordResetInput,
+  ): Promise<void> {
+    await this.resets.complete(input);
   }
 
   private cookie(req: Request): string | undefined {

@@ -1,9 +1,7 @@
 import { Injectable, Logger, type CanActivate, type ExecutionContext } from '@nestjs/common';
 import { Reflector } from '@nestjs/core';
-import { JwtService } from '@nestjs/jwt';
-import { forbidden, unauthenticated } from '../common/errors/api-exception.js';
-import { UsersService } from '../users/users.service.js';
-import type { AccessTokenClaims } from './access-token.js';
+import { forbidden } from '../common/errors/api-exception.js';
+import { AccessVerifier } from './access-verifier.js';
 import type { AuthenticatedRequest } from './auth-user.js';
 import { policyAdmits, policyOf } from './policy.js';
 
@@ -17,8 +15,7 @@ export class AuthGuard implements CanActivate {
 
   constructor(
     private readonly reflector: Reflector,
-    private readonly jwt: JwtService,
-    private readonly users: UsersService,
+    private readonly verifier: AccessVerifier,
   ) {}
 
   async canActivate(context: ExecutionContext): Promise<boolean> {
@@ -32,17 +29,7 @@ export class AuthGuard implements CanActivate {
     if (policy.kind === 'public') return true;
 
     const request = context.switchToHttp().getRequest<AuthenticatedRequest>();
-    const [scheme, token] = (request.headers.authorization ?? '').split(' ');
-    if (scheme !== 'Bearer' || !token) throw unauthenticated();
-
-    let claims: AccessTokenClaims;
-    try {
-      claims = await this.jwt.verifyAsync<AccessTokenClaims & object>(token);
-    } catch {
-      throw unauthenticated('Your session has expired or is not valid. Sign in again.');
-    }
-    const user = await this.users.findActive(claims.sub);
-    if (!user) throw unauthenticated('Your account is not active.');
+    const user = await this.verifier.fromHeader(request.headers.authorization);
     request.user = user;
 
     if (!policyAdmits(policy, user.role)) throw forbidden();

@@ -1,18 +1,17 @@
 import { Injectable } from '@nestjs/common';
-import type { RefreshTokenRow } from '@holdfast/db';
+import type { DB, RefreshTokenRow } from '@holdfast/db';
+import type { Kysely } from 'kysely';
 import { Database } from '../database/database.js';
 
 @Injectable()
 export class RefreshTokensRepository {
   constructor(private readonly db: Database) {}
 
-  async insert(row: {
-    userId: string;
-    tokenHash: string;
-    expiresAt: Date;
-    rotatedFrom?: string;
-  }): Promise<void> {
-    await this.db.insertInto('refreshTokens').values(row).execute();
+  async insert(
+    row: { userId: string; tokenHash: string; expiresAt: Date; rotatedFrom?: string },
+    db: Kysely<DB> = this.db,
+  ): Promise<void> {
+    await db.insertInto('refreshTokens').values(row).execute();
   }
 
   findByHash(tokenHash: string): Promise<RefreshTokenRow | undefined> {
@@ -27,8 +26,8 @@ export class RefreshTokensRepository {
    * Revokes the token if it is still live; returns false when another request got there first,
    * which makes rotation single-use even under concurrent refreshes.
    */
-  async revokeIfLive(id: string): Promise<boolean> {
-    const result = await this.db
+  async revokeIfLive(id: string, db: Kysely<DB> = this.db): Promise<boolean> {
+    const result = await db
       .updateTable('refreshTokens')
       .set({ revokedAt: new Date() })
       .where('id', '=', id)

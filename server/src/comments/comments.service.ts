@@ -6,6 +6,7 @@ import { effectiveRoles } from '../auth/policy.js';
 import { badRequest, forbidden, notFound } from '../common/errors/api-exception.js';
 import { Database } from '../database/database.js';
 import { AuditService } from '../audit/audit.service.js';
+import { canComment } from '../revisions/read-rules.js';
 import { RevisionsRepository } from '../revisions/revisions.repository.js';
 import { RevisionsService } from '../revisions/revisions.service.js';
 
@@ -66,6 +67,11 @@ export class CommentsService {
 
   async create(user: AuthUser, revisionId: string, input: CreateCommentInput): Promise<Comment> {
     const rev = await this.revisions.load(user, revisionId);
+    if (!canComment(user, rev)) {
+      throw forbidden(
+        `Revision ${rev.label} is ${rev.state}: only a checker or the sheet owner may add to it.`,
+      );
+    }
     let anchor = input.anchor ?? null;
     if (input.parentId) {
       const parent = await this.db

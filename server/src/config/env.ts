@@ -28,14 +28,36 @@ const envSchema = z.object({
   LOGIN_THROTTLE_LIMIT: z.coerce.number().int().positive().default(10),
   LOGIN_THROTTLE_TTL_SECONDS: z.coerce.number().int().positive().default(60),
   REFRESH_TTL_DAYS: z.coerce.number().int().positive().max(90).default(7),
+  /** Sign-in attempts per client address and minute whatever the e-mail (spraying). */
+  LOGIN_THROTTLE_IP_LIMIT: z.coerce.number().int().positive().default(30),
+  /**
+   * A refresh token presented again this many seconds after it was rotated is a second tab
+   * refreshing at the same moment, not a stolen token.
+   */
+  REFRESH_GRACE_SECONDS: z.coerce.number().int().min(0).max(60).default(10),
+  /** Express `trust proxy`: unset/false (direct), true, a hop count, or proxy addresses. */
+  TRUST_PROXY: z
+    .string()
+    .trim()
+    .regex(
+      /^(true|false|\d{1,2}|[0-9a-fA-F.:/]+(\s*,\s*[0-9a-fA-F.:/]+)*|loopback|linklocal|uniquelocal)$/,
+      'must be true, false, a hop count, or comma-separated proxy addresses/CIDRs',
+    )
+    .default('false'),
+  ATTACHMENTS_PER_REVISION: z.coerce.number().int().positive().default(20),
+  ATTACHMENT_MB_PER_REVISION: z.coerce.number().positive().default(100),
+  /** Who may read /api/docs: `public`, or `signed-in` (the default when NODE_ENV=production). */
+  API_DOCS: z.enum(['public', 'signed-in']).optional(),
+  NODE_ENV: z.string().optional(),
 });
 
 export type Env = z.infer<typeof envSchema>;
 
 /** Validated settings of one server instance (resolved defaults, secret always present). */
-export interface AppSettings extends Omit<Env, 'JWT_SECRET' | 'PUBLIC_URL'> {
+export interface AppSettings extends Omit<Env, 'JWT_SECRET' | 'PUBLIC_URL' | 'API_DOCS'> {
   JWT_SECRET: string;
   PUBLIC_URL: string;
+  API_DOCS: 'public' | 'signed-in';
 }
 
 export class ConfigError extends Error {
@@ -76,5 +98,6 @@ export function loadSettings(source: NodeJS.ProcessEnv = process.env): AppSettin
     ...env,
     JWT_SECRET: env.JWT_SECRET ?? persistedSecret(env.DATA_DIR),
     PUBLIC_URL: env.PUBLIC_URL ?? `http://${env.HOST}:${env.PORT}`,
+    API_DOCS: env.API_DOCS ?? (env.NODE_ENV === 'production' ? 'signed-in' : 'public'),
   };
 }

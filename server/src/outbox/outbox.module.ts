@@ -1,9 +1,15 @@
 import { Global, Module } from '@nestjs/common';
 import { Mailer } from '../mail/mailer.js';
+import { FailedMailController } from './failed-mail.controller.js';
+import { FailedMailService } from './failed-mail.service.js';
 import { JobQueue } from './job-queue.js';
 import { OutboxService } from './outbox.service.js';
 
 /** Global: any feature can queue a notification inside its own transaction. */
 @Global()
-@Module({ providers: [Mailer, JobQueue, OutboxService], exports: [OutboxService] })
+@Module({
+  controllers: [FailedMailController],
+  providers: [Mailer, JobQueue, OutboxService, FailedMailService],
+  exports: [OutboxService],
+})
 export class OutboxModule {}

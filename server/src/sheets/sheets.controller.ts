@@ -20,6 +20,7 @@ import { Roles, SignedIn } from '../auth/policy.js';
 import { ApiBodySchema } from '../common/openapi.js';
 import { UuidParamPipe } from '../common/pipes/uuid-param.pipe.js';
 import { ZodValidationPipe } from '../common/pipes/zod-validation.pipe.js';
+import { sheetDetailFor } from '../revisions/read-rules.js';
 import { SheetsService } from './sheets.service.js';
 
 @ApiTags('sheets')
@@ -49,8 +50,11 @@ export class SheetsController {
 
   @Get(':id')
   @SignedIn()
-  detail(@Param('id', UuidParamPipe) id: string): Promise<SheetDetail> {
-    return this.sheets.detail(id);
+  async detail(
+    @CurrentUser() user: AuthUser,
+    @Param('id', UuidParamPipe) id: string,
+  ): Promise<SheetDetail> {
+    return sheetDetailFor(user, await this.sheets.detail(id));
   }
 
   @Post(':id/revisions')

@@ -26,6 +26,7 @@ import {
 } from '../revisions/calc-engine.js';
 import { diffChecks, diffInputs, diffResults } from '../revisions/diff.js';
 import { canReadContent } from '../revisions/revision-access.js';
+import { auditFor } from '../revisions/read-rules.js';
 import { revisionLabel } from '../revisions/revision-codes.js';
 import { toRevisionSummary } from '../revisions/revision-mapper.js';
 import { RevisionsRepository } from '../revisions/revisions.repository.js';
@@ -249,10 +250,7 @@ export class SheetsService {
     };
   }
 
-  /**
-   * Viewers may read who did what and when, but not the draft content that saves carry
-   * (they only ever see approved revisions), so their copy keeps state and label alone.
-   */
+  /** Who did what and when; payloads follow the revision read rules (see read-rules.ts). */
   async auditTrail(user: AuthUser, sheetId: string) {
     const exists = await this.db
       .selectFrom('sheets')
@@ -260,21 +258,6 @@ export class SheetsService {
       .where('id', '=', sheetId)
       .executeTakeFirst();
     if (!exists) throw notFound('Sheet not found.');
-    const items = await this.audit.forSheet(sheetId);
-    if (user.role !== 'viewer') return { items };
-    return {
-      items: items.map((e) => ({ ...e, before: pickPublic(e.before), after: pickPublic(e.after) })),
-    };
+    return { items: auditFor(user, await this.audit.forSheet(sheetId)) };
   }
-}
-
-const publicAuditKeys = ['state', 'label'];
-
-function pickPublic(value: unknown): unknown {
-  if (!value || typeof value !== 'object') return value ?? null;
-  const out: Record<string, unknown> = {};
-  for (const key of publicAuditKeys) {
-    if (key in value) out[key] = (value as Record<string, unknown>)[key];
-  }
-  return out;
 }

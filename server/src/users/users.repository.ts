@@ -1,13 +1,14 @@
 import { Injectable } from '@nestjs/common';
-import type { NewUserRow, UserRow, UserRowUpdate } from '@holdfast/db';
+import type { DB, NewUserRow, UserRow, UserRowUpdate } from '@holdfast/db';
+import type { Kysely } from 'kysely';
 import { Database } from '../database/database.js';
 
 @Injectable()
 export class UsersRepository {
   constructor(private readonly db: Database) {}
 
-  findById(id: string): Promise<UserRow | undefined> {
-    return this.db.selectFrom('users').selectAll().where('id', '=', id).executeTakeFirst();
+  findById(id: string, db: Kysely<DB> = this.db): Promise<UserRow | undefined> {
+    return db.selectFrom('users').selectAll().where('id', '=', id).executeTakeFirst();
   }
 
   findByEmail(email: string): Promise<UserRow | undefined> {
@@ -40,9 +41,28 @@ export class UsersRepository {
       .executeTakeFirst();
   }
 
+  /**
+   * Ends the user's access tokens at once: each carries the session version it was issued
+   * under, and the guard refuses older ones. Refresh tokens are untouched (see revokeSessions).
+   */
+  async endAccessTokens(userId: string, db: Kysely<DB> = this.db): Promise<void> {
+    await db
+      .updateTable('users')
+      .set((eb) => ({ sessionVersion: eb('sessionVersion', '+', 1) }))
+      .where('id', '=', userId)
+      .execute();
+  }
+
+  /** A new password hash; ends every session (access and refresh) of the user. */
+  async setPassword(userId: string, passwordHash: string, db: Kysely<DB> = this.db): Promise<void> {
+    await db.updateTable('users').set({ passwordHash }).where('id', '=', userId).execute();
+    await this.endAccessTokens(userId, db);
+    await this.revokeSessions(userId, db);
+  }
+
   /** Ends every session of a user (on deactivation). */
-  async revokeSessions(userId: string): Promise<void> {
-    await this.db
+  async revokeSessions(userId: string, db: Kysely<DB> = this.db): Promise<void> {
+    await db
       .updateTable('refreshTokens')
       .set({ revokedAt: new Date() })
       .where('userId', '=', userId)

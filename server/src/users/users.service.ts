@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
-import { hashPassword, type UserRow } from '@holdfast/db';
+import { checkPasswordStrength, hashPassword, type UserRow } from '@holdfast/db';
 import type { CreateUserInput, UpdateUserInput, User } from '@holdfast/shared';
-import { conflict, notFound } from '../common/errors/api-exception.js';
+import { badRequest, conflict, notFound } from '../common/errors/api-exception.js';
 import { UsersRepository } from './users.repository.js';
 
 export function toUser(row: UserRow): User {
@@ -14,6 +14,16 @@ export function toUser(row: UserRow): User {
     active: row.active,
     unitSystem: row.unitSystem,
   };
+}
+
+/** 400 on `field` when the password is short, common or guessable (see checkPasswordStrength). */
+export function assertStrongPassword(field: string, password: string, personal: string[]): void {
+  const verdict = checkPasswordStrength(password, personal);
+  if (!verdict.ok) {
+    throw badRequest('Some fields are not valid.', [
+      { path: field, message: verdict.message ?? 'too weak' },
+    ]);
+  }
 }
 
 @Injectable()
@@ -34,6 +44,7 @@ export class UsersService {
       throw conflict('A user with this e-mail address already exists.', { field: 'email' });
     }
     const { password, ...rest } = input;
+    assertStrongPassword('password', password, [input.email, input.displayName]);
     // A concurrent duplicate still fails on the unique index and becomes a 409 in the filter.
     return toUser(await this.users.insert({ ...rest, passwordHash: await hashPassword(password) }));
   }
@@ -49,7 +60,10 @@ export class UsersService {
         ? await this.users.findById(id)
         : await this.users.update(id, input);
     if (!row) throw notFound('No such user.');
-    if (!row.active) await this.users.revokeSessions(id);
+    if (!row.active) {
+      await this.users.revokeSessions(id);
+      await this.users.endAccessTokens(id);
+    }
     return toUser(row);
   }
 

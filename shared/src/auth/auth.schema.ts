@@ -31,3 +31,28 @@ export type Health = z.infer<typeof healthSchema>;
 /** PATCH /api/auth/me: a user's own preferences. */
 export const updateMeSchema = z.object({ unitSystem: z.enum(['SI', 'US']) }).strict();
 export type UpdateMeInput = z.infer<typeof updateMeSchema>;
+
+/** A new password as typed; the server also refuses common and guessable ones (zxcvbn). */
+export const newPasswordSchema = z
+  .string()
+  .min(12, 'at least 12 characters')
+  .max(200, 'at most 200 characters');
+
+/** POST /api/auth/password: a signed-in user changes their own password. */
+export const changePasswordSchema = z
+  .object({ currentPassword: z.string().min(1, 'required'), newPassword: newPasswordSchema })
+  .strict();
+export type ChangePasswordInput = z.infer<typeof changePasswordSchema>;
+
+/** POST /api/auth/password-reset: the token from the mailed link and the new password. */
+export const completePasswordResetSchema = z
+  .object({ token: z.string().min(20).max(200), newPassword: newPasswordSchema })
+  .strict();
+export type CompletePasswordResetInput = z.infer<typeof completePasswordResetSchema>;
+
+/** Answer to POST /api/users/:id/password-reset (admin). */
+export const passwordResetIssuedSchema = z.object({
+  sentTo: z.string(),
+  expiresAt: z.string(),
+});
+export type PasswordResetIssued = z.infer<typeof passwordResetIssuedSchema>;

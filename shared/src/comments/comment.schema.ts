@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { multiLineText } from '../text/plain-text.js';
 import { isoDateSchema, personRefSchema } from '../sheets/person-ref.schema.js';
 
 export const commentAnchorSchema = z
@@ -30,7 +31,7 @@ export type CommentList = z.infer<typeof commentListSchema>;
 /** POST /api/revisions/:id/comments */
 export const createCommentSchema = z
   .object({
-    body: z.string().trim().min(1, 'required').max(4000),
+    body: multiLineText({ min: 1, max: 4000, minMessage: 'required' }),
     anchor: commentAnchorSchema.nullable().optional(),
     parentId: z.string().uuid().optional(),
   })

@@ -1,14 +1,19 @@
 import { criteriaValueProblems, REQUIRED_CRITERIA } from '@holdfast/calc';
 import { z } from 'zod';
+import { multiLineText, singleLineText } from '../text/plain-text.js';
 import { isoDateSchema, personRefSchema } from '../sheets/person-ref.schema.js';
 
 export const criterionValueSchema = z
   .object({
     key: z.string().min(1).max(80),
-    label: z.string().min(1).max(200),
+    label: singleLineText({ min: 1, max: 200 }),
     value: z.number().finite(),
-    unit: z.string().max(40),
-    source: z.string().min(1, 'name the source, or say "common practice"').max(400),
+    unit: singleLineText({ max: 40 }),
+    source: singleLineText({
+      min: 1,
+      max: 400,
+      minMessage: 'name the source, or say "common practice"',
+    }),
     confidence: z.enum(['published', 'secondary', 'common practice', 'memory']),
   })
   .strict();
@@ -93,7 +98,7 @@ export const criterionValuesSchema = z
 export const publishCriteriaVersionSchema = z
   .object({
     values: criterionValuesSchema,
-    note: z.string().trim().min(1, 'say what changed and why').max(2000),
+    note: multiLineText({ min: 1, max: 2000, minMessage: 'say what changed and why' }),
   })
   .strict();
 export type PublishCriteriaVersionInput = z.infer<typeof publishCriteriaVersionSchema>;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { singleLineText } from '../text/plain-text.js';
 
 /** Kinds of machine in the equipment register. */
 export const machineKinds = ['crane', 'conveyor', 'mill-auxiliary', 'winch', 'other'] as const;
@@ -33,7 +34,7 @@ export const createSiteSchema = z
       .trim()
       .toUpperCase()
       .regex(/^[A-Z0-9]{2,6}$/, '2 to 6 capital letters or digits'),
-    name: z.string().trim().min(2, 'at least 2 characters').max(120),
+    name: singleLineText({ min: 2, max: 120 }),
   })
   .strict();
 export type CreateSiteInput = z.infer<typeof createSiteSchema>;
@@ -42,7 +43,7 @@ export const createMachineSchema = z
   .object({
     siteId: z.string().uuid(),
     tag,
-    name: z.string().trim().min(2, 'at least 2 characters').max(120),
+    name: singleLineText({ min: 2, max: 120 }),
     kind: machineKindSchema,
   })
   .strict();
@@ -52,7 +53,7 @@ export const createPositionSchema = z
   .object({
     machineId: z.string().uuid(),
     tag,
-    description: z.string().trim().min(2, 'at least 2 characters').max(200),
+    description: singleLineText({ min: 2, max: 200 }),
     motion: motionSchema,
   })
   .strict();

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { multiLineText } from '../text/plain-text.js';
 import { isoDateSchema, personRefSchema } from '../sheets/person-ref.schema.js';
 import {
   revisionStateSchema,
@@ -58,7 +59,7 @@ export const saveRevisionSchema = z
   .object({
     inputs: sheetInputsSchema,
     unitSystem: unitSystemSchema,
-    changeNote: z.string().trim().max(2000),
+    changeNote: multiLineText({ max: 2000 }),
     criteriaSetId: z.string().min(1).max(80).optional(),
     rowVersion,
   })
@@ -69,26 +70,31 @@ export type SaveRevisionInput = z.infer<typeof saveRevisionSchema>;
 export const submitRevisionSchema = z
   .object({
     rowVersion,
-    justification: z.string().trim().max(4000).optional(),
+    justification: multiLineText({ max: 4000 }).optional(),
   })
   .strict();
 export type SubmitRevisionInput = z.infer<typeof submitRevisionSchema>;
 
 /** POST /api/revisions/:id/approve */
 export const approveRevisionSchema = z
-  .object({ rowVersion, note: z.string().trim().max(4000).optional() })
+  .object({ rowVersion, note: multiLineText({ max: 4000 }).optional() })
   .strict();
 export type ApproveRevisionInput = z.infer<typeof approveRevisionSchema>;
 
 /** POST /api/revisions/:id/return — the comment is stored as a comment on the revision. */
 export const returnRevisionSchema = z
-  .object({ rowVersion, comment: z.string().trim().min(1, 'say what must change').max(4000) })
+  .object({
+    rowVersion,
+    comment: multiLineText({ min: 1, max: 4000, minMessage: 'say what must change' }),
+  })
   .strict();
 export type ReturnRevisionInput = z.infer<typeof returnRevisionSchema>;
 
 /** POST /api/sheets/:id/revisions */
 export const newRevisionSchema = z
-  .object({ changeNote: z.string().trim().min(1, 'say why the sheet changes').max(2000) })
+  .object({
+    changeNote: multiLineText({ min: 1, max: 2000, minMessage: 'say why the sheet changes' }),
+  })
   .strict();
 export type NewRevisionInput = z.infer<typeof newRevisionSchema>;
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { singleLineText } from '../text/plain-text.js';
 import { revisionStateSchema, sheetTypeIdSchema } from '../revisions/evaluation.schema.js';
 import { revisionSummarySchema } from '../revisions/revision.schema.js';
 import { isoDateSchema, personRefSchema } from './person-ref.schema.js';
@@ -57,7 +58,7 @@ export type SheetDetail = z.infer<typeof sheetDetailSchema>;
 /** POST /api/sheets */
 export const createSheetSchema = z
   .object({
-    title: z.string().trim().min(3, 'at least 3 characters').max(200),
+    title: singleLineText({ min: 3, max: 200 }),
     positionId: z.string().uuid(),
     sheetType: sheetTypeIdSchema,
     criteriaSetId: z.string().min(1).max(80).optional(),

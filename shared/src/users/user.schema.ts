@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { singleLineText } from '../text/plain-text.js';
 
 export const roles = ['engineer', 'checker', 'viewer', 'admin'] as const;
 export const roleSchema = z.enum(roles);
@@ -15,12 +16,12 @@ export const userSchema = z.object({
 });
 export type User = z.infer<typeof userSchema>;
 
-const password = z.string().min(12, 'at least 12 characters').max(200);
+const password = z.string().min(12, 'at least 12 characters').max(200, 'at most 200 characters');
 
 export const createUserSchema = z
   .object({
     email: z.string().trim().toLowerCase().email('not a valid e-mail address'),
-    displayName: z.string().trim().min(2, 'at least 2 characters').max(120),
+    displayName: singleLineText({ min: 2, max: 120 }),
     initials: z
       .string()
       .trim()
@@ -33,7 +34,7 @@ export type CreateUserInput = z.infer<typeof createUserSchema>;
 
 export const updateUserSchema = z
   .object({
-    displayName: z.string().trim().min(2).max(120).optional(),
+    displayName: singleLineText({ min: 2, max: 120 }).optional(),
     initials: z
       .string()
       .trim()

@@ -32,6 +32,12 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
           lazy: lazyRoute(() => import('./routes/auth/sign-in'), queryClient),
         },
         {
+          // Public: the one-time link from an admin password reset.
+          path: 'reset-password',
+          handle: { title: 'Set a new password' },
+          lazy: lazyRoute(() => import('./routes/auth/reset-password'), queryClient),
+        },
+        {
           // Public: checking a printout needs no sign-in.
           path: 'verify/:code?',
           lazy: lazyRoute(() => import('./routes/verify/verify-page'), queryClient),
@@ -50,6 +56,16 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                   path: 'admin/users',
                   handle: { title: 'Users' },
                   lazy: lazyRoute(() => import('./routes/admin/users'), queryClient),
+                },
+                {
+                  path: 'admin/mail',
+                  handle: { title: 'Undelivered mail' },
+                  lazy: lazyRoute(() => import('./routes/admin/mail'), queryClient),
+                },
+                {
+                  path: 'account',
+                  handle: { title: 'Your account' },
+                  lazy: lazyRoute(() => import('./routes/account/account'), queryClient),
                 },
                 {
                   path: '*',

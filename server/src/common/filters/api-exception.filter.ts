@@ -7,11 +7,17 @@ import {
   type ExceptionFilter,
 } from '@nestjs/common';
 import { ThrottlerException } from '@nestjs/throttler';
-import { toFieldIssues, type ApiError, type ErrorCode } from '@holdfast/shared';
+import {
+  MAX_ATTACHMENT_BYTES,
+  toFieldIssues,
+  type ApiError,
+  type ErrorCode,
+} from '@holdfast/shared';
 import type { Request, Response } from 'express';
 import { ZodError } from 'zod';
 import { ApiException } from '../errors/api-exception.js';
 import { DATABASE_RETRY_AFTER_SECONDS, mapPostgresError } from '../errors/postgres-errors.js';
+import { JSON_BODY_LIMIT_BYTES } from '../../http/body-limits.js';
 
 const codeByStatus: Record<number, ErrorCode> = {
   400: 'validation_failed',
@@ -37,6 +43,21 @@ function isExposedHttpError(e: unknown): e is { status: number; message: string;
     typeof (e as { status?: unknown }).status === 'number' &&
     (e as { expose?: unknown }).expose === true
   );
+}
+
+/** multer's "File too large" is the upload limit; anything else is the 1 MB JSON body limit. */
+function tooLarge(message: string) {
+  const upload = message === 'File too large';
+  const limit = upload ? MAX_ATTACHMENT_BYTES : JSON_BODY_LIMIT_BYTES;
+  const mb = `${limit / 1024 / 1024} MB`;
+  const error: ApiError['error'] = {
+    code: 'payload_too_large',
+    message: upload
+      ? `The file is too large (limit ${mb} per file).`
+      : `The request body is too large (limit ${mb}).`,
+    details: { limitBytes: limit },
+  };
+  return { status: 413, body: { error } };
 }
 
 /**
@@ -99,8 +120,7 @@ export class ApiExceptionFilter implements ExceptionFilter {
           `No API route ${req.method} ${req.originalUrl.split('?')[0]}.`,
         );
       }
-      if (status === 413)
-        return make(413, 'payload_too_large', 'The request body is too large (limit 1 MB).');
+      if (status === 413) return tooLarge(exception.message);
       if (
         status === 400 &&
         exception instanceof BadRequestException &&
@@ -116,7 +136,7 @@ export class ApiExceptionFilter implements ExceptionFilter {
       const status = exception.status;
       const message =
         exception.type === 'entity.too.large'
-          ? 'The request body is too large.'
+          ? `The request body is too large (limit ${JSON_BODY_LIMIT_BYTES / 1024 / 1024} MB).`
           : exception.type === 'entity.parse.failed'
             ? 'The request body is not valid JSON.'
             : exception.message;

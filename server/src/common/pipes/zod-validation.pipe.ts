@@ -1,5 +1,5 @@
 import { Injectable, type PipeTransform } from '@nestjs/common';
-import { toFieldIssues } from '@holdfast/shared';
+import { findNul, toFieldIssues } from '@holdfast/shared';
 import type { z } from 'zod';
 import { badRequest } from '../errors/api-exception.js';
 
@@ -18,12 +18,21 @@ export class ZodValidationPipe<S extends z.ZodType> implements PipeTransform<unk
   ) {}
 
   transform(value: unknown): z.output<S> {
+    // PostgreSQL stores no NUL in text or jsonb: refuse it anywhere, free JSON included.
+    const nulAt = findNul(value);
+    if (nulAt) {
+      throw badRequest('Some fields are not valid.', [
+        { path: this.prefixed(nulAt), message: 'must not contain control characters' },
+      ]);
+    }
     const result = this.schema.safeParse(value);
     if (result.success) return result.data;
-    const fields = toFieldIssues(result.error).map((f) => ({
-      ...f,
-      path: this.prefix ? (f.path === '(body)' ? this.prefix : `${this.prefix}.${f.path}`) : f.path,
-    }));
+    const fields = toFieldIssues(result.error).map((f) => ({ ...f, path: this.prefixed(f.path) }));
     throw badRequest('Some fields are not valid.', fields);
+  }
+
+  private prefixed(path: string): string {
+    if (!this.prefix) return path;
+    return path === '(body)' ? this.prefix : `${this.prefix}.${path}`;
   }
 }

@@ -4,6 +4,7 @@ import { IconCircleCheck, IconCircleOff } from '@tabler/icons-react';
 import type { Role, User } from '@holdfast/shared';
 import { errorMessage } from '../../../lib/api-error';
 import { useUpdateUser, type UpdateUserVariables } from '../api/update-user';
+import { ResetPasswordButton } from './reset-password-button';
 import { roleOptions } from './role-options';
 import classes from './users-table.module.css';
 
@@ -40,7 +41,7 @@ export function UsersTable({ users, currentUserId }: { users: User[]; currentUse
   const busy = (user: User) => update.isPending && update.variables?.id === user.id;
 
   return (
-    <Table.ScrollContainer minWidth={720}>
+    <Table.ScrollContainer minWidth={840}>
       <Table verticalSpacing="xs" highlightOnHover className={classes.table}>
         <Table.Thead>
           <Table.Tr>
@@ -48,7 +49,7 @@ export function UsersTable({ users, currentUserId }: { users: User[]; currentUse
             <Table.Th>E-mail</Table.Th>
             <Table.Th w={170}>Role</Table.Th>
             <Table.Th w={140}>Status</Table.Th>
-            <Table.Th w={130}>
+            <Table.Th w={250}>
               <span className={classes.srOnly}>Actions</span>
             </Table.Th>
           </Table.Tr>
@@ -99,22 +100,25 @@ export function UsersTable({ users, currentUserId }: { users: User[]; currentUse
                 </Table.Td>
                 <Table.Td>
                   {self ? null : (
-                    <Button
-                      size="xs"
-                      variant={user.active ? 'default' : 'light'}
-                      color={user.active ? undefined : 'steel'}
-                      loading={busy(user)}
-                      onClick={() =>
-                        change(
-                          user,
-                          { active: !user.active },
-                          user.active ? 'User deactivated' : 'User reactivated',
-                        )
-                      }
-                      aria-label={`${user.active ? 'Deactivate' : 'Reactivate'} ${user.displayName}`}
-                    >
-                      {user.active ? 'Deactivate' : 'Reactivate'}
-                    </Button>
+                    <Group gap={6} wrap="nowrap">
+                      <ResetPasswordButton user={user} />
+                      <Button
+                        size="xs"
+                        variant={user.active ? 'default' : 'light'}
+                        color={user.active ? undefined : 'steel'}
+                        loading={busy(user)}
+                        onClick={() =>
+                          change(
+                            user,
+                            { active: !user.active },
+                            user.active ? 'User deactivated' : 'User reactivated',
+                          )
+                        }
+                        aria-label={`${user.active ? 'Deactivate' : 'Reactivate'} ${user.displayName}`}
+                      >
+                        {user.active ? 'Deactivate' : 'Reactivate'}
+                      </Button>
+                    </Group>
                   )}
                 </Table.Td>
               </Table.Tr>

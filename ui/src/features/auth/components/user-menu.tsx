@@ -1,6 +1,7 @@
 import { Avatar, Group, Menu, SegmentedControl, Stack, Text, UnstyledButton } from '@mantine/core';
 import { notifications } from '@mantine/notifications';
-import { IconChevronDown, IconLogout, IconRulerMeasure } from '@tabler/icons-react';
+import { IconChevronDown, IconKey, IconLogout, IconRulerMeasure } from '@tabler/icons-react';
+import { Link } from 'react-router-dom';
 import type { User } from '@holdfast/shared';
 import { RoleBadge } from '../../../components/role-badge';
 import { errorMessage } from '../../../lib/api-error';
@@ -86,6 +87,9 @@ export function UserMenu() {
           </Text>
         </Stack>
         <Menu.Divider />
+        <Menu.Item component={Link} to="/account" leftSection={<IconKey size={16} aria-hidden />}>
+          Account and password
+        </Menu.Item>
         <Menu.Item
           leftSection={<IconLogout size={16} aria-hidden />}
           onClick={() => signOut.mutate()}
