@@ -1,31 +1,60 @@
-import { Injectable, NotFoundException, type OnModuleInit } from '@nestjs/common';
+import {
+  Injectable,
+  NotFoundException,
+  type OnApplicationBootstrap,
+  type OnModuleDestroy,
+} from '@nestjs/common';
+import { createHash } from 'node:crypto';
 import { getSheetType } from '@holdfast/calc';
 import type { PrintQuery } from '@holdfast/shared';
 import type { AuthUser } from '../auth/auth-user.js';
+import { ApiException } from '../common/errors/api-exception.js';
 import { AppConfig } from '../config/app-config.js';
 import { CriteriaService } from '../criteria/criteria.service.js';
 import { RevisionsService } from '../revisions/revisions.service.js';
 import { SheetsService } from '../sheets/sheets.service.js';
 import { buildPrintableSheet } from './build-printable-sheet.js';
-import { renderFieldCardPdf, renderSheetPdf, warmUpPdfRenderer } from './render.js';
+import { PdfCache } from './pdf-cache.js';
+import { loadPrintSettings } from './print-settings.js';
+import type { PrintableSheet } from './printable-sheet.js';
+import { RenderPool, RenderQueueFullError, type PrintKind } from './render-pool.js';
+import { PerUserLimit } from './user-limit.js';
 
-export type PrintKind = 'sheet' | 'field-card';
+export type { PrintKind } from './render-pool.js';
 
 export interface PrintedFile {
   bytes: Buffer;
   fileName: string;
 }
 
-const CACHE_SIZE = 32;
+/** A print refused for now; the controller answers it with a Retry-After header. */
+export class PrintBusyException extends ApiException {
+  constructor(
+    status: 429 | 503,
+    message: string,
+    readonly retryAfterSeconds: number,
+  ) {
+    super(status, status === 429 ? 'too_many_requests' : 'service_unavailable', message);
+  }
+}
 
 /**
- * Loads a revision through the sheets services (which enforce who may read it) and renders it.
- * Approved and superseded revisions never change, so their PDFs are kept in a small cache keyed
- * by everything that shows on the page; drafts are rendered every time.
+ * Loads a revision through the sheets services (which enforce who may read it) and renders it on
+ * the worker pool. Rendered PDFs are cached under the revision, its row version and a digest of
+ * everything printed (drafts too: a saved change bumps the row version, a renamed sheet changes
+ * the digest). Each user may have a few renders running or waiting; past that, 429.
  */
 @Injectable()
-export class PrintService implements OnModuleInit {
-  private readonly cache = new Map<string, Buffer>();
+export class PrintService implements OnApplicationBootstrap, OnModuleDestroy {
+  private readonly settings = loadPrintSettings();
+  private readonly pool = new RenderPool(
+    this.settings.PRINT_WORKERS,
+    this.settings.PRINT_QUEUE_LIMIT,
+  );
+  private readonly cache = new PdfCache(this.settings.PRINT_CACHE_MB * 1024 * 1024);
+  private readonly perUser = new PerUserLimit(this.settings.PRINT_USER_LIMIT);
+  /** Renders in progress by cache key: a second request for the same PDF waits for the first. */
+  private readonly rendering = new Map<string, Promise<Buffer>>();
 
   constructor(
     private readonly revisions: RevisionsService,
@@ -34,9 +63,14 @@ export class PrintService implements OnModuleInit {
     private readonly config: AppConfig,
   ) {}
 
-  onModuleInit(): void {
-    // Font parsing takes a few hundred ms: do it before the first request, off the start path.
-    void warmUpPdfRenderer().catch(() => undefined);
+  onApplicationBootstrap(): void {
+    // Threads load their fonts at start-up rather than on the first print; test apps, which
+    // mostly never print, start them on demand.
+    if (process.env.NODE_ENV !== 'test') this.pool.start();
+  }
+
+  async onModuleDestroy(): Promise<void> {
+    await this.pool.close();
   }
 
   async print(
@@ -46,13 +80,7 @@ export class PrintService implements OnModuleInit {
     query: PrintQuery,
   ): Promise<PrintedFile> {
     const revision = await this.revisions.get(user, id);
-    const frozen = revision.state === 'approved' || revision.state === 'superseded';
-    const key = [kind, id, revision.state, revision.supersededBy?.label ?? '', query.paper].join(
-      '|',
-    );
     const fileName = `${revision.documentNumber}-rev-${revision.label}${kind === 'field-card' ? '-field-card' : ''}.pdf`;
-    const hit = frozen ? this.cache.get(key) : undefined;
-    if (hit) return { bytes: hit, fileName };
 
     const sheetType = getSheetType(revision.sheetType);
     if (!sheetType)
@@ -69,12 +97,53 @@ export class PrintService implements OnModuleInit {
       verifyBaseUrl: this.config.settings.PUBLIC_URL,
       paper: query.paper,
     });
-    const bytes =
-      kind === 'sheet' ? await renderSheetPdf(printable) : await renderFieldCardPdf(printable);
-    if (frozen) {
-      if (this.cache.size >= CACHE_SIZE) this.cache.delete(this.cache.keys().next().value!);
-      this.cache.set(key, bytes);
-    }
+    const key = cacheKey(kind, id, revision.rowVersion, printable);
+    const bytes = this.cache.get(key) ?? (await this.render(user, key, kind, printable));
     return { bytes, fileName };
   }
+
+  private async render(
+    user: AuthUser,
+    key: string,
+    kind: PrintKind,
+    sheet: PrintableSheet,
+  ): Promise<Buffer> {
+    const release = this.perUser.acquire(user.id);
+    if (!release) {
+      throw new PrintBusyException(
+        429,
+        `You have ${this.perUser.limit} PDFs being prepared already. Wait for them, then try again.`,
+        this.pool.retryAfterSeconds(this.perUser.limit),
+      );
+    }
+    try {
+      let job = this.rendering.get(key);
+      if (!job) {
+        job = this.pool.render({ kind, sheet }).finally(() => this.rendering.delete(key));
+        this.rendering.set(key, job);
+      }
+      const bytes = await job;
+      this.cache.set(key, bytes);
+      return bytes;
+    } catch (e) {
+      if (e instanceof RenderQueueFullError) {
+        throw new PrintBusyException(
+          503,
+          'The server is preparing many PDFs at the moment. Try again shortly.',
+          this.pool.retryAfterSeconds(this.settings.PRINT_QUEUE_LIMIT),
+        );
+      }
+      throw e;
+    } finally {
+      release();
+    }
+  }
+}
+
+/** Everything the bytes depend on except the generation time, which a cached copy keeps. */
+function cacheKey(kind: PrintKind, id: string, rowVersion: number, sheet: PrintableSheet): string {
+  const digest = createHash('sha256')
+    .update(JSON.stringify({ ...sheet, generatedAt: '' }))
+    .digest('base64url');
+  return `${kind}|${id}|${rowVersion}|${digest}`;
 }
