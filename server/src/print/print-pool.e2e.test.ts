@@ -2,8 +2,10 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import {
   createSheet,
   createSheetsContext,
+  approve,
   getRevision,
   makeRegister,
+  submit,
   type SheetsContext,
 } from '../../test/sheets-fixture.js';
 
@@ -73,5 +75,13 @@ describe('print pool, limit and cache', () => {
     const afterSave = await pdf();
     expect(afterSave.equals(first)).toBe(false);
     expect((await pdf()).equals(afterSave)).toBe(true);
+
+    // Approved: found by revision and row version before the sheet is loaded again.
+    await submit(ctx, id);
+    await approve(ctx, id);
+    const approved = await pdf();
+    expect(approved.equals(afterSave)).toBe(false);
+    await new Promise((r) => setTimeout(r, 1100));
+    expect((await pdf()).equals(approved)).toBe(true);
   }, 300_000);
 });

@@ -40,9 +40,8 @@ export class PrintBusyException extends ApiException {
 
 /**
  * Loads a revision through the sheets services (which enforce who may read it) and renders it on
- * the worker pool. Rendered PDFs are cached under the revision, its row version and a digest of
- * everything printed (drafts too: a saved change bumps the row version, a renamed sheet changes
- * the digest). Each user may have a few renders running or waiting; past that, 429.
+ * the worker pool. Rendered PDFs are cached under the revision and its row version (drafts too,
+ * with a digest of everything printed). Each user may have a few renders running or waiting; past that, 429.
  */
 @Injectable()
 export class PrintService implements OnApplicationBootstrap, OnModuleDestroy {
@@ -82,6 +81,13 @@ export class PrintService implements OnApplicationBootstrap, OnModuleDestroy {
     const revision = await this.revisions.get(user, id);
     const fileName = `${revision.documentNumber}-rev-${revision.label}${kind === 'field-card' ? '-field-card' : ''}.pdf`;
 
+    // Approved and superseded revisions never change, nor do the earlier ones their history
+    // lists: their PDFs are found by revision and row version alone, before loading the rest.
+    const frozen = revision.state === 'approved' || revision.state === 'superseded';
+    const frozenKey = frozen ? `${kind}|${id}|${revision.rowVersion}|${query.paper}` : null;
+    const hit = frozenKey ? this.cache.get(frozenKey) : undefined;
+    if (hit) return { bytes: hit, fileName };
+
     const sheetType = getSheetType(revision.sheetType);
     if (!sheetType)
       throw new NotFoundException(`Sheet type ${revision.sheetType} is not known to this server.`);
@@ -97,7 +103,7 @@ export class PrintService implements OnApplicationBootstrap, OnModuleDestroy {
       verifyBaseUrl: this.config.settings.PUBLIC_URL,
       paper: query.paper,
     });
-    const key = cacheKey(kind, id, revision.rowVersion, printable);
+    const key = frozenKey ?? cacheKey(kind, id, revision.rowVersion, printable);
     const bytes = this.cache.get(key) ?? (await this.render(user, key, kind, printable));
     return { bytes, fileName };
   }
@@ -140,7 +146,10 @@ export class PrintService implements OnApplicationBootstrap, OnModuleDestroy {
   }
 }
 
-/** Everything the bytes depend on except the generation time, which a cached copy keeps. */
+/**
+ * A draft's key: everything printed except the generation time, which a cached copy keeps (the
+ * row version moves on every save; the digest also catches renamed people).
+ */
 function cacheKey(kind: PrintKind, id: string, rowVersion: number, sheet: PrintableSheet): string {
   const digest = createHash('sha256')
     .update(JSON.stringify({ ...sheet, generatedAt: '' }))
