@@ -132,6 +132,13 @@ async function printLoad(drafts) {
       ...(await printUnderLoad({ baseUrl: url, prints, seconds: printSeconds })),
     };
     results.print.push(r);
+    if (r.failed > 0) {
+      const errors = app
+        .output()
+        .split('\n')
+        .filter((l) => /"level":50|Error/.test(l));
+      step(`${r.failed} prints failed; the server said:\n${errors.slice(-5).join('\n')}`);
+    }
     step(
       `4 users printing drafts, ${workers || 'no'} render thread(s): ` +
         `${r.printsPerSec.toFixed(2)} prints/s (p50 ${r.printP50.toFixed(0)} ms), ` +

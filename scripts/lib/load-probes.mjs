@@ -57,22 +57,32 @@ export async function printUnderLoad({ baseUrl, prints, seconds }) {
   const printTimes = [];
   const healthTimes = [];
   let refused = 0;
+  // A server that blocks for seconds can drop a kept-alive connection as it is reused
+  // (ECONNRESET): counted, not fatal, and the health probe's time still counts.
+  let resets = 0;
+  const failed = [];
+  const timed = async (url, headers) => {
+    const t = performance.now();
+    try {
+      const res = await fetch(url, { headers });
+      await res.arrayBuffer();
+      return { status: res.status, ms: performance.now() - t };
+    } catch {
+      resets++;
+      return { status: 0, ms: performance.now() - t };
+    }
+  };
   const printer = async ({ path, token }) => {
     while (Date.now() < until) {
-      const t = performance.now();
-      const res = await fetch(baseUrl + path, { headers: { authorization: `Bearer ${token}` } });
-      await res.arrayBuffer();
-      if (res.status === 200) printTimes.push(performance.now() - t);
-      else if (res.status === 429) refused++;
-      else throw new Error(`print ${path}: ${res.status}`);
+      const r = await timed(baseUrl + path, { authorization: `Bearer ${token}` });
+      if (r.status === 200) printTimes.push(r.ms);
+      else if (r.status === 429) refused++;
+      else if (r.status !== 0) failed.push(r.status);
     }
   };
   const probe = async () => {
     while (Date.now() < until) {
-      const t = performance.now();
-      const res = await fetch(`${baseUrl}/api/health`);
-      await res.arrayBuffer();
-      healthTimes.push(performance.now() - t);
+      healthTimes.push((await timed(`${baseUrl}/api/health`, {})).ms);
       await new Promise((r) => setTimeout(r, 50));
     }
   };
@@ -87,6 +97,8 @@ export async function printUnderLoad({ baseUrl, prints, seconds }) {
     printP50: percentile(printTimes, 50),
     printP99: percentile(printTimes, 99),
     refused,
+    resets,
+    failed: failed.length,
     healthChecks: healthTimes.length,
     healthP50: percentile(healthTimes, 50),
     healthP99: percentile(healthTimes, 99),
