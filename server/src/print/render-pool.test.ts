@@ -1,6 +1,7 @@
+import { readdirSync, readFileSync } from 'node:fs';
 import { afterAll, describe, expect, it } from 'vitest';
 import { renderFieldCardPdf, renderSheetPdf } from './render.js';
-import { RenderPool } from './render-pool.js';
+import { RENDER_NICE, RenderPool } from './render-pool.js';
 import { hoistPrintable } from './testing/hoist-fixture.js';
 
 /** pdfkit stamps the creation time and a document id from the clock: the rest must match. */
@@ -30,6 +31,19 @@ describe('render pool', () => {
       stable(await renderFieldCardPdf(card)),
     );
   }, 180_000);
+
+  it.runIf(process.platform === 'linux')(
+    'runs its threads at a lower priority than the request thread',
+    () => {
+      // Field 19 of /proc/<pid>/task/<tid>/stat is the thread's nice value.
+      const nice = readdirSync('/proc/self/task').map((tid) => {
+        const stat = readFileSync(`/proc/self/task/${tid}/stat`, 'utf8');
+        return Number(stat.slice(stat.lastIndexOf(')') + 2).split(' ')[16]);
+      });
+      expect(nice).toContain(0);
+      expect(nice).toContain(RENDER_NICE);
+    },
+  );
 
   it('renders on the calling thread with no workers', async () => {
     const local = new RenderPool(0, 4);

@@ -3,6 +3,9 @@ import { fileURLToPath } from 'node:url';
 import { Piscina } from 'piscina';
 import type { PrintableSheet } from './printable-sheet.js';
 
+/** Scheduling priority of the render threads relative to the process (higher yields more). */
+export const RENDER_NICE = 10;
+
 export type PrintKind = 'sheet' | 'field-card';
 
 export interface RenderTask {
@@ -59,6 +62,9 @@ export class RenderPool {
       minThreads: this.threads,
       maxThreads: this.threads,
       maxQueue: this.queueLimit,
+      // Render threads yield the CPU to the request thread when both want it, so answers stay
+      // quick on a busy machine (Linux, through piscina's optional @napi-rs/nice).
+      niceIncrement: RENDER_NICE,
     });
     return this.pool;
   }
