@@ -1,3 +1,4 @@
+import { createSecretKey } from 'node:crypto';
 import { Module, type ExecutionContext } from '@nestjs/common';
 import type { Request } from 'express';
 import { APP_GUARD } from '@nestjs/core';
@@ -25,7 +26,9 @@ const isNotAuthRoute = (context: ExecutionContext) =>
     JwtModule.registerAsync({
       inject: [AppConfig],
       useFactory: (config: AppConfig) => ({
-        secret: config.settings.JWT_SECRET,
+        // A key object, not the string: jsonwebtoken first tries a string as a PEM public key
+        // and catches the failure, on every sign and verify (about 15 % of a signed-in request).
+        secret: createSecretKey(Buffer.from(config.settings.JWT_SECRET)),
         signOptions: { algorithm: 'HS256', expiresIn: ACCESS_TOKEN_SECONDS },
         verifyOptions: { algorithms: ['HS256'] },
       }),

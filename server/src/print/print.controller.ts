@@ -1,11 +1,17 @@
-import { Controller, Get, Param, Query, StreamableFile } from '@nestjs/common';
+import { Controller, Get, Param, Query, Res, StreamableFile } from '@nestjs/common';
 import { ApiBearerAuth, ApiProduces, ApiTags } from '@nestjs/swagger';
 import { printQuerySchema, type PrintQuery } from '@holdfast/shared';
+import type { Response } from 'express';
 import { CurrentUser, type AuthUser } from '../auth/auth-user.js';
 import { SignedIn } from '../auth/policy.js';
 import { UuidParamPipe } from '../common/pipes/uuid-param.pipe.js';
 import { ZodValidationPipe } from '../common/pipes/zod-validation.pipe.js';
-import { PrintService, type PrintedFile } from './print.service.js';
+import {
+  PrintBusyException,
+  PrintService,
+  type PrintKind,
+  type PrintedFile,
+} from './print.service.js';
 
 const pdf = (f: PrintedFile) =>
   new StreamableFile(f.bytes, {
@@ -21,6 +27,20 @@ const pdf = (f: PrintedFile) =>
 export class PrintController {
   constructor(private readonly print: PrintService) {}
 
+  /** A refused print says when to come back (Retry-After, seconds). */
+  private async printed(
+    res: Response,
+    ...args: [AuthUser, string, PrintKind, PrintQuery]
+  ): Promise<PrintedFile> {
+    try {
+      return await this.print.print(...args);
+    } catch (e) {
+      if (e instanceof PrintBusyException)
+        res.setHeader('Retry-After', String(e.retryAfterSeconds));
+      throw e;
+    }
+  }
+
   @Get(':id/pdf')
   @SignedIn()
   @ApiProduces('application/pdf')
@@ -28,8 +48,9 @@ export class PrintController {
     @CurrentUser() user: AuthUser,
     @Param('id', UuidParamPipe) id: string,
     @Query(new ZodValidationPipe(printQuerySchema)) query: PrintQuery,
+    @Res({ passthrough: true }) res: Response,
   ): Promise<StreamableFile> {
-    return pdf(await this.print.print(user, id, 'sheet', query));
+    return pdf(await this.printed(res, user, id, 'sheet', query));
   }
 
   @Get(':id/field-card')
@@ -39,7 +60,8 @@ export class PrintController {
     @CurrentUser() user: AuthUser,
     @Param('id', UuidParamPipe) id: string,
     @Query(new ZodValidationPipe(printQuerySchema)) query: PrintQuery,
+    @Res({ passthrough: true }) res: Response,
   ): Promise<StreamableFile> {
-    return pdf(await this.print.print(user, id, 'field-card', query));
+    return pdf(await this.printed(res, user, id, 'field-card', query));
   }
 }

@@ -1,7 +1,14 @@
-import { Injectable, NotFoundException, type OnModuleInit } from '@nestjs/common';
+import {
+  Injectable,
+  NotFoundException,
+  type OnApplicationBootstrap,
+  type OnModuleDestroy,
+} from '@nestjs/common';
+import { createHash } from 'node:crypto';
 import { getSheetType } from '@holdfast/calc';
 import type { PrintQuery } from '@holdfast/shared';
 import type { AuthUser } from '../auth/auth-user.js';
+import { ApiException } from '../common/errors/api-exception.js';
 import { AppConfig } from '../config/app-config.js';
 import { CriteriaService } from '../criteria/criteria.service.js';
 import { ReviewsRepository } from '../reviews/reviews.repository.js';
@@ -10,25 +17,46 @@ import type { PrintCriteriaReview, PrintCriterion } from './printable-sheet.js';
 import { RevisionsService } from '../revisions/revisions.service.js';
 import { SheetsService } from '../sheets/sheets.service.js';
 import { buildPrintableSheet } from './build-printable-sheet.js';
-import { renderFieldCardPdf, renderSheetPdf, warmUpPdfRenderer } from './render.js';
+import { PdfCache } from './pdf-cache.js';
+import { loadPrintSettings } from './print-settings.js';
+import type { PrintableSheet } from './printable-sheet.js';
+import { RenderPool, RenderQueueFullError, type PrintKind } from './render-pool.js';
+import { PerUserLimit } from './user-limit.js';
 
-export type PrintKind = 'sheet' | 'field-card';
+export type { PrintKind } from './render-pool.js';
 
 export interface PrintedFile {
   bytes: Buffer;
   fileName: string;
 }
 
-const CACHE_SIZE = 32;
+/** A print refused for now; the controller answers it with a Retry-After header. */
+export class PrintBusyException extends ApiException {
+  constructor(
+    status: 429 | 503,
+    message: string,
+    readonly retryAfterSeconds: number,
+  ) {
+    super(status, status === 429 ? 'too_many_requests' : 'service_unavailable', message);
+  }
+}
 
 /**
- * Loads a revision through the sheets services (which enforce who may read it) and renders it.
- * Approved and superseded revisions never change, so their PDFs are kept in a small cache keyed
- * by everything that shows on the page; drafts are rendered every time.
+ * Loads a revision through the sheets services (which enforce who may read it) and renders it on
+ * the worker pool. Rendered PDFs are cached under the revision and its row version (drafts too,
+ * with a digest of everything printed). Each user may have a few renders running or waiting; past that, 429.
  */
 @Injectable()
-export class PrintService implements OnModuleInit {
-  private readonly cache = new Map<string, Buffer>();
+export class PrintService implements OnApplicationBootstrap, OnModuleDestroy {
+  private readonly settings = loadPrintSettings();
+  private readonly pool = new RenderPool(
+    this.settings.PRINT_WORKERS,
+    this.settings.PRINT_QUEUE_LIMIT,
+  );
+  private readonly cache = new PdfCache(this.settings.PRINT_CACHE_MB * 1024 * 1024);
+  private readonly perUser = new PerUserLimit(this.settings.PRINT_USER_LIMIT);
+  /** Renders in progress by cache key: a second request for the same PDF waits for the first. */
+  private readonly rendering = new Map<string, Promise<Buffer>>();
 
   constructor(
     private readonly revisions: RevisionsService,
@@ -38,9 +66,14 @@ export class PrintService implements OnModuleInit {
     private readonly reviews: ReviewsRepository,
   ) {}
 
-  onModuleInit(): void {
-    // Font parsing takes a few hundred ms: do it before the first request, off the start path.
-    void warmUpPdfRenderer().catch(() => undefined);
+  onApplicationBootstrap(): void {
+    // Threads load their fonts at start-up rather than on the first print; test apps, which
+    // mostly never print, start them on demand.
+    if (process.env.NODE_ENV !== 'test') this.pool.start();
+  }
+
+  async onModuleDestroy(): Promise<void> {
+    await this.pool.close();
   }
 
   async print(
@@ -56,18 +89,16 @@ export class PrintService implements OnModuleInit {
       revision.criteriaSetId,
       revision.criteriaSetVersion,
     );
-    // A new flag or disposition changes the print of a frozen revision: it is part of the key.
-    const key = [
-      kind,
-      id,
-      revision.state,
-      revision.supersededBy?.label ?? '',
-      query.paper,
-      JSON.stringify(criteriaReviews),
-      JSON.stringify(confirmations),
-    ].join('|');
     const fileName = `${revision.documentNumber}-rev-${revision.label}${kind === 'field-card' ? '-field-card' : ''}.pdf`;
-    const hit = frozen ? this.cache.get(key) : undefined;
+
+    // Approved and superseded revisions never change, nor do the earlier ones their history
+    // lists: their PDFs are found by revision and row version before loading the rest. What can
+    // still change their print (a criteria flag or its disposition, a confirmed value) is part of
+    // the key.
+    const frozenKey = frozen
+      ? `${kind}|${id}|${revision.rowVersion}|${query.paper}|${digestOf([criteriaReviews, confirmations])}`
+      : null;
+    const hit = frozenKey ? this.cache.get(frozenKey) : undefined;
     if (hit) return { bytes: hit, fileName };
 
     const sheetType = getSheetType(revision.sheetType);
@@ -87,12 +118,8 @@ export class PrintService implements OnModuleInit {
     });
     printable.criteriaReviews = criteriaReviews;
     printable.criteria.values = withConfirmations(printable.criteria.values, confirmations);
-    const bytes =
-      kind === 'sheet' ? await renderSheetPdf(printable) : await renderFieldCardPdf(printable);
-    if (frozen) {
-      if (this.cache.size >= CACHE_SIZE) this.cache.delete(this.cache.keys().next().value!);
-      this.cache.set(key, bytes);
-    }
+    const key = frozenKey ?? cacheKey(kind, id, revision.rowVersion, printable);
+    const bytes = this.cache.get(key) ?? (await this.render(user, key, kind, printable));
     return { bytes, fileName };
   }
 
@@ -118,6 +145,52 @@ export class PrintService implements OnModuleInit {
       },
     );
   }
+
+  private async render(
+    user: AuthUser,
+    key: string,
+    kind: PrintKind,
+    sheet: PrintableSheet,
+  ): Promise<Buffer> {
+    const release = this.perUser.acquire(user.id);
+    if (!release) {
+      throw new PrintBusyException(
+        429,
+        `You have ${this.perUser.limit} PDFs being prepared already. Wait for them, then try again.`,
+        this.pool.retryAfterSeconds(this.perUser.limit),
+      );
+    }
+    try {
+      let job = this.rendering.get(key);
+      if (!job) {
+        job = this.pool.render({ kind, sheet }).finally(() => this.rendering.delete(key));
+        this.rendering.set(key, job);
+      }
+      const bytes = await job;
+      this.cache.set(key, bytes);
+      return bytes;
+    } catch (e) {
+      if (e instanceof RenderQueueFullError) {
+        throw new PrintBusyException(
+          503,
+          'The server is preparing many PDFs at the moment. Try again shortly.',
+          this.pool.retryAfterSeconds(this.settings.PRINT_QUEUE_LIMIT),
+        );
+      }
+      throw e;
+    } finally {
+      release();
+    }
+  }
+}
+
+/**
+ * A draft's key: everything printed except the generation time, which a cached copy keeps (the
+ * row version moves on every save; the digest also catches renamed people).
+ */
+function cacheKey(kind: PrintKind, id: string, rowVersion: number, sheet: PrintableSheet): string {
+  const digest = digestOf({ ...sheet, generatedAt: '' });
+  return `${kind}|${id}|${rowVersion}|${digest}`;
 }
 
 /** Each value with the document that confirms it, if any. */
@@ -139,4 +212,8 @@ function withConfirmations(
         }
       : v;
   });
+}
+
+function digestOf(value: unknown): string {
+  return createHash('sha256').update(JSON.stringify(value)).digest('base64url');
 }
