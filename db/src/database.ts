@@ -20,6 +20,7 @@ export type Timestamp = ColumnType<Date, Date | string, Date | string>;
 
 export type RoleValue = 'engineer' | 'checker' | 'viewer' | 'admin';
 export type UnitSystemValue = 'SI' | 'US';
+export type NumberFormatValue = 'point' | 'comma';
 
 export interface UsersTable {
   id: Generated<string>;
@@ -32,6 +33,8 @@ export interface UsersTable {
   passwordHash: string;
   active: Generated<boolean>;
   unitSystem: Generated<UnitSystemValue>;
+  /** Decimal separator the user types: 'point' (2.5) or 'comma' (2,5). */
+  numberFormat: Generated<NumberFormatValue>;
   createdAt: CreatedAt;
   updatedAt: UpdatedAt;
 }

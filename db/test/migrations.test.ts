@@ -15,6 +15,7 @@ const usersKeys: Record<keyof UsersTable, true> = {
   passwordHash: true,
   active: true,
   unitSystem: true,
+  numberFormat: true,
   createdAt: true,
   updatedAt: true,
 };

@@ -1,4 +1,4 @@
-import { useState, type ReactNode } from 'react';
+import { useMemo, useState, type ReactNode } from 'react';
 import {
   Alert,
   Box,
@@ -16,6 +16,8 @@ import type { Revision } from '@holdfast/shared';
 import { InputSections } from '../../calc/components/input-sections';
 import { ResultsPanel } from '../../calc/components/results-panel';
 import { useLiveEvaluation } from '../../calc/hooks/use-live-evaluation';
+import { useNumberFormat } from '../../calc/hooks/use-number-format';
+import { fieldMessages } from '../../calc/utils/field-check';
 import type { UnitSystem } from '../../calc/utils/units';
 import { useRevisionDraft } from '../hooks/use-revision-draft';
 import { ConflictDialog } from './conflict-dialog';
@@ -60,7 +62,22 @@ export function RevisionWorkbench(props: RevisionWorkbenchProps) {
   // Frozen revisions show the evaluation the server stored at submission: that is the record.
   const stored = !editable && revision.evaluation ? revision.evaluation : null;
   const evaluation = stored ?? live.evaluation;
-  const errors = { ...autosave.serverErrors, ...live.fieldErrors };
+  // Field messages in the field's own unit and the user's number format (not the core's SI text).
+  const format = useNumberFormat();
+  const { serverErrors } = autosave;
+  const coreErrors = live.fieldErrors;
+  const errors = useMemo(
+    () =>
+      editable
+        ? fieldMessages(
+            sheetType.fields,
+            content.inputs,
+            { ...serverErrors, ...coreErrors },
+            format,
+          )
+        : { ...serverErrors, ...coreErrors },
+    [editable, sheetType, content.inputs, serverErrors, coreErrors, format],
+  );
   const invalidCount = Object.keys(errors).length;
 
   return (
