@@ -4,6 +4,8 @@ import {
   getSheetType,
   isCalcInputError as calcInputErrorGuard,
   type CriteriaSet,
+  type FieldDefinition,
+  type InputValue,
   type SheetEvaluation,
   type SheetInputs,
   type SheetTypeDefinition,
@@ -54,6 +56,46 @@ export function defaultInputs(sheetType: string): SheetInputs {
   return Object.fromEntries(
     def.fields.map((f) => [f.key, structuredClone(f.default)]),
   ) as SheetInputs;
+}
+
+/**
+ * How a field starts on a new sheet: whether the engineer must enter it (blank on an empty sheet)
+ * and its example value. Today every number and quantity is required and the field default is the
+ * example; this one adapter is where sheet definitions that declare `required` and demo values
+ * per field plug in.
+ */
+export function fieldStart(field: FieldDefinition): { required: boolean; example: InputValue } {
+  return { required: field.kind !== 'choice' && field.kind !== 'boolean', example: field.default };
+}
+
+/**
+ * The inputs of a new sheet and the fields left unconfirmed. Empty: required fields blank, the
+ * rest (choices, flags) at their example value and unconfirmed. Example: every field at its
+ * example value and every one unconfirmed.
+ */
+export function startingInputs(
+  sheetType: string,
+  kind: 'empty' | 'example',
+): { inputs: SheetInputs; unconfirmed: string[] } {
+  const inputs: SheetInputs = {};
+  const unconfirmed: string[] = [];
+  for (const f of sheetTypeDefinition(sheetType).fields) {
+    const start = fieldStart(f);
+    if (kind === 'empty' && start.required) {
+      inputs[f.key] = '';
+    } else {
+      inputs[f.key] = structuredClone(start.example);
+      unconfirmed.push(f.key);
+    }
+  }
+  return { inputs, unconfirmed };
+}
+
+/** Keys of fields left blank (a draft may be saved incomplete; submit refuses it). */
+export function blankFields(inputs: SheetInputs): string[] {
+  return Object.entries(inputs)
+    .filter(([, v]) => v === '' || (typeof v === 'string' && v.trim() === ''))
+    .map(([k]) => k);
 }
 
 /** Current calculation-core version (stored with each evaluation). */

@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import type { SheetInputs } from '@holdfast/calc';
-import type { Revision, SaveRevisionInput } from '@holdfast/shared';
+import { canonicalJson, type Revision, type SaveRevisionInput } from '@holdfast/shared';
 import type { Kysely } from 'kysely';
 import type { DB } from '@holdfast/db';
 import type { AuthUser } from '../auth/auth-user.js';
@@ -12,7 +12,7 @@ import { canCheck, canEdit, canReadContent, isEditableState } from './revision-a
 import { toRevision } from './revision-mapper.js';
 import { RevisionsRepository, type RevisionWithSheet } from './revisions.repository.js';
 import { evaluateOrReject } from './evaluate.js';
-import { coreVersion } from './calc-engine.js';
+import { blankFields, coreVersion } from './calc-engine.js';
 
 @Injectable()
 export class RevisionsService {
@@ -75,7 +75,16 @@ export class RevisionsService {
       this.assertEditable(user, rev, input.rowVersion);
       const criteriaSetId = input.criteriaSetId ?? rev.criteriaSetId;
       const criteria = await this.criteria.load(criteriaSetId, 'latest', trx);
-      const evaluation = evaluateOrReject(rev.sheetType, input.inputs as SheetInputs, criteria);
+      const inputs = input.inputs as SheetInputs;
+      // A draft may be saved with fields still blank: the rest is checked (blanks read as their
+      // defaults only for that check), and there is no preview until every field is filled.
+      const blanks = blankFields(inputs);
+      const withoutBlanks = Object.fromEntries(
+        Object.entries(inputs).filter(([k]) => !blanks.includes(k)),
+      ) as SheetInputs;
+      const checked = evaluateOrReject(rev.sheetType, withoutBlanks, criteria);
+      const evaluation = blanks.length === 0 ? checked : null;
+      const unconfirmed = stillUnconfirmed(rev, inputs, input.unconfirmed);
       await trx
         .updateTable('revisions')
         .set({
@@ -84,8 +93,9 @@ export class RevisionsService {
           changeNote: input.changeNote,
           criteriaSetId,
           criteriaSetVersion: criteria.version,
-          evaluation: JSON.stringify(evaluation),
-          coreVersion: coreVersion(),
+          evaluation: evaluation ? JSON.stringify(evaluation) : null,
+          coreVersion: evaluation ? coreVersion() : null,
+          unconfirmed: JSON.stringify(unconfirmed),
           // A returned revision's old hash and code no longer describe it.
           hash: null,
           verificationCode: null,
@@ -115,6 +125,7 @@ export class RevisionsService {
           unitSystem: input.unitSystem,
           changeNote: input.changeNote,
           criteriaSet: `${criteriaSetId}@${criteria.version}`,
+          ...(unconfirmed.length !== storedUnconfirmed(rev).length ? { unconfirmed } : {}),
         },
       });
     });
@@ -132,6 +143,28 @@ export function assertRowVersion(
       { currentRowVersion: rev.rowVersion },
     );
   }
+}
+
+export function storedUnconfirmed(rev: { unconfirmed: unknown }): string[] {
+  return Array.isArray(rev.unconfirmed) ? (rev.unconfirmed as string[]) : [];
+}
+
+/**
+ * The unconfirmed fields after a save. The list only shrinks: a key stays when it was unconfirmed
+ * before, its value did not change, and the author did not confirm it (left out of `kept`).
+ */
+export function stillUnconfirmed(
+  rev: { unconfirmed: unknown; inputs: unknown },
+  inputs: SheetInputs,
+  kept: string[] | undefined,
+): string[] {
+  const before = storedUnconfirmed(rev);
+  const old = (rev.inputs ?? {}) as SheetInputs;
+  const keep = kept ? new Set(kept) : null;
+  return before.filter(
+    // Canonical text: jsonb hands back object keys in its own order.
+    (k) => (!keep || keep.has(k)) && canonicalJson(old[k]) === canonicalJson(inputs[k]),
+  );
 }
 
 /** What an audit entry records of a revision before a change. */

@@ -15,13 +15,18 @@ import { Database } from '../database/database.js';
 import { AuditService } from '../audit/audit.service.js';
 import { CriteriaService } from '../criteria/criteria.service.js';
 import { OutboxService } from '../outbox/outbox.service.js';
-import { coreVersion } from './calc-engine.js';
+import { coreVersion, fieldLabel } from './calc-engine.js';
 import { evaluateOrReject } from './evaluate.js';
 import { approvedMail, returnedMail, submittedMail } from './notifications.js';
 import { canCheck } from './revision-access.js';
 import { contentHash, newVerificationCode } from './revision-codes.js';
 import { RevisionsRepository, type RevisionWithSheet } from './revisions.repository.js';
-import { assertRowVersion, RevisionsService, snapshot } from './revisions.service.js';
+import {
+  assertRowVersion,
+  RevisionsService,
+  snapshot,
+  storedUnconfirmed,
+} from './revisions.service.js';
 
 /**
  * The check-and-approve workflow: draft/returned → in check → approved (previous approved →
@@ -55,6 +60,16 @@ export class WorkflowService {
     await this.db.transaction().execute(async (trx) => {
       const rev = await this.revisions.load(user, id, trx, true);
       this.revisions.assertEditable(user, rev, input.rowVersion);
+      const unconfirmed = storedUnconfirmed(rev);
+      if (unconfirmed.length > 0) {
+        throw badRequest(
+          `${unconfirmed.length} value(s) came with the sheet and were never confirmed: enter this brake's value or confirm each one.`,
+          unconfirmed.map((k) => ({
+            path: `inputs.${k}`,
+            message: `not confirmed: ${fieldLabel(rev.sheetType, k)}`,
+          })),
+        );
+      }
       const criteria = await this.criteria.load(rev.criteriaSetId, 'latest', trx);
       const evaluation = evaluateOrReject(rev.sheetType, rev.inputs as SheetInputs, criteria);
       const failing = evaluation.checks.filter((c) => !c.pass);
