@@ -11,7 +11,9 @@ const SPRING = /^Main spring force as set/;
 
 async function setInput(page: Page, name: RegExp | string, value: string) {
   const box = page.getByRole('textbox', { name });
-  await box.fill(value);
+  await box.click();
+  await box.press('ControlOrMeta+a');
+  await box.pressSequentially(value);
 }
 
 /** Each step starts signed out, whatever the previous step left behind. */
@@ -26,6 +28,9 @@ async function waitSaved(page: Page) {
 
 /** Sends the revision for check, giving a reason when the dialog asks for one. */
 async function sendForCheck(page: Page) {
+  // Example values nobody confirmed keep a sheet from going to check: confirm them here.
+  const confirmAll = page.getByRole('button', { name: /^I have checked all/ });
+  if (await confirmAll.count()) await confirmAll.click();
   await waitSaved(page);
   await page.getByRole('button', { name: 'Send for check' }).click();
   const dialog = page.getByRole('dialog', { name: 'Send for check' });
@@ -68,6 +73,7 @@ describe.skipIf(skipReason !== null)('the workbench in a real browser', () => {
     await dialog.getByPlaceholder('Choose a position').click();
     await page.getByRole('option', { name: /^MH-B2/ }).click();
     await dialog.getByRole('textbox', { name: /^Title/ }).fill(title);
+    await dialog.getByRole('radio', { name: /^The example duty/ }).check();
     await screenshot(page, 'workbench-create-sheet');
     await dialog.getByRole('button', { name: 'Create sheet' }).click();
     await page.getByRole('heading', { name: title }).waitFor();
