@@ -197,9 +197,13 @@ describe.skipIf(skipReason !== null)('the workbench in a real browser', () => {
     await as(browser, baseUrl, 'viewer');
     await page.goto(baseUrl + sheetUrl);
     await page.getByRole('heading', { name: title }).waitFor();
-    const history = page.getByRole('complementary', { name: 'Revisions' });
+    // Below 1800 px the revision history folds into a drawer.
+    await page.getByRole('button', { name: /^Revisions \(\d+\)/ }).click();
+    const history = page.getByRole('dialog', { name: 'Revisions' });
     await history.getByRole('link', { name: 'Revision A' }).waitFor();
     await expect(history.getByRole('link', { name: 'Revision B' }).count()).resolves.toBe(0);
+    await page.keyboard.press('Escape');
+    await history.waitFor({ state: 'hidden' });
     await expect(page.getByRole('button', { name: 'Send for check' }).count()).resolves.toBe(0);
     await expect(page.getByRole('button', { name: 'Approve' }).count()).resolves.toBe(0);
     await screenshot(page, 'workbench-viewer');
