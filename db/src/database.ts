@@ -22,6 +22,7 @@ export type Timestamp = ColumnType<Date, Date | string, Date | string>;
 
 export type RoleValue = 'engineer' | 'checker' | 'viewer' | 'admin';
 export type UnitSystemValue = 'SI' | 'US';
+export type NumberFormatValue = 'point' | 'comma';
 
 export interface UsersTable {
   id: Generated<string>;
@@ -36,6 +37,8 @@ export interface UsersTable {
   unitSystem: Generated<UnitSystemValue>;
   /** Raised by sign-out and password changes; access tokens of an older version are refused. */
   sessionVersion: Generated<number>;
+  /** Decimal separator the user types: 'point' (2.5) or 'comma' (2,5). */
+  numberFormat: Generated<NumberFormatValue>;
   createdAt: CreatedAt;
   updatedAt: UpdatedAt;
 }

@@ -90,6 +90,8 @@ export interface RevisionsTable {
   checkerId: Nullable<string>;
   changeNote: Generated<string>;
   justification: Nullable<string>;
+  /** Field keys still holding a value nobody entered or confirmed (JSON array of strings). */
+  unconfirmed: ColumnType<string[], string | undefined, string>;
   checkNote: Nullable<string>;
   rowVersion: Generated<number>;
   createdAt: CreatedAt;

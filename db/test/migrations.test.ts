@@ -16,6 +16,7 @@ const usersKeys: Record<keyof UsersTable, true> = {
   active: true,
   unitSystem: true,
   sessionVersion: true,
+  numberFormat: true,
   createdAt: true,
   updatedAt: true,
 };

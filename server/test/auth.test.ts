@@ -132,6 +132,29 @@ describe('auth: sign-in, me, refresh, sign-out', () => {
     expect((await ctx.request('GET', '/api/auth/me', { as: 'viewer' })).body.role).toBe('viewer');
   });
 
+  it('PATCH /api/auth/me sets the number format on its own and keeps the unit system', async () => {
+    const before = await ctx.request('GET', '/api/auth/me', { as: 'engineer2' });
+    expect(before.body.numberFormat).toBe('point');
+    const res = await ctx.request('PATCH', '/api/auth/me', {
+      as: 'engineer2',
+      body: { numberFormat: 'comma' },
+    });
+    expect(res.status).toBe(200);
+    expect(res.body).toMatchObject({ numberFormat: 'comma', unitSystem: before.body.unitSystem });
+    const again = await ctx.request('GET', '/api/auth/me', { as: 'engineer2' });
+    expect(again.body.numberFormat).toBe('comma');
+    const bad = await ctx.request('PATCH', '/api/auth/me', {
+      as: 'engineer2',
+      body: { numberFormat: 'dot' },
+    });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields[0].path).toBe('numberFormat');
+    await ctx.request('PATCH', '/api/auth/me', {
+      as: 'engineer2',
+      body: { numberFormat: 'point' },
+    });
+  });
+
   it('refresh rotates the cookie: the new one works, the old one is refused and ends the family', async () => {
     const { cookie } = await ctx.signIn('engineer');
     const first = await ctx.request('POST', '/api/auth/refresh', { cookie });

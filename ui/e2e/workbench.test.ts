@@ -11,7 +11,9 @@ const SPRING = /^Main spring force as set/;
 
 async function setInput(page: Page, name: RegExp | string, value: string) {
   const box = page.getByRole('textbox', { name });
-  await box.fill(value);
+  await box.click();
+  await box.press('ControlOrMeta+a');
+  await box.pressSequentially(value);
 }
 
 /** Each step starts signed out, whatever the previous step left behind. */
@@ -26,6 +28,9 @@ async function waitSaved(page: Page) {
 
 /** Sends the revision for check, giving a reason when the dialog asks for one. */
 async function sendForCheck(page: Page) {
+  // Example values nobody confirmed keep a sheet from going to check: confirm them here.
+  const confirmAll = page.getByRole('button', { name: /^I have checked all/ });
+  if (await confirmAll.count()) await confirmAll.click();
   await waitSaved(page);
   await page.getByRole('button', { name: 'Send for check' }).click();
   const dialog = page.getByRole('dialog', { name: 'Send for check' });
@@ -68,6 +73,7 @@ describe.skipIf(skipReason !== null)('the workbench in a real browser', () => {
     await dialog.getByPlaceholder('Choose a position').click();
     await page.getByRole('option', { name: /^MH-B2/ }).click();
     await dialog.getByRole('textbox', { name: /^Title/ }).fill(title);
+    await dialog.getByRole('radio', { name: /^The example duty/ }).check();
     await screenshot(page, 'workbench-create-sheet');
     await dialog.getByRole('button', { name: 'Create sheet' }).click();
     await page.getByRole('heading', { name: title }).waitFor();
@@ -191,9 +197,13 @@ describe.skipIf(skipReason !== null)('the workbench in a real browser', () => {
     await as(browser, baseUrl, 'viewer');
     await page.goto(baseUrl + sheetUrl);
     await page.getByRole('heading', { name: title }).waitFor();
-    const history = page.getByRole('complementary', { name: 'Revisions' });
+    // Below 1800 px the revision history folds into a drawer.
+    await page.getByRole('button', { name: /^Revisions \(\d+\)/ }).click();
+    const history = page.getByRole('dialog', { name: 'Revisions' });
     await history.getByRole('link', { name: 'Revision A' }).waitFor();
     await expect(history.getByRole('link', { name: 'Revision B' }).count()).resolves.toBe(0);
+    await page.keyboard.press('Escape');
+    await history.waitFor({ state: 'hidden' });
     await expect(page.getByRole('button', { name: 'Send for check' }).count()).resolves.toBe(0);
     await expect(page.getByRole('button', { name: 'Approve' }).count()).resolves.toBe(0);
     await screenshot(page, 'workbench-viewer');

@@ -49,13 +49,18 @@ export function isRequired(f: FieldDefinition, inputs: SheetInputs): boolean {
   return f.required && (f.requiredIf === undefined || inputs[f.requiredIf] !== false);
 }
 
+/** Absent, null or blank text (a field the editor left empty). */
+function isBlank(v: unknown): boolean {
+  return v === undefined || v === null || (typeof v === 'string' && v.trim() === '');
+}
+
 /** The required fields missing from `inputs`, one error each, in the sheet's field order. */
 export function missingInputs(
   fields: readonly FieldDefinition[],
   inputs: SheetInputs,
 ): FieldError[] {
   return fields
-    .filter((f) => isRequired(f, inputs) && (inputs[f.key] === undefined || inputs[f.key] === null))
+    .filter((f) => isRequired(f, inputs) && isBlank(inputs[f.key]))
     .map((f) => ({ field: f.key, message: MISSING_MESSAGE }));
 }
 

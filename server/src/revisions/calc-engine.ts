@@ -10,6 +10,8 @@ import {
   isCalcInputError as calcInputErrorGuard,
   type CriteriaSet,
   type FieldError,
+  type FieldDefinition,
+  type InputValue,
   type SheetEvaluation,
   type SheetInputs,
   type SheetTypeDefinition,
@@ -61,6 +63,48 @@ export function demoInputsOf(sheetType: string): SheetInputs {
 
 /** @deprecated the demo values are not defaults: use `demoInputsOf`. */
 export const defaultInputs = demoInputsOf;
+
+/**
+ * How a field starts on a new sheet: whether the engineer must enter it (blank on an empty sheet)
+ * and its example value. Numbers and quantities the sheet declares required start blank; choices and
+ * flags start at their demo value, unconfirmed.
+ */
+export function fieldStart(field: FieldDefinition): { required: boolean; example: InputValue } {
+  return {
+    required: field.required && field.kind !== 'choice' && field.kind !== 'boolean',
+    example: field.demo,
+  };
+}
+
+/**
+ * The inputs of a new sheet and the fields left unconfirmed. Empty: required fields blank, the
+ * rest (choices, flags) at their example value and unconfirmed. Example: every field at its
+ * example value and every one unconfirmed.
+ */
+export function startingInputs(
+  sheetType: string,
+  kind: 'empty' | 'example',
+): { inputs: SheetInputs; unconfirmed: string[] } {
+  const inputs: SheetInputs = {};
+  const unconfirmed: string[] = [];
+  for (const f of sheetTypeDefinition(sheetType).fields) {
+    const start = fieldStart(f);
+    if (kind === 'empty' && start.required) {
+      inputs[f.key] = '';
+    } else {
+      inputs[f.key] = structuredClone(start.example);
+      unconfirmed.push(f.key);
+    }
+  }
+  return { inputs, unconfirmed };
+}
+
+/** Keys of fields left blank (a draft may be saved incomplete; submit refuses it). */
+export function blankFields(inputs: SheetInputs): string[] {
+  return Object.entries(inputs)
+    .filter(([, v]) => v === '' || (typeof v === 'string' && v.trim() === ''))
+    .map(([k]) => k);
+}
 
 /** Current calculation-core version (stored with each evaluation). */
 export function coreVersion(): string {

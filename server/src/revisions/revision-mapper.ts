@@ -50,6 +50,7 @@ export function toRevision(
     hash: r.hash,
     verificationCode: r.verificationCode,
     justification: r.justification,
+    unconfirmed: Array.isArray(r.unconfirmed) ? r.unconfirmed : [],
     rowVersion: r.rowVersion,
     supersededBy:
       r.supersededById && r.supersededAt

@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import type { SheetInputs } from '@holdfast/calc';
-import type { Revision, SaveRevisionInput } from '@holdfast/shared';
+import { canonicalJson, type Revision, type SaveRevisionInput } from '@holdfast/shared';
 import type { Kysely } from 'kysely';
 import type { DB } from '@holdfast/db';
 import type { AuthUser } from '../auth/auth-user.js';
@@ -77,8 +77,10 @@ export class RevisionsService {
       const criteria = await this.criteria.load(criteriaSetId, 'latest', trx);
       const inputs = input.inputs as SheetInputs;
       rejectUnknownInputs(rev.sheetType, inputs);
-      // A draft may still lack fields: it is previewed when complete, and submit insists on it.
+      // A draft may still lack fields or hold blanks: it is previewed when complete, and submit
+      // insists on every required field.
       const evaluation = previewOrReject(rev.sheetType, inputs, criteria);
+      const unconfirmed = stillUnconfirmed(rev, inputs, input.unconfirmed);
       await trx
         .updateTable('revisions')
         .set({
@@ -89,6 +91,7 @@ export class RevisionsService {
           criteriaSetVersion: criteria.version,
           evaluation: evaluation ? JSON.stringify(evaluation) : null,
           coreVersion: evaluation ? coreVersion() : null,
+          unconfirmed: JSON.stringify(unconfirmed),
           // A returned revision's old hash and code no longer describe it.
           hash: null,
           verificationCode: null,
@@ -120,6 +123,7 @@ export class RevisionsService {
           unitSystem: input.unitSystem,
           changeNote: input.changeNote,
           criteriaSet: `${criteriaSetId}@${criteria.version}`,
+          ...(unconfirmed.length !== storedUnconfirmed(rev).length ? { unconfirmed } : {}),
         },
       });
     });
@@ -142,6 +146,28 @@ export function assertRowVersion(
       { currentRowVersion: rev.rowVersion },
     );
   }
+}
+
+export function storedUnconfirmed(rev: { unconfirmed: unknown }): string[] {
+  return Array.isArray(rev.unconfirmed) ? (rev.unconfirmed as string[]) : [];
+}
+
+/**
+ * The unconfirmed fields after a save. The list only shrinks: a key stays when it was unconfirmed
+ * before, its value did not change, and the author did not confirm it (left out of `kept`).
+ */
+export function stillUnconfirmed(
+  rev: { unconfirmed: unknown; inputs: unknown },
+  inputs: SheetInputs,
+  kept: string[] | undefined,
+): string[] {
+  const before = storedUnconfirmed(rev);
+  const old = (rev.inputs ?? {}) as SheetInputs;
+  const keep = kept ? new Set(kept) : null;
+  return before.filter(
+    // Canonical text: jsonb hands back object keys in its own order.
+    (k) => (!keep || keep.has(k)) && canonicalJson(old[k]) === canonicalJson(inputs[k]),
+  );
 }
 
 /** What an audit entry records of a revision before a change. */

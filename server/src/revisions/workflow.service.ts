@@ -16,13 +16,19 @@ import { AuditService } from '../audit/audit.service.js';
 import { CriteriaService } from '../criteria/criteria.service.js';
 import { OutboxService } from '../outbox/outbox.service.js';
 import { ReviewsService } from '../reviews/reviews.service.js';
-import { coreVersion, resolveInputsOf } from './calc-engine.js';
+import { coreVersion, fieldLabel, resolveInputsOf } from './calc-engine.js';
 import { evaluateCompleteOrReject } from './evaluate.js';
 import { approvedMail, returnedMail, submittedMail } from './notifications.js';
 import { canCheck, ownPart } from './revision-access.js';
 import { contentHash, newVerificationCode } from './revision-codes.js';
 import { RevisionsRepository, type RevisionWithSheet } from './revisions.repository.js';
-import { assertRowVersion, RevisionsService, snapshot, withPerson } from './revisions.service.js';
+import {
+  assertRowVersion,
+  RevisionsService,
+  snapshot,
+  storedUnconfirmed,
+  withPerson,
+} from './revisions.service.js';
 
 /**
  * The check-and-approve workflow: draft/returned → in check → approved (previous approved →
@@ -57,6 +63,16 @@ export class WorkflowService {
     await this.db.transaction().execute(async (trx) => {
       const rev = await this.revisions.load(user, id, trx, true);
       this.revisions.assertEditable(user, rev, input.rowVersion);
+      const unconfirmed = storedUnconfirmed(rev);
+      if (unconfirmed.length > 0) {
+        throw badRequest(
+          `${unconfirmed.length} value(s) came with the sheet and were never confirmed: enter this brake's value or confirm each one.`,
+          unconfirmed.map((k) => ({
+            path: `inputs.${k}`,
+            message: `not confirmed: ${fieldLabel(rev.sheetType, k)}`,
+          })),
+        );
+      }
       const criteria = await this.criteria.load(rev.criteriaSetId, 'latest', trx);
       const inputs = rev.inputs as SheetInputs;
       // The frozen record keeps the inputs exactly as the core used them, beside its results.

@@ -20,9 +20,11 @@ import { CriteriaService } from '../criteria/criteria.service.js';
 import {
   coreVersion,
   defaultCriteriaSetId,
+  blankFields,
   defaultInputs,
   evaluateSheet,
   fieldLabel,
+  startingInputs,
 } from '../revisions/calc-engine.js';
 import { diffChecks, diffInputs, diffResults } from '../revisions/diff.js';
 import { canReadContent } from '../revisions/revision-access.js';
@@ -113,8 +115,9 @@ export class SheetsService {
         })
         .returning('id')
         .executeTakeFirstOrThrow();
-      const inputs = defaultInputs(input.sheetType);
-      const evaluation = preview(input.sheetType, inputs, criteria);
+      const { inputs, unconfirmed, copiedFrom } = await this.startOf(input, trx);
+      const evaluation =
+        blankFields(inputs).length > 0 ? null : preview(input.sheetType, inputs, criteria);
       const rev = await trx
         .insertInto('revisions')
         .values({
@@ -129,6 +132,7 @@ export class SheetsService {
           coreVersion: evaluation ? coreVersion() : null,
           authorId: user.id,
           changeNote: 'First issue.',
+          unconfirmed: JSON.stringify(unconfirmed),
         })
         .returning('id')
         .executeTakeFirstOrThrow();
@@ -146,11 +150,33 @@ export class SheetsService {
           criteriaSetId,
           revisionId: rev.id,
           label: 'A',
+          start: input.start?.kind ?? 'example (unmarked)',
+          ...(copiedFrom ? { copiedFrom } : {}),
         },
       });
       return sheet.id;
     });
     return this.detail(id);
+  }
+
+  /** What the first revision of a new sheet holds, by the way the engineer chose to start it. */
+  private async startOf(
+    input: CreateSheetInput,
+    trx: Kysely<DB>,
+  ): Promise<{ inputs: SheetInputs; unconfirmed: string[]; copiedFrom?: string }> {
+    const start = input.start;
+    if (!start) return { inputs: defaultInputs(input.sheetType), unconfirmed: [] };
+    if (start.kind !== 'copy') return startingInputs(input.sheetType, start.kind);
+    const source = await this.revisionsRepo.find(start.revisionId, trx);
+    const refuse = (message: string) =>
+      badRequest('Some fields are not valid.', [{ path: 'start.revisionId', message }]);
+    if (!source) throw refuse('no such revision');
+    if (source.state !== 'approved') throw refuse('only an approved revision can be copied');
+    if (source.sheetType !== input.sheetType)
+      throw refuse(`that revision is a ${source.sheetType} sheet, not ${input.sheetType}`);
+    const inputs = structuredClone(source.inputs as SheetInputs);
+    // Copied values were right for another brake: each stays marked until confirmed for this one.
+    return { inputs, unconfirmed: Object.keys(inputs), copiedFrom: source.id };
   }
 
   /** A new draft copying the latest revision's inputs; refused while a revision is open. */

@@ -13,6 +13,7 @@ export function toUser(row: UserRow): User {
     role: row.role,
     active: row.active,
     unitSystem: row.unitSystem,
+    numberFormat: row.numberFormat,
   };
 }
 
@@ -68,8 +69,18 @@ export class UsersService {
   }
 
   /** A user's own preferences (PATCH /api/auth/me). */
-  async updatePreferences(id: string, input: { unitSystem: User['unitSystem'] }): Promise<User> {
-    const row = await this.users.update(id, { unitSystem: input.unitSystem });
+  async updatePreferences(
+    id: string,
+    input: { unitSystem?: User['unitSystem']; numberFormat?: User['numberFormat'] },
+  ): Promise<User> {
+    const patch = {
+      ...(input.unitSystem ? { unitSystem: input.unitSystem } : {}),
+      ...(input.numberFormat ? { numberFormat: input.numberFormat } : {}),
+    };
+    const row =
+      Object.keys(patch).length === 0
+        ? await this.users.findById(id)
+        : await this.users.update(id, patch);
     if (!row) throw notFound('No such user.');
     return toUser(row);
   }

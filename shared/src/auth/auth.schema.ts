@@ -28,8 +28,13 @@ export const healthSchema = z.object({
 });
 export type Health = z.infer<typeof healthSchema>;
 
-/** PATCH /api/auth/me: a user's own preferences. */
-export const updateMeSchema = z.object({ unitSystem: z.enum(['SI', 'US']) }).strict();
+/** PATCH /api/auth/me: a user's own preferences (either or both). */
+export const updateMeSchema = z
+  .object({
+    unitSystem: z.enum(['SI', 'US']).optional(),
+    numberFormat: z.enum(['point', 'comma']).optional(),
+  })
+  .strict();
 export type UpdateMeInput = z.infer<typeof updateMeSchema>;
 
 /** A new password as typed; the server also refuses common and guessable ones (zxcvbn). */

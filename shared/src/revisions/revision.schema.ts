@@ -42,6 +42,8 @@ export const revisionSchema = revisionSummarySchema.extend({
   verificationCode: z.string().nullable(),
   /** Why the revision was submitted with failing checks. */
   justification: z.string().nullable(),
+  /** Fields still holding an example, copied or default value nobody confirmed for this brake. */
+  unconfirmed: z.array(z.string()).default([]),
   rowVersion: z.number().int().nonnegative(),
   supersededBy: z
     .object({ id: z.string().uuid(), label: z.string(), at: isoDateSchema })
@@ -61,6 +63,11 @@ export const saveRevisionSchema = z
     unitSystem: unitSystemSchema,
     changeNote: multiLineText({ max: 2000 }),
     criteriaSetId: z.string().min(1).max(80).optional(),
+    /**
+     * The fields the author has not yet confirmed. It can only shrink: the server keeps a key
+     * only if it was unconfirmed before and its value did not change.
+     */
+    unconfirmed: z.array(z.string().max(80)).max(500).optional(),
     rowVersion,
   })
   .strict();

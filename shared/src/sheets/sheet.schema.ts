@@ -55,6 +55,17 @@ export const sheetDetailSchema = sheetSummarySchema.extend({
 });
 export type SheetDetail = z.infer<typeof sheetDetailSchema>;
 
+/**
+ * How a new sheet starts: blank (required fields empty until entered), the example duty (every
+ * value marked until confirmed), or a copy of an approved revision (every value marked too).
+ */
+export const sheetStartSchema = z.discriminatedUnion('kind', [
+  z.object({ kind: z.literal('empty') }).strict(),
+  z.object({ kind: z.literal('example') }).strict(),
+  z.object({ kind: z.literal('copy'), revisionId: z.string().uuid() }).strict(),
+]);
+export type SheetStart = z.infer<typeof sheetStartSchema>;
+
 /** POST /api/sheets */
 export const createSheetSchema = z
   .object({
@@ -62,6 +73,8 @@ export const createSheetSchema = z
     positionId: z.string().uuid(),
     sheetType: sheetTypeIdSchema,
     criteriaSetId: z.string().min(1).max(80).optional(),
+    /** Omitted: the example duty unmarked (older API clients); the app always says. */
+    start: sheetStartSchema.optional(),
   })
   .strict();
 export type CreateSheetInput = z.infer<typeof createSheetSchema>;

@@ -13,6 +13,8 @@ export const userSchema = z.object({
   role: roleSchema,
   active: z.boolean(),
   unitSystem: z.enum(['SI', 'US']),
+  /** How the user types decimals: 'point' (2.5) or 'comma' (2,5). */
+  numberFormat: z.enum(['point', 'comma']).default('point'),
 });
 export type User = z.infer<typeof userSchema>;
 

@@ -9,6 +9,7 @@ export function makeUser(overrides: Partial<User> = {}): User {
     role: 'engineer',
     active: true,
     unitSystem: 'SI',
+    numberFormat: 'point',
     ...overrides,
   };
 }

@@ -17,6 +17,7 @@ import { useReturnRevision } from '../../../features/revisions/api/return-revisi
 import { useSubmitRevision } from '../../../features/revisions/api/submit-revision';
 import { useDriftRevision } from '../../../features/revisions/api/drift-revision';
 import { DriftDialog } from '../../../features/revisions/components/drift-dialog';
+import { UnconfirmedDialog } from '../../../features/revisions/components/unconfirmed-dialog';
 import type { WorkbenchContext } from '../../../features/revisions/components/revision-workbench';
 import { ApproveDialog } from '../../../features/review/components/approve-dialog';
 import { ReturnDialog } from '../../../features/review/components/return-dialog';
@@ -30,7 +31,9 @@ export interface RevisionActionsProps {
 
 /** Only what the server says this user may do with this revision in its state, plus printing. */
 export function RevisionActions({ revision, ctx, openComments }: RevisionActionsProps) {
-  const [dialog, setDialog] = useState<'submit' | 'approve' | 'return' | 'drift' | null>(null);
+  const [dialog, setDialog] = useState<
+    'submit' | 'approve' | 'return' | 'drift' | 'unconfirmed' | null
+  >(null);
   const [failing, setFailing] = useState<CheckResult[]>([]);
   const [rowVersion, setRowVersion] = useState(revision.rowVersion);
   const submit = useSubmitRevision(revision.id);
@@ -48,6 +51,10 @@ export function RevisionActions({ revision, ctx, openComments }: RevisionActions
         title: 'Not sent',
         message: 'Fix the inputs marked in red first.',
       });
+      return;
+    }
+    if (ctx.unconfirmed.length > 0) {
+      setDialog('unconfirmed');
       return;
     }
     setRowVersion(saved?.rowVersion ?? revision.rowVersion);
@@ -133,6 +140,11 @@ export function RevisionActions({ revision, ctx, openComments }: RevisionActions
           ) : null}
         </Menu.Dropdown>
       </Menu>
+      <UnconfirmedDialog
+        opened={dialog === 'unconfirmed'}
+        onClose={close}
+        fields={dialog === 'unconfirmed' ? ctx.unconfirmed : []}
+      />
       <DriftDialog
         opened={dialog === 'drift'}
         onClose={close}

@@ -1,6 +1,7 @@
-import { useState } from 'react';
-import { Button, Grid, Paper, Skeleton, Stack, Text, Title } from '@mantine/core';
-import { IconArrowsDiff, IconCopyPlus } from '@tabler/icons-react';
+import { useEffect, useState } from 'react';
+import { Button, Drawer, Grid, Paper, Skeleton, Stack, Text, Title } from '@mantine/core';
+import { useMediaQuery } from '@mantine/hooks';
+import { IconArrowsDiff, IconCopyPlus, IconHistory } from '@tabler/icons-react';
 import type { QueryClient } from '@tanstack/react-query';
 import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import type { RevisionSummary, SheetDetail, User } from '@holdfast/shared';
@@ -43,6 +44,11 @@ export function Component() {
   const navigate = useNavigate();
   const query = useSheet(sheetId);
   const [newOpen, setNewOpen] = useState(false);
+  const [historyOpen, setHistoryOpen] = useState(false);
+  // The revision history sits beside the editor only on very wide screens; below that it folds
+  // into a drawer so the inputs and the results get the width.
+  const historyInline = useMediaQuery('(min-width: 1800px)', false) ?? false;
+  useEffect(() => setHistoryOpen(false), [revisionId]);
 
   if (query.isPending) {
     return (
@@ -84,6 +90,16 @@ export function Component() {
                 Compare with {previous.label}
               </Button>
             ) : null}
+            {historyInline ? null : (
+              <Button
+                variant="default"
+                size="sm"
+                leftSection={<IconHistory size={16} aria-hidden />}
+                onClick={() => setHistoryOpen(true)}
+              >
+                Revisions ({revisions.length})
+              </Button>
+            )}
             {canStartRevision ? (
               <Button
                 size="sm"
@@ -106,7 +122,7 @@ export function Component() {
         />
       ) : null}
       <Grid gap="md">
-        <Grid.Col span={{ base: 12, xl: 'auto' }} style={{ minWidth: 0 }}>
+        <Grid.Col span={historyInline ? 'auto' : 12} style={{ minWidth: 0 }}>
           {selectedId && selected ? (
             <RevisionView key={selectedId} revisionId={selectedId} user={user} />
           ) : (
@@ -119,15 +135,26 @@ export function Component() {
             </Paper>
           )}
         </Grid.Col>
-        <Grid.Col span={{ base: 12, xl: 'content' }} maw={{ xl: 280 }}>
-          <Paper p="md" component="aside" aria-labelledby="history-title">
-            <Title order={2} size="h5" id="history-title" mb="sm">
-              Revisions
-            </Title>
-            <RevisionTimeline sheetId={sheet.id} revisions={revisions} selectedId={selectedId} />
-          </Paper>
-        </Grid.Col>
+        {historyInline ? (
+          <Grid.Col span="content" maw={280}>
+            <Paper p="md" component="aside" aria-labelledby="history-title">
+              <Title order={2} size="h5" id="history-title" mb="sm">
+                Revisions
+              </Title>
+              <RevisionTimeline sheetId={sheet.id} revisions={revisions} selectedId={selectedId} />
+            </Paper>
+          </Grid.Col>
+        ) : null}
       </Grid>
+      <Drawer
+        opened={historyOpen && !historyInline}
+        onClose={() => setHistoryOpen(false)}
+        position="right"
+        size="sm"
+        title="Revisions"
+      >
+        <RevisionTimeline sheetId={sheet.id} revisions={revisions} selectedId={selectedId} />
+      </Drawer>
       <NewRevisionDialog
         sheetId={sheet.id}
         opened={newOpen}

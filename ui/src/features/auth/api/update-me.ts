@@ -5,14 +5,15 @@ import { sessionStore } from '../../../lib/session';
 import { getMeQueryOptions } from './get-me';
 
 export interface UpdateMeInput {
-  unitSystem: User['unitSystem'];
+  unitSystem?: User['unitSystem'];
+  numberFormat?: User['numberFormat'];
 }
 
 export function updateMe(input: UpdateMeInput): Promise<User> {
   return api.patch('/auth/me', { body: input, schema: userSchema });
 }
 
-/** Change the signed-in user's own preferences (unit system). */
+/** Change the signed-in user's own preferences (unit system, number format). */
 export function useUpdateMe() {
   const queryClient = useQueryClient();
   return useMutation({

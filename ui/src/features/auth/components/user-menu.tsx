@@ -1,6 +1,12 @@
 import { Avatar, Group, Menu, SegmentedControl, Stack, Text, UnstyledButton } from '@mantine/core';
 import { notifications } from '@mantine/notifications';
-import { IconChevronDown, IconKey, IconLogout, IconRulerMeasure } from '@tabler/icons-react';
+import {
+  IconChevronDown,
+  IconDecimal,
+  IconKey,
+  IconLogout,
+  IconRulerMeasure,
+} from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
 import type { User } from '@holdfast/shared';
 import { RoleBadge } from '../../../components/role-badge';
@@ -20,18 +26,19 @@ export function UserMenu() {
   const signOut = useSignOut();
   const updateMe = useUpdateMe();
 
+  const change = (input: Parameters<typeof updateMe.mutate>[0], what: string) =>
+    updateMe.mutate(input, {
+      onError: (error) =>
+        notifications.show({
+          color: 'fail',
+          title: `${what} not saved`,
+          message: errorMessage(error),
+        }),
+    });
   const changeUnits = (unitSystem: string) =>
-    updateMe.mutate(
-      { unitSystem: unitSystem as User['unitSystem'] },
-      {
-        onError: (error) =>
-          notifications.show({
-            color: 'fail',
-            title: 'Unit system not saved',
-            message: errorMessage(error),
-          }),
-      },
-    );
+    change({ unitSystem: unitSystem as User['unitSystem'] }, 'Unit system');
+  const changeFormat = (numberFormat: string) =>
+    change({ numberFormat: numberFormat as User['numberFormat'] }, 'Number format');
 
   return (
     <Menu position="bottom-end" width={280} shadow="md" closeOnItemClick>
@@ -84,6 +91,28 @@ export function UserMenu() {
           />
           <Text size="xs" c="dimmed">
             {unitLabels[user.unitSystem]}
+          </Text>
+        </Stack>
+        <Menu.Label>
+          <Group gap={6}>
+            <IconDecimal size={14} aria-hidden /> Number format
+          </Group>
+        </Menu.Label>
+        <Stack px="sm" pb="xs" gap={4}>
+          <SegmentedControl
+            fullWidth
+            size="xs"
+            value={user.numberFormat}
+            onChange={changeFormat}
+            disabled={updateMe.isPending}
+            aria-label="Number format"
+            data={[
+              { value: 'point', label: '2.5 (point)' },
+              { value: 'comma', label: '2,5 (comma)' },
+            ]}
+          />
+          <Text size="xs" c="dimmed">
+            How you type decimals in sheet fields.
           </Text>
         </Stack>
         <Menu.Divider />

@@ -1,8 +1,9 @@
-import type { ReactNode } from 'react';
-import { Checkbox, Group, NativeSelect, Text, TextInput } from '@mantine/core';
+import { memo, useCallback, type ReactNode } from 'react';
+import { Checkbox, Group, NativeSelect, Text } from '@mantine/core';
 import type { FieldDefinition, InputValue } from '@holdfast/calc';
-import { UnitField } from './unit-field';
+import { NumberField, UnitField } from './unit-field';
 import { SymbolText } from './symbol-text';
+import { examplePlaceholder } from '../utils/field-start';
 import { defaultUnit, type UnitSystem } from '../utils/units';
 
 export interface FieldInputProps {
@@ -13,8 +14,6 @@ export interface FieldInputProps {
   error?: string;
   readOnly?: boolean;
 }
-
-const PLAIN_NUMBER = /^\s*[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?\s*$/;
 
 export function fieldDomId(key: string): string {
   return `field-${key}`;
@@ -33,8 +32,11 @@ function FieldLabel({ field }: { field: FieldDefinition }) {
   );
 }
 
-/** One input of a sheet type, drawn by its kind: quantity, number, choice or flag. */
-export function FieldInput({
+/**
+ * One input of a sheet type, drawn by its kind: quantity, number, choice or flag. Memoised: a
+ * keystroke in one field renders that field alone (its props stay equal for the others).
+ */
+export const FieldInput = memo(function FieldInput({
   field,
   value,
   onChange,
@@ -44,7 +46,8 @@ export function FieldInput({
 }: FieldInputProps) {
   const id = fieldDomId(field.key);
   const label: ReactNode = <FieldLabel field={field} />;
-  const set = (v: InputValue) => onChange(field.key, v);
+  const key = field.key;
+  const set = useCallback((v: InputValue) => onChange(key, v), [onChange, key]);
 
   if (field.kind === 'quantity' && field.dimension) {
     const fallback =
@@ -62,6 +65,7 @@ export function FieldInput({
         error={error}
         description={field.help}
         readOnly={readOnly}
+        placeholder={readOnly ? undefined : examplePlaceholder(field)}
       />
     );
   }
@@ -94,20 +98,16 @@ export function FieldInput({
     );
   }
   return (
-    <TextInput
+    <NumberField
       id={id}
       label={label}
       description={field.help}
       error={error}
       readOnly={readOnly}
-      inputMode={field.kind === 'integer' ? 'numeric' : 'decimal'}
-      autoComplete="off"
-      value={value === undefined || value === null ? '' : String(value)}
-      onChange={(e) => {
-        const t = e.currentTarget.value;
-        set(PLAIN_NUMBER.test(t) ? Number(t) : t);
-      }}
-      styles={{ input: { fontVariantNumeric: 'tabular-nums' } }}
+      integer={field.kind === 'integer'}
+      value={value}
+      onChange={set}
+      placeholder={readOnly ? undefined : examplePlaceholder(field)}
     />
   );
-}
+});

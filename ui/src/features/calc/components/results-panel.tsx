@@ -1,4 +1,4 @@
-import { lazy, Suspense, type ReactNode } from 'react';
+import { lazy, memo, Suspense, type ReactNode } from 'react';
 import {
   Alert,
   Badge,
@@ -15,6 +15,8 @@ import {
 } from '@mantine/core';
 import { IconAlertTriangle, IconBolt } from '@tabler/icons-react';
 import type { SectionDefinition, SheetEvaluation } from '@holdfast/calc';
+import type { CheckDriver } from '../utils/check-drivers';
+import { CheckDriversButton } from './check-drivers-button';
 import { CheckList } from './check-list';
 import { DerivationList } from './derivation-list';
 import { FieldSettingsView } from './field-settings-view';
@@ -38,10 +40,16 @@ export interface ResultsPanelProps {
   invalidCount?: number;
   renderCheckAside?: (id: string) => ReactNode;
   renderStepAside?: (id: string) => ReactNode;
+  /** The inputs that drive a check; failing checks then link to them. */
+  findDrivers?: (checkId: string) => CheckDriver[];
 }
 
-/** Checks, results, derivation, charts and field settings of one evaluation, in tabs. */
-export function ResultsPanel(props: ResultsPanelProps) {
+/**
+ * Checks, results, derivation, charts and field settings of one evaluation, in tabs; the failing
+ * checks are listed above the tabs so they stay in sight whichever tab is open. Memoised: it
+ * renders again only when the evaluation (or its presentation) changes.
+ */
+export const ResultsPanel = memo(function ResultsPanel(props: ResultsPanelProps) {
   const {
     evaluation,
     stale,
@@ -53,7 +61,8 @@ export function ResultsPanel(props: ResultsPanelProps) {
     invalidCount = 0,
   } = props;
   const shown = evaluation ?? stale ?? null;
-  const failing = shown ? shown.checks.filter((c) => !c.pass).length : 0;
+  const failingChecks = shown ? shown.checks.filter((c) => !c.pass) : [];
+  const failing = failingChecks.length;
   return (
     <Paper
       p="md"
@@ -90,6 +99,35 @@ export function ResultsPanel(props: ResultsPanelProps) {
           </Text>
         ) : null}
       </Group>
+      {evaluation && failing > 0 ? (
+        <Box
+          component="ul"
+          aria-label="Failing checks"
+          p={0}
+          m={0}
+          mb="sm"
+          style={{ listStyle: 'none' }}
+          data-testid="failing-summary"
+        >
+          {failingChecks.map((c) => (
+            <Group
+              key={c.id}
+              component="li"
+              gap={6}
+              wrap="nowrap"
+              justify="space-between"
+              data-failing={c.id}
+            >
+              <Text size="sm" c="fail.8" fw={600} truncate="end" style={{ flex: 1, minWidth: 0 }}>
+                ✕ {c.label} ({Math.round(c.utilisation * 100)} % of limit)
+              </Text>
+              {props.findDrivers ? (
+                <CheckDriversButton label={c.label} find={() => props.findDrivers!(c.id)} />
+              ) : null}
+            </Group>
+          ))}
+        </Box>
+      ) : null}
       {invalidCount > 0 ? (
         <Alert
           color="amber"
@@ -162,6 +200,7 @@ export function ResultsPanel(props: ResultsPanelProps) {
                 checks={shown.checks}
                 unitSystem={unitSystem}
                 renderCheckAside={props.renderCheckAside}
+                findDrivers={props.findDrivers}
               />
             </Tabs.Panel>
             <Tabs.Panel value="results">
@@ -188,4 +227,4 @@ export function ResultsPanel(props: ResultsPanelProps) {
       )}
     </Paper>
   );
-}
+});

@@ -1,6 +1,8 @@
-import { useEffect, useId, useState, type ReactNode } from 'react';
+import { memo, useEffect, useId, useState, type ReactNode } from 'react';
 import { NativeSelect, TextInput } from '@mantine/core';
-import { parseQuantityText, type Dimension, type InputValue } from '@holdfast/calc';
+import type { Dimension, InputValue } from '@holdfast/calc';
+import { useNumberFormat } from '../hooks/use-number-format';
+import { readNumber, sameNumberText, writeNumber, type NumberFormat } from '../utils/number-entry';
 import { convertQuantity, isQuantity, unitChoices } from '../utils/units';
 
 export interface UnitFieldProps {
@@ -18,18 +20,18 @@ export interface UnitFieldProps {
   readOnly?: boolean;
   id?: string;
   rightLabel?: ReactNode;
+  placeholder?: string;
 }
 
-const PLAIN_NUMBER = /^\s*[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?\s*$/;
-
-function textOf(value: InputValue | undefined): string {
-  if (isQuantity(value)) return String(value.value);
+function textOf(value: InputValue | undefined, format: NumberFormat): string {
+  if (isQuantity(value)) return writeNumber(value.value, format);
   if (value === undefined || value === null) return '';
+  if (typeof value === 'number') return writeNumber(value, format);
   return String(value);
 }
 
 /** Finds the offered unit that typed text names ('kn' does not match 'kN': units are case-sensitive). */
-function matchUnit(dimension: Dimension, typed: string): string | undefined {
+export function matchUnit(dimension: Dimension, typed: string): string | undefined {
   const t = typed.trim().replace(/\s+/g, ' ');
   const choices = unitChoices(dimension);
   const hit = choices.find((c) => c.value === t || c.label === t);
@@ -42,23 +44,31 @@ function matchUnit(dimension: Dimension, typed: string): string | undefined {
 }
 
 /**
+ * The text a field shows: what the user typed, kept exactly while it means the same number as
+ * the value, and replaced only when the value changes from outside (a reload, a unit switch).
+ */
+export function useTypedText(value: InputValue | undefined, format: NumberFormat) {
+  const [text, setText] = useState(() => textOf(value, format));
+  useEffect(() => {
+    const external = textOf(value, format);
+    setText((current) => (sameNumberText(current, external, format) ? current : external));
+  }, [value, format]);
+  return [text, setText] as const;
+}
+
+/**
  * A number with its unit: type a value (or a value and a unit, "12 kN"), or pick a unit from the
  * list. Picking a unit converts the value so the physical quantity stays the same. Text that is
- * not a number is kept as typed and handed on, so the calc core names the problem on this field.
+ * not a number is kept as typed and handed on, so the field's message names the problem.
  */
-export function UnitField(props: UnitFieldProps) {
+export const UnitField = memo(function UnitField(props: UnitFieldProps) {
   const { dimension, value, onChange, fallbackUnit, readOnly } = props;
+  const format = useNumberFormat();
   const autoId = useId();
   const id = props.id ?? autoId;
   const [localUnit, setLocalUnit] = useState(fallbackUnit);
   const unit = isQuantity(value) ? value.unit : localUnit;
-  const [text, setText] = useState(() => textOf(value));
-
-  // Follow changes made outside this field (reload, unit-system switch) without fighting typing.
-  useEffect(() => {
-    const external = textOf(value);
-    setText((current) => (sameNumber(current, external) ? current : external));
-  }, [value]);
+  const [text, setText] = useTypedText(value, format);
 
   const choices = unitChoices(dimension);
   const knownUnit = choices.some((c) => c.value === unit);
@@ -66,31 +76,32 @@ export function UnitField(props: UnitFieldProps) {
 
   function handleText(next: string) {
     setText(next);
-    if (PLAIN_NUMBER.test(next)) {
-      onChange({ value: Number(next), unit });
+    const entry = readNumber(next, format);
+    if (entry.kind === 'number' && entry.unitText === '') {
+      onChange({ value: entry.value, unit });
       return;
     }
-    try {
-      const typed = parseQuantityText(next);
-      const matched = typed.unit ? matchUnit(dimension, typed.unit) : undefined;
+    if (entry.kind === 'number') {
+      const matched = matchUnit(dimension, entry.unitText);
       if (matched) {
-        setText(String(typed.value));
-        onChange({ value: typed.value, unit: matched });
+        setLocalUnit(matched);
+        onChange({ value: entry.value, unit: matched });
         return;
       }
-    } catch {
-      // Not a number with a unit: keep the text so nothing typed is lost.
     }
+    // Not (yet) a number with a unit: keep the text so nothing typed is lost.
     onChange(next.trim() === '' ? '' : next);
   }
 
   function handleUnit(nextUnit: string) {
+    setLocalUnit(nextUnit);
     if (isQuantity(value)) {
       const converted = convertQuantity(value, nextUnit, dimension);
       onChange(converted ?? { value: value.value, unit: nextUnit });
     } else {
-      setLocalUnit(nextUnit);
-      if (PLAIN_NUMBER.test(text)) onChange({ value: Number(text), unit: nextUnit });
+      const entry = readNumber(text, format);
+      if (entry.kind === 'number' && entry.unitText === '')
+        onChange({ value: entry.value, unit: nextUnit });
     }
   }
 
@@ -125,11 +136,56 @@ export function UnitField(props: UnitFieldProps) {
       rightSectionWidth={96}
       rightSectionPointerEvents="all"
       styles={{ input: { fontVariantNumeric: 'tabular-nums' } }}
+      placeholder={props.placeholder}
     />
   );
+});
+
+export interface NumberFieldProps {
+  id: string;
+  label: ReactNode;
+  value: InputValue | undefined;
+  onChange: (value: InputValue) => void;
+  integer?: boolean;
+  error?: ReactNode;
+  description?: ReactNode;
+  readOnly?: boolean;
+  placeholder?: string;
 }
 
-function sameNumber(a: string, b: string): boolean {
-  if (a === b) return true;
-  return PLAIN_NUMBER.test(a) && PLAIN_NUMBER.test(b) && Number(a) === Number(b);
-}
+/**
+ * A plain number (ratio, efficiency, count). Its text is its own: typing "2." keeps the point,
+ * so "2.5" typed key by key is 2.5 and never 25.
+ */
+export const NumberField = memo(function NumberField(props: NumberFieldProps) {
+  const { value, onChange, readOnly } = props;
+  const format = useNumberFormat();
+  const [text, setText] = useTypedText(value, format);
+  return (
+    <TextInput
+      id={props.id}
+      label={props.label}
+      description={props.description}
+      error={props.error}
+      readOnly={readOnly}
+      inputMode={props.integer ? 'numeric' : 'decimal'}
+      autoComplete="off"
+      spellCheck={false}
+      value={text}
+      onChange={(e) => {
+        const next = e.currentTarget.value;
+        setText(next);
+        const entry = readNumber(next, format);
+        onChange(
+          entry.kind === 'number' && entry.unitText === ''
+            ? entry.value
+            : next.trim() === ''
+              ? ''
+              : next,
+        );
+      }}
+      styles={{ input: { fontVariantNumeric: 'tabular-nums' } }}
+      placeholder={props.placeholder}
+    />
+  );
+});

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { revisionSchema, type Revision, type SaveRevisionInput } from '@holdfast/shared';
-import { api } from '../../../lib/api-client';
+import { api, apiUrl } from '../../../lib/api-client';
+import { sessionStore } from '../../../lib/session';
 import { revisionKeys } from './revision-keys';
 
 export function saveRevision(id: string, input: SaveRevisionInput): Promise<Revision> {
@@ -17,4 +18,29 @@ export function useSaveRevision(id: string) {
       void queryClient.invalidateQueries({ queryKey: ['work-queue'] });
     },
   });
+}
+
+/**
+ * The last save as the page goes away (pagehide): a keepalive request outlives the page, so the
+ * browser still sends it after the tab closes. Nobody reads the answer; the next visit loads what
+ * the server holds, and the copy kept on the device covers a save that did not land.
+ */
+export function saveRevisionOnLeave(id: string, input: SaveRevisionInput): void {
+  const token = sessionStore.getAccessToken();
+  if (!token) return;
+  try {
+    void fetch(apiUrl(`/revisions/${id}`), {
+      method: 'PUT',
+      keepalive: true,
+      credentials: 'same-origin',
+      headers: {
+        'Content-Type': 'application/json',
+        Accept: 'application/json',
+        Authorization: `Bearer ${token}`,
+      },
+      body: JSON.stringify(input),
+    }).catch(() => undefined);
+  } catch {
+    // keepalive bodies are capped (64 KB); the device copy still holds the edits.
+  }
 }

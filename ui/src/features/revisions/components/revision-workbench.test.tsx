@@ -49,7 +49,7 @@ describe('RevisionWorkbench', () => {
     fireEvent.change(screen.getByRole('textbox', { name: /Spring force/ }), {
       target: { value: '12 parsecs' },
     });
-    expect(screen.getByText(/unit "parsecs" is not a force unit/)).toBeInTheDocument();
+    expect(screen.getByText(/“parsecs” is not a unit for this field/)).toBeInTheDocument();
     expect(screen.getByText('Some inputs need attention')).toBeInTheDocument();
     expect(screen.getByText(/from the last valid inputs/)).toBeInTheDocument();
     expect(torqueCheck()).toHaveTextContent('640.0 N·m');

@@ -1,32 +1,31 @@
-import { useState, type ReactNode } from 'react';
-import {
-  Alert,
-  Box,
-  Grid,
-  Group,
-  Paper,
-  SegmentedControl,
-  Stack,
-  Text,
-  TextInput,
-} from '@mantine/core';
+import { useCallback, useMemo, useRef, useState, type ReactNode } from 'react';
+import { Alert, Box, Stack } from '@mantine/core';
 import { IconLock } from '@tabler/icons-react';
 import type { CriteriaSet, SheetEvaluation, SheetTypeDefinition } from '@holdfast/calc';
 import type { Revision } from '@holdfast/shared';
 import { InputSections } from '../../calc/components/input-sections';
 import { ResultsPanel } from '../../calc/components/results-panel';
 import { useLiveEvaluation } from '../../calc/hooks/use-live-evaluation';
+import { useNumberFormat } from '../../calc/hooks/use-number-format';
+import { checkDrivers } from '../../calc/utils/check-drivers';
+import { checkField, fieldMessages } from '../../calc/utils/field-check';
 import type { UnitSystem } from '../../calc/utils/units';
 import { useRevisionDraft } from '../hooks/use-revision-draft';
+import { CheckSummaryBar } from './check-summary-bar';
 import { ConflictDialog } from './conflict-dialog';
-import { SaveStatusText } from './save-status';
+import { LocalDraftOffer } from './local-draft-offer';
+import { UnconfirmedNote } from './unconfirmed-note';
+import { ChangeNoteField, WorkbenchBar } from './workbench-bar';
+import classes from './revision-workbench.module.css';
 
 export interface WorkbenchContext {
   /** Saves pending edits and resolves with the saved revision (null when nothing could be saved). */
   flush: () => Promise<Revision | null>;
-  /** The live evaluation of the current inputs, null when they are invalid. */
-  evaluation: SheetEvaluation | null;
-  hasInputErrors: boolean;
+  /** The live evaluation of the current inputs, null when they are invalid (read when needed). */
+  readonly evaluation: SheetEvaluation | null;
+  readonly hasInputErrors: boolean;
+  /** Fields still holding example or copied values nobody confirmed, with their labels. */
+  readonly unconfirmed: { key: string; label: string }[];
 }
 
 export interface RevisionWorkbenchProps {
@@ -52,6 +51,7 @@ export function RevisionWorkbench(props: RevisionWorkbenchProps) {
   const draft = useRevisionDraft(revision, sheetType);
   const { content, autosave, editable } = draft;
   const live = useLiveEvaluation(sheetType, content.inputs, criteria);
+  const format = useNumberFormat();
   // A frozen revision keeps its stored units; a reader may still view the results in the other system.
   const [viewSystem, setViewSystem] = useState<UnitSystem | null>(null);
   const storedSystem = content.unitSystem as UnitSystem;
@@ -60,101 +60,144 @@ export function RevisionWorkbench(props: RevisionWorkbenchProps) {
   // Frozen revisions show the evaluation the server stored at submission: that is the record.
   const stored = !editable && revision.evaluation ? revision.evaluation : null;
   const evaluation = stored ?? live.evaluation;
-  const errors = { ...autosave.serverErrors, ...live.fieldErrors };
+  const { serverErrors } = autosave;
+  const coreErrors = live.fieldErrors;
+  const errors = useMemo(
+    () =>
+      editable
+        ? fieldMessages(
+            sheetType.fields,
+            content.inputs,
+            { ...serverErrors, ...coreErrors },
+            format,
+          )
+        : { ...serverErrors, ...coreErrors },
+    [editable, sheetType, content.inputs, serverErrors, coreErrors, format],
+  );
   const invalidCount = Object.keys(errors).length;
+
+  // What the autosave holds back: fields the editor or the core finds invalid right now.
+  const latestErrors = useRef(coreErrors);
+  latestErrors.current = coreErrors;
+  draft.invalidKeys.current = (c) => {
+    const keys = new Set(Object.keys(latestErrors.current));
+    for (const f of sheetType.fields)
+      if (checkField(f, c.inputs[f.key], format) && c.inputs[f.key] !== '') keys.add(f.key);
+    return keys;
+  };
+
+  const unconfirmed = useMemo(() => new Set(content.unconfirmed ?? []), [content.unconfirmed]);
+  const latest = useRef({ inputs: content.inputs, evaluation: live.evaluation, invalidCount });
+  latest.current = { inputs: content.inputs, evaluation: live.evaluation, invalidCount };
+  const unconfirmedList = useMemo(
+    () =>
+      sheetType.fields
+        .filter((f) => unconfirmed.has(f.key))
+        .map((f) => ({ key: f.key, label: f.label })),
+    [sheetType, unconfirmed],
+  );
+  const unconfirmedRef = useRef(unconfirmedList);
+  unconfirmedRef.current = unconfirmedList;
+
+  // One object for the actions: it reads the newest state when asked, so they need not re-render.
+  const { flush } = autosave;
+  const ctx = useMemo<WorkbenchContext>(
+    () => ({
+      flush,
+      get evaluation() {
+        return latest.current.evaluation;
+      },
+      get hasInputErrors() {
+        return latest.current.invalidCount > 0;
+      },
+      get unconfirmed() {
+        return unconfirmedRef.current;
+      },
+    }),
+    [flush],
+  );
+  const findDrivers = useCallback(
+    (checkId: string) =>
+      criteria ? checkDrivers(sheetType, latest.current.inputs, criteria, checkId) : [],
+    [sheetType, criteria],
+  );
+
+  const { renderActions } = props;
+  const actions = useMemo(() => renderActions?.(ctx), [renderActions, ctx]);
+  const { status, lastSavedAt, heldBack } = autosave;
+  const save = useMemo(
+    () => (editable ? { status, lastSavedAt, heldBack: heldBack.length } : undefined),
+    [editable, status, lastSavedAt, heldBack],
+  );
 
   return (
     <Stack>
-      <Paper p="sm">
-        <Group justify="space-between" gap="sm" wrap="wrap">
-          <Group gap="md" wrap="wrap">
-            <SegmentedControl
-              size="xs"
-              aria-label="Units for this sheet"
-              value={unitSystem}
-              onChange={(v) =>
-                editable ? draft.setUnitSystem(v as UnitSystem) : setViewSystem(v as UnitSystem)
-              }
-              data={[
-                { value: 'SI', label: 'SI units' },
-                { value: 'US', label: 'US customary' },
-              ]}
-            />
-            {editable ? (
-              <SaveStatusText status={autosave.status} lastSavedAt={autosave.lastSavedAt} />
-            ) : null}
-          </Group>
-          {props.renderActions?.({
-            flush: autosave.flush,
-            evaluation: live.evaluation,
-            hasInputErrors: invalidCount > 0,
-          })}
-        </Group>
-        {autosave.status === 'error' && autosave.errorMessage ? (
-          <Text size="xs" c="fail.8" mt={6} role="alert">
-            {autosave.errorMessage}
-          </Text>
-        ) : null}
-      </Paper>
+      <WorkbenchBar
+        unitSystem={unitSystem}
+        onUnitSystem={editable ? draft.setUnitSystem : setViewSystem}
+        save={save}
+        errorMessage={autosave.errorMessage}
+        actions={actions}
+      />
+      {draft.offer ? (
+        <LocalDraftOffer
+          offer={draft.offer}
+          onRestore={draft.restoreLocal}
+          onDiscard={draft.discardLocal}
+        />
+      ) : null}
       {!editable ? (
         <Alert icon={<IconLock size={18} />} color="steel" variant="light" title="Read only">
           {READ_ONLY_REASON[revision.state] ?? 'You cannot edit this revision.'}
         </Alert>
       ) : null}
-      <Grid gap="md" align="flex-start">
-        <Grid.Col span={{ base: 12, md: 6 }}>
-          <Stack gap="md">
-            <Paper p="md">
-              <TextInput
-                label="Change note"
-                description="What this revision changes and why; printed in the revision history."
-                value={content.changeNote}
-                readOnly={!editable}
-                onChange={(e) => draft.setChangeNote(e.currentTarget.value)}
-                maxLength={2000}
-              />
-            </Paper>
-            <InputSections
-              sheetType={sheetType}
-              inputs={content.inputs}
-              onChange={draft.setInput}
-              unitSystem={unitSystem}
-              errors={errors}
-              readOnly={!editable}
-              renderFieldAside={props.renderFieldAside}
-            />
-          </Stack>
-        </Grid.Col>
-        <Grid.Col span={{ base: 12, md: 6 }}>
-          <Box
-            style={{
-              position: 'sticky',
-              top: 72,
-              maxHeight: 'calc(100vh - 150px)',
-              overflowY: 'auto',
-              borderRadius: 4,
-            }}
-            tabIndex={-1}
-          >
-            <ResultsPanel
-              evaluation={evaluation}
-              stale={stored ? null : live.lastGood}
-              sections={sheetType.sections}
-              unitSystem={unitSystem}
-              durationMs={stored || live.runs === 0 ? undefined : live.durationMs}
-              origin={
-                stored
-                  ? `Stored at submission (${revision.coreVersion ?? 'core'})`
-                  : 'Recalculated live in your browser'
-              }
-              failure={stored ? null : live.failure}
-              invalidCount={stored ? 0 : invalidCount}
-              renderCheckAside={props.renderCheckAside}
-              renderStepAside={props.renderStepAside}
-            />
-          </Box>
-        </Grid.Col>
-      </Grid>
+      {editable && unconfirmedList.length > 0 ? (
+        <UnconfirmedNote fields={unconfirmedList} onConfirmAll={draft.confirm} />
+      ) : null}
+      <div className={classes.split}>
+        <Stack
+          gap="md"
+          onBlur={editable ? () => void autosave.flush() : undefined}
+          data-testid="workbench-inputs"
+        >
+          <CheckSummaryBar evaluation={evaluation} className={classes.summaryBar} />
+          <ChangeNoteField
+            value={content.changeNote}
+            readOnly={!editable}
+            onChange={draft.setChangeNote}
+          />
+          <InputSections
+            sheetType={sheetType}
+            inputs={content.inputs}
+            onChange={draft.setInput}
+            unitSystem={unitSystem}
+            errors={errors}
+            readOnly={!editable}
+            renderFieldAside={props.renderFieldAside}
+            unconfirmed={editable ? unconfirmed : undefined}
+            onConfirm={draft.confirm}
+          />
+        </Stack>
+        <Box className={classes.results} tabIndex={-1} data-testid="workbench-results">
+          <ResultsPanel
+            evaluation={evaluation}
+            stale={stored ? null : live.lastGood}
+            sections={sheetType.sections}
+            unitSystem={unitSystem}
+            durationMs={stored || live.runs === 0 ? undefined : live.durationMs}
+            origin={
+              stored
+                ? `Stored at submission (${revision.coreVersion ?? 'core'})`
+                : 'Recalculated live in your browser'
+            }
+            failure={stored ? null : live.failure}
+            invalidCount={stored ? 0 : invalidCount}
+            renderCheckAside={props.renderCheckAside}
+            renderStepAside={props.renderStepAside}
+            findDrivers={criteria ? findDrivers : undefined}
+          />
+        </Box>
+      </div>
       <ConflictDialog
         opened={autosave.status === 'conflict'}
         onTakeTheirs={draft.takeTheirs}

@@ -14,9 +14,12 @@ const TEXT: Record<SaveStatus, string> = {
 export function SaveStatusText({
   status,
   lastSavedAt,
+  heldBack = 0,
 }: {
   status: SaveStatus;
   lastSavedAt: Date | null;
+  /** Invalid fields left out of the last save (their text stays on screen and on the device). */
+  heldBack?: number;
 }) {
   const icon =
     status === 'saving' ? (
@@ -34,6 +37,9 @@ export function SaveStatusText({
       <Text size="xs" c={status === 'error' || status === 'conflict' ? 'fail.8' : 'dimmed'}>
         {TEXT[status]}
         {status === 'saved' && lastSavedAt ? ` at ${lastSavedAt.toLocaleTimeString('en-GB')}` : ''}
+        {status === 'saved' && heldBack > 0
+          ? ` except ${heldBack === 1 ? 'one field' : `${heldBack} fields`} still to correct (kept on this device)`
+          : ''}
       </Text>
     </Group>
   );

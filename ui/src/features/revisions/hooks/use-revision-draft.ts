@@ -3,7 +3,22 @@ import type { InputValue, SheetInputs, SheetTypeDefinition } from '@holdfast/cal
 import type { Revision } from '@holdfast/shared';
 import { withDefaults } from '../../calc/utils/sheet-types';
 import { convertQuantity, defaultUnit, isQuantity, type UnitSystem } from '../../calc/utils/units';
-import { useDraftAutosave, type DraftContent } from './use-draft-autosave';
+import {
+  changedKeys,
+  clearLocalDraft,
+  readLocalDraft,
+  type LocalDraft,
+} from '../utils/local-draft';
+import { useDraftAutosave, type DraftContent, type InvalidKeys } from './use-draft-autosave';
+
+/** Edits found on this device for a revision, offered back when it is opened again. */
+export interface LocalOffer {
+  draft: LocalDraft;
+  /** Fields (and 'changeNote') that differ from what the server holds. */
+  changed: string[];
+  /** True when the server's copy moved on since these edits were typed. */
+  stale: boolean;
+}
 
 /**
  * The editable state of one revision: inputs, unit system and change note, kept locally so every
@@ -13,15 +28,22 @@ export function useRevisionDraft(revision: Revision, sheetType: SheetTypeDefinit
   const editable = revision.canEdit;
   const [content, setContent] = useState<DraftContent>(() => fromRevision(revision, sheetType));
   const contentRef = useRef(content);
-  const autosave = useDraftAutosave(revision, editable);
+  const invalidKeys = useRef<InvalidKeys | null>(null);
+  const autosave = useDraftAutosave(revision, editable, invalidKeys);
+  const [offer, setOffer] = useState<LocalOffer | null>(() =>
+    editable ? localOffer(revision, sheetType) : null,
+  );
 
+  // Stable callbacks (the autosave object is new each render, its functions are not): the field
+  // rows are memoised on them, so a keystroke renders one row instead of every row.
+  const { touch, takeTheirs: takeTheirsSaved } = autosave;
   const apply = useCallback(
     (next: DraftContent) => {
       contentRef.current = next;
       setContent(next);
-      autosave.touch(next);
+      touch(next);
     },
-    [autosave],
+    [touch],
   );
 
   // A different revision (navigation) starts from its own stored content.
@@ -29,6 +51,7 @@ export function useRevisionDraft(revision: Revision, sheetType: SheetTypeDefinit
     const fresh = fromRevision(revision, sheetType);
     contentRef.current = fresh;
     setContent(fresh);
+    setOffer(editable ? localOffer(revision, sheetType) : null);
     // Only the identity of the revision matters here, not each saved copy of it.
   }, [revision.id, sheetType]); // eslint-disable-line react-hooks/exhaustive-deps
 
@@ -44,7 +67,20 @@ export function useRevisionDraft(revision: Revision, sheetType: SheetTypeDefinit
   const setInput = useCallback(
     (key: string, value: InputValue) => {
       const cur = contentRef.current;
-      apply({ ...cur, inputs: { ...cur.inputs, [key]: value } });
+      const unconfirmed = cur.unconfirmed?.includes(key)
+        ? cur.unconfirmed.filter((k) => k !== key)
+        : cur.unconfirmed;
+      apply({ ...cur, inputs: { ...cur.inputs, [key]: value }, unconfirmed });
+    },
+    [apply],
+  );
+
+  /** Marks example or copied values as checked by the engineer without changing them. */
+  const confirm = useCallback(
+    (keys: string[]) => {
+      const cur = contentRef.current;
+      if (!cur.unconfirmed?.some((k) => keys.includes(k))) return;
+      apply({ ...cur, unconfirmed: cur.unconfirmed.filter((k) => !keys.includes(k)) });
     },
     [apply],
   );
@@ -64,13 +100,49 @@ export function useRevisionDraft(revision: Revision, sheetType: SheetTypeDefinit
   );
 
   const takeTheirs = useCallback(async () => {
-    const theirs = await autosave.takeTheirs();
+    const theirs = await takeTheirsSaved();
     const fresh = fromRevision(theirs, sheetType);
     contentRef.current = fresh;
     setContent(fresh);
-  }, [autosave, sheetType]);
+  }, [takeTheirsSaved, sheetType]);
 
-  return { content, setInput, setChangeNote, setUnitSystem, autosave, takeTheirs, editable };
+  /** Puts the edits kept on this device back into the editor (and saves them). */
+  const restoreLocal = useCallback(() => {
+    if (!offer) return;
+    setOffer(null);
+    apply({ ...offer.draft.content, unconfirmed: offer.draft.content.unconfirmed });
+  }, [offer, apply]);
+
+  const discardLocal = useCallback(() => {
+    clearLocalDraft(revision.id);
+    setOffer(null);
+  }, [revision.id]);
+
+  return {
+    content,
+    setInput,
+    confirm,
+    setChangeNote,
+    setUnitSystem,
+    autosave,
+    takeTheirs,
+    editable,
+    invalidKeys,
+    offer,
+    restoreLocal,
+    discardLocal,
+  };
+}
+
+function localOffer(revision: Revision, type: SheetTypeDefinition): LocalOffer | null {
+  const draft = readLocalDraft(revision.id);
+  if (!draft) return null;
+  const changed = changedKeys(draft.content, fromRevision(revision, type));
+  if (changed.length === 0) {
+    clearLocalDraft(revision.id);
+    return null;
+  }
+  return { draft, changed, stale: draft.baseRowVersion !== revision.rowVersion };
 }
 
 function fromRevision(revision: Revision, type: SheetTypeDefinition): DraftContent {
@@ -78,6 +150,7 @@ function fromRevision(revision: Revision, type: SheetTypeDefinition): DraftConte
     inputs: withDefaults(type, revision.inputs),
     unitSystem: revision.unitSystem,
     changeNote: revision.changeNote,
+    unconfirmed: revision.unconfirmed ?? [],
   };
 }
 

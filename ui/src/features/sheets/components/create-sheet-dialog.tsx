@@ -4,6 +4,7 @@ import { createSheetSchema, sheetTypeIds, toFieldIssues, type SheetDetail } from
 import { errorMessage, isApiRequestError } from '../../../lib/api-client';
 import { sheetTypeTitle } from '../../calc/utils/sheet-types';
 import { useCreateSheet } from '../api/create-sheet';
+import { SheetStartPicker, type StartKind } from './sheet-start-picker';
 
 export interface PositionGroup {
   group: string;
@@ -17,7 +18,7 @@ export interface CreateSheetDialogProps {
   onCreated: (sheet: SheetDetail) => void;
 }
 
-/** A new sheet for one brake position: revision A starts as a draft with the core's defaults. */
+/** A new sheet for one brake position: revision A starts as a draft, blank, copied or the example. */
 export function CreateSheetDialog({
   opened,
   onClose,
@@ -27,6 +28,8 @@ export function CreateSheetDialog({
   const [positionId, setPositionId] = useState<string | null>(null);
   const [sheetType, setSheetType] = useState<string | null>('hoist-shoe-brake');
   const [title, setTitle] = useState('');
+  const [startKind, setStartKind] = useState<StartKind>('empty');
+  const [copyFrom, setCopyFrom] = useState<string | null>(null);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const create = useCreateSheet();
 
@@ -35,10 +38,15 @@ export function CreateSheetDialog({
   }, [opened]);
 
   const submit = () => {
+    if (startKind === 'copy' && !copyFrom) {
+      setErrors({ 'start.revisionId': 'choose the approved sheet to copy' });
+      return;
+    }
     const parsed = createSheetSchema.safeParse({
       title,
       positionId: positionId ?? '',
       sheetType: sheetType ?? '',
+      start: startKind === 'copy' ? { kind: 'copy', revisionId: copyFrom } : { kind: startKind },
     });
     if (!parsed.success) {
       const map: Record<string, string> = {};
@@ -92,6 +100,14 @@ export function CreateSheetDialog({
           onChange={(e) => setTitle(e.currentTarget.value)}
           required
           error={errors.title ?? errors.form}
+        />
+        <SheetStartPicker
+          sheetType={sheetType}
+          kind={startKind}
+          onKind={setStartKind}
+          copyFrom={copyFrom}
+          onCopyFrom={setCopyFrom}
+          error={errors['start.revisionId']}
         />
         <Group justify="flex-end">
           <Button variant="default" onClick={onClose}>
