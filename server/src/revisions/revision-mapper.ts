@@ -50,6 +50,7 @@ export function toRevision(
     hash: r.hash,
     verificationCode: r.verificationCode,
     justification: r.justification,
+    approvalNote: r.checkNote,
     rowVersion: r.rowVersion,
     supersededBy:
       r.supersededById && r.supersededAt

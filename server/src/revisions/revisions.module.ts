@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { CriteriaModule } from '../criteria/criteria.module.js';
+import { ChangesService } from './changes.service.js';
 import { DriftService } from './drift.service.js';
 import { RevisionsController } from './revisions.controller.js';
 import { RevisionsRepository } from './revisions.repository.js';
@@ -9,7 +10,7 @@ import { WorkflowService } from './workflow.service.js';
 @Module({
   imports: [CriteriaModule],
   controllers: [RevisionsController],
-  providers: [RevisionsRepository, RevisionsService, WorkflowService, DriftService],
+  providers: [RevisionsRepository, RevisionsService, WorkflowService, DriftService, ChangesService],
   exports: [RevisionsRepository, RevisionsService],
 })
 export class RevisionsModule {}

@@ -41,6 +41,8 @@ export const revisionSchema = revisionSummarySchema.extend({
   verificationCode: z.string().nullable(),
   /** Why the revision was submitted with failing checks. */
   justification: z.string().nullable(),
+  /** The checker's note on approval; printed in the approvals table. */
+  approvalNote: z.string().nullable(),
   rowVersion: z.number().int().nonnegative(),
   supersededBy: z
     .object({ id: z.string().uuid(), label: z.string(), at: isoDateSchema })

@@ -37,6 +37,7 @@ export function makeRevision(overrides: Partial<Revision> = {}): Revision {
     hash: null,
     verificationCode: null,
     justification: null,
+    approvalNote: null,
     rowVersion: 3,
     supersededBy: null,
     canEdit: true,

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Button, Grid, Paper, Skeleton, Stack, Text, Title } from '@mantine/core';
-import { IconArrowsDiff, IconCopyPlus } from '@tabler/icons-react';
+import { IconArrowsDiff, IconCopyPlus, IconHistory } from '@tabler/icons-react';
 import type { QueryClient } from '@tanstack/react-query';
 import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import type { RevisionSummary, SheetDetail, User } from '@holdfast/shared';
@@ -83,6 +83,15 @@ export function Component() {
                 Compare with {previous.label}
               </Button>
             ) : null}
+            <Button
+              variant="default"
+              size="sm"
+              component={Link}
+              to={`/sheets/${sheet.id}/audit`}
+              leftSection={<IconHistory size={16} aria-hidden />}
+            >
+              Audit trail
+            </Button>
             {canStartRevision ? (
               <Button
                 size="sm"

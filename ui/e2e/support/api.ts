@@ -1,0 +1,64 @@
+import { demoPassword, demoUsers, type DemoUserKey } from './demo-users';
+
+const tokens = new Map<string, string>();
+
+/**
+ * Calls the API as a demo user, for setting up a scene faster than clicking through it. Tokens are
+ * cached per user so the sign-in throttle is never reached.
+ */
+export async function apiAs<T = any>(
+  baseUrl: string,
+  who: DemoUserKey,
+  method: string,
+  path: string,
+  body?: unknown,
+): Promise<T> {
+  let token = tokens.get(who);
+  if (!token) {
+    const res = await fetch(`${baseUrl}/api/auth/sign-in`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({ email: demoUsers[who].email, password: demoPassword }),
+    });
+    if (!res.ok) throw new Error(`sign-in as ${who}: ${res.status} ${await res.text()}`);
+    token = ((await res.json()) as { accessToken: string }).accessToken;
+    tokens.set(who, token);
+  }
+  const res = await fetch(`${baseUrl}/api${path}`, {
+    method,
+    headers: {
+      Authorization: `Bearer ${token}`,
+      ...(body === undefined ? {} : { 'Content-Type': 'application/json' }),
+    },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
+  const text = await res.text();
+  if (!res.ok) throw new Error(`${method} ${path} as ${who}: ${res.status} ${text}`);
+  return (text ? JSON.parse(text) : undefined) as T;
+}
+
+/** Creates a sheet on the first register position through the API; returns its ids. */
+export async function createSheetViaApi(baseUrl: string, title: string, positionTag?: string) {
+  const reg = await apiAs(baseUrl, 'engineer', 'GET', '/register');
+  const positions = reg.sites.flatMap((s: any) => s.machines.flatMap((m: any) => m.positions)) as {
+    id: string;
+    tag: string;
+  }[];
+  const position = positionTag ? positions.find((p) => p.tag === positionTag) : positions[0];
+  if (!position) throw new Error(`no position ${positionTag ?? ''} in the register`);
+  const sheet = await apiAs(baseUrl, 'engineer', 'POST', '/sheets', {
+    title,
+    positionId: position.id,
+    sheetType: 'hoist-shoe-brake',
+  });
+  return { sheetId: sheet.id as string, revisionId: sheet.revisions[0].id as string, sheet };
+}
+
+/** Sends a revision for check as the engineer, with a note to the checker. */
+export async function submitViaApi(baseUrl: string, revisionId: string, justification: string) {
+  const rev = await apiAs(baseUrl, 'engineer', 'GET', `/revisions/${revisionId}`);
+  return apiAs(baseUrl, 'engineer', 'POST', `/revisions/${revisionId}/submit`, {
+    rowVersion: rev.rowVersion,
+    justification,
+  });
+}
