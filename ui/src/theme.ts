@@ -76,7 +76,8 @@ export const theme = createTheme({
   },
   components: {
     Button: { defaultProps: { radius: 'sm' } },
-    Badge: { defaultProps: { radius: 'sm', variant: 'light' } },
+    // Badges carry units and symbols (ms, MPa): never change their case.
+    Badge: { defaultProps: { radius: 'sm', variant: 'light', tt: 'none' } },
     Paper: { defaultProps: { withBorder: true, radius: 'sm' } },
     Tooltip: { defaultProps: { withArrow: true, openDelay: 300 } },
     Modal: { defaultProps: { centered: true, radius: 'sm' } },

@@ -43,7 +43,14 @@ export class ImpactService {
         const evaluation = evaluateSheet(rev.sheetType, rev.inputs as SheetInputs, criteria);
         failing = evaluation.checks
           .filter((c) => !c.pass)
-          .map((c) => ({ id: c.id, label: c.label, value: c.value, limit: c.limit, unit: c.unit }));
+          .map((c) => ({
+            id: c.id,
+            label: c.label,
+            value: c.value,
+            limit: c.limit,
+            unit: c.unit,
+            dimension: c.dimension,
+          }));
       } catch (e) {
         this.logger.warn(
           `impact: ${rev.documentNumber} rev. ${rev.label} no longer evaluates: ${String(e)}`,
