@@ -215,6 +215,14 @@ export function Component() {
             onChange={(p) => set({ page: String(p) })}
             size="sm"
             aria-label="Pages"
+            getControlProps={(control) => ({
+              'aria-label':
+                control === 'previous'
+                  ? 'Previous page'
+                  : control === 'next'
+                    ? 'Next page'
+                    : `${control} page`,
+            })}
           />
         </Group>
       ) : null}

@@ -140,7 +140,7 @@ export function ResultsPanel(props: ResultsPanelProps) {
             </Alert>
           ) : null}
           <Tabs defaultValue="checks" keepMounted={false}>
-            <Tabs.List mb="sm" style={{ flexWrap: 'nowrap', overflowX: 'auto' }}>
+            <Tabs.List mb="sm" style={{ flexWrap: 'wrap' }}>
               <Tabs.Tab value="checks" px="xs">
                 Checks {failing > 0 ? `(${failing} failing)` : ''}
               </Tabs.Tab>
