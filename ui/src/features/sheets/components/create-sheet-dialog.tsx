@@ -3,6 +3,7 @@ import { Button, Group, Modal, Select, Stack, TextInput } from '@mantine/core';
 import { createSheetSchema, sheetTypeIds, toFieldIssues, type SheetDetail } from '@holdfast/shared';
 import { errorMessage, isApiRequestError } from '../../../lib/api-client';
 import { sheetTypeTitle } from '../../calc/utils/sheet-types';
+import { OpenSheetWarning } from '../../register/components/open-sheet-warning';
 import { useCreateSheet } from '../api/create-sheet';
 
 export interface PositionGroup {
@@ -85,6 +86,7 @@ export function CreateSheetDialog({
           required
           error={errors.sheetType}
         />
+        <OpenSheetWarning positionId={positionId} sheetType={sheetType} />
         <TextInput
           label="Title"
           placeholder="e.g. Main hoist service brake, heavier ladle"
