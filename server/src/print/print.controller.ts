@@ -7,10 +7,11 @@ import { UuidParamPipe } from '../common/pipes/uuid-param.pipe.js';
 import { ZodValidationPipe } from '../common/pipes/zod-validation.pipe.js';
 import { PrintService, type PrintedFile } from './print.service.js';
 
-const pdf = (f: PrintedFile) =>
+export const pdf = (f: PrintedFile) =>
   new StreamableFile(f.bytes, {
     type: 'application/pdf',
-    disposition: `inline; filename="${f.fileName.replace(/[^\w.-]/g, '_')}"`,
+    // attachment: browsers save it under this name instead of opening an unnamed blob.
+    disposition: `attachment; filename="${f.fileName}"; filename*=UTF-8''${encodeURIComponent(f.fileName)}`,
     length: f.bytes.length,
   });
 

@@ -19,6 +19,27 @@ export interface PrintedFile {
 const CACHE_SIZE = 32;
 
 /**
+ * What the saved file is called: document number, revision, kind, and a marking for a revision
+ * that is not approved, e.g. HF-MH-0003-rev-B-calculation-sheet.pdf,
+ * HF-MH-0003-rev-C-draft-field-card.pdf.
+ */
+export function printFileName(
+  documentNumber: string,
+  label: string,
+  state: string,
+  kind: PrintKind,
+): string {
+  const frozen = state === 'approved' || state === 'superseded';
+  const marking = frozen
+    ? state === 'superseded'
+      ? '-superseded'
+      : ''
+    : `-${state.replace('_', '-')}`;
+  const what = kind === 'field-card' ? 'field-card' : 'calculation-sheet';
+  return `${documentNumber}-rev-${label}${marking}-${what}.pdf`.replace(/[^\w.-]/g, '_');
+}
+
+/**
  * Loads a revision through the sheets services (which enforce who may read it) and renders it.
  * Approved and superseded revisions never change, so their PDFs are kept in a small cache keyed
  * by everything that shows on the page; drafts are rendered every time.
@@ -50,7 +71,7 @@ export class PrintService implements OnModuleInit {
     const key = [kind, id, revision.state, revision.supersededBy?.label ?? '', query.paper].join(
       '|',
     );
-    const fileName = `${revision.documentNumber}-rev-${revision.label}${kind === 'field-card' ? '-field-card' : ''}.pdf`;
+    const fileName = printFileName(revision.documentNumber, revision.label, revision.state, kind);
     const hit = frozen ? this.cache.get(key) : undefined;
     if (hit) return { bytes: hit, fileName };
 

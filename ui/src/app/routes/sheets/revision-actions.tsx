@@ -51,7 +51,7 @@ export function RevisionActions({ revision, ctx, openComments }: RevisionActions
         onError: (e) =>
           notifications.show({
             color: 'fail',
-            title: 'Could not open the printout',
+            title: 'Could not download the printout',
             message: errorMessage(e),
           }),
       },
