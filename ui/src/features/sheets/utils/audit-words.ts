@@ -34,7 +34,10 @@ const changedInputs = (before: Record<string, unknown>, after: Record<string, un
  * The one line of detail worth reading for an event: a note, a comment, a file name, a label.
  * `revisionLabel` names a revision by id (events on a revision carry its id, not always its label).
  */
-export function auditDetail(e: AuditEvent, revisionLabel?: (id: string) => string | undefined): string {
+export function auditDetail(
+  e: AuditEvent,
+  revisionLabel?: (id: string) => string | undefined,
+): string {
   const after = (e.after ?? {}) as Record<string, unknown>;
   const before = (e.before ?? {}) as Record<string, unknown>;
   const parts: string[] = [];
