@@ -12,7 +12,7 @@ export function AuthorNote({ justification }: { justification: string | null }) 
       color="amber"
       variant="light"
       icon={<IconMessageExclamation size={18} aria-hidden />}
-      title="Note from the author: sent for check with failing checks"
+      title="Note from the author to the checker"
       data-testid="author-note"
     >
       <Text size="sm" style={{ whiteSpace: 'pre-wrap' }}>
