@@ -153,15 +153,16 @@ export function CompareView({ data }: { data: Compare }) {
               {data.results.map((r) => (
                 <Table.Tr key={r.key}>
                   <Table.Td>{r.label}</Table.Td>
-                  <Table.Td ff="monospace" ta="right">
+                  <Table.Td ff="monospace" ta="right" style={{ whiteSpace: 'nowrap' }}>
                     {r.from === null ? '—' : formatSI(r.from, r.dimension, system, r.unit)}
                   </Table.Td>
-                  <Table.Td ff="monospace" ta="right" fw={600}>
+                  <Table.Td ff="monospace" ta="right" style={{ whiteSpace: 'nowrap' }} fw={600}>
                     {r.to === null ? '—' : formatSI(r.to, r.dimension, system, r.unit)}
                   </Table.Td>
                   <Table.Td
                     ff="monospace"
                     ta="right"
+                    style={{ whiteSpace: 'nowrap' }}
                     fw={r.deltaPct !== null && Math.abs(r.deltaPct) >= 1 ? 700 : 400}
                     bg={r.deltaPct !== null && Math.abs(r.deltaPct) >= 1 ? 'amber.0' : undefined}
                   >
