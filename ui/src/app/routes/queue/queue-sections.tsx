@@ -73,13 +73,14 @@ export function AdminQueue() {
       </Title>
       <List size="sm" spacing={4}>
         <List.Item>
+          {/* Worded unlike the navigation's "Users" and "Criteria sets", which stay unique. */}
           <Anchor component={Link} to="/admin/users">
-            Users and roles
+            People, roles and sign-ins
           </Anchor>
         </List.Item>
         <List.Item>
           <Anchor component={Link} to="/criteria">
-            Acceptance-criteria sets
+            Acceptance criteria and their versions
           </Anchor>
         </List.Item>
       </List>
