@@ -34,6 +34,10 @@ export interface BrakePositionsTable {
   tag: string;
   description: string;
   motion: string;
+  /** In the plant's words, e.g. 'two-shoe drum brake, 400 mm'; '' until recorded. */
+  brakeKind: Generated<string>;
+  thruster: Generated<string>;
+  lining: Generated<string>;
   createdAt: CreatedAt;
 }
 

@@ -6,6 +6,8 @@ export * from './sheets/person-ref.schema.js';
 export * from './register/register.schema.js';
 export * from './revisions/evaluation.schema.js';
 export * from './revisions/revision.schema.js';
+export * from './revisions/revision-changes.schema.js';
+export * from './revisions/safety-file.schema.js';
 export * from './sheets/sheet.schema.js';
 export * from './comments/comment.schema.js';
 export * from './attachments/attachment.schema.js';

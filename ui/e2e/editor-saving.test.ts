@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { apiAs, createHoistSheet } from './support/api';
+import { apiClientAs, createHoistSheet } from './support/api';
 import { e2eBaseUrl, e2eSkipReason, launchBrowser, type BrowserSession } from './support/browser';
 import { screenshot } from './support/screenshot';
 import { signInAs } from './support/sign-in';
@@ -26,7 +26,7 @@ describe.skipIf(skipReason !== null)('the editor never loses an edit', () => {
   let browser: BrowserSession;
   let sheet: Awaited<ReturnType<typeof createHoistSheet>>;
   const saved = async () => {
-    const call = await apiAs(baseUrl, 'engineer');
+    const call = await apiClientAs(baseUrl, 'engineer');
     return (
       await call<{ inputs: Record<string, { value: number } | number | string> }>(
         'GET',

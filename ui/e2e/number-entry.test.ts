@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { createHoistSheet, apiAs } from './support/api';
+import { createHoistSheet, apiClientAs } from './support/api';
 import { e2eBaseUrl, e2eSkipReason, launchBrowser, type BrowserSession } from './support/browser';
 import { screenshot } from './support/screenshot';
 import { signInAs } from './support/sign-in';
@@ -24,7 +24,7 @@ async function typeInto(page: Page, name: RegExp, text: string) {
 
 /** The saved inputs of the revision, read back from the server. */
 async function savedInputs(baseUrl: string, revisionId: string) {
-  const call = await apiAs(baseUrl, 'engineer');
+  const call = await apiClientAs(baseUrl, 'engineer');
   const rev = await call<{ inputs: Record<string, unknown> }>('GET', `/revisions/${revisionId}`);
   return rev.inputs;
 }
@@ -40,7 +40,7 @@ describe.skipIf(skipReason !== null)('number entry, typed key by key', () => {
     await signInAs(browser.page, baseUrl, 'engineer');
   });
   afterAll(async () => {
-    const call = await apiAs(baseUrl, 'engineer').catch(() => null);
+    const call = await apiClientAs(baseUrl, 'engineer').catch(() => null);
     await call?.('PATCH', '/auth/me', { numberFormat: 'point' }).catch(() => undefined);
     await browser?.close();
   });

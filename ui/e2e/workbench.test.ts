@@ -192,8 +192,8 @@ describe.skipIf(skipReason !== null)('the workbench in a real browser', () => {
     await signOut(page);
   });
 
-  it('viewer sees only approved revisions and opens the print view', async () => {
-    const { page, context } = browser;
+  it('viewer sees only approved revisions and downloads the printout under its name', async () => {
+    const { page } = browser;
     await as(browser, baseUrl, 'viewer');
     await page.goto(baseUrl + sheetUrl);
     await page.getByRole('heading', { name: title }).waitFor();
@@ -208,13 +208,13 @@ describe.skipIf(skipReason !== null)('the workbench in a real browser', () => {
     await expect(page.getByRole('button', { name: 'Approve' }).count()).resolves.toBe(0);
     await screenshot(page, 'workbench-viewer');
     await page.getByRole('button', { name: 'Print' }).click();
-    const [tab] = await Promise.all([
-      context.waitForEvent('page'),
+    const [download] = await Promise.all([
+      page.waitForEvent('download', { timeout: 30000 }),
       page.getByRole('menuitem', { name: 'Calculation sheet (PDF)' }).click(),
     ]);
-    await tab.waitForURL(/^blob:/, { timeout: 30000 });
-    expect(tab.url()).toMatch(/^blob:/);
-    await tab.close();
+    expect(download.suggestedFilename()).toMatch(
+      /^HF-[A-Z0-9]+-\d{4}-rev-A-calculation-sheet\.pdf$/,
+    );
     await signOut(page);
   });
 

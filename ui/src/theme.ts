@@ -1,4 +1,4 @@
-import { createTheme, type MantineColorsTuple } from '@mantine/core';
+import { createTheme, type CSSVariablesResolver, type MantineColorsTuple } from '@mantine/core';
 
 /** Forged steel: a deep blue-grey, Holdfast's primary colour. */
 const steel: MantineColorsTuple = [
@@ -70,15 +70,48 @@ export const theme = createTheme({
   defaultRadius: 'sm',
   cursorType: 'pointer',
   focusRing: 'auto',
+  // Filled badges and buttons pick dark or light text by their colour, so amber carries black
+  // text (6.1:1) instead of white (3.5:1).
+  autoContrast: true,
+  luminanceThreshold: 0.2,
   other: {
     headerHeight: 56,
     navbarWidth: 232,
   },
   components: {
     Button: { defaultProps: { radius: 'sm' } },
-    Badge: { defaultProps: { radius: 'sm', variant: 'light' } },
+    // Badges carry units and symbols (ms, MPa): never change their case.
+    Badge: {
+      defaultProps: { radius: 'sm', variant: 'light', tt: 'none' },
+      // A verdict badge is never squeezed to "P…" by the text beside it.
+      // (a label that hides its overflow has no minimum width, so a flex row could crush it).
+      styles: {
+        root: { flexShrink: 0, overflow: 'visible' },
+        label: { overflow: 'visible', textOverflow: 'clip' },
+      },
+    },
     Paper: { defaultProps: { withBorder: true, radius: 'sm' } },
     Tooltip: { defaultProps: { withArrow: true, openDelay: 300 } },
+    // A region that scrolls (a wide table at 1024 px) must be reachable by keyboard to scroll it.
+    ScrollArea: { defaultProps: { viewportProps: { tabIndex: 0 } } },
     Modal: { defaultProps: { centered: true, radius: 'sm' } },
   },
+});
+
+/**
+ * Secondary ("dimmed") text at WCAG AA: Mantine's grey-6 reads 3.3:1 on white; this grey reads
+ * 5.5:1 on white and 4.8:1 on the light grey panels.
+ */
+export const cssVariablesResolver: CSSVariablesResolver = () => ({
+  variables: {},
+  light: {
+    '--mantine-color-dimmed': '#616a73',
+    // Text of light alerts and badges in the darker shades, at AA on their tinted backgrounds.
+    '--mantine-color-amber-light-color': 'var(--mantine-color-amber-9)',
+    '--mantine-color-pass-light-color': 'var(--mantine-color-pass-9)',
+    '--mantine-color-fail-light-color': 'var(--mantine-color-fail-8)',
+    '--mantine-color-steel-light-color': 'var(--mantine-color-steel-8)',
+    '--mantine-color-amber-outline': 'var(--mantine-color-amber-9)',
+  },
+  dark: {},
 });

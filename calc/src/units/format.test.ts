@@ -73,7 +73,7 @@ describe('formatForDerivation', () => {
     expect(formatForDerivation(293.15, 'temperature')).toBe('20.00 °C');
     expect(formatForDerivation(2.5e6, 'pressure')).toBe('2.500 MPa');
     expect(formatForDerivation(0.3, 'dimensionless')).toBe('0.3000');
-    expect(formatForDerivation(1 / 3600, 'frequency')).toBe('1.000 1/h');
+    expect(formatForDerivation(1 / 3600, 'frequency')).toBe('1.000 stops/h');
     expect(formatForDerivation(2e7, 'energy')).toBe('20.00 MJ');
   });
 

@@ -98,7 +98,8 @@ const PRINT_UNITS: Record<Dimension, PrintUnit[]> = {
   specificHeat: [p('J/(kg·K)', 1)],
   heatTransferCoefficient: [p('W/(m²·K)', 1)],
   area: [p('mm²', 1e-6, 1e-2), p('m²', 1)],
-  frequency: [p('1/h', 1 / 3600)],
+  // The only frequency on a sheet is how often the brake stops.
+  frequency: [p('stops/h', 1 / 3600)],
   dimensionless: [p('', 1)],
 };
 

@@ -247,9 +247,10 @@ export const DIMENSIONS: Record<Dimension, DimensionInfo> = {
     displaySI: '1/h',
     displayUS: '1/h',
     units: [
-      u('1/h', '1/h', 'both', { factor: 1 / 3600 }),
-      u('1/min', '1/min', 'both', { factor: 1 / 60 }),
-      u('1/s', '1/s', 'both', { factor: 1 }),
+      // Labels say what is counted: the only frequency on a sheet is how often the brake stops.
+      u('1/h', 'stops/h', 'both', { factor: 1 / 3600 }),
+      u('1/min', 'stops/min', 'both', { factor: 1 / 60 }),
+      u('1/s', 'stops/s', 'both', { factor: 1 }),
     ],
   },
   dimensionless: {
@@ -290,7 +291,17 @@ export const UNIT_ALIASES: Partial<Record<Dimension, Record<string, string>>> = 
   mass: { t: 'tonne' },
   speed: { fpm: 'ft/min', 'ft/mn': 'ft/min' },
   angularSpeed: { 'r/min': 'rpm', 'min^-1': 'rpm', '1/min': 'rpm' },
-  frequency: { '/h': '1/h', 'per h': '1/h', 'per hour': '1/h', 'h^-1': '1/h', '1/hr': '1/h' },
+  frequency: {
+    '/h': '1/h',
+    'per h': '1/h',
+    'per hour': '1/h',
+    'h^-1': '1/h',
+    '1/hr': '1/h',
+    'stops/h': '1/h',
+    'stops per hour': '1/h',
+    'stops/min': '1/min',
+    'stops/s': '1/s',
+  },
   pv: { 'MPa*m/s': 'MPa m/s', 'psi*ft/min': 'psi ft/min', 'psi fpm': 'psi ft/min' },
   temperatureDifference: {
     'delta degC': 'degC',

@@ -23,6 +23,7 @@ describe('parseQuantity', () => {
     close(parseQuantity('95 %', 'dimensionless'), 0.95);
     close(parseQuantity(0.35, 'dimensionless'), 0.35);
     close(parseQuantity('120 1/h', 'frequency'), 120 / 3600);
+    close(parseQuantity('120 stops/h', 'frequency'), 120 / 3600);
     close(parseQuantity('30000 psi ft/min', 'pv'), 30000 * 35.02536704724412);
     close(parseQuantity('1 BTU/(lb degF)', 'specificHeat'), 4186.8);
     close(parseQuantity('2.5 kN/mm', 'stiffness'), 2.5e6);

@@ -7,6 +7,7 @@ export interface FailingCheck {
   value: number;
   limit: number;
   unit: string;
+  dimension?: string;
 }
 
 /**
@@ -22,7 +23,14 @@ export function failingChecks(
   try {
     return evaluateStoredRecord(sheetType, inputs as SheetInputs, criteria)
       .checks.filter((c) => !c.pass)
-      .map((c) => ({ id: c.id, label: c.label, value: c.value, limit: c.limit, unit: c.unit }));
+      .map((c) => ({
+        id: c.id,
+        label: c.label,
+        value: c.value,
+        limit: c.limit,
+        unit: c.unit,
+        dimension: c.dimension,
+      }));
   } catch (e) {
     onError?.(e);
     return [

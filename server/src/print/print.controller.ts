@@ -13,10 +13,11 @@ import {
   type PrintedFile,
 } from './print.service.js';
 
-const pdf = (f: PrintedFile) =>
+export const pdf = (f: PrintedFile) =>
   new StreamableFile(f.bytes, {
     type: 'application/pdf',
-    disposition: `inline; filename="${f.fileName.replace(/[^\w.-]/g, '_')}"`,
+    // attachment: browsers save it under this name instead of opening an unnamed blob.
+    disposition: `attachment; filename="${f.fileName}"; filename*=UTF-8''${encodeURIComponent(f.fileName)}`,
     length: f.bytes.length,
   });
 

@@ -26,6 +26,9 @@ describe('print endpoints', () => {
     expect(draft.status, draft.text.slice(0, 200)).toBe(200);
     expect(draft.headers.get('content-type')).toContain('application/pdf');
     expect(draft.text.startsWith('%PDF-')).toBe(true);
+    expect(draft.headers.get('content-disposition')).toContain(
+      `filename="${sheet.documentNumber}-rev-A-draft-calculation-sheet.pdf"`,
+    );
     // A viewer reads approved revisions only.
     expect(
       (await ctx.request('GET', `/api/revisions/${draftId}/pdf`, { as: 'viewer' })).status,
@@ -37,7 +40,9 @@ describe('print endpoints', () => {
       const res = await ctx.request('GET', `/api/revisions/${a.id}/${path}`, { as: 'viewer' });
       expect(res.status, `${path}: ${res.text.slice(0, 200)}`).toBe(200);
       expect(res.headers.get('content-type')).toContain('application/pdf');
-      expect(res.headers.get('content-disposition')).toContain(sheet.documentNumber);
+      expect(res.headers.get('content-disposition')).toContain(
+        `attachment; filename="${sheet.documentNumber}-rev-A-${path.startsWith('pdf') ? 'calculation-sheet' : 'field-card'}.pdf"`,
+      );
     }
     const bad = await ctx.request('GET', `/api/revisions/${a.id}/pdf?paper=B5`, { as: 'viewer' });
     expect(bad.status).toBe(400);

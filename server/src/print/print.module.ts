@@ -6,6 +6,8 @@ import { SheetsRepository } from '../sheets/sheets.repository.js';
 import { SheetsService } from '../sheets/sheets.service.js';
 import { PrintController } from './print.controller.js';
 import { PrintService } from './print.service.js';
+import { SafetyFileController } from './safety-file.controller.js';
+import { SafetyFileService } from './safety-file.service.js';
 
 /**
  * The printed sheet and field card. SheetsModule does not export its service, so this module
@@ -13,7 +15,7 @@ import { PrintService } from './print.service.js';
  */
 @Module({
   imports: [CriteriaModule, RevisionsModule, ReviewsModule],
-  controllers: [PrintController],
-  providers: [PrintService, SheetsService, SheetsRepository],
+  controllers: [PrintController, SafetyFileController],
+  providers: [PrintService, SafetyFileService, SheetsService, SheetsRepository],
 })
 export class PrintModule {}

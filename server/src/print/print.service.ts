@@ -42,6 +42,27 @@ export class PrintBusyException extends ApiException {
 }
 
 /**
+ * What the saved file is called: document number, revision, kind, and a marking for a revision
+ * that is not approved, e.g. HF-MH-0003-rev-B-calculation-sheet.pdf,
+ * HF-MH-0003-rev-C-draft-field-card.pdf.
+ */
+export function printFileName(
+  documentNumber: string,
+  label: string,
+  state: string,
+  kind: PrintKind,
+): string {
+  const frozen = state === 'approved' || state === 'superseded';
+  const marking = frozen
+    ? state === 'superseded'
+      ? '-superseded'
+      : ''
+    : `-${state.replace('_', '-')}`;
+  const what = kind === 'field-card' ? 'field-card' : 'calculation-sheet';
+  return `${documentNumber}-rev-${label}${marking}-${what}.pdf`.replace(/[^\w.-]/g, '_');
+}
+
+/**
  * Loads a revision through the sheets services (which enforce who may read it) and renders it on
  * the worker pool. Rendered PDFs are cached under the revision and its row version (drafts too,
  * with a digest of everything printed). Each user may have a few renders running or waiting; past that, 429.
@@ -89,7 +110,7 @@ export class PrintService implements OnApplicationBootstrap, OnModuleDestroy {
       revision.criteriaSetId,
       revision.criteriaSetVersion,
     );
-    const fileName = `${revision.documentNumber}-rev-${revision.label}${kind === 'field-card' ? '-field-card' : ''}.pdf`;
+    const fileName = printFileName(revision.documentNumber, revision.label, revision.state, kind);
 
     // Approved and superseded revisions never change, nor do the earlier ones their history
     // lists: their PDFs are found by revision and row version before loading the rest. What can

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, HttpCode, Post } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import {
   createMachineSchema,
@@ -8,18 +8,29 @@ import {
   type CreatePositionInput,
   type CreateSiteInput,
   type Register,
+  type UpdateMachineInput,
+  type UpdatePositionInput,
+  type UpdateSiteInput,
+  updateMachineSchema,
+  updatePositionSchema,
+  updateSiteSchema,
 } from '@holdfast/shared';
 import { CurrentUser, type AuthUser } from '../auth/auth-user.js';
 import { Roles, SignedIn } from '../auth/policy.js';
 import { ApiBodySchema } from '../common/openapi.js';
+import { UuidParamPipe } from '../common/pipes/uuid-param.pipe.js';
 import { ZodValidationPipe } from '../common/pipes/zod-validation.pipe.js';
+import { RegisterEditsService } from './register-edits.service.js';
 import { RegisterService } from './register.service.js';
 
 @ApiTags('register')
 @ApiBearerAuth()
 @Controller('register')
 export class RegisterController {
-  constructor(private readonly register: RegisterService) {}
+  constructor(
+    private readonly register: RegisterService,
+    private readonly edits: RegisterEditsService,
+  ) {}
 
   @Get()
   @SignedIn()
@@ -58,5 +69,38 @@ export class RegisterController {
     @Body(new ZodValidationPipe(createPositionSchema)) input: CreatePositionInput,
   ) {
     return this.register.createPosition(user, input);
+  }
+
+  @Patch('sites/:id')
+  @Roles('engineer', 'admin')
+  @ApiBodySchema(updateSiteSchema)
+  updateSite(
+    @CurrentUser() user: AuthUser,
+    @Param('id', UuidParamPipe) id: string,
+    @Body(new ZodValidationPipe(updateSiteSchema)) input: UpdateSiteInput,
+  ) {
+    return this.edits.updateSite(user, id, input);
+  }
+
+  @Patch('machines/:id')
+  @Roles('engineer', 'admin')
+  @ApiBodySchema(updateMachineSchema)
+  updateMachine(
+    @CurrentUser() user: AuthUser,
+    @Param('id', UuidParamPipe) id: string,
+    @Body(new ZodValidationPipe(updateMachineSchema)) input: UpdateMachineInput,
+  ) {
+    return this.edits.updateMachine(user, id, input);
+  }
+
+  @Patch('positions/:id')
+  @Roles('engineer', 'admin')
+  @ApiBodySchema(updatePositionSchema)
+  updatePosition(
+    @CurrentUser() user: AuthUser,
+    @Param('id', UuidParamPipe) id: string,
+    @Body(new ZodValidationPipe(updatePositionSchema)) input: UpdatePositionInput,
+  ) {
+    return this.edits.updatePosition(user, id, input);
   }
 }

@@ -3,6 +3,7 @@ import type {
   CreateMachineInput,
   CreatePositionInput,
   CreateSiteInput,
+  OpenSheet,
   Register,
 } from '@holdfast/shared';
 import type { AuthUser } from '../auth/auth-user.js';
@@ -28,7 +29,16 @@ export class RegisterService {
         .execute(),
       this.db
         .selectFrom('brakePositions')
-        .select(['id', 'machineId', 'tag', 'description', 'motion'])
+        .select([
+          'id',
+          'machineId',
+          'tag',
+          'description',
+          'motion',
+          'brakeKind',
+          'thruster',
+          'lining',
+        ])
         .orderBy('tag')
         .execute(),
       this.db
@@ -38,6 +48,7 @@ export class RegisterService {
           's.positionId',
           's.id as sheetId',
           's.documentNumber',
+          's.sheetType',
           'r.id as revisionId',
           'r.label',
           'r.approvedAt',
@@ -45,8 +56,17 @@ export class RegisterService {
         .orderBy('r.approvedAt', 'asc')
         .execute(),
     ]);
+    const open = await this.openSheets();
     // Several sheets may cover one position over time: the most recently approved is in force.
     const current = new Map(approved.map((a) => [a.positionId, a]));
+    // A position carries a sheet per kind of calculation (the brake, its disc springs): the most
+    // recently approved of each sheet type is in force beside the others.
+    const byType = new Map<string, Map<string, (typeof approved)[number]>>();
+    for (const a of approved) {
+      const types = byType.get(a.positionId) ?? new Map();
+      types.set(a.sheetType, a);
+      byType.set(a.positionId, types);
+    }
     return {
       sites: sites.map((s) => ({
         ...s,
@@ -65,6 +85,17 @@ export class RegisterService {
                   id: p.id,
                   tag: p.tag,
                   description: p.description,
+                  brakeKind: p.brakeKind,
+                  thruster: p.thruster,
+                  lining: p.lining,
+                  inForce: [...(byType.get(p.id)?.values() ?? [])].map((x) => ({
+                    sheetId: x.sheetId,
+                    documentNumber: x.documentNumber,
+                    revisionId: x.revisionId,
+                    revisionLabel: x.label,
+                    sheetType: x.sheetType,
+                  })),
+                  openSheets: open.get(p.id) ?? [],
                   motion:
                     p.motion as Register['sites'][number]['machines'][number]['positions'][number]['motion'],
                   currentApproved: a
@@ -80,6 +111,30 @@ export class RegisterService {
           })),
       })),
     };
+  }
+
+  /** Per position, the sheets whose latest revision is still a draft, in check or returned. */
+  private async openSheets(): Promise<Map<string, OpenSheet[]>> {
+    const rows = await this.db
+      .selectFrom('sheets as s')
+      .innerJoin('revisions as r', 'r.sheetId', 's.id')
+      .select(['s.positionId', 's.id', 's.documentNumber', 's.sheetType', 'r.label', 'r.state'])
+      .where('r.state', 'in', ['draft', 'in_check', 'returned'])
+      .orderBy('s.documentNumber')
+      .execute();
+    const out = new Map<string, OpenSheet[]>();
+    for (const r of rows) {
+      const list = out.get(r.positionId) ?? [];
+      list.push({
+        sheetId: r.id,
+        documentNumber: r.documentNumber,
+        sheetType: r.sheetType,
+        revisionLabel: r.label,
+        state: r.state,
+      });
+      out.set(r.positionId, list);
+    }
+    return out;
   }
 
   async createSite(user: AuthUser, input: CreateSiteInput) {
@@ -141,7 +196,16 @@ export class RegisterService {
       const row = await trx
         .insertInto('brakePositions')
         .values(input)
-        .returning(['id', 'machineId', 'tag', 'description', 'motion'])
+        .returning([
+          'id',
+          'machineId',
+          'tag',
+          'description',
+          'motion',
+          'brakeKind',
+          'thruster',
+          'lining',
+        ])
         .executeTakeFirstOrThrow();
       await this.audit.record(trx, {
         actorId: user.id,

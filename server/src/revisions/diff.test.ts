@@ -66,6 +66,17 @@ describe('diff', () => {
     expect(d.find((r) => r.key === 'gone')).toMatchObject({ from: 1, to: null, delta: null });
   });
 
+  it('gives absolute temperatures a difference in kelvin but no percent change', () => {
+    const temp = (k: number) => {
+      const e = evaluation([['t', k]], []);
+      e.results[0] = { ...e.results[0], unit: 'K', dimension: 'temperature' };
+      return e;
+    };
+    const [t] = diffResults(temp(413.6), temp(468.8));
+    expect(t).toMatchObject({ dimension: 'temperature', deltaPct: null });
+    expect(Math.abs(t.delta! - 55.2)).toBeLessThan(1e-9);
+  });
+
   it('reports checks whose verdict or value changed', () => {
     const d = diffChecks(
       evaluation(

@@ -16,6 +16,7 @@ export interface ResultDiff {
   key: string;
   label: string;
   unit: string;
+  dimension: string;
   from: number | null;
   to: number | null;
   delta: number | null;
@@ -40,10 +41,15 @@ export function diffResults(
       key,
       label: (y ?? x)!.label,
       unit: (y ?? x)!.unit,
+      dimension: (y ?? x)!.dimension,
       from: x?.value ?? null,
       to: y?.value ?? null,
       delta,
-      deltaPct: x && y && x.value !== 0 ? (100 * (y.value - x.value)) / Math.abs(x.value) : null,
+      // A percent change of an absolute temperature depends on where zero is: none is given.
+      deltaPct:
+        x && y && x.value !== 0 && x.dimension !== 'temperature'
+          ? (100 * (y.value - x.value)) / Math.abs(x.value)
+          : null,
     });
   }
   return out;

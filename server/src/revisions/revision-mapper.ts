@@ -51,6 +51,7 @@ export function toRevision(
     verificationCode: r.verificationCode,
     justification: r.justification,
     unconfirmed: Array.isArray(r.unconfirmed) ? r.unconfirmed : [],
+    approvalNote: r.checkNote,
     rowVersion: r.rowVersion,
     supersededBy:
       r.supersededById && r.supersededAt

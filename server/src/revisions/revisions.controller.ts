@@ -9,6 +9,7 @@ import {
   type DriftReport,
   type ReturnRevisionInput,
   type Revision,
+  type RevisionChanges,
   type SaveRevisionInput,
   type SubmitRevisionInput,
 } from '@holdfast/shared';
@@ -17,6 +18,7 @@ import { Roles, SignedIn } from '../auth/policy.js';
 import { ApiBodySchema } from '../common/openapi.js';
 import { UuidParamPipe } from '../common/pipes/uuid-param.pipe.js';
 import { ZodValidationPipe } from '../common/pipes/zod-validation.pipe.js';
+import { ChangesService } from './changes.service.js';
 import { DriftService } from './drift.service.js';
 import { RevisionsService } from './revisions.service.js';
 import { WorkflowService } from './workflow.service.js';
@@ -29,12 +31,23 @@ export class RevisionsController {
     private readonly revisions: RevisionsService,
     private readonly workflow: WorkflowService,
     private readonly driftService: DriftService,
+    private readonly changesService: ChangesService,
   ) {}
 
   @Get(':id')
   @SignedIn()
   get(@CurrentUser() user: AuthUser, @Param('id', UuidParamPipe) id: string): Promise<Revision> {
     return this.revisions.get(user, id);
+  }
+
+  /** Inputs changed since the last submission the checker saw; same read rule as the revision. */
+  @Get(':id/changes')
+  @SignedIn()
+  changes(
+    @CurrentUser() user: AuthUser,
+    @Param('id', UuidParamPipe) id: string,
+  ): Promise<RevisionChanges> {
+    return this.changesService.changes(user, id);
   }
 
   @Put(':id')

@@ -1,6 +1,7 @@
 import { Module } from '@nestjs/common';
 import { CriteriaModule } from '../criteria/criteria.module.js';
 import { ReviewsModule } from '../reviews/reviews.module.js';
+import { ChangesService } from './changes.service.js';
 import { DriftService } from './drift.service.js';
 import { RevisionsController } from './revisions.controller.js';
 import { RevisionsRepository } from './revisions.repository.js';
@@ -10,7 +11,7 @@ import { WorkflowService } from './workflow.service.js';
 @Module({
   imports: [CriteriaModule, ReviewsModule],
   controllers: [RevisionsController],
-  providers: [RevisionsRepository, RevisionsService, WorkflowService, DriftService],
+  providers: [RevisionsRepository, RevisionsService, WorkflowService, DriftService, ChangesService],
   exports: [RevisionsRepository, RevisionsService],
 })
 export class RevisionsModule {}

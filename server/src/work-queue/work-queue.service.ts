@@ -46,14 +46,41 @@ export class WorkQueueService {
     }));
   }
 
+  /**
+   * What a viewer acts on is any newly approved sheet (to print into the safety file); an
+   * engineer or checker, the approvals of their own work; an administrator, none.
+   */
+  private recentlyApproved(user: AuthUser) {
+    if (user.role === 'admin') return Promise.resolve([]);
+    let q = this.base().where('r.state', '=', 'approved');
+    if (user.role !== 'viewer')
+      q = q.where((eb) =>
+        eb.or([
+          eb('r.authorId', '=', user.id),
+          eb('s.ownerId', '=', user.id),
+          eb('r.checkerId', '=', user.id),
+        ]),
+      );
+    return q.orderBy('r.approvedAt', 'desc').limit(10).execute();
+  }
+
   /** Drafts and returned revisions I author or whose sheet I own; checks waiting for me. */
   async forUser(user: AuthUser): Promise<WorkQueue> {
     const mine = (q: ReturnType<WorkQueueService['base']>) =>
       q.where((eb) => eb.or([eb('r.authorId', '=', user.id), eb('s.ownerId', '=', user.id)]));
     const isChecker = effectiveRoles(user.role).includes('checker');
+    // Only engineers (and checkers, who are engineers too) author; nobody else has drafts.
+    const authors = effectiveRoles(user.role).includes('engineer');
     const [myDrafts, returnedToMe, awaitingMyCheck, recentlyApproved] = await Promise.all([
-      mine(this.base()).where('r.state', '=', 'draft').orderBy('r.updatedAt', 'desc').execute(),
-      mine(this.base()).where('r.state', '=', 'returned').orderBy('r.returnedAt', 'desc').execute(),
+      authors
+        ? mine(this.base()).where('r.state', '=', 'draft').orderBy('r.updatedAt', 'desc').execute()
+        : Promise.resolve([]),
+      authors
+        ? mine(this.base())
+            .where('r.state', '=', 'returned')
+            .orderBy('r.returnedAt', 'desc')
+            .execute()
+        : Promise.resolve([]),
       isChecker
         ? this.base()
             .where('r.state', '=', 'in_check')
@@ -71,18 +98,7 @@ export class WorkQueueService {
             .orderBy('r.submittedAt', 'asc')
             .execute()
         : Promise.resolve([]),
-      this.base()
-        .where('r.state', '=', 'approved')
-        .where((eb) =>
-          eb.or([
-            eb('r.authorId', '=', user.id),
-            eb('s.ownerId', '=', user.id),
-            eb('r.checkerId', '=', user.id),
-          ]),
-        )
-        .orderBy('r.approvedAt', 'desc')
-        .limit(10)
-        .execute(),
+      this.recentlyApproved(user),
     ]);
     return {
       myDrafts: this.map(myDrafts),

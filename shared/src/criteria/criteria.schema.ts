@@ -161,6 +161,8 @@ export const impactReportSchema = z.object({
           value: z.number(),
           limit: z.number(),
           unit: z.string(),
+          /** The calc dimension of value and limit (SI `unit`), for display in the user's units. */
+          dimension: z.string().optional(),
         }),
       ),
     }),

@@ -49,15 +49,50 @@ export const createMachineSchema = z
   .strict();
 export type CreateMachineInput = z.infer<typeof createMachineSchema>;
 
+/** Free text in the plant's own words (brake kind, thruster, lining); empty when not known. */
+const plantWords = z.string().trim().max(200).default('');
+
 export const createPositionSchema = z
   .object({
     machineId: z.string().uuid(),
     tag,
     description: singleLineText({ min: 2, max: 200 }),
     motion: motionSchema,
+    brakeKind: plantWords,
+    thruster: plantWords,
+    lining: plantWords,
   })
   .strict();
 export type CreatePositionInput = z.infer<typeof createPositionSchema>;
+
+/** PATCH /api/register/sites/:id — the code is part of every document number and stays. */
+export const updateSiteSchema = z
+  .object({ name: z.string().trim().min(2, 'at least 2 characters').max(120) })
+  .strict();
+export type UpdateSiteInput = z.infer<typeof updateSiteSchema>;
+
+/** PATCH /api/register/machines/:id */
+export const updateMachineSchema = z
+  .object({
+    tag: tag.optional(),
+    name: z.string().trim().min(2, 'at least 2 characters').max(120).optional(),
+    kind: machineKindSchema.optional(),
+  })
+  .strict();
+export type UpdateMachineInput = z.infer<typeof updateMachineSchema>;
+
+/** PATCH /api/register/positions/:id */
+export const updatePositionSchema = z
+  .object({
+    tag: tag.optional(),
+    description: z.string().trim().min(2, 'at least 2 characters').max(200).optional(),
+    motion: motionSchema.optional(),
+    brakeKind: z.string().trim().max(200).optional(),
+    thruster: z.string().trim().max(200).optional(),
+    lining: z.string().trim().max(200).optional(),
+  })
+  .strict();
+export type UpdatePositionInput = z.infer<typeof updatePositionSchema>;
 
 export const currentApprovedSchema = z.object({
   sheetId: z.string().uuid(),
@@ -66,13 +101,30 @@ export const currentApprovedSchema = z.object({
   revisionLabel: z.string(),
 });
 
+/** A sheet of a position that is not approved yet: a draft, in check or returned. */
+export const openSheetSchema = z.object({
+  sheetId: z.string().uuid(),
+  documentNumber: z.string(),
+  sheetType: z.string(),
+  revisionLabel: z.string(),
+  state: z.string(),
+});
+export type OpenSheet = z.infer<typeof openSheetSchema>;
+
 export const positionSchema = z.object({
   id: z.string().uuid(),
   tag: z.string(),
   description: z.string(),
   motion: motionSchema,
+  brakeKind: z.string(),
+  thruster: z.string(),
+  lining: z.string(),
   /** The approved revision currently in force for this position (latest approved sheet), if any. */
   currentApproved: currentApprovedSchema.nullable(),
+  /** The approved revision in force per sheet type (a brake sheet and a disc-spring sheet both). */
+  inForce: z.array(currentApprovedSchema.extend({ sheetType: z.string() })),
+  /** Sheets of this position whose latest revision is not approved. */
+  openSheets: z.array(openSheetSchema),
 });
 export type Position = z.infer<typeof positionSchema>;
 
@@ -103,5 +155,5 @@ export const createdMachineSchema = machineSchema
   .omit({ positions: true })
   .extend({ siteId: z.string().uuid() });
 export const createdPositionSchema = positionSchema
-  .omit({ currentApproved: true })
+  .omit({ currentApproved: true, inForce: true, openSheets: true })
   .extend({ machineId: z.string().uuid() });

@@ -44,6 +44,8 @@ export const revisionSchema = revisionSummarySchema.extend({
   justification: z.string().nullable(),
   /** Fields still holding an example, copied or default value nobody confirmed for this brake. */
   unconfirmed: z.array(z.string()).default([]),
+  /** The checker's note on approval; printed in the approvals table. */
+  approvalNote: z.string().nullable(),
   rowVersion: z.number().int().nonnegative(),
   supersededBy: z
     .object({ id: z.string().uuid(), label: z.string(), at: isoDateSchema })

@@ -108,6 +108,8 @@ export const compareSchema = z.object({
       to: z.number().nullable(),
       delta: z.number().nullable(),
       deltaPct: z.number().nullable(),
+      /** The calc dimension, so a client can show the values in the user's units. */
+      dimension: z.string().optional(),
     }),
   ),
   checks: z.array(

@@ -1,7 +1,7 @@
 import { demoPassword, demoUsers, type DemoUserKey } from './demo-users';
 
 /** Calls the API of the app under test as a demo user (set-up steps that are not under test). */
-export async function apiAs(baseUrl: string, who: DemoUserKey) {
+export async function apiClientAs(baseUrl: string, who: DemoUserKey) {
   const res = await fetch(`${baseUrl}/api/auth/sign-in`, {
     method: 'POST',
     headers: { 'Content-Type': 'application/json' },
@@ -35,7 +35,7 @@ export async function createHoistSheet(
   title: string,
   extra: Record<string, unknown> = {},
 ): Promise<{ path: string; sheetId: string; revisionId: string }> {
-  const call = await apiAs(baseUrl, who);
+  const call = await apiClientAs(baseUrl, who);
   const register = await call<RegisterAnswer>('GET', '/register');
   const positions = register.sites.flatMap((s) => s.machines.flatMap((m) => m.positions));
   const position = positions.find((p) => p.tag === 'B2') ?? positions[0]!;
@@ -50,4 +50,67 @@ export async function createHoistSheet(
     sheetId: sheet.id,
     revisionId: sheet.latest.id,
   };
+}
+
+const tokens = new Map<string, string>();
+
+/**
+ * Calls the API as a demo user, for setting up a scene faster than clicking through it. Tokens are
+ * cached per user so the sign-in throttle is never reached.
+ */
+export async function apiAs<T = any>(
+  baseUrl: string,
+  who: DemoUserKey,
+  method: string,
+  path: string,
+  body?: unknown,
+): Promise<T> {
+  let token = tokens.get(who);
+  if (!token) {
+    const res = await fetch(`${baseUrl}/api/auth/sign-in`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({ email: demoUsers[who].email, password: demoPassword }),
+    });
+    if (!res.ok) throw new Error(`sign-in as ${who}: ${res.status} ${await res.text()}`);
+    token = ((await res.json()) as { accessToken: string }).accessToken;
+    tokens.set(who, token);
+  }
+  const res = await fetch(`${baseUrl}/api${path}`, {
+    method,
+    headers: {
+      Authorization: `Bearer ${token}`,
+      ...(body === undefined ? {} : { 'Content-Type': 'application/json' }),
+    },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
+  const text = await res.text();
+  if (!res.ok) throw new Error(`${method} ${path} as ${who}: ${res.status} ${text}`);
+  return (text ? JSON.parse(text) : undefined) as T;
+}
+
+/** Creates a sheet on the first register position through the API; returns its ids. */
+export async function createSheetViaApi(baseUrl: string, title: string, positionTag?: string) {
+  const reg = await apiAs(baseUrl, 'engineer', 'GET', '/register');
+  const positions = reg.sites.flatMap((s: any) => s.machines.flatMap((m: any) => m.positions)) as {
+    id: string;
+    tag: string;
+  }[];
+  const position = positionTag ? positions.find((p) => p.tag === positionTag) : positions[0];
+  if (!position) throw new Error(`no position ${positionTag ?? ''} in the register`);
+  const sheet = await apiAs(baseUrl, 'engineer', 'POST', '/sheets', {
+    title,
+    positionId: position.id,
+    sheetType: 'hoist-shoe-brake',
+  });
+  return { sheetId: sheet.id as string, revisionId: sheet.revisions[0].id as string, sheet };
+}
+
+/** Sends a revision for check as the engineer, with a note to the checker. */
+export async function submitViaApi(baseUrl: string, revisionId: string, justification: string) {
+  const rev = await apiAs(baseUrl, 'engineer', 'GET', `/revisions/${revisionId}`);
+  return apiAs(baseUrl, 'engineer', 'POST', `/revisions/${revisionId}/submit`, {
+    rowVersion: rev.rowVersion,
+    justification,
+  });
 }

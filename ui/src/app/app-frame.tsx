@@ -37,6 +37,17 @@ export function AppFrame() {
       padding="lg"
       className={classes.shell}
     >
+      <a
+        href="#main-content"
+        className={classes.skip}
+        onClick={(e) => {
+          // Move focus, not only the scroll position, so the next Tab continues in the page.
+          e.preventDefault();
+          document.getElementById('main-content')?.focus();
+        }}
+      >
+        Skip to main content
+      </a>
       <AppShell.Header className={classes.header}>
         <Group h="100%" px="md" justify="space-between" wrap="nowrap">
           <Group gap="sm" wrap="nowrap">
@@ -65,7 +76,7 @@ export function AppFrame() {
       <AppShell.Navbar className={classes.navbar}>
         <FrameNav user={session.user} />
       </AppShell.Navbar>
-      <AppShell.Main className={classes.main}>
+      <AppShell.Main className={classes.main} id="main-content" tabIndex={-1}>
         <div className={handle.wide ? classes.wide : classes.content}>
           <Suspense fallback={<PageLoader />}>
             <Outlet />

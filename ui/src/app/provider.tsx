@@ -6,7 +6,7 @@ import { PageLoader } from '../components/page-loader';
 import { restoreSession } from '../lib/api-client';
 import { queryClient as appQueryClient } from '../lib/query-client';
 import { sessionStore, useSession } from '../lib/session';
-import { theme } from '../theme';
+import { cssVariablesResolver, theme } from '../theme';
 
 let restoreStarted = false;
 
@@ -39,7 +39,11 @@ export function AppProvider({
   queryClient?: QueryClient;
 }) {
   return (
-    <MantineProvider theme={theme} defaultColorScheme="light">
+    <MantineProvider
+      theme={theme}
+      cssVariablesResolver={cssVariablesResolver}
+      defaultColorScheme="light"
+    >
       <Notifications position="top-right" limit={4} />
       <QueryClientProvider client={queryClient}>
         <SessionGate queryClient={queryClient}>{children}</SessionGate>

@@ -42,6 +42,7 @@ export function workbenchRoutes(queryClient: QueryClient): RouteObject[] {
       lazy: lazy(() => import('./routes/sheets/sheet-page')),
     },
     { path: 'sheets/:sheetId/compare', lazy: lazy(() => import('./routes/sheets/compare-page')) },
+    { path: 'sheets/:sheetId/audit', lazy: lazy(() => import('./routes/sheets/audit-page')) },
     { path: 'equipment', lazy: lazy(() => import('./routes/equipment/equipment')) },
     { path: 'criteria', lazy: lazy(() => import('./routes/criteria/criteria')) },
   ];

@@ -22,15 +22,22 @@ export function fileNameFromDisposition(header: string | null): string | null {
   return plain?.[1]?.trim() ?? null;
 }
 
-/** Fetch a file (PDF, attachment) with the access token, as a Blob. */
+/** Fetch a file (PDF, attachment) with the access token, as a Blob; a `body` makes it a POST. */
 export async function apiDownload(
   path: string,
-  options: { query?: QueryParams; signal?: AbortSignal } = {},
+  options: { query?: QueryParams; signal?: AbortSignal; body?: unknown } = {},
 ): Promise<Download> {
+  const post = options.body !== undefined;
   const url = apiUrl(path, options.query);
   const res = await withAuthRetry(true, async (headers) => {
     try {
-      return await fetch(url, { headers, signal: options.signal, credentials: 'same-origin' });
+      return await fetch(url, {
+        method: post ? 'POST' : 'GET',
+        headers: post ? { ...headers, 'Content-Type': 'application/json' } : headers,
+        body: post ? JSON.stringify(options.body) : undefined,
+        signal: options.signal,
+        credentials: 'same-origin',
+      });
     } catch (error) {
       if (options.signal?.aborted) throw error;
       throw ApiRequestError.network(error);

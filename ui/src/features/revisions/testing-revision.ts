@@ -38,6 +38,7 @@ export function makeRevision(overrides: Partial<Revision> = {}): Revision {
     verificationCode: null,
     justification: null,
     unconfirmed: [],
+    approvalNote: null,
     rowVersion: 3,
     supersededBy: null,
     canEdit: true,

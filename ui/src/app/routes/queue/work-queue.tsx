@@ -8,6 +8,7 @@ import { useWorkQueue, workQueueQueryOptions } from '../../../features/queue/api
 import { QueueSection } from '../../../features/queue/components/queue-section';
 import { StateBadge } from '../../../features/sheets/components/state-badge';
 import { UnderReviewQueue } from '../../../features/criteria-review/components/under-review-queue';
+import { AdminQueue, queueSections, roleLine } from './queue-sections';
 
 export const handle: RouteHandle = { title: 'Work queue' };
 
@@ -23,7 +24,10 @@ export function Component() {
   const queue = useWorkQueue();
   const first = user.displayName.split(' ')[0];
   return (
-    <Page title="Work queue" description={`What is waiting for you, ${first}.`}>
+    <Page
+      title="Work queue"
+      description={`What is waiting for you, ${first}. ${roleLine[user.role]}`}
+    >
       {queue.isPending ? (
         <SimpleGrid cols={{ base: 1, md: 2 }}>
           {[0, 1, 2, 3].map((i) => (
@@ -35,38 +39,17 @@ export function Component() {
       ) : (
         <SimpleGrid cols={{ base: 1, md: 2 }} spacing="md">
           <UnderReviewQueue />
-          <QueueSection
-            id="returned"
-            title="Returned to me"
-            empty="Nothing returned to you."
-            items={queue.data.returnedToMe}
-            renderState={(i) => <StateBadge state={i.state} size="xs" />}
-          />
-          <QueueSection
-            id="check"
-            title="Waiting for my check"
-            empty={
-              user.role === 'checker'
-                ? 'No revision is waiting for your check.'
-                : 'Checking is done by checkers.'
-            }
-            items={queue.data.awaitingMyCheck}
-            renderState={(i) => <StateBadge state={i.state} size="xs" />}
-          />
-          <QueueSection
-            id="drafts"
-            title="My drafts"
-            empty="You have no drafts open."
-            items={queue.data.myDrafts}
-            renderState={(i) => <StateBadge state={i.state} size="xs" />}
-          />
-          <QueueSection
-            id="approved"
-            title="Recently approved"
-            empty="Nothing approved lately."
-            items={queue.data.recentlyApproved}
-            renderState={(i) => <StateBadge state={i.state} size="xs" />}
-          />
+          {queueSections(user.role).map((section) => (
+            <QueueSection
+              key={section.id}
+              id={section.id}
+              title={section.title}
+              empty={section.empty}
+              items={queue.data[section.list]}
+              renderState={(i) => <StateBadge state={i.state} size="xs" />}
+            />
+          ))}
+          {user.role === 'admin' ? <AdminQueue /> : null}
         </SimpleGrid>
       )}
     </Page>

@@ -1,27 +1,18 @@
 import { useState } from 'react';
 import { Button, Group, Menu } from '@mantine/core';
 import { notifications } from '@mantine/notifications';
-import {
-  IconArrowBackUp,
-  IconChevronDown,
-  IconCircleCheck,
-  IconPrinter,
-  IconSend,
-} from '@tabler/icons-react';
+import { IconChevronDown, IconPrinter, IconSend } from '@tabler/icons-react';
 import type { CheckResult } from '@holdfast/calc';
 import type { Revision } from '@holdfast/shared';
 import { errorMessage } from '../../../lib/api-client';
-import { useApproveRevision } from '../../../features/revisions/api/approve-revision';
 import { usePrintRevision, type PrintKind } from '../../../features/revisions/api/print-revision';
-import { useReturnRevision } from '../../../features/revisions/api/return-revision';
 import { useSubmitRevision } from '../../../features/revisions/api/submit-revision';
 import { useDriftRevision } from '../../../features/revisions/api/drift-revision';
 import { DriftDialog } from '../../../features/revisions/components/drift-dialog';
 import { UnconfirmedDialog } from '../../../features/revisions/components/unconfirmed-dialog';
 import type { WorkbenchContext } from '../../../features/revisions/components/revision-workbench';
-import { ApproveDialog } from '../../../features/review/components/approve-dialog';
-import { ReturnDialog } from '../../../features/review/components/return-dialog';
 import { SubmitDialog } from '../../../features/review/components/submit-dialog';
+import { CheckActions } from './check-actions';
 
 export interface RevisionActionsProps {
   revision: Revision;
@@ -37,8 +28,6 @@ export function RevisionActions({ revision, ctx, openComments }: RevisionActions
   const [failing, setFailing] = useState<CheckResult[]>([]);
   const [rowVersion, setRowVersion] = useState(revision.rowVersion);
   const submit = useSubmitRevision(revision.id);
-  const approve = useApproveRevision(revision.id);
-  const ret = useReturnRevision(revision.id);
   const print = usePrintRevision(revision.id);
   const drift = useDriftRevision(revision.id);
   const close = () => setDialog(null);
@@ -69,7 +58,7 @@ export function RevisionActions({ revision, ctx, openComments }: RevisionActions
         onError: (e) =>
           notifications.show({
             color: 'fail',
-            title: 'Could not open the printout',
+            title: 'Could not download the printout',
             message: errorMessage(e),
           }),
       },
@@ -86,27 +75,7 @@ export function RevisionActions({ revision, ctx, openComments }: RevisionActions
           Send for check
         </Button>
       ) : null}
-      {revision.canCheck ? (
-        <>
-          <Button
-            size="sm"
-            color="fail.7"
-            variant="outline"
-            leftSection={<IconArrowBackUp size={16} aria-hidden />}
-            onClick={() => setDialog('return')}
-          >
-            Return
-          </Button>
-          <Button
-            size="sm"
-            color="pass.8"
-            leftSection={<IconCircleCheck size={16} aria-hidden />}
-            onClick={() => setDialog('approve')}
-          >
-            Approve
-          </Button>
-        </>
-      ) : null}
+      <CheckActions revision={revision} openComments={openComments} />
       <Menu position="bottom-end" withinPortal>
         <Menu.Target>
           <Button
@@ -157,19 +126,6 @@ export function RevisionActions({ revision, ctx, openComments }: RevisionActions
         onClose={close}
         failingChecks={failing}
         onSubmit={(justification) => submit.mutateAsync({ rowVersion, justification })}
-      />
-      <ApproveDialog
-        opened={dialog === 'approve'}
-        onClose={close}
-        revisionLabel={revision.label}
-        openComments={openComments}
-        onApprove={(note) => approve.mutateAsync({ rowVersion: revision.rowVersion, note })}
-      />
-      <ReturnDialog
-        opened={dialog === 'return'}
-        onClose={close}
-        authorName={revision.author.displayName}
-        onReturn={(comment) => ret.mutateAsync({ rowVersion: revision.rowVersion, comment })}
       />
     </Group>
   );

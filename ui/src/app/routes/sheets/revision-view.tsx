@@ -15,7 +15,9 @@ import { groupByAnchor } from '../../../features/review/utils/anchors';
 import { useRevision } from '../../../features/revisions/api/get-revision';
 import { RevisionWorkbench } from '../../../features/revisions/components/revision-workbench';
 import { UnderReviewBanner } from '../../../features/criteria-review/components/under-review-banner';
+import { ChangesPanel } from '../../../features/revisions/components/changes-panel';
 import { RevisionActions } from './revision-actions';
+import { ReviewSummary } from './review-summary';
 
 /** One revision: the live workbench with review markers in place, then comments and files. */
 export function RevisionView({ revisionId, user }: { revisionId: string; user: User }) {
@@ -131,23 +133,27 @@ export function RevisionView({ revisionId, user }: { revisionId: string; user: U
           )}
         </Tabs.Panel>
         <Tabs.Panel value="review">
-          <Grid gap="md">
-            <Grid.Col span={{ base: 12, md: 7 }}>
-              <CommentsPanel
-                revisionId={revisionId}
-                canComment={canComment}
-                canResolve={canComment}
-                describe={describe}
-                onReveal={reveal}
-              />
-            </Grid.Col>
-            <Grid.Col span={{ base: 12, md: 5 }}>
-              <AttachmentsPanel
-                revisionId={revisionId}
-                canUpload={user.role !== 'viewer' && !frozen}
-              />
-            </Grid.Col>
-          </Grid>
+          <Stack gap="md">
+            <ReviewSummary revision={revision} openComments={openComments} />
+            {user.role !== 'viewer' ? <ChangesPanel revisionId={revisionId} /> : null}
+            <Grid gap="md">
+              <Grid.Col span={{ base: 12, md: 7 }}>
+                <CommentsPanel
+                  revisionId={revisionId}
+                  canComment={canComment}
+                  canResolve={canComment}
+                  describe={describe}
+                  onReveal={reveal}
+                />
+              </Grid.Col>
+              <Grid.Col span={{ base: 12, md: 5 }}>
+                <AttachmentsPanel
+                  revisionId={revisionId}
+                  canUpload={user.role !== 'viewer' && !frozen}
+                />
+              </Grid.Col>
+            </Grid>
+          </Stack>
         </Tabs.Panel>
       </Tabs>
     </>

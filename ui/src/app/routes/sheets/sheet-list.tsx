@@ -12,7 +12,7 @@ import {
   TextInput,
 } from '@mantine/core';
 import { useDebouncedValue } from '@mantine/hooks';
-import { IconPlus, IconSearch } from '@tabler/icons-react';
+import { IconFileSpreadsheet, IconPlus, IconPrinter, IconSearch } from '@tabler/icons-react';
 import type { QueryClient } from '@tanstack/react-query';
 import { useNavigate, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import {
@@ -33,6 +33,7 @@ import { CreateSheetDialog } from '../../../features/sheets/components/create-sh
 import { SheetsTable, type SortKey } from '../../../features/sheets/components/sheets-table';
 import { stateLabel } from '../../../features/sheets/components/state-badge';
 import { positionGroups } from './position-groups';
+import { useListOutputs } from './use-list-outputs';
 
 export const handle: RouteHandle = { title: 'Sheets', wide: true };
 
@@ -73,6 +74,7 @@ export function Component() {
   const [text, setText] = useState(params.q ?? '');
   const [debounced] = useDebouncedValue(text, 300);
   const [createOpen, setCreateOpen] = useState(false);
+  const { picked, toggle, printPicked, exportCsv, printing } = useListOutputs(params);
 
   const set = (patch: Record<string, string | undefined>) =>
     setSearch((prev) => {
@@ -107,14 +109,32 @@ export function Component() {
       title="Sheets"
       description="Every calculation sheet, by document number. Filter, sort, or start a new one."
       actions={
-        canCreate ? (
+        <Group gap="xs">
           <Button
-            leftSection={<IconPlus size={16} aria-hidden />}
-            onClick={() => setCreateOpen(true)}
+            variant="default"
+            leftSection={<IconPrinter size={16} aria-hidden />}
+            disabled={picked.size === 0}
+            loading={printing}
+            onClick={printPicked}
           >
-            New sheet
+            Print selected ({picked.size})
           </Button>
-        ) : null
+          <Button
+            variant="default"
+            leftSection={<IconFileSpreadsheet size={16} aria-hidden />}
+            onClick={exportCsv}
+          >
+            Export CSV
+          </Button>
+          {canCreate ? (
+            <Button
+              leftSection={<IconPlus size={16} aria-hidden />}
+              onClick={() => setCreateOpen(true)}
+            >
+              New sheet
+            </Button>
+          ) : null}
+        </Group>
       }
     >
       <Paper p="sm">
@@ -200,6 +220,8 @@ export function Component() {
             sort={params.sort ?? 'documentNumber'}
             order={params.order ?? 'asc'}
             onSort={onSort}
+            selected={picked}
+            onToggle={toggle}
           />
         )}
       </Paper>
@@ -215,6 +237,14 @@ export function Component() {
             onChange={(p) => set({ page: String(p) })}
             size="sm"
             aria-label="Pages"
+            getControlProps={(control) => ({
+              'aria-label':
+                control === 'previous'
+                  ? 'Previous page'
+                  : control === 'next'
+                    ? 'Next page'
+                    : `${control} page`,
+            })}
           />
         </Group>
       ) : null}

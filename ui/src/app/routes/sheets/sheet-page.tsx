@@ -100,6 +100,15 @@ export function Component() {
                 Revisions ({revisions.length})
               </Button>
             )}
+            <Button
+              variant="default"
+              size="sm"
+              component={Link}
+              to={`/sheets/${sheet.id}/audit`}
+              leftSection={<IconHistory size={16} aria-hidden />}
+            >
+              Audit trail
+            </Button>
             {canStartRevision ? (
               <Button
                 size="sm"

@@ -1,4 +1,13 @@
-import { Avatar, Group, Menu, SegmentedControl, Stack, Text, UnstyledButton } from '@mantine/core';
+import {
+  Avatar,
+  Group,
+  Menu,
+  SegmentedControl,
+  Stack,
+  Text,
+  UnstyledButton,
+  VisuallyHidden,
+} from '@mantine/core';
 import { notifications } from '@mantine/notifications';
 import {
   IconChevronDown,
@@ -43,12 +52,11 @@ export function UserMenu() {
   return (
     <Menu position="bottom-end" width={280} shadow="md" closeOnItemClick>
       <Menu.Target>
-        <UnstyledButton
-          className={classes.trigger}
-          aria-label={`User menu for ${user.displayName}`}
-        >
+        {/* Named by its content, so the name holds the visible text (WCAG 2.5.3). */}
+        <UnstyledButton className={classes.trigger}>
+          <VisuallyHidden>User menu for </VisuallyHidden>
           <Group gap={8} wrap="nowrap">
-            <Avatar color="amber" variant="filled" radius="sm" size={30}>
+            <Avatar color="amber" variant="filled" radius="sm" size={30} aria-hidden>
               {user.initials}
             </Avatar>
             <Text size="sm" fw={500} className={classes.name} data-testid="current-user-name">

@@ -178,7 +178,7 @@ export const ResultsPanel = memo(function ResultsPanel(props: ResultsPanelProps)
             </Alert>
           ) : null}
           <Tabs defaultValue="checks" keepMounted={false}>
-            <Tabs.List mb="sm" style={{ flexWrap: 'nowrap', overflowX: 'auto' }}>
+            <Tabs.List mb="sm" style={{ flexWrap: 'wrap' }}>
               <Tabs.Tab value="checks" px="xs">
                 Checks {failing > 0 ? `(${failing} failing)` : ''}
               </Tabs.Tab>

@@ -2,14 +2,23 @@ import { Badge, Group, Paper, Table, Text, Title } from '@mantine/core';
 import { IconArrowRight } from '@tabler/icons-react';
 import type { Compare } from '@holdfast/shared';
 import { formatNumber } from '@holdfast/calc';
+import { useCurrentUser } from '../../../lib/session';
+import { formatChange, formatSI } from '../../calc/utils/format-si';
+import type { UnitSystem } from '../../calc/utils/units';
+import { showStoredValue as show } from '../utils/stored-value';
 
-function show(v: unknown): string {
-  if (v === null || v === undefined) return '—';
-  if (typeof v === 'object' && 'value' in (v as object) && 'unit' in (v as object)) {
-    const q = v as { value: unknown; unit: unknown };
-    return `${String(q.value)} ${String(q.unit)}`;
-  }
-  return String(v);
+type MovedResult = Compare['results'][number];
+
+/**
+ * The change in the result's own unit, and in percent where a percent means something (not for
+ * an absolute temperature, whose zero is arbitrary).
+ */
+function changeText(r: MovedResult, system: UnitSystem): string {
+  if (r.from === null || r.to === null) return '—';
+  const abs = formatChange(r.from, r.to, r.dimension, system, r.unit);
+  if (r.deltaPct === null || r.dimension === 'temperature') return abs;
+  const sign = r.deltaPct > 0 ? '+' : r.deltaPct < 0 ? '−' : '';
+  return `${abs} (${sign}${formatNumber(Math.abs(r.deltaPct), 3)} %)`;
 }
 
 function verdict(pass: boolean | undefined) {
@@ -28,6 +37,7 @@ function verdict(pass: boolean | undefined) {
 
 /** What changed between two revisions: inputs, results that moved, and checks whose verdict or use changed. */
 export function CompareView({ data }: { data: Compare }) {
+  const system = useCurrentUser().unitSystem;
   const from = data.from.label;
   const to = data.to.label;
   return (
@@ -121,7 +131,7 @@ export function CompareView({ data }: { data: Compare }) {
           </Table.Tbody>
         </Table>
       </Paper>
-      <Paper p="md" component="section" aria-labelledby="cmp-results">
+      <Paper p="md" component="section" aria-labelledby="cmp-results" data-testid="results-moved">
         <Title order={2} size="h5" id="cmp-results" mb="sm">
           Results moved ({data.results.length})
         </Title>
@@ -137,30 +147,27 @@ export function CompareView({ data }: { data: Compare }) {
                 <Table.Th ta="right">Rev. {from}</Table.Th>
                 <Table.Th ta="right">Rev. {to}</Table.Th>
                 <Table.Th ta="right">Change</Table.Th>
-                <Table.Th>Unit (SI)</Table.Th>
               </Table.Tr>
             </Table.Thead>
             <Table.Tbody>
               {data.results.map((r) => (
                 <Table.Tr key={r.key}>
                   <Table.Td>{r.label}</Table.Td>
-                  <Table.Td ff="monospace" ta="right">
-                    {r.from === null ? '—' : formatNumber(r.from, 4)}
+                  <Table.Td ff="monospace" ta="right" style={{ whiteSpace: 'nowrap' }}>
+                    {r.from === null ? '—' : formatSI(r.from, r.dimension, system, r.unit)}
                   </Table.Td>
-                  <Table.Td ff="monospace" ta="right" fw={600}>
-                    {r.to === null ? '—' : formatNumber(r.to, 4)}
+                  <Table.Td ff="monospace" ta="right" style={{ whiteSpace: 'nowrap' }} fw={600}>
+                    {r.to === null ? '—' : formatSI(r.to, r.dimension, system, r.unit)}
                   </Table.Td>
                   <Table.Td
                     ff="monospace"
                     ta="right"
+                    style={{ whiteSpace: 'nowrap' }}
                     fw={r.deltaPct !== null && Math.abs(r.deltaPct) >= 1 ? 700 : 400}
                     bg={r.deltaPct !== null && Math.abs(r.deltaPct) >= 1 ? 'amber.0' : undefined}
                   >
-                    {r.deltaPct === null
-                      ? '—'
-                      : `${r.deltaPct > 0 ? '+' : r.deltaPct < 0 ? '−' : ''}${formatNumber(Math.abs(r.deltaPct), 3)} %`}
+                    {changeText(r, system)}
                   </Table.Td>
-                  <Table.Td c="dimmed">{r.unit}</Table.Td>
                 </Table.Tr>
               ))}
             </Table.Tbody>

@@ -1,5 +1,17 @@
 import { Badge, Button, Select, Stack, Table, Text, TextInput } from '@mantine/core';
 import type { CriterionConfirmation, CriterionValueInput } from '@holdfast/shared';
+import { dimensionOfSIUnit } from '../../calc/utils/format-si';
+import { presentSI } from '../../calc/utils/units';
+
+/**
+ * A stored criterion (SI) in the trade's units, e.g. 2 100 000 Pa·m/s → 2.100 MPa·m/s. Editing
+ * stays in the stored SI unit, so what is typed is what is stored.
+ */
+function tradeValue(v: CriterionValueInput): { number: string; unit: string } {
+  const dimension = dimensionOfSIUnit(v.unit);
+  if (!dimension) return { number: String(v.value), unit: v.unit };
+  return presentSI(v.value, dimension, 'SI');
+}
 
 const CONFIDENCE_COLOR: Record<CriterionValueInput['confidence'], string> = {
   published: 'pass',
@@ -96,12 +108,10 @@ export function CriteriaValuesTable({
                     }}
                   />
                 ) : (
-                  v.value
+                  tradeValue(v).number
                 )}
               </Table.Td>
-              <Table.Td ff="monospace" c="dimmed">
-                {v.unit || '—'}
-              </Table.Td>
+              <Table.Td ff="monospace">{(onEdit ? v.unit : tradeValue(v).unit) || '—'}</Table.Td>
               <Table.Td>
                 {onEdit ? (
                   <TextInput

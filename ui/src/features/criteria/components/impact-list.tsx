@@ -1,13 +1,15 @@
 import { Alert, Anchor, List, Paper, Skeleton, Text, Title } from '@mantine/core';
 import { IconAlertTriangle, IconCircleCheck } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
-import { formatNumber } from '@holdfast/calc';
 import { ErrorPanel } from '../../../components/errors/error-panel';
+import { useCurrentUser } from '../../../lib/session';
+import { formatSI } from '../../calc/utils/format-si';
 import { useCriteriaImpact } from '../api/get-criteria-impact';
 
 /** Approved sheets that no longer pass under a criteria version. */
 export function ImpactList({ setId, version }: { setId: string; version: number }) {
   const impact = useCriteriaImpact(setId, version);
+  const system = useCurrentUser().unitSystem;
   return (
     <Paper p="md" component="section" aria-labelledby="impact-title">
       <Title order={2} size="h5" id="impact-title" mb="sm">
@@ -45,8 +47,8 @@ export function ImpactList({ setId, version }: { setId: string; version: number 
                 <List size="xs" withPadding>
                   {item.failing.map((f) => (
                     <List.Item key={f.id}>
-                      Fail: {f.label} — {formatNumber(f.value, 4)} against{' '}
-                      {formatNumber(f.limit, 4)} {f.unit}
+                      Fail: {f.label} — {formatSI(f.value, f.dimension, system, f.unit)} against{' '}
+                      {formatSI(f.limit, f.dimension, system, f.unit)}
                     </List.Item>
                   ))}
                 </List>

@@ -50,7 +50,7 @@ export function QueueSection({ id, title, empty, items, renderState }: QueueSect
                     </Text>{' '}
                     rev. {item.revisionLabel}
                   </Anchor>
-                  <Text size="xs" c="dimmed" truncate>
+                  <Text size="xs" c="dimmed">
                     {item.title} · {item.author.displayName} ·{' '}
                     {new Date(item.updatedAt).toLocaleDateString('en-GB')}
                   </Text>

@@ -1,11 +1,14 @@
 import { Text } from '@mantine/core';
 import { ActionDialog } from './action-dialog';
+import { AuthorNote } from './author-note';
 
 export interface ApproveDialogProps {
   opened: boolean;
   onClose: () => void;
   revisionLabel: string;
   openComments: number;
+  /** The author's note to the checker, when checks failed. */
+  justification?: string | null;
   onApprove: (note: string | undefined) => Promise<unknown>;
 }
 
@@ -14,6 +17,7 @@ export function ApproveDialog({
   onClose,
   revisionLabel,
   openComments,
+  justification = null,
   onApprove,
 }: ApproveDialogProps) {
   return (
@@ -32,6 +36,7 @@ export function ApproveDialog({
               {openComments === 1 ? 'One comment is' : `${openComments} comments are`} still open.
             </Text>
           ) : null}
+          <AuthorNote justification={justification} />
         </>
       }
       textLabel="Approval note (optional)"

@@ -11,6 +11,8 @@ export interface CommentComposerProps {
   target: string;
   onDone?: () => void;
   autoFocus?: boolean;
+  /** Set to answer that comment: the reply hangs under it. */
+  parentId?: string;
 }
 
 export function CommentComposer({
@@ -19,28 +21,25 @@ export function CommentComposer({
   target,
   onDone,
   autoFocus,
+  parentId,
 }: CommentComposerProps) {
   const [body, setBody] = useState('');
   const create = useCreateComment(revisionId);
   const fieldError = create.error ? errorMessage(create.error) : undefined;
   const submit = () => {
     if (!body.trim()) return;
-    create.mutate(
-      { body: body.trim(), anchor },
-      {
-        onSuccess: () => {
-          setBody('');
-          onDone?.();
-        },
+    create.mutate(parentId ? { body: body.trim(), parentId } : { body: body.trim(), anchor }, {
+      onSuccess: () => {
+        setBody('');
+        onDone?.();
       },
-    );
+    });
   };
   return (
     <Stack gap={6}>
       <Textarea
-        label={`Comment on ${target}`}
+        label={parentId ? `Reply to ${target}` : `Comment on ${target}`}
         rows={2}
-
         value={body}
         onChange={(e) => setBody(e.currentTarget.value)}
         onKeyDown={(e) => {
@@ -55,7 +54,7 @@ export function CommentComposer({
           Ctrl+Enter posts
         </Text>
         <Button size="xs" onClick={submit} loading={create.isPending} disabled={!body.trim()}>
-          Post comment
+          {parentId ? 'Post reply' : 'Post comment'}
         </Button>
       </Group>
     </Stack>

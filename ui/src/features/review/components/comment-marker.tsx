@@ -78,7 +78,12 @@ export function CommentMarker({
       <Popover.Dropdown>
         <ScrollArea.Autosize mah={420}>
           <Stack gap="sm">
-            <CommentThread revisionId={revisionId} comments={comments} canResolve={canResolve} />
+            <CommentThread
+              revisionId={revisionId}
+              comments={comments}
+              canResolve={canResolve}
+              canComment={canComment}
+            />
             {canComment ? (
               <CommentComposer revisionId={revisionId} anchor={anchor} target={label} autoFocus />
             ) : null}

@@ -69,7 +69,12 @@ export function CommentsPanel({
                     On the whole revision
                   </Text>
                 )}
-                <CommentThread revisionId={revisionId} comments={[c]} canResolve={canResolve} />
+                <CommentThread
+                  revisionId={revisionId}
+                  comments={[c]}
+                  canResolve={canResolve}
+                  canComment={canComment}
+                />
               </Stack>
             ))}
           {canComment ? (

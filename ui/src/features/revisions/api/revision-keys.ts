@@ -6,6 +6,7 @@ export const revisionKeys = {
   comments: (id: string) => [...revisionKeys.detail(id), 'comments'] as const,
   attachments: (id: string) => [...revisionKeys.detail(id), 'attachments'] as const,
   drift: (id: string) => [...revisionKeys.detail(id), 'drift'] as const,
+  changes: (id: string) => [...revisionKeys.detail(id), 'changes'] as const,
 };
 
 /** Other owners' roots that a revision's state change makes stale. */

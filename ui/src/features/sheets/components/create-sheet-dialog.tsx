@@ -3,6 +3,7 @@ import { Button, Group, Modal, Select, Stack, TextInput } from '@mantine/core';
 import { createSheetSchema, sheetTypeIds, toFieldIssues, type SheetDetail } from '@holdfast/shared';
 import { errorMessage, isApiRequestError } from '../../../lib/api-client';
 import { sheetTypeTitle } from '../../calc/utils/sheet-types';
+import { OpenSheetWarning } from '../../register/components/open-sheet-warning';
 import { useCreateSheet } from '../api/create-sheet';
 import { SheetStartPicker, type StartKind } from './sheet-start-picker';
 
@@ -93,6 +94,7 @@ export function CreateSheetDialog({
           required
           error={errors.sheetType}
         />
+        <OpenSheetWarning positionId={positionId} sheetType={sheetType} />
         <TextInput
           label="Title"
           placeholder="e.g. Main hoist service brake, heavier ladle"

@@ -1,4 +1,4 @@
-import { Anchor, Group, Table, Text, UnstyledButton } from '@mantine/core';
+import { Anchor, Checkbox, Group, Table, Text, UnstyledButton } from '@mantine/core';
 import { IconArrowDown, IconArrowUp, IconArrowsSort } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
 import type { SheetSummary } from '@holdfast/shared';
@@ -12,6 +12,9 @@ export interface SheetsTableProps {
   sort: SortKey;
   order: 'asc' | 'desc';
   onSort: (key: SortKey) => void;
+  /** Approved revision ids chosen for a safety-file printout. */
+  selected?: ReadonlySet<string>;
+  onToggle?: (approvedRevisionId: string) => void;
 }
 
 function SortHeader({
@@ -20,7 +23,7 @@ function SortHeader({
   sort,
   order,
   onSort,
-}: { label: string; k: SortKey } & Omit<SheetsTableProps, 'items'>) {
+}: { label: string; k: SortKey } & Pick<SheetsTableProps, 'sort' | 'order' | 'onSort'>) {
   const active = sort === k;
   const Icon = !active ? IconArrowsSort : order === 'asc' ? IconArrowUp : IconArrowDown;
   return (
@@ -36,13 +39,20 @@ function SortHeader({
 }
 
 /** One page of sheets; sorting is done by the server, the headers only ask for it. */
-export function SheetsTable({ items, sort, order, onSort }: SheetsTableProps) {
+export function SheetsTable({ items, sort, order, onSort, selected, onToggle }: SheetsTableProps) {
   const head = { sort, order, onSort };
   return (
     <Table.ScrollContainer minWidth={860}>
       <Table highlightOnHover verticalSpacing="xs" fz="sm" aria-label="Calculation sheets">
         <Table.Thead>
           <Table.Tr>
+            {onToggle ? (
+              <Table.Th w={36}>
+                <Text span size="xs" fw={600} title="Print the approved revision">
+                  Print
+                </Text>
+              </Table.Th>
+            ) : null}
             <SortHeader label="Number" k="documentNumber" {...head} />
             <SortHeader label="Title" k="title" {...head} />
             <Table.Th>Brake position</Table.Th>
@@ -56,6 +66,18 @@ export function SheetsTable({ items, sort, order, onSort }: SheetsTableProps) {
         <Table.Tbody>
           {items.map((s) => (
             <Table.Tr key={s.id} data-sheet={s.documentNumber}>
+              {onToggle ? (
+                <Table.Td>
+                  {s.approved ? (
+                    <Checkbox
+                      size="xs"
+                      aria-label={`Print ${s.documentNumber} rev. ${s.approved.label}`}
+                      checked={selected?.has(s.approved.id) ?? false}
+                      onChange={() => onToggle(s.approved!.id)}
+                    />
+                  ) : null}
+                </Table.Td>
+              ) : null}
               <Table.Td ff="monospace" style={{ whiteSpace: 'nowrap' }}>
                 <Anchor component={Link} to={`/sheets/${s.id}`} size="sm" ff="monospace">
                   {s.documentNumber}

@@ -1,0 +1,70 @@
+import { Anchor, Button, Stack, Table, Text } from '@mantine/core';
+import { Link } from 'react-router-dom';
+import type { Position } from '@holdfast/shared';
+import { sheetTypeTitle } from '../../calc/utils/sheet-types';
+
+export interface PositionRowProps {
+  position: Position;
+  /** Shown to those who may edit the register. */
+  onEdit?: () => void;
+}
+
+const state = (s: string) => s.replace('_', ' ');
+
+/** One brake position: what it is in the plant's words, its sheet in force per sheet type. */
+export function PositionRow({ position: p, onEdit }: PositionRowProps) {
+  const described = [p.brakeKind, p.thruster, p.lining].filter((x) => x.trim());
+  return (
+    <Table.Tr data-position={p.tag}>
+      <Table.Td ff="monospace">{p.tag}</Table.Td>
+      <Table.Td>
+        <Text size="sm">{p.description}</Text>
+        {described.length > 0 ? (
+          <Text size="xs" c="dimmed" data-testid="position-words">
+            {described.join(' · ')}
+          </Text>
+        ) : null}
+      </Table.Td>
+      <Table.Td>{p.motion.replace('-', ' ')}</Table.Td>
+      <Table.Td>
+        {p.inForce.length === 0 ? (
+          <Text span size="sm" c="fail.8">
+            None approved
+          </Text>
+        ) : (
+          <Stack gap={2}>
+            {p.inForce.map((f) => (
+              <Anchor
+                key={f.sheetId}
+                component={Link}
+                to={`/sheets/${f.sheetId}/revisions/${f.revisionId}`}
+                size="sm"
+                data-in-force={f.sheetType}
+              >
+                <Text span ff="monospace" size="sm">
+                  {f.documentNumber}
+                </Text>{' '}
+                rev. {f.revisionLabel}{' '}
+                <Text span size="xs" c="dimmed">
+                  ({sheetTypeTitle(f.sheetType)})
+                </Text>
+              </Anchor>
+            ))}
+          </Stack>
+        )}
+        {p.openSheets.map((o) => (
+          <Text key={o.sheetId} size="xs" c="dimmed">
+            Open: {o.documentNumber} rev. {o.revisionLabel} ({state(o.state)})
+          </Text>
+        ))}
+      </Table.Td>
+      {onEdit ? (
+        <Table.Td>
+          <Button size="compact-xs" variant="subtle" onClick={onEdit} aria-label={`Edit ${p.tag}`}>
+            Edit
+          </Button>
+        </Table.Td>
+      ) : null}
+    </Table.Tr>
+  );
+}
