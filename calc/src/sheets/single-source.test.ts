@@ -50,7 +50,12 @@ describe('sheet definitions are the single source', () => {
 
   it('no field is declared outside calc, and nothing reads a field default', () => {
     const hits = files
-      .filter(({ text }) => /kind:\s*'(quantity|number|integer|choice|boolean)'/.test(text))
+      .filter(({ text }) =>
+        // A declaration is an object with a field kind and a dimension, unit or section.
+        /kind:\s*'(quantity|number|integer|choice|boolean)'[^}]*\b(dimension|unitSI|section)\s*:/.test(
+          text,
+        ),
+      )
       .map((f) => `${f.file}: field declaration`)
       .concat(
         files
