@@ -28,7 +28,7 @@ describe('two server processes on one database', () => {
 
   beforeAll(async () => {
     smtp = await startSmtpCapture();
-    fc = await startFaultCluster('twins', { postgres: 54660, servers: 3930 });
+    fc = await startFaultCluster('twins', { postgres: 54660, servers: 4130 });
     const env = (label: string) => ({
       SMTP_HOST: '127.0.0.1',
       SMTP_PORT: String(smtp.port),
