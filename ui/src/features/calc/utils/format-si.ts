@@ -1,54 +1,11 @@
-import { formatNumber, type Dimension } from '@holdfast/calc';
+import { DIMENSION_IDS, formatNumber, type Dimension } from '@holdfast/calc';
 import { presentSI, type UnitSystem } from './units';
 
-const KNOWN = new Set<string>([
-  'length',
-  'force',
-  'torque',
-  'power',
-  'speed',
-  'angularSpeed',
-  'angularAcceleration',
-  'mass',
-  'inertia',
-  'pressure',
-  'pv',
-  'energy',
-  'temperature',
-  'temperatureDifference',
-  'time',
-  'angle',
-  'acceleration',
-  'stiffness',
-  'specificHeat',
-  'heatTransferCoefficient',
-  'area',
-  'frequency',
-  'dimensionless',
-]);
+const KNOWN = new Set<string>(DIMENSION_IDS);
 
 /** A dimension name from the API, if the calc core knows it. */
 export function asDimension(d: string | undefined): Dimension | undefined {
   return d && KNOWN.has(d) ? (d as Dimension) : undefined;
-}
-
-/** SI unit text of the criteria values, to the dimension that prints them in the trade's units. */
-const SI_UNIT_DIMENSION: Record<string, Dimension> = {
-  'Pa m/s': 'pv',
-  Pa: 'pressure',
-  'm/s': 'speed',
-  'm/s^2': 'acceleration',
-  m: 'length',
-  s: 'time',
-  N: 'force',
-  'N m': 'torque',
-  'N*m': 'torque',
-  J: 'energy',
-};
-
-/** The dimension of an SI unit text, for values that come with a unit but no dimension. */
-export function dimensionOfSIUnit(unit: string): Dimension | undefined {
-  return SI_UNIT_DIMENSION[unit.trim()];
 }
 
 /**

@@ -1,6 +1,6 @@
 import { Badge, Button, Select, Stack, Table, Text, TextInput } from '@mantine/core';
 import type { CriterionConfirmation, CriterionValueInput } from '@holdfast/shared';
-import { dimensionOfSIUnit } from '../../calc/utils/format-si';
+import { criterionSpec } from '@holdfast/calc';
 import { presentSI } from '../../calc/utils/units';
 
 /**
@@ -8,8 +8,9 @@ import { presentSI } from '../../calc/utils/units';
  * stays in the stored SI unit, so what is typed is what is stored.
  */
 function tradeValue(v: CriterionValueInput): { number: string; unit: string } {
-  const dimension = dimensionOfSIUnit(v.unit);
-  if (!dimension) return { number: String(v.value), unit: v.unit };
+  // The catalogue declares each criterion's dimension; a key it does not know prints as stored.
+  const dimension = criterionSpec(v.key)?.dimension;
+  if (!dimension || dimension === 'dimensionless') return { number: String(v.value), unit: v.unit };
   return presentSI(v.value, dimension, 'SI');
 }
 
