@@ -11,6 +11,7 @@ import {
   startFaultCluster,
   type FaultCluster,
   type Instance,
+  makeHoistPosition,
 } from './support/fault-cluster.js';
 import { startSmtpCapture, type SmtpCapture } from './support/smtp-capture.js';
 
@@ -62,25 +63,7 @@ describe('faults on a running server', () => {
       S3_TIMEOUT_MS: '2000',
     });
     engineer = (await signIn(srv.url, 'engineer')).token;
-    const site = await call(srv.url, 'POST', '/api/register/sites', {
-      token: engineer,
-      body: { code: 'FLT', name: 'Fault works' },
-    });
-    const machine = await call(srv.url, 'POST', '/api/register/machines', {
-      token: engineer,
-      body: { siteId: site.body.id, tag: 'CR-01', name: 'Ladle crane', kind: 'crane' },
-    });
-    const position = await call(srv.url, 'POST', '/api/register/positions', {
-      token: engineer,
-      body: {
-        machineId: machine.body.id,
-        tag: 'MH-B1',
-        description: 'Main hoist brake 1',
-        motion: 'hoist',
-      },
-    });
-    expect(position.status, JSON.stringify(position.body)).toBe(201);
-    positionId = position.body.id;
+    positionId = await makeHoistPosition([srv.url], engineer, { code: 'FLT', name: 'Fault works' });
   }, 150000);
 
   afterAll(async () => {

@@ -8,6 +8,7 @@ import {
   startFaultCluster,
   type FaultCluster,
   type Instance,
+  makeHoistPosition,
 } from './support/fault-cluster.js';
 import { startSmtpCapture, type SmtpCapture } from './support/smtp-capture.js';
 
@@ -38,25 +39,10 @@ describe('two server processes on one database', () => {
     });
     [a, b] = await Promise.all([fc.startServer(env('a')), fc.startServer(env('b'))]);
     engineer = (await signIn(a.url, 'engineer')).token;
-    const site = await call(b.url, 'POST', '/api/register/sites', {
-      token: engineer,
-      body: { code: 'TWN', name: 'Twin works' },
+    positionId = await makeHoistPosition([b.url, a.url], engineer, {
+      code: 'TWN',
+      name: 'Twin works',
     });
-    const machine = await call(a.url, 'POST', '/api/register/machines', {
-      token: engineer,
-      body: { siteId: site.body.id, tag: 'CR-01', name: 'Ladle crane', kind: 'crane' },
-    });
-    const position = await call(b.url, 'POST', '/api/register/positions', {
-      token: engineer,
-      body: {
-        machineId: machine.body.id,
-        tag: 'MH-B1',
-        description: 'Main hoist brake 1',
-        motion: 'hoist',
-      },
-    });
-    expect(position.status, JSON.stringify(position.body)).toBe(201);
-    positionId = position.body.id;
   }, 150000);
 
   afterAll(async () => {

@@ -169,3 +169,32 @@ export async function signIn(base: string, who: string) {
     cookie: (res.headers.get('set-cookie') ?? '').split(';')[0] ?? '',
   };
 }
+
+/**
+ * A site, a crane and its main-hoist brake position, made through the API; returns the position's
+ * id. Each step may go to a different server (`bases` in turn), as behind a load balancer.
+ */
+export async function makeHoistPosition(
+  bases: string[],
+  token: string,
+  site: { code: string; name: string },
+): Promise<string> {
+  const on = (k: number) => bases[k % bases.length]!;
+  const s = await call(on(0), 'POST', '/api/register/sites', { token, body: site });
+  const machine = await call(on(1), 'POST', '/api/register/machines', {
+    token,
+    body: { siteId: s.body.id, tag: 'CR-01', name: 'Ladle crane', kind: 'crane' },
+  });
+  const position = await call(on(2), 'POST', '/api/register/positions', {
+    token,
+    body: {
+      machineId: machine.body.id,
+      tag: 'MH-B1',
+      description: 'Main hoist brake 1',
+      motion: 'hoist',
+    },
+  });
+  if (position.status !== 201)
+    throw new Error(`position not created: ${position.status} ${JSON.stringify(position.body)}`);
+  return position.body.id as string;
+}
