@@ -1,7 +1,7 @@
 import { createHmac } from 'node:crypto';
 import { sql } from 'kysely';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { createSheetsContext, type SheetsContext } from './sheets-fixture.js';
+import { createSheetsContext, waitFor, type SheetsContext } from './sheets-fixture.js';
 import { createTestContext, demoEmail, type TestContext } from './test-context.js';
 
 const STRONG = 'copper lantern orbit meadow';
@@ -13,16 +13,6 @@ function forge(secret: string, claims: Record<string, unknown>): string {
   const part = (o: object) => Buffer.from(JSON.stringify(o)).toString('base64url');
   const body = `${part({ alg: 'HS256', typ: 'JWT' })}.${part(claims)}`;
   return `${body}.${createHmac('sha256', secret).update(body).digest('base64url')}`;
-}
-
-async function waitFor<T>(probe: () => T | undefined, ms = 15000): Promise<T> {
-  const deadline = Date.now() + ms;
-  for (;;) {
-    const value = probe();
-    if (value !== undefined) return value;
-    if (Date.now() > deadline) throw new Error('timed out');
-    await new Promise((r) => setTimeout(r, 100));
-  }
 }
 
 describe('sessions', () => {
@@ -156,6 +146,13 @@ describe('admin password reset', () => {
     );
     const token = /reset-password#token=([A-Za-z0-9_-]+)/.exec(mail.raw)?.[1];
     expect(token).toBeTruthy();
+    // Once sent, the outbox keeps no working link (the database holds only the token's hash).
+    const stored = await waitFor(async () => {
+      const rows = await ctx.db.selectFrom('outbox').select(['payload', 'sentAt']).execute();
+      const row = rows.find((r) => JSON.stringify(r.payload).includes('Set a new password'));
+      return row?.sentAt ? row : undefined;
+    });
+    expect(JSON.stringify(stored.payload)).not.toContain(token!);
     const weak = await ctx.request('POST', '/api/auth/password-reset', {
       body: { token, newPassword: 'password1234' },
     });

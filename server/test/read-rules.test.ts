@@ -7,17 +7,8 @@ import {
   makeRegister,
   submit,
   type SheetsContext,
+  waitFor,
 } from './sheets-fixture.js';
-
-async function waitFor<T>(probe: () => Promise<T | undefined>, ms = 20000): Promise<T> {
-  const deadline = Date.now() + ms;
-  for (;;) {
-    const value = await probe();
-    if (value !== undefined) return value;
-    if (Date.now() > deadline) throw new Error('timed out');
-    await new Promise((r) => setTimeout(r, 200));
-  }
-}
 
 describe('one read rule everywhere', () => {
   let ctx: SheetsContext;

@@ -198,14 +198,15 @@ export async function approve(ctx: TestContext, id: string, as: DemoLogin = 'che
   return res.body;
 }
 
+/** Polls `fn` (sync or async) until it gives a truthy value; throws after `timeoutMs`. */
 export async function waitFor<T>(
-  fn: () => T | undefined | false,
+  fn: () => T | undefined | false | Promise<T | undefined | false>,
   timeoutMs = 15000,
   stepMs = 100,
 ): Promise<T> {
   const start = Date.now();
   for (;;) {
-    const v = fn();
+    const v = await fn();
     if (v) return v;
     if (Date.now() - start > timeoutMs) throw new Error('timed out waiting');
     await new Promise((r) => setTimeout(r, stepMs));

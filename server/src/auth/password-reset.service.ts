@@ -19,7 +19,7 @@ const LOCKED_PASSWORD = '!reset-pending';
 /**
  * Admin password reset: the account's password stops working at once, every session ends, and
  * the user gets a one-time link (through the outbox) to set a new one. Only the link's SHA-256
- * is stored.
+ * is kept: the mail's text is blanked in the outbox once it is sent.
  */
 @Injectable()
 export class PasswordResetService {
@@ -50,20 +50,24 @@ export class PasswordResetService {
         .execute();
       await this.users.setPassword(userId, LOCKED_PASSWORD, trx);
       const link = `${this.config.settings.PUBLIC_URL.replace(/\/$/, '')}/reset-password#token=${token}`;
-      await this.outbox.enqueueMail(trx, {
-        to: [row.email],
-        subject: '[Holdfast] Set a new password',
-        text: [
-          `Hello ${row.displayName},`,
-          '',
-          'An administrator has reset your Holdfast password. Your old password no longer works.',
-          `Set a new one within ${RESET_LINK_HOURS} hours with this link (it works once):`,
-          '',
-          link,
-          '',
-          'If you did not expect this, tell your administrator.',
-        ].join('\n'),
-      });
+      await this.outbox.enqueueMail(
+        trx,
+        {
+          to: [row.email],
+          subject: '[Holdfast] Set a new password',
+          text: [
+            `Hello ${row.displayName},`,
+            '',
+            'An administrator has reset your Holdfast password. Your old password no longer works.',
+            `Set a new one within ${RESET_LINK_HOURS} hours with this link (it works once):`,
+            '',
+            link,
+            '',
+            'If you did not expect this, tell your administrator.',
+          ].join('\n'),
+        },
+        { secret: true },
+      );
       return row;
     });
     this.logger.log(`password reset for user ${userId} by admin ${adminId}`);

@@ -9,6 +9,12 @@ interface MailJob {
   outboxId: string;
 }
 
+/** What an outbox row holds: the message, and whether its text must not outlive delivery. */
+type StoredMail = MailMessage & { secret?: boolean };
+
+/** Stands in for the text of a sent mail that carried a one-time link. */
+export const SENT_SECRET_TEXT = '(text removed after sending: it held a one-time link)';
+
 /**
  * Notifications leave through the outbox: the message row and its delivery job are written in
  * the same transaction as the state change, and a pg-boss worker sends them with retries and
@@ -28,12 +34,21 @@ export class OutboxService implements OnApplicationBootstrap {
     await this.queue.work<MailJob>(MAIL_QUEUE, (job) => this.deliver(job.outboxId));
   }
 
-  /** Queue a mail inside the caller's transaction. No recipients: nothing is queued. */
-  async enqueueMail(trx: Kysely<DB>, message: MailMessage): Promise<void> {
+  /**
+   * Queue a mail inside the caller's transaction. No recipients: nothing is queued. A `secret`
+   * mail (it carries a one-time link) has its text blanked once it is sent, so the database and
+   * its backups never keep a working link longer than delivery needs.
+   */
+  async enqueueMail(
+    trx: Kysely<DB>,
+    message: MailMessage,
+    opts: { secret?: boolean } = {},
+  ): Promise<void> {
     if (message.to.length === 0) return;
+    const payload: StoredMail = opts.secret ? { ...message, secret: true } : message;
     const row = await trx
       .insertInto('outbox')
-      .values({ kind: 'mail', payload: JSON.stringify(message) })
+      .values({ kind: 'mail', payload: JSON.stringify(payload) })
       .returning('id')
       .executeTakeFirstOrThrow();
     await this.queue.sendIn(trx, MAIL_QUEUE, { outboxId: row.id } satisfies MailJob);
@@ -47,8 +62,9 @@ export class OutboxService implements OnApplicationBootstrap {
       .where('id', '=', outboxId)
       .executeTakeFirst();
     if (!row || row.sentAt) return;
+    const { secret, ...message } = row.payload as StoredMail;
     try {
-      await this.mailer.send(row.payload as MailMessage);
+      await this.mailer.send(message);
     } catch (e) {
       const reason = e instanceof Error ? e.message : String(e);
       await this.db
@@ -61,7 +77,12 @@ export class OutboxService implements OnApplicationBootstrap {
     }
     await this.db
       .updateTable('outbox')
-      .set((eb) => ({ attempts: eb('attempts', '+', 1), sentAt: new Date(), lastError: null }))
+      .set((eb) => ({
+        attempts: eb('attempts', '+', 1),
+        sentAt: new Date(),
+        lastError: null,
+        ...(secret ? { payload: JSON.stringify({ ...message, text: SENT_SECRET_TEXT }) } : {}),
+      }))
       .where('id', '=', outboxId)
       .execute();
   }
