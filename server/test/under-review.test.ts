@@ -22,12 +22,13 @@ describe('approvals follow criteria changes ("under review")', () => {
   afterAll(() => ctx?.closeAll());
 
   /** Sheet by the engineer, rev. A approved by the checker, then a stricter version 2 published. */
-  async function flaggedScenario() {
+  /** Rev. A written and submitted by `author`, approved, then flagged by a stricter version. */
+  async function flaggedScenario(author: 'engineer' | 'checker' = 'engineer') {
     const reg = await makeRegister(ctx);
-    const sheet = await createSheet(ctx, reg);
+    const sheet = await createSheet(ctx, reg, { as: author });
     const aId = sheet.revisions[0].id;
-    await submit(ctx, aId);
-    await approve(ctx, aId, 'checker');
+    await submit(ctx, aId, author);
+    await approve(ctx, aId, author === 'checker' ? 'checker2' : 'checker');
     const a = await getRevision(ctx, aId);
     const current = await ctx.request('GET', `/api/criteria-sets/${a.criteriaSetId}`, {
       as: 'admin',
@@ -139,6 +140,21 @@ describe('approvals follow criteria changes ("under review")', () => {
     // pdftotext breaks long lines: compare with single spaces.
     return inspectPdf(Buffer.from(await res.arrayBuffer()), name).text.replace(/\s+/g, ' ');
   }
+
+  it('the checker who wrote and submitted the revision may not record that it stands', async () => {
+    const { a } = await flaggedScenario('checker');
+    const url = `/api/revisions/${a.id}/criteria-review/disposition`;
+    const disposition = 'Reviewed: stands because the maker confirms the limit for this duty.';
+    const review = await ctx.request('GET', `/api/revisions/${a.id}/criteria-review`, {
+      as: 'checker',
+    });
+    expect(review.body.canDispose).toBe(false);
+    const own = await ctx.request('POST', url, { as: 'checker', body: { disposition } });
+    expect(own.status).toBe(403);
+    expect(own.body.error.message).toMatch(/Four eyes: you authored and submitted/);
+    const other = await ctx.request('POST', url, { as: 'checker2', body: { disposition } });
+    expect(other.status, other.text).toBe(200);
+  });
 
   it('prints the open flag, then the disposition, on the next print of the sheet', async () => {
     ensurePoppler();

@@ -16,7 +16,7 @@ import { failingChecks } from '../criteria/failing-checks.js';
 import { Database } from '../database/database.js';
 import { AuditService } from '../audit/audit.service.js';
 import { OutboxService } from '../outbox/outbox.service.js';
-import { canReadContent } from '../revisions/revision-access.js';
+import { canReadContent, ownPart } from '../revisions/revision-access.js';
 import { underReviewMail } from './review-mail.js';
 import { ReviewsRepository, type Person, type ReviewWithSet } from './reviews.repository.js';
 
@@ -116,7 +116,7 @@ export class ReviewsService {
   }
 
   async forRevision(user: AuthUser, revisionId: string): Promise<RevisionCriteriaReview> {
-    await this.readable(user, revisionId);
+    const rev = await this.readable(user, revisionId);
     const [open, cleared] = await Promise.all([
       this.repo.openFor(revisionId),
       this.repo.clearedFor(revisionId),
@@ -125,7 +125,7 @@ export class ReviewsService {
     return {
       open: open ? present(open, people) : null,
       cleared: cleared.map((c) => present(c, people)),
-      canDispose: !!open && effectiveRoles(user.role).includes('checker'),
+      canDispose: !!open && effectiveRoles(user.role).includes('checker') && !ownPart(user.id, rev),
     };
   }
 
@@ -136,6 +136,13 @@ export class ReviewsService {
     input: ReviewDispositionInput,
   ): Promise<RevisionCriteriaReview> {
     const rev = await this.readable(user, revisionId);
+    // The same four eyes as approval: whoever wrote, edited or submitted the work does not judge
+    // whether it still stands.
+    const part = ownPart(user.id, rev);
+    if (part)
+      throw forbidden(
+        `Four eyes: you ${part} revision ${rev.label}; another checker records whether it stands.`,
+      );
     await this.db.transaction().execute(async (trx) => {
       const open = await this.repo.openFor(revisionId, trx);
       if (!open) throw conflict(`Revision ${rev.label} is not under review.`);
@@ -166,7 +173,7 @@ export class ReviewsService {
   private async readable(user: AuthUser, revisionId: string) {
     const rev = await this.db
       .selectFrom('revisions')
-      .select(['id', 'label', 'state', 'sheetId'])
+      .select(['id', 'label', 'state', 'sheetId', 'authorId', 'editorIds', 'submitterIds'])
       .where('id', '=', revisionId)
       .executeTakeFirst();
     if (!rev) throw notFound('Revision not found.');

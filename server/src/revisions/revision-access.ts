@@ -31,7 +31,10 @@ export function canEdit(u: AccessUser, r: AccessRevision): boolean {
  * What the person did to the revision that bars them from checking it ('authored', 'edited',
  * 'submitted'), or undefined when they kept their hands off it.
  */
-export function ownPart(userId: string, r: AccessRevision): string | undefined {
+export function ownPart(
+  userId: string,
+  r: Pick<AccessRevision, 'authorId' | 'editorIds' | 'submitterIds'>,
+): string | undefined {
   const parts = [
     r.authorId === userId && 'authored',
     r.editorIds?.includes(userId) && 'edited',
