@@ -12,6 +12,7 @@ import {
   type FaultCluster,
   type Instance,
   makeHoistPosition,
+  submittedSheet,
 } from './support/fault-cluster.js';
 import { startSmtpCapture, type SmtpCapture } from './support/smtp-capture.js';
 
@@ -140,26 +141,12 @@ describe('faults on a running server', () => {
     expect((await call(srv.url, 'GET', '/api/health')).status).toBe(200);
   }, 120000);
 
-  async function submittedSheet(title: string) {
-    const sheet = await call(srv.url, 'POST', '/api/sheets', {
-      token: engineer,
-      body: { title, positionId, sheetType: 'hoist-shoe-brake' },
-    });
-    expect(sheet.status, JSON.stringify(sheet.body)).toBe(201);
-    const id = sheet.body.revisions[0].id as string;
-    const rev = await call(srv.url, 'GET', `/api/revisions/${id}`, { token: engineer });
-    const sub = await call(srv.url, 'POST', `/api/revisions/${id}/submit`, {
-      token: engineer,
-      body: { rowVersion: rev.body.rowVersion, justification: 'Fault test.' },
-    });
-    expect(sub.status, JSON.stringify(sub.body)).toBe(200);
-    return { documentNumber: sheet.body.documentNumber as string, revisionId: id };
-  }
+  const submitted = (title: string) => submittedSheet(srv.url, engineer, positionId, title);
 
   it('delivers every mail exactly once after the mail relay was down', async () => {
     await smtp.stop();
     const sheets = [];
-    for (let i = 0; i < 4; i++) sheets.push(await submittedSheet(`Mail outage ${i}`));
+    for (let i = 0; i < 4; i++) sheets.push(await submitted(`Mail outage ${i}`));
     await sleep(SMTP_OUTAGE_MS);
     const tried = await fc.query<{ attempts: number; sent_at: Date | null }>(
       `select attempts, sent_at from outbox`,

@@ -9,6 +9,7 @@ import {
   type FaultCluster,
   type Instance,
   makeHoistPosition,
+  submittedSheet,
 } from './support/fault-cluster.js';
 import { startSmtpCapture, type SmtpCapture } from './support/smtp-capture.js';
 
@@ -50,21 +51,8 @@ describe('two server processes on one database', () => {
     await smtp?.stop().catch(() => undefined);
   });
 
-  async function submittedOn(server: Instance, title: string) {
-    const sheet = await call(server.url, 'POST', '/api/sheets', {
-      token: engineer,
-      body: { title, positionId, sheetType: 'hoist-shoe-brake' },
-    });
-    expect(sheet.status, JSON.stringify(sheet.body)).toBe(201);
-    const id = sheet.body.revisions[0].id as string;
-    const rev = await call(server.url, 'GET', `/api/revisions/${id}`, { token: engineer });
-    const sub = await call(server.url, 'POST', `/api/revisions/${id}/submit`, {
-      token: engineer,
-      body: { rowVersion: rev.body.rowVersion, justification: 'Two-process test.' },
-    });
-    expect(sub.status, JSON.stringify(sub.body)).toBe(200);
-    return { documentNumber: sheet.body.documentNumber as string, revisionId: id };
-  }
+  const submittedOn = (server: Instance, title: string) =>
+    submittedSheet(server.url, engineer, positionId, title);
 
   it('signs in on one and refreshes on the other; either accepts the access token', async () => {
     const session = await signIn(a.url, 'viewer');

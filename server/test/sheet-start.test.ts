@@ -136,9 +136,15 @@ describe('starting a sheet honestly', () => {
     expect(wrongType.status).toBe(400);
   });
 
-  it('without a start, the example duty is used unmarked (older API clients)', async () => {
+  it('without a start, the example duty is used with every value marked, and submit refuses', async () => {
     const rev = await create(undefined);
-    expect(rev.unconfirmed).toEqual([]);
+    expect(rev.unconfirmed.length).toBe(Object.keys(rev.inputs).length);
     expect(rev.evaluation).not.toBeNull();
+    const refused = await ctx.request('POST', `/api/revisions/${rev.id}/submit`, {
+      as: 'engineer',
+      body: { rowVersion: rev.rowVersion, justification: 'Example duty.' },
+    });
+    expect(refused.status).toBe(400);
+    expect(refused.body.error.fields.length).toBe(rev.unconfirmed.length);
   });
 });

@@ -150,25 +150,49 @@ export async function makeRegister(ctx: TestContext, code = 'TST'): Promise<Regi
   return { siteId: site.body.id, machineId: machine.body.id, positionId: position.body.id };
 }
 
+/**
+ * A new sheet on the example duty. Its values come marked as unconfirmed; unless `confirm` is
+ * false the author then confirms them all in one save (as the editor's "I have checked all"
+ * does), so a test can submit straight away.
+ */
 export async function createSheet(
   ctx: TestContext,
   reg: Register,
-  opts: { as?: DemoLogin; sheetType?: string; title?: string } = {},
+  opts: { as?: DemoLogin; sheetType?: string; title?: string; confirm?: boolean } = {},
 ) {
+  const as = opts.as ?? 'engineer';
   const res = await ctx.request('POST', '/api/sheets', {
-    as: opts.as ?? 'engineer',
+    as,
     body: {
       title: opts.title ?? 'Main hoist brake',
       positionId: reg.positionId,
       sheetType: opts.sheetType ?? process.env.TEST_SHEET_TYPE ?? 'hoist-shoe-brake',
+      start: { kind: 'example' },
     },
   });
   expect(res.status, res.text).toBe(201);
+  if (opts.confirm !== false) await confirmAll(ctx, res.body.revisions[0].id, as);
   return res.body as {
     id: string;
     documentNumber: string;
     revisions: { id: string; label: string; state: string }[];
   };
+}
+
+/** The author confirms every value still marked on a draft, changing none. */
+export async function confirmAll(ctx: TestContext, id: string, as: DemoLogin = 'engineer') {
+  const rev = await getRevision(ctx, id, as);
+  const res = await ctx.request('PUT', `/api/revisions/${id}`, {
+    as,
+    body: {
+      inputs: rev.inputs,
+      unitSystem: rev.unitSystem,
+      changeNote: rev.changeNote ?? '',
+      unconfirmed: [],
+      rowVersion: rev.rowVersion,
+    },
+  });
+  expect(res.status, res.text).toBe(200);
 }
 
 export async function getRevision(ctx: TestContext, id: string, as: DemoLogin = 'engineer') {

@@ -151,7 +151,7 @@ describe('approvals follow criteria changes ("under review")', () => {
     expect(review.body.canDispose).toBe(false);
     const own = await ctx.request('POST', url, { as: 'checker', body: { disposition } });
     expect(own.status).toBe(403);
-    expect(own.body.error.message).toMatch(/Four eyes: you authored and submitted/);
+    expect(own.body.error.message).toMatch(/Four eyes: you authored, edited and submitted/);
     const other = await ctx.request('POST', url, { as: 'checker2', body: { disposition } });
     expect(other.status, other.text).toBe(200);
   });

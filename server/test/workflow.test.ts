@@ -40,7 +40,7 @@ describe('revision workflow', () => {
   afterAll(() => ctx?.closeAll());
 
   it('creates a sheet with a readable document number and a draft A with defaults', async () => {
-    const sheet = await createSheet(ctx, reg);
+    const sheet = await createSheet(ctx, reg, { confirm: false });
     expect(sheet.documentNumber).toBe('HF-TST-0001');
     expect(sheet.revisions).toHaveLength(1);
     expect(sheet.revisions[0]).toMatchObject({ label: 'A', state: 'draft' });
@@ -58,7 +58,7 @@ describe('revision workflow', () => {
   });
 
   it('lets only the author or owner edit a draft; viewers and admins are refused by role', async () => {
-    const sheet = await createSheet(ctx, reg);
+    const sheet = await createSheet(ctx, reg, { confirm: false });
     const rev = await getRevision(ctx, sheet.revisions[0].id);
     expect((await put(ctx, rev, 'engineer2')).status).toBe(403);
     expect((await put(ctx, rev, 'checker')).status).toBe(403);

@@ -198,3 +198,40 @@ export async function makeHoistPosition(
     throw new Error(`position not created: ${position.status} ${JSON.stringify(position.body)}`);
   return position.body.id as string;
 }
+
+/**
+ * A hoist sheet on the example duty, its values confirmed by the author in one save, then sent
+ * for check; returns its document number and revision id.
+ */
+export async function submittedSheet(
+  base: string,
+  token: string,
+  positionId: string,
+  title: string,
+): Promise<{ documentNumber: string; revisionId: string }> {
+  const sheet = await call(base, 'POST', '/api/sheets', {
+    token,
+    body: { title, positionId, sheetType: 'hoist-shoe-brake', start: { kind: 'example' } },
+  });
+  if (sheet.status !== 201) throw new Error(`sheet: ${sheet.status} ${JSON.stringify(sheet.body)}`);
+  const id = sheet.body.revisions[0].id as string;
+  const rev = await call(base, 'GET', `/api/revisions/${id}`, { token });
+  const confirmed = await call(base, 'PUT', `/api/revisions/${id}`, {
+    token,
+    body: {
+      inputs: rev.body.inputs,
+      unitSystem: rev.body.unitSystem,
+      changeNote: 'Example duty confirmed for the test.',
+      unconfirmed: [],
+      rowVersion: rev.body.rowVersion,
+    },
+  });
+  if (confirmed.status !== 200)
+    throw new Error(`confirm: ${confirmed.status} ${JSON.stringify(confirmed.body)}`);
+  const sub = await call(base, 'POST', `/api/revisions/${id}/submit`, {
+    token,
+    body: { rowVersion: confirmed.body.rowVersion, justification: 'Test submission.' },
+  });
+  if (sub.status !== 200) throw new Error(`submit: ${sub.status} ${JSON.stringify(sub.body)}`);
+  return { documentNumber: sheet.body.documentNumber as string, revisionId: id };
+}

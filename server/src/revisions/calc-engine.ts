@@ -61,9 +61,6 @@ export function demoInputsOf(sheetType: string): SheetInputs {
   return demoInputs(sheetTypeDefinition(sheetType));
 }
 
-/** @deprecated the demo values are not defaults: use `demoInputsOf`. */
-export const defaultInputs = demoInputsOf;
-
 /**
  * How a field starts on a new sheet: whether the engineer must enter it (blank on an empty sheet)
  * and its example value. Numbers and quantities the sheet declares required start blank; choices and

@@ -21,7 +21,6 @@ import {
   coreVersion,
   defaultCriteriaSetId,
   blankFields,
-  defaultInputs,
   evaluateSheet,
   fieldLabel,
   startingInputs,
@@ -165,8 +164,10 @@ export class SheetsService {
     trx: Kysely<DB>,
   ): Promise<{ inputs: SheetInputs; unconfirmed: string[]; copiedFrom?: string }> {
     const start = input.start;
-    if (!start) return { inputs: defaultInputs(input.sheetType), unconfirmed: [] };
-    if (start.kind !== 'copy') return startingInputs(input.sheetType, start.kind);
+    // No choice made is the example duty, every value marked: nothing invented goes to check
+    // unless someone confirms it, whichever client made the sheet.
+    if (!start || start.kind !== 'copy')
+      return startingInputs(input.sheetType, start?.kind ?? 'example');
     const source = await this.revisionsRepo.find(start.revisionId, trx);
     const refuse = (message: string) =>
       badRequest('Some fields are not valid.', [{ path: 'start.revisionId', message }]);

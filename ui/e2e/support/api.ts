@@ -43,6 +43,7 @@ export async function createHoistSheet(
     title,
     positionId: position.id,
     sheetType: 'hoist-shoe-brake',
+    start: { kind: 'example' },
     ...extra,
   });
   return {
@@ -102,8 +103,19 @@ export async function createSheetViaApi(baseUrl: string, title: string, position
     title,
     positionId: position.id,
     sheetType: 'hoist-shoe-brake',
+    start: { kind: 'example' },
   });
-  return { sheetId: sheet.id as string, revisionId: sheet.revisions[0].id as string, sheet };
+  // The example's values come marked; the author confirms them all, as "I have checked all" does.
+  const revisionId = sheet.revisions[0].id as string;
+  const rev = await apiAs(baseUrl, 'engineer', 'GET', `/revisions/${revisionId}`);
+  await apiAs(baseUrl, 'engineer', 'PUT', `/revisions/${revisionId}`, {
+    inputs: rev.inputs,
+    unitSystem: rev.unitSystem,
+    changeNote: 'Example duty confirmed for the test.',
+    unconfirmed: [],
+    rowVersion: rev.rowVersion,
+  });
+  return { sheetId: sheet.id as string, revisionId, sheet };
 }
 
 /** Sends a revision for check as the engineer, with a note to the checker. */

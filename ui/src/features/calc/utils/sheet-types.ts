@@ -1,5 +1,6 @@
 import * as calc from '@holdfast/calc';
 import type { SheetInputs, SheetTypeDefinition } from '@holdfast/calc';
+import { fieldStart } from './field-start';
 
 // The registry lands in calc in stages; reach it through the namespace so the UI keeps building.
 const registry = calc as unknown as {
@@ -39,10 +40,16 @@ export function sheetTypeTitle(id: string): string {
   return findSheetType(id)?.title ?? id;
 }
 
-/** The stored inputs over the type's defaults, so a field the sheet lacks shows its default. */
-export function withDefaults(type: SheetTypeDefinition, inputs: SheetInputs): SheetInputs {
+/**
+ * The stored inputs, with every field the stored revision lacks (one a later core added) as a new
+ * sheet starts it: a required number blank for the engineer to enter, never an invented value.
+ */
+export function withMissingFields(type: SheetTypeDefinition, inputs: SheetInputs): SheetInputs {
   const out: SheetInputs = {};
-  for (const f of type.fields) out[f.key] = f.demo;
+  for (const f of type.fields) {
+    const start = fieldStart(f);
+    out[f.key] = start.required ? '' : start.example;
+  }
   return { ...out, ...inputs };
 }
 
@@ -50,7 +57,7 @@ const warmed = new Set<string>();
 
 /**
  * The first evaluation in a page pays for the unit tables and the JIT (a few hundred ms); later
- * ones take a few ms. Run one throw-away evaluation on the type's defaults while the revision
+ * ones take a few ms. Run one throw-away evaluation on the type's demo inputs while the revision
  * is still loading, so the engineer's first keystroke is already fast.
  */
 export function warmUpSheetType(id: string): void {
@@ -67,10 +74,7 @@ export function warmUpSheetType(id: string): void {
   const run = () => {
     for (const set of criteria) {
       try {
-        type.evaluate(
-          withDefaults(type, {}),
-          set as Parameters<SheetTypeDefinition['evaluate']>[1],
-        );
+        type.evaluate(calc.demoInputs(type), set as Parameters<SheetTypeDefinition['evaluate']>[1]);
         return;
       } catch {
         // A set for another duty may lack a value this type needs: try the next one.

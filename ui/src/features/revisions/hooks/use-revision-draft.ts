@@ -1,7 +1,7 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
 import type { InputValue, SheetInputs, SheetTypeDefinition } from '@holdfast/calc';
 import type { Revision } from '@holdfast/shared';
-import { withDefaults } from '../../calc/utils/sheet-types';
+import { withMissingFields } from '../../calc/utils/sheet-types';
 import { convertQuantity, defaultUnit, isQuantity, type UnitSystem } from '../../calc/utils/units';
 import {
   changedKeys,
@@ -147,7 +147,7 @@ function localOffer(revision: Revision, type: SheetTypeDefinition): LocalOffer |
 
 function fromRevision(revision: Revision, type: SheetTypeDefinition): DraftContent {
   return {
-    inputs: withDefaults(type, revision.inputs),
+    inputs: withMissingFields(type, revision.inputs),
     unitSystem: revision.unitSystem,
     changeNote: revision.changeNote,
     unconfirmed: revision.unconfirmed ?? [],
