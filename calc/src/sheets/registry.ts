@@ -31,5 +31,3 @@ export function demoInputs(sheet: SheetTypeDefinition): SheetInputs {
   return Object.fromEntries(sheet.fields.map((f) => [f.key, structuredClone(f.demo)]));
 }
 
-/** @deprecated the demo values are not defaults: use `demoInputs`. */
-export const defaultInputs = demoInputs;

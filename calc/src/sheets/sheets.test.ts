@@ -4,7 +4,7 @@ import type { SheetEvaluation } from '../core/types.js';
 import { CalcInputError } from '../core/errors.js';
 import { getCriteriaSet } from '../criteria/lookup.js';
 import { nearlyEqual } from '../testing/expect-close.js';
-import { getSheetType, sheetTypes, defaultInputs } from './registry.js';
+import { demoInputs, getSheetType, sheetTypes } from './registry.js';
 
 const crane = getCriteriaSet('crane-hoist')!;
 const general = getCriteriaSet('general-industry')!;
@@ -55,7 +55,7 @@ describe.each([
   ['travel-shoe-brake', trav, travel],
   ['caliper-disc-brake', caliper, general],
 ] as const)('%s', (_id, sheet, criteria) => {
-  const e = sheet.evaluate(defaultInputs(sheet), criteria);
+  const e = sheet.evaluate(demoInputs(sheet), criteria);
 
   it('passes with its demo defaults and returns only finite numbers', () => {
     expect(e.checks.filter((c) => !c.pass).map((c) => c.message)).toEqual([]);
