@@ -1,4 +1,3 @@
-import { demoInputs } from './registry.js';
 import { describe, expect, it } from 'vitest';
 import type { SheetEvaluation } from '../core/types.js';
 import { CalcInputError } from '../core/errors.js';
