@@ -110,19 +110,19 @@ export const createCriteriaSetSchema = z
       .string()
       .trim()
       .regex(/^[a-z0-9][a-z0-9-]{2,59}$/, 'lower-case letters, digits and hyphens, 3 to 60'),
-    name: z.string().trim().min(3, 'name the set').max(200),
-    description: z
-      .string()
-      .trim()
-      .min(10, 'say what the set is for and which standard governs')
-      .max(2000),
+    name: singleLineText({ min: 3, max: 200, minMessage: 'name the set' }),
+    description: multiLineText({
+      min: 10,
+      max: 2000,
+      minMessage: 'say what the set is for and which standard governs',
+    }),
     values: criterionValuesSchema.superRefine((values, ctx) => {
       for (const key of REQUIRED_CRITERIA) {
         if (!values.some((v) => v.key === key))
           ctx.addIssue({ code: 'custom', path: [], message: `value "${key}" is missing` });
       }
     }),
-    note: z.string().trim().min(1, 'say where the values come from').max(2000),
+    note: multiLineText({ min: 1, max: 2000, minMessage: 'say where the values come from' }),
   })
   .strict();
 export type CreateCriteriaSetInput = z.infer<typeof createCriteriaSetSchema>;
@@ -131,12 +131,12 @@ export type CreateCriteriaSetInput = z.infer<typeof createCriteriaSetSchema>;
 export const confirmCriterionSchema = z
   .object({
     key: z.string().min(1).max(80),
-    document: z
-      .string()
-      .trim()
-      .min(3, 'name the document the plant holds (title, number, edition)')
-      .max(300),
-    clause: z.string().trim().min(1, 'name the clause, table or page').max(120),
+    document: singleLineText({
+      min: 3,
+      max: 300,
+      minMessage: 'name the document the plant holds (title, number, edition)',
+    }),
+    clause: singleLineText({ min: 1, max: 120, minMessage: 'name the clause, table or page' }),
   })
   .strict();
 export type ConfirmCriterionInput = z.infer<typeof confirmCriterionSchema>;

@@ -50,7 +50,7 @@ export const createMachineSchema = z
 export type CreateMachineInput = z.infer<typeof createMachineSchema>;
 
 /** Free text in the plant's own words (brake kind, thruster, lining); empty when not known. */
-const plantWords = z.string().trim().max(200).default('');
+const plantWords = singleLineText({ max: 200 }).default('');
 
 export const createPositionSchema = z
   .object({
@@ -66,16 +66,14 @@ export const createPositionSchema = z
 export type CreatePositionInput = z.infer<typeof createPositionSchema>;
 
 /** PATCH /api/register/sites/:id — the code is part of every document number and stays. */
-export const updateSiteSchema = z
-  .object({ name: z.string().trim().min(2, 'at least 2 characters').max(120) })
-  .strict();
+export const updateSiteSchema = z.object({ name: singleLineText({ min: 2, max: 120 }) }).strict();
 export type UpdateSiteInput = z.infer<typeof updateSiteSchema>;
 
 /** PATCH /api/register/machines/:id */
 export const updateMachineSchema = z
   .object({
     tag: tag.optional(),
-    name: z.string().trim().min(2, 'at least 2 characters').max(120).optional(),
+    name: singleLineText({ min: 2, max: 120 }).optional(),
     kind: machineKindSchema.optional(),
   })
   .strict();
@@ -85,11 +83,11 @@ export type UpdateMachineInput = z.infer<typeof updateMachineSchema>;
 export const updatePositionSchema = z
   .object({
     tag: tag.optional(),
-    description: z.string().trim().min(2, 'at least 2 characters').max(200).optional(),
+    description: singleLineText({ min: 2, max: 200 }).optional(),
     motion: motionSchema.optional(),
-    brakeKind: z.string().trim().max(200).optional(),
-    thruster: z.string().trim().max(200).optional(),
-    lining: z.string().trim().max(200).optional(),
+    brakeKind: singleLineText({ max: 200 }).optional(),
+    thruster: singleLineText({ max: 200 }).optional(),
+    lining: singleLineText({ max: 200 }).optional(),
   })
   .strict();
 export type UpdatePositionInput = z.infer<typeof updatePositionSchema>;

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { isoDateSchema, personRefSchema } from '../sheets/person-ref.schema.js';
+import { multiLineText } from '../text/plain-text.js';
 
 /** A check that fails when an approved revision is evaluated under a newer criteria version. */
 export const reviewFailingCheckSchema = z.object({
@@ -42,11 +43,11 @@ export type RevisionCriteriaReview = z.infer<typeof revisionCriteriaReviewSchema
 /** POST /api/revisions/:id/criteria-review/disposition (checker). */
 export const reviewDispositionSchema = z
   .object({
-    disposition: z
-      .string()
-      .trim()
-      .min(10, 'say why the approved revision stands (at least 10 characters)')
-      .max(4000),
+    disposition: multiLineText({
+      min: 10,
+      max: 4000,
+      minMessage: 'say why the approved revision stands (at least 10 characters)',
+    }),
   })
   .strict();
 export type ReviewDispositionInput = z.infer<typeof reviewDispositionSchema>;

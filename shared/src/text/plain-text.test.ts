@@ -1,6 +1,9 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { createCommentSchema } from '../comments/comment.schema.js';
+import { confirmCriterionSchema, createCriteriaSetSchema } from '../criteria/criteria.schema.js';
+import { updatePositionSchema, updateSiteSchema } from '../register/register.schema.js';
+import { reviewDispositionSchema } from '../reviews/criteria-review.schema.js';
 import { createSheetSchema } from '../sheets/sheet.schema.js';
 import { createUserSchema, updateUserSchema } from '../users/user.schema.js';
 import {
@@ -48,6 +51,40 @@ describe('free text hygiene', () => {
     ]);
     expect(createCommentSchema.safeParse({ body: 'ok\u0000' }).success).toBe(false);
     expect(updateUserSchema.safeParse({ displayName: 'Erin\u0007 Vale' }).success).toBe(false);
+  });
+
+  it('edits, criteria sets, confirmations and dispositions follow the same text rules as creates', () => {
+    const pathOf = (r: { success: boolean; error?: { issues: { path: PropertyKey[] }[] } }) =>
+      r.success ? undefined : r.error!.issues[0]!.path.join('.');
+    expect(pathOf(updateSiteSchema.safeParse({ name: 'Melt\u0000shop' }))).toBe('name');
+    expect(pathOf(updatePositionSchema.safeParse({ lining: 'woven\u001b[31m' }))).toBe('lining');
+    expect(pathOf(updatePositionSchema.safeParse({ description: '\u200b\u200b\u200b' }))).toBe(
+      'description',
+    );
+    expect(
+      pathOf(
+        confirmCriterionSchema.safeParse({ key: 'pvLimit', document: 'Spec\u0007', clause: '4' }),
+      ),
+    ).toBe('document');
+    expect(
+      pathOf(reviewDispositionSchema.safeParse({ disposition: 'Stands because\u0000 of data.' })),
+    ).toBe('disposition');
+    expect(
+      pathOf(
+        createCriteriaSetSchema.safeParse({
+          id: 'plant-std',
+          name: '\u200b\u200b\u200b\u200b',
+          description: 'The plant standard for hoists.',
+          values: [],
+          note: 'From the plant standard.',
+        }),
+      ),
+    ).toBe('name');
+    // Running text keeps its line breaks.
+    expect(
+      reviewDispositionSchema.safeParse({ disposition: 'Reviewed.\nStands: maker data holds.' })
+        .success,
+    ).toBe(true);
   });
 
   it('keeps line breaks and tabs in running text only', () => {
