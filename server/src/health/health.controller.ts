@@ -6,6 +6,7 @@ import type { Response } from 'express';
 import { serverVersion } from '../config/paths.js';
 import { Database } from '../database/database.js';
 import { Public } from '../auth/policy.js';
+import { DATABASE_RETRY_AFTER_SECONDS } from '../common/errors/postgres-errors.js';
 
 const DATABASE_TIMEOUT_MS = 1000;
 
@@ -20,7 +21,7 @@ export class HealthController {
   async check(@Res({ passthrough: true }) res: Response): Promise<Health> {
     const up = await this.databaseAnswers();
     res.status(up ? 200 : 503).setHeader('Cache-Control', 'no-store');
-    if (!up) res.setHeader('Retry-After', '2');
+    if (!up) res.setHeader('Retry-After', String(DATABASE_RETRY_AFTER_SECONDS));
     return up
       ? { status: 'ok', database: 'ok', version: serverVersion }
       : { status: 'degraded', database: 'down', version: serverVersion };

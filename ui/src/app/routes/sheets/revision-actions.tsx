@@ -22,9 +22,7 @@ export interface RevisionActionsProps {
 
 /** Only what the server says this user may do with this revision in its state, plus printing. */
 export function RevisionActions({ revision, ctx, openComments }: RevisionActionsProps) {
-  const [dialog, setDialog] = useState<
-    'submit' | 'approve' | 'return' | 'drift' | 'unconfirmed' | null
-  >(null);
+  const [dialog, setDialog] = useState<'submit' | 'drift' | 'unconfirmed' | null>(null);
   const [failing, setFailing] = useState<CheckResult[]>([]);
   const [rowVersion, setRowVersion] = useState(revision.rowVersion);
   const submit = useSubmitRevision(revision.id);

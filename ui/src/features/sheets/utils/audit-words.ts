@@ -8,6 +8,9 @@ const ACTIONS: Record<string, string> = {
   'revision.approved': 'Approved',
   'revision.returned': 'Returned to the author',
   'revision.superseded': 'Superseded',
+  'revision.under-review': 'Under review: fails newer criteria',
+  'revision.review-disposed': 'Review closed: stands',
+  'revision.review-cleared': 'Review closed: superseded',
   'comment.created': 'Comment',
   'comment.replied': 'Reply',
   'comment.resolved': 'Comment resolved',
@@ -63,6 +66,14 @@ export function auditDetail(
     text(after.fileName);
   if (note) parts.push(note);
   if (e.action === 'revision.submitted' && after.pass === false) parts.push('with failing checks');
+  if (e.action === 'revision.under-review') {
+    const set = text(after.criteriaSet);
+    const failing = Array.isArray(after.failing) ? after.failing.length : 0;
+    if (set) parts.push(`criteria ${set.replace('@', ' v')}`);
+    if (failing) parts.push(`${failing} check${failing === 1 ? '' : 's'} failing`);
+  }
+  if (e.action === 'revision.review-disposed' && text(after.disposition))
+    parts.push(String(after.disposition).trim());
   if (e.action === 'revision.superseded' && text(after.supersededBy))
     parts.push(`by rev. ${String(after.supersededBy)}`);
   return parts.join(' · ');

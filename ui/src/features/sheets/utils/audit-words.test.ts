@@ -1,0 +1,40 @@
+import type { AuditEvent } from '@holdfast/shared';
+import { describe, expect, it } from 'vitest';
+import { auditActionWords, auditDetail } from './audit-words';
+
+const event = (action: string, after: unknown): AuditEvent => ({
+  id: '00000000-0000-4000-8000-000000000001',
+  at: '2026-12-03T08:00:00.000Z',
+  actor: null,
+  action,
+  entity: 'revision',
+  entityId: 'r1',
+  before: null,
+  after,
+});
+
+describe('audit trail in words', () => {
+  it('names the review events the server writes, never their codes', () => {
+    for (const action of [
+      'revision.under-review',
+      'revision.review-disposed',
+      'revision.review-cleared',
+    ]) {
+      expect(auditActionWords(action)).not.toBe(action);
+    }
+  });
+
+  it('says which criteria flagged a revision and why a disposition lets it stand', () => {
+    const flagged = event('revision.under-review', {
+      criteriaSet: 'crane-hoist@2',
+      failing: ['pv', 'temperature-peak'],
+    });
+    expect(auditDetail(flagged, () => 'A')).toBe(
+      'rev. A · criteria crane-hoist v2 · 2 checks failing',
+    );
+    const disposed = event('revision.review-disposed', {
+      disposition: 'Stands: the lining maker confirms 2.1 MPa·m/s.',
+    });
+    expect(auditDetail(disposed)).toContain('Stands: the lining maker confirms 2.1 MPa·m/s.');
+  });
+});
