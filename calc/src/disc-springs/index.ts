@@ -6,4 +6,3 @@ export * from './curve.js';
 export * from './validate.js';
 export * from './stack-derivation.js';
 export * from './standard-sizes.js';
-export * from './static-check.js';
