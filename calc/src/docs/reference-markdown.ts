@@ -16,10 +16,17 @@ function unitLabel(unit: string | undefined, f: FieldDefinition): string {
   return DIMENSIONS[f.dimension].units.find((u) => u.unit === unit)?.label ?? unit;
 }
 
+/** A bound as written in a table: up to 6 significant figures, no trailing zeros (0.1 kg, 3600). */
+function boundNumber(v: number): string {
+  return formatNumber(v, 6)
+    .replace(/(\.\d*?)0+(?=$|·)/, '$1')
+    .replace(/\.(?=$|·)/, '');
+}
+
 function bound(f: FieldDefinition, v: number | undefined): string {
   if (v === undefined) return '';
-  if (f.kind !== 'quantity' || !f.dimension || !f.unitSI) return formatNumber(v, 6);
-  return `${formatNumber(fromSI(v, f.unitSI, f.dimension), 6)} ${unitLabel(f.unitSI, f)}`;
+  if (f.kind !== 'quantity' || !f.dimension || !f.unitSI) return boundNumber(v);
+  return `${boundNumber(fromSI(v, f.unitSI, f.dimension))} ${unitLabel(f.unitSI, f)}`;
 }
 
 function demoText(f: FieldDefinition): string {
