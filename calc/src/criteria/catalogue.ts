@@ -78,7 +78,7 @@ export const CRITERION_SPECS: readonly CriterionSpec[] = [
     'Wheel–rail adhesion allowed for braking',
     0,
     0.5,
-    'steel on steel never grips above 0.5; 0 would forbid braking',
+    'common practice: wheel–rail adhesion stays well under 0.5; 0 would forbid braking',
     true,
   ),
   {
@@ -99,7 +99,7 @@ export const CRITERION_SPECS: readonly CriterionSpec[] = [
     min: 0,
     minExclusive: true,
     max: 50e6,
-    why: 'no lining works at zero p·v; no lining datum reaches 50 MPa·m/s',
+    why: 'no lining works at zero p·v; common practice: lining makers’ p·v limits stay far below 50 MPa·m/s',
   },
   {
     key: 'discSpring.sigmaOMFlatMax',
@@ -109,7 +109,7 @@ export const CRITERION_SPECS: readonly CriterionSpec[] = [
     min: 0,
     minExclusive: true,
     max: 5e9,
-    why: 'spring steels stay well below 5 000 N/mm²',
+    why: 'common practice: the tensile strength of spring steels stays well below 5 000 N/mm²',
     optional: true,
   },
 ];

@@ -11,7 +11,7 @@ export const verificationCase = defineCase({
     'data of Bhandari, Design of Machine Elements (McGraw-Hill), Example 12.3, as coded in the FOSSEE Scilab Textbook Companion, book 764 (2500 kg at 1.5 m/s on a 0.75 m drum radius: ½·m·v² = 2812.5 J); the static torque m·g·R and the inverse relations are ours (derived)',
   confidence: 'derived',
   inputs: {
-    'M_L = m·g·R': `${(2500 * g * 0.75).toFixed(2)} N·m`,
+    'M_L = m·g·R': `${(2500 * g * 0.75).toPrecision(4)} N·m (m 2500 kg, R 0.75 m)`,
     v: '1.5 m/s',
     omega: '2 rad/s (R = 0.75 m)',
     J_eq: '1500 kg·m² (entered)',
