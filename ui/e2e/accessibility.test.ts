@@ -92,6 +92,19 @@ describe.skipIf(skipReason !== null)('accessibility of the main screens', () => 
     { name: 'equipment', who: 'engineer', path: () => '/equipment', ready: heading('Equipment') },
     { name: 'criteria', who: 'engineer', path: () => '/criteria', ready: heading(/Criteria/) },
     { name: 'users', who: 'admin', path: () => '/admin/users', ready: heading('Users') },
+    {
+      name: 'undelivered-mail',
+      who: 'admin',
+      path: () => '/admin/mail',
+      ready: heading('Undelivered mail'),
+    },
+    { name: 'account', who: 'engineer', path: () => '/account', ready: heading('Your account') },
+    {
+      name: 'reset-password',
+      who: null,
+      path: () => '/reset-password#token=not-a-real-token',
+      ready: heading('Set a new password'),
+    },
   ];
 
   let signedInAs: DemoUserKey | null | undefined;

@@ -29,6 +29,9 @@ async function waitSaved(page: Page) {
 /** Sends the revision for check, giving a reason when the dialog asks for one. */
 async function sendForCheck(page: Page) {
   // Example values nobody confirmed keep a sheet from going to check: confirm them here.
+  // The confirm button renders with the same revision data as Send for check: wait for that first,
+  // so the count below is not taken before the page has loaded.
+  await page.getByRole('button', { name: 'Send for check' }).waitFor();
   const confirmAll = page.getByRole('button', { name: /^I have checked all/ });
   if (await confirmAll.count()) await confirmAll.click();
   await waitSaved(page);
@@ -37,7 +40,7 @@ async function sendForCheck(page: Page) {
   await dialog.waitFor();
   const reason = dialog.getByRole('textbox', { name: /Why this should go to check anyway/ });
   if (await reason.count())
-    await reason.fill(
+    await reason.pressSequentially(
       'Remaining failures are accepted for the test duty; see the attached data sheet.',
     );
   await dialog.getByRole('button', { name: 'Send for check' }).click();
@@ -72,7 +75,7 @@ describe.skipIf(skipReason !== null)('the workbench in a real browser', () => {
     const dialog = page.getByRole('dialog', { name: 'New calculation sheet' });
     await dialog.getByPlaceholder('Choose a position').click();
     await page.getByRole('option', { name: /^MH-B2/ }).click();
-    await dialog.getByRole('textbox', { name: /^Title/ }).fill(title);
+    await dialog.getByRole('textbox', { name: /^Title/ }).pressSequentially(title);
     await dialog.getByRole('radio', { name: /^The example duty/ }).check();
     await screenshot(page, 'workbench-create-sheet');
     await dialog.getByRole('button', { name: 'Create sheet' }).click();
@@ -117,7 +120,7 @@ describe.skipIf(skipReason !== null)('the workbench in a real browser', () => {
     await page.getByRole('button', { name: /^Comment on Main spring force as set/ }).click();
     await page
       .getByRole('textbox', { name: /^Comment on Main spring force/ })
-      .fill('Spring force leaves little margin at worn lining; raise it.');
+      .pressSequentially('Spring force leaves little margin at worn lining; raise it.');
     await page.getByRole('button', { name: 'Post comment' }).click();
     await page
       .getByRole('button', { name: /1 comment on Main spring force as set.*1 open/ })
@@ -131,7 +134,7 @@ describe.skipIf(skipReason !== null)('the workbench in a real browser', () => {
     await dialog.getByText('Say what must change.').waitFor();
     await dialog
       .getByRole('textbox', { name: /What must change/ })
-      .fill('See the comment on the spring force.');
+      .pressSequentially('See the comment on the spring force.');
     await screenshot(page, 'workbench-return-dialog');
     await dialog.getByRole('button', { name: 'Return' }).click();
     await page
@@ -177,7 +180,9 @@ describe.skipIf(skipReason !== null)('the workbench in a real browser', () => {
     await page.goto(baseUrl + sheetUrl);
     await page.getByRole('button', { name: 'New revision' }).click();
     const dialog = page.getByRole('dialog', { name: 'Start a new revision' });
-    await dialog.getByRole('textbox', { name: /Why the sheet changes/ }).fill('Heavier hook block');
+    await dialog
+      .getByRole('textbox', { name: /Why the sheet changes/ })
+      .pressSequentially('Heavier hook block');
     await dialog.getByRole('button', { name: 'Start revision' }).click();
     await page.getByText('Rev. B').waitFor();
     await setInput(page, /^Hook block and ropes/, '420');
