@@ -74,6 +74,9 @@ export async function startFaultCluster(
 
   const dataDir = mkdtempSync(path.join(tmpdir(), `holdfast-${label}-`));
   const servers: Instance[] = [];
+  // Counted before any await: servers started together must not look for a port from the same
+  // place (two at once both found the same free port and the second could not listen).
+  let started = 0;
   const adminUrl: string = cluster.url('holdfast');
   return {
     port,
@@ -93,7 +96,7 @@ export async function startFaultCluster(
       }
     },
     async startServer(extra = {}) {
-      const serverPort: number = await freePortFrom(ports.servers + servers.length * 5);
+      const serverPort: number = await freePortFrom(ports.servers + started++ * 5);
       const server: Instance = await tryStartAppServer(
         projectDir,
         {
