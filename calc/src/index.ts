@@ -74,7 +74,7 @@ export {
   criteriaValueProblems,
   type CriterionSpec,
 } from './criteria/catalogue.js';
-export { sheetTypes, getSheetType, demoInputs } from './sheets/registry.js';
+export { sheetTypes, getSheetType, demoInputs, fieldStart } from './sheets/registry.js';
 export { SHEET_TYPE_IDS, DIMENSION_IDS, type SheetTypeId } from './ids.js';
 export {
   closestKey,

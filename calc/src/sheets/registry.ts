@@ -1,4 +1,9 @@
-import type { SheetInputs, SheetTypeDefinition } from '../core/types.js';
+import type {
+  FieldDefinition,
+  InputValue,
+  SheetInputs,
+  SheetTypeDefinition,
+} from '../core/types.js';
 import type { SheetTypeId } from '../ids.js';
 import { caliperDiscBrakeSheet } from './caliper-disc-brake.js';
 import { discSpringStackSheet } from './disc-spring-stack.js';
@@ -31,3 +36,14 @@ export function demoInputs(sheet: SheetTypeDefinition): SheetInputs {
   return Object.fromEntries(sheet.fields.map((f) => [f.key, structuredClone(f.demo)]));
 }
 
+/**
+ * How a field starts on a new sheet: whether the engineer must enter it (blank on an empty sheet)
+ * and its example value. Numbers and quantities the sheet declares required start blank; choices
+ * and flags start at their demo value, marked unconfirmed.
+ */
+export function fieldStart(field: FieldDefinition): { required: boolean; example: InputValue } {
+  return {
+    required: field.required && field.kind !== 'choice' && field.kind !== 'boolean',
+    example: field.demo,
+  };
+}

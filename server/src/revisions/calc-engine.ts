@@ -2,6 +2,7 @@ import {
   CORE_VERSION,
   CRITERIA_SETS,
   demoInputs,
+  fieldStart,
   missingInputs,
   resolveInputs,
   unknownInputKeys,
@@ -10,8 +11,6 @@ import {
   isCalcInputError as calcInputErrorGuard,
   type CriteriaSet,
   type FieldError,
-  type FieldDefinition,
-  type InputValue,
   type SheetEvaluation,
   type SheetInputs,
   type SheetTypeDefinition,
@@ -59,18 +58,6 @@ export function defaultCriteriaSetId(sheetType: string): string {
 /** A fresh copy of a sheet type's demo inputs (the invented example duty). */
 export function demoInputsOf(sheetType: string): SheetInputs {
   return demoInputs(sheetTypeDefinition(sheetType));
-}
-
-/**
- * How a field starts on a new sheet: whether the engineer must enter it (blank on an empty sheet)
- * and its example value. Numbers and quantities the sheet declares required start blank; choices and
- * flags start at their demo value, unconfirmed.
- */
-export function fieldStart(field: FieldDefinition): { required: boolean; example: InputValue } {
-  return {
-    required: field.required && field.kind !== 'choice' && field.kind !== 'boolean',
-    example: field.demo,
-  };
 }
 
 /**

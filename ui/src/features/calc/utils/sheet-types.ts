@@ -1,6 +1,5 @@
 import * as calc from '@holdfast/calc';
 import type { SheetInputs, SheetTypeDefinition } from '@holdfast/calc';
-import { fieldStart } from './field-start';
 
 // The registry lands in calc in stages; reach it through the namespace so the UI keeps building.
 const registry = calc as unknown as {
@@ -47,7 +46,7 @@ export function sheetTypeTitle(id: string): string {
 export function withMissingFields(type: SheetTypeDefinition, inputs: SheetInputs): SheetInputs {
   const out: SheetInputs = {};
   for (const f of type.fields) {
-    const start = fieldStart(f);
+    const start = calc.fieldStart(f);
     out[f.key] = start.required ? '' : start.example;
   }
   return { ...out, ...inputs };
