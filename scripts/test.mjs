@@ -66,6 +66,12 @@ await check('UI type check', 'npx', ['tsc', '-p', 'ui', '--noEmit']);
 await check('verification type check', 'npx', ['tsc', '-p', 'verification', '--noEmit']);
 await check('server test type check', 'npx', ['tsc', '-p', 'server/test', '--noEmit']);
 await check('lint (eslint)', 'npx', ['eslint', '.', '--max-warnings=0']);
+await check('formatting (prettier --check)', 'npx', [
+  'prettier',
+  '--check',
+  '.',
+  '--log-level=warn',
+]);
 
 const report = path.join(outDir, 'vitest.json');
 rmSync(report, { force: true });

@@ -31,7 +31,6 @@ const refreshKeys: Record<keyof RefreshTokensTable, true> = {
 };
 const camel = (s: string) => s.replace(/_([a-z0-9])/g, (_, c: string) => c.toUpperCase());
 
-// eslint-disable-next-line @typescript-eslint/no-explicit-any
 async function tables(db: Kysely<any>): Promise<string[]> {
   const { rows } = await sql<{ t: string }>`
     select table_name as t from information_schema.tables where table_schema = 'public' order by 1`.execute(
@@ -39,7 +38,7 @@ async function tables(db: Kysely<any>): Promise<string[]> {
   );
   return rows.map((r) => r.t);
 }
-// eslint-disable-next-line @typescript-eslint/no-explicit-any
+
 async function columns(db: Kysely<any>, table: string): Promise<string[]> {
   const { rows } = await sql<{ c: string }>`
     select column_name as c from information_schema.columns
@@ -49,7 +48,7 @@ async function columns(db: Kysely<any>, table: string): Promise<string[]> {
 
 describe('migrations', () => {
   let fresh: Awaited<ReturnType<typeof createFreshDatabase>>;
-  // eslint-disable-next-line @typescript-eslint/no-explicit-any
+
   let db: Kysely<any>;
   beforeAll(async () => {
     fresh = await createFreshDatabase('holdfast_migrations');

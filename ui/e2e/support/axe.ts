@@ -23,7 +23,7 @@ export async function seriousViolations(page: Page): Promise<AxeFinding[]> {
   // Mantine transitions fade content in; judge the settled page.
   await page.waitForTimeout(400);
   return page.evaluate(async () => {
-    const axe = (window as unknown as { axe: any }).axe; // eslint-disable-line @typescript-eslint/no-explicit-any
+    const axe = (window as unknown as { axe: any }).axe;
     const result = await axe.run(document, {
       runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa'] },
       resultTypes: ['violations'],
