@@ -3,6 +3,7 @@ import tseslint from 'typescript-eslint';
 import importX from 'eslint-plugin-import-x';
 import globals from 'globals';
 import reactHooks from 'eslint-plugin-react-hooks';
+import tanstackQuery from '@tanstack/eslint-plugin-query';
 
 // Dependency direction is one way: calc ← shared ← {server, ui}; db ← server; ui never imports server or db.
 const zones = [
@@ -53,8 +54,12 @@ export default tseslint.config(
   },
   {
     files: ['ui/**/*.{ts,tsx}'],
-    plugins: { 'react-hooks': reactHooks },
-    rules: { 'react-hooks/rules-of-hooks': 'error', 'react-hooks/exhaustive-deps': 'warn' },
+    plugins: { 'react-hooks': reactHooks, '@tanstack/query': tanstackQuery },
+    rules: {
+      'react-hooks/rules-of-hooks': 'error',
+      'react-hooks/exhaustive-deps': 'warn',
+      ...tanstackQuery.configs['flat/recommended'][0].rules,
+    },
   },
   ...Object.entries(packageBans).map(([ws, banned]) => ({
     files: [`${ws}/**/*.{ts,tsx,js,mjs}`],
