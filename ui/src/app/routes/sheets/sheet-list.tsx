@@ -28,7 +28,7 @@ import { useCurrentUser } from '../../../lib/session';
 import { sheetTypeTitle } from '../../../features/calc/utils/sheet-types';
 import { useRegister } from '../../../features/register/api/get-register';
 import { sheetsQueryOptions, useSheets } from '../../../features/sheets/api/get-sheets';
-import type { SheetListParams } from '../../../features/sheets/api/sheet-keys';
+import type { SheetListParams } from '../../../lib/query-keys';
 import { CreateSheetDialog } from '../../../features/sheets/components/create-sheet-dialog';
 import { SheetsTable, type SortKey } from '../../../features/sheets/components/sheets-table';
 import { stateLabel } from '../../../features/sheets/components/state-badge';

@@ -4,7 +4,7 @@ import { errorMessage, saveBlob } from '../../../lib/api-client';
 import { csvBlob } from '../../../lib/csv';
 import { sheetTypeTitle } from '../../../features/calc/utils/sheet-types';
 import { getSheets } from '../../../features/sheets/api/get-sheets';
-import type { SheetListParams } from '../../../features/sheets/api/sheet-keys';
+import type { SheetListParams } from '../../../lib/query-keys';
 import { usePrintSafetyFile } from '../../../features/sheets/api/print-safety-file';
 import { sheetsCsv } from '../../../features/sheets/utils/sheets-csv';
 

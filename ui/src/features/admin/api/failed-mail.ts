@@ -1,8 +1,7 @@
 import { queryOptions, useMutation, useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
 import { failedMailListSchema, type FailedMailList } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-
-export const failedMailKeys = { list: () => ['admin', 'mail', 'failed'] as const };
+import { failedMailKeys } from '../../../lib/query-keys';
 
 export function getFailedMail(signal?: AbortSignal): Promise<FailedMailList> {
   return api.get('/admin/mail/failed', { schema: failedMailListSchema, signal });

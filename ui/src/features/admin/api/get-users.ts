@@ -1,7 +1,7 @@
 import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import { userListSchema, type UserList } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { userKeys } from './user-keys';
+import { userKeys } from '../../../lib/query-keys';
 
 export function getUsers(signal?: AbortSignal): Promise<UserList> {
   return api.get('/users', { schema: userListSchema, signal });

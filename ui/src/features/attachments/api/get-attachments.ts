@@ -1,9 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { attachmentListSchema, type AttachmentList } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-
-export const attachmentsKey = (revisionId: string) =>
-  ['revisions', 'detail', revisionId, 'attachments'] as const;
+import { revisionKeys } from '../../../lib/query-keys';
 
 export function getAttachments(revisionId: string, signal?: AbortSignal): Promise<AttachmentList> {
   return api.get(`/revisions/${revisionId}/attachments`, { schema: attachmentListSchema, signal });
@@ -11,7 +9,7 @@ export function getAttachments(revisionId: string, signal?: AbortSignal): Promis
 
 export function attachmentsQueryOptions(revisionId: string) {
   return queryOptions({
-    queryKey: attachmentsKey(revisionId),
+    queryKey: revisionKeys.attachments(revisionId),
     queryFn: ({ signal }) => getAttachments(revisionId, signal),
   });
 }

@@ -2,7 +2,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { userSchema, type User } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
 import { sessionStore } from '../../../lib/session';
-import { authKeys } from './auth-keys';
+import { authKeys } from '../../../lib/query-keys';
 
 export async function getMe(signal?: AbortSignal): Promise<User> {
   const user = await api.get('/auth/me', { schema: userSchema, signal });

@@ -1,10 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { compareSchema, type Compare } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
+import { sheetKeys } from '../../../lib/query-keys';
 
 /** Same root as the sheet's own keys, so invalidating a sheet refreshes its comparisons. */
-export const comparisonKey = (sheetId: string, from: string, to: string) =>
-  ['sheets', 'detail', sheetId, 'compare', from, to] as const;
 
 export function getComparison(
   sheetId: string,
@@ -21,7 +20,7 @@ export function getComparison(
 
 export function comparisonQueryOptions(sheetId: string, from: string, to: string) {
   return queryOptions({
-    queryKey: comparisonKey(sheetId, from, to),
+    queryKey: sheetKeys.compare(sheetId, from, to),
     queryFn: ({ signal }) => getComparison(sheetId, from, to, signal),
     enabled: Boolean(from && to && from !== to),
   });

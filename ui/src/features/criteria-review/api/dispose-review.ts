@@ -5,7 +5,7 @@ import {
   type RevisionCriteriaReview,
 } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { reviewKeys } from './review-keys';
+import { reviewKeys } from '../../../lib/query-keys';
 
 export function disposeReview(
   revisionId: string,

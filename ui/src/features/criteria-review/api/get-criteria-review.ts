@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { revisionCriteriaReviewSchema, type RevisionCriteriaReview } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { reviewKeys } from './review-keys';
+import { reviewKeys } from '../../../lib/query-keys';
 
 export function getCriteriaReview(
   revisionId: string,

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { underReviewQueueSchema, type UnderReviewQueue } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { reviewKeys } from './review-keys';
+import { reviewKeys } from '../../../lib/query-keys';
 
 export function getUnderReviewQueue(signal?: AbortSignal): Promise<UnderReviewQueue> {
   return api.get('/work-queue/under-review', { schema: underReviewQueueSchema, signal });

@@ -5,7 +5,7 @@ import {
   type CriteriaSetDetail,
 } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { criteriaKeys } from './criteria-keys';
+import { criteriaKeys } from '../../../lib/query-keys';
 
 export function confirmCriterion(
   setId: string,

@@ -5,7 +5,7 @@ import {
   type CriteriaSetDetail,
 } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { criteriaKeys } from './criteria-keys';
+import { criteriaKeys } from '../../../lib/query-keys';
 
 export function createCriteriaSet(input: CreateCriteriaSetInput): Promise<CriteriaSetDetail> {
   return api.post('/criteria-sets', { body: input, schema: criteriaSetDetailSchema });

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { impactReportSchema, type ImpactReport } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { criteriaKeys } from './criteria-keys';
+import { criteriaKeys } from '../../../lib/query-keys';
 
 export function getCriteriaImpact(
   id: string,

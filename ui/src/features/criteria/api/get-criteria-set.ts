@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { criteriaSetDetailSchema, type CriteriaSetDetail } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { criteriaKeys } from './criteria-keys';
+import { criteriaKeys } from '../../../lib/query-keys';
 
 export function getCriteriaSet(
   id: string,

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { criteriaSetListSchema, type CriteriaSetList } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { criteriaKeys } from './criteria-keys';
+import { criteriaKeys } from '../../../lib/query-keys';
 
 export function getCriteriaSets(signal?: AbortSignal): Promise<CriteriaSetList> {
   return api.get('/criteria-sets', { schema: criteriaSetListSchema, signal });

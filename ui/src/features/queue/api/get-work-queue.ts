@@ -1,8 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { workQueueSchema, type WorkQueue } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-
-export const workQueueKeys = { all: ['work-queue'] as const };
+import { workQueueKeys } from '../../../lib/query-keys';
 
 export function getWorkQueue(signal?: AbortSignal): Promise<WorkQueue> {
   return api.get('/work-queue', { schema: workQueueSchema, signal });

@@ -1,8 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { registerSchema, type Register } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-
-export const registerKeys = { all: ['register'] as const };
+import { registerKeys } from '../../../lib/query-keys';
 
 export function getRegister(signal?: AbortSignal): Promise<Register> {
   return api.get('/register', { schema: registerSchema, signal });

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { registerKeys } from './get-register';
+import { registerKeys } from '../../../lib/query-keys';
 
 /** Which register record a form saves: a site, a machine or a brake position. */
 export type RegisterKind = 'sites' | 'machines' | 'positions';

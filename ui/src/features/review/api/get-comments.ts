@@ -1,10 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { commentListSchema, type CommentList } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-
-/** Comments hang off their revision's key, so refreshing a revision refreshes them too. */
-export const commentsKey = (revisionId: string) =>
-  ['revisions', 'detail', revisionId, 'comments'] as const;
+import { revisionKeys } from '../../../lib/query-keys';
 
 export function getComments(revisionId: string, signal?: AbortSignal): Promise<CommentList> {
   return api.get(`/revisions/${revisionId}/comments`, { schema: commentListSchema, signal });
@@ -12,7 +9,7 @@ export function getComments(revisionId: string, signal?: AbortSignal): Promise<C
 
 export function commentsQueryOptions(revisionId: string) {
   return queryOptions({
-    queryKey: commentsKey(revisionId),
+    queryKey: revisionKeys.comments(revisionId),
     queryFn: ({ signal }) => getComments(revisionId, signal),
   });
 }

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { revisionChangesSchema, type RevisionChanges } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { revisionKeys } from './revision-keys';
+import { revisionKeys } from '../../../lib/query-keys';
 
 export function getRevisionChanges(id: string, signal?: AbortSignal): Promise<RevisionChanges> {
   return api.get(`/revisions/${id}/changes`, { schema: revisionChangesSchema, signal });

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { revisionSchema, type Revision } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { revisionKeys } from './revision-keys';
+import { revisionKeys } from '../../../lib/query-keys';
 
 export function getRevision(id: string, signal?: AbortSignal): Promise<Revision> {
   return api.get(`/revisions/${id}`, { schema: revisionSchema, signal });

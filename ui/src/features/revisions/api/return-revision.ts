@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { revisionSchema, type Revision, type ReturnRevisionInput } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { revisionKeys, staleAfterStateChange } from './revision-keys';
+import { revisionKeys, staleAfterStateChange } from '../../../lib/query-keys';
 
 export function returnRevision(id: string, input: ReturnRevisionInput): Promise<Revision> {
   return api.post(`/revisions/${id}/return`, { body: input, schema: revisionSchema });

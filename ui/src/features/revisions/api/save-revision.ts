@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { revisionSchema, type Revision, type SaveRevisionInput } from '@holdfast/shared';
 import { api, apiUrl } from '../../../lib/api-client';
 import { sessionStore } from '../../../lib/session';
-import { revisionKeys } from './revision-keys';
+import { revisionKeys, workQueueKeys } from '../../../lib/query-keys';
 
 export function saveRevision(id: string, input: SaveRevisionInput): Promise<Revision> {
   return api.put(`/revisions/${id}`, { body: input, schema: revisionSchema });
@@ -15,7 +15,7 @@ export function useSaveRevision(id: string) {
     mutationFn: (input: SaveRevisionInput) => saveRevision(id, input),
     onSuccess: (revision) => {
       queryClient.setQueryData(revisionKeys.detail(id), revision);
-      void queryClient.invalidateQueries({ queryKey: ['work-queue'] });
+      void queryClient.invalidateQueries({ queryKey: workQueueKeys.all });
     },
   });
 }

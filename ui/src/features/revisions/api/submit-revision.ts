@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { revisionSchema, type Revision, type SubmitRevisionInput } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { revisionKeys, staleAfterStateChange } from './revision-keys';
+import { revisionKeys, staleAfterStateChange } from '../../../lib/query-keys';
 
 export function submitRevision(id: string, input: SubmitRevisionInput): Promise<Revision> {
   return api.post(`/revisions/${id}/submit`, { body: input, schema: revisionSchema });

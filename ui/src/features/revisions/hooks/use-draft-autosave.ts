@@ -4,7 +4,7 @@ import type { InputValue } from '@holdfast/calc';
 import type { Revision, SaveRevisionInput } from '@holdfast/shared';
 import { isApiRequestError } from '../../../lib/api-client';
 import { getRevision } from '../api/get-revision';
-import { revisionKeys } from '../api/revision-keys';
+import { revisionKeys } from '../../../lib/query-keys';
 import { saveRevision, saveRevisionOnLeave } from '../api/save-revision';
 import { clearLocalDraft, writeLocalDraft } from '../utils/local-draft';
 

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { revisionSchema, type NewRevisionInput, type Revision } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { sheetKeys } from './sheet-keys';
+import { revisionKeys, sheetKeys, workQueueKeys } from '../../../lib/query-keys';
 
 export function createRevision(sheetId: string, input: NewRevisionInput): Promise<Revision> {
   return api.post(`/sheets/${sheetId}/revisions`, { body: input, schema: revisionSchema });
@@ -13,10 +13,10 @@ export function useCreateRevision(sheetId: string) {
   return useMutation({
     mutationFn: (input: NewRevisionInput) => createRevision(sheetId, input),
     onSuccess: (revision) => {
-      queryClient.setQueryData(['revisions', 'detail', revision.id], revision);
+      queryClient.setQueryData(revisionKeys.detail(revision.id), revision);
       void queryClient.invalidateQueries({ queryKey: sheetKeys.detail(sheetId) });
       void queryClient.invalidateQueries({ queryKey: sheetKeys.lists() });
-      void queryClient.invalidateQueries({ queryKey: ['work-queue'] });
+      void queryClient.invalidateQueries({ queryKey: workQueueKeys.all });
     },
   });
 }

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { sheetDetailSchema, type CreateSheetInput, type SheetDetail } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { sheetKeys } from './sheet-keys';
+import { registerKeys, sheetKeys, workQueueKeys } from '../../../lib/query-keys';
 
 export function createSheet(input: CreateSheetInput): Promise<SheetDetail> {
   return api.post('/sheets', { body: input, schema: sheetDetailSchema });
@@ -14,8 +14,8 @@ export function useCreateSheet() {
     onSuccess: (sheet) => {
       queryClient.setQueryData(sheetKeys.detail(sheet.id), sheet);
       void queryClient.invalidateQueries({ queryKey: sheetKeys.lists() });
-      void queryClient.invalidateQueries({ queryKey: ['work-queue'] });
-      void queryClient.invalidateQueries({ queryKey: ['register'] });
+      void queryClient.invalidateQueries({ queryKey: workQueueKeys.all });
+      void queryClient.invalidateQueries({ queryKey: registerKeys.all });
     },
   });
 }

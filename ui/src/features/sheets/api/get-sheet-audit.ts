@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { auditListSchema, type AuditList } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { sheetKeys } from './sheet-keys';
+import { sheetKeys } from '../../../lib/query-keys';
 
 export function getSheetAudit(id: string, signal?: AbortSignal): Promise<AuditList> {
   return api.get(`/sheets/${id}/audit`, { schema: auditListSchema, signal });

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { sheetDetailSchema, type SheetDetail } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { sheetKeys } from './sheet-keys';
+import { sheetKeys } from '../../../lib/query-keys';
 
 export function getSheet(id: string, signal?: AbortSignal): Promise<SheetDetail> {
   return api.get(`/sheets/${id}`, { schema: sheetDetailSchema, signal });

@@ -1,7 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { sheetListSchema, type SheetList } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { sheetKeys, type SheetListParams } from './sheet-keys';
+import { sheetKeys, type SheetListParams } from '../../../lib/query-keys';
 
 export function getSheets(params: SheetListParams, signal?: AbortSignal): Promise<SheetList> {
   return api.get('/sheets', { query: { ...params }, schema: sheetListSchema, signal });

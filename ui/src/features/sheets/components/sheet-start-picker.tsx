@@ -1,7 +1,7 @@
 import { Radio, Select, Stack, Text } from '@mantine/core';
 import type { SheetStart } from '@holdfast/shared';
 import { useSheets } from '../api/get-sheets';
-import type { SheetListParams } from '../api/sheet-keys';
+import type { SheetListParams } from '../../../lib/query-keys';
 
 export type StartKind = SheetStart['kind'];
 

@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { verifyResultSchema, type VerifyResult } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
+import { verifyKeys } from '../../../lib/query-keys';
 
 export function getVerification(code: string, signal?: AbortSignal): Promise<VerifyResult> {
   // Public: anyone holding a printout may check it, signed in or not.
@@ -13,7 +14,7 @@ export function getVerification(code: string, signal?: AbortSignal): Promise<Ver
 
 export function verificationQueryOptions(code: string) {
   return queryOptions({
-    queryKey: ['verify', code] as const,
+    queryKey: verifyKeys.code(code),
     queryFn: ({ signal }) => getVerification(code, signal),
     staleTime: 0,
   });
