@@ -28,7 +28,6 @@ export {
 export { toDisplay, displayUnitFor, type UnitSystem, type DisplayValue } from './units/display.js';
 export { formatNumber, formatForDerivation } from './units/format.js';
 export { DIMENSIONS, type UnitOption, type DimensionInfo } from './units/unit-table.js';
-export { nearlyEqual } from './testing/expect-close.js';
 export * as discSprings from './disc-springs/index.js';
 export { discSpringStackSheet, evaluateDiscSpringStack } from './sheets/disc-spring-stack.js';
 export { compute } from './core/step.js';
