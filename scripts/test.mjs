@@ -62,6 +62,12 @@ async function check(name, cmd, args) {
 }
 
 await check('type tests (calc/test-types)', 'npx', ['tsc', '-p', 'calc/test-types', '--noEmit']);
+await check('type tests (shared/test-types)', 'npx', [
+  'tsc',
+  '-p',
+  'shared/test-types',
+  '--noEmit',
+]);
 await check('UI type check', 'npx', ['tsc', '-p', 'ui', '--noEmit']);
 await check('verification type check', 'npx', ['tsc', '-p', 'verification', '--noEmit']);
 await check('server test type check', 'npx', ['tsc', '-p', 'server/test', '--noEmit']);

@@ -1,6 +1,7 @@
 import { Controller, Get, Module } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { allApiRoutes } from '@holdfast/shared';
 import { AppModule } from '../src/app.module.js';
 import { listRoutes, type RouteInfo } from '../src/common/routes/list-routes.js';
 import { callers, guardOutcome, probePath, routeKey } from './route-matrix.js';
@@ -20,6 +21,14 @@ describe('route policies', () => {
     expect(routes.map(routeKey)).toEqual(
       expect.arrayContaining(['GET /api/health', 'POST /api/auth/sign-in', 'PATCH /api/users/:id']),
     );
+  });
+
+  it('mounts exactly the routes of the shared route table, each once', () => {
+    const mounted = routes.map(routeKey).sort();
+    const table = allApiRoutes()
+      .map((r) => `${r.method} /api/${r.path}`)
+      .sort();
+    expect(mounted).toEqual(table);
   });
 
   it('every registered route declares @Public(), @SignedIn() or @Roles(...)', () => {

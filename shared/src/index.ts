@@ -17,3 +17,4 @@ export * from './verify/verify.schema.js';
 export * from './revisions/canonical-json.js';
 export * from './reviews/criteria-review.schema.js';
 export * from './mail/failed-mail.schema.js';
+export * from './api/routes.js';

@@ -11,7 +11,12 @@ import {
 } from '@nestjs/common';
 import { FileInterceptor } from '@nestjs/platform-express';
 import { ApiBearerAuth, ApiBody, ApiConsumes, ApiTags } from '@nestjs/swagger';
-import { MAX_ATTACHMENT_BYTES, type Attachment, type AttachmentList } from '@holdfast/shared';
+import {
+  MAX_ATTACHMENT_BYTES,
+  type Attachment,
+  type AttachmentList,
+  apiRoutes,
+} from '@holdfast/shared';
 import type { Response } from 'express';
 import { memoryStorage } from 'multer';
 import { CurrentUser, type AuthUser } from '../auth/auth-user.js';
@@ -26,7 +31,7 @@ import { contentDisposition } from './sniff.js';
 export class AttachmentsController {
   constructor(private readonly attachments: AttachmentsService) {}
 
-  @Get('revisions/:id/attachments')
+  @Get(apiRoutes.attachments.list.path)
   @SignedIn()
   async list(
     @CurrentUser() user: AuthUser,
@@ -35,7 +40,7 @@ export class AttachmentsController {
     return { items: await this.attachments.list(user, id) };
   }
 
-  @Post('revisions/:id/attachments')
+  @Post(apiRoutes.attachments.upload.path)
   @HttpCode(201)
   @Roles('engineer')
   @ApiConsumes('multipart/form-data')
@@ -56,7 +61,7 @@ export class AttachmentsController {
     return this.attachments.upload(user, id, file);
   }
 
-  @Get('attachments/:id/download')
+  @Get(apiRoutes.attachments.download.path)
   @SignedIn()
   async download(
     @CurrentUser() user: AuthUser,

@@ -11,6 +11,7 @@ import {
   type SignInInput,
   type UpdateMeInput,
   type User,
+  apiRoutes,
 } from '@holdfast/shared';
 import type { Request, Response } from 'express';
 import { AppConfig } from '../config/app-config.js';
@@ -25,7 +26,7 @@ import { PasswordResetService } from './password-reset.service.js';
 import { Public, SignedIn } from './policy.js';
 
 @ApiTags('auth')
-@Controller('auth')
+@Controller()
 export class AuthController {
   constructor(
     private readonly auth: AuthService,
@@ -34,7 +35,7 @@ export class AuthController {
     private readonly resets: PasswordResetService,
   ) {}
 
-  @Post('sign-in')
+  @Post(apiRoutes.auth.signIn.path)
   @Public()
   @UseGuards(LoginThrottlerGuard)
   @HttpCode(200)
@@ -46,14 +47,14 @@ export class AuthController {
     return this.withCookie(res, await this.auth.signIn(input));
   }
 
-  @Post('refresh')
+  @Post(apiRoutes.auth.refresh.path)
   @Public()
   @HttpCode(200)
   async refresh(@Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<Session> {
     return this.withCookie(res, await this.auth.refresh(this.cookie(req)));
   }
 
-  @Post('sign-out')
+  @Post(apiRoutes.auth.signOut.path)
   @Public()
   @HttpCode(204)
   async signOut(@Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<void> {
@@ -61,14 +62,14 @@ export class AuthController {
     res.clearCookie(REFRESH_COOKIE, this.cookieOptions());
   }
 
-  @Get('me')
+  @Get(apiRoutes.auth.me.path)
   @SignedIn()
   @ApiBearerAuth()
   me(@CurrentUser() user: AuthUser): User {
     return user;
   }
 
-  @Patch('me')
+  @Patch(apiRoutes.auth.updateMe.path)
   @SignedIn()
   @ApiBearerAuth()
   @ApiBodySchema(updateMeSchema)
@@ -80,7 +81,7 @@ export class AuthController {
   }
 
   /** Change one's own password; other sessions end, this one continues with a new cookie. */
-  @Post('password')
+  @Post(apiRoutes.auth.changePassword.path)
   @SignedIn()
   @HttpCode(200)
   @ApiBearerAuth()
@@ -94,7 +95,7 @@ export class AuthController {
   }
 
   /** Set a new password with the one-time token from an admin reset mail. */
-  @Post('password-reset')
+  @Post(apiRoutes.auth.completePasswordReset.path)
   @Public()
   @UseGuards(LoginThrottlerGuard)
   @HttpCode(204)

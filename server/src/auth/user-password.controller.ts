@@ -1,3 +1,4 @@
+import { apiRoutes } from '@holdfast/shared';
 import { Controller, HttpCode, Param, Post } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { PasswordResetIssued } from '@holdfast/shared';
@@ -9,12 +10,12 @@ import { Roles } from './policy.js';
 @ApiTags('users')
 @ApiBearerAuth()
 @Roles('admin')
-@Controller('users')
+@Controller()
 export class UserPasswordController {
   constructor(private readonly resets: PasswordResetService) {}
 
   /** Admin reset: the password stops working now and the user is mailed a one-time link. */
-  @Post(':id/password-reset')
+  @Post(apiRoutes.users.sendPasswordReset.path)
   @HttpCode(202)
   reset(
     @CurrentUser() admin: AuthUser,

@@ -7,6 +7,7 @@ import {
   type CommentList,
   type CreateCommentInput,
   type UpdateCommentInput,
+  apiRoutes,
 } from '@holdfast/shared';
 import { CurrentUser, type AuthUser } from '../auth/auth-user.js';
 import { Roles, SignedIn } from '../auth/policy.js';
@@ -21,7 +22,7 @@ import { CommentsService } from './comments.service.js';
 export class CommentsController {
   constructor(private readonly comments: CommentsService) {}
 
-  @Get('revisions/:id/comments')
+  @Get(apiRoutes.comments.list.path)
   @SignedIn()
   async list(
     @CurrentUser() user: AuthUser,
@@ -30,7 +31,7 @@ export class CommentsController {
     return { items: await this.comments.list(user, id) };
   }
 
-  @Post('revisions/:id/comments')
+  @Post(apiRoutes.comments.create.path)
   @HttpCode(201)
   @Roles('engineer')
   @ApiBodySchema(createCommentSchema)
@@ -42,7 +43,7 @@ export class CommentsController {
     return this.comments.create(user, id, input);
   }
 
-  @Patch('comments/:id')
+  @Patch(apiRoutes.comments.update.path)
   @Roles('engineer')
   @ApiBodySchema(updateCommentSchema)
   update(

@@ -11,6 +11,7 @@ import {
   type CriteriaSetList,
   type ImpactReport,
   type PublishCriteriaVersionInput,
+  apiRoutes,
 } from '@holdfast/shared';
 import { z } from 'zod';
 import { CurrentUser, type AuthUser } from '../auth/auth-user.js';
@@ -26,7 +27,7 @@ const setId = z.string().regex(/^[a-z0-9][a-z0-9._-]{0,79}$/i, 'not a criteria-s
 
 @ApiTags('criteria-sets')
 @ApiBearerAuth()
-@Controller('criteria-sets')
+@Controller()
 export class CriteriaController {
   constructor(
     private readonly criteria: CriteriaService,
@@ -34,13 +35,13 @@ export class CriteriaController {
     private readonly admin: CriteriaAdminService,
   ) {}
 
-  @Get()
+  @Get(apiRoutes.criteria.list.path)
   @SignedIn()
   async list(): Promise<CriteriaSetList> {
     return { items: await this.criteria.list() };
   }
 
-  @Post()
+  @Post(apiRoutes.criteria.create.path)
   @HttpCode(201)
   @Roles('admin')
   @ApiBodySchema(createCriteriaSetSchema)
@@ -51,7 +52,7 @@ export class CriteriaController {
     return this.admin.create(user.id, input);
   }
 
-  @Post(':id/versions/:version/confirmations')
+  @Post(apiRoutes.criteria.confirm.path)
   @HttpCode(201)
   @Roles('admin', 'checker')
   @ApiBodySchema(confirmCriterionSchema)
@@ -64,7 +65,7 @@ export class CriteriaController {
     return this.admin.confirm(user.id, id, version, input);
   }
 
-  @Get(':id')
+  @Get(apiRoutes.criteria.detail.path)
   @SignedIn()
   detail(
     @Param('id', new ZodValidationPipe(setId, 'id')) id: string,
@@ -73,7 +74,7 @@ export class CriteriaController {
     return this.criteria.detail(id, query.version);
   }
 
-  @Post(':id/versions')
+  @Post(apiRoutes.criteria.publish.path)
   @HttpCode(201)
   @Roles('admin')
   @ApiBodySchema(publishCriteriaVersionSchema)
@@ -85,7 +86,7 @@ export class CriteriaController {
     return this.criteria.publish(user.id, id, input);
   }
 
-  @Get(':id/impact')
+  @Get(apiRoutes.criteria.impact.path)
   @Roles('admin', 'checker')
   impact(
     @Param('id', new ZodValidationPipe(setId, 'id')) id: string,

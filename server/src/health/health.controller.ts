@@ -1,3 +1,4 @@
+import { apiRoutes } from '@holdfast/shared';
 import { Controller, Get, Res } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import type { Health } from '@holdfast/shared';
@@ -11,12 +12,12 @@ import { DATABASE_RETRY_AFTER_SECONDS } from '../common/errors/postgres-errors.j
 const DATABASE_TIMEOUT_MS = 1000;
 
 @ApiTags('health')
-@Controller('health')
+@Controller()
 export class HealthController {
   constructor(private readonly db: Database) {}
 
   /** 200 when PostgreSQL answers `select 1` within a second, else 503. Never an error body. */
-  @Get()
+  @Get(apiRoutes.health.path)
   @Public()
   async check(@Res({ passthrough: true }) res: Response): Promise<Health> {
     const up = await this.databaseAnswers();

@@ -1,3 +1,4 @@
+import { apiRoutes } from '@holdfast/shared';
 import { Controller, Get, HttpCode, Param, Post } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { FailedMailList } from '@holdfast/shared';
@@ -9,16 +10,16 @@ import { FailedMailService } from './failed-mail.service.js';
 @ApiTags('admin')
 @ApiBearerAuth()
 @Roles('admin')
-@Controller('admin/mail')
+@Controller()
 export class FailedMailController {
   constructor(private readonly failed: FailedMailService) {}
 
-  @Get('failed')
+  @Get(apiRoutes.admin.failedMail.path)
   async list(): Promise<FailedMailList> {
     return { items: await this.failed.list() };
   }
 
-  @Post(':id/resend')
+  @Post(apiRoutes.admin.resendMail.path)
   @HttpCode(202)
   async resend(@CurrentUser() admin: AuthUser, @Param('id', UuidParamPipe) id: string) {
     await this.failed.resend(id, admin.id);

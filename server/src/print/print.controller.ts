@@ -1,6 +1,6 @@
 import { Controller, Get, Param, Query, Res, StreamableFile } from '@nestjs/common';
 import { ApiBearerAuth, ApiProduces, ApiTags } from '@nestjs/swagger';
-import { printQuerySchema, type PrintQuery } from '@holdfast/shared';
+import { printQuerySchema, type PrintQuery, apiRoutes } from '@holdfast/shared';
 import type { Response } from 'express';
 import { CurrentUser, type AuthUser } from '../auth/auth-user.js';
 import { SignedIn } from '../auth/policy.js';
@@ -24,7 +24,7 @@ export const pdf = (f: PrintedFile) =>
 /** GET /api/revisions/:id/pdf and /field-card. Who may read which revision is RevisionsService's rule. */
 @ApiTags('revisions')
 @ApiBearerAuth()
-@Controller('revisions')
+@Controller()
 export class PrintController {
   constructor(private readonly print: PrintService) {}
 
@@ -42,7 +42,7 @@ export class PrintController {
     }
   }
 
-  @Get(':id/pdf')
+  @Get(apiRoutes.revisions.pdf.path)
   @SignedIn()
   @ApiProduces('application/pdf')
   async sheet(
@@ -54,7 +54,7 @@ export class PrintController {
     return pdf(await this.printed(res, user, id, 'sheet', query));
   }
 
-  @Get(':id/field-card')
+  @Get(apiRoutes.revisions.fieldCard.path)
   @SignedIn()
   @ApiProduces('application/pdf')
   async fieldCard(

@@ -1,6 +1,6 @@
 import { Body, Controller, HttpCode, Post, StreamableFile } from '@nestjs/common';
 import { ApiBearerAuth, ApiProduces, ApiTags } from '@nestjs/swagger';
-import { safetyFileSchema, type SafetyFileInput } from '@holdfast/shared';
+import { safetyFileSchema, type SafetyFileInput, apiRoutes } from '@holdfast/shared';
 import { CurrentUser, type AuthUser } from '../auth/auth-user.js';
 import { SignedIn } from '../auth/policy.js';
 import { ApiBodySchema } from '../common/openapi.js';
@@ -11,11 +11,11 @@ import { SafetyFileService } from './safety-file.service.js';
 /** POST /api/print/safety-file: approved sheets as one PDF. Read rules are RevisionsService's. */
 @ApiTags('print')
 @ApiBearerAuth()
-@Controller('print')
+@Controller()
 export class SafetyFileController {
   constructor(private readonly safetyFile: SafetyFileService) {}
 
-  @Post('safety-file')
+  @Post(apiRoutes.print.safetyFile.path)
   @HttpCode(200)
   @SignedIn()
   @ApiProduces('application/pdf')

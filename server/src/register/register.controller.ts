@@ -14,6 +14,7 @@ import {
   updateMachineSchema,
   updatePositionSchema,
   updateSiteSchema,
+  apiRoutes,
 } from '@holdfast/shared';
 import { CurrentUser, type AuthUser } from '../auth/auth-user.js';
 import { Roles, SignedIn } from '../auth/policy.js';
@@ -25,20 +26,20 @@ import { RegisterService } from './register.service.js';
 
 @ApiTags('register')
 @ApiBearerAuth()
-@Controller('register')
+@Controller()
 export class RegisterController {
   constructor(
     private readonly register: RegisterService,
     private readonly edits: RegisterEditsService,
   ) {}
 
-  @Get()
+  @Get(apiRoutes.register.tree.path)
   @SignedIn()
   tree(): Promise<Register> {
     return this.register.tree();
   }
 
-  @Post('sites')
+  @Post(apiRoutes.register.createSite.path)
   @HttpCode(201)
   @Roles('engineer', 'admin')
   @ApiBodySchema(createSiteSchema)
@@ -49,7 +50,7 @@ export class RegisterController {
     return this.register.createSite(user, input);
   }
 
-  @Post('machines')
+  @Post(apiRoutes.register.createMachine.path)
   @HttpCode(201)
   @Roles('engineer', 'admin')
   @ApiBodySchema(createMachineSchema)
@@ -60,7 +61,7 @@ export class RegisterController {
     return this.register.createMachine(user, input);
   }
 
-  @Post('positions')
+  @Post(apiRoutes.register.createPosition.path)
   @HttpCode(201)
   @Roles('engineer', 'admin')
   @ApiBodySchema(createPositionSchema)
@@ -71,7 +72,7 @@ export class RegisterController {
     return this.register.createPosition(user, input);
   }
 
-  @Patch('sites/:id')
+  @Patch(apiRoutes.register.updateSite.path)
   @Roles('engineer', 'admin')
   @ApiBodySchema(updateSiteSchema)
   updateSite(
@@ -82,7 +83,7 @@ export class RegisterController {
     return this.edits.updateSite(user, id, input);
   }
 
-  @Patch('machines/:id')
+  @Patch(apiRoutes.register.updateMachine.path)
   @Roles('engineer', 'admin')
   @ApiBodySchema(updateMachineSchema)
   updateMachine(
@@ -93,7 +94,7 @@ export class RegisterController {
     return this.edits.updateMachine(user, id, input);
   }
 
-  @Patch('positions/:id')
+  @Patch(apiRoutes.register.updatePosition.path)
   @Roles('engineer', 'admin')
   @ApiBodySchema(updatePositionSchema)
   updatePosition(

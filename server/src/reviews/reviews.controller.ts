@@ -5,6 +5,7 @@ import {
   type ReviewDispositionInput,
   type RevisionCriteriaReview,
   type UnderReviewQueue,
+  apiRoutes,
 } from '@holdfast/shared';
 import { CurrentUser, type AuthUser } from '../auth/auth-user.js';
 import { Roles, SignedIn } from '../auth/policy.js';
@@ -19,7 +20,7 @@ import { ReviewsService } from './reviews.service.js';
 export class ReviewsController {
   constructor(private readonly reviews: ReviewsService) {}
 
-  @Get('revisions/:id/criteria-review')
+  @Get(apiRoutes.reviews.ofRevision.path)
   @SignedIn()
   get(
     @CurrentUser() user: AuthUser,
@@ -28,7 +29,7 @@ export class ReviewsController {
     return this.reviews.forRevision(user, id);
   }
 
-  @Post('revisions/:id/criteria-review/disposition')
+  @Post(apiRoutes.reviews.dispose.path)
   @HttpCode(200)
   @Roles('checker')
   @ApiBodySchema(reviewDispositionSchema)
@@ -40,7 +41,7 @@ export class ReviewsController {
     return this.reviews.dispose(user, id, input);
   }
 
-  @Get('work-queue/under-review')
+  @Get(apiRoutes.reviews.queue.path)
   @SignedIn()
   queue(@CurrentUser() user: AuthUser): Promise<UnderReviewQueue> {
     return this.reviews.queue(user);

@@ -12,6 +12,7 @@ import {
   type RevisionChanges,
   type SaveRevisionInput,
   type SubmitRevisionInput,
+  apiRoutes,
 } from '@holdfast/shared';
 import { CurrentUser, type AuthUser } from '../auth/auth-user.js';
 import { Roles, SignedIn } from '../auth/policy.js';
@@ -25,7 +26,7 @@ import { WorkflowService } from './workflow.service.js';
 
 @ApiTags('revisions')
 @ApiBearerAuth()
-@Controller('revisions')
+@Controller()
 export class RevisionsController {
   constructor(
     private readonly revisions: RevisionsService,
@@ -34,14 +35,14 @@ export class RevisionsController {
     private readonly changesService: ChangesService,
   ) {}
 
-  @Get(':id')
+  @Get(apiRoutes.revisions.detail.path)
   @SignedIn()
   get(@CurrentUser() user: AuthUser, @Param('id', UuidParamPipe) id: string): Promise<Revision> {
     return this.revisions.get(user, id);
   }
 
   /** Inputs changed since the last submission the checker saw; same read rule as the revision. */
-  @Get(':id/changes')
+  @Get(apiRoutes.revisions.changes.path)
   @SignedIn()
   changes(
     @CurrentUser() user: AuthUser,
@@ -50,7 +51,7 @@ export class RevisionsController {
     return this.changesService.changes(user, id);
   }
 
-  @Put(':id')
+  @Put(apiRoutes.revisions.save.path)
   @Roles('engineer')
   @ApiBodySchema(saveRevisionSchema)
   save(
@@ -61,7 +62,7 @@ export class RevisionsController {
     return this.revisions.save(user, id, input);
   }
 
-  @Post(':id/submit')
+  @Post(apiRoutes.revisions.submit.path)
   @HttpCode(200)
   @Roles('engineer')
   @ApiBodySchema(submitRevisionSchema)
@@ -73,7 +74,7 @@ export class RevisionsController {
     return this.workflow.submit(user, id, input);
   }
 
-  @Post(':id/approve')
+  @Post(apiRoutes.revisions.approve.path)
   @HttpCode(200)
   @Roles('checker')
   @ApiBodySchema(approveRevisionSchema)
@@ -85,7 +86,7 @@ export class RevisionsController {
     return this.workflow.approve(user, id, input);
   }
 
-  @Post(':id/return')
+  @Post(apiRoutes.revisions.return.path)
   @HttpCode(200)
   @Roles('checker')
   @ApiBodySchema(returnRevisionSchema)
@@ -97,7 +98,7 @@ export class RevisionsController {
     return this.workflow.return(user, id, input);
   }
 
-  @Post(':id/drift')
+  @Post(apiRoutes.revisions.drift.path)
   @HttpCode(200)
   @SignedIn()
   drift(

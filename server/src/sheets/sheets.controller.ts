@@ -14,6 +14,7 @@ import {
   type SheetDetail,
   type SheetList,
   type SheetListQuery,
+  apiRoutes,
 } from '@holdfast/shared';
 import { CurrentUser, type AuthUser } from '../auth/auth-user.js';
 import { Roles, SignedIn } from '../auth/policy.js';
@@ -25,11 +26,11 @@ import { SheetsService } from './sheets.service.js';
 
 @ApiTags('sheets')
 @ApiBearerAuth()
-@Controller('sheets')
+@Controller()
 export class SheetsController {
   constructor(private readonly sheets: SheetsService) {}
 
-  @Get()
+  @Get(apiRoutes.sheets.list.path)
   @SignedIn()
   list(
     @Query(new ZodValidationPipe(sheetListQuerySchema, 'query')) query: SheetListQuery,
@@ -37,7 +38,7 @@ export class SheetsController {
     return this.sheets.list(query);
   }
 
-  @Post()
+  @Post(apiRoutes.sheets.create.path)
   @HttpCode(201)
   @Roles('engineer')
   @ApiBodySchema(createSheetSchema)
@@ -48,7 +49,7 @@ export class SheetsController {
     return this.sheets.create(user, input);
   }
 
-  @Get(':id')
+  @Get(apiRoutes.sheets.detail.path)
   @SignedIn()
   async detail(
     @CurrentUser() user: AuthUser,
@@ -57,7 +58,7 @@ export class SheetsController {
     return sheetDetailFor(user, await this.sheets.detail(id));
   }
 
-  @Post(':id/revisions')
+  @Post(apiRoutes.sheets.createRevision.path)
   @HttpCode(201)
   @Roles('engineer')
   @ApiBodySchema(newRevisionSchema)
@@ -69,7 +70,7 @@ export class SheetsController {
     return this.sheets.newRevision(user, id, input);
   }
 
-  @Get(':id/compare')
+  @Get(apiRoutes.sheets.compare.path)
   @SignedIn()
   compare(
     @CurrentUser() user: AuthUser,
@@ -79,7 +80,7 @@ export class SheetsController {
     return this.sheets.compare(user, id, query);
   }
 
-  @Get(':id/audit')
+  @Get(apiRoutes.sheets.audit.path)
   @SignedIn()
   audit(@CurrentUser() user: AuthUser, @Param('id', UuidParamPipe) id: string): Promise<AuditList> {
     return this.sheets.auditTrail(user, id);

@@ -7,6 +7,7 @@ import {
   type UpdateUserInput,
   type User,
   type UserList,
+  apiRoutes,
 } from '@holdfast/shared';
 import { ApiBodySchema } from '../common/openapi.js';
 import { UuidParamPipe } from '../common/pipes/uuid-param.pipe.js';
@@ -18,23 +19,23 @@ import { UsersService } from './users.service.js';
 @ApiTags('users')
 @ApiBearerAuth()
 @Roles('admin')
-@Controller('users')
+@Controller()
 export class UsersController {
   constructor(private readonly users: UsersService) {}
 
-  @Get()
+  @Get(apiRoutes.users.list.path)
   async list(): Promise<UserList> {
     return { items: await this.users.list() };
   }
 
-  @Post()
+  @Post(apiRoutes.users.create.path)
   @HttpCode(201)
   @ApiBodySchema(createUserSchema)
   create(@Body(new ZodValidationPipe(createUserSchema)) input: CreateUserInput): Promise<User> {
     return this.users.create(input);
   }
 
-  @Patch(':id')
+  @Patch(apiRoutes.users.update.path)
   @ApiBodySchema(updateUserSchema)
   update(
     @CurrentUser() actor: AuthUser,

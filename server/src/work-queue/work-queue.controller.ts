@@ -1,3 +1,4 @@
+import { apiRoutes } from '@holdfast/shared';
 import { Controller, Get } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { WorkQueue } from '@holdfast/shared';
@@ -7,11 +8,11 @@ import { WorkQueueService } from './work-queue.service.js';
 
 @ApiTags('work-queue')
 @ApiBearerAuth()
-@Controller('work-queue')
+@Controller()
 export class WorkQueueController {
   constructor(private readonly queue: WorkQueueService) {}
 
-  @Get()
+  @Get(apiRoutes.workQueue.mine.path)
   @SignedIn()
   get(@CurrentUser() user: AuthUser): Promise<WorkQueue> {
     return this.queue.forUser(user);

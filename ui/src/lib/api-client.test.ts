@@ -1,3 +1,4 @@
+import type { ApiPath } from '@holdfast/shared';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { userSchema } from '@holdfast/shared';
 import { makeSession, testUsers } from '../testing/fixtures';
@@ -5,6 +6,9 @@ import { jsonError, mockFetch } from '../testing/mock-fetch';
 import { api, ApiRequestError, apiUrl, restoreSession } from './api-client';
 import { fileNameFromDisposition } from './api-download';
 import { sessionStore } from './session';
+
+/** A path for a mocked endpoint (product code builds paths with apiPath). */
+const testPath = (p: string) => p as ApiPath<never>;
 
 beforeEach(() =>
   sessionStore.reset({ status: 'signed-in', user: testUsers.engineer }, 'old-token'),
@@ -14,7 +18,7 @@ afterEach(() => sessionStore.reset());
 describe('api client', () => {
   it('sends the access token and parses the answer with the schema', async () => {
     const mock = mockFetch({ 'GET /api/auth/me': { body: testUsers.engineer } });
-    const me = await api.get('/auth/me', { schema: userSchema });
+    const me = await api.get(testPath('/auth/me'), { schema: userSchema });
     expect(me.displayName).toBe('Erin Vale');
     expect(mock.calls[0]?.headers.get('Authorization')).toBe('Bearer old-token');
   });
@@ -27,7 +31,7 @@ describe('api client', () => {
           : jsonError(401, 'unauthenticated', 'expired'),
       'POST /api/auth/refresh': { body: makeSession(testUsers.engineer, 'new-token') },
     });
-    await expect(api.get('/sheets')).resolves.toEqual({ items: [] });
+    await expect(api.get(testPath('/sheets'))).resolves.toEqual({ items: [] });
     expect(mock.callsTo('POST /api/auth/refresh')).toHaveLength(1);
     expect(mock.callsTo('GET /api/sheets')).toHaveLength(2);
     expect(sessionStore.getAccessToken()).toBe('new-token');
@@ -48,7 +52,10 @@ describe('api client', () => {
         return { body: makeSession(testUsers.engineer, 'new-token') };
       },
     });
-    await expect(Promise.all([api.get('/a'), api.get('/b')])).resolves.toEqual(['a', 'b']);
+    await expect(Promise.all([api.get(testPath('/a')), api.get(testPath('/b'))])).resolves.toEqual([
+      'a',
+      'b',
+    ]);
     expect(mock.callsTo('POST /api/auth/refresh')).toHaveLength(1);
   });
 
@@ -57,7 +64,7 @@ describe('api client', () => {
       'GET /api/sheets': jsonError(401, 'unauthenticated', 'expired'),
       'POST /api/auth/refresh': jsonError(401, 'unauthenticated', 'no refresh token'),
     });
-    const error = await api.get('/sheets').catch((e: unknown) => e);
+    const error = await api.get(testPath('/sheets')).catch((e: unknown) => e);
     expect(error).toBeInstanceOf(ApiRequestError);
     expect((error as ApiRequestError).status).toBe(401);
     expect(sessionStore.getState()).toMatchObject({ status: 'signed-out', endReason: 'expired' });
@@ -72,7 +79,7 @@ describe('api client', () => {
       ]),
     });
     const error = (await api
-      .post('/users', { body: {} })
+      .post(testPath('/users'), { body: {} })
       .catch((e: unknown) => e)) as ApiRequestError;
     expect(error.code).toBe('validation_failed');
     expect(error.message).toBe('The request has errors');
@@ -84,12 +91,12 @@ describe('api client', () => {
 
   it('gives a plain message for bodies that are not the envelope, and for network failure', async () => {
     mockFetch({ 'GET /api/x': { status: 502, body: '<html>Bad gateway</html>' } });
-    const e502 = (await api.get('/x').catch((e: unknown) => e)) as ApiRequestError;
+    const e502 = (await api.get(testPath('/x')).catch((e: unknown) => e)) as ApiRequestError;
     expect(e502).toMatchObject({ status: 502, code: 'internal_error' });
 
     const { fn } = mockFetch({});
     fn.mockRejectedValueOnce(new TypeError('Failed to fetch'));
-    const eNet = (await api.get('/x').catch((e: unknown) => e)) as ApiRequestError;
+    const eNet = (await api.get(testPath('/x')).catch((e: unknown) => e)) as ApiRequestError;
     expect(eNet).toMatchObject({ status: 0, code: 'network_error' });
     expect(eNet.message).toMatch(/cannot reach/i);
   });
@@ -107,9 +114,9 @@ describe('api client', () => {
   });
 
   it('builds query strings without empty values', () => {
-    expect(apiUrl('/sheets', { q: 'hoist', page: 2, state: ['draft', 'approved'], site: '' })).toBe(
-      '/api/sheets?q=hoist&page=2&state=draft&state=approved',
-    );
+    expect(
+      apiUrl(testPath('/sheets'), { q: 'hoist', page: 2, state: ['draft', 'approved'], site: '' }),
+    ).toBe('/api/sheets?q=hoist&page=2&state=draft&state=approved');
   });
 
   it('reads file names from Content-Disposition', () => {

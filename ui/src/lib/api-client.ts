@@ -1,4 +1,4 @@
-import type { Session } from '@holdfast/shared';
+import type { ApiPath, HttpMethod, Session } from '@holdfast/shared';
 import { ApiRequestError } from './api-error';
 import {
   apiUrl,
@@ -28,7 +28,7 @@ export function startSession(session: Session): void {
 }
 
 export interface RequestOptions<T> {
-  method?: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
+  method?: HttpMethod;
   /** JSON-serialisable body, or FormData (sent as multipart). */
   body?: unknown;
   query?: QueryParams;
@@ -41,7 +41,7 @@ export interface RequestOptions<T> {
 
 /** One JSON (or multipart) API call; throws ApiRequestError for any failure. */
 export async function apiRequest<T = unknown>(
-  path: string,
+  path: ApiPath,
   options: RequestOptions<T> = {},
 ): Promise<T> {
   const { method = 'GET', body, query, schema, signal, headers = {}, auth = true } = options;
@@ -66,9 +66,13 @@ export async function apiRequest<T = unknown>(
   return schema ? schema.parse(data) : (data as T);
 }
 
-type Verb = <T = unknown>(path: string, options?: Omit<RequestOptions<T>, 'method'>) => Promise<T>;
+/** A call of one HTTP method: only a path built by `apiPath` from a route of that method fits. */
+type Verb<M extends HttpMethod> = <T = unknown>(
+  path: ApiPath<M>,
+  options?: Omit<RequestOptions<T>, 'method'>,
+) => Promise<T>;
 const verb =
-  (method: NonNullable<RequestOptions<unknown>['method']>): Verb =>
+  <M extends HttpMethod>(method: M): Verb<M> =>
   (path, options) =>
     apiRequest(path, { ...options, method });
 

@@ -1,4 +1,4 @@
-import { sessionSchema } from '@holdfast/shared';
+import { apiPath, apiRoutes, sessionSchema, type ApiPath } from '@holdfast/shared';
 import { env } from '../config/env';
 import { ApiRequestError } from './api-error';
 import { sessionStore } from './session';
@@ -11,7 +11,7 @@ export interface Parser<T> {
 export type QueryValue = string | number | boolean | null | undefined;
 export type QueryParams = Record<string, QueryValue | QueryValue[]>;
 
-export function apiUrl(path: string, query?: QueryParams): string {
+export function apiUrl(path: ApiPath, query?: QueryParams): string {
   const url = `${env.apiBase}${path.startsWith('/') ? path : `/${path}`}`;
   if (!query) return url;
   const params = new URLSearchParams();
@@ -33,7 +33,7 @@ let refreshing: Promise<boolean> | null = null;
 export function refreshSession(): Promise<boolean> {
   refreshing ??= (async () => {
     try {
-      const res = await fetch(apiUrl('/auth/refresh'), {
+      const res = await fetch(apiUrl(apiPath(apiRoutes.auth.refresh)), {
         method: 'POST',
         credentials: 'same-origin',
         headers: { Accept: 'application/json' },

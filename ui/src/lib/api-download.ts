@@ -1,3 +1,4 @@
+import type { ApiPath } from '@holdfast/shared';
 import { ApiRequestError } from './api-error';
 import { apiUrl, readBody, withAuthRetry, type QueryParams } from './api-core';
 
@@ -24,7 +25,7 @@ export function fileNameFromDisposition(header: string | null): string | null {
 
 /** Fetch a file (PDF, attachment) with the access token, as a Blob; a `body` makes it a POST. */
 export async function apiDownload(
-  path: string,
+  path: ApiPath<'GET'> | ApiPath<'POST'>,
   options: { query?: QueryParams; signal?: AbortSignal; body?: unknown } = {},
 ): Promise<Download> {
   const post = options.body !== undefined;

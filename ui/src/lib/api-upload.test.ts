@@ -1,9 +1,13 @@
+import type { ApiPath } from '@holdfast/shared';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { makeSession, testUsers } from '../testing/fixtures';
 import { mockFetch } from '../testing/mock-fetch';
 import { apiUpload, type UploadProgress } from './api-upload';
 import { ApiRequestError } from './api-error';
 import { sessionStore } from './session';
+
+/** A path for a mocked endpoint (product code builds paths with apiPath). */
+const testPath = (p: string) => p as ApiPath<never>;
 
 interface Sent {
   method: string;
@@ -62,7 +66,7 @@ describe('apiUpload', () => {
     const progress: UploadProgress[] = [];
     const form = new FormData();
     form.append('file', new Blob(['x']), 'x.txt');
-    const result = await apiUpload('/revisions/r1/attachments', form, {
+    const result = await apiUpload(testPath('/revisions/r1/attachments'), form, {
       onProgress: (p) => progress.push(p),
     });
     expect(result).toEqual({ id: 'a1' });
@@ -80,7 +84,7 @@ describe('apiUpload', () => {
       { status: 201, body: { id: 'a2' } },
     ]);
     mockFetch({ 'POST /api/auth/refresh': { body: makeSession(testUsers.engineer, 'new-token') } });
-    await expect(apiUpload('/x', new FormData())).resolves.toEqual({ id: 'a2' });
+    await expect(apiUpload(testPath('/x'), new FormData())).resolves.toEqual({ id: 'a2' });
     expect(sent.map((s) => s.headers.Authorization)).toEqual([
       'Bearer old-token',
       'Bearer new-token',
@@ -94,7 +98,7 @@ describe('apiUpload', () => {
         body: { error: { code: 'payload_too_large', message: 'Files up to 20 MB.' } },
       },
     ]);
-    const error = (await apiUpload('/x', new FormData()).catch(
+    const error = (await apiUpload(testPath('/x'), new FormData()).catch(
       (e: unknown) => e,
     )) as ApiRequestError;
     expect(error).toBeInstanceOf(ApiRequestError);

@@ -1,3 +1,4 @@
+import type { ApiPath } from '@holdfast/shared';
 import { ApiRequestError } from './api-error';
 import { apiUrl, withAuthRetry, type Parser } from './api-core';
 
@@ -62,7 +63,7 @@ function send(
 
 /** Multipart upload with progress, the same token handling and error envelope as apiRequest. */
 export async function apiUpload<T = unknown>(
-  path: string,
+  path: ApiPath<'POST'>,
   form: FormData,
   options: UploadOptions<T> = {},
 ): Promise<T> {

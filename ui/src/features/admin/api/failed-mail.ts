@@ -1,10 +1,11 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { queryOptions, useMutation, useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
 import { failedMailListSchema, type FailedMailList } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
 import { failedMailKeys } from '../../../lib/query-keys';
 
 export function getFailedMail(signal?: AbortSignal): Promise<FailedMailList> {
-  return api.get('/admin/mail/failed', { schema: failedMailListSchema, signal });
+  return api.get(apiPath(apiRoutes.admin.failedMail), { schema: failedMailListSchema, signal });
 }
 
 export const getFailedMailQueryOptions = () =>
@@ -15,7 +16,7 @@ export function useFailedMail() {
 }
 
 export function resendMail(id: string): Promise<unknown> {
-  return api.post(`/admin/mail/${encodeURIComponent(id)}/resend`);
+  return api.post(apiPath(apiRoutes.admin.resendMail, { id }));
 }
 
 /** Queue a failed mail again; it leaves the list at once. */

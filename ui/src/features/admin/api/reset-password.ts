@@ -1,9 +1,10 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { useMutation } from '@tanstack/react-query';
 import { passwordResetIssuedSchema, type PasswordResetIssued } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
 
 export function resetPassword(id: string): Promise<PasswordResetIssued> {
-  return api.post(`/users/${encodeURIComponent(id)}/password-reset`, {
+  return api.post(apiPath(apiRoutes.users.sendPasswordReset, { id }), {
     schema: passwordResetIssuedSchema,
   });
 }

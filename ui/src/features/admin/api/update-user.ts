@@ -1,3 +1,4 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { userSchema, type UpdateUserInput, type User, type UserList } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
@@ -9,7 +10,7 @@ export interface UpdateUserVariables {
 }
 
 export function updateUser({ id, changes }: UpdateUserVariables): Promise<User> {
-  return api.patch(`/users/${encodeURIComponent(id)}`, { body: changes, schema: userSchema });
+  return api.patch(apiPath(apiRoutes.users.update, { id }), { body: changes, schema: userSchema });
 }
 
 /** Change a user's role or active flag; the list shows the server's answer at once. */

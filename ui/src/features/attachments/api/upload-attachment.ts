@@ -1,3 +1,4 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { attachmentSchema, type Attachment } from '@holdfast/shared';
 import { apiUpload, type UploadProgress } from '../../../lib/api-client';
@@ -10,7 +11,7 @@ export function uploadAttachment(
 ): Promise<Attachment> {
   const form = new FormData();
   form.append('file', file, file.name);
-  return apiUpload(`/revisions/${revisionId}/attachments`, form, {
+  return apiUpload(apiPath(apiRoutes.attachments.upload, { id: revisionId }), form, {
     schema: attachmentSchema,
     onProgress,
   });

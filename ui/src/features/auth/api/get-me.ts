@@ -1,3 +1,4 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { userSchema, type User } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
@@ -5,7 +6,7 @@ import { sessionStore } from '../../../lib/session';
 import { authKeys } from '../../../lib/query-keys';
 
 export async function getMe(signal?: AbortSignal): Promise<User> {
-  const user = await api.get('/auth/me', { schema: userSchema, signal });
+  const user = await api.get(apiPath(apiRoutes.auth.me), { schema: userSchema, signal });
   sessionStore.updateUser(user);
   return user;
 }

@@ -1,3 +1,4 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { sessionSchema, type Session, type SignInInput } from '@holdfast/shared';
 import { api, startSession } from '../../../lib/api-client';
@@ -5,7 +6,11 @@ import { getMeQueryOptions } from './get-me';
 
 export function signIn(input: SignInInput): Promise<Session> {
   // No token and no refresh-on-401 here: a 401 means wrong credentials, not an expired session.
-  return api.post('/auth/sign-in', { body: input, schema: sessionSchema, auth: false });
+  return api.post(apiPath(apiRoutes.auth.signIn), {
+    body: input,
+    schema: sessionSchema,
+    auth: false,
+  });
 }
 
 export function useSignIn({ onSuccess }: { onSuccess?: (session: Session) => void } = {}) {

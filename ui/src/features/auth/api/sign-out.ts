@@ -1,3 +1,4 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { sessionStore } from '../../../lib/session';
@@ -5,7 +6,7 @@ import { sessionStore } from '../../../lib/session';
 /** Revoke the refresh token on the server; the local session ends whatever the answer. */
 export async function signOut(): Promise<void> {
   try {
-    await api.post('/auth/sign-out', { auth: false });
+    await api.post(apiPath(apiRoutes.auth.signOut), { auth: false });
   } finally {
     sessionStore.end('signed-out');
   }

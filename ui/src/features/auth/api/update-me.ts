@@ -1,3 +1,4 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { userSchema, type User } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
@@ -10,7 +11,7 @@ export interface UpdateMeInput {
 }
 
 export function updateMe(input: UpdateMeInput): Promise<User> {
-  return api.patch('/auth/me', { body: input, schema: userSchema });
+  return api.patch(apiPath(apiRoutes.auth.updateMe), { body: input, schema: userSchema });
 }
 
 /** Change the signed-in user's own preferences (unit system, number format). */

@@ -1,3 +1,4 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { compareSchema, type Compare } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
@@ -11,7 +12,7 @@ export function getComparison(
   to: string,
   signal?: AbortSignal,
 ): Promise<Compare> {
-  return api.get(`/sheets/${sheetId}/compare`, {
+  return api.get(apiPath(apiRoutes.sheets.compare, { id: sheetId }), {
     query: { from, to },
     schema: compareSchema,
     signal,

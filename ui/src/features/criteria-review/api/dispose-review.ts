@@ -1,3 +1,4 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import {
   revisionCriteriaReviewSchema,
@@ -11,7 +12,7 @@ export function disposeReview(
   revisionId: string,
   input: ReviewDispositionInput,
 ): Promise<RevisionCriteriaReview> {
-  return api.post(`/revisions/${revisionId}/criteria-review/disposition`, {
+  return api.post(apiPath(apiRoutes.reviews.dispose, { id: revisionId }), {
     body: input,
     schema: revisionCriteriaReviewSchema,
   });

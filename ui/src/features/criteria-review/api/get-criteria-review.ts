@@ -1,3 +1,4 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { revisionCriteriaReviewSchema, type RevisionCriteriaReview } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
@@ -7,7 +8,7 @@ export function getCriteriaReview(
   revisionId: string,
   signal?: AbortSignal,
 ): Promise<RevisionCriteriaReview> {
-  return api.get(`/revisions/${revisionId}/criteria-review`, {
+  return api.get(apiPath(apiRoutes.reviews.ofRevision, { id: revisionId }), {
     schema: revisionCriteriaReviewSchema,
     signal,
   });

@@ -1,3 +1,4 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import {
   criteriaSetDetailSchema,
@@ -12,7 +13,7 @@ export function confirmCriterion(
   version: number,
   input: ConfirmCriterionInput,
 ): Promise<CriteriaSetDetail> {
-  return api.post(`/criteria-sets/${encodeURIComponent(setId)}/versions/${version}/confirmations`, {
+  return api.post(apiPath(apiRoutes.criteria.confirm, { id: setId, version }), {
     body: input,
     schema: criteriaSetDetailSchema,
   });

@@ -1,3 +1,4 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import {
   criteriaSetDetailSchema,
@@ -8,7 +9,10 @@ import { api } from '../../../lib/api-client';
 import { criteriaKeys } from '../../../lib/query-keys';
 
 export function createCriteriaSet(input: CreateCriteriaSetInput): Promise<CriteriaSetDetail> {
-  return api.post('/criteria-sets', { body: input, schema: criteriaSetDetailSchema });
+  return api.post(apiPath(apiRoutes.criteria.create), {
+    body: input,
+    schema: criteriaSetDetailSchema,
+  });
 }
 
 export function useCreateCriteriaSet() {

@@ -1,3 +1,4 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { impactReportSchema, type ImpactReport } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
@@ -8,7 +9,7 @@ export function getCriteriaImpact(
   version?: number,
   signal?: AbortSignal,
 ): Promise<ImpactReport> {
-  return api.get(`/criteria-sets/${encodeURIComponent(id)}/impact`, {
+  return api.get(apiPath(apiRoutes.criteria.impact, { id }), {
     query: { version },
     schema: impactReportSchema,
     signal,

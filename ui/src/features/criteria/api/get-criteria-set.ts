@@ -1,3 +1,4 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { criteriaSetDetailSchema, type CriteriaSetDetail } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
@@ -8,7 +9,7 @@ export function getCriteriaSet(
   version?: number,
   signal?: AbortSignal,
 ): Promise<CriteriaSetDetail> {
-  return api.get(`/criteria-sets/${encodeURIComponent(id)}`, {
+  return api.get(apiPath(apiRoutes.criteria.detail, { id }), {
     query: { version },
     schema: criteriaSetDetailSchema,
     signal,

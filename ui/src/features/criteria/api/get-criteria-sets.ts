@@ -1,10 +1,11 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { criteriaSetListSchema, type CriteriaSetList } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
 import { criteriaKeys } from '../../../lib/query-keys';
 
 export function getCriteriaSets(signal?: AbortSignal): Promise<CriteriaSetList> {
-  return api.get('/criteria-sets', { schema: criteriaSetListSchema, signal });
+  return api.get(apiPath(apiRoutes.criteria.list), { schema: criteriaSetListSchema, signal });
 }
 
 export function criteriaSetsQueryOptions() {

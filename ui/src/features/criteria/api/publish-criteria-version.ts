@@ -1,3 +1,4 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import {
   criteriaSetDetailSchema,
@@ -11,7 +12,7 @@ export function publishCriteriaVersion(
   id: string,
   input: PublishCriteriaVersionInput,
 ): Promise<CriteriaSetDetail> {
-  return api.post(`/criteria-sets/${encodeURIComponent(id)}/versions`, {
+  return api.post(apiPath(apiRoutes.criteria.publish, { id }), {
     body: input,
     schema: criteriaSetDetailSchema,
   });

@@ -1,10 +1,11 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { registerSchema, type Register } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
 import { registerKeys } from '../../../lib/query-keys';
 
 export function getRegister(signal?: AbortSignal): Promise<Register> {
-  return api.get('/register', { schema: registerSchema, signal });
+  return api.get(apiPath(apiRoutes.register.tree), { schema: registerSchema, signal });
 }
 
 export function registerQueryOptions() {

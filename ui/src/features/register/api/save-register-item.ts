@@ -1,4 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
 import { registerKeys } from '../../../lib/query-keys';
 
@@ -12,11 +13,17 @@ export interface SaveRegisterItem {
   body: Record<string, string>;
 }
 
-/** POST /api/register/:kind to add, PATCH /api/register/:kind/:id to edit. */
+const routes = {
+  sites: { add: apiRoutes.register.createSite, edit: apiRoutes.register.updateSite },
+  machines: { add: apiRoutes.register.createMachine, edit: apiRoutes.register.updateMachine },
+  positions: { add: apiRoutes.register.createPosition, edit: apiRoutes.register.updatePosition },
+} as const;
+
+/** Adds a register record, or edits the one with `id`. */
 export function saveRegisterItem({ kind, id, body }: SaveRegisterItem): Promise<unknown> {
   return id
-    ? api.patch(`/register/${kind}/${id}`, { body })
-    : api.post(`/register/${kind}`, { body });
+    ? api.patch(apiPath(routes[kind].edit, { id }), { body })
+    : api.post(apiPath(routes[kind].add), { body });
 }
 
 export function useSaveRegisterItem() {

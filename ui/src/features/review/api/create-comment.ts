@@ -1,10 +1,14 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { commentSchema, type Comment, type CreateCommentInput } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
 import { commentsQueryOptions } from './get-comments';
 
 export function createComment(revisionId: string, input: CreateCommentInput): Promise<Comment> {
-  return api.post(`/revisions/${revisionId}/comments`, { body: input, schema: commentSchema });
+  return api.post(apiPath(apiRoutes.comments.create, { id: revisionId }), {
+    body: input,
+    schema: commentSchema,
+  });
 }
 
 export function useCreateComment(revisionId: string) {

@@ -1,10 +1,14 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { revisionSchema, type Revision, type ApproveRevisionInput } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
 import { revisionKeys, staleAfterStateChange } from '../../../lib/query-keys';
 
 export function approveRevision(id: string, input: ApproveRevisionInput): Promise<Revision> {
-  return api.post(`/revisions/${id}/approve`, { body: input, schema: revisionSchema });
+  return api.post(apiPath(apiRoutes.revisions.approve, { id }), {
+    body: input,
+    schema: revisionSchema,
+  });
 }
 
 /** Approves a revision (a checker who did not author it); the previous approval is superseded. */

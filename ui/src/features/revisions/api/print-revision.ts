@@ -1,4 +1,5 @@
 import { useMutation } from '@tanstack/react-query';
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { apiDownload, saveBlob } from '../../../lib/api-client';
 
 export type PrintKind = 'pdf' | 'field-card';
@@ -13,7 +14,8 @@ export async function downloadPrint(
   kind: PrintKind,
   paper: 'A4' | 'LETTER' = 'A4',
 ): Promise<string> {
-  const file = await apiDownload(`/revisions/${revisionId}/${kind}`, { query: { paper } });
+  const route = kind === 'pdf' ? apiRoutes.revisions.pdf : apiRoutes.revisions.fieldCard;
+  const file = await apiDownload(apiPath(route, { id: revisionId }), { query: { paper } });
   const name = file.fileName ?? `revision-${revisionId}-${kind}.pdf`;
   saveBlob(file.blob, name);
   return name;

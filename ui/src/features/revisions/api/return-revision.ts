@@ -1,10 +1,14 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { revisionSchema, type Revision, type ReturnRevisionInput } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
 import { revisionKeys, staleAfterStateChange } from '../../../lib/query-keys';
 
 export function returnRevision(id: string, input: ReturnRevisionInput): Promise<Revision> {
-  return api.post(`/revisions/${id}/return`, { body: input, schema: revisionSchema });
+  return api.post(apiPath(apiRoutes.revisions.return, { id }), {
+    body: input,
+    schema: revisionSchema,
+  });
 }
 
 /** Returns a revision to its author with a comment saying what must change. */

@@ -1,3 +1,4 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { revisionSchema, type Revision, type SaveRevisionInput } from '@holdfast/shared';
 import { api, apiUrl } from '../../../lib/api-client';
@@ -5,7 +6,10 @@ import { sessionStore } from '../../../lib/session';
 import { revisionKeys, workQueueKeys } from '../../../lib/query-keys';
 
 export function saveRevision(id: string, input: SaveRevisionInput): Promise<Revision> {
-  return api.put(`/revisions/${id}`, { body: input, schema: revisionSchema });
+  return api.put(apiPath(apiRoutes.revisions.save, { id }), {
+    body: input,
+    schema: revisionSchema,
+  });
 }
 
 /** Saves a draft with its row version; a 409 means someone else saved in between. */
@@ -29,7 +33,7 @@ export function saveRevisionOnLeave(id: string, input: SaveRevisionInput): void 
   const token = sessionStore.getAccessToken();
   if (!token) return;
   try {
-    void fetch(apiUrl(`/revisions/${id}`), {
+    void fetch(apiUrl(apiPath(apiRoutes.revisions.save, { id })), {
       method: 'PUT',
       keepalive: true,
       credentials: 'same-origin',

@@ -1,10 +1,14 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { revisionSchema, type Revision, type SubmitRevisionInput } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
 import { revisionKeys, staleAfterStateChange } from '../../../lib/query-keys';
 
 export function submitRevision(id: string, input: SubmitRevisionInput): Promise<Revision> {
-  return api.post(`/revisions/${id}/submit`, { body: input, schema: revisionSchema });
+  return api.post(apiPath(apiRoutes.revisions.submit, { id }), {
+    body: input,
+    schema: revisionSchema,
+  });
 }
 
 /** Sends a revision to check; failing checks need a justification. */

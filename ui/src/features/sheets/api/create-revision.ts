@@ -1,10 +1,14 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { revisionSchema, type NewRevisionInput, type Revision } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
 import { revisionKeys, sheetKeys, workQueueKeys } from '../../../lib/query-keys';
 
 export function createRevision(sheetId: string, input: NewRevisionInput): Promise<Revision> {
-  return api.post(`/sheets/${sheetId}/revisions`, { body: input, schema: revisionSchema });
+  return api.post(apiPath(apiRoutes.sheets.createRevision, { id: sheetId }), {
+    body: input,
+    schema: revisionSchema,
+  });
 }
 
 /** Starts the next revision (B, C …) of a sheet from a copy of its latest inputs. */

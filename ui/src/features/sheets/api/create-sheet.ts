@@ -1,10 +1,11 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { sheetDetailSchema, type CreateSheetInput, type SheetDetail } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
 import { registerKeys, sheetKeys, workQueueKeys } from '../../../lib/query-keys';
 
 export function createSheet(input: CreateSheetInput): Promise<SheetDetail> {
-  return api.post('/sheets', { body: input, schema: sheetDetailSchema });
+  return api.post(apiPath(apiRoutes.sheets.create), { body: input, schema: sheetDetailSchema });
 }
 
 export function useCreateSheet() {

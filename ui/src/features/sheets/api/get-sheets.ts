@@ -1,10 +1,15 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { sheetListSchema, type SheetList } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
 import { sheetKeys, type SheetListParams } from '../../../lib/query-keys';
 
 export function getSheets(params: SheetListParams, signal?: AbortSignal): Promise<SheetList> {
-  return api.get('/sheets', { query: { ...params }, schema: sheetListSchema, signal });
+  return api.get(apiPath(apiRoutes.sheets.list), {
+    query: { ...params },
+    schema: sheetListSchema,
+    signal,
+  });
 }
 
 export function sheetsQueryOptions(params: SheetListParams) {

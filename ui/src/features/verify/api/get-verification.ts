@@ -1,3 +1,4 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { verifyResultSchema, type VerifyResult } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
@@ -5,7 +6,7 @@ import { verifyKeys } from '../../../lib/query-keys';
 
 export function getVerification(code: string, signal?: AbortSignal): Promise<VerifyResult> {
   // Public: anyone holding a printout may check it, signed in or not.
-  return api.get(`/verify/${encodeURIComponent(code)}`, {
+  return api.get(apiPath(apiRoutes.verify.byCode, { code }), {
     schema: verifyResultSchema,
     signal,
     auth: false,
