@@ -1,3 +1,4 @@
+import { readdirSync } from 'node:fs';
 import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
 import importX from 'eslint-plugin-import-x';
@@ -27,6 +28,42 @@ const packageBans = {
   db: ['@holdfast/server', '@holdfast/ui'],
   ui: ['@holdfast/server', '@holdfast/db'],
 };
+
+// UI features are independent slices: a feature imports lib/, components/ and config/, never
+// another feature, except where one names the other's concept (a sheet is opened for a register
+// position). Screens in app/ compose features. (Matched on the import text: import-x's path
+// zones do not resolve the UI's extensionless imports.)
+const featureEdges = { sheets: ['register'] };
+function uiFeatureBoundaries() {
+  const features = readdirSync(new URL('./ui/src/features', import.meta.url), {
+    withFileTypes: true,
+  })
+    .filter((d) => d.isDirectory())
+    .map((d) => d.name);
+  return features.map((feature) => {
+    const others = features.filter((f) => f !== feature && !featureEdges[feature]?.includes(f));
+    return {
+      files: [`ui/src/features/${feature}/**/*.{ts,tsx}`],
+      rules: {
+        'no-restricted-imports': [
+          'error',
+          {
+            paths: packageBans.ui.map((name) => ({
+              name,
+              message: `ui must not depend on ${name}.`,
+            })),
+            patterns: [
+              {
+                regex: `^(\\.\\./)+(features/)?(${others.join('|')})(/|$)`,
+                message: `ui feature "${feature}" must not import another feature: move what both use to ui/src/components or ui/src/lib.`,
+              },
+            ],
+          },
+        ],
+      },
+    };
+  });
+}
 
 export default tseslint.config(
   { ignores: ['**/dist/**', '**/node_modules/**', '.data/**', 'test-output/**', 'ui/dist/**'] },
@@ -70,4 +107,5 @@ export default tseslint.config(
       ],
     },
   })),
+  ...uiFeatureBoundaries(),
 );

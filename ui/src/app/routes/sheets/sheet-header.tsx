@@ -1,7 +1,7 @@
 import { Anchor, Breadcrumbs, Group, Paper, Stack, Text, Title } from '@mantine/core';
 import { Link } from 'react-router-dom';
 import type { RevisionSummary, SheetDetail } from '@holdfast/shared';
-import { sheetTypeTitle } from '../../../features/calc/utils/sheet-types';
+import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
 import { StateBadge } from '../../../features/sheets/components/state-badge';
 import type { ReactNode } from 'react';
 

@@ -25,7 +25,7 @@ import { Page } from '../../../components/layouts/page';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import type { RouteHandle } from '../../../lib/route-handle';
 import { useCurrentUser } from '../../../lib/session';
-import { sheetTypeTitle } from '../../../features/calc/utils/sheet-types';
+import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
 import { useRegister } from '../../../features/register/api/get-register';
 import { sheetsQueryOptions, useSheets } from '../../../features/sheets/api/get-sheets';
 import type { SheetListParams } from '../../../lib/query-keys';

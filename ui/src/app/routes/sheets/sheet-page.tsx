@@ -6,7 +6,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import type { RevisionSummary, SheetDetail, User } from '@holdfast/shared';
 import { ErrorPanel } from '../../../components/errors/error-panel';
-import { warmUpSheetType } from '../../../features/calc/utils/sheet-types';
+import { warmUpSheetType } from '../../../components/calc/utils/sheet-types';
 import type { RouteHandle } from '../../../lib/route-handle';
 import { useCurrentUser } from '../../../lib/session';
 import { revisionQueryOptions } from '../../../features/revisions/api/get-revision';

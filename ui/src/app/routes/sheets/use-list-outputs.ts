@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { notifications } from '@mantine/notifications';
 import { errorMessage, saveBlob } from '../../../lib/api-client';
 import { csvBlob } from '../../../lib/csv';
-import { sheetTypeTitle } from '../../../features/calc/utils/sheet-types';
+import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
 import { getSheets } from '../../../features/sheets/api/get-sheets';
 import type { SheetListParams } from '../../../lib/query-keys';
 import { usePrintSafetyFile } from '../../../features/sheets/api/print-safety-file';

@@ -3,9 +3,9 @@ import { IconArrowRight } from '@tabler/icons-react';
 import type { Compare } from '@holdfast/shared';
 import { formatNumber } from '@holdfast/calc';
 import { useCurrentUser } from '../../../lib/session';
-import { formatChange, formatSI } from '../../calc/utils/format-si';
-import type { UnitSystem } from '../../calc/utils/units';
-import { showStoredValue as show } from '../utils/stored-value';
+import { formatChange, formatSI } from '../../../components/calc/utils/format-si';
+import type { UnitSystem } from '../../../components/calc/utils/units';
+import { showStoredValue as show } from '../../../components/calc/utils/stored-value';
 
 type MovedResult = Compare['results'][number];
 

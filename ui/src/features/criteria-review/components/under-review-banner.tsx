@@ -3,7 +3,7 @@ import { Alert, Button, Group, List, Stack, Text } from '@mantine/core';
 import { IconAlertTriangle, IconNotes } from '@tabler/icons-react';
 import type { CriteriaReview } from '@holdfast/shared';
 import { formatNumber } from '@holdfast/calc';
-import { ActionDialog } from '../../review/components/action-dialog';
+import { ActionDialog } from '../../../components/action-dialog';
 import { useCriteriaReview } from '../api/get-criteria-review';
 import { useDisposeReview } from '../api/dispose-review';
 

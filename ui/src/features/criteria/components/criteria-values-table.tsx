@@ -1,7 +1,7 @@
 import { Badge, Button, Select, Stack, Table, Text, TextInput } from '@mantine/core';
 import type { CriterionConfirmation, CriterionValueInput } from '@holdfast/shared';
 import { criterionSpec } from '@holdfast/calc';
-import { presentSI } from '../../calc/utils/units';
+import { presentSI } from '../../../components/calc/utils/units';
 
 /**
  * A stored criterion (SI) in the trade's units, e.g. 2 100 000 Pa·m/s → 2.100 MPa·m/s. Editing

@@ -3,7 +3,7 @@ import { IconAlertTriangle, IconCircleCheck } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import { useCurrentUser } from '../../../lib/session';
-import { formatSI } from '../../calc/utils/format-si';
+import { formatSI } from '../../../components/calc/utils/format-si';
 import { useCriteriaImpact } from '../api/get-criteria-impact';
 
 /** Approved sheets that no longer pass under a criteria version. */

@@ -1,7 +1,7 @@
 import { Alert, Anchor, List } from '@mantine/core';
 import { IconAlertTriangle } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
-import { sheetTypeTitle } from '../../calc/utils/sheet-types';
+import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
 import { useRegister } from '../api/get-register';
 
 /**

@@ -1,7 +1,7 @@
 import { Anchor, Button, Stack, Table, Text } from '@mantine/core';
 import { Link } from 'react-router-dom';
 import type { Position } from '@holdfast/shared';
-import { sheetTypeTitle } from '../../calc/utils/sheet-types';
+import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
 
 export interface PositionRowProps {
   position: Position;

@@ -1,5 +1,5 @@
 import { Text } from '@mantine/core';
-import { ActionDialog } from './action-dialog';
+import { ActionDialog } from '../../../components/action-dialog';
 import { AuthorNote } from './author-note';
 
 export interface ApproveDialogProps {

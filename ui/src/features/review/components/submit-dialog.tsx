@@ -1,6 +1,6 @@
 import { List, Text } from '@mantine/core';
 import type { CheckResult } from '@holdfast/calc';
-import { ActionDialog } from './action-dialog';
+import { ActionDialog } from '../../../components/action-dialog';
 
 export interface SubmitDialogProps {
   opened: boolean;

@@ -1,7 +1,7 @@
 import { Paper, Skeleton, Table, Text, Title } from '@mantine/core';
 import { IconArrowRight } from '@tabler/icons-react';
 import { ErrorPanel } from '../../../components/errors/error-panel';
-import { showStoredValue } from '../../compare/utils/stored-value';
+import { showStoredValue } from '../../../components/calc/utils/stored-value';
 import { useRevisionChanges } from '../api/get-revision-changes';
 
 const day = (iso: string) =>

@@ -1,7 +1,7 @@
 import { memo } from 'react';
 import { Group, Paper, Text, UnstyledButton } from '@mantine/core';
 import type { SheetEvaluation } from '@holdfast/calc';
-import { Verdict } from '../../calc/components/verdict';
+import { Verdict } from '../../../components/calc/components/verdict';
 
 /**
  * The verdict and the failing checks in one line, kept at the top of the screen on narrow

@@ -1,5 +1,5 @@
 import { Button, Group, List, Modal, Stack, Text, UnstyledButton } from '@mantine/core';
-import { focusField } from '../../calc/components/check-drivers-button';
+import { focusField } from '../../../components/calc/components/check-drivers-button';
 
 /**
  * Send for check, refused: these values came with the sheet and nobody has entered or confirmed

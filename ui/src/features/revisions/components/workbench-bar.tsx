@@ -1,6 +1,6 @@
 import { memo, type ReactNode } from 'react';
 import { Group, Paper, SegmentedControl, Text, TextInput } from '@mantine/core';
-import type { UnitSystem } from '../../calc/utils/units';
+import type { UnitSystem } from '../../../components/calc/utils/units';
 import type { SaveStatus } from '../hooks/use-draft-autosave';
 import { SaveStatusText } from './save-status';
 

@@ -2,7 +2,7 @@ import { useEffect, useState } from 'react';
 import { Button, Group, Modal, Select, Stack, TextInput } from '@mantine/core';
 import { createSheetSchema, sheetTypeIds, toFieldIssues, type SheetDetail } from '@holdfast/shared';
 import { errorMessage, isApiRequestError } from '../../../lib/api-client';
-import { sheetTypeTitle } from '../../calc/utils/sheet-types';
+import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
 import { OpenSheetWarning } from '../../register/components/open-sheet-warning';
 import { useCreateSheet } from '../api/create-sheet';
 import { SheetStartPicker, type StartKind } from './sheet-start-picker';

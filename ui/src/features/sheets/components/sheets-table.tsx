@@ -2,7 +2,7 @@ import { Anchor, Checkbox, Group, Table, Text, UnstyledButton } from '@mantine/c
 import { IconArrowDown, IconArrowUp, IconArrowsSort } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
 import type { SheetSummary } from '@holdfast/shared';
-import { sheetTypeTitle } from '../../calc/utils/sheet-types';
+import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
 import { StateBadge } from './state-badge';
 
 export type SortKey = 'documentNumber' | 'title' | 'updatedAt' | 'state';

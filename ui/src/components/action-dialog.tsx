@@ -1,6 +1,6 @@
 import { useEffect, useState, type ReactNode } from 'react';
 import { Alert, Button, Group, Modal, Stack, Textarea } from '@mantine/core';
-import { errorMessage, isApiRequestError } from '../../../lib/api-client';
+import { errorMessage, isApiRequestError } from '../lib/api-client';
 
 export interface ActionDialogProps {
   opened: boolean;
