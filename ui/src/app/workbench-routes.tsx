@@ -1,10 +1,9 @@
 /**
  * The workbench's routes and navigation: the one place where the sheet screens plug into the frame.
  *
- * Owned by the workbench (features/sheets, revisions, register, criteria, queue, review,
- * attachments). Replace each placeholder with a lazy route module, e.g.
+ * Each route is a lazy route module under `app/routes/`, e.g.
  *
- *   { path: 'sheets', lazy: lazyRoute(() => import('../features/sheets/routes/sheet-list')) }
+ *   { path: 'sheets', lazy: lazyRoute(() => import('./routes/sheets/sheet-list')) }
  *
  * A route module exports `Component` (or default), optionally `clientLoader(queryClient)`,
  * `ErrorBoundary` and `handle`. Calculation pages set `handle: { caution: true }` so the frame
