@@ -4,7 +4,7 @@ import { headingBlock } from './blocks.js';
 import { paginate, type FlowBlock } from './flow.js';
 import type { TextMeasure } from './measure.js';
 import { approvalsBlock, revisionHistoryBlocks } from './parts/approvals.js';
-import { Caution, cautionHeight } from './parts/caution.js';
+import { Caution, cautionHeight, rotorOf } from './parts/caution.js';
 import { chartBlock } from './parts/chart.js';
 import { criteriaReviewBlocks } from './parts/criteria-reviews.js';
 import { designBasisBlocks } from './parts/design-basis.js';
@@ -53,7 +53,11 @@ function sheetBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlock[] {
   const charts = sheet.evaluation?.charts ?? [];
   return [
     ...purposeBlocks(ctx, sheet),
-    { key: 'caution', height: cautionHeight(ctx.m, ctx.width), element: <Caution key="caution" /> },
+    {
+      key: 'caution',
+      height: cautionHeight(ctx.m, ctx.width, [], rotorOf(sheet.sheetType.id)),
+      element: <Caution key="caution" rotor={rotorOf(sheet.sheetType.id)} />,
+    },
     ...summaryBlocks(ctx, sheet),
     approvalsBlock(ctx, sheet),
     ...criteriaReviewBlocks(ctx, sheet),
