@@ -1,4 +1,4 @@
-import { toSI, type FieldSetting } from '@holdfast/calc';
+import { settingPrecision, toSI, type FieldSetting } from '@holdfast/calc';
 import { Document, Page, Text, View } from '@react-pdf/renderer';
 import { groupFieldSettings, type DiscStackSetup } from './field-card-groups.js';
 import { qty } from './format.js';
@@ -44,7 +44,7 @@ function SettingsWithBoxes(props: {
       ]}
       rows={props.items.map((f) => [
         label(f),
-        qty(f.value, f.dimension, props.system),
+        qty(f.value, f.dimension, props.system, settingPrecision(f.key, f.dimension)),
         <Box key="m" />,
         <Box key="i" />,
       ])}
@@ -55,7 +55,7 @@ function SettingsWithBoxes(props: {
 function DiscStack(props: { stack: DiscStackSetup; system: PrintUnitSystem }) {
   const { stack, system } = props;
   const q = (f: FieldSetting | null) =>
-    f ? qty(f.value, f.dimension, system, f.dimension === 'angle' ? 3 : 4) : 'see sheet';
+    f ? qty(f.value, f.dimension, system, settingPrecision(f.key, f.dimension)) : 'see sheet';
   return (
     <View wrap={false} style={{ marginBottom: 6 }}>
       <Text style={{ fontWeight: 700 }}>{stack.name}</Text>

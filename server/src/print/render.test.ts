@@ -193,11 +193,11 @@ describe('field setting card PDF', () => {
     const t = squash(card.text);
     expect(t).toMatch(/Main spring set length .*231\.5 mm/);
     expect(t).toContain('Spring setting table');
-    expect(t).toMatch(/Minimum reserve stroke to keep 10\.00 mm/);
-    expect(t).toMatch(/Shoe clearance each side 0\.8000 mm/);
+    expect(t).toMatch(/Minimum reserve stroke to keep 10\.0 mm/);
+    expect(t).toMatch(/Shoe clearance each side 0\.80 mm/);
     expect(t).toContain('Disc-spring stacks Shoe holder 1. Tighten the nut');
     expect(t).toContain('Tighten the nut until the disc-spring stack is just flat');
-    expect(t).toMatch(/Back off the nut by 60\.0 ° and lock it/);
+    expect(t).toMatch(/Back off the nut by 60 ° and lock it/);
     expect(t).toMatch(/Back off the nut by 180 ° and lock it/);
     expect(t).toMatch(/preload of about 3100 N/);
     expect(t).toContain('no shoe drags');

@@ -14,7 +14,7 @@ import { Footer } from './parts/footer.js';
 import { inputsBlocks } from './parts/inputs.js';
 import { StateBanner, StateMarking } from './parts/marking.js';
 import { referencesBlocks } from './parts/references.js';
-import { purposeBlocks, summaryBlocks } from './parts/summary.js';
+import { minorChecksBlocks, purposeBlocks, summaryBlocks } from './parts/summary.js';
 import { TitleBlock, type PageNumber } from './parts/title-block.js';
 import { PAPER_SIZE, contentWidth, pageCapacity } from './paper.js';
 import type { PrintableSheet } from './printable-sheet.js';
@@ -64,7 +64,7 @@ function sheetBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlock[] {
     ...revisionHistoryBlocks(ctx, sheet),
     ...designBasisBlocks(ctx, sheet),
     ...inputsBlocks(ctx, sheet),
-    ...newPage(derivationBlocks(ctx, sheet)),
+    ...newPage([...derivationBlocks(ctx, sheet), ...minorChecksBlocks(ctx, sheet)]),
     ...newPage(
       charts.length === 0
         ? []
