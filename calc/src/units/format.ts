@@ -99,7 +99,8 @@ const UNIT_SPECS: Record<Dimension, UnitSpec[]> = {
   energy: [p('J', 1, 1e4), p('kJ', 1e3, 1e7), p('MJ', 1e6)],
   temperature: [p('°C', 1, Infinity, 273.15)],
   temperatureDifference: [p('K', 1)],
-  time: [p('s', 1)],
+  // An hour prints as 1.00 h beside stops/h, not as 3600 s.
+  time: [p('s', 1, 3600), p('h', 3600)],
   angle: [p('rad', 1)],
   acceleration: [p('m/s²', 1)],
   stiffness: [p('N/mm', 1e3)],
