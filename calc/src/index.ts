@@ -27,6 +27,13 @@ export {
 } from './units/conversion.js';
 export { toDisplay, displayUnitFor, type UnitSystem, type DisplayValue } from './units/display.js';
 export { formatNumber, formatForDerivation } from './units/format.js';
+export {
+  PRECISION,
+  SETTING_PRECISION,
+  settingPrecision,
+  formatWithPrecision,
+  type Precision,
+} from './units/precision.js';
 export { DIMENSIONS, type UnitOption, type DimensionInfo } from './units/unit-table.js';
 export * as discSprings from './disc-springs/index.js';
 export { discSpringStackSheet, evaluateDiscSpringStack } from './sheets/disc-spring-stack.js';

@@ -36,15 +36,32 @@ export function renderPieces(node: MathNode, symbols: ReadonlySet<string>): Text
       case 'ConstantNode':
         out.push(String(n.value));
         return;
-      case 'ParenthesisNode':
+      case 'ParenthesisNode': {
+        const inner = n.content as AnyNode;
+        // (−expm1(x)) prints (1 − e^(x)) once, not ((1 − e^(x))).
+        if (inner.type === 'OperatorNode' && inner.op === '-' && inner.args?.length === 1) {
+          if (isExpm1(inner.args[0])) {
+            walk(inner);
+            return;
+          }
+        }
         out.push('(');
-        walk(n.content as AnyNode);
+        walk(inner);
         out.push(')');
         return;
+      }
       case 'OperatorNode': {
         const args = n.args ?? [];
         const op = n.op ?? '';
         if (args.length === 1) {
+          // −expm1(x) is written as the mathematics it computes: (1 − e^(x)).
+          const inner = args[0];
+          if (op === '-' && isExpm1(inner)) {
+            out.push('(1 − e^(');
+            walk(inner.args![0]);
+            out.push('))');
+            return;
+          }
           out.push(op === '-' ? '−' : op);
           walk(args[0]);
           return;
@@ -68,6 +85,13 @@ export function renderPieces(node: MathNode, symbols: ReadonlySet<string>): Text
       case 'FunctionNode': {
         const name = typeof n.fn === 'string' ? n.fn : (n.fn?.name ?? '');
         const args = n.args ?? [];
+        // expm1 is a software function (e^x − 1 without cancellation): print the mathematics.
+        if (isExpm1(n)) {
+          out.push('(e^(');
+          walk(args[0]);
+          out.push(') − 1)');
+          return;
+        }
         if (name === 'exp' && args.length === 1) {
           out.push('e^(');
           walk(args[0]);
@@ -88,6 +112,11 @@ export function renderPieces(node: MathNode, symbols: ReadonlySet<string>): Text
   };
   walk(node as unknown as AnyNode);
   return mergeStrings(out);
+}
+
+function isExpm1(n: AnyNode): boolean {
+  const name = typeof n.fn === 'string' ? n.fn : n.fn?.name;
+  return n.type === 'FunctionNode' && name === 'expm1' && n.args?.length === 1;
 }
 
 function mergeStrings(pieces: TextPiece[]): TextPiece[] {

@@ -2,7 +2,7 @@ import type { EvalFunction } from 'mathjs';
 import type { Dimension, DerivationStep } from './types.js';
 import { math } from '../units/math.js';
 import type { Q } from '../units/quantities.js';
-import { formatInPrintUnits, printUnitsOf, type PrintUnits } from '../units/format.js';
+import { formatInUnit, pickPrintUnit, printUnitsOf, type PrintUnits } from '../units/format.js';
 import { DIMENSIONS } from '../units/unit-table.js';
 import { renderPieces, symbolNames, type TextPiece } from './formula-text.js';
 import { compileToClosure } from './closure-compiler.js';
@@ -35,6 +35,8 @@ export interface Formula<S extends string, D extends Dimension> {
   readonly spec: FormulaSpec<S, D>;
   /** e.g. 'M_b = μ · N · D'. */
   readonly text: string;
+  /** The formula text with symbols printed by other names, e.g. F_s as F_s,w for the worn case. */
+  textWith(symbol: string, names: Readonly<Partial<Record<S, string>>>): string;
   evaluate(values: Record<S, number>): Q<D>;
   /** e.g. 'M_b = 0.35 · 12.40 kN · 400.0 mm'; `symbol` replaces the result symbol. */
   substitute(values: Record<S, number>, symbol?: string): string;
@@ -85,12 +87,19 @@ export function defineFormula<S extends string, D extends Dimension>(
       memo: memoIndex.get(p.symbol) ?? -1,
     };
   });
+  const multiUnit = slots.some((p) => typeof p !== 'string' && p.units.length > 1);
   const prefix = `${spec.symbol} = `;
-  const text =
-    prefix + pieces.map((p) => (typeof p === 'string' ? p : symbols[p.symbol].text)).join('');
+  const body = (names: Readonly<Record<string, string | undefined>>) =>
+    pieces
+      .map((p) => (typeof p === 'string' ? p : (names[p.symbol] ?? symbols[p.symbol].text)))
+      .join('');
+  const text = prefix + body({});
   return {
     spec,
     text,
+    textWith(symbol, names) {
+      return `${symbol} = ${body(names)}`;
+    },
     evaluate(values) {
       const scope = values as Record<string, number>;
       return (closure ? closure(scope) : compiled!.evaluate({ ...scope })) as Q<D>;
@@ -99,6 +108,17 @@ export function defineFormula<S extends string, D extends Dimension>(
       let out = symbol === undefined ? prefix : `${symbol} = `;
       // A symbol used more than once (t five times in the disc-force formula) is printed once.
       const memo = memoIndex.size > 0 ? new Array<string>(memoIndex.size) : undefined;
+      // One unit per dimension within a step (never 10.80 kN·m − 5999 N·m): the unit the
+      // largest value of that dimension needs. Only dimensions with more than one print unit.
+      let largest: Map<PrintUnits, number> | undefined;
+      if (multiUnit) {
+        largest = new Map();
+        for (const p of slots) {
+          if (typeof p === 'string' || p.units.length < 2) continue;
+          const v = Math.abs((values as Record<string, number>)[p.symbol]);
+          if (v > (largest.get(p.units) ?? -1)) largest.set(p.units, v);
+        }
+      }
       for (let k = 0; k < slots.length; k++) {
         const p = slots[k];
         if (typeof p === 'string') {
@@ -106,10 +126,9 @@ export function defineFormula<S extends string, D extends Dimension>(
           continue;
         }
         const v = (values as Record<string, number>)[p.symbol];
+        const unit = pickPrintUnit(p.units, largest?.get(p.units) ?? v);
         const printed =
-          p.memo < 0
-            ? formatInPrintUnits(v, p.units)
-            : (memo![p.memo] ??= formatInPrintUnits(v, p.units));
+          p.memo < 0 ? formatInUnit(v, unit) : (memo![p.memo] ??= formatInUnit(v, unit));
         // (152.4 mm)², not 152.4 mm²: a power binds to the whole quantity, unit included.
         const wrap = v < 0 || (p.powered && printed.includes(' '));
         out += wrap ? `(${printed})` : printed;
@@ -136,6 +155,11 @@ export interface StepOptions {
   section?: string;
   label?: string;
   symbol?: string;
+  /**
+   * Symbols of the formula printed by another name in this step: the worn-lining step
+   * substitutes the worn spring force, so it prints F_s,w where the formula says F_s.
+   */
+  names?: Readonly<Record<string, string>>;
   reference?: string;
 }
 
@@ -166,7 +190,12 @@ export class Derivation {
     if (!Number.isFinite(value)) throw new CalcDomainError(id, values);
     if (this.byId.has(id)) throw new Error(`derivation: duplicate step id ${id}`);
     const symbol = options?.symbol;
-    const formulaText = symbol ? symbol + formula.text.slice(spec.symbol.length) : formula.text;
+    const names = options?.names as Partial<Record<S, string>> | undefined;
+    const formulaText = names
+      ? formula.textWith(symbol ?? spec.symbol, names)
+      : symbol
+        ? symbol + formula.text.slice(spec.symbol.length)
+        : formula.text;
     const substituted = formula.substitute(values, symbol);
     const step: DerivationStep = {
       id,

@@ -36,7 +36,7 @@ describe('release and stroke budget', () => {
   it('warns when the reserve reaches zero', () => {
     const r = releaseAndStroke({ ...input, wear: length(0.002) });
     expect(r.wornReserveStroke).toBeLessThanOrEqual(0);
-    expect(r.warnings[0]).toMatch(/loses torque/);
+    expect(r.warnings[0]).toMatch(/can lose all holding torque/);
   });
 });
 

@@ -142,7 +142,7 @@ export interface ReleaseResult {
  * release linkage the rod must give F_th = F_rel·r_s/(r_t·η_r). Stroke budget: working stroke
  * s_w = ε·r_t; headroom s_n − s_r0 − s_w; wear w lowers the set position by w·r_t, leaving
  * s_r,w = s_r0 − w·r_t. At zero reserve the spring pushes on the thruster stop instead of the shoes
- * and the brake loses torque (warning).
+ * and the brake can lose all holding torque (warning).
  *
  * Source: statics (virtual work); stroke terms common practice — the thruster maker's data governs.
  */
@@ -192,7 +192,7 @@ export function releaseAndStroke(input: ReleaseInput, d?: Derivation): ReleaseRe
   const warnings: string[] = [];
   if (wornReserveStroke <= 0) {
     warnings.push(
-      'The reserve stroke reaches zero before the lining is fully worn: the spring then bears on the thruster stop and the brake loses torque. Re-adjust earlier or set a larger reserve stroke.',
+      "The reserve stroke reaches zero before the lining is fully worn: the spring then bears on the thruster's end stop, and with the reserve stroke used up the brake can lose all holding torque. Re-adjust earlier or set a larger reserve stroke.",
     );
   }
   if (headroom < 0) {

@@ -73,8 +73,21 @@ export function caliperTorques(v: CaliperInputs, duty: CaliperDuty, d: Derivatio
   d.section = 'brake';
   const re = uniformWearRadius(q.length(v.padOuterRadius), q.length(v.padInnerRadius), d);
   const Fc = q.force(v.clampForce);
-  const T = (mu: number, F: number, id: string, label: string, symbol: string) =>
-    caliperTorque(q.ratio(mu), q.force(F), re, v.faces, v.calipers, d, { id, label, symbol });
+  // `names`: the worn case substitutes the worn clamp force, and prints its symbol.
+  const T = (
+    mu: number,
+    F: number,
+    id: string,
+    label: string,
+    symbol: string,
+    names?: Record<string, string>,
+  ) =>
+    caliperTorque(q.ratio(mu), q.force(F), re, v.faces, v.calipers, d, {
+      id,
+      label,
+      symbol,
+      names,
+    });
   const nominal = T(
     v.muNominal,
     Fc,
@@ -98,6 +111,7 @@ export function caliperTorques(v: CaliperInputs, duty: CaliperDuty, d: Derivatio
     'torque-worn-min',
     'Brake torque at μ min, worn pads',
     'M_b,w,min',
+    { F_c: 'F_s,w' },
   );
   T(
     v.muNominal,
@@ -105,6 +119,7 @@ export function caliperTorques(v: CaliperInputs, duty: CaliperDuty, d: Derivatio
     'torque-worn-nominal',
     'Brake torque at μ nominal, worn pads',
     'M_b,w,nom',
+    { F_c: 'F_s,w' },
   );
   const p = padPressure(Fc, q.area(v.padArea), d);
   const omega = duty.brakeSpeed;

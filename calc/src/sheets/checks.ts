@@ -37,8 +37,13 @@ export function makeCheck(spec: CheckSpec): CheckResult {
       : spec.strict
         ? value > limit
         : value >= limit;
-  const v = formatForDerivation(value, spec.dimension);
-  const l = formatForDerivation(limit, spec.dimension);
+  let v = formatForDerivation(value, spec.dimension);
+  let l = formatForDerivation(limit, spec.dimension);
+  // Printed to the same text but not equal: more figures, so the verdict can be read off.
+  if (v === l && value !== limit) {
+    v = formatForDerivation(value, spec.dimension, 6);
+    l = formatForDerivation(limit, spec.dimension, 6);
+  }
   const rel = kind === 'max' ? (spec.strict ? '<' : '≤') : spec.strict ? '>' : '≥';
   const message = pass
     ? `${spec.label}: ${v} ${rel} ${l} — pass (utilisation ${(utilisation * 100).toFixed(0)} %).`

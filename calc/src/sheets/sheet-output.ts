@@ -5,8 +5,8 @@ import { DIMENSIONS } from '../units/unit-table.js';
 
 /** The usual cautions printed on every brake sheet. */
 export const SAFETY_CAUTIONS = [
-  "These results support, and never replace, the judgement of a competent engineer; the governing standard, the brake maker's data and local codes decide.",
-  'Work on a brake only with the load lowered or secured and the drive locked out; release stored spring energy with the provided means.',
+  "These results support, and never replace, the judgement of a competent engineer; the governing standard, the brake maker's data, local codes and licensed practice decide.",
+  'Never work under a suspended load: land the load or lock the drum before brake work, isolate the drive and the thruster supply, adjust one brake at a time, and release stored spring energy with the provided means.',
 ];
 
 /** An empty evaluation bound to a derivation (its steps are the sheet's derivation). */

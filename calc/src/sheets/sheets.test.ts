@@ -194,7 +194,7 @@ describe('physics of the sheets', () => {
   it('zero reserve stroke at worn lining fails the reserve check and warns', () => {
     const e = hoist.evaluate({ ...demoInputs(hoist), reserveStroke: '8 mm' }, crane);
     expect(e.checks.find((c) => c.id === 'reserve-stroke-worn')!.pass).toBe(false);
-    expect(e.warnings.join(' ')).toMatch(/loses torque/);
+    expect(e.warnings.join(' ')).toMatch(/can lose all holding torque/);
   });
   it('a travel brake that is too strong fails the adhesion check', () => {
     const e = trav.evaluate({ ...demoInputs(trav), springForce: '780 N', torqueFactor: 1 }, travel);

@@ -59,7 +59,7 @@ export function shoeRelease(
         dimension: 'length',
         source: "equipment data (user input): thruster maker's minimum reserve stroke",
         failHint:
-          'At zero reserve the brake loses torque: re-adjust earlier or set a larger reserve.',
+          'With the reserve stroke used up the brake can lose all holding torque: re-adjust earlier or set a larger reserve.',
       }),
       makeCheck({
         id: 'stroke-headroom',

@@ -27,7 +27,15 @@ export interface ShoeTorques {
   min: q.Torque;
   max: q.Torque;
   /** Torque of both shoes at a friction coefficient and a normal force, recorded as a step. */
-  torqueAt(mu: number, n: number, id: string, label: string, symbol: string): q.Torque;
+  /** `names`: symbols printed by another name in this step (N as N_w at worn lining). */
+  torqueAt(
+    mu: number,
+    n: number,
+    id: string,
+    label: string,
+    symbol: string,
+    names?: Record<string, string>,
+  ): q.Torque;
 }
 
 /** Torque and pressure at worn lining and the lining's duty (section 'lining'). */
@@ -47,10 +55,17 @@ export function shoeTorques(v: ShoeInputs, d: Derivation): ShoeTorques {
   d.section = 'brake';
   const N = shoeNormalForce(Fs, q.ratio(v.leverRatio), q.ratio(v.linkageEfficiency), d);
   const arm = pivoted ? pivotDistance(q.length(r), q.angle(v.contactAngle / 2), d) : q.length(r);
-  const torqueAt = (mu: number, n: number, id: string, label: string, symbol: string) =>
+  const torqueAt = (
+    mu: number,
+    n: number,
+    id: string,
+    label: string,
+    symbol: string,
+    names?: Record<string, string>,
+  ) =>
     pivoted
-      ? pivotedShoeTorque(q.ratio(mu), q.force(n), arm, 2, d, { id, label, symbol })
-      : shortShoeTorque(q.ratio(mu), q.force(n), q.length(r), d, { id, label, symbol });
+      ? pivotedShoeTorque(q.ratio(mu), q.force(n), arm, 2, d, { id, label, symbol, names })
+      : shortShoeTorque(q.ratio(mu), q.force(n), q.length(r), d, { id, label, symbol, names });
   const nominal = torqueAt(
     v.muNominal,
     N,
@@ -93,6 +108,7 @@ export function shoeLining(
     id: 'shoe-normal-force-worn',
     label: 'Normal force on each shoe at worn lining',
     symbol: 'N_w',
+    names: { F_s: 'F_s,w' },
   });
   const wornMin = b.torqueAt(
     b.muMin,
@@ -100,6 +116,7 @@ export function shoeLining(
     'torque-worn-min',
     'Brake torque at μ min, fully worn lining',
     'M_b,w,min',
+    { N: 'N_w' },
   );
   const wornNominal = b.torqueAt(
     b.muNominal,
@@ -107,6 +124,7 @@ export function shoeLining(
     'torque-worn-nominal',
     'Brake torque at μ nominal, fully worn lining',
     'M_b,w,nom',
+    { N: 'N_w' },
   );
   const peakPressure = pivotedPeakPressure(
     b.normalForce,

@@ -84,7 +84,7 @@ describe('general shoe moments (Budynas & Nisbett, Shigley MED 8th ed., Problem 
     close(right.mf, 17.96, 5e-3);
     close(d.value('actuating-force'), 500, 1e-12);
     expect(d.steps[1].formula).toContain('p_a = F · c · sin(θ_a)');
-    expect(d.steps[2].substituted).toMatch(/^M_f = 0\.2800 · /);
+    expect(d.steps[2].substituted).toMatch(/^M_f = 0\.28 · /);
     const e = new Derivation('shoe');
     close(
       actuatingForce(g, plain.maxPressure, 8.66, false, e),

@@ -1,6 +1,7 @@
 import type { Dimension } from '../core/types.js';
 import { resolveUnit } from './conversion.js';
 import { formatNumber } from './format.js';
+import { PRECISION, formatWithPrecision, type Precision } from './precision.js';
 import { DIMENSIONS } from './unit-table.js';
 
 export type UnitSystem = 'SI' | 'US';
@@ -11,13 +12,14 @@ export interface DisplayValue {
   unit: string;
   /** Printed unit, e.g. 'lbf·ft'. */
   label: string;
-  /** Value and label, e.g. '1 475 lbf·ft' style text (4 significant figures). */
+  /** Value and label, e.g. '1475 lbf·ft', printed to the dimension's precision (PRECISION). */
   text: string;
 }
 
 /**
  * Converts an SI value for presentation in SI or US customary units (N·m↔lbf·ft, kW↔hp,
  * kg·m²↔lb·ft², MPa↔psi, °C↔°F, mm↔in …), or into an explicit `unit` of the same dimension.
+ * `precision`: a fixed number of significant figures, or a Precision (the dimension's by default).
  * @example toDisplay(1000, 'torque', 'US').text // '737.6 lbf·ft'
  */
 export function toDisplay(
@@ -25,13 +27,17 @@ export function toDisplay(
   dimension: Dimension,
   system: UnitSystem,
   unit?: string,
-  digits = 4,
+  precision: number | Precision = PRECISION[dimension],
 ): DisplayValue {
   const info = DIMENSIONS[dimension];
   const target = unit ?? (system === 'US' ? info.displayUS : info.displaySI);
   const c = resolveUnit(target, dimension);
   const value = (valueSI - c.offset) / c.factor;
-  const text = c.label ? `${formatNumber(value, digits)} ${c.label}` : formatNumber(value, digits);
+  const number =
+    typeof precision === 'number'
+      ? formatNumber(value, precision)
+      : formatWithPrecision(value, c.factor, c.label, precision);
+  const text = c.label ? `${number} ${c.label}` : number;
   return { value, unit: c.unit, label: c.label, text };
 }
 

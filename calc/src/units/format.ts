@@ -1,4 +1,5 @@
 import type { Dimension } from '../core/types.js';
+import { PRECISION, formatWithPrecision } from './precision.js';
 
 const POW10: number[] = [];
 for (let k = -30; k <= 30; k++) POW10[k + 30] = 10 ** k;
@@ -54,7 +55,7 @@ export function placeDigits(abs: number, sign: string, digits: number, e: number
   return `${sign}0.${'0'.repeat(-e - 1)}${s}`;
 }
 
-interface PrintUnit {
+export interface PrintUnit {
   label: string;
   /** ' ' + label, or '' without a label: appended to the number in one concatenation. */
   suffix: string;
@@ -62,12 +63,16 @@ interface PrintUnit {
   offset: number;
   /** Use this unit when |SI value| is below this bound (first match wins). */
   below: number;
+  /** Whose precision it prints with (PRECISION, looked up when printing: no import cycle). */
+  dimension: Dimension;
 }
 
 /** The print units of one dimension, smallest first. */
 export type PrintUnits = readonly PrintUnit[];
 
-const p = (label: string, factor: number, below = Infinity, offset = 0): PrintUnit => ({
+type UnitSpec = Omit<PrintUnit, 'dimension'>;
+
+const p = (label: string, factor: number, below = Infinity, offset = 0): UnitSpec => ({
   label,
   suffix: label ? ` ${label}` : '',
   factor,
@@ -75,8 +80,11 @@ const p = (label: string, factor: number, below = Infinity, offset = 0): PrintUn
   offset,
 });
 
-/** Units used to print values inside derivation substitutions, chosen by magnitude. */
-const PRINT_UNITS: Record<Dimension, PrintUnit[]> = {
+/**
+ * Units used to print values inside derivation substitutions, chosen by magnitude. One unit
+ * per dimension where a step could otherwise switch (pressures in MPa only, not kPa then MPa).
+ */
+const UNIT_SPECS: Record<Dimension, UnitSpec[]> = {
   length: [p('mm', 1e-3, 1), p('m', 1)],
   force: [p('N', 1, 1e4), p('kN', 1e3)],
   torque: [p('N·m', 1, 1e4), p('kN·m', 1e3)],
@@ -86,12 +94,13 @@ const PRINT_UNITS: Record<Dimension, PrintUnit[]> = {
   angularAcceleration: [p('rad/s²', 1)],
   mass: [p('kg', 1)],
   inertia: [p('kg·m²', 1)],
-  pressure: [p('kPa', 1e3, 1e5), p('MPa', 1e6)],
+  pressure: [p('MPa', 1e6)],
   pv: [p('MPa·m/s', 1e6)],
   energy: [p('J', 1, 1e4), p('kJ', 1e3, 1e7), p('MJ', 1e6)],
   temperature: [p('°C', 1, Infinity, 273.15)],
   temperatureDifference: [p('K', 1)],
-  time: [p('s', 1)],
+  // An hour prints as 1.00 h beside stops/h, not as 3600 s.
+  time: [p('s', 1, 3600), p('h', 3600)],
   angle: [p('rad', 1)],
   acceleration: [p('m/s²', 1)],
   stiffness: [p('N/mm', 1e3)],
@@ -103,8 +112,22 @@ const PRINT_UNITS: Record<Dimension, PrintUnit[]> = {
   dimensionless: [p('', 1)],
 };
 
-/** Prints an SI value with a readable unit for a derivation, e.g. 12400 N → '12.40 kN'. */
-export function formatForDerivation(valueSI: number, dimension: Dimension, digits = 4): string {
+const PRINT_UNITS = Object.fromEntries(
+  Object.entries(UNIT_SPECS).map(([dimension, units]) => [
+    dimension,
+    units.map((u) => ({ ...u, dimension: dimension as Dimension })),
+  ]),
+) as Record<Dimension, PrintUnit[]>;
+
+/**
+ * Prints an SI value with a readable unit for a derivation, e.g. 12400 N → '12.4 kN', to the
+ * dimension's precision (PRECISION) unless `digits` asks for a fixed number of figures.
+ */
+export function formatForDerivation(
+  valueSI: number,
+  dimension: Dimension,
+  digits?: number,
+): string {
   return formatInPrintUnits(valueSI, PRINT_UNITS[dimension], digits);
 }
 
@@ -117,15 +140,26 @@ export function printUnitsOf(dimension: Dimension): PrintUnits {
 }
 
 /** formatForDerivation with the dimension's print units already looked up (printUnitsOf). */
-export function formatInPrintUnits(valueSI: number, units: PrintUnits, digits = 4): string {
-  let unit = units[units.length - 1];
+export function formatInPrintUnits(valueSI: number, units: PrintUnits, digits?: number): string {
+  return formatInUnit(valueSI, pickPrintUnit(units, valueSI), digits);
+}
+
+/** The print unit for a magnitude: the first whose bound it is below, else the largest. */
+export function pickPrintUnit(units: PrintUnits, valueSI: number): PrintUnit {
   for (let k = 0; k < units.length - 1; k++) {
-    if (Math.abs(valueSI) < units[k].below) {
-      unit = units[k];
-      break;
-    }
+    if (Math.abs(valueSI) < units[k].below) return units[k];
   }
-  return formatNumber((valueSI - unit.offset) / unit.factor, digits) + unit.suffix;
+  return units[units.length - 1];
+}
+
+/** An SI value in one given print unit, to its dimension's precision or to `digits` figures. */
+export function formatInUnit(valueSI: number, unit: PrintUnit, digits?: number): string {
+  const value = (valueSI - unit.offset) / unit.factor;
+  const text =
+    digits === undefined
+      ? formatWithPrecision(value, unit.factor, unit.label, PRECISION[unit.dimension])
+      : formatNumber(value, digits);
+  return text + unit.suffix;
 }
 
 /** Printed SI label of a dimension's storage unit, e.g. 'N·m'. */

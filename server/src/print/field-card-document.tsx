@@ -1,8 +1,8 @@
-import type { FieldSetting } from '@holdfast/calc';
+import { settingPrecision, toSI, type FieldSetting } from '@holdfast/calc';
 import { Document, Page, Text, View } from '@react-pdf/renderer';
 import { groupFieldSettings, type DiscStackSetup } from './field-card-groups.js';
 import { qty } from './format.js';
-import { Caution } from './parts/caution.js';
+import { Caution, rotorOf } from './parts/caution.js';
 import { SettingTable } from './parts/field-settings.js';
 import { Heading, Table } from './parts/table.js';
 import type { PrintableSheet, PrintUnitSystem } from './printable-sheet.js';
@@ -44,7 +44,7 @@ function SettingsWithBoxes(props: {
       ]}
       rows={props.items.map((f) => [
         label(f),
-        qty(f.value, f.dimension, props.system),
+        qty(f.value, f.dimension, props.system, settingPrecision(f.key, f.dimension)),
         <Box key="m" />,
         <Box key="i" />,
       ])}
@@ -55,7 +55,7 @@ function SettingsWithBoxes(props: {
 function DiscStack(props: { stack: DiscStackSetup; system: PrintUnitSystem }) {
   const { stack, system } = props;
   const q = (f: FieldSetting | null) =>
-    f ? qty(f.value, f.dimension, system, f.dimension === 'angle' ? 3 : 4) : 'see sheet';
+    f ? qty(f.value, f.dimension, system, settingPrecision(f.key, f.dimension)) : 'see sheet';
   return (
     <View wrap={false} style={{ marginBottom: 6 }}>
       <Text style={{ fontWeight: 700 }}>{stack.name}</Text>
@@ -87,13 +87,41 @@ function DiscStack(props: { stack: DiscStackSetup; system: PrintUnitSystem }) {
   );
 }
 
-const AFTER_SETTING = [
-  'Released: no shoe drags on the drum or disc — check the clearance on both sides and feel the drum after a few minutes running.',
-  'Set and release the brake at least five times, then measure the spring length, the reserve stroke and the clearance again.',
-  'Set: the brake holds the test load the governing standard asks for; a hoist holds the load lifted just clear of the ground.',
-  'Guards refitted, tools removed, limit switches and brake monitoring working.',
-  'After running in (first shift, or the first few hundred operations): re-check reserve stroke, spring length and disc-spring preload.',
-];
+/** 1.25 × rated load: the static test load of a crane hoist (common practice, from memory). */
+const STATIC_TEST_FACTOR = 1.25;
+
+/** The hoist's static test load from the rated load on the sheet, or null for other drives. */
+export function staticTestLoad(sheet: PrintableSheet): string | null {
+  if (sheet.sheetType.id !== 'hoist-shoe-brake') return null;
+  const rated = sheet.inputs.find((i) => i.field.key === 'load')?.value;
+  if (!rated || typeof rated !== 'object') return null;
+  try {
+    const kg = toSI(rated.value, rated.unit, 'mass') * STATIC_TEST_FACTOR;
+    return qty(kg, 'mass', sheet.unitSystem);
+  } catch {
+    return null;
+  }
+}
+
+/** The checks after setting, in the words of the brake at hand (drum or disc, hoist or not). */
+export function afterSettingLines(sheet: PrintableSheet): string[] {
+  const rotor = rotorOf(sheet.sheetType.id);
+  const rubbing = rotor === 'disc' ? 'no pad drags on the disc' : 'no shoe drags on the drum';
+  const test = staticTestLoad(sheet);
+  return [
+    `Released: ${rubbing} — check the clearance on both sides. After a few minutes running, stop the drive and measure the ${rotor} surface temperature with a surface thermometer; never touch it.`,
+    'Set and release the brake at least five times, then measure the spring length, the reserve stroke and the clearance again.',
+    test
+      ? `Static test: each brake on its own holds the test load of ${test} (1.25 × rated load, common practice from memory; the governing standard names the value) lifted just clear of the ground.`
+      : 'Dynamic test: the brake stops the drive from rated speed with the rated load within the stopping distance on the sheet, or the test the governing standard names.',
+    'Guards refitted, tools removed, limit switches and brake monitoring working.',
+    'After running in (first shift, or the first few hundred operations): re-check reserve stroke, spring length and disc-spring preload.',
+  ];
+}
+
+/** The push rod line of the card's caution: it is no handle and no lifting point. */
+export const PUSH_ROD_CAUTION =
+  'The thruster push rod is not a lifting point and no handle: open the brake with the hand release.';
 
 /** The field setting card: what to set, what to measure, where to record it. */
 export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | null }) {
@@ -114,7 +142,10 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
           {sheet.equipment.name}, from calculation {sheet.documentNumber} rev {sheet.revision.label}
           . Check the revision is current with the verification code before you start.
         </Text>
-        <Caution extra={['Do not lift the brake or move its arms by the thruster push rod.']} />
+        <Caution
+          rotor={rotorOf(sheet.sheetType.id)}
+          extra={rotorOf(sheet.sheetType.id) === 'drum' ? [PUSH_ROD_CAUTION] : []}
+        />
         {!g ? (
           <Text>This revision has no evaluation, so there are no settings to print.</Text>
         ) : (
@@ -142,7 +173,7 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
                 <SettingsWithBoxes items={[...g.thruster, ...g.clearance]} system={system} />
                 <Text style={{ fontSize: 7.5 }}>
                   Lining wear uses up the reserve: re-adjust before it falls below the minimum
-                  given, or the brake loses torque.
+                  given. With the reserve stroke used up the brake can lose all holding torque.
                 </Text>
               </View>
             )}
@@ -171,7 +202,7 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
         )}
         <View wrap={false}>
           <Heading>After setting</Heading>
-          {AFTER_SETTING.map((line) => (
+          {afterSettingLines(sheet).map((line) => (
             <View key={line} style={{ flexDirection: 'row', marginBottom: 2 }}>
               <View
                 style={{

@@ -5,18 +5,22 @@ import {
   type Dimension,
   type FieldDefinition,
   type InputValue,
+  type Precision,
 } from '@holdfast/calc';
 import type { PrintRevisionState, PrintUnitSystem } from './printable-sheet.js';
 
-/** An SI value printed in the sheet's unit system with its unit, e.g. '1 475 lbf·ft'. */
+/**
+ * An SI value printed in the sheet's unit system with its unit, e.g. '1475 lbf·ft', to the
+ * dimension's precision (calc's PRECISION table) unless a setting's precision is given.
+ */
 export function qty(
   valueSI: number,
   dimension: Dimension,
   system: PrintUnitSystem,
-  digits = 4,
+  precision?: Precision,
 ): string {
   if (!Number.isFinite(valueSI)) return '—';
-  return toDisplay(valueSI, dimension, system, undefined, digits).text;
+  return toDisplay(valueSI, dimension, system, undefined, precision).text;
 }
 
 /** Just the number of `qty`, and the printed unit label separately (for table columns). */

@@ -1,5 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { renderFieldCardPdf, renderSheetPdf } from './render.js';
+import { isMinorCheck } from './parts/summary.js';
 import { realPrintable } from './testing/real-sheet.js';
 import { ensurePoppler, inspectPdf, type PdfFacts } from './testing/poppler.js';
 
@@ -25,9 +26,22 @@ describe.each(TYPES)('%s, real evaluation', (sheetTypeId) => {
     });
   });
 
-  it('gives every check a verdict on page 1', () => {
-    const checks = sheet.evaluation!.checks;
+  it('gives every governing check a verdict on page 1, the minor ones after the derivation', () => {
+    const all = sheet.evaluation!.checks;
+    const checks = all.filter((c) => !isMinorCheck(c));
+    const minor = all.filter(isMinorCheck);
     const first = pdf.pageText[0] + (pdf.pageText[1] ?? '');
+    for (const c of minor.filter((x) => x.label.length <= 40)) {
+      expect(first, c.label).not.toContain(c.label);
+    }
+    if (minor.length > 0) {
+      const rest = pdf.pageText.slice(2).join('\n');
+      expect(rest).toContain('Minor checks');
+      for (const c of minor.filter((x) => x.label.length <= 40)) {
+        const row = rest.split('\n').find((l) => l.includes(c.label));
+        expect(row, c.label).toMatch(/\bPASS\b/);
+      }
+    }
     const count = (re: RegExp) => (first.match(re) ?? []).length;
     expect(count(/\bPASS\b/g)).toBe(checks.filter((c) => c.pass).length);
     expect(count(/\bFAIL\b/g)).toBe(checks.filter((c) => !c.pass).length);

@@ -78,9 +78,9 @@ describe('calculation sheet PDF', () => {
     expect(first).toMatch(/Prepared\s+Ada Demo\s+AD\s+2026-11-03/);
     expect(first).toMatch(/Checked and approved\s+Ben Checker\s+BC\s+2026-11-04/);
     expect(first).toContain('never replace, the judgement of a competent engineer');
-    expect(first).toContain("the brake maker's data and local codes decide");
-    expect(first).toContain('load lowered to the ground or positively secured');
-    expect(first).toContain('locked out');
+    expect(first).toContain("the brake maker's data, local codes and licensed practice decide");
+    expect(first).toContain('land the load or lock the drum');
+    expect(first).toContain('Isolate and lock out the drive');
     // History lists A and B, not the later draft C.
     expect(first).toMatch(/\bA\s+2026-03-05\s+Superseded\s+First issue\./);
     expect(first).not.toContain('Later draft');
@@ -98,6 +98,15 @@ describe('calculation sheet PDF', () => {
     expect(t).toContain('Set point');
     expect(t).toContain('Spring setting table');
     expect(t).toMatch(/\[\d+\] Textbook of machine elements, 3rd ed\., §12\.4/);
+  });
+
+  it('approved: the cautions on page 1 defer to the standard, the maker and licensed practice', () => {
+    const t = squash(pdf.approved.pageText[0]);
+    expect(t).toContain('Never work under a suspended load');
+    expect(t).toContain('Adjust one brake at a time');
+    expect(t).toContain('separately, the thruster supply');
+    expect(t).toContain("the brake maker's data, local codes and licensed practice decide");
+    expect(t).not.toContain('drum or disc');
   });
 
   it('prints math and Greek symbols as themselves (fallback fonts), not as other letters', () => {
@@ -184,17 +193,37 @@ describe('field setting card PDF', () => {
     const t = squash(card.text);
     expect(t).toMatch(/Main spring set length .*231\.5 mm/);
     expect(t).toContain('Spring setting table');
-    expect(t).toMatch(/Minimum reserve stroke to keep 10\.00 mm/);
-    expect(t).toMatch(/Shoe clearance each side 0\.8000 mm/);
+    expect(t).toMatch(/Minimum reserve stroke to keep 10\.0 mm/);
+    expect(t).toMatch(/Shoe clearance each side 0\.80 mm/);
     expect(t).toContain('Disc-spring stacks Shoe holder 1. Tighten the nut');
     expect(t).toContain('Tighten the nut until the disc-spring stack is just flat');
-    expect(t).toMatch(/Back off the nut by 60\.0 ° and lock it/);
+    expect(t).toMatch(/Back off the nut by 60 ° and lock it/);
     expect(t).toMatch(/Back off the nut by 180 ° and lock it/);
     expect(t).toMatch(/preload of about 3100 N/);
     expect(t).toContain('no shoe drags');
     expect(t).toContain('Set and release the brake at least five times');
     expect(t).toMatch(/Set by .*Checked by/);
-    expect(t).toContain('locked out');
+    expect(t).toContain('Isolate and lock out the drive');
+  });
+
+  it('prints the cautions for brake work and the reworded lines', () => {
+    const t = squash(card.text);
+    expect(t).toContain('Never work under a suspended load');
+    expect(t).toContain('land the load or lock the drum: nothing on the hook (no ladle, no load)');
+    expect(t).toContain('Adjust one brake at a time');
+    expect(t).toContain('separately, the thruster supply');
+    expect(t).toContain(
+      'Keep hands clear of the arms and levers while the thruster can be energised',
+    );
+    expect(t).toContain('The drum and the thruster oil can be hot');
+    expect(t).toContain('The thruster push rod is not a lifting point');
+    expect(t).toContain('open the brake with the hand release');
+    expect(t).toContain('surface thermometer');
+    expect(t).toContain('brake can lose all holding torque');
+    expect(t).toContain('local codes and licensed practice decide');
+    // The hoist fixture's rated load is 95 t: the static test load is named, 1.25 × that.
+    expect(t).toMatch(/holds the test load of 118800 kg \(1\.25 × rated load/);
+    expect(t).not.toMatch(/feel the drum|drum or disc|push rod\.|brake loses torque/);
   });
 
   it('has ink on every page', () => {

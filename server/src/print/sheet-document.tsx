@@ -4,7 +4,7 @@ import { headingBlock } from './blocks.js';
 import { paginate, type FlowBlock } from './flow.js';
 import type { TextMeasure } from './measure.js';
 import { approvalsBlock, revisionHistoryBlocks } from './parts/approvals.js';
-import { Caution, cautionHeight } from './parts/caution.js';
+import { Caution, cautionHeight, rotorOf } from './parts/caution.js';
 import { chartBlock } from './parts/chart.js';
 import { criteriaReviewBlocks } from './parts/criteria-reviews.js';
 import { designBasisBlocks } from './parts/design-basis.js';
@@ -14,7 +14,7 @@ import { Footer } from './parts/footer.js';
 import { inputsBlocks } from './parts/inputs.js';
 import { StateBanner, StateMarking } from './parts/marking.js';
 import { referencesBlocks } from './parts/references.js';
-import { purposeBlocks, summaryBlocks } from './parts/summary.js';
+import { minorChecksBlocks, purposeBlocks, summaryBlocks } from './parts/summary.js';
 import { TitleBlock, type PageNumber } from './parts/title-block.js';
 import { PAPER_SIZE, contentWidth, pageCapacity } from './paper.js';
 import type { PrintableSheet } from './printable-sheet.js';
@@ -53,14 +53,18 @@ function sheetBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlock[] {
   const charts = sheet.evaluation?.charts ?? [];
   return [
     ...purposeBlocks(ctx, sheet),
-    { key: 'caution', height: cautionHeight(ctx.m, ctx.width), element: <Caution key="caution" /> },
+    {
+      key: 'caution',
+      height: cautionHeight(ctx.m, ctx.width, [], rotorOf(sheet.sheetType.id)),
+      element: <Caution key="caution" rotor={rotorOf(sheet.sheetType.id)} />,
+    },
     ...summaryBlocks(ctx, sheet),
     approvalsBlock(ctx, sheet),
     ...criteriaReviewBlocks(ctx, sheet),
     ...revisionHistoryBlocks(ctx, sheet),
     ...designBasisBlocks(ctx, sheet),
     ...inputsBlocks(ctx, sheet),
-    ...newPage(derivationBlocks(ctx, sheet)),
+    ...newPage([...derivationBlocks(ctx, sheet), ...minorChecksBlocks(ctx, sheet)]),
     ...newPage(
       charts.length === 0
         ? []

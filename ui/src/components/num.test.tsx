@@ -24,6 +24,7 @@ describe('Num and SafetyCaution', () => {
     renderWithProviders(<SafetyCaution />);
     const note = screen.getByRole('note', { name: 'Safety caution' });
     expect(note).toHaveTextContent(/competent engineer/);
-    expect(note).toHaveTextContent(/load lowered or secured and the drive locked out/);
+    expect(note).toHaveTextContent(/Never work under a suspended load/);
+    expect(note).toHaveTextContent(/local codes and licensed practice decide/);
   });
 });

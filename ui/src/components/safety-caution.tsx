@@ -5,8 +5,8 @@ import classes from './safety-caution.module.css';
 /** The standard caution, in Holdfast's own words. Shown on every calculation page. */
 export const safetyCautionText =
   'Results from Holdfast support, and never replace, the judgement of a competent engineer. ' +
-  "The governing standard, the brake maker's data and local codes decide. " +
-  'Work on a brake only with the load lowered or secured and the drive locked out.';
+  "The governing standard, the brake maker's data, local codes and licensed practice decide. " +
+  'Never work under a suspended load: land the load or lock the drum, and lock out the drive.';
 
 export interface SafetyCautionProps {
   /** `footer`: one compact band for the frame footer; `block`: a boxed note inside a page. */

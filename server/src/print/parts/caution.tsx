@@ -2,15 +2,35 @@ import { Text, View } from '@react-pdf/renderer';
 import type { TextMeasure } from '../measure.js';
 import { colours } from '../theme.js';
 
-export const CAUTION_LINES = [
-  'These results support, and never replace, the judgement of a competent engineer.',
-  "The governing standard, the brake maker's data and local codes decide where they differ from this sheet.",
-  'Work on a brake only with the load lowered to the ground or positively secured, and the drive isolated and locked out.',
-  'Spring force is stored energy: release it with the adjusting means provided; never knock out pins or cut rods under load.',
-];
+/** What the brake acts on: a drum-brake card never speaks of discs, a caliper card of drums. */
+export type BrakeRotor = 'drum' | 'disc';
+
+/** The rotor of a sheet type: only the caliper disc brake acts on a disc. */
+export function rotorOf(sheetTypeId: string): BrakeRotor {
+  return sheetTypeId === 'caliper-disc-brake' ? 'disc' : 'drum';
+}
+
+/**
+ * The usual cautions for work on a spring-applied, thruster-released brake, printed on the sheet
+ * and on the field card (common practice for work on crane and conveyor brakes, no published
+ * source; the governing standard and the maker's instructions decide).
+ */
+export function cautionLines(rotor: BrakeRotor = 'drum'): string[] {
+  // A caliper is opened by a thruster or a hydraulic unit; a drum brake here by a thruster.
+  const opener = rotor === 'disc' ? 'release unit' : 'thruster';
+  return [
+    'These results support, and never replace, the judgement of a competent engineer.',
+    "The governing standard, the brake maker's data, local codes and licensed practice decide where they differ from this sheet.",
+    `Never work under a suspended load. Before brake work land the load or lock the ${rotor}: nothing on the hook (no ladle, no load).`,
+    `Isolate and lock out the drive and, separately, the ${opener} supply: an energised ${opener} opens the brake.`,
+    `Keep hands clear of the arms and levers while the ${opener} can be energised. Adjust one brake at a time.`,
+    `The ${rotor} and the ${opener === 'thruster' ? 'thruster' : 'hydraulic'} oil can be hot after running: stop the drive and let them cool.`,
+    'Spring force is stored energy: release it with the adjusting means provided; never knock out pins or cut rods under load.',
+  ];
+}
 
 /** The safety caution block (first page of the sheet, top of the field card). */
-export function Caution(props: { extra?: string[] }) {
+export function Caution(props: { extra?: string[]; rotor?: BrakeRotor }) {
   return (
     <View
       wrap={false}
@@ -24,7 +44,7 @@ export function Caution(props: { extra?: string[] }) {
       }}
     >
       <Text style={{ fontWeight: 700, color: colours.caution, marginBottom: 2 }}>Caution</Text>
-      {[...CAUTION_LINES, ...(props.extra ?? [])].map((line) => (
+      {[...cautionLines(props.rotor), ...(props.extra ?? [])].map((line) => (
         <Text key={line} style={{ marginBottom: 1 }}>
           • {line}
         </Text>
@@ -34,11 +54,16 @@ export function Caution(props: { extra?: string[] }) {
 }
 
 /** Height of the caution block in `width` pt (its 6 pt margin above included). */
-export function cautionHeight(m: TextMeasure, width: number, extra: string[] = []): number {
+export function cautionHeight(
+  m: TextMeasure,
+  width: number,
+  extra: string[] = [],
+  rotor: BrakeRotor = 'drum',
+): number {
   // Left rule 3, padding 2 × 6.
   const inner = width - 3 - 12;
   const body = { fontSize: 8.5 };
-  const lines = [...CAUTION_LINES, ...extra].reduce(
+  const lines = [...cautionLines(rotor), ...extra].reduce(
     (sum, line) => sum + m.height(`• ${line}`, inner, body) + 1,
     0,
   );

@@ -1,4 +1,4 @@
-import type { DerivationStep } from '@holdfast/calc';
+import { formatForDerivation, type DerivationStep } from '@holdfast/calc';
 import { Text, View } from '@react-pdf/renderer';
 import { qty } from '../format.js';
 import { headingBlock, paragraphBlock, type BlockContext } from '../blocks.js';
@@ -9,9 +9,13 @@ import { ROW_RULE, colours, monoFont, ruledRow } from '../theme.js';
 const NUM_W = 26;
 const REF_W = 150;
 
+/**
+ * The result in the units its substitution used (rad/s stays rad/s, not rpm, inside a step);
+ * on a US sheet the US value first, the same SI value in brackets.
+ */
 function resultText(step: DerivationStep, sheet: PrintableSheet): string {
-  const shown = qty(step.value, step.dimension, sheet.unitSystem);
-  const si = qty(step.value, step.dimension, 'SI');
+  const si = formatForDerivation(step.value, step.dimension);
+  const shown = sheet.unitSystem === 'US' ? qty(step.value, step.dimension, 'US') : si;
   return `${step.symbol} = ${shown}${shown !== si ? `  (${si})` : ''}`;
 }
 

@@ -7,9 +7,64 @@ import type { PrintableSheet } from '../printable-sheet.js';
 import { colours } from '../theme.js';
 import { Verdict, type Column } from './table.js';
 
+/**
+ * Value and limit as printed: to the dimension's precision, with more figures when the two
+ * would print alike but differ (the verdict must be readable from the row).
+ */
+function valueAndLimit(c: CheckResult, sheet: PrintableSheet): [string, string] {
+  let v = qty(c.value, c.dimension, sheet.unitSystem);
+  let l = qty(c.limit, c.dimension, sheet.unitSystem);
+  if (v === l && c.value !== c.limit) {
+    const fine = { digits: 6 };
+    v = qty(c.value, c.dimension, sheet.unitSystem, fine);
+    l = qty(c.limit, c.dimension, sheet.unitSystem, fine);
+  }
+  return [v, l];
+}
+
 /** 'Limit' column text: ≤ for maxima, ≥ for minima, in the sheet's units. */
 export function limitText(c: CheckResult, sheet: PrintableSheet): string {
-  return `${c.kind === 'max' ? '≤' : '≥'} ${qty(c.limit, c.dimension, sheet.unitSystem)}`;
+  return `${c.kind === 'max' ? '≤' : '≥'} ${valueAndLimit(c, sheet)[1]}`;
+}
+
+/** At or below this utilisation a passing check is noise on the summary page. */
+export const MINOR_UTILISATION = 0.05;
+
+/**
+ * A passing check far from its limit: it moves from the summary to the minor checks after the
+ * derivation, so the summary shows what governs. A zero limit has no meaningful utilisation
+ * (stroke left ≥ 0 at 0 %), so such a check always stays on the summary.
+ */
+export function isMinorCheck(c: CheckResult): boolean {
+  return c.pass && c.limit !== 0 && c.utilisation <= MINOR_UTILISATION;
+}
+
+function checkRow(c: CheckResult, sheet: PrintableSheet, verdictHeight: number) {
+  const [value] = valueAndLimit(c, sheet);
+  return [
+    c.label,
+    value,
+    limitText(c, sheet),
+    pct(c.utilisation),
+    { node: <Verdict key={c.id} pass={c.pass} />, height: verdictHeight },
+  ];
+}
+
+/** The checks moved off the summary (utilisation ≤ 5 %), listed after the derivation. */
+export function minorChecksBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlock[] {
+  const minor = sheet.evaluation?.checks.filter(isMinorCheck) ?? [];
+  if (minor.length === 0) return [];
+  const verdictHeight = ctx.m.lineHeight({ fontSize: 7.5, weight: 700 }) + 2;
+  const intro = `Checks that pass at ${pct(MINOR_UTILISATION)} utilisation or less: far from their limits, they do not govern, and the summary leaves them out.`;
+  return [
+    headingBlock(ctx, 'minor-h', 'Minor checks'),
+    { ...paragraphBlock(ctx, 'minor-intro', intro, { fontSize: 8.5 }), keepWithNext: true },
+    ...tableBlocks(ctx, 'minor', {
+      columns: SUMMARY_COLUMNS,
+      continuedTitle: 'Minor checks',
+      rows: minor.map((c) => checkRow(c, sheet, verdictHeight)),
+    }),
+  ];
 }
 
 export function purposeBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlock[] {
@@ -45,7 +100,12 @@ export function summaryBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlo
   }
   const failed = ev.checks.filter((c) => !c.pass).length;
   const verdict = failed === 0 ? 'all pass' : `${failed} FAIL`;
-  const tail = failed > 0 ? ' — see "Justification for failed checks".' : '.';
+  const minor = ev.checks.filter(isMinorCheck).length;
+  const moved =
+    minor === 0
+      ? ''
+      : ` ${minor === 1 ? 'One check passes' : `${minor} checks pass`} at ${pct(MINOR_UTILISATION)} utilisation or less: listed under "Minor checks" after the derivation.`;
+  const tail = (failed > 0 ? ' — see "Justification for failed checks".' : '.') + moved;
   const intro = `${ev.checks.length} checks: ${verdict}${tail} ${UTILISATION_NOTE}`;
   const verdictHeight = ctx.m.lineHeight({ fontSize: 7.5, weight: 700 }) + 2;
   const blocks: FlowBlock[] = [
@@ -67,13 +127,7 @@ export function summaryBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlo
     ...tableBlocks(ctx, 'summary', {
       columns: SUMMARY_COLUMNS,
       continuedTitle: 'Summary of checks',
-      rows: ev.checks.map((c) => [
-        c.label,
-        qty(c.value, c.dimension, sheet.unitSystem),
-        limitText(c, sheet),
-        pct(c.utilisation),
-        { node: <Verdict key={c.id} pass={c.pass} />, height: verdictHeight },
-      ]),
+      rows: ev.checks.filter((c) => !isMinorCheck(c)).map((c) => checkRow(c, sheet, verdictHeight)),
     }),
   ];
   // The cautions every evaluation carries are printed once, in the caution block above.
