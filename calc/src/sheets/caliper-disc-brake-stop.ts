@@ -11,7 +11,7 @@ import type { LiningMaterial } from '../criteria/linings.js';
 import { stopEnergyParts } from '../energy/stop-energy.js';
 import { heatBalance } from '../energy/heat-balance.js';
 import { releasedSpringForceFormula, forceMarginFormula } from '../release/release.js';
-import { stopping } from '../stopping/stopping.js';
+import { stopping, type StoppingResult } from '../stopping/stopping.js';
 import * as q from '../units/quantities.js';
 import { makeCheck } from './checks.js';
 import { stoppingChart, temperatureChart } from './charts.js';
@@ -25,8 +25,8 @@ export function caliperStopAndHeat(
   t: CaliperTorques,
   lining: LiningMaterial,
   d: Derivation,
-): { checks: CheckResult[]; charts: ChartData[]; warnings: string[] } {
-  const Mhold = duty.holdingTorque;
+): { checks: CheckResult[]; charts: ChartData[]; warnings: string[]; stop: StoppingResult } {
+  const Mhold = duty.driveTorque;
   const omega = duty.brakeSpeed;
   d.section = 'stopping';
   const stop = stopping(
@@ -49,6 +49,7 @@ export function caliperStopAndHeat(
       checks: [],
       charts,
       warnings: [`${stop.message} Stopping distance and heat are not computed.`],
+      stop,
     };
   }
   const checks = [
@@ -104,7 +105,7 @@ export function caliperStopAndHeat(
   charts.push(
     temperatureChart(Tamb, dT, z, tau, lining.maxTemperature, lining.maxOperatingTemperature),
   );
-  return { checks, charts, warnings: [] };
+  return { checks, charts, warnings: [], stop };
 }
 
 /** Release force, the clamp-force range, the setting table and the field settings. */
