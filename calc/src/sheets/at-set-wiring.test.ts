@@ -98,8 +98,9 @@ describe('drive-train overload at μ max with the spring at the top of its range
   });
 
   it('uses the higher of the long-shoe and short-shoe torques', () => {
-    const long = run(hoist);
-    const short = run(hoist, { torqueModel: 'short' });
+    const long = run(hoist, { torqueModel: 'pivoted' });
+    const short = run(hoist);
+    expect(demoInputs(hoist).torqueModel).toBe('short');
     expect(step(short, 'torque-max')).toBeLessThan(step(long, 'torque-max'));
     expect(check(short, 'torque-max-friction').value).toBeCloseTo(
       check(long, 'torque-max-friction').value,
@@ -151,5 +152,36 @@ describe('caliper: static torque, load speed and inertia describe one hoist', ()
     delete inputs.loadMass;
     const e = caliper.evaluate(inputs, crane);
     expect(e.checks.some((c) => c.id === 'static-torque-consistent')).toBe(false);
+  });
+});
+
+describe('method choices stated on the sheet', () => {
+  it('service and emergency stops are entered apart and both heat the drum', () => {
+    const base = run(hoist);
+    const more = run(hoist, { emergencyStopsPerHour: { value: 40, unit: '1/h' } });
+    expect(check(more, 'temperature-steady').value).toBeGreaterThan(
+      check(base, 'temperature-steady').value,
+    );
+    const swapped = run(hoist, {
+      stopsPerHour: { value: 4, unit: '1/h' },
+      emergencyStopsPerHour: { value: 56, unit: '1/h' },
+    });
+    expect(check(swapped, 'temperature-steady').value).toBeCloseTo(
+      check(base, 'temperature-steady').value,
+      9,
+    );
+  });
+
+  it('the peak bulk temperature is held to the max operating temperature, not the short-time maximum', () => {
+    const c = check(run(hoist), 'temperature-peak');
+    expect(c.limit).toBeCloseTo(225 + 273.15, 9);
+    expect(c.label).toContain('bulk');
+    expect(c.source).toContain('500 °C');
+    const hot = run(hoist, { emergencyStopsPerHour: { value: 400, unit: '1/h' } });
+    const p = check(hot, 'temperature-peak');
+    // Between the operating limit and the short-time maximum: the old check passed this.
+    expect(p.value).toBeGreaterThan(225 + 273.15);
+    expect(p.value).toBeLessThan(500 + 273.15);
+    expect(p.pass).toBe(false);
   });
 });

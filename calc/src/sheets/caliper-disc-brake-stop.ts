@@ -68,7 +68,8 @@ export function caliperStopAndHeat(
   stopEnergyParts(q.inertia(v.inertia), stop.speedAfterDelay, Mhold, stop.brakingTime, d);
   const { z, Tamb, dT, Tss, tau, Tpeak } = heatBalance(
     {
-      stopsPerHour: v.stopsPerHour,
+      // Service and emergency stops both at the emergency stop's energy (conservative).
+      stopsPerHour: v.stopsPerHour + v.emergencyStopsPerHour,
       stopEnergy: stop.brakeEnergy,
       mass: v.discMass,
       specificHeat: v.specificHeat,
@@ -82,7 +83,7 @@ export function caliperStopAndHeat(
     makeCheck({
       id: 'temperature-steady',
       section: 'thermal',
-      label: 'Mean steady disc temperature ≤ pad max operating temperature',
+      label: 'Mean steady bulk {drum} temperature ≤ pad max operating temperature',
       value: Tss,
       limit: lining.maxOperatingTemperature,
       kind: 'max',
@@ -93,13 +94,16 @@ export function caliperStopAndHeat(
     makeCheck({
       id: 'temperature-peak',
       section: 'thermal',
-      label: 'Peak disc temperature ≤ pad max temperature',
+      label:
+        'Peak bulk disc temperature (not the rubbing surface) ≤ pad max operating temperature (μ min relied on)',
       value: Tpeak,
-      limit: lining.maxTemperature,
+      limit: lining.maxOperatingTemperature,
       kind: 'max',
       dimension: 'temperature',
       base: Tamb,
-      source: `${lining.source} (${lining.label})`,
+      source: `${lining.source} (${lining.label}), max operating temperature; the table's short-time maximum (${(lining.maxTemperature - 273.15).toFixed(0)} °C) is where the pad is destroyed, not where μ min still holds: the pad maker's rated temperature governs (common practice)`,
+      failHint:
+        'Above this the friction coefficient may fall below μ min: ask the pad maker for the rated temperature, or cut the stops per hour.',
     }),
   );
   charts.push(

@@ -143,7 +143,8 @@ const TRAVEL_DEMO: Record<string, InputValue> = {
   maxBrakeTorque: { value: 300, unit: 'N m' },
   drumMass: { value: 12, unit: 'kg' },
   coolingArea: { value: 0.2, unit: 'm^2' },
-  stopsPerHour: { value: 30, unit: '1/h' },
+  stopsPerHour: { value: 28, unit: '1/h' },
+  emergencyStopsPerHour: { value: 2, unit: '1/h' },
   thrusterForce: { value: 220, unit: 'N' },
 };
 
