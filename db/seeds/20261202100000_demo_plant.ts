@@ -6,6 +6,7 @@ import {
   coreVersion,
   defaults,
   evaluate,
+  resolvedInputs,
   sheetType,
   shippedCriteriaSets,
   vary,
@@ -169,9 +170,13 @@ async function seedSheet(
   let previousApproved: string | undefined;
   for (const [i, r] of sheet.revisions.entries()) {
     if (r.vary) inputs = vary(def, inputs, r.vary[0], r.vary[1]);
-    const evaluation = evaluate(def, inputs, criteria);
+    if (r.set) inputs = { ...inputs, ...structuredClone(r.set) };
     const at = new Date(Date.now() - r.daysAgo * DAY);
     const frozen = r.state !== 'draft';
+    // A frozen record keeps the inputs as the core used them beside its results, as the API does.
+    const evaluation = frozen
+      ? { ...evaluate(def, inputs, criteria), resolvedInputs: resolvedInputs(def, inputs) }
+      : evaluate(def, inputs, criteria);
     const hash = frozen ? contentHash(inputs, evaluation) : null;
     const justification =
       frozen && !evaluation.pass
