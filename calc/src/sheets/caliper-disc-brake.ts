@@ -115,6 +115,8 @@ const CALIPER_PUBLISHED_STEPS = [
   'rubbing-speed-outer-at-set',
   'pv-at-set',
   'friction-power-at-set',
+  'motor-speed-at-set',
+  'max-set-delay',
   'braking-time',
   'stopping-time',
   'stopping-distance',

@@ -153,6 +153,8 @@ const SHOE_PUBLISHED_STEPS = [
   'rubbing-speed-at-set',
   'pv-at-set',
   'friction-power-at-set',
+  'motor-speed-at-set',
+  'max-set-delay',
   'braking-time',
   'stopping-time',
   'stopping-distance',

@@ -47,8 +47,15 @@ export interface DemoRevision {
   changeNote: string;
   /** Which quantity input to vary and by how much (keeps the demo sheets distinct). */
   vary?: [number, number];
-  /** Inputs this revision enters explicitly (field key → value as entered), after `vary`. */
-  set?: Record<string, number | string | { value: number; unit: string }>;
+  /**
+   * Inputs this revision enters that differ from the calc demo values, as [field key, value as
+   * entered], applied after `vary` (never a copy of a demo value: those come from calc).
+   */
+  set?: [string, number | string | { value: number; unit: string }][];
+  /** Fields this revision takes (back) from the calc demo values, after `set`. */
+  demoValues?: string[];
+  /** Optional fields this revision leaves out. */
+  leaveOut?: string[];
   justification?: string;
   comments?: {
     by: string;
@@ -76,22 +83,30 @@ const C2 = 'checker2@holdfast.test';
 
 // Inputs of the first issues as entered before core 1.1.0 asked for them apart: the stop took the
 // gear efficiency as credit, the long-shoe torque was the model, all stops were one count.
-const CORE_1_0_HOIST = {
-  backDrivingEfficiency: 0.88,
-  torqueModel: 'pivoted',
-  stopsPerHour: { value: 60, unit: '1/h' },
-  emergencyStopsPerHour: { value: 0, unit: '1/h' },
-};
-const CORE_1_0_TRAVEL = {
-  torqueModel: 'pivoted',
-  stopsPerHour: { value: 30, unit: '1/h' },
-  emergencyStopsPerHour: { value: 0, unit: '1/h' },
-};
-const CORE_1_0_CALIPER = {
-  backDrivingEfficiency: 0.95,
-  stopsPerHour: { value: 2, unit: '1/h' },
-  emergencyStopsPerHour: { value: 0, unit: '1/h' },
-};
+const CORE_1_0_HOIST: DemoRevision['set'] = [
+  ['backDrivingEfficiency', 0.88],
+  ['torqueModel', 'pivoted'],
+  ['stopsPerHour', { value: 60, unit: '1/h' }],
+  ['emergencyStopsPerHour', { value: 0, unit: '1/h' }],
+];
+const CORE_1_0_TRAVEL: DemoRevision['set'] = [
+  ['torqueModel', 'pivoted'],
+  ['stopsPerHour', { value: 30, unit: '1/h' }],
+  ['emergencyStopsPerHour', { value: 0, unit: '1/h' }],
+];
+const CORE_1_0_CALIPER: DemoRevision['set'] = [
+  ['backDrivingEfficiency', 0.95],
+  ['stopsPerHour', { value: 2, unit: '1/h' }],
+  ['emergencyStopsPerHour', { value: 0, unit: '1/h' }],
+];
+/** What the 1.1.0 re-checks enter: the calc demo values of the fields 1.1.0 asks for apart. */
+const RECHECK_1_1 = [
+  'backDrivingEfficiency',
+  'torqueModel',
+  'stopsPerHour',
+  'emergencyStopsPerHour',
+  'motorMaxSpeed',
+];
 
 export const demoSheets: DemoSheet[] = [
   {
@@ -124,13 +139,7 @@ export const demoSheets: DemoSheet[] = [
         checker: C,
         changeNote:
           'Re-checked with calculation core 1.1.0: rubbing speed and p·v now at the speed the brake sets with (the load speeds up during the set delay); no credit for gear losses in the emergency stop (η_bd 0.88 → 1); torque model long shoe → short shoe for the requirement (conservative); motor maximum speed 2200 rpm from the motor data; set delay 0.3 s is the thruster set time at its coldest oil (maker’s data); 60 stops per hour split into 56 service and 4 emergency stops; drive train checked at μ max with the spring at 1600 N. Longer stopping distance and warmer drum, all checks pass; no change on site.',
-        set: {
-          backDrivingEfficiency: 1,
-          motorMaxSpeed: { value: 2200, unit: 'rpm' },
-          torqueModel: 'short',
-          stopsPerHour: { value: 56, unit: '1/h' },
-          emergencyStopsPerHour: { value: 4, unit: '1/h' },
-        },
+        demoValues: RECHECK_1_1,
         daysAgo: 0,
       },
     ],
@@ -176,12 +185,7 @@ export const demoSheets: DemoSheet[] = [
         checker: C2,
         changeNote:
           'Re-checked with calculation core 1.1.0: motor maximum speed 3000 rpm from the motor data; set delay is the thruster set time at its coldest oil (maker’s data); 30 stops per hour split into 28 service and 2 emergency stops; torque model long shoe → short shoe for the requirement (conservative); drive train checked at μ max with the spring at 800 N; spring travel ratio checked against the lever ratio. All checks pass; no change on site.',
-        set: {
-          motorMaxSpeed: { value: 3000, unit: 'rpm' },
-          torqueModel: 'short',
-          stopsPerHour: { value: 28, unit: '1/h' },
-          emergencyStopsPerHour: { value: 2, unit: '1/h' },
-        },
+        demoValues: RECHECK_1_1,
         daysAgo: 0,
       },
     ],
@@ -250,6 +254,7 @@ export const demoSheets: DemoSheet[] = [
         changeNote: 'First issue.',
         vary: [0, 1.05],
         set: CORE_1_0_CALIPER,
+        leaveOut: ['loadMass'],
         daysAgo: 200,
       },
       {
@@ -258,20 +263,18 @@ export const demoSheets: DemoSheet[] = [
         checker: C,
         changeNote:
           'Re-checked with calculation core 1.1.0: pad p·v and rubbing speed at the speed the brake sets with; no credit for gear losses in the emergency stop (η_bd 0.95 → 1); 2 stops per hour split into 1 service and 1 emergency stop; hoisted mass 10 300 kg entered, so static torque, load speed and inertia are checked against one another; motor maximum speed 2200 rpm from the motor data; shaft rating checked at μ max with the clamp force at the top of its range. All checks pass; no change on site.',
-        set: {
-          backDrivingEfficiency: 1,
-          loadMass: { value: 10_300, unit: 'kg' },
-          motorMaxSpeed: { value: 2200, unit: 'rpm' },
-          stopsPerHour: { value: 1, unit: '1/h' },
-          emergencyStopsPerHour: { value: 1, unit: '1/h' },
-        },
+        demoValues: [...RECHECK_1_1, 'loadMass'],
         daysAgo: 6,
       },
       {
         state: 'draft',
         author: E2,
         changeNote: 'New pads with a lower friction class.',
-        set: { muMin: 0.27, muNominal: 0.32, muMax: 0.38 },
+        set: [
+          ['muMin', 0.27],
+          ['muNominal', 0.32],
+          ['muMax', 0.38],
+        ],
         daysAgo: 4,
       },
     ],
