@@ -1,17 +1,24 @@
 import type { Kysely } from 'kysely';
-import type { CriteriaSet } from '@holdfast/calc';
+import type { CriteriaSet, SheetInputs, SheetTypeDefinition } from '@holdfast/calc';
 import type { DB } from '../src/database.js';
 import {
   contentHash,
   coreVersion,
   defaults,
   evaluate,
+  resolvedInputs,
   sheetType,
   shippedCriteriaSets,
   vary,
   verificationCode,
 } from './demo-plant/calc-access.js';
-import { demoMachines, demoSheets, demoSite, type DemoSheet } from './demo-plant/plant.js';
+import {
+  demoMachines,
+  demoSheets,
+  demoSite,
+  type DemoRevision,
+  type DemoSheet,
+} from './demo-plant/plant.js';
 
 const DAY = 24 * 3600 * 1000;
 const LABELS = 'ABCDEFGHIJ';
@@ -169,9 +176,13 @@ async function seedSheet(
   let previousApproved: string | undefined;
   for (const [i, r] of sheet.revisions.entries()) {
     if (r.vary) inputs = vary(def, inputs, r.vary[0], r.vary[1]);
-    const evaluation = evaluate(def, inputs, criteria);
+    inputs = entered(def, inputs, r);
     const at = new Date(Date.now() - r.daysAgo * DAY);
     const frozen = r.state !== 'draft';
+    // A frozen record keeps the inputs as the core used them beside its results, as the API does.
+    const evaluation = frozen
+      ? { ...evaluate(def, inputs, criteria), resolvedInputs: resolvedInputs(def, inputs) }
+      : evaluate(def, inputs, criteria);
     const hash = frozen ? contentHash(inputs, evaluation) : null;
     const justification =
       frozen && !evaluation.pass
@@ -303,6 +314,16 @@ async function seedSheet(
       }
     }
   }
+}
+
+/** The inputs of a revision: the previous ones with this revision's entries. */
+function entered(def: SheetTypeDefinition, previous: SheetInputs, r: DemoRevision): SheetInputs {
+  const inputs = structuredClone(previous);
+  for (const [key, value] of r.set ?? []) inputs[key] = structuredClone(value);
+  const demo = defaults(def);
+  for (const key of r.demoValues ?? []) if (key in demo) inputs[key] = structuredClone(demo[key]);
+  for (const key of r.leaveOut ?? []) delete inputs[key];
+  return inputs;
 }
 
 async function audit(

@@ -70,6 +70,14 @@ describe('demo plant seed', () => {
         );
       }
       if (r.state !== 'draft') expect(r.hash).toBe(contentHash(r.inputs, r.evaluation));
+      if (r.state !== 'draft') {
+        // Frozen records keep the inputs as the core used them, as the API stores them.
+        const keys = (stored.resolvedInputs ?? []).map((x) => x.key);
+        expect(keys.length).toBeGreaterThan(0);
+        expect(keys.every((k) => k in (r.inputs as object))).toBe(true);
+      }
+      // No approved, current demo revision shows a failing check.
+      if (r.state === 'approved') expect(stored.checks.filter((c) => !c.pass)).toEqual([]);
     }
   });
 
@@ -80,13 +88,13 @@ describe('demo plant seed', () => {
     });
     expect(
       sheet.body.revisions.map((r: { label: string; state: string }) => `${r.label}:${r.state}`),
-    ).toEqual(['A:superseded', 'B:approved']);
+    ).toEqual(['A:superseded', 'B:superseded', 'C:approved']);
     const a = await ctx.request('GET', `/api/revisions/${sheet.body.revisions[0].id}`, {
       as: 'viewer',
     });
     expect(a.body.supersededBy.label).toBe('B');
     const verify = await ctx.request('GET', `/api/verify/${a.body.verificationCode}`);
-    expect(verify.body).toMatchObject({ current: false, newerApproved: { revisionLabel: 'B' } });
+    expect(verify.body).toMatchObject({ current: false, newerApproved: { revisionLabel: 'C' } });
 
     const returned = await ctx.request('GET', '/api/sheets?state=returned', { as: 'engineer' });
     const rev = returned.body.items[0].latest.id;

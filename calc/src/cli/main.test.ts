@@ -35,6 +35,18 @@ describe('holdfast-calc CLI', { timeout: 120_000 }, () => {
     expect(out.checks.length).toBeGreaterThan(10);
   });
 
+  it('a 10 s set delay evaluates (exit 0) with the motor overspeed check failing', () => {
+    const r = run(
+      ['hoist-shoe-brake', '-'],
+      JSON.stringify({ ...hoistDemo, setDelay: { value: 10, unit: 's' } }),
+    );
+    expect(r.status).toBe(0);
+    const out = JSON.parse(r.stdout);
+    expect(out.pass).toBe(false);
+    const c = out.checks.find((x: { id: string }) => x.id === 'motor-overspeed');
+    expect(c.pass).toBe(false);
+  });
+
   it('takes --criteria', () => {
     const r = run(
       ['hoist-shoe-brake', '-', '--criteria', 'general-industry'],

@@ -23,9 +23,19 @@ export interface LimitCheck {
   source: string;
 }
 
-/** Builds a LimitCheck; a zero or negative denominator gives a large finite utilisation. */
-export function limitCheck(spec: Omit<LimitCheck, 'utilisation' | 'pass'>): LimitCheck {
-  const { value, limit, kind, strict } = spec;
+/**
+ * Pass and utilisation of a value against a limit: the one rule every check uses (the sheets'
+ * makeCheck too). Utilisation is value/limit for 'max', limit/value for 'min', both measured from
+ * `base` (e.g. ambient for a temperature rise); a zero or negative denominator gives a large
+ * finite utilisation.
+ */
+export function checkOutcome(
+  value: number,
+  limit: number,
+  kind: 'max' | 'min',
+  strict = false,
+  base = 0,
+): { utilisation: number; pass: boolean } {
   const pass =
     kind === 'max'
       ? strict
@@ -34,11 +44,16 @@ export function limitCheck(spec: Omit<LimitCheck, 'utilisation' | 'pass'>): Limi
       : strict
         ? value > limit
         : value >= limit;
-  const num = kind === 'max' ? value : limit;
-  const den = kind === 'max' ? limit : value;
+  const num = kind === 'max' ? value - base : limit - base;
+  const den = kind === 'max' ? limit - base : value - base;
   let utilisation: number;
-  if (den <= 0) utilisation = num <= 0 ? 0 : 1e9;
+  if (den === 0) utilisation = num === 0 ? 0 : 1e9;
   else utilisation = Math.abs(num / den);
   if (!Number.isFinite(utilisation)) utilisation = 1e9;
-  return { ...spec, utilisation, pass };
+  return { utilisation, pass };
+}
+
+/** Builds a LimitCheck with checkOutcome. */
+export function limitCheck(spec: Omit<LimitCheck, 'utilisation' | 'pass'>): LimitCheck {
+  return { ...spec, ...checkOutcome(spec.value, spec.limit, spec.kind, spec.strict) };
 }

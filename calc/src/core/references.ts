@@ -27,6 +27,9 @@ export const REF = {
   heat: "temperature rise ΔT = E/(m·c), Shigley's MED 8th ed., §16-10",
   cooling:
     'lumped heat balance with convective cooling: P = α·A·(T − T_amb) (Newton cooling, textbook identity)',
+  kinematics: 'kinematics of the drive train (speed ratio; v = ω·D/2)',
+  backDriving:
+    'torque reaching the brake shaft from an overhauling load = M_L·η_bd (efficiency of the drive train driven backwards; η_bd = 1 is the conservative choice for an emergency stop — common practice)',
   stopping:
     'rigid-body dynamics at constant brake torque: α = (M_b − M_drive)/J_eq (textbook identity)',
   tenPercent:

@@ -2,7 +2,7 @@ import type { SectionDefinition } from '../core/types.js';
 import { LININGS } from '../criteria/linings.js';
 import { choice, num, qty, withBounds, type InputsOf } from './field-builders.js';
 import { CALIPER_BOUNDS } from './field-bounds.js';
-import { ARRANGEMENT_CHOICES } from './hoist-shoe-brake.js';
+import { ARRANGEMENT_CHOICES, SET_DELAY_HELP, SET_DELAY_LABEL } from './hoist-shoe-brake.js';
 
 export const CALIPER_SECTIONS: SectionDefinition[] = [
   { id: 'duty', title: 'Duty at the brake shaft' },
@@ -81,10 +81,51 @@ export const CALIPER_FIELDS = withBounds(
       'ft/min',
       { min: 0, exclusiveMin: true },
     ),
-    qty(U, 'setDelay', 'Brake set delay (power off to full torque)', 't_d', 'time', 0.3, 's', 's', {
+    num(
+      U,
+      'backDrivingEfficiency',
+      'Efficiency of the drive train driven backwards by the load (emergency stop)',
+      'η_bd',
+      1,
+      {
+        min: 0,
+        exclusiveMin: true,
+        max: 1,
+        help: 'No credit for gear losses while the load overhauls in an emergency stop: leave 1 unless the gearbox maker states a back-driving efficiency (common practice).',
+      },
+    ),
+    qty(
+      U,
+      'loadMass',
+      'Hoisted mass (load, hook block, ropes), if known',
+      'm',
+      'mass',
+      10_300,
+      'kg',
+      'lb',
+      {
+        min: 0,
+        exclusiveMin: true,
+        required: false,
+        help: 'When given, the static torque is checked against m·g·v_0/ω_b so that torque, speed and inertia describe the same hoist.',
+      },
+    ),
+    qty(U, 'setDelay', SET_DELAY_LABEL, 't_d', 'time', 0.3, 's', 's', {
       min: 0,
       max: 10,
+      help: SET_DELAY_HELP,
     }),
+    qty(
+      U,
+      'motorMaxSpeed',
+      "Motor maximum permissible speed (motor maker's data)",
+      'n_max',
+      'angularSpeed',
+      2200,
+      'rpm',
+      'rpm',
+      { min: 0, exclusiveMin: true, max: 20000 },
+    ),
     qty(
       U,
       'maxStoppingDistance',
@@ -193,7 +234,34 @@ export const CALIPER_FIELDS = withBounds(
       min: 0,
       exclusiveMin: true,
     }),
-    qty(T, 'stopsPerHour', 'Stops per hour', 'z', 'frequency', 2, '1/h', '1/h', { min: 0 }),
+    qty(
+      T,
+      'stopsPerHour',
+      'Service stops per hour made by the brake',
+      'z_s',
+      'frequency',
+      1,
+      '1/h',
+      '1/h',
+      {
+        min: 0,
+        help: 'Stops in normal service where the brake does the stopping (0 when the drive stops electrically and the brake only holds). Taken at the energy of the full-load emergency stop (conservative).',
+      },
+    ),
+    qty(
+      T,
+      'emergencyStopsPerHour',
+      'Emergency stops per hour',
+      'z_e',
+      'frequency',
+      1,
+      '1/h',
+      '1/h',
+      {
+        min: 0,
+        help: 'Full-load emergency stops (power failure, emergency switch): the brake stops the load from the highest speed.',
+      },
+    ),
     qty(T, 'discMass', 'Heat-absorbing disc mass', 'm_d', 'mass', 150, 'kg', 'lb', {
       min: 0,
       exclusiveMin: true,

@@ -11,7 +11,7 @@ import type { LiningMaterial } from '../criteria/linings.js';
 import { stopEnergyParts } from '../energy/stop-energy.js';
 import { heatBalance } from '../energy/heat-balance.js';
 import { releasedSpringForceFormula, forceMarginFormula } from '../release/release.js';
-import { stopping } from '../stopping/stopping.js';
+import { stopping, type StoppingResult } from '../stopping/stopping.js';
 import * as q from '../units/quantities.js';
 import { makeCheck } from './checks.js';
 import { stoppingChart, temperatureChart } from './charts.js';
@@ -25,8 +25,8 @@ export function caliperStopAndHeat(
   t: CaliperTorques,
   lining: LiningMaterial,
   d: Derivation,
-): { checks: CheckResult[]; charts: ChartData[]; warnings: string[] } {
-  const Mhold = duty.holdingTorque;
+): { checks: CheckResult[]; charts: ChartData[]; warnings: string[]; stop: StoppingResult } {
+  const Mhold = duty.driveTorque;
   const omega = duty.brakeSpeed;
   d.section = 'stopping';
   const stop = stopping(
@@ -49,6 +49,7 @@ export function caliperStopAndHeat(
       checks: [],
       charts,
       warnings: [`${stop.message} Stopping distance and heat are not computed.`],
+      stop,
     };
   }
   const checks = [
@@ -67,7 +68,8 @@ export function caliperStopAndHeat(
   stopEnergyParts(q.inertia(v.inertia), stop.speedAfterDelay, Mhold, stop.brakingTime, d);
   const { z, Tamb, dT, Tss, tau, Tpeak } = heatBalance(
     {
-      stopsPerHour: v.stopsPerHour,
+      // Service and emergency stops both at the emergency stop's energy (conservative).
+      stopsPerHour: v.stopsPerHour + v.emergencyStopsPerHour,
       stopEnergy: stop.brakeEnergy,
       mass: v.discMass,
       specificHeat: v.specificHeat,
@@ -81,7 +83,7 @@ export function caliperStopAndHeat(
     makeCheck({
       id: 'temperature-steady',
       section: 'thermal',
-      label: 'Mean steady disc temperature ≤ pad max operating temperature',
+      label: 'Mean steady bulk {drum} temperature ≤ pad max operating temperature',
       value: Tss,
       limit: lining.maxOperatingTemperature,
       kind: 'max',
@@ -92,19 +94,22 @@ export function caliperStopAndHeat(
     makeCheck({
       id: 'temperature-peak',
       section: 'thermal',
-      label: 'Peak disc temperature ≤ pad max temperature',
+      label:
+        'Peak bulk disc temperature (not the rubbing surface) ≤ pad max operating temperature (μ min relied on)',
       value: Tpeak,
-      limit: lining.maxTemperature,
+      limit: lining.maxOperatingTemperature,
       kind: 'max',
       dimension: 'temperature',
       base: Tamb,
-      source: `${lining.source} (${lining.label})`,
+      source: `${lining.source} (${lining.label}), max operating temperature; the table's short-time maximum (${(lining.maxTemperature - 273.15).toFixed(0)} °C) is where the pad is destroyed, not where μ min still holds: the pad maker's rated temperature governs (common practice)`,
+      failHint:
+        'Above this the friction coefficient may fall below μ min: ask the pad maker for the rated temperature, or cut the stops per hour.',
     }),
   );
   charts.push(
     temperatureChart(Tamb, dT, z, tau, lining.maxTemperature, lining.maxOperatingTemperature),
   );
-  return { checks, charts, warnings: [] };
+  return { checks, charts, warnings: [], stop };
 }
 
 /** Release force, the clamp-force range, the setting table and the field settings. */

@@ -17,6 +17,7 @@ import {
   CALIPER_SECTIONS,
   type CaliperInputs,
 } from './caliper-disc-brake-fields.js';
+import { caliperAtSet, caliperConsistency } from './caliper-disc-brake-at-set.js';
 import { caliperReleaseAndSetting, caliperStopAndHeat } from './caliper-disc-brake-stop.js';
 import { caliperDuty, caliperTorqueChecks, caliperTorques } from './caliper-disc-brake-torque.js';
 
@@ -58,9 +59,9 @@ export function evaluateCaliperDiscBrake(
 
   const duty = caliperDuty(v, criteria, d);
   const t = caliperTorques(v, duty, d);
-  out.checks.push(...caliperTorqueChecks(v, duty, t, lining, criteria));
+  out.checks.push(...caliperConsistency(v, duty, d), ...caliperTorqueChecks(v, duty, t, lining));
   const stop = caliperStopAndHeat(v, duty, t, lining, d);
-  out.checks.push(...stop.checks);
+  out.checks.push(...caliperAtSet(v, duty, t, stop.stop, criteria, d), ...stop.checks);
   out.charts.push(...stop.charts);
   out.warnings.push(...stop.warnings);
   const setting = caliperReleaseAndSetting(v, t, criteria, d);
@@ -97,16 +98,25 @@ const CALIPER_PUBLISHED_STEPS = [
   'motor-torque',
   'hoisting-torque',
   'holding-torque',
+  'set-drive-torque',
   'required-torque',
+  'implied-load-mass',
+  'load-inertia-implied',
   'effective-radius',
   'torque-nominal',
   'torque-min',
   'torque-max',
+  'torque-max-adjustable',
   'worn-spring-force',
   'torque-worn-min',
   'pad-pressure',
-  'rubbing-speed',
-  'pv',
+  'speed-after-delay',
+  'set-speed-ratio',
+  'rubbing-speed-outer-at-set',
+  'pv-at-set',
+  'friction-power-at-set',
+  'motor-speed-at-set',
+  'max-set-delay',
   'braking-time',
   'stopping-time',
   'stopping-distance',

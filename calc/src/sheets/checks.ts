@@ -1,4 +1,5 @@
 import type { CheckResult, Dimension } from '../core/types.js';
+import { checkOutcome, type LimitCheck } from '../core/limit-check.js';
 import { formatForDerivation } from '../units/format.js';
 import { DIMENSIONS } from '../units/unit-table.js';
 
@@ -26,17 +27,7 @@ export interface CheckSpec {
 /** Builds a check with utilisation (1.0 at the limit, > 1 fails) and a plain message. */
 export function makeCheck(spec: CheckSpec): CheckResult {
   const { value, limit, kind } = spec;
-  const b = spec.base ?? 0;
-  const utilisation =
-    kind === 'max' ? safeRatio(value - b, limit - b) : safeRatio(limit - b, value - b);
-  const pass =
-    kind === 'max'
-      ? spec.strict
-        ? value < limit
-        : value <= limit
-      : spec.strict
-        ? value > limit
-        : value >= limit;
+  const { utilisation, pass } = checkOutcome(value, limit, kind, spec.strict, spec.base);
   let v = formatForDerivation(value, spec.dimension);
   let l = formatForDerivation(limit, spec.dimension);
   // Printed to the same text but not equal: more figures, so the verdict can be read off.
@@ -64,9 +55,18 @@ export function makeCheck(spec: CheckSpec): CheckResult {
   };
 }
 
-/** Ratio that stays finite: 0/0 → 0, x/0 → a large finite number flagged as over the limit. */
-function safeRatio(a: number, b: number): number {
-  if (b === 0) return a === 0 ? 0 : 1e9;
-  const r = a / b;
-  return Number.isFinite(r) ? Math.abs(r) : 1e9;
+/** A check from a formula function (LimitCheck) placed in a sheet section, with optional advice. */
+export function sheetCheck(lc: LimitCheck, section: string, failHint?: string): CheckResult {
+  return makeCheck({
+    id: lc.id,
+    section,
+    label: lc.label,
+    value: lc.value,
+    limit: lc.limit,
+    dimension: lc.dimension,
+    kind: lc.kind,
+    strict: lc.strict,
+    source: lc.source,
+    failHint,
+  });
 }

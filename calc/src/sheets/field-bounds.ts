@@ -21,6 +21,7 @@ export const SHOE_BOUNDS: Record<string, [number, number]> = {
   springTravelRatio: [0.1, 200],
   drumMaxSpeed: [1, 200],
   stopsPerHour: [0, 3600],
+  emergencyStopsPerHour: [0, 600],
   drumMass: [0.1, 1e5],
   specificHeat: [100, 5000],
   coolingCoefficient: [1, 1000],
@@ -63,6 +64,8 @@ export const HOIST_BOUNDS: Record<string, [number, number]> = {
   ropeDrumInertia: [0, 1e5],
   setDelay: [0, 10],
   maxStoppingDistance: [1, 1e5],
+  backDrivingEfficiency: [0.3, 1],
+  motorMaxSpeed: [10, 20000],
 };
 
 export const TRAVEL_BOUNDS: Record<string, [number, number]> = {
@@ -77,6 +80,7 @@ export const TRAVEL_BOUNDS: Record<string, [number, number]> = {
   brakeDrumInertia: [0, 1000],
   gearInertia: [0, 1000],
   setDelay: [0, 10],
+  motorMaxSpeed: [10, 20000],
 };
 
 export const CALIPER_BOUNDS: Record<string, [number, number]> = {
@@ -89,6 +93,9 @@ export const CALIPER_BOUNDS: Record<string, [number, number]> = {
   loadSpeed: [0.001, 100],
   setDelay: [0, 10],
   maxStoppingDistance: [1, 1e6],
+  backDrivingEfficiency: [0.3, 1],
+  motorMaxSpeed: [10, 20000],
+  loadMass: [1, 1e7],
   padOuterRadius: [10, 5000],
   padInnerRadius: [5, 5000],
   clampForce: [0.01, 1e4],
@@ -104,6 +111,7 @@ export const CALIPER_BOUNDS: Record<string, [number, number]> = {
   wearTravelRatio: [0.1, 10],
   discMaxSpeed: [1, 200],
   stopsPerHour: [0, 3600],
+  emergencyStopsPerHour: [0, 600],
   discMass: [0.1, 1e5],
   specificHeat: [100, 5000],
   coolingCoefficient: [1, 1000],

@@ -5,7 +5,8 @@ import type {
   SheetTypeDefinition,
 } from '../core/types.js';
 import { CalcInputError } from '../core/errors.js';
-import { Derivation } from '../core/step.js';
+import { compute, Derivation } from '../core/step.js';
+import { backDrivenTorqueFormula } from '../stopping/speed-at-set.js';
 import { criterion } from '../criteria/lookup.js';
 import { motorRatedTorque } from '../duty/motor-torque.js';
 import { hoistLoadSpeed, hoistLoadTorques } from '../duty/hoist-load.js';
@@ -26,6 +27,12 @@ import { SHOE_BRAKE_FIELDS, SHOE_SECTIONS } from './shoe-brake-fields.js';
 import { evaluateShoeBrake, validateShoeInputs } from './shoe-brake-evaluate.js';
 
 const U = 'duty';
+
+/** The set delay is a method choice: the slowest set the thruster makes, at its coldest oil. */
+export const SET_DELAY_LABEL =
+  "Brake set delay at the thruster's coldest oil (power off to full torque)";
+export const SET_DELAY_HELP =
+  "Take the thruster's set time at the coldest oil temperature of the site from the thruster maker's data: cold oil sets slowest, and the load speeds up until the brake acts.";
 
 export const ARRANGEMENT_CHOICES = [
   { value: 'single', label: 'One holding brake, control braking other than mechanical' },
@@ -124,10 +131,35 @@ export const HOIST_DUTY_FIELDS = [
     'lb ft^2',
     { min: 0 },
   ),
-  qty(U, 'setDelay', 'Brake set delay (power off to full torque)', 't_d', 'time', 0.3, 's', 's', {
+  num(
+    U,
+    'backDrivingEfficiency',
+    'Efficiency of the drive train driven backwards by the load (emergency stop)',
+    'η_bd',
+    1,
+    {
+      min: 0,
+      exclusiveMin: true,
+      max: 1,
+      help: 'No credit for gear losses while lowering in an emergency stop: leave 1 unless the gearbox maker states a back-driving efficiency (common practice).',
+    },
+  ),
+  qty(U, 'setDelay', SET_DELAY_LABEL, 't_d', 'time', 0.3, 's', 's', {
     min: 0,
     max: 10,
+    help: SET_DELAY_HELP,
   }),
+  qty(
+    U,
+    'motorMaxSpeed',
+    "Motor maximum permissible speed (motor maker's data)",
+    'n_max',
+    'angularSpeed',
+    2200,
+    'rpm',
+    'rpm',
+    { min: 0, exclusiveMin: true, max: 20000 },
+  ),
   qty(
     U,
     'maxStoppingDistance',
@@ -202,13 +234,22 @@ export function evaluateHoistShoeBrake(
   out.warnings.push(
     `Required torque = ${factor.value} × ${REFERENCE_BASIS_TEXT[basis]}; efficiency credit: hoisting torque divides by η, holding torque multiplies by η.`,
   );
+  // Emergency stop while lowering: the load back-drives the train with η_bd (no gear-loss credit).
+  const Md = compute(
+    d,
+    backDrivenTorqueFormula,
+    { M_L: load.staticTorque, eta_bd: v.backDrivingEfficiency },
+    { label: 'Load torque driving the brake shaft during the stop (lowering)' },
+  );
   evaluateShoeBrake(
     v,
     {
       brakeSpeed: omega,
       loadSpeed: vL,
       inertia: J,
-      driveTorque: load.holdingTorque,
+      driveTorque: Md,
+      motorMaxSpeed: v.motorMaxSpeed,
+      brakesOnTrain: v.brakeArrangement === 'two' ? 2 : 1,
       requiredTorque: Mreq,
       requiredSource: `${factor.source}; reference: ${REFERENCE_BASIS_TEXT[basis]}`,
       setDelay: v.setDelay,
@@ -224,6 +265,7 @@ export function evaluateHoistShoeBrake(
     'hoist-static-torque',
     'hoisting-torque',
     'holding-torque',
+    'set-drive-torque',
     'hoist-load-speed',
     'inertia-total',
     'required-torque',

@@ -9,6 +9,12 @@ import { shoeRelease, shoeSettings } from './shoe-brake-release.js';
 import { shoeStop, shoeStopDistanceAndHeat, shoeStopsCheck } from './shoe-brake-stop-heat.js';
 import { shoeLining, shoeTorqueChecks, shoeTorques } from './shoe-brake-torque.js';
 import { evaluateShoeDiscSprings } from './shoe-disc-springs.js';
+import {
+  shoeDriveTrain,
+  shoeDutyAtSet,
+  shoeOverspeed,
+  shoeTravelRatio,
+} from './shoe-brake-at-set.js';
 
 /** What the duty part of a sheet hands to the shoe-brake part (all SI). */
 export interface ShoeDuty {
@@ -24,6 +30,10 @@ export interface ShoeDuty {
   stopLimit?: { value: number; source: string };
   /** Words for the stopping case, e.g. 'lowering the rated load'. */
   stopCase: string;
+  /** Motor maker's maximum speed at the brake shaft, rad/s; undefined = not checked. */
+  motorMaxSpeed?: number;
+  /** Brakes acting on the same drive train (2 for a two-brake hoist); default 1. */
+  brakesOnTrain?: number;
 }
 
 export interface ShoeOutcome {
@@ -71,7 +81,14 @@ export function evaluateShoeBrake(
   const l = shoeLining(v, duty, b, d);
   const stop = shoeStop(duty, l.wornMin, d);
   const stops = shoeStopsCheck(duty, l.wornMin, stop);
-  out.checks.push(...shoeTorqueChecks(v, duty, b, l, lining, criteria), stops.check);
+  out.checks.push(
+    ...shoeTorqueChecks(v, duty, b, l, lining),
+    shoeDriveTrain(v, duty, b, d),
+    ...shoeTravelRatio(v, d),
+    ...shoeDutyAtSet(v, duty, l, stop, criteria, d),
+    stops.check,
+    ...shoeOverspeed(duty, stop, d),
+  );
   out.charts.push(stops.chart);
   if (stop.stops) {
     const heat = shoeStopDistanceAndHeat(v, duty, stop, lining, d);
@@ -124,14 +141,20 @@ const SHOE_PUBLISHED_STEPS = [
   'torque-nominal',
   'torque-min',
   'torque-max',
+  'torque-max-adjustable',
+  'drive-train-brake-torque',
   'worn-spring-force',
   'torque-worn-min',
   'torque-worn-nominal',
   'peak-pressure',
   'mean-pressure',
-  'rubbing-speed',
-  'pv',
   'speed-after-delay',
+  'set-speed-ratio',
+  'rubbing-speed-at-set',
+  'pv-at-set',
+  'friction-power-at-set',
+  'motor-speed-at-set',
+  'max-set-delay',
   'braking-time',
   'stopping-time',
   'stopping-distance',

@@ -34,13 +34,13 @@ export const BRAKE_FIELDS = [
   choice(
     B,
     'torqueModel',
-    'Torque model',
-    'pivoted',
+    'Torque model for the required-torque checks',
+    'short',
     [
+      { value: 'short', label: 'Short shoe (2·μ·N·r), conservative' },
       { value: 'pivoted', label: 'Pivoted long shoe (p = pa·cos θ)' },
-      { value: 'short', label: 'Short shoe (2·μ·N·r)' },
     ],
-    "Pivoted symmetrical shoes per Budynas & Nisbett, Shigley's MED §16-4; the short-shoe model is conservative for the torque.",
+    "Short shoe and pivoted symmetrical long shoe per Budynas & Nisbett, Shigley's MED 8th ed., §16-2 and §16-4. The long shoe gives more torque (about 6 % at 70°): use the short shoe for the required torque and the stop; the drive-train check always takes the higher of the two.",
   ),
   qty(B, 'springForce', 'Main spring force as set (new lining)', 'F_s', 'force', 1100, 'N', 'lbf', {
     min: 0,
@@ -145,7 +145,24 @@ export const LINING_FIELDS = [
 ] as const;
 
 export const THERMAL_FIELDS = [
-  qty(T, 'stopsPerHour', 'Stops per hour', 'z', 'frequency', 60, '1/h', '1/h', { min: 0 }),
+  qty(
+    T,
+    'stopsPerHour',
+    'Service stops per hour made by the brake',
+    'z_s',
+    'frequency',
+    56,
+    '1/h',
+    '1/h',
+    {
+      min: 0,
+      help: 'Stops in normal service where the brake does the stopping (0 when the drive stops electrically and the brake only holds). Taken at the energy of the full-load emergency stop (conservative).',
+    },
+  ),
+  qty(T, 'emergencyStopsPerHour', 'Emergency stops per hour', 'z_e', 'frequency', 4, '1/h', '1/h', {
+    min: 0,
+    help: 'Full-load emergency stops (power failure, emergency switch): the brake stops the load from the highest speed.',
+  }),
   qty(T, 'drumMass', 'Heat-absorbing drum mass', 'm_d', 'mass', 60, 'kg', 'lb', {
     min: 0,
     exclusiveMin: true,

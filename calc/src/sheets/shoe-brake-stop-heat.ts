@@ -92,7 +92,8 @@ export function shoeStopDistanceAndHeat(
   );
   const { z, Tamb, dT, Tss, tau, Tpeak } = heatBalance(
     {
-      stopsPerHour: v.stopsPerHour,
+      // Service and emergency stops both at the emergency stop's energy (conservative).
+      stopsPerHour: v.stopsPerHour + v.emergencyStopsPerHour,
       stopEnergy: stop.brakeEnergy,
       mass: v.drumMass,
       specificHeat: v.specificHeat,
@@ -106,7 +107,7 @@ export function shoeStopDistanceAndHeat(
     makeCheck({
       id: 'temperature-steady',
       section: 'thermal',
-      label: 'Mean steady drum temperature ≤ lining max operating temperature',
+      label: 'Mean steady bulk {drum} temperature ≤ lining max operating temperature',
       value: Tss,
       limit: lining.maxOperatingTemperature,
       kind: 'max',
@@ -117,13 +118,16 @@ export function shoeStopDistanceAndHeat(
     makeCheck({
       id: 'temperature-peak',
       section: 'thermal',
-      label: 'Peak drum temperature ≤ lining max temperature',
+      label:
+        'Peak bulk drum temperature (not the rubbing surface) ≤ lining max operating temperature (μ min relied on)',
       value: Tpeak,
-      limit: lining.maxTemperature,
+      limit: lining.maxOperatingTemperature,
       kind: 'max',
       dimension: 'temperature',
       base: Tamb,
-      source: `${lining.source} (${lining.label})`,
+      source: `${lining.source} (${lining.label}), max operating temperature; the table's short-time maximum (${(lining.maxTemperature - 273.15).toFixed(0)} °C) is where the lining is destroyed, not where μ min still holds: the lining maker's rated temperature governs (common practice)`,
+      failHint:
+        'Above this the friction coefficient may fall below μ min: ask the lining maker for the rated temperature, or cut the stops per hour.',
     }),
   );
   return {

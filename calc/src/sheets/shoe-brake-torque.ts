@@ -1,6 +1,5 @@
-import type { CheckResult, CriteriaSet } from '../core/types.js';
+import type { CheckResult } from '../core/types.js';
 import type { Derivation } from '../core/step.js';
-import { criterion } from '../criteria/lookup.js';
 import type { LiningMaterial } from '../criteria/linings.js';
 import { shoeNormalForce } from '../shoe-brake/shoe-force.js';
 import { shortShoeTorque } from '../shoe-brake/short-shoe.js';
@@ -147,14 +146,13 @@ export function shoeLining(
   return { wornSpringForce: worn.force, wornMin, wornNominal, peakPressure, duties };
 }
 
-/** Torque against the requirement and the drive-train rating, lining pressure, speed and p·v. */
+/** Torque against the requirement and the lining pressures (speed, p·v and the drive train: shoe-brake-at-set.ts). */
 export function shoeTorqueChecks(
   v: ShoeInputs,
   duty: ShoeDuty,
   b: ShoeTorques,
   l: ShoeLining,
   lining: LiningMaterial,
-  criteria: CriteriaSet,
 ): CheckResult[] {
   const tq = (id: string, label: string, value: number) =>
     makeCheck({
@@ -177,17 +175,6 @@ export function shoeTorqueChecks(
       l.wornMin,
     ),
     makeCheck({
-      id: 'torque-max-friction',
-      section: 'brake',
-      label: 'Brake torque at μ max ≤ drive-train rating',
-      value: b.max,
-      limit: v.maxBrakeTorque,
-      kind: 'max',
-      dimension: 'torque',
-      source: 'equipment data (user input): drive-train torque rating at the brake shaft',
-      failHint: 'The brake could overload shaft, coupling or gearbox at high friction.',
-    }),
-    makeCheck({
       id: 'lining-peak-pressure',
       section: 'lining',
       label: 'Peak lining pressure ≤ lining maximum',
@@ -206,26 +193,6 @@ export function shoeTorqueChecks(
       kind: 'max',
       dimension: 'pressure',
       source: `${lining.source} (${lining.label})`,
-    }),
-    makeCheck({
-      id: 'rubbing-speed',
-      section: 'lining',
-      label: 'Rubbing speed ≤ drum rating',
-      value: l.duties.rubbingSpeed,
-      limit: v.drumMaxSpeed,
-      kind: 'max',
-      dimension: 'speed',
-      source: "equipment data (user input): drum maker's peripheral speed rating",
-    }),
-    makeCheck({
-      id: 'pv',
-      section: 'lining',
-      label: 'p·v ≤ limit',
-      value: l.duties.pv,
-      limit: criterion(criteria, 'pvLimit').value,
-      kind: 'max',
-      dimension: 'pv',
-      source: criterion(criteria, 'pvLimit').source,
     }),
   ];
 }

@@ -23,6 +23,7 @@ import { SHOE_FIELD_CARD } from './field-card-layouts.js';
 import { finish, newEvaluation, publishSteps } from './sheet-output.js';
 import { SHOE_BRAKE_FIELDS, SHOE_SECTIONS } from './shoe-brake-fields.js';
 import { evaluateShoeBrake, validateShoeInputs } from './shoe-brake-evaluate.js';
+import { SET_DELAY_HELP, SET_DELAY_LABEL } from './hoist-shoe-brake.js';
 
 const U = 'duty';
 
@@ -112,10 +113,22 @@ export const TRAVEL_DUTY_FIELDS = [
     'lb ft^2',
     { min: 0 },
   ),
-  qty(U, 'setDelay', 'Brake set delay (power off to full torque)', 't_d', 'time', 0.3, 's', 's', {
+  qty(U, 'setDelay', SET_DELAY_LABEL, 't_d', 'time', 0.3, 's', 's', {
     min: 0,
     max: 10,
+    help: SET_DELAY_HELP,
   }),
+  qty(
+    U,
+    'motorMaxSpeed',
+    "Motor maximum permissible speed (motor maker's data)",
+    'n_max',
+    'angularSpeed',
+    3000,
+    'rpm',
+    'rpm',
+    { min: 0, exclusiveMin: true, max: 20000 },
+  ),
 ] as const;
 
 /** Shoe-brake demo values sized for the travel demo (smaller drum and spring than the hoist). */
@@ -130,7 +143,8 @@ const TRAVEL_DEMO: Record<string, InputValue> = {
   maxBrakeTorque: { value: 300, unit: 'N m' },
   drumMass: { value: 12, unit: 'kg' },
   coolingArea: { value: 0.2, unit: 'm^2' },
-  stopsPerHour: { value: 30, unit: '1/h' },
+  stopsPerHour: { value: 28, unit: '1/h' },
+  emergencyStopsPerHour: { value: 2, unit: '1/h' },
   thrusterForce: { value: 220, unit: 'N' },
 };
 
@@ -190,6 +204,7 @@ export function evaluateTravelShoeBrake(
       setDelay: v.setDelay,
       stopLimit: { value: sMax, source: frac.source },
       stopCase: 'travelling',
+      motorMaxSpeed: v.motorMaxSpeed,
     },
     criteria,
     d,

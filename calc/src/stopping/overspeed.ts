@@ -1,5 +1,7 @@
 import { compute, defineFormula, Derivation } from '../core/step.js';
 import { limitCheck, type LimitCheck } from '../core/limit-check.js';
+import { REF } from '../core/references.js';
+import { rubbingSpeedFormula } from '../shoe-brake/lining-duty.js';
 import { requireRange } from '../units/parse.js';
 import type {
   AngularAcceleration,
@@ -9,8 +11,6 @@ import type {
   Speed,
   Time,
 } from '../units/quantities.js';
-
-const REF_KIN = 'kinematics of the drive train (speed ratio; v = ω·D/2)';
 
 export const motorSpeedAtSetFormula = defineFormula({
   id: 'motor-speed-at-set',
@@ -22,20 +22,7 @@ export const motorSpeedAtSetFormula = defineFormula({
     i_m: { text: 'i_m', dimension: 'dimensionless' },
   },
   dimension: 'angularSpeed',
-  reference: REF_KIN,
-});
-
-export const drumPeripheralSpeedAtSetFormula = defineFormula({
-  id: 'drum-peripheral-speed-at-set',
-  label: 'Brake drum (disc) peripheral speed when the brake sets',
-  symbol: 'v_D,set',
-  expression: 'omega_set * D / 2',
-  symbols: {
-    omega_set: { text: 'ω_set', dimension: 'angularSpeed' },
-    D: { text: 'D', dimension: 'length' },
-  },
-  dimension: 'speed',
-  reference: REF_KIN,
+  reference: REF.kinematics,
 });
 
 export const ropeDrumSpeedAtSetFormula = defineFormula({
@@ -48,7 +35,7 @@ export const ropeDrumSpeedAtSetFormula = defineFormula({
     i_g: { text: 'i_g', dimension: 'dimensionless' },
   },
   dimension: 'angularSpeed',
-  reference: REF_KIN,
+  reference: REF.kinematics,
 });
 
 export const maxSetDelayFormula = defineFormula({
@@ -72,17 +59,20 @@ export interface OverspeedInput {
   motorRatio: Ratio;
   /** Motor maker's maximum permissible speed, rad/s (> 0). */
   motorMaxSpeed: AngularSpeed;
-  /** Brake drum diameter (or disc outer diameter), m (> 0). */
-  drumDiameter: Length;
-  /** Drum (disc) maker's peripheral speed rating, m/s (> 0). */
-  drumMaxPeripheralSpeed: Speed;
+  /**
+   * Brake drum diameter (or disc outer diameter), m (> 0), with the drum (disc) maker's peripheral
+   * speed rating, m/s (> 0). Optional: a sheet that already checks the rubbing speed at set
+   * against the same rating leaves them out.
+   */
+  drumDiameter?: Length;
+  drumMaxPeripheralSpeed?: Speed;
   /** Optional rope drum: brake-shaft ÷ rope-drum speed ratio and the drum's maximum speed. */
   ropeDrum?: { gearRatio: Ratio; maxSpeed: AngularSpeed };
 }
 
 export interface OverspeedResult {
   motorSpeed: AngularSpeed;
-  drumPeripheralSpeed: Speed;
+  drumPeripheralSpeed?: Speed;
   ropeDrumSpeed?: AngularSpeed;
   checks: LimitCheck[];
 }
@@ -103,13 +93,14 @@ export function overspeedChecks(input: OverspeedInput, d?: Derivation): Overspee
   requireRange(input.setSpeed, 'setSpeed', { min: 0, exclusiveMin: true }, 'rad/s');
   requireRange(input.motorRatio, 'motorRatio', { min: 0, exclusiveMin: true });
   requireRange(input.motorMaxSpeed, 'motorMaxSpeed', { min: 0, exclusiveMin: true }, 'rad/s');
-  requireRange(input.drumDiameter, 'drumDiameter', { min: 0, exclusiveMin: true }, 'm');
-  requireRange(
-    input.drumMaxPeripheralSpeed,
-    'drumMaxPeripheralSpeed',
-    { min: 0, exclusiveMin: true },
-    'm/s',
-  );
+  const drum =
+    input.drumDiameter !== undefined && input.drumMaxPeripheralSpeed !== undefined
+      ? { D: input.drumDiameter, max: input.drumMaxPeripheralSpeed }
+      : undefined;
+  if (drum) {
+    requireRange(drum.D, 'drumDiameter', { min: 0, exclusiveMin: true }, 'm');
+    requireRange(drum.max, 'drumMaxPeripheralSpeed', { min: 0, exclusiveMin: true }, 'm/s');
+  }
   if (input.ropeDrum) {
     requireRange(input.ropeDrum.gearRatio, 'ropeDrum.gearRatio', { min: 0, exclusiveMin: true });
     requireRange(
@@ -123,10 +114,6 @@ export function overspeedChecks(input: OverspeedInput, d?: Derivation): Overspee
     omega_set: input.setSpeed,
     i_m: input.motorRatio,
   });
-  const drumPeripheralSpeed = compute(d, drumPeripheralSpeedAtSetFormula, {
-    omega_set: input.setSpeed,
-    D: input.drumDiameter,
-  });
   const checks: LimitCheck[] = [
     limitCheck({
       id: 'motor-overspeed',
@@ -137,16 +124,31 @@ export function overspeedChecks(input: OverspeedInput, d?: Derivation): Overspee
       kind: 'max',
       source: "equipment data (user input): motor maker's maximum permissible speed",
     }),
-    limitCheck({
-      id: 'drum-overspeed',
-      label: 'Brake drum peripheral speed when the brake sets ≤ drum rating',
-      value: drumPeripheralSpeed,
-      limit: input.drumMaxPeripheralSpeed,
-      dimension: 'speed',
-      kind: 'max',
-      source: "equipment data (user input): drum maker's peripheral speed rating",
-    }),
   ];
+  let drumPeripheralSpeed: Speed | undefined;
+  if (drum) {
+    drumPeripheralSpeed = compute(
+      d,
+      rubbingSpeedFormula,
+      { omega: input.setSpeed, D: drum.D },
+      {
+        id: 'drum-peripheral-speed-at-set',
+        label: 'Brake drum (disc) peripheral speed when the brake sets',
+        symbol: 'v_D,set',
+      },
+    );
+    checks.push(
+      limitCheck({
+        id: 'drum-overspeed',
+        label: 'Brake drum peripheral speed when the brake sets ≤ drum rating',
+        value: drumPeripheralSpeed,
+        limit: drum.max,
+        dimension: 'speed',
+        kind: 'max',
+        source: "equipment data (user input): drum maker's peripheral speed rating",
+      }),
+    );
+  }
   let ropeDrumSpeed: AngularSpeed | undefined;
   if (input.ropeDrum) {
     ropeDrumSpeed = compute(d, ropeDrumSpeedAtSetFormula, {

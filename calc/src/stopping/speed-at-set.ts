@@ -1,4 +1,5 @@
 import { compute, defineFormula, Derivation } from '../core/step.js';
+import { REF } from '../core/references.js';
 import { requireRange } from '../units/parse.js';
 import type {
   AngularAcceleration,
@@ -13,13 +14,11 @@ import type {
   Time,
   Torque,
 } from '../units/quantities.js';
+import { pvFormula, rubbingSpeedFormula } from '../shoe-brake/lining-duty.js';
 import { delayAccelerationFormula, speedAfterDelayFormula } from './stopping.js';
 
 const REF_SET =
   'rigid-body dynamics (textbook identity): with the drive off and the brake not yet set, the load torque back-driven through the drive train accelerates J_eq for t_d';
-const REF_BACKDRIVE =
-  'torque reaching the brake shaft from an overhauling load = M_L·η_bd (efficiency of the drive train driven backwards; η_bd = 1 is the conservative choice for an emergency stop — common practice)';
-
 export const backDrivenTorqueFormula = defineFormula({
   id: 'set-drive-torque',
   label: 'Load torque back-driving the brake shaft during the set delay',
@@ -30,7 +29,7 @@ export const backDrivenTorqueFormula = defineFormula({
     eta_bd: { text: 'η_bd', dimension: 'dimensionless' },
   },
   dimension: 'torque',
-  reference: REF_BACKDRIVE,
+  reference: REF.backDriving,
 });
 
 export const setSpeedRatioFormula = defineFormula({
@@ -44,34 +43,6 @@ export const setSpeedRatioFormula = defineFormula({
   },
   dimension: 'dimensionless',
   reference: 'definition',
-});
-
-export const rubbingSpeedAtSetFormula = defineFormula({
-  id: 'rubbing-speed-at-set',
-  label: 'Rubbing speed when the brake sets',
-  symbol: 'v_r,set',
-  expression: 'omega_set * r_f',
-  symbols: {
-    omega_set: { text: 'ω_set', dimension: 'angularSpeed' },
-    r_f: { text: 'r_f', dimension: 'length' },
-  },
-  dimension: 'speed',
-  reference:
-    'definition: v = ω·r at the friction radius (drum radius D/2, or disc effective radius)',
-});
-
-export const pvAtSetFormula = defineFormula({
-  id: 'pv-at-set',
-  label: 'Pressure–velocity product when the brake sets',
-  symbol: 'pv_set',
-  expression: 'p_m * v_set',
-  symbols: {
-    p_m: { text: 'p_m', dimension: 'pressure' },
-    v_set: { text: 'v_r,set', dimension: 'speed' },
-  },
-  dimension: 'pv',
-  reference:
-    'pressure–velocity product p·v at the highest rubbing speed of the stop (common practice for lining duty)',
 });
 
 export const frictionPowerAtSetFormula = defineFormula({
@@ -176,29 +147,81 @@ export function speedAtSet(input: SpeedAtSetInput, d?: Derivation, prefix = ''):
       reference: REF_SET,
     },
   );
+  const atSet = dutyAtSet(
+    {
+      setSpeed,
+      speed: input.speed,
+      frictionRadius: input.frictionRadius,
+      pressure: input.pressure,
+      brakeTorque: input.brakeTorque,
+    },
+    d,
+    prefix,
+  );
+  return { driveTorque, delayAcceleration, setSpeed, ...atSet };
+}
+
+export interface DutyAtSetInput {
+  /** Brake-shaft speed when the brake sets (ω_set, e.g. stopping()'s speedAfterDelay), rad/s. */
+  setSpeed: AngularSpeed;
+  /** Brake-shaft speed at power off, rad/s (> 0). */
+  speed: AngularSpeed;
+  /** Friction radius: drum radius D/2, or the disc's effective or outer radius, m (> 0). */
+  frictionRadius: Length;
+  /** Mean lining or pad pressure, Pa (≥ 0). */
+  pressure: Pressure;
+  /** Brake torque once set, N·m (≥ 0). */
+  brakeTorque: Torque;
+}
+
+/**
+ * Lining duty at the speed the brake sets with: k_set = ω_set/ω_0, rubbing speed v = ω_set·r_f
+ * (the lining-duty formula v = ω·D/2 with D = 2·r_f), p·v at that speed and the friction power
+ * M_b·ω_set. A sheet that has already run stopping() passes its ω_set here, so the speed is
+ * computed once.
+ */
+export function dutyAtSet(
+  input: DutyAtSetInput,
+  d?: Derivation,
+  prefix = '',
+): Omit<SpeedAtSetResult, 'driveTorque' | 'delayAcceleration' | 'setSpeed'> {
+  requireRange(input.setSpeed, 'setSpeed', { min: 0 }, 'rad/s');
+  requireRange(input.speed, 'speed', { min: 0, exclusiveMin: true }, 'rad/s');
+  requireRange(input.frictionRadius, 'frictionRadius', { min: 0, exclusiveMin: true }, 'm');
+  requireRange(input.pressure, 'pressure', { min: 0 }, 'Pa');
+  requireRange(input.brakeTorque, 'brakeTorque', { min: 0 }, 'N·m');
+  const id = (s: string) => ({ id: prefix + s });
   const speedRatio = compute(
     d,
     setSpeedRatioFormula,
-    { omega_set: setSpeed, omega_0: input.speed },
+    { omega_set: input.setSpeed, omega_0: input.speed },
     id('set-speed-ratio'),
   );
   const rubbingSpeed = compute(
     d,
-    rubbingSpeedAtSetFormula,
-    { omega_set: setSpeed, r_f: input.frictionRadius },
-    id('rubbing-speed-at-set'),
+    rubbingSpeedFormula,
+    { omega: input.setSpeed, D: 2 * input.frictionRadius },
+    {
+      ...id('rubbing-speed-at-set'),
+      label: 'Rubbing speed when the brake sets (highest of the stop)',
+      symbol: 'v_r,set',
+    },
   );
   const pv = compute(
     d,
-    pvAtSetFormula,
-    { p_m: input.pressure, v_set: rubbingSpeed },
-    id('pv-at-set'),
+    pvFormula,
+    { p_m: input.pressure, v_r: rubbingSpeed },
+    {
+      ...id('pv-at-set'),
+      label: 'Pressure–velocity product when the brake sets',
+      symbol: 'pv_set',
+    },
   );
   const frictionPower = compute(
     d,
     frictionPowerAtSetFormula,
-    { M_b: input.brakeTorque, omega_set: setSpeed },
+    { M_b: input.brakeTorque, omega_set: input.setSpeed },
     id('friction-power-at-set'),
   );
-  return { driveTorque, delayAcceleration, setSpeed, speedRatio, rubbingSpeed, pv, frictionPower };
+  return { speedRatio, rubbingSpeed, pv, frictionPower };
 }

@@ -55,6 +55,11 @@ export function evaluate(
   return def.evaluate(structuredClone(inputs), criteria);
 }
 
+/** The inputs as the core used them (entered and SI), stored with a frozen revision. */
+export function resolvedInputs(def: SheetTypeDefinition, inputs: SheetInputs) {
+  return calc.resolveInputs(def.fields, inputs);
+}
+
 /** Same rule as the server: SHA-256 over canonical JSON of inputs and evaluation. */
 export function contentHash(inputs: unknown, evaluation: unknown): string {
   return createHash('sha256').update(canonicalJson({ inputs, evaluation })).digest('hex');

@@ -47,6 +47,15 @@ export interface DemoRevision {
   changeNote: string;
   /** Which quantity input to vary and by how much (keeps the demo sheets distinct). */
   vary?: [number, number];
+  /**
+   * Inputs this revision enters that differ from the calc demo values, as [field key, value as
+   * entered], applied after `vary` (never a copy of a demo value: those come from calc).
+   */
+  set?: [string, number | string | { value: number; unit: string }][];
+  /** Fields this revision takes (back) from the calc demo values, after `set`. */
+  demoValues?: string[];
+  /** Optional fields this revision leaves out. */
+  leaveOut?: string[];
   justification?: string;
   comments?: {
     by: string;
@@ -72,6 +81,33 @@ const E2 = 'engineer2@holdfast.test';
 const C = 'checker@holdfast.test';
 const C2 = 'checker2@holdfast.test';
 
+// Inputs of the first issues as entered before core 1.1.0 asked for them apart: the stop took the
+// gear efficiency as credit, the long-shoe torque was the model, all stops were one count.
+const CORE_1_0_HOIST: DemoRevision['set'] = [
+  ['backDrivingEfficiency', 0.88],
+  ['torqueModel', 'pivoted'],
+  ['stopsPerHour', { value: 60, unit: '1/h' }],
+  ['emergencyStopsPerHour', { value: 0, unit: '1/h' }],
+];
+const CORE_1_0_TRAVEL: DemoRevision['set'] = [
+  ['torqueModel', 'pivoted'],
+  ['stopsPerHour', { value: 30, unit: '1/h' }],
+  ['emergencyStopsPerHour', { value: 0, unit: '1/h' }],
+];
+const CORE_1_0_CALIPER: DemoRevision['set'] = [
+  ['backDrivingEfficiency', 0.95],
+  ['stopsPerHour', { value: 2, unit: '1/h' }],
+  ['emergencyStopsPerHour', { value: 0, unit: '1/h' }],
+];
+/** What the 1.1.0 re-checks enter: the calc demo values of the fields 1.1.0 asks for apart. */
+const RECHECK_1_1 = [
+  'backDrivingEfficiency',
+  'torqueModel',
+  'stopsPerHour',
+  'emergencyStopsPerHour',
+  'motorMaxSpeed',
+];
+
 export const demoSheets: DemoSheet[] = [
   {
     title: 'Ladle crane 1 main hoist brake 1, heavier ladle',
@@ -80,7 +116,15 @@ export const demoSheets: DemoSheet[] = [
     sheetType: 'hoist-shoe-brake',
     owner: E,
     revisions: [
-      { state: 'superseded', author: E, checker: C, changeNote: 'First issue.', daysAgo: 120 },
+      {
+        state: 'superseded',
+        author: E,
+        checker: C,
+        changeNote: 'First issue.',
+        // As entered under core 1.0.0: gear-loss credit while lowering, long-shoe torque, one stop count.
+        set: CORE_1_0_HOIST,
+        daysAgo: 120,
+      },
       {
         state: 'approved',
         author: E,
@@ -88,6 +132,15 @@ export const demoSheets: DemoSheet[] = [
         changeNote: 'Ladle mass raised; spring re-set.',
         vary: [0, 1.08],
         daysAgo: 30,
+      },
+      {
+        state: 'approved',
+        author: E,
+        checker: C,
+        changeNote:
+          'Re-checked with calculation core 1.1.0: rubbing speed and p·v now at the speed the brake sets with (the load speeds up during the set delay); no credit for gear losses in the emergency stop (η_bd 0.88 → 1); torque model long shoe → short shoe for the requirement (conservative); motor maximum speed 2200 rpm from the motor data; set delay 0.3 s is the thruster set time at its coldest oil (maker’s data); 60 stops per hour split into 56 service and 4 emergency stops; drive train checked at μ max with the spring at 1600 N. Longer stopping distance and warmer drum, all checks pass; no change on site.',
+        demoValues: RECHECK_1_1,
+        daysAgo: 0,
       },
     ],
   },
@@ -118,7 +171,23 @@ export const demoSheets: DemoSheet[] = [
     sheetType: 'travel-shoe-brake',
     owner: E2,
     revisions: [
-      { state: 'approved', author: E2, checker: C, changeNote: 'First issue.', daysAgo: 60 },
+      {
+        state: 'approved',
+        author: E2,
+        checker: C,
+        changeNote: 'First issue.',
+        set: CORE_1_0_TRAVEL,
+        daysAgo: 60,
+      },
+      {
+        state: 'approved',
+        author: E2,
+        checker: C2,
+        changeNote:
+          'Re-checked with calculation core 1.1.0: motor maximum speed 3000 rpm from the motor data; set delay is the thruster set time at its coldest oil (maker’s data); 30 stops per hour split into 28 service and 2 emergency stops; torque model long shoe → short shoe for the requirement (conservative); drive train checked at μ max with the spring at 800 N; spring travel ratio checked against the lever ratio. All checks pass; no change on site.',
+        demoValues: RECHECK_1_1,
+        daysAgo: 0,
+      },
     ],
   },
   {
@@ -184,13 +253,28 @@ export const demoSheets: DemoSheet[] = [
         checker: C2,
         changeNote: 'First issue.',
         vary: [0, 1.05],
+        set: CORE_1_0_CALIPER,
+        leaveOut: ['loadMass'],
         daysAgo: 200,
+      },
+      {
+        state: 'approved',
+        author: E2,
+        checker: C,
+        changeNote:
+          'Re-checked with calculation core 1.1.0: pad p·v and rubbing speed at the speed the brake sets with; no credit for gear losses in the emergency stop (η_bd 0.95 → 1); 2 stops per hour split into 1 service and 1 emergency stop; hoisted mass 10 300 kg entered, so static torque, load speed and inertia are checked against one another; motor maximum speed 2200 rpm from the motor data; shaft rating checked at μ max with the clamp force at the top of its range. All checks pass; no change on site.',
+        demoValues: [...RECHECK_1_1, 'loadMass'],
+        daysAgo: 6,
       },
       {
         state: 'draft',
         author: E2,
         changeNote: 'New pads with a lower friction class.',
-        vary: [1, 0.95],
+        set: [
+          ['muMin', 0.27],
+          ['muNominal', 0.32],
+          ['muMax', 0.38],
+        ],
         daysAgo: 4,
       },
     ],

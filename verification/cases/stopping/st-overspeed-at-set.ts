@@ -35,7 +35,8 @@ export const verificationCase = defineCase({
       ropeDrum: { gearRatio: ratio(40), maxSpeed: rpm(40) },
     });
     return {
-      vD: r.drumPeripheralSpeed,
+      // Given here (the drum inputs are optional), so the speed is always computed.
+      vD: r.drumPeripheralSpeed ?? Number.NaN,
       uMotor: r.checks[0].utilisation,
       uDrum: r.checks[1].utilisation,
       nRope: (r.ropeDrumSpeed! * 30) / Math.PI,
