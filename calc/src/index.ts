@@ -1,4 +1,5 @@
 export type * from './core/types.js';
+export type * from './field/tolerance-types.js';
 export {
   CalcInputError,
   isCalcInputError,
