@@ -92,3 +92,10 @@ export { travelShoeBrakeSheet, evaluateTravelShoeBrake } from './sheets/travel-s
 export { caliperDiscBrakeSheet, evaluateCaliperDiscBrake } from './sheets/caliper-disc-brake.js';
 export { makeCheck, type CheckSpec } from './sheets/checks.js';
 export { SAFETY_CAUTIONS } from './sheets/sheet-output.js';
+export {
+  evaluateTolerance,
+  toleranceBounds,
+  settingsWithTolerance,
+  type ToleratedSetting,
+} from './field/evaluate-tolerance.js';
+export * as fieldTolerances from './field/tolerances.js';
