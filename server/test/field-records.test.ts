@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { InspectionScheduleService } from '../src/field-records/inspection-schedule.service.js';
 import { Database } from '../src/database/database.js';
+import { ensurePoppler, inspectPdf } from '../src/print/testing/poppler.js';
 import {
   approve,
   createSheet,
@@ -228,6 +229,43 @@ describe('field records', () => {
       },
     );
     expect(state.body.setTo).toMatchObject({ revisionId, superseded: false });
+  });
+
+  it('prints the record with targets, tolerances, signatures and a code /verify answers for', async () => {
+    ensurePoppler();
+    const b = body({
+      measurements: [
+        { settingKey: 'springLength', asFound: 0.2, asLeft: spring().value, reason: '' },
+      ],
+      findings: 'Lining at 9 mm on both shoes.',
+    });
+    await ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
+    const signed = await ctx.request('POST', `/api/field-records/${b.id}/sign`, {
+      as: 'technician',
+      body: {},
+    });
+    const res = await fetch(`${ctx.baseUrl}/api/field-records/${b.id}/pdf`, {
+      headers: { authorization: `Bearer ${await ctx.token('viewer')}` },
+    });
+    expect(res.status).toBe(200);
+    expect(res.headers.get('content-type')).toContain('application/pdf');
+    const facts = inspectPdf(Buffer.from(await res.arrayBuffer()), 'field-record');
+    facts.text = facts.text.replace(/\s+/g, ' ');
+    expect(facts.text).toContain('Field record');
+    expect(facts.text).toContain('Main spring length as set');
+    expect(facts.text).toMatch(/± 0\.50* mm/);
+    expect(facts.text).toContain('Noor Halden (NH)');
+    expect(facts.text).toContain(signed.body.verificationCode);
+    expect(facts.text).toContain('Lining at 9 mm on both shoes.');
+    expect(facts.fonts.length).toBeGreaterThan(0);
+    expect(facts.fonts.every((f) => f.embedded)).toBe(true);
+    const v = await ctx.request('GET', `/api/verify/${signed.body.verificationCode}`);
+    expect(v.status).toBe(200);
+    expect(v.body).toMatchObject({
+      kind: 'field-record',
+      status: 'signed',
+      setTo: { revisionLabel: 'A', current: true },
+    });
   });
 
   it('a record made against a revision since superseded is flagged', async () => {

@@ -5,6 +5,7 @@ import type {
   CreateFieldRecordInput,
   FieldForm,
   FieldIssue,
+  FieldRecordVerify,
   FieldMeasurementInput,
   FieldRecord,
   FieldRecordSummary,
@@ -340,5 +341,27 @@ export class FieldRecordsService {
       });
     });
     return this.get(id);
+  }
+
+  /** The public answer for a code printed on a field record; undefined when none carries it. */
+  async verify(code: string): Promise<FieldRecordVerify | undefined> {
+    const hit = await this.repo.byVerificationCode(code);
+    if (!hit) return undefined;
+    const r = await this.get(hit.id);
+    return {
+      kind: 'field-record',
+      recordKind: r.kind,
+      positionTag: r.positionTag,
+      performedAt: r.performedAt,
+      status: r.status,
+      signedAt: r.signed?.at ?? null,
+      countersignedAt: r.countersigned?.at ?? null,
+      setTo: {
+        documentNumber: r.documentNumber,
+        revisionLabel: r.revisionLabel,
+        current: !r.flags.superseded,
+        underReview: r.flags.underReview,
+      },
+    };
   }
 }
