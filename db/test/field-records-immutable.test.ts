@@ -190,3 +190,61 @@ describe('field records in PostgreSQL, as the app role', () => {
     expect(rows[0].def).toContain('technician');
   });
 });
+
+describe('demo field records', () => {
+  let fresh: Awaited<ReturnType<typeof createFreshDatabase>>;
+  let db: ReturnType<typeof createDatabase>;
+  beforeAll(async () => {
+    fresh = await createFreshDatabase('field_demo');
+    const plain = createMigrationDatabase(fresh.url);
+    await migrateToLatest(plain);
+    await plain.destroy();
+    db = createDatabase({ connectionString: fresh.url, max: 1 });
+    await seed(db, true);
+  }, 120000);
+  afterAll(async () => {
+    await db?.destroy();
+    await fresh?.drop();
+  });
+
+  it('hold a wear trend, an out-of-tolerance record with its reason, and an overdue interval; seeding twice adds nothing', async () => {
+    const rows = await db
+      .selectFrom('fieldRecords as f')
+      .innerJoin('brakePositions as p', 'p.id', 'f.positionId')
+      .select(['p.tag', 'f.id', 'f.status', 'f.performedAt', 'f.outOfTolerance'])
+      .orderBy('f.performedAt')
+      .execute();
+    const mh = rows.filter((r) => r.tag === 'MH-B1');
+    expect(mh.length).toBeGreaterThanOrEqual(6);
+    const span = mh.at(-1)!.performedAt.getTime() - mh[0]!.performedAt.getTime();
+    expect(span).toBeGreaterThan(90 * 86_400_000);
+    const reserve = await db
+      .selectFrom('fieldRecordMeasurements')
+      .select(['recordId', 'asFound', 'asLeft'])
+      .where('settingKey', '=', 'reserveStroke')
+      .where(
+        'recordId',
+        'in',
+        mh.map((r) => r.id),
+      )
+      .execute();
+    const series = mh.map((r) => {
+      const m = reserve.find((x) => x.recordId === r.id)!;
+      return m.asFound ?? m.asLeft!;
+    });
+    for (let i = 1; i < series.length; i++) expect(series[i]).toBeLessThan(series[i - 1]!);
+    const out = rows.filter((r) => r.outOfTolerance);
+    expect(out.map((r) => [r.tag, r.status])).toEqual([['DB-1', 'signed']]);
+    const reason = await db
+      .selectFrom('fieldRecordMeasurements')
+      .select('reason')
+      .where('recordId', '=', out[0]!.id)
+      .executeTakeFirstOrThrow();
+    expect(reason.reason).not.toBe('');
+    const tr = rows.filter((r) => r.tag === 'TR-B1');
+    expect(Date.now() - tr.at(-1)!.performedAt.getTime()).toBeGreaterThan(30 * 86_400_000);
+    await seed(db, true);
+    const again = await db.selectFrom('fieldRecords').select('id').execute();
+    expect(again).toHaveLength(rows.length);
+  });
+});
