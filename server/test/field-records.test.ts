@@ -268,6 +268,39 @@ describe('field records', () => {
     });
   });
 
+  it('photos go through the attachment path, owned by the record, and only onto a draft', async () => {
+    const b = body();
+    await ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
+    const send = async (bytes: Buffer, name: string) => {
+      const form = new FormData();
+      form.append('file', new Blob([new Uint8Array(bytes)]), name);
+      const res = await fetch(`${ctx.baseUrl}/api/field-records/${b.id}/attachments`, {
+        method: 'POST',
+        headers: { authorization: `Bearer ${await ctx.token('technician')}` },
+        body: form,
+      });
+      return { status: res.status, body: await res.json() };
+    };
+    const png = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 0]);
+    const ok = await send(png, 'shoe-a.png');
+    expect(ok.status).toBe(201);
+    expect((await send(Buffer.from('not a photo'), 'x.png')).status).toBe(415);
+    const list = await ctx.request('GET', `/api/field-records/${b.id}/attachments`, {
+      as: 'viewer',
+    });
+    expect(list.body.items.map((a: { id: string }) => a.id)).toEqual([ok.body.id]);
+    const revFiles = await ctx.request('GET', `/api/revisions/${revisionId}/attachments`, {
+      as: 'engineer',
+    });
+    expect(revFiles.body.items).toEqual([]);
+    const dl = await fetch(`${ctx.baseUrl}/api/attachments/${ok.body.id}/download`, {
+      headers: { authorization: `Bearer ${await ctx.token('technician')}` },
+    });
+    expect(Buffer.from(await dl.arrayBuffer())).toEqual(png);
+    await ctx.request('POST', `/api/field-records/${b.id}/sign`, { as: 'technician', body: {} });
+    expect((await send(png, 'late.png')).status).toBe(409);
+  });
+
   it('a record made against a revision since superseded is flagged', async () => {
     const b = body();
     await ctx.request('POST', '/api/field-records', { as: 'technician', body: b });

@@ -1,5 +1,19 @@
-import { Body, Controller, Get, HttpCode, Param, Patch, Post, Query, Res } from '@nestjs/common';
-import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import {
+  Body,
+  Controller,
+  Get,
+  HttpCode,
+  Param,
+  Patch,
+  Post,
+  Query,
+  Res,
+  UploadedFile,
+  UseInterceptors,
+} from '@nestjs/common';
+import { FileInterceptor } from '@nestjs/platform-express';
+import { memoryStorage } from 'multer';
+import { ApiBearerAuth, ApiBody, ApiConsumes, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import {
   countersignFieldRecordSchema,
@@ -12,7 +26,11 @@ import {
   type FieldRecord,
   type FieldRecordList,
   type UpdateFieldRecordInput,
+  MAX_ATTACHMENT_BYTES,
+  type Attachment,
+  type AttachmentList,
 } from '@holdfast/shared';
+import { FieldRecordPhotosService } from './field-record-photos.service.js';
 import { CurrentUser, type AuthUser } from '../auth/auth-user.js';
 import { Roles, SignedIn } from '../auth/policy.js';
 import { ApiBodySchema } from '../common/openapi.js';
@@ -31,6 +49,7 @@ export class FieldRecordsController {
   constructor(
     private readonly records: FieldRecordsService,
     private readonly schedule: InspectionScheduleService,
+    private readonly photos: FieldRecordPhotosService,
   ) {}
 
   @Get()
@@ -102,5 +121,32 @@ export class FieldRecordsController {
     @Body(new ZodValidationPipe(countersignFieldRecordSchema)) input: { note: string },
   ): Promise<FieldRecord> {
     return this.records.countersign(user, id, input.note);
+  }
+
+  @Get(':id/attachments')
+  @SignedIn()
+  async listPhotos(@Param('id', UuidParamPipe) id: string): Promise<AttachmentList> {
+    return { items: await this.photos.list(id) };
+  }
+
+  @Post(':id/attachments')
+  @HttpCode(201)
+  @Roles(...RECORDERS)
+  @ApiConsumes('multipart/form-data')
+  @ApiBody({
+    schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' } } },
+  })
+  @UseInterceptors(
+    FileInterceptor('file', {
+      storage: memoryStorage(),
+      limits: { fileSize: MAX_ATTACHMENT_BYTES, files: 1 },
+    }),
+  )
+  uploadPhoto(
+    @CurrentUser() user: AuthUser,
+    @Param('id', UuidParamPipe) id: string,
+    @UploadedFile() file: Express.Multer.File | undefined,
+  ): Promise<Attachment> {
+    return this.photos.upload(user, id, file);
   }
 }

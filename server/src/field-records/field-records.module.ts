@@ -1,4 +1,6 @@
 import { Module } from '@nestjs/common';
+import { StorageModule } from '../storage/storage.module.js';
+import { FieldRecordPhotosService } from './field-record-photos.service.js';
 import { FieldRecordsController } from './field-records.controller.js';
 import { FieldRecordsRepository } from './field-records.repository.js';
 import { FieldRecordsService } from './field-records.service.js';
@@ -8,6 +10,7 @@ import { InspectionScheduleService } from './inspection-schedule.service.js';
 import { PositionFieldController } from './position-field.controller.js';
 
 @Module({
+  imports: [StorageModule],
   controllers: [FieldRecordsController, PositionFieldController],
   providers: [
     FieldRecordsRepository,
@@ -15,6 +18,7 @@ import { PositionFieldController } from './position-field.controller.js';
     InspectionScheduleRepository,
     InspectionScheduleService,
     InspectionRemindersJob,
+    FieldRecordPhotosService,
   ],
   exports: [FieldRecordsRepository, FieldRecordsService],
 })

@@ -276,4 +276,38 @@ export class FieldRecordsRepository {
       .where('verificationCode', '=', code)
       .executeTakeFirst();
   }
+
+  photos(recordId: string) {
+    return this.db
+      .selectFrom('attachments')
+      .selectAll()
+      .where('fieldRecordId', '=', recordId)
+      .orderBy('createdAt')
+      .execute();
+  }
+
+  async countPhotos(trx: Kysely<DB>, recordId: string): Promise<number> {
+    const row = await trx
+      .selectFrom('attachments')
+      .select((eb) => eb.fn.countAll<string>().as('n'))
+      .where('fieldRecordId', '=', recordId)
+      .executeTakeFirstOrThrow();
+    return Number(row.n);
+  }
+
+  insertPhoto(
+    trx: Kysely<DB>,
+    row: {
+      revisionId: string;
+      fieldRecordId: string;
+      fileName: string;
+      contentType: string;
+      size: number;
+      sha256: string;
+      storageKey: string;
+      uploadedBy: string;
+    },
+  ) {
+    return trx.insertInto('attachments').values(row).returningAll().executeTakeFirstOrThrow();
+  }
 }
