@@ -1,8 +1,6 @@
 import { Injectable, Logger, type OnApplicationBootstrap } from '@nestjs/common';
-import { JobQueue } from '../outbox/job-queue.js';
+import { JobQueue, REMINDER_QUEUE } from '../outbox/job-queue.js';
 import { InspectionScheduleService } from './inspection-schedule.service.js';
-
-export const REMINDER_QUEUE = 'inspection-reminders';
 
 /**
  * Runs the reminder pass from the job queue every hour (pg-boss cron; one instance wins each
@@ -18,7 +16,11 @@ export class InspectionRemindersJob implements OnApplicationBootstrap {
   ) {}
 
   async onApplicationBootstrap(): Promise<void> {
-    await this.queue.boss.createQueue(REMINDER_QUEUE);
+    // The queue is made by queue-install.ts as the owner (the app role may not create tables);
+    // test databases are migrated by a superuser, where this is a no-op when it exists.
+    if (!(await this.queue.boss.getQueue(REMINDER_QUEUE))) {
+      await this.queue.boss.createQueue(REMINDER_QUEUE);
+    }
     await this.queue.boss.schedule(REMINDER_QUEUE, '17 * * * *');
     await this.queue.work(REMINDER_QUEUE, async () => {
       const n = await this.schedule.sendReminders();
