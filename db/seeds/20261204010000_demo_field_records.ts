@@ -5,6 +5,10 @@ import type { DB } from '../src/database.js';
 import { verificationCode } from './demo-plant/calc-access.js';
 
 const DAY = 24 * 3600 * 1000;
+// Field-card keys of what the fitters measured (the values are field readings, not sheet inputs).
+const RESERVE = 'reserveStroke';
+const CLEARANCE = 'shoeClearance';
+const AIR_GAP = 'airGap';
 const MM = 1e-3;
 
 /** One invented visit to a brake. Values in SI; `found`/`left` by field-card key. */
@@ -38,7 +42,7 @@ export async function seed(db: Kysely<DB>): Promise<void> {
   const plantEngineer = people.find((p) => p.email === 'checker@holdfast.test');
   if (!tech || !plantEngineer) return;
 
-  const reserve = (mm: number) => ({ reserveStroke: mm * MM });
+  const reserve = (mm: number) => ({ [RESERVE]: mm * MM });
   const wear: Visit[] = [
     [112, 20.0, 12.0, 11.9],
     [92, 18.6, 11.55, 11.5],
@@ -50,8 +54,8 @@ export async function seed(db: Kysely<DB>): Promise<void> {
     daysAgo,
     kind: i === 0 ? 'commissioning' : 'periodic-inspection',
     // Inspections find the reserve stroke and leave it (no re-adjustment yet): as left empty.
-    found: i === 0 ? {} : { ...reserve(stroke), shoeClearance: 0.85 * MM },
-    left: i === 0 ? { ...reserve(stroke), shoeClearance: 0.8 * MM } : {},
+    found: i === 0 ? {} : { ...reserve(stroke), [CLEARANCE]: 0.85 * MM },
+    left: i === 0 ? { ...reserve(stroke), [CLEARANCE]: 0.8 * MM } : {},
     lining: [a * MM, b * MM],
     findings:
       i === 0
@@ -72,7 +76,7 @@ export async function seed(db: Kysely<DB>): Promise<void> {
         daysAgo: 55,
         kind: 'commissioning',
         found: {},
-        left: { reserveStroke: 20 * MM, shoeClearance: 0.8 * MM },
+        left: { [RESERVE]: 20 * MM, [CLEARANCE]: 0.8 * MM },
         lining: [12 * MM, 12 * MM],
         findings: 'Set to the card; no drag on either shoe after ten cycles.',
         countersign: true,
@@ -90,10 +94,10 @@ export async function seed(db: Kysely<DB>): Promise<void> {
       {
         daysAgo: 3,
         kind: 'periodic-inspection',
-        found: { airGap: 1.7 * MM },
-        left: { airGap: 1.5 * MM },
+        found: { [AIR_GAP]: 1.7 * MM },
+        left: { [AIR_GAP]: 1.5 * MM },
         reasons: {
-          airGap:
+          [AIR_GAP]:
             'Pads worn to the end of the adjuster range; the gap cannot be closed further. New pads ordered.',
         },
         lining: null,
