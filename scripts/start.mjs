@@ -72,7 +72,7 @@ step(
 );
 if (demo) {
   step(
-    'demo sign-ins (demo only): engineer@holdfast.test, checker@holdfast.test, viewer@holdfast.test, admin@holdfast.test — password holdfast-demo',
+    'demo sign-ins (demo only): engineer@holdfast.test, checker@holdfast.test, viewer@holdfast.test, admin@holdfast.test, technician@holdfast.test — password holdfast-demo',
   );
 } else {
   step('no demo (HOLDFAST_DEMO=0): create the first admin with `npm run create-admin`');

@@ -1,4 +1,5 @@
 export type * from './core/types.js';
+export type * from './field/tolerance-types.js';
 export {
   CalcInputError,
   isCalcInputError,
@@ -97,3 +98,10 @@ export { travelShoeBrakeSheet, evaluateTravelShoeBrake } from './sheets/travel-s
 export { caliperDiscBrakeSheet, evaluateCaliperDiscBrake } from './sheets/caliper-disc-brake.js';
 export { makeCheck, type CheckSpec } from './sheets/checks.js';
 export { SAFETY_CAUTIONS } from './sheets/sheet-output.js';
+export {
+  evaluateTolerance,
+  toleranceBounds,
+  settingsWithTolerance,
+  type ToleratedSetting,
+} from './field/evaluate-tolerance.js';
+export * as fieldTolerances from './field/tolerances.js';

@@ -2,6 +2,7 @@ import type { ColumnType, Generated, Insertable, Selectable, Updateable } from '
 import type { AccountTables } from './account-tables.js';
 import type { SheetTables } from './sheet-tables.js';
 import type { ReviewTables } from './review-tables.js';
+import type { FieldRecordTables } from './field-record-tables.js';
 
 /**
  * The typed database interface, written by hand to match `db/migrations`.
@@ -20,7 +21,7 @@ export type CreatedAt = ColumnType<Date, Date | string | undefined, never>;
 export type UpdatedAt = ColumnType<Date, Date | string | undefined, Date | string>;
 export type Timestamp = ColumnType<Date, Date | string, Date | string>;
 
-export type RoleValue = 'engineer' | 'checker' | 'viewer' | 'admin';
+export type RoleValue = 'engineer' | 'checker' | 'viewer' | 'admin' | 'technician';
 export type UnitSystemValue = 'SI' | 'US';
 export type NumberFormatValue = 'point' | 'comma';
 
@@ -60,7 +61,8 @@ export interface FoundationTables {
   refreshTokens: RefreshTokensTable;
 }
 
-export interface DB extends FoundationTables, SheetTables, ReviewTables, AccountTables {}
+export interface DB
+  extends FoundationTables, SheetTables, ReviewTables, AccountTables, FieldRecordTables {}
 
 export type UserRow = Selectable<UsersTable>;
 export type NewUserRow = Insertable<UsersTable>;

@@ -35,7 +35,7 @@ describe('seed', () => {
     const demo = rows.filter((r) => r.email.endsWith('@holdfast.test'));
     expect(demo.map((r) => r.email).sort()).toEqual(demoUsers.map((u) => u.email).sort());
     expect(new Set(demo.map((r) => r.role))).toEqual(
-      new Set(['engineer', 'checker', 'viewer', 'admin']),
+      new Set(['engineer', 'checker', 'viewer', 'admin', 'technician']),
     );
     const engineer = demo.find((r) => r.email === 'engineer@holdfast.test')!;
     expect(engineer).toMatchObject({

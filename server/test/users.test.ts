@@ -28,6 +28,7 @@ describe('users admin API', () => {
       'checker@holdfast.test',
       'engineer2@holdfast.test',
       'engineer@holdfast.test',
+      'technician@holdfast.test',
       'viewer@holdfast.test',
     ]);
     expect(res.text).not.toMatch(/argon2|password/i);

@@ -64,6 +64,8 @@ export class AttachmentsService {
       .selectFrom('attachments')
       .selectAll()
       .where('revisionId', '=', revisionId)
+      // Photos of field records belong to their record, not to the revision's file list.
+      .where('fieldRecordId', 'is', null)
       .orderBy('createdAt', 'asc')
       .execute();
     const people = await this.revisionsRepo.people(rows.map((r) => r.uploadedBy));

@@ -7,6 +7,8 @@ import { AppConfig } from '../config/app-config.js';
 import { loadMailSettings } from '../mail/mail-settings.js';
 
 export const MAIL_QUEUE = 'mail';
+/** The hourly inspection-reminder pass (server/src/field-records/inspection-reminders.job.ts). */
+export const REMINDER_QUEUE = 'inspection-reminders';
 
 /**
  * pg-boss 10 on the application's database (schema `pgboss`). Jobs are inserted inside the

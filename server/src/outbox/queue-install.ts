@@ -7,7 +7,7 @@
 import { pathToFileURL } from 'node:url';
 import PgBoss from 'pg-boss';
 import { loadMailSettings } from '../mail/mail-settings.js';
-import { MAIL_QUEUE } from './job-queue.js';
+import { MAIL_QUEUE, REMINDER_QUEUE } from './job-queue.js';
 
 /** pg-boss's own queue for cron schedules (created by its timekeeper when absent). */
 const SCHEDULE_QUEUE = '__pgboss__send-it';
@@ -31,6 +31,7 @@ export async function installQueues(connectionString: string): Promise<void> {
       retryDelay: settings.MAIL_RETRY_DELAY_SECONDS,
       retryBackoff: true,
     });
+    await boss.createQueue(REMINDER_QUEUE, { name: REMINDER_QUEUE });
     await boss.createQueue(SCHEDULE_QUEUE, { name: SCHEDULE_QUEUE });
     const db = boss.getDb() as { executeSql(text: string): Promise<unknown> };
     await db.executeSql(`

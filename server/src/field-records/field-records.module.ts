@@ -1,0 +1,25 @@
+import { Module } from '@nestjs/common';
+import { StorageModule } from '../storage/storage.module.js';
+import { FieldRecordPhotosService } from './field-record-photos.service.js';
+import { FieldRecordsController } from './field-records.controller.js';
+import { FieldRecordsRepository } from './field-records.repository.js';
+import { FieldRecordsService } from './field-records.service.js';
+import { InspectionRemindersJob } from './inspection-reminders.job.js';
+import { InspectionScheduleRepository } from './inspection-schedule.repository.js';
+import { InspectionScheduleService } from './inspection-schedule.service.js';
+import { PositionFieldController } from './position-field.controller.js';
+
+@Module({
+  imports: [StorageModule],
+  controllers: [FieldRecordsController, PositionFieldController],
+  providers: [
+    FieldRecordsRepository,
+    FieldRecordsService,
+    InspectionScheduleRepository,
+    InspectionScheduleService,
+    InspectionRemindersJob,
+    FieldRecordPhotosService,
+  ],
+  exports: [FieldRecordsRepository, FieldRecordsService],
+})
+export class FieldRecordsModule {}
