@@ -30,6 +30,7 @@ export const SHOE_FIELD_CARD: FieldCardLayout = {
     reserveStroke: thruster,
     minReserveStroke: thruster,
     wearToReadjust: thruster,
+    wearTorqueLost: thruster,
     ...stack(SHOE_STACK_TITLES.holder, {
       backOff: 'holderBackOff',
       preload: 'holderPreload',

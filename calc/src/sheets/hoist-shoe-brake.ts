@@ -24,6 +24,7 @@ import { SHOE_FIELD_CARD } from './field-card-layouts.js';
 import { finish, newEvaluation, publishSteps } from './sheet-output.js';
 import { SHOE_BRAKE_FIELDS, SHOE_SECTIONS } from './shoe-brake-fields.js';
 import { evaluateShoeBrake, validateShoeInputs } from './shoe-brake-evaluate.js';
+import { HOIST_SERVICE_FIELDS, hoistRedundancy } from './hoist-redundancy.js';
 
 const U = 'duty';
 
@@ -87,7 +88,8 @@ export const HOIST_DUTY_FIELDS = [
     ],
     '29 CFR 1910.179(f) states hoist holding-brake torque as a percentage of the rated-load hoisting torque at the brake.',
   ),
-  choice(U, 'brakeArrangement', 'Holding brake arrangement', 'single', ARRANGEMENT_CHOICES),
+  choice(U, 'brakeArrangement', 'Holding brake arrangement', 'two', ARRANGEMENT_CHOICES),
+  ...HOIST_SERVICE_FIELDS,
   qty(U, 'motorInertia', 'Motor rotor inertia', 'J_mot', 'inertia', 0.45, 'kg m^2', 'lb ft^2', {
     min: 0,
   }),
@@ -202,7 +204,8 @@ export function evaluateHoistShoeBrake(
   out.warnings.push(
     `Required torque = ${factor.value} × ${REFERENCE_BASIS_TEXT[basis]}; efficiency credit: hoisting torque divides by η, holding torque multiplies by η.`,
   );
-  evaluateShoeBrake(
+  const brakesInstalled = v.brakeArrangement === 'two' ? 2 : 1;
+  const shoe = evaluateShoeBrake(
     v,
     {
       brakeSpeed: omega,
@@ -214,11 +217,31 @@ export function evaluateHoistShoeBrake(
       setDelay: v.setDelay,
       stopLimit: { value: v.maxStoppingDistance, source: 'duty specification (user input)' },
       stopCase: 'lowering the rated load',
+      brakesOnTrain: brakesInstalled,
     },
     criteria,
     d,
     out,
   );
+  const red = hoistRedundancy({
+    hotMetal: v.hotMetal,
+    powerControlBraking: v.powerControlBraking,
+    brakesInstalled,
+    brake: {
+      torqueMinWorn: q.torque(shoe.torqueMinWorn),
+      torqueMaxTopOfRange: q.torque(shoe.torqueMaxTopOfRange),
+    },
+    hoistingTorque: load.hoistingTorque,
+    staticTorque: load.staticTorque,
+    inertia: J,
+    lowerSpeed: omega,
+    loadSpeed: vL,
+    setDelay: v.setDelay,
+    stoppingDistanceLimit: v.maxStoppingDistance,
+    driveTrainRating: v.maxBrakeTorque,
+  });
+  out.checks.unshift(...red.checks);
+  out.warnings.push(...red.warnings);
   publishSteps(out, d, [
     'motor-torque',
     'hoist-static-torque',

@@ -92,7 +92,7 @@ export const BRAKE_FIELDS = [
     'Torque rating of the drive train at the brake shaft',
     'M_max',
     'torque',
-    1000,
+    1500,
     'N m',
     'lbf ft',
     {
@@ -128,9 +128,32 @@ export const LINING_FIELDS = [
     exclusiveMin: true,
     max: 1,
   }),
-  qty(L, 'wear', 'Lining wear per shoe before re-adjustment', 'w', 'length', 0.4, 'mm', 'in', {
+  qty(L, 'liningThickness', 'Lining thickness, new', 't_L', 'length', 8, 'mm', 'in', {
     min: 0,
+    exclusiveMin: true,
   }),
+  qty(
+    L,
+    'liningMinThickness',
+    "Lining thickness, minimum (replace; lining maker's data)",
+    't_L,min',
+    'length',
+    3,
+    'mm',
+    'in',
+    { min: 0, exclusiveMin: true },
+  ),
+  qty(
+    L,
+    'drumMinDiameter',
+    "Drum diameter at its wear limit (drum maker's data)",
+    'D_min',
+    'length',
+    396,
+    'mm',
+    'in',
+    { min: 0, exclusiveMin: true },
+  ),
   num(L, 'springTravelRatio', 'Spring travel per unit shoe travel', 'r_s', 5, {
     min: 0,
     exclusiveMin: true,
@@ -187,11 +210,32 @@ export const THERMAL_FIELDS = [
 ] as const;
 
 export const RELEASE_FIELDS = [
-  qty(R, 'clearance', 'Shoe clearance when released (per shoe)', 'ε', 'length', 0.8, 'mm', 'in', {
-    min: 0,
-    exclusiveMin: true,
-    max: 10,
-  }),
+  flag(
+    R,
+    'liftStop',
+    'Thruster has a lift stop (the fitter sets the clearance)',
+    false,
+    'Without a lift stop the released thruster runs to its end stop: the clearance then follows from the stroke, the reserve stroke and the linkage, and is derived, not set (common practice; the thruster maker’s data governs).',
+  ),
+  {
+    ...qty(
+      R,
+      'clearance',
+      'Shoe clearance when released (per shoe)',
+      'ε',
+      'length',
+      0.8,
+      'mm',
+      'in',
+      {
+        min: 0,
+        exclusiveMin: true,
+        max: 10,
+        help: 'Set with a lift stop only; without one it is derived from the stroke.',
+      },
+    ),
+    requiredIf: 'liftStop',
+  },
   num(R, 'thrusterTravelRatio', 'Thruster rod travel per unit shoe travel', 'r_t', 25, {
     min: 0,
     exclusiveMin: true,

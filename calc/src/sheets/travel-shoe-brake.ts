@@ -121,6 +121,9 @@ export const TRAVEL_DUTY_FIELDS = [
 /** Shoe-brake demo values sized for the travel demo (smaller drum and spring than the hoist). */
 const TRAVEL_DEMO: Record<string, InputValue> = {
   drumDiameter: { value: 200, unit: 'mm' },
+  drumMinDiameter: { value: 197, unit: 'mm' },
+  liningThickness: { value: 6, unit: 'mm' },
+  liningMinThickness: { value: 2, unit: 'mm' },
   shoeWidth: { value: 90, unit: 'mm' },
   springForce: { value: 520, unit: 'N' },
   springRate: { value: 20, unit: 'N/mm' },
