@@ -88,3 +88,21 @@ export function hoistRedundancy(r: HoistRedundancyInput): {
       : [];
   return { checks, warnings };
 }
+
+/**
+ * The tests the sheet asks for before the brake goes into service, printed with the values of
+ * this hoist: the load test (static and dynamic, each brake alone when there are two) and the
+ * static torque test after bedding-in.
+ */
+export function hoistTestRequirements(r: {
+  ratedLoad: number;
+  requiredTorque: number;
+  brakesInstalled: number;
+}): string[] {
+  const testLoad = Math.round((1.25 * r.ratedLoad) / 10) * 10;
+  const each = r.brakesInstalled > 1 ? ' with each holding brake alone (the other held open)' : '';
+  return [
+    `Load test before service: test load not more than 125 % of the rated load, here at most ${testLoad} kg (29 CFR 1910.179(k)(2), from memory; ASME B30.2 states the same limit, from memory). Static: hold the test load clear of the ground${each}. Dynamic: stop the rated load lowering at full speed${each} (common practice).`,
+    `Static torque test after the linings have bedded in: with the brake set, apply ${Math.round(r.requiredTorque)} N·m (the required torque) at the brake shaft with a torque wrench or lever and weight${each}; the drum must not turn (common practice, no published source).`,
+  ];
+}

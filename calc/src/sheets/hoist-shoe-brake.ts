@@ -24,7 +24,11 @@ import { SHOE_FIELD_CARD } from './field-card-layouts.js';
 import { finish, newEvaluation, publishSteps } from './sheet-output.js';
 import { SHOE_BRAKE_FIELDS, SHOE_SECTIONS } from './shoe-brake-fields.js';
 import { evaluateShoeBrake, validateShoeInputs } from './shoe-brake-evaluate.js';
-import { HOIST_SERVICE_FIELDS, hoistRedundancy } from './hoist-redundancy.js';
+import {
+  HOIST_SERVICE_FIELDS,
+  hoistRedundancy,
+  hoistTestRequirements,
+} from './hoist-redundancy.js';
 
 const U = 'duty';
 
@@ -241,7 +245,10 @@ export function evaluateHoistShoeBrake(
     driveTrainRating: v.maxBrakeTorque,
   });
   out.checks.unshift(...red.checks);
-  out.warnings.push(...red.warnings);
+  out.warnings.push(
+    ...red.warnings,
+    ...hoistTestRequirements({ ratedLoad: v.load, requiredTorque: Mreq, brakesInstalled }),
+  );
   publishSteps(out, d, [
     'motor-torque',
     'hoist-static-torque',

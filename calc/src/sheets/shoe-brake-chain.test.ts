@@ -66,7 +66,7 @@ describe('stroke–wear–setting chain on the shoe sheets', () => {
   it('a drum worn to its limit lowers the worst-case torque in proportion to the diameter', () => {
     const M = result(demo, 'torque-worn-min')!;
     expect(nearlyEqual(result(demo, 'torque-drum-limit')!, (M * 396) / 400, 1e-12)).toBe(true);
-    const e = hoist.evaluate({ ...demoInputs(hoist), drumMinDiameter: '200 mm' }, crane);
+    const e = hoist.evaluate({ ...demoInputs(hoist), drumWearAllowance: '190 mm' }, crane);
     expect(check(e, 'torque-drum-wear-limit')!.pass).toBe(false);
   });
 
@@ -149,5 +149,46 @@ describe('holding-brake redundancy on the hoist sheet', () => {
     expect(c.pass).toBe(false);
     const top = (result(e, 'torque-max')! * 1600) / 1100;
     expect(nearlyEqual(c.value, 2 * top, 1e-12)).toBe(true);
+  });
+});
+
+describe('main spring, thruster extremes and test requirements', () => {
+  const demo = hoist.evaluate(demoInputs(hoist), crane);
+
+  it('checks the main spring at the highest setting with the shoes lifted', () => {
+    // F = 1600 N + 40 N/mm · 1.2 mm · 5 = 1840 N
+    expect(nearlyEqual(result(demo, 'spring-force-highest')!, 1840, 1e-9)).toBe(true);
+    for (const id of [
+      'spring-stress-working',
+      'spring-stress-solid',
+      'spring-solid-margin',
+      'spring-buckling',
+      'spring-rate-agrees',
+    ])
+      expect(check(demo, id)!.pass, id).toBe(true);
+    const thin = hoist.evaluate({ ...demoInputs(hoist), springWireDiameter: '8 mm' }, crane);
+    expect(check(thin, 'spring-rate-agrees')!.pass).toBe(false);
+  });
+
+  it('a spring whose solid length exceeds its free length is refused on the sheet field', () => {
+    expect(() => hoist.evaluate({ ...demoInputs(hoist), springActiveCoils: 30 }, crane)).toThrow(
+      /springFreeLength/,
+    );
+  });
+
+  it('checks the thruster force at −10 % voltage and both temperature extremes', () => {
+    const base = check(demo, 'thruster-force')!.value;
+    expect(nearlyEqual(check(demo, 'thruster-force-cold')!.value, base * 0.85, 1e-12)).toBe(true);
+    const weak = hoist.evaluate({ ...demoInputs(hoist), thrusterFactorCold: 0.5 }, crane);
+    expect(check(weak, 'thruster-force-cold')!.pass).toBe(false);
+    expect(check(weak, 'thruster-force-hot')!.pass).toBe(true);
+  });
+
+  it('prints the load test (125 % of rated load) and the static torque test', () => {
+    const w = demo.warnings.join(' ');
+    expect(w).toMatch(/at most 12500 kg/);
+    expect(w).toMatch(/1910\.179\(k\)\(2\)/);
+    expect(w).toMatch(/each holding brake alone/);
+    expect(w).toMatch(/Static torque test after the linings have bedded in: .*179 N·m/);
   });
 });

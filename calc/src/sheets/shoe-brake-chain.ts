@@ -1,40 +1,15 @@
 import type { ChartData, CheckResult, FieldError } from '../core/types.js';
-import { compute, defineFormula, type Derivation } from '../core/step.js';
+import { compute, type Derivation } from '../core/step.js';
+import {
+  liningWearAllowanceFormula,
+  REF_DRUM,
+  torqueDrumLimitFormula,
+} from '../shoe-brake/wear-limits.js';
 import { strokeWearChain, torqueWearPoints } from '../release/stroke-wear.js';
 import * as q from '../units/quantities.js';
 import { makeCheck } from './checks.js';
 import type { ShoeInputs } from './shoe-brake-fields.js';
 import type { ShoeTorques } from './shoe-brake-torque.js';
-
-const REF_DRUM =
-  'torque ∝ friction radius at equal shoe force (statics; Shigley’s MED §16-2); the lining’s arc change with thickness is neglected';
-
-export const liningWearAllowanceFormula = defineFormula({
-  id: 'lining-wear-allowance',
-  label: 'Lining wear per shoe from new to minimum thickness',
-  symbol: 'w_L',
-  expression: 't - t_min',
-  symbols: {
-    t: { text: 't_L', dimension: 'length' },
-    t_min: { text: 't_L,min', dimension: 'length' },
-  },
-  dimension: 'length',
-  reference: "lining maker's minimum thickness (equipment data)",
-});
-
-export const torqueDrumLimitFormula = defineFormula({
-  id: 'torque-drum-limit',
-  label: 'Brake torque at μ min, re-adjustment point, drum at its wear limit',
-  symbol: 'M_b,D,min',
-  expression: 'M_w * D_min / D',
-  symbols: {
-    M_w: { text: 'M_b,w,min', dimension: 'torque' },
-    D_min: { text: 'D_min', dimension: 'length' },
-    D: { text: 'D', dimension: 'length' },
-  },
-  dimension: 'torque',
-  reference: REF_DRUM,
-});
 
 /** The stroke–wear–setting chain of the shoe brake, as the sheet uses it (section 'release'). */
 export interface ShoeChain {
@@ -63,8 +38,8 @@ export function validateChainInputs(v: ShoeInputs): FieldError[] {
     e.push({ field: 'clearance', message: 'set the clearance when the thruster has a lift stop' });
   if (!(v.liningMinThickness < v.liningThickness))
     e.push({ field: 'liningMinThickness', message: 'must be below the new lining thickness' });
-  if (!(v.drumMinDiameter <= v.drumDiameter))
-    e.push({ field: 'drumMinDiameter', message: 'must not exceed the drum diameter' });
+  if (!(v.drumWearAllowance < 0.5 * v.drumDiameter))
+    e.push({ field: 'drumWearAllowance', message: 'must be less than half the drum diameter' });
   const wAdj = (v.reserveStroke - v.minReserveStroke) / v.thrusterTravelRatio;
   if (!(v.springForce - v.springRate * v.springTravelRatio * wAdj > 0))
     e.push({
@@ -129,8 +104,8 @@ export function shoeWearLimits(
   });
   const M = compute(d, torqueDrumLimitFormula, {
     M_w: wornMin,
-    D_min: v.drumMinDiameter,
     D: v.drumDiameter,
+    dD: v.drumWearAllowance,
   });
   const adjustments = wearAtReadjust > 0 ? Math.floor(wL / wearAtReadjust) : 0;
   return {

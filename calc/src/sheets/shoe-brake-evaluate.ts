@@ -15,6 +15,7 @@ import { shoeRelease, shoeSettings } from './shoe-brake-release.js';
 import { shoeStop, shoeStopDistanceAndHeat, shoeStopsCheck } from './shoe-brake-stop-heat.js';
 import { shoeLining, shoeTorqueChecks, shoeTorques } from './shoe-brake-torque.js';
 import { evaluateShoeDiscSprings } from './shoe-disc-springs.js';
+import { shoeMainSpring } from './shoe-main-spring.js';
 
 /** What the duty part of a sheet hands to the shoe-brake part (all SI). */
 export interface ShoeDuty {
@@ -104,6 +105,7 @@ export function evaluateShoeBrake(
     out.warnings.push(`${stop.message} Stopping distance and heat are not computed.`);
   }
 
+  out.checks.push(...shoeMainSpring(v, chain.clearance, d).checks);
   const rel = shoeRelease(v, b.springForce, chain, criteria, d);
   out.checks.push(...rel.checks, ...chain.checks);
   out.warnings.push(...rel.release.warnings);
@@ -181,4 +183,8 @@ const SHOE_PUBLISHED_STEPS = [
   'lining-wear-allowance',
   'torque-drum-limit',
   'spring-length',
+  'spring-force-highest',
+  'spring-shear-stress',
+  'solid-length',
+  'spring-shear-stress-solid',
 ];

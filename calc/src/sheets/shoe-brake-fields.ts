@@ -1,6 +1,7 @@
 import type { FieldDefinition, SectionDefinition } from '../core/types.js';
 import { LININGS } from '../criteria/linings.js';
 import { choice, flag, num, qty, type InputsOf } from './field-builders.js';
+import { MAIN_SPRING_FIELDS } from './shoe-main-spring.js';
 
 /** Sections shared by the shoe-brake sheets (after each sheet's own duty section). */
 export const SHOE_SECTIONS: SectionDefinition[] = [
@@ -145,14 +146,14 @@ export const LINING_FIELDS = [
   ),
   qty(
     L,
-    'drumMinDiameter',
-    "Drum diameter at its wear limit (drum maker's data)",
-    'D_min',
+    'drumWearAllowance',
+    "Drum diameter reduction allowed by wear and re-machining (drum maker's data)",
+    'ΔD',
     'length',
-    396,
+    4,
     'mm',
     'in',
-    { min: 0, exclusiveMin: true },
+    { min: 0 },
   ),
   num(L, 'springTravelRatio', 'Spring travel per unit shoe travel', 'r_s', 5, {
     min: 0,
@@ -250,6 +251,19 @@ export const RELEASE_FIELDS = [
     min: 0,
     exclusiveMin: true,
   }),
+  ...(
+    [
+      ['thrusterFactorLowVoltage', 'at −10 % supply voltage', 0.95],
+      ['thrusterFactorCold', 'at the lowest site temperature (coldest oil)', 0.85],
+      ['thrusterFactorHot', 'at the highest site temperature', 0.95],
+    ] as const
+  ).map(([key, when, demo]) =>
+    num(R, key, `Thruster lift force ${when} ÷ rated force (maker's data)`, 'k_th', demo, {
+      min: 0,
+      exclusiveMin: true,
+      max: 1.5,
+    }),
+  ),
   qty(R, 'thrusterStroke', 'Thruster nominal stroke', 's_n', 'length', 50, 'mm', 'in', {
     min: 0,
     exclusiveMin: true,
@@ -346,6 +360,7 @@ export const DISC_SPRING_FIELDS = [
 
 export const SHOE_BRAKE_FIELDS = [
   ...BRAKE_FIELDS,
+  ...MAIN_SPRING_FIELDS,
   ...LINING_FIELDS,
   ...THERMAL_FIELDS,
   ...RELEASE_FIELDS,

@@ -51,6 +51,25 @@ export function shoeRelease(
         source: ratioCrit.source,
         failHint: 'Choose a stronger thruster or lower the spring setting.',
       }),
+      ...(
+        [
+          ['low-voltage', 'at −10 % supply voltage', v.thrusterFactorLowVoltage],
+          ['cold', 'at the lowest site temperature', v.thrusterFactorCold],
+          ['hot', 'at the highest site temperature', v.thrusterFactorHot],
+        ] as const
+      ).map(([id, when, k]) =>
+        makeCheck({
+          id: `thruster-force-${id}`,
+          section: 'release',
+          label: `Thruster force ${when} ÷ force needed ≥ required ratio`,
+          value: rel.forceRatio * k,
+          limit: ratioCrit.value,
+          kind: 'min',
+          dimension: 'dimensionless',
+          source: `${ratioCrit.source}; force factor: thruster maker's data (user input)`,
+          failHint: 'The brake may not open fully: choose a stronger thruster.',
+        }),
+      ),
       // Without a lift stop the rod runs to its end stop: the headroom is zero by construction.
       ...(chain.derivedClearance
         ? []
@@ -202,7 +221,7 @@ export function permittedBand(
 ): { low: number; high: number } {
   const Fs = b.springForce;
   const loss = v.springRate * v.springTravelRatio * chain.wearAtReadjust;
-  const minPerN = ((b.min / Fs) * v.drumMinDiameter) / v.drumDiameter;
+  const minPerN = ((b.min / Fs) * (v.drumDiameter - v.drumWearAllowance)) / v.drumDiameter;
   const low = Math.max(v.springForceMin, band.required / minPerN + loss);
   const high = Math.min(
     v.springForceMax,
