@@ -51,12 +51,19 @@ export const SHOE_BOUNDS: Record<string, [number, number]> = {
   holderL0: [0.1, 200],
   holderPitch: [0.1, 20],
   holderBackOff: [0, 3600],
+  holderBackOffTolerance: [0, 360],
+  holderRequiredPreload: [0, 1e6],
   equaliserDe: [1, 1000],
   equaliserDi: [0.5, 1000],
   equaliserT: [0.05, 100],
   equaliserL0: [0.1, 200],
   equaliserPitch: [0.1, 20],
   equaliserBackOff: [0, 3600],
+  equaliserBackOffTolerance: [0, 360],
+  discE: [1000, 400000],
+  discNu: [0.1, 0.49],
+  discFrictionEdge: [0, 0.19],
+  discFrictionCone: [0, 0.19],
 };
 
 export const HOIST_BOUNDS: Record<string, [number, number]> = {

@@ -123,7 +123,7 @@ export function evaluateShoeBrake(
   out.tables.push(setting.table);
   out.fieldSettings.push(...setting.fieldSettings);
 
-  evaluateShoeDiscSprings(v, d, out);
+  evaluateShoeDiscSprings(v, criteria, d, out);
 
   const torquePerMu = b.nominal / b.muNominal;
   const wornFraction = l.wornSpringForce / b.springForce;

@@ -290,6 +290,7 @@ function stackFields<P extends 'holder' | 'equaliser'>(
   series: number,
   pitch: number,
   backOff: number,
+  tolerance: number,
 ) {
   return [
     flag(S, `${prefix}Enabled`, `${title}: include`, true),
@@ -342,6 +343,21 @@ function stackFields<P extends 'holder' | 'equaliser'>(
       'deg',
       { min: 0, max: 3600 },
     ),
+    qty(
+      S,
+      `${prefix}BackOffTolerance`,
+      `${title}: back-off angle tolerance (±)`,
+      'Δθ',
+      'angle',
+      tolerance,
+      'deg',
+      'deg',
+      {
+        min: 0,
+        max: 360,
+        help: 'Common practice: how far the fitter may stop short of or run past the back-off angle (slot alignment, feel of "flat").',
+      },
+    ),
   ] as const;
 }
 
@@ -352,10 +368,48 @@ function ifEnabled<const Fs extends readonly FieldDefinition[]>(prefix: string, 
   ) as unknown as Fs;
 }
 
-/** Optional disc-spring stacks (common practice: holder flat then about 60°, equaliser stack of three flat then about 180°). */
+/** Optional disc-spring stacks (common practice: tightened flat, then backed off by an angle; holder about 60°). */
 export const DISC_SPRING_FIELDS = [
-  ...ifEnabled('holder', stackFields('holder', 'Shoe holder', 1, 2.5, 60)),
-  ...ifEnabled('equaliser', stackFields('equaliser', 'Equaliser', 3, 2, 180)),
+  ...ifEnabled('holder', [
+    ...stackFields('holder', 'Shoe holder', 1, 2.5, 60, 15),
+    qty(
+      S,
+      'holderRequiredPreload',
+      'Shoe holder: preload the holder needs',
+      'F_V,req',
+      'force',
+      1500,
+      'N',
+      'lbf',
+      {
+        min: 0,
+        help: "The force that keeps the shoe from rattling or tilting on its pivot (brake maker's data).",
+      },
+    ),
+  ] as const),
+  ...ifEnabled('equaliser', stackFields('equaliser', 'Equaliser', 3, 2, 240, 30)),
+  qty(S, 'discE', 'Disc springs: elastic modulus', 'E', 'pressure', 206000, 'MPa', 'psi', {
+    min: 1000,
+    help: 'DIN EN 16983 (formerly DIN 2093) tables use 206 000 N/mm² for spring steel.',
+  }),
+  num(S, 'discNu', "Disc springs: Poisson's ratio", 'ν', 0.3, { min: 0.1, max: 0.49 }),
+  num(S, 'discFrictionEdge', 'Disc springs: edge friction coefficient', 'μ_R', 0.02, {
+    min: 0,
+    max: 0.19,
+    help: 'Friction at the load edges (series stacks): from memory of the DIN EN 16984 table.',
+  }),
+  num(
+    S,
+    'discFrictionCone',
+    'Disc springs: cone friction coefficient (nested discs)',
+    'μ_M',
+    0.015,
+    {
+      min: 0,
+      max: 0.19,
+      help: 'Friction between nested discs of a parallel set: from memory of the DIN EN 16984 table.',
+    },
+  ),
 ] as const;
 
 export const SHOE_BRAKE_FIELDS = [
