@@ -67,6 +67,7 @@ export * from './stopping/overspeed.js';
 export { limitCheck, type LimitCheck } from './core/limit-check.js';
 export * from './release/release.js';
 export * from './release/stroke-wear.js';
+export * from './shoe-brake/wear-limits.js';
 export * from './spring-setting/setting-table.js';
 export * from './helical-spring/formulas.js';
 export * from './helical-spring/compression-spring.js';

@@ -40,6 +40,18 @@ const RULES: Rule[] = [
     what: 'more wear, less torque at μ min',
   },
   {
+    field: 'reserveStroke',
+    result: 'torque-worn-nominal',
+    direction: 'down',
+    what: 'more reserve, more wear before re-adjusting, less torque there',
+  },
+  {
+    field: 'minReserveStroke',
+    result: 'torque-worn-min',
+    direction: 'up',
+    what: 'a larger minimum reserve, re-adjust earlier, more torque at μ min there',
+  },
+  {
     field: 'stopsPerHour',
     result: 'average-heat',
     direction: 'up',

@@ -105,7 +105,12 @@ export function caliperAtSet(
   );
   const alpha = duty.driveTorque / v.inertia;
   const maxAtBrake = motorMax / v.ratioToBrake;
-  if (alpha > 0 && maxAtBrake > duty.brakeSpeed) {
+  // A vanishing α_d sets no limit on the delay: skip the step rather than print an infinity.
+  if (
+    alpha > 0 &&
+    maxAtBrake > duty.brakeSpeed &&
+    Number.isFinite((maxAtBrake - duty.brakeSpeed) / alpha)
+  ) {
     maxSetDelay(duty.brakeSpeed, q.angularSpeed(maxAtBrake), q.angularAcceleration(alpha), d);
   }
   checks.push(

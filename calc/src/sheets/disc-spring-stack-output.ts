@@ -96,26 +96,7 @@ export function stackOutputs(x: StackOutputInput, criteria: CriteriaSet) {
   }
 
   const checks: CheckResult[] = [];
-  const crit = criteria.values.find((v) => v.key === SIGMA_OM_FLAT_DEFAULT.key);
-  const limit = crit ? crit.value : SIGMA_OM_FLAT_DEFAULT.value;
-  const om = Math.abs(r.sigmaOMFlat);
-  checks.push({
-    id: `${key}-sigma-om-flat`,
-    section,
-    label: 'Stress |σOM| at flat (static load)',
-    value: om,
-    limit,
-    unit: 'Pa',
-    dimension: 'pressure',
-    kind: 'max',
-    utilisation: om / limit,
-    pass: om <= limit,
-    source: crit ? crit.source : SIGMA_OM_FLAT_DEFAULT.source,
-    message:
-      om <= limit
-        ? 'within the static-load limit'
-        : 'the disc is overstressed when pressed flat: choose a thicker or larger disc',
-  });
+  checks.push(sigmaOMFlatCheck(key, section, r.sigmaOMFlat, criteria));
   if (x.required > 0) {
     const v = r.stackUnloading;
     const ok = v >= x.required;
@@ -208,4 +189,37 @@ export function stackOutputs(x: StackOutputInput, criteria: CriteriaSet) {
         'more than three discs in parallel: friction makes the force uncertain (maker guidance, from memory).',
     );
   return { results, checks, chart, fieldSettings, table, warnings };
+}
+
+/**
+ * |σOM| at flat against the static-load limit (the check for statically loaded discs, in place of
+ * the fatigue band): the criteria value if the set carries one, else the from-memory default.
+ */
+export function sigmaOMFlatCheck(
+  key: string,
+  section: string,
+  sigmaOMFlat: number,
+  criteria: CriteriaSet,
+  label = 'Stress |σOM| at flat (static load)',
+): CheckResult {
+  const crit = criteria.values.find((v) => v.key === SIGMA_OM_FLAT_DEFAULT.key);
+  const limit = crit ? crit.value : SIGMA_OM_FLAT_DEFAULT.value;
+  const om = Math.abs(sigmaOMFlat);
+  return {
+    id: `${key}-sigma-om-flat`,
+    section,
+    label,
+    value: om,
+    limit,
+    unit: 'Pa',
+    dimension: 'pressure',
+    kind: 'max',
+    utilisation: om / limit,
+    pass: om <= limit,
+    source: crit ? crit.source : SIGMA_OM_FLAT_DEFAULT.source,
+    message:
+      om <= limit
+        ? 'within the static-load limit'
+        : 'the disc is overstressed when pressed flat: choose a thicker or larger disc',
+  };
 }

@@ -38,6 +38,7 @@ export const SHOE_FIELD_CARD: FieldCardLayout = {
     reserveStroke: tol(thruster, T.RESERVE_STROKE),
     minReserveStroke: thruster,
     wearToReadjust: thruster,
+    wearTorqueLost: thruster,
     ...stack(SHOE_STACK_TITLES.holder, {
       backOff: 'holderBackOff',
       preload: 'holderPreload',

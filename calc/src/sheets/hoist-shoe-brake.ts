@@ -25,6 +25,11 @@ import { SHOE_FIELD_CARD } from './field-card-layouts.js';
 import { finish, newEvaluation, publishSteps } from './sheet-output.js';
 import { SHOE_BRAKE_FIELDS, SHOE_SECTIONS } from './shoe-brake-fields.js';
 import { evaluateShoeBrake, validateShoeInputs } from './shoe-brake-evaluate.js';
+import {
+  HOIST_SERVICE_FIELDS,
+  hoistRedundancy,
+  hoistTestRequirements,
+} from './hoist-redundancy.js';
 
 const U = 'duty';
 
@@ -94,7 +99,8 @@ export const HOIST_DUTY_FIELDS = [
     ],
     '29 CFR 1910.179(f) states hoist holding-brake torque as a percentage of the rated-load hoisting torque at the brake.',
   ),
-  choice(U, 'brakeArrangement', 'Holding brake arrangement', 'single', ARRANGEMENT_CHOICES),
+  choice(U, 'brakeArrangement', 'Holding brake arrangement', 'two', ARRANGEMENT_CHOICES),
+  ...HOIST_SERVICE_FIELDS,
   qty(U, 'motorInertia', 'Motor rotor inertia', 'J_mot', 'inertia', 0.45, 'kg m^2', 'lb ft^2', {
     min: 0,
   }),
@@ -241,7 +247,8 @@ export function evaluateHoistShoeBrake(
     { M_L: load.staticTorque, eta_bd: v.backDrivingEfficiency },
     { label: 'Load torque driving the brake shaft during the stop (lowering)' },
   );
-  evaluateShoeBrake(
+  const brakesInstalled = v.brakeArrangement === 'two' ? 2 : 1;
+  const shoe = evaluateShoeBrake(
     v,
     {
       brakeSpeed: omega,
@@ -249,16 +256,38 @@ export function evaluateHoistShoeBrake(
       inertia: J,
       driveTorque: Md,
       motorMaxSpeed: v.motorMaxSpeed,
-      brakesOnTrain: v.brakeArrangement === 'two' ? 2 : 1,
       requiredTorque: Mreq,
       requiredSource: `${factor.source}; reference: ${REFERENCE_BASIS_TEXT[basis]}`,
       setDelay: v.setDelay,
       stopLimit: { value: v.maxStoppingDistance, source: 'duty specification (user input)' },
       stopCase: 'lowering the rated load',
+      brakesOnTrain: brakesInstalled,
     },
     criteria,
     d,
     out,
+  );
+  const red = hoistRedundancy({
+    hotMetal: v.hotMetal,
+    powerControlBraking: v.powerControlBraking,
+    brakesInstalled,
+    brake: {
+      torqueMinWorn: q.torque(shoe.torqueMinWorn),
+      torqueMaxTopOfRange: q.torque(shoe.torqueMaxTopOfRange),
+    },
+    hoistingTorque: load.hoistingTorque,
+    staticTorque: load.staticTorque,
+    inertia: J,
+    lowerSpeed: omega,
+    loadSpeed: vL,
+    setDelay: v.setDelay,
+    stoppingDistanceLimit: v.maxStoppingDistance,
+    driveTrainRating: v.maxBrakeTorque,
+  });
+  out.checks.unshift(...red.checks);
+  out.warnings.push(
+    ...red.warnings,
+    ...hoistTestRequirements({ ratedLoad: v.load, requiredTorque: Mreq, brakesInstalled }),
   );
   publishSteps(out, d, [
     'motor-torque',

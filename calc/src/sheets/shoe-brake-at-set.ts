@@ -79,7 +79,12 @@ export function shoeOverspeed(duty: ShoeDuty, stop: StoppingResult, d: Derivatio
     d,
   );
   const alpha = duty.driveTorque / duty.inertia;
-  if (alpha > 0 && duty.motorMaxSpeed > duty.brakeSpeed) {
+  // A vanishing α_d (no driving torque worth the name) sets no limit on the delay: skip the step.
+  if (
+    alpha > 0 &&
+    duty.motorMaxSpeed > duty.brakeSpeed &&
+    Number.isFinite((duty.motorMaxSpeed - duty.brakeSpeed) / alpha)
+  ) {
     maxSetDelay(
       q.angularSpeed(duty.brakeSpeed),
       q.angularSpeed(duty.motorMaxSpeed),

@@ -2,7 +2,13 @@ import type { CriteriaSet, FieldError, SheetEvaluation } from '../core/types.js'
 import type { Derivation } from '../core/step.js';
 import { getLining } from '../criteria/linings.js';
 import type { StoppingResult } from '../stopping/stopping.js';
-import { frictionBandChart, torqueWearChart } from './charts.js';
+import { frictionBandChart } from './charts.js';
+import {
+  chainWearChart,
+  shoeChain,
+  shoeWearLimits,
+  validateChainInputs,
+} from './shoe-brake-chain.js';
 import { publishSteps } from './sheet-output.js';
 import type { ShoeInputs } from './shoe-brake-fields.js';
 import { shoeRelease, shoeSettings } from './shoe-brake-release.js';
@@ -15,6 +21,7 @@ import {
   shoeOverspeed,
   shoeTravelRatio,
 } from './shoe-brake-at-set.js';
+import { shoeMainSpring } from './shoe-main-spring.js';
 
 /** What the duty part of a sheet hands to the shoe-brake part (all SI). */
 export interface ShoeDuty {
@@ -40,6 +47,10 @@ export interface ShoeOutcome {
   torquePerMu: number;
   wornFraction: number;
   torqueMaxNew: number;
+  /** Torque at μ min at the re-adjustment point (the sheet's worn case). */
+  torqueMinWorn: number;
+  /** Torque at μ max with new lining and the spring at the top of its adjustable range. */
+  torqueMaxTopOfRange: number;
   stopMinWorn: StoppingResult;
 }
 
@@ -58,9 +69,7 @@ export function validateShoeInputs(v: ShoeInputs): FieldError[] {
       message: 'the spring cannot give the highest setting force (length would reach zero)',
     });
   }
-  if (!(v.springForce - v.springRate * v.wear * v.springTravelRatio > 0)) {
-    e.push({ field: 'wear', message: 'the spring goes slack before this wear: re-adjust earlier' });
-  }
+  e.push(...validateChainInputs(v));
   return e;
 }
 
@@ -78,17 +87,27 @@ export function evaluateShoeBrake(
 ): ShoeOutcome {
   const lining = getLining(v.liningMaterial)!;
   const b = shoeTorques(v, d);
-  const l = shoeLining(v, duty, b, d);
+  const chain = shoeChain(v, b, d);
+  const l = shoeLining(v, duty, b, chain.wearAtReadjust, d);
+  const limits = shoeWearLimits(
+    v,
+    l.wornMin,
+    chain.wearAtReadjust,
+    { value: duty.requiredTorque, source: duty.requiredSource },
+    d,
+  );
   const stop = shoeStop(duty, l.wornMin, d);
   const stops = shoeStopsCheck(duty, l.wornMin, stop);
   out.checks.push(
     ...shoeTorqueChecks(v, duty, b, l, lining),
+    ...limits.checks,
     shoeDriveTrain(v, duty, b, d),
     ...shoeTravelRatio(v, d),
     ...shoeDutyAtSet(v, duty, l, stop, criteria, d),
     stops.check,
     ...shoeOverspeed(duty, stop, d),
   );
+  out.warnings.push(...limits.warnings);
   out.charts.push(stops.chart);
   if (stop.stops) {
     const heat = shoeStopDistanceAndHeat(v, duty, stop, lining, d);
@@ -98,29 +117,30 @@ export function evaluateShoeBrake(
     out.warnings.push(`${stop.message} Stopping distance and heat are not computed.`);
   }
 
-  const rel = shoeRelease(v, b.springForce, criteria, d);
-  out.checks.push(...rel.checks);
+  out.checks.push(...shoeMainSpring(v, chain.clearance, d).checks);
+  const rel = shoeRelease(v, b.springForce, chain, criteria, d);
+  out.checks.push(...rel.checks, ...chain.checks);
   out.warnings.push(...rel.release.warnings);
 
-  const setting = shoeSettings(v, b, rel.release, d);
+  const setting = shoeSettings(
+    v,
+    b,
+    rel.release,
+    chain,
+    { required: duty.requiredTorque, brakesOnTrain: duty.brakesOnTrain ?? 1 },
+    d,
+  );
   out.checks.push(...setting.checks);
+  out.warnings.push(...setting.warnings);
   out.tables.push(setting.table);
   out.fieldSettings.push(...setting.fieldSettings);
 
-  evaluateShoeDiscSprings(v, d, out);
+  evaluateShoeDiscSprings(v, criteria, d, out);
 
   const torquePerMu = b.nominal / b.muNominal;
   const wornFraction = l.wornSpringForce / b.springForce;
   out.charts.push(
-    torqueWearChart(
-      b.nominal,
-      b.min,
-      b.springForce,
-      v.springRate,
-      v.springTravelRatio,
-      v.wear,
-      duty.requiredTorque,
-    ),
+    chainWearChart(chain, b.nominal / b.min, duty.requiredTorque),
     frictionBandChart(
       torquePerMu,
       wornFraction,
@@ -132,7 +152,14 @@ export function evaluateShoeBrake(
     ),
   );
   publishSteps(out, d, SHOE_PUBLISHED_STEPS);
-  return { torquePerMu, wornFraction, torqueMaxNew: b.max, stopMinWorn: stop };
+  return {
+    torquePerMu,
+    wornFraction,
+    torqueMaxNew: b.max,
+    torqueMinWorn: l.wornMin,
+    torqueMaxTopOfRange: (b.max * v.springForceMax) / b.springForce,
+    stopMinWorn: stop,
+  };
 }
 
 /** Derivation steps of the shoe-brake part shown as results, in the printed order. */
@@ -167,8 +194,15 @@ const SHOE_PUBLISHED_STEPS = [
   'peak-temperature',
   'thruster-force-needed',
   'thruster-force-ratio',
+  'clearance-from-stroke',
   'working-stroke',
-  'reserve-stroke-worn',
-  'wear-to-readjust',
+  'wear-readjust-point',
+  'wear-reserve-used',
+  'lining-wear-allowance',
+  'torque-drum-limit',
   'spring-length',
+  'spring-force-highest',
+  'spring-shear-stress',
+  'solid-length',
+  'spring-shear-stress-solid',
 ];

@@ -1,6 +1,7 @@
 import type { FieldDefinition, SectionDefinition } from '../core/types.js';
 import { LININGS } from '../criteria/linings.js';
 import { choice, flag, num, qty, type InputsOf } from './field-builders.js';
+import { MAIN_SPRING_FIELDS } from './shoe-main-spring.js';
 
 /** Sections shared by the shoe-brake sheets (after each sheet's own duty section). */
 export const SHOE_SECTIONS: SectionDefinition[] = [
@@ -92,7 +93,7 @@ export const BRAKE_FIELDS = [
     'Torque rating of the drive train at the brake shaft',
     'M_max',
     'torque',
-    1000,
+    1500,
     'N m',
     'lbf ft',
     {
@@ -128,9 +129,32 @@ export const LINING_FIELDS = [
     exclusiveMin: true,
     max: 1,
   }),
-  qty(L, 'wear', 'Lining wear per shoe before re-adjustment', 'w', 'length', 0.4, 'mm', 'in', {
+  qty(L, 'liningThickness', 'Lining thickness, new', 't_L', 'length', 8, 'mm', 'in', {
     min: 0,
+    exclusiveMin: true,
   }),
+  qty(
+    L,
+    'liningMinThickness',
+    "Lining thickness, minimum (replace; lining maker's data)",
+    't_L,min',
+    'length',
+    3,
+    'mm',
+    'in',
+    { min: 0, exclusiveMin: true },
+  ),
+  qty(
+    L,
+    'drumWearAllowance',
+    "Drum diameter reduction allowed by wear and re-machining (drum maker's data)",
+    'ΔD',
+    'length',
+    4,
+    'mm',
+    'in',
+    { min: 0 },
+  ),
   num(L, 'springTravelRatio', 'Spring travel per unit shoe travel', 'r_s', 5, {
     min: 0,
     exclusiveMin: true,
@@ -204,11 +228,32 @@ export const THERMAL_FIELDS = [
 ] as const;
 
 export const RELEASE_FIELDS = [
-  qty(R, 'clearance', 'Shoe clearance when released (per shoe)', 'ε', 'length', 0.8, 'mm', 'in', {
-    min: 0,
-    exclusiveMin: true,
-    max: 10,
-  }),
+  flag(
+    R,
+    'liftStop',
+    'Thruster has a lift stop (the fitter sets the clearance)',
+    false,
+    'Without a lift stop the released thruster runs to its end stop: the clearance then follows from the stroke, the reserve stroke and the linkage, and is derived, not set (common practice; the thruster maker’s data governs).',
+  ),
+  {
+    ...qty(
+      R,
+      'clearance',
+      'Shoe clearance when released (per shoe)',
+      'ε',
+      'length',
+      0.8,
+      'mm',
+      'in',
+      {
+        min: 0,
+        exclusiveMin: true,
+        max: 10,
+        help: 'Set with a lift stop only; without one it is derived from the stroke.',
+      },
+    ),
+    requiredIf: 'liftStop',
+  },
   num(R, 'thrusterTravelRatio', 'Thruster rod travel per unit shoe travel', 'r_t', 25, {
     min: 0,
     exclusiveMin: true,
@@ -223,6 +268,19 @@ export const RELEASE_FIELDS = [
     min: 0,
     exclusiveMin: true,
   }),
+  ...(
+    [
+      ['thrusterFactorLowVoltage', 'at −10 % supply voltage', 0.95],
+      ['thrusterFactorCold', 'at the lowest site temperature (coldest oil)', 0.85],
+      ['thrusterFactorHot', 'at the highest site temperature', 0.95],
+    ] as const
+  ).map(([key, when, demo]) =>
+    num(R, key, `Thruster lift force ${when} ÷ rated force (maker's data)`, 'k_th', demo, {
+      min: 0,
+      exclusiveMin: true,
+      max: 1.5,
+    }),
+  ),
   qty(R, 'thrusterStroke', 'Thruster nominal stroke', 's_n', 'length', 50, 'mm', 'in', {
     min: 0,
     exclusiveMin: true,
@@ -249,6 +307,7 @@ function stackFields<P extends 'holder' | 'equaliser'>(
   series: number,
   pitch: number,
   backOff: number,
+  tolerance: number,
 ) {
   return [
     flag(S, `${prefix}Enabled`, `${title}: include`, true),
@@ -301,6 +360,21 @@ function stackFields<P extends 'holder' | 'equaliser'>(
       'deg',
       { min: 0, max: 3600 },
     ),
+    qty(
+      S,
+      `${prefix}BackOffTolerance`,
+      `${title}: back-off angle tolerance (±)`,
+      'Δθ',
+      'angle',
+      tolerance,
+      'deg',
+      'deg',
+      {
+        min: 0,
+        max: 360,
+        help: 'Common practice: how far the fitter may stop short of or run past the back-off angle (slot alignment, feel of "flat").',
+      },
+    ),
   ] as const;
 }
 
@@ -311,14 +385,53 @@ function ifEnabled<const Fs extends readonly FieldDefinition[]>(prefix: string, 
   ) as unknown as Fs;
 }
 
-/** Optional disc-spring stacks (common practice: holder flat then about 60°, equaliser stack of three flat then about 180°). */
+/** Optional disc-spring stacks (common practice: tightened flat, then backed off by an angle; holder about 60°). */
 export const DISC_SPRING_FIELDS = [
-  ...ifEnabled('holder', stackFields('holder', 'Shoe holder', 1, 2.5, 60)),
-  ...ifEnabled('equaliser', stackFields('equaliser', 'Equaliser', 3, 2, 180)),
+  ...ifEnabled('holder', [
+    ...stackFields('holder', 'Shoe holder', 1, 2.5, 60, 15),
+    qty(
+      S,
+      'holderRequiredPreload',
+      'Shoe holder: preload the holder needs',
+      'F_V,req',
+      'force',
+      1500,
+      'N',
+      'lbf',
+      {
+        min: 0,
+        help: "The force that keeps the shoe from rattling or tilting on its pivot (brake maker's data).",
+      },
+    ),
+  ] as const),
+  ...ifEnabled('equaliser', stackFields('equaliser', 'Equaliser', 3, 2, 240, 30)),
+  qty(S, 'discE', 'Disc springs: elastic modulus', 'E', 'pressure', 206000, 'MPa', 'psi', {
+    min: 1000,
+    help: 'DIN EN 16983 (formerly DIN 2093) tables use 206 000 N/mm² for spring steel.',
+  }),
+  num(S, 'discNu', "Disc springs: Poisson's ratio", 'ν', 0.3, { min: 0.1, max: 0.49 }),
+  num(S, 'discFrictionEdge', 'Disc springs: edge friction coefficient', 'μ_R', 0.02, {
+    min: 0,
+    max: 0.19,
+    help: 'Friction at the load edges (series stacks): from memory of the DIN EN 16984 table.',
+  }),
+  num(
+    S,
+    'discFrictionCone',
+    'Disc springs: cone friction coefficient (nested discs)',
+    'μ_M',
+    0.015,
+    {
+      min: 0,
+      max: 0.19,
+      help: 'Friction between nested discs of a parallel set: from memory of the DIN EN 16984 table.',
+    },
+  ),
 ] as const;
 
 export const SHOE_BRAKE_FIELDS = [
   ...BRAKE_FIELDS,
+  ...MAIN_SPRING_FIELDS,
   ...LINING_FIELDS,
   ...THERMAL_FIELDS,
   ...RELEASE_FIELDS,

@@ -2,11 +2,12 @@ import type { CheckResult, CriteriaSet, FieldSetting, SheetEvaluation } from '..
 import type { Derivation } from '../core/step.js';
 import { criterion } from '../criteria/lookup.js';
 import { releaseAndStroke, type ReleaseResult } from '../release/release.js';
-import { settingTable, springLength } from '../spring-setting/setting-table.js';
+import { settingTable, springLength, type SettingRow } from '../spring-setting/setting-table.js';
 import * as q from '../units/quantities.js';
 import { makeCheck } from './checks.js';
 import type { ShoeInputs } from './shoe-brake-fields.js';
 import type { ShoeTorques } from './shoe-brake-torque.js';
+import type { ShoeChain } from './shoe-brake-chain.js';
 
 const REF_STROKE = "stroke budget (common practice; the thruster maker's data governs)";
 
@@ -14,6 +15,7 @@ const REF_STROKE = "stroke budget (common practice; the thruster maker's data go
 export function shoeRelease(
   v: ShoeInputs,
   springForce: number,
+  chain: ShoeChain,
   criteria: CriteriaSet,
   d: Derivation,
 ): { release: ReleaseResult; checks: CheckResult[] } {
@@ -22,14 +24,14 @@ export function shoeRelease(
     {
       springForce: q.force(springForce),
       springRate: q.stiffness(v.springRate),
-      clearance: q.length(v.clearance),
+      clearance: q.length(chain.clearance),
       springTravelRatio: q.ratio(v.springTravelRatio),
       thrusterTravelRatio: q.ratio(v.thrusterTravelRatio),
       efficiency: q.ratio(v.releaseEfficiency),
       thrusterForce: q.force(v.thrusterForce),
       nominalStroke: q.length(v.thrusterStroke),
       reserveStroke: q.length(v.reserveStroke),
-      wear: q.length(v.wear),
+      wear: q.length(chain.wearAtReadjust),
       minReserveStroke: q.length(v.minReserveStroke),
     },
     d,
@@ -49,28 +51,41 @@ export function shoeRelease(
         source: ratioCrit.source,
         failHint: 'Choose a stronger thruster or lower the spring setting.',
       }),
-      makeCheck({
-        id: 'reserve-stroke-worn',
-        section: 'release',
-        label: 'Reserve stroke at fully worn lining ≥ minimum',
-        value: rel.wornReserveStroke,
-        limit: v.minReserveStroke,
-        kind: 'min',
-        dimension: 'length',
-        source: "equipment data (user input): thruster maker's minimum reserve stroke",
-        failHint:
-          'With the reserve stroke used up the brake can lose all holding torque: re-adjust earlier or set a larger reserve.',
-      }),
-      makeCheck({
-        id: 'stroke-headroom',
-        section: 'release',
-        label: 'Thruster stroke left above the released position ≥ 0',
-        value: rel.headroom,
-        limit: 0,
-        kind: 'min',
-        dimension: 'length',
-        source: REF_STROKE,
-      }),
+      ...(
+        [
+          ['low-voltage', 'at −10 % supply voltage', v.thrusterFactorLowVoltage],
+          ['cold', 'at the lowest site temperature', v.thrusterFactorCold],
+          ['hot', 'at the highest site temperature', v.thrusterFactorHot],
+        ] as const
+      ).map(([id, when, k]) =>
+        makeCheck({
+          id: `thruster-force-${id}`,
+          section: 'release',
+          label: `Thruster force ${when} ÷ force needed ≥ required ratio`,
+          value: rel.forceRatio * k,
+          limit: ratioCrit.value,
+          kind: 'min',
+          dimension: 'dimensionless',
+          source: `${ratioCrit.source}; force factor: thruster maker's data (user input)`,
+          failHint: 'The brake may not open fully: choose a stronger thruster.',
+        }),
+      ),
+      // Without a lift stop the rod runs to its end stop: the headroom is zero by construction.
+      ...(chain.derivedClearance
+        ? []
+        : [
+            makeCheck({
+              id: 'stroke-headroom',
+              section: 'release',
+              label: 'Thruster stroke left above the released position ≥ 0',
+              value: rel.headroom,
+              limit: 0,
+              kind: 'min',
+              dimension: 'length',
+              source: REF_STROKE,
+              failHint: 'The lift stop is set beyond the thruster stroke: the shoes cannot lift.',
+            }),
+          ]),
     ],
   };
 }
@@ -80,11 +95,14 @@ export function shoeSettings(
   v: ShoeInputs,
   b: ShoeTorques,
   rel: ReleaseResult,
+  chain: ShoeChain,
+  band: { required: number; brakesOnTrain: number },
   d: Derivation,
 ): {
   checks: CheckResult[];
   table: SheetEvaluation['tables'][number];
   fieldSettings: FieldSetting[];
+  warnings: string[];
 } {
   const Fs = b.springForce;
   d.section = 'setting';
@@ -100,15 +118,26 @@ export function shoeSettings(
       dimension: 'force',
       source: 'equipment data (user input): adjustable range of the brake spring',
     });
-  const rows = settingTable(
-    v.springForceMin,
-    v.springForceMax,
-    v.springFreeLength,
-    v.springRate,
-    b.nominal / Fs,
-    b.min / Fs,
-    11,
-  );
+  const lim = permittedBand(v, b, chain, band);
+  const warnings: string[] = [];
+  let rows: SettingRow[] = [];
+  if (lim.high > lim.low) {
+    const minPerN = b.min / Fs;
+    const loss = v.springRate * v.springTravelRatio * chain.wearAtReadjust;
+    rows = settingTable(
+      lim.low,
+      lim.high,
+      v.springFreeLength,
+      v.springRate,
+      b.nominal / Fs,
+      minPerN,
+      11,
+    ).map((r) => ({ ...r, torqueMinWorn: Math.max(0, r.springForce - loss) * minPerN }));
+  } else {
+    warnings.push(
+      'No spring setting in the adjustable range gives the required torque at μ min on the worn lining and drum while staying within the drive-train rating at μ max: the setting table is empty.',
+    );
+  }
   const m = (key: string, label: string, value: number, note?: string): FieldSetting => ({
     key,
     label,
@@ -117,6 +146,7 @@ export function shoeSettings(
     dimension: 'length',
     ...(note === undefined ? {} : { note }),
   });
+  const derived = 'Derived, not set: check only.';
   return {
     checks: [
       range('spring-setting-max', 'upper', v.springForceMax, 'max'),
@@ -124,12 +154,18 @@ export function shoeSettings(
     ],
     table: {
       id: 'spring-setting',
-      title: 'Spring setting table (new lining)',
+      title: `Spring setting table: permitted band ${fmtN(lim.low)}–${fmtN(lim.high)} N (new lining)`,
       columns: [
         { key: 'springForce', label: 'Spring force', unit: 'N', dimension: 'force' },
         { key: 'springLength', label: 'Spring length', unit: 'm', dimension: 'length' },
         { key: 'torqueNominal', label: 'Torque at μ nominal', unit: 'N m', dimension: 'torque' },
         { key: 'torqueMin', label: 'Torque at μ min', unit: 'N m', dimension: 'torque' },
+        {
+          key: 'torqueMinWorn',
+          label: 'Torque at μ min, worn to re-adjust',
+          unit: 'N m',
+          dimension: 'torque',
+        },
       ],
       rows,
     },
@@ -142,11 +178,54 @@ export function shoeSettings(
         unit: 'N',
         dimension: 'force',
       },
-      m('shoeClearance', 'Shoe clearance when released (each side, equal)', v.clearance),
-      m('workingStroke', 'Thruster working stroke', rel.workingStroke),
+      m(
+        'shoeClearance',
+        'Shoe clearance when released (each side, equal)',
+        chain.clearance,
+        chain.derivedClearance
+          ? 'No lift stop: follows from the stroke and reserve. ' + derived
+          : 'Set at the lift stop.',
+      ),
+      m('workingStroke', 'Thruster working stroke', rel.workingStroke, derived),
       m('reserveStroke', 'Reserve stroke to set (new lining)', v.reserveStroke),
       m('minReserveStroke', 'Re-adjust before the reserve stroke falls below', v.minReserveStroke),
-      m('wearToReadjust', 'Lining wear per shoe until re-adjustment', rel.wearToReadjust),
+      m(
+        'wearToReadjust',
+        'Lining wear per shoe until re-adjustment',
+        chain.wearAtReadjust,
+        derived,
+      ),
+      m(
+        'wearTorqueLost',
+        'Lining wear per shoe at which ALL holding torque is lost (reserve used up)',
+        chain.wearReserveUsed,
+        derived,
+      ),
     ],
+    warnings,
   };
+}
+
+const fmtN = (n: number) => String(Math.round(n));
+
+/**
+ * The permitted band of spring forces: from the force that still gives the required torque at
+ * μ min at the re-adjustment point on the drum at its wear limit, to the lower of the adjustable
+ * range's top and the force at which all brakes on the train at μ max reach its rating.
+ */
+export function permittedBand(
+  v: ShoeInputs,
+  b: ShoeTorques,
+  chain: ShoeChain,
+  band: { required: number; brakesOnTrain: number },
+): { low: number; high: number } {
+  const Fs = b.springForce;
+  const loss = v.springRate * v.springTravelRatio * chain.wearAtReadjust;
+  const minPerN = ((b.min / Fs) * (v.drumDiameter - v.drumWearAllowance)) / v.drumDiameter;
+  const low = Math.max(v.springForceMin, band.required / minPerN + loss);
+  const high = Math.min(
+    v.springForceMax,
+    v.maxBrakeTorque / ((b.max / Fs) * Math.max(1, band.brakesOnTrain)),
+  );
+  return { low, high };
 }

@@ -87,11 +87,15 @@ export function shoeTorques(v: ShoeInputs, d: Derivation): ShoeTorques {
   };
 }
 
-/** Spring force and torque at fully worn lining, peak and mean pressure, rubbing speed and p·v. */
+/**
+ * Spring force and torque at the re-adjustment point (the worn case: wear `wear` per shoe), peak
+ * and mean pressure, rubbing speed and p·v.
+ */
 export function shoeLining(
   v: ShoeInputs,
   duty: ShoeDuty,
   b: ShoeTorques,
+  wear: number,
   d: Derivation,
 ): ShoeLining {
   const r = v.drumDiameter / 2;
@@ -99,13 +103,13 @@ export function shoeLining(
   const worn = wornSpringForce(
     b.springForce,
     q.stiffness(v.springRate),
-    q.length(v.wear),
+    q.length(wear),
     q.ratio(v.springTravelRatio),
     d,
   );
   const Nw = shoeNormalForce(worn.force, q.ratio(v.leverRatio), q.ratio(v.linkageEfficiency), d, {
     id: 'shoe-normal-force-worn',
-    label: 'Normal force on each shoe at worn lining',
+    label: 'Normal force on each shoe at the re-adjustment point',
     symbol: 'N_w',
     names: { F_s: 'F_s,w' },
   });
@@ -113,7 +117,7 @@ export function shoeLining(
     b.muMin,
     Nw,
     'torque-worn-min',
-    'Brake torque at μ min, fully worn lining',
+    'Brake torque at μ min, lining worn to the re-adjustment point',
     'M_b,w,min',
     { N: 'N_w' },
   );
@@ -121,7 +125,7 @@ export function shoeLining(
     b.muNominal,
     Nw,
     'torque-worn-nominal',
-    'Brake torque at μ nominal, fully worn lining',
+    'Brake torque at μ nominal, lining worn to the re-adjustment point',
     'M_b,w,nom',
     { N: 'N_w' },
   );
@@ -171,7 +175,7 @@ export function shoeTorqueChecks(
     tq('torque-min-friction', 'Brake torque at μ min ≥ required', b.min),
     tq(
       'torque-worn-min-friction',
-      'Brake torque at μ min and fully worn lining ≥ required',
+      'Brake torque at μ min, lining worn to the re-adjustment point ≥ required',
       l.wornMin,
     ),
     makeCheck({

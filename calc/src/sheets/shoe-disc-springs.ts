@@ -1,18 +1,15 @@
-import type { SheetEvaluation } from '../core/types.js';
+import type { CriteriaSet, SheetEvaluation } from '../core/types.js';
 import { CalcInputError, isCalcInputError } from '../core/errors.js';
-import type { Derivation } from '../core/step.js';
+import { Derivation } from '../core/step.js';
 import { deriveStackSet } from '../disc-springs/stack-derivation.js';
-import { TABLE_STEEL } from '../disc-springs/disc.js';
 import { WORKING_BAND, workingBandWarning } from '../disc-springs/curve.js';
 import type { DiscStack } from '../disc-springs/stack.js';
 import { makeCheck } from './checks.js';
+import { sigmaOMFlatCheck } from './disc-spring-stack-output.js';
 import { SHOE_STACK_TITLES } from './field-card-layouts.js';
 import type { ShoeInputs } from './shoe-brake-fields.js';
 
 const SECTION = 'discSprings';
-// Friction factors for series-stacked discs (recalled from DIN EN 16984's table, memory): only
-// the edge friction matters for discs stacked in series.
-const FRICTION = { frictionCone: 0.015, frictionEdge: 0.02 };
 const FIELD_MAP: Record<string, string> = {
   De: 'De',
   Di: 'Di',
@@ -22,11 +19,18 @@ const FIELD_MAP: Record<string, string> = {
   parallelCount: 'Parallel',
 };
 const TITLES = SHOE_STACK_TITLES;
+/** Disc-spring inputs shared by both stacks. */
+const SHARED_FIELD: Record<string, string> = {
+  E: 'discE',
+  nu: 'discNu',
+  frictionCone: 'discFrictionCone',
+  frictionEdge: 'discFrictionEdge',
+};
 const PRACTICE = {
   holder:
     'common practice, no published source: a disc spring under a castle nut on a shoe holder is tightened flat, then backed off about 60°',
   equaliser:
-    'common practice, no published source: a stack of three disc springs on an equaliser shaft is tightened flat, then backed off about 180°',
+    'common practice, no published source: a stack of disc springs on an equaliser shaft is tightened flat, then backed off by the angle given (at least about half a turn)',
 } as const;
 
 function stackOf(v: ShoeInputs, p: 'holder' | 'equaliser'): DiscStack {
@@ -36,11 +40,13 @@ function stackOf(v: ShoeInputs, p: 'holder' | 'equaliser'): DiscStack {
       Di: v[`${p}Di`],
       t: v[`${p}T`],
       l0: v[`${p}L0`],
-      ...TABLE_STEEL,
+      E: v.discE,
+      nu: v.discNu,
     },
     seriesCount: v[`${p}Series`],
     parallelCount: v[`${p}Parallel`],
-    ...FRICTION,
+    frictionCone: v.discFrictionCone,
+    frictionEdge: v.discFrictionEdge,
   };
 }
 
@@ -48,23 +54,28 @@ function stackOf(v: ShoeInputs, p: 'holder' | 'equaliser'): DiscStack {
  * Back-off preload of the optional shoe-holder and equaliser disc-spring stacks, computed by the
  * disc-spring core (DIN EN 16984 relations) and recorded in the sheet's derivation.
  */
-export function evaluateShoeDiscSprings(v: ShoeInputs, d: Derivation, out: SheetEvaluation): void {
+export function evaluateShoeDiscSprings(
+  v: ShoeInputs,
+  criteria: CriteriaSet,
+  d: Derivation,
+  out: SheetEvaluation,
+): void {
   for (const p of ['holder', 'equaliser'] as const) {
     if (!v[`${p}Enabled`]) continue;
     d.section = SECTION;
     const stack = stackOf(v, p);
-    let r;
-    try {
-      r = deriveStackSet({ stack, lead: v[`${p}Pitch`], angle: v[`${p}BackOff`] }, d, `${p}-`);
-    } catch (e) {
-      if (!isCalcInputError(e)) throw e;
-      throw new CalcInputError(
-        e.fields.map((f) => ({
-          field: `${p}${FIELD_MAP[f.field] ?? f.field}`,
-          message: f.message,
-        })),
+    const lead = v[`${p}Pitch`];
+    const theta = v[`${p}BackOff`];
+    const tol = v[`${p}BackOffTolerance`];
+    const r = inSheetFields(p, () => deriveStackSet({ stack, lead, angle: theta }, d, `${p}-`));
+    // The ends of the back-off tolerance, off the printed derivation: stopping short leaves the
+    // stack deeper (nearer flat), running past leaves less preload.
+    const at = (angle: number) =>
+      inSheetFields(p, () =>
+        deriveStackSet({ stack, lead, angle: Math.max(0, angle) }, new Derivation(SECTION)),
       );
-    }
+    const short = at(theta - tol);
+    const past = at(theta + tol);
     const title = TITLES[p];
     const preload = d.find(`${p}-preload`);
     if (preload) {
@@ -85,7 +96,7 @@ export function evaluateShoeDiscSprings(v: ShoeInputs, d: Derivation, out: Sheet
         value: v[`${p}BackOff`],
         unit: 'rad',
         dimension: 'angle',
-        note: PRACTICE[p],
+        note: `${PRACTICE[p]}. Tolerance ±${fmtDeg(tol)}°. To line up a slot, back off further within the tolerance — never tighten.`,
       },
       {
         key: `${p}Preload`,
@@ -128,11 +139,66 @@ export function evaluateShoeDiscSprings(v: ShoeInputs, d: Derivation, out: Sheet
         failHint: 'Back off more: little travel is left before the stack goes solid.',
       }),
     );
+    const band = (end: 'min' | 'max', value: number, what: string) =>
+      makeCheck({
+        id: `${p}-band-${end === 'max' ? 'short' : 'past'}`,
+        section: SECTION,
+        label: `${title}: set deflection ÷ h0 ${what} (${end === 'max' ? '−' : '+'}${fmtDeg(tol)}°), ${end === 'max' ? 'at most' : 'at least'}`,
+        value,
+        limit: WORKING_BAND[end],
+        kind: end,
+        dimension: 'dimensionless',
+        source: `band: from memory of DIN 2093 (now DIN EN 16983); tolerance: common practice (declared input)`,
+        failHint: 'Change the back-off angle so both ends of its tolerance stay in the band.',
+      });
+    out.checks.push(
+      band('max', short.setRatio, 'when backed off short'),
+      band('min', past.setRatio, 'when backed off past'),
+      sigmaOMFlatCheck(
+        p,
+        SECTION,
+        r.sigmaOMFlat,
+        criteria,
+        `${title}: stress |σOM| at flat (static load; DIN EN 16983/16984)`,
+      ),
+    );
+    if (p === 'holder') {
+      out.checks.push(
+        makeCheck({
+          id: 'holder-preload-needed',
+          section: SECTION,
+          label: `${title}: preload backed off past (+${fmtDeg(tol)}°) ≥ the preload the holder needs`,
+          value: past.stackUnloading,
+          limit: v.holderRequiredPreload,
+          kind: 'min',
+          dimension: 'force',
+          source: "brake maker's data (user input): preload the shoe holder needs",
+          failHint: 'Back off less or use a stiffer disc.',
+        }),
+      );
+    }
     const warning = workingBandWarning(r.setRatio);
     if (warning) out.warnings.push(`${title}: ${warning}`);
     if (r.slack)
       out.warnings.push(
         `${title}: the back-off exceeds the travel to flat; the stack is free and gives no preload.`,
       );
+  }
+}
+
+const fmtDeg = (rad: number) => String(Math.round((rad * 180) / Math.PI));
+
+/** Runs a disc-spring core call and names its field errors as the sheet declares them. */
+function inSheetFields<T>(p: 'holder' | 'equaliser', f: () => T): T {
+  try {
+    return f();
+  } catch (e) {
+    if (!isCalcInputError(e)) throw e;
+    throw new CalcInputError(
+      e.fields.map((x) => ({
+        field: SHARED_FIELD[x.field] ?? `${p}${FIELD_MAP[x.field] ?? x.field}`,
+        message: x.message,
+      })),
+    );
   }
 }

@@ -134,10 +134,16 @@ export const TRAVEL_DUTY_FIELDS = [
 /** Shoe-brake demo values sized for the travel demo (smaller drum and spring than the hoist). */
 const TRAVEL_DEMO: Record<string, InputValue> = {
   drumDiameter: { value: 200, unit: 'mm' },
+  drumWearAllowance: { value: 3, unit: 'mm' },
+  liningThickness: { value: 6, unit: 'mm' },
+  liningMinThickness: { value: 2, unit: 'mm' },
   shoeWidth: { value: 90, unit: 'mm' },
   springForce: { value: 520, unit: 'N' },
   springRate: { value: 20, unit: 'N/mm' },
   springFreeLength: { value: 150, unit: 'mm' },
+  springWireDiameter: { value: 7, unit: 'mm' },
+  springMeanDiameter: { value: 47.5, unit: 'mm' },
+  springActiveCoils: 11,
   springForceMin: { value: 250, unit: 'N' },
   springForceMax: { value: 800, unit: 'N' },
   maxBrakeTorque: { value: 300, unit: 'N m' },

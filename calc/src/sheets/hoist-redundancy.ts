@@ -1,0 +1,108 @@
+import type { CheckResult } from '../core/types.js';
+import { holdingBrakeRedundancy, type RedundancyBrake } from '../duty/redundancy.js';
+import * as q from '../units/quantities.js';
+import { flag } from './field-builders.js';
+import { makeCheck } from './checks.js';
+
+/** Service inputs that decide how many holding brakes the hoisting unit needs. */
+export const HOIST_SERVICE_FIELDS = [
+  flag(
+    'duty',
+    'hotMetal',
+    'The hoist handles hot metal (molten material)',
+    true,
+    '29 CFR 1910.179(f)(2)(vi); California Title 8 §4898(h): at least two holding brakes with power control braking.',
+  ),
+  flag(
+    'duty',
+    'powerControlBraking',
+    'Lowering speed is controlled by power control braking (regenerative, dynamic, eddy current)',
+    true,
+  ),
+] as const;
+
+export interface HoistRedundancyInput {
+  hotMetal: boolean;
+  powerControlBraking: boolean;
+  /** Holding brakes on this hoisting unit (2 for the arrangement "two"). */
+  brakesInstalled: number;
+  brake: RedundancyBrake;
+  hoistingTorque: number;
+  staticTorque: number;
+  inertia: number;
+  lowerSpeed: number;
+  loadSpeed: number;
+  setDelay: number;
+  stoppingDistanceLimit: number;
+  driveTrainRating: number;
+}
+
+/**
+ * The redundancy checks of the hoist (section 'duty'): brakes installed against what the service
+ * requires, and for two brakes each alone and both together. The other brake of a pair is taken
+ * as identical to this one (same sheet type, same settings); a different second brake needs its
+ * own sheet. The lowering load back-drives the train with no credit for gear losses (η_bd = 1,
+ * the conservative value for an emergency stop).
+ */
+export function hoistRedundancy(r: HoistRedundancyInput): {
+  checks: CheckResult[];
+  warnings: string[];
+} {
+  const res = holdingBrakeRedundancy({
+    hotMetal: r.hotMetal,
+    powerControlBraking: r.powerControlBraking,
+    brakes: Array.from({ length: r.brakesInstalled }, () => r.brake),
+    hoistingTorque: q.torque(r.hoistingTorque),
+    loadTorque: q.torque(r.staticTorque),
+    backDrivingEfficiency: q.ratio(1),
+    inertia: q.inertia(r.inertia),
+    lowerSpeed: q.angularSpeed(r.lowerSpeed),
+    loadSpeed: q.speed(r.loadSpeed),
+    setDelay: q.time(r.setDelay),
+    stoppingDistanceLimit: q.length(r.stoppingDistanceLimit),
+    driveTrainRating: q.torque(r.driveTrainRating),
+  });
+  // With identical brakes the checks of brake 2 repeat those of brake 1: print them once.
+  const checks = res.checks
+    .filter((c) => !c.id.startsWith('brake-2-') || r.brakesInstalled < 2)
+    .map((c) =>
+      makeCheck({
+        ...c,
+        id: c.id.replace(/^brake-1-/, 'each-brake-'),
+        label: c.label.replace(/^(Stopping distance with )?[Bb]rake 1 alone/, (_m, p?: string) =>
+          p ? `${p}one brake alone` : 'Each brake alone',
+        ),
+        section: 'duty',
+        failHint:
+          c.id === 'holding-brakes-installed'
+            ? 'Set the arrangement to two holding brakes and give each a sheet.'
+            : undefined,
+      }),
+    );
+  const warnings =
+    res.requiredBrakes === 2
+      ? [
+          `Governing rules for this service: ${res.rules.join('. ')}. Defer to the governing standard and local code.`,
+          'The second holding brake is taken as identical to this one; a different brake needs its own sheet.',
+        ]
+      : [];
+  return { checks, warnings };
+}
+
+/**
+ * The tests the sheet asks for before the brake goes into service, printed with the values of
+ * this hoist: the load test (static and dynamic, each brake alone when there are two) and the
+ * static torque test after bedding-in.
+ */
+export function hoistTestRequirements(r: {
+  ratedLoad: number;
+  requiredTorque: number;
+  brakesInstalled: number;
+}): string[] {
+  const testLoad = Math.round((1.25 * r.ratedLoad) / 10) * 10;
+  const each = r.brakesInstalled > 1 ? ' with each holding brake alone (the other held open)' : '';
+  return [
+    `Load test before service: test load not more than 125 % of the rated load, here at most ${testLoad} kg (29 CFR 1910.179(k)(2), from memory; ASME B30.2 states the same limit, from memory). Static: hold the test load clear of the ground${each}. Dynamic: stop the rated load lowering at full speed${each} (common practice).`,
+    `Static torque test after the linings have bedded in: with the brake set, apply ${Math.round(r.requiredTorque)} N·m (the required torque) at the brake shaft with a torque wrench or lever and weight${each}; the drum must not turn (common practice, no published source).`,
+  ];
+}

@@ -1,0 +1,194 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { getCriteriaSet } from '../criteria/lookup.js';
+import { nearlyEqual } from '../testing/expect-close.js';
+import { demoInputs, getSheetType } from './registry.js';
+
+const crane = getCriteriaSet('crane-hoist')!;
+const hoist = getSheetType('hoist-shoe-brake')!;
+const trav = getSheetType('travel-shoe-brake')!;
+const travel = getCriteriaSet('travel-drive')!;
+const check = (e: ReturnType<typeof hoist.evaluate>, id: string) =>
+  e.checks.find((c) => c.id === id);
+const result = (e: ReturnType<typeof hoist.evaluate>, key: string) =>
+  e.results.find((r) => r.key === key)?.value;
+const setting = (e: ReturnType<typeof hoist.evaluate>, key: string) =>
+  e.fieldSettings.find((f) => f.key === key);
+
+describe('stroke–wear–setting chain on the shoe sheets', () => {
+  const demo = hoist.evaluate(demoInputs(hoist), crane);
+
+  it('without a lift stop the clearance is derived: (50 − 20) mm ÷ 25 = 1.2 mm, printed as derived', () => {
+    expect(nearlyEqual(result(demo, 'clearance-from-stroke')!, 0.0012, 1e-12)).toBe(true);
+    expect(nearlyEqual(setting(demo, 'shoeClearance')!.value, 0.0012, 1e-12)).toBe(true);
+    expect(setting(demo, 'shoeClearance')!.note).toMatch(/Derived, not set/);
+    expect(setting(demo, 'reserveStroke')!.note).toBeUndefined();
+    expect(check(demo, 'stroke-headroom')).toBeUndefined();
+  });
+
+  it('the worn case is the re-adjustment point (20 − 5) mm ÷ 25 = 0.6 mm; torque is lost at 0.8 mm', () => {
+    expect(nearlyEqual(result(demo, 'wear-readjust-point')!, 0.0006, 1e-12)).toBe(true);
+    expect(nearlyEqual(result(demo, 'wear-reserve-used')!, 0.0008, 1e-12)).toBe(true);
+    // F_s,w = 1100 − 40 N/mm · 5 · 0.6 mm = 980 N
+    expect(nearlyEqual(result(demo, 'worn-spring-force')!, 980, 1e-9)).toBe(true);
+    expect(demo.checks.map((c) => c.label).join(' ')).not.toMatch(/fully worn/);
+  });
+
+  it('the wear chart falls to zero where the reserve is used up and marks the re-adjustment point', () => {
+    const ch = demo.charts.find((c) => c.id === 'torque-wear')!;
+    const min = ch.series.find((s) => s.name === 'μ min')!.points;
+    const at = min.filter((p) => nearlyEqual(p.x, 0.0008, 1e-9));
+    expect(at.some((p) => p.y > 0) && at.some((p) => p.y === 0)).toBe(true);
+    expect(min.filter((p) => p.x > 0.0008).every((p) => p.y === 0)).toBe(true);
+    expect(ch.referenceLines!.find((l) => /Re-adjust/.test(l.label))!.value).toBeCloseTo(
+      0.0006,
+      12,
+    );
+  });
+
+  it('with a lift stop the set clearance is used and the stroke headroom is checked', () => {
+    const e = hoist.evaluate({ ...demoInputs(hoist), liftStop: true, clearance: '0.8 mm' }, crane);
+    expect(nearlyEqual(setting(e, 'shoeClearance')!.value, 0.0008, 1e-12)).toBe(true);
+    expect(check(e, 'stroke-headroom')!.pass).toBe(true);
+    const far = hoist.evaluate(
+      { ...demoInputs(hoist), liftStop: true, clearance: '1.5 mm' },
+      crane,
+    );
+    expect(check(far, 'stroke-headroom')!.pass).toBe(false);
+  });
+
+  it('without a lift stop the clearance field may be left out', () => {
+    const inputs: Record<string, unknown> = { ...demoInputs(hoist) };
+    delete inputs.clearance;
+    expect(() => hoist.evaluate(inputs as never, crane)).not.toThrow();
+  });
+
+  it('a drum worn to its limit lowers the worst-case torque in proportion to the diameter', () => {
+    const M = result(demo, 'torque-worn-min')!;
+    expect(nearlyEqual(result(demo, 'torque-drum-limit')!, (M * 396) / 400, 1e-12)).toBe(true);
+    const e = hoist.evaluate({ ...demoInputs(hoist), drumWearAllowance: '190 mm' }, crane);
+    expect(check(e, 'torque-drum-wear-limit')!.pass).toBe(false);
+  });
+
+  it('a minimum lining thickness at or above the new thickness is refused on its field', () => {
+    expect(() =>
+      hoist.evaluate({ ...demoInputs(hoist), liningMinThickness: '8 mm' }, crane),
+    ).toThrow(/liningMinThickness/);
+  });
+});
+
+describe('spring setting table: only the permitted band', () => {
+  it.each([
+    ['hoist', hoist, crane],
+    ['travel', trav, travel],
+  ] as const)(
+    '%s: every row gives the required torque worn at μ min and stays in range',
+    (_n, sheet, set) => {
+      const e = sheet.evaluate(demoInputs(sheet), set);
+      const req = e.results.find((r) => r.key === 'required-torque')!.value;
+      const rows = e.tables.find((t) => t.id === 'spring-setting')!.rows;
+      expect(rows.length).toBeGreaterThan(1);
+      for (const r of rows) {
+        expect(r.torqueMinWorn).toBeGreaterThanOrEqual(req * (1 - 1e-9));
+        expect(r.torqueMinWorn).toBeLessThan(r.torqueMin);
+      }
+    },
+  );
+
+  it('property: for any spring setting range the rows stay inside it and above the required torque', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 100, max: 900, noNaN: true }),
+        fc.double({ min: 1150, max: 3000, noNaN: true }),
+        (lo, hi) => {
+          const e = hoist.evaluate(
+            { ...demoInputs(hoist), springForceMin: `${lo} N`, springForceMax: `${hi} N` },
+            crane,
+          );
+          const req = e.results.find((r) => r.key === 'required-torque')!.value;
+          for (const r of e.tables.find((t) => t.id === 'spring-setting')!.rows) {
+            expect(r.springForce).toBeGreaterThanOrEqual(lo * (1 - 1e-12));
+            expect(r.springForce).toBeLessThanOrEqual(hi * (1 + 1e-12));
+            expect(r.torqueMinWorn).toBeGreaterThanOrEqual(req * (1 - 1e-9));
+          }
+        },
+      ),
+      { numRuns: 40 },
+    );
+  });
+});
+
+describe('holding-brake redundancy on the hoist sheet', () => {
+  it('the demo (hot metal, power control braking) is two holding brakes and passes with the rules printed', () => {
+    const e = hoist.evaluate(demoInputs(hoist), crane);
+    expect(check(e, 'holding-brakes-installed')!.pass).toBe(true);
+    expect(check(e, 'each-brake-holds-alone')!.pass).toBe(true);
+    expect(check(e, 'each-brake-stops-alone')!.pass).toBe(true);
+    expect(check(e, 'brakes-together-drive-train')!.pass).toBe(true);
+    expect(e.warnings.join(' ')).toMatch(/1910\.179\(f\)\(2\)\(vi\).*§4898\(h\)/);
+  });
+
+  it('hot metal on one holding brake fails the redundancy check', () => {
+    const e = hoist.evaluate({ ...demoInputs(hoist), brakeArrangement: 'single' }, crane);
+    expect(check(e, 'holding-brakes-installed')!.pass).toBe(false);
+    expect(e.pass).toBe(false);
+  });
+
+  it('without hot metal one holding brake is enough and no rule is printed', () => {
+    const e = hoist.evaluate(
+      { ...demoInputs(hoist), brakeArrangement: 'single', hotMetal: false },
+      crane,
+    );
+    expect(check(e, 'holding-brakes-installed')!.pass).toBe(true);
+    expect(e.warnings.join(' ')).not.toMatch(/§4898\(h\)/);
+  });
+
+  it('both brakes at μ max at the top of the range count against the drive train', () => {
+    const e = hoist.evaluate({ ...demoInputs(hoist), maxBrakeTorque: '1000 N m' }, crane);
+    const c = check(e, 'brakes-together-drive-train')!;
+    expect(c.pass).toBe(false);
+    const top = (result(e, 'torque-max')! * 1600) / 1100;
+    expect(nearlyEqual(c.value, 2 * top, 1e-12)).toBe(true);
+  });
+});
+
+describe('main spring, thruster extremes and test requirements', () => {
+  const demo = hoist.evaluate(demoInputs(hoist), crane);
+
+  it('checks the main spring at the highest setting with the shoes lifted', () => {
+    // F = 1600 N + 40 N/mm · 1.2 mm · 5 = 1840 N
+    expect(nearlyEqual(result(demo, 'spring-force-highest')!, 1840, 1e-9)).toBe(true);
+    for (const id of [
+      'spring-stress-working',
+      'spring-stress-solid',
+      'spring-solid-margin',
+      'spring-buckling',
+      'spring-rate-agrees',
+    ])
+      expect(check(demo, id)!.pass, id).toBe(true);
+    const thin = hoist.evaluate({ ...demoInputs(hoist), springWireDiameter: '8 mm' }, crane);
+    expect(check(thin, 'spring-rate-agrees')!.pass).toBe(false);
+  });
+
+  it('a spring whose solid length exceeds its free length is refused on the sheet field', () => {
+    expect(() => hoist.evaluate({ ...demoInputs(hoist), springActiveCoils: 30 }, crane)).toThrow(
+      /springFreeLength/,
+    );
+  });
+
+  it('checks the thruster force at −10 % voltage and both temperature extremes', () => {
+    const base = check(demo, 'thruster-force')!.value;
+    expect(nearlyEqual(check(demo, 'thruster-force-cold')!.value, base * 0.85, 1e-12)).toBe(true);
+    const weak = hoist.evaluate({ ...demoInputs(hoist), thrusterFactorCold: 0.5 }, crane);
+    expect(check(weak, 'thruster-force-cold')!.pass).toBe(false);
+    expect(check(weak, 'thruster-force-hot')!.pass).toBe(true);
+  });
+
+  it('prints the load test (125 % of rated load) and the static torque test', () => {
+    const w = demo.warnings.join(' ');
+    expect(w).toMatch(/at most 12500 kg/);
+    expect(w).toMatch(/1910\.179\(k\)\(2\)/);
+    expect(w).toMatch(/each holding brake alone/);
+    expect(w).toMatch(/Static torque test after the linings have bedded in: .*179 N·m/);
+  });
+});
