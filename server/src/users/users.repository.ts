@@ -2,10 +2,14 @@ import { Injectable } from '@nestjs/common';
 import type { DB, NewUserRow, UserRow, UserRowUpdate } from '@holdfast/db';
 import type { Kysely } from 'kysely';
 import { Database } from '../database/database.js';
+import { SignedInUsers } from './signed-in-users.js';
 
 @Injectable()
 export class UsersRepository {
-  constructor(private readonly db: Database) {}
+  constructor(
+    private readonly db: Database,
+    private readonly signedIn: SignedInUsers,
+  ) {}
 
   findById(id: string, db: Kysely<DB> = this.db): Promise<UserRow | undefined> {
     return db.selectFrom('users').selectAll().where('id', '=', id).executeTakeFirst();
@@ -33,6 +37,7 @@ export class UsersRepository {
   }
 
   update(id: string, patch: UserRowUpdate): Promise<UserRow | undefined> {
+    this.signedIn.forget(id);
     return this.db
       .updateTable('users')
       .set(patch)
@@ -46,6 +51,7 @@ export class UsersRepository {
    * under, and the guard refuses older ones. Refresh tokens are untouched (see revokeSessions).
    */
   async endAccessTokens(userId: string, db: Kysely<DB> = this.db): Promise<void> {
+    this.signedIn.forget(userId);
     await db
       .updateTable('users')
       .set((eb) => ({ sessionVersion: eb('sessionVersion', '+', 1) }))
@@ -55,6 +61,7 @@ export class UsersRepository {
 
   /** A new password hash; ends every session (access and refresh) of the user. */
   async setPassword(userId: string, passwordHash: string, db: Kysely<DB> = this.db): Promise<void> {
+    this.signedIn.forget(userId);
     await db.updateTable('users').set({ passwordHash }).where('id', '=', userId).execute();
     await this.endAccessTokens(userId, db);
     await this.revokeSessions(userId, db);
