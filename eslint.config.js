@@ -60,4 +60,24 @@ export default tseslint.config(
       ],
     },
   })),
+  // One door into the calculation core on the server: its values (evaluation, sheet types,
+  // criteria specs) come through server/src/calc; printing is leaving for its own workspace.
+  {
+    files: ['server/src/**/*.{ts,tsx}'],
+    ignores: ['server/src/calc/**', 'server/src/print/**'],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        {
+          paths: [
+            {
+              name: '@holdfast/calc',
+              allowTypeImports: true,
+              message: 'Reach the calculation core through server/src/calc (calc-engine.ts).',
+            },
+          ],
+        },
+      ],
+    },
+  },
 );

@@ -11,8 +11,8 @@ import { CriteriaService } from '../criteria/criteria.service.js';
 import { canCheck, canEdit, canReadContent, isEditableState } from './revision-access.js';
 import { toRevision } from './revision-mapper.js';
 import { RevisionsRepository, type RevisionWithSheet } from './revisions.repository.js';
-import { previewOrReject, rejectUnknownInputs } from './evaluate.js';
-import { coreVersion } from './calc-engine.js';
+import { previewOrReject, rejectUnknownInputs } from '../calc/evaluate.js';
+import { coreVersion } from '../calc/calc-engine.js';
 
 @Injectable()
 export class RevisionsService {

@@ -24,7 +24,7 @@ import {
   evaluateSheet,
   fieldLabel,
   startingInputs,
-} from '../revisions/calc-engine.js';
+} from '../calc/calc-engine.js';
 import { diffChecks, diffInputs, diffResults } from '../revisions/diff.js';
 import { canReadContent } from '../revisions/revision-access.js';
 import { auditFor } from '../revisions/read-rules.js';
