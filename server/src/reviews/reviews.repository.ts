@@ -20,9 +20,9 @@ export class ReviewsRepository {
       .select('cs.name as criteriaSetName');
   }
 
-  /** Approved revisions that use a criteria set, with what the flag and its mail need. */
-  approvedUsing(trx: Kysely<DB>, setId: string) {
-    return trx
+  /** Approved revisions that use a criteria set: what the impact check, the flag and its mail need. */
+  approvedUsing(setId: string, db: Kysely<DB> = this.db) {
+    return db
       .selectFrom('revisions as r')
       .innerJoin('sheets as s', 's.id', 'r.sheetId')
       .select([

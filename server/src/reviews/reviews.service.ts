@@ -40,7 +40,7 @@ export class ReviewsService {
 
   /** Inside the publish transaction: flag, audit and mail every approval the version fails. */
   async flagAfterPublish(trx: Kysely<DB>, actorId: string, criteria: CriteriaSet): Promise<number> {
-    const approved = await this.repo.approvedUsing(trx, criteria.id);
+    const approved = await this.repo.approvedUsing(criteria.id, trx);
     let flagged = 0;
     for (const rev of approved) {
       const failing = newlyFailing(
