@@ -123,18 +123,6 @@ export class ReviewsRepository {
       .executeTakeFirst();
   }
 
-  /** Users by id, for who wrote a disposition. */
-  async people(ids: (string | null)[]): Promise<Map<string, Person>> {
-    const wanted = [...new Set(ids.filter((x): x is string => !!x))];
-    if (wanted.length === 0) return new Map();
-    const rows = await this.db
-      .selectFrom('users')
-      .select(['id', 'displayName', 'initials'])
-      .where('id', 'in', wanted)
-      .execute();
-    return new Map(rows.map((r) => [r.id, r]));
-  }
-
   /** Open flags on sheets I own or revisions I checked. */
   queueFor(userId: string) {
     return this.db

@@ -23,6 +23,46 @@ export class UsersRepository {
       .executeTakeFirst();
   }
 
+  /** Users by id (name and initials), for person references. */
+  async people(ids: (string | null | undefined)[], db: Kysely<DB> = this.db) {
+    const wanted = [...new Set(ids.filter((x): x is string => !!x))];
+    if (wanted.length === 0)
+      return new Map<string, { id: string; displayName: string; initials: string }>();
+    const rows = await db
+      .selectFrom('users')
+      .select(['id', 'displayName', 'initials'])
+      .where('id', 'in', wanted)
+      .execute();
+    return new Map(rows.map((r) => [r.id, r]));
+  }
+
+  /** E-mail addresses of the active users among `ids`, sorted; inactive ones get no mail. */
+  async activeEmails(ids: (string | null)[], db: Kysely<DB> = this.db): Promise<string[]> {
+    const wanted = [...new Set(ids.filter((x): x is string => !!x))];
+    if (wanted.length === 0) return [];
+    const rows = await db
+      .selectFrom('users')
+      .select('email')
+      .where('id', 'in', wanted)
+      .where('active', '=', true)
+      .orderBy('email')
+      .execute();
+    return rows.map((r) => r.email);
+  }
+
+  /** E-mail addresses of active checkers other than `exceptId`. */
+  async checkerEmails(exceptId: string, db: Kysely<DB> = this.db): Promise<string[]> {
+    const rows = await db
+      .selectFrom('users')
+      .select('email')
+      .where('role', '=', 'checker')
+      .where('active', '=', true)
+      .where('id', '<>', exceptId)
+      .orderBy('email')
+      .execute();
+    return rows.map((r) => r.email);
+  }
+
   list(): Promise<UserRow[]> {
     return this.db
       .selectFrom('users')
