@@ -64,8 +64,6 @@ const kyselyNotYetMoved = [
   'server/src/revisions/revisions.service.ts',
   'server/src/revisions/workflow.service.ts',
   'server/src/sheets/sheets.service.ts',
-  'server/src/verify/verify.service.ts',
-  'server/src/work-queue/work-queue.service.ts',
 ];
 
 export default tseslint.config(

@@ -1,7 +1,11 @@
 import { Module } from '@nestjs/common';
 import { VerifyThrottlerGuard } from './verify-throttler.guard.js';
+import { VerifyRepository } from './verify.repository.js';
 import { VerifyController } from './verify.controller.js';
 import { VerifyService } from './verify.service.js';
 
-@Module({ controllers: [VerifyController], providers: [VerifyService, VerifyThrottlerGuard] })
+@Module({
+  controllers: [VerifyController],
+  providers: [VerifyRepository, VerifyService, VerifyThrottlerGuard],
+})
 export class VerifyModule {}
