@@ -45,7 +45,9 @@ export async function tryStartAppServer(
   { timeoutMs = 60000, inherit = true } = {},
 ) {
   const main = path.join(projectDir, 'server', 'dist', 'main.js');
-  const child = spawn('node', [...SERVER_NODE_FLAGS, main], {
+  // HOLDFAST_SERVER_NODE_FLAGS adds flags for one run, e.g. `--cpu-prof` to profile under load.
+  const extra = (process.env.HOLDFAST_SERVER_NODE_FLAGS ?? '').split(' ').filter(Boolean);
+  const child = spawn('node', [...SERVER_NODE_FLAGS, ...extra, main], {
     cwd: projectDir,
     env: { ...process.env, ...env },
     stdio: inherit ? 'inherit' : ['ignore', 'pipe', 'pipe'],

@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdtempSync } from 'node:fs';
+import { createServer, type Socket } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 // @ts-expect-error plain ESM helper without type declarations
@@ -15,6 +16,7 @@ import {
   submittedSheet,
 } from './support/fault-cluster.js';
 import { startSmtpCapture, type SmtpCapture } from './support/smtp-capture.js';
+import { emptyAcks, halfRecordQueries, workflowWorker } from './support/workflow-load.js';
 
 /**
  * Faults on a real server process against a PostgreSQL cluster of its own (see
@@ -27,7 +29,10 @@ import { startSmtpCapture, type SmtpCapture } from './support/smtp-capture.js';
  */
 const SMTP_OUTAGE_MS = Number(process.env.HOLDFAST_FAULT_SMTP_OUTAGE_MS ?? 5000);
 const PG_ROUNDS = 5;
+/** Crashes during the save–submit–approve load (each round is a few seconds). */
+const WORKFLOW_ROUNDS = 3;
 const RECOVERY_LIMIT_MS = 2000;
+const S3_TIMEOUT_MS = 2000;
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
 async function startS3(port: number, directory: string) {
@@ -61,7 +66,7 @@ describe('faults on a running server', () => {
       S3_EMBEDDED: '0',
       S3_ENDPOINT: `http://127.0.0.1:${s3Port}`,
       S3_BUCKET: 'holdfast-faults',
-      S3_TIMEOUT_MS: '2000',
+      S3_TIMEOUT_MS: String(S3_TIMEOUT_MS),
     });
     engineer = (await signIn(srv.url, 'engineer')).token;
     positionId = await makeHoistPosition([srv.url], engineer, { code: 'FLT', name: 'Fault works' });
@@ -174,48 +179,150 @@ describe('faults on a running server', () => {
     expect(rows[0]!.n).toBe(0);
   }, 90000);
 
-  it('answers 503 while object storage is down and keeps no half record', async () => {
+  const newDraft = async (title: string) => {
     const draft = await call(srv.url, 'POST', '/api/sheets', {
       token: engineer,
-      body: { title: 'Storage outage draft', positionId, sheetType: 'hoist-shoe-brake' },
+      body: { title, positionId, sheetType: 'hoist-shoe-brake' },
     });
-    const draftId = draft.body.revisions[0].id as string;
-    const upload = async () => {
-      const form = new FormData();
-      const pdf =
-        '%PDF-1.4\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n';
-      form.append('file', new Blob([pdf]), 'datasheet.pdf');
-      const res = await fetch(`${srv.url}/api/revisions/${draftId}/attachments`, {
-        method: 'POST',
-        headers: { authorization: `Bearer ${engineer}` },
-        body: form,
-      });
-      return {
-        status: res.status,
-        body: await res.json(),
-        retryAfter: res.headers.get('retry-after'),
-      };
+    return draft.body.revisions[0].id as string;
+  };
+  const upload = async (draftId: string) => {
+    const form = new FormData();
+    const pdf = '%PDF-1.4\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n';
+    form.append('file', new Blob([pdf]), 'datasheet.pdf');
+    const res = await fetch(`${srv.url}/api/revisions/${draftId}/attachments`, {
+      method: 'POST',
+      headers: { authorization: `Bearer ${engineer}` },
+      body: form,
+      signal: AbortSignal.timeout(30000),
+    });
+    return {
+      status: res.status,
+      body: await res.json(),
+      retryAfter: res.headers.get('retry-after'),
     };
-    const count = async () =>
-      (
-        await fc.query<{ a: number; e: number }>(
-          `select (select count(*)::int from attachments where revision_id = $1) as a,
-                  (select count(*)::int from audit_events where entity = 'attachment') as e`,
-          [draftId],
-        )
-      )[0]!;
-    const before = await count();
+  };
+  const attachmentCount = async (draftId: string) =>
+    (
+      await fc.query<{ a: number; e: number }>(
+        `select (select count(*)::int from attachments where revision_id = $1) as a,
+                (select count(*)::int from audit_events where entity = 'attachment') as e`,
+        [draftId],
+      )
+    )[0]!;
+
+  it('answers 503 while object storage is down and keeps no half record', async () => {
+    const draftId = await newDraft('Storage outage draft');
+    const before = await attachmentCount(draftId);
     await s3.close();
-    const down = await upload();
+    const down = await upload(draftId);
     expect(down.status).toBe(503);
     expect(down.body).toEqual({
       error: { code: 'service_unavailable', message: expect.any(String) },
     });
     expect(down.retryAfter).toBe('2');
-    expect(await count()).toEqual(before);
+    expect(await attachmentCount(draftId)).toEqual(before);
     s3 = await startS3(s3Port, s3Dir);
-    const up = await upload();
+    const up = await upload(draftId);
     expect(up.status, JSON.stringify(up.body)).toBe(201);
-    expect((await count()).a).toBe(before.a + 1);
+    expect((await attachmentCount(draftId)).a).toBe(before.a + 1);
   }, 60000);
+
+  it('gives up on object storage that hangs within a bounded time: 503 and no half record', async () => {
+    const draftId = await newDraft('Storage hang draft');
+    const before = await attachmentCount(draftId);
+    await s3.close();
+    // Accepts every connection and reads what comes, and never answers.
+    const sockets = new Set<Socket>();
+    const hang = createServer((socket) => {
+      sockets.add(socket);
+      socket.on('data', () => undefined);
+      socket.on('error', () => undefined);
+    });
+    await new Promise<void>((resolve) => hang.listen(s3Port, '127.0.0.1', resolve));
+    try {
+      const started = Date.now();
+      const hung = await upload(draftId);
+      const took = Date.now() - started;
+      console.log(`Object storage hanging: upload answered ${hung.status} after ${took} ms`);
+      expect(hung.status).toBe(503);
+      expect(hung.body.error.code).toBe('service_unavailable');
+      expect(hung.retryAfter).toBe('2');
+      // Two attempts of S3_TIMEOUT_MS each, and some slack for a loaded machine.
+      expect(took).toBeLessThan(2 * S3_TIMEOUT_MS + 4000);
+      expect(sockets.size, 'the server did reach the hanging storage').toBeGreaterThan(0);
+      expect(await attachmentCount(draftId)).toEqual(before);
+      expect((await call(srv.url, 'GET', '/api/health')).status).toBe(200);
+    } finally {
+      for (const socket of sockets) socket.destroy();
+      await new Promise((resolve) => hang.close(resolve));
+    }
+    s3 = await startS3(s3Port, s3Dir);
+    const up = await upload(draftId);
+    expect(up.status, JSON.stringify(up.body)).toBe(201);
+    expect((await attachmentCount(draftId)).a).toBe(before.a + 1);
+  }, 60000);
+
+  // Last: it leaves mail jobs that were in hand at a crash until they expire.
+  it(`keeps every acknowledged save, submission and approval through ${WORKFLOW_ROUNDS} crashes, and half of none`, async () => {
+    const checker = (await signIn(srv.url, 'checker')).token;
+    const acks = emptyAcks();
+    let running = true;
+    const workers = ['a', 'b', 'c'].map((label) =>
+      workflowWorker(srv.url, { engineer, checker }, positionId, label, () => running, acks),
+    );
+    const recoveries: number[] = [];
+    for (let round = 0; round < WORKFLOW_ROUNDS; round++) {
+      // Crash with work of every kind done since the last round, so each kind meets a crash.
+      const seen = { s: acks.saved.length, u: acks.submitted.length, a: acks.approved.length };
+      const waitFrom = Date.now();
+      while (
+        (acks.saved.length === seen.s ||
+          acks.submitted.length === seen.u ||
+          acks.approved.length === seen.a) &&
+        Date.now() - waitFrom < 20000
+      )
+        await sleep(10);
+      await fc.crash();
+      await sleep(500);
+      await fc.restart();
+      const upAt = Date.now();
+      while (!acks.okAt.some((t) => t > upAt) && Date.now() - upAt < 15000) await sleep(5);
+      recoveries.push(Math.min(...acks.okAt.filter((t) => t > upAt)) - upAt);
+    }
+    running = false;
+    await Promise.all(workers);
+    console.log(
+      `PostgreSQL crash under the workflow: ${acks.created.length} sheets, ${acks.saved.length} saves, ` +
+        `${acks.submitted.length} submissions, ${acks.approved.length} approvals acknowledged; ` +
+        `${acks.failures.length} refused; first write after restart: ${recoveries.map((r) => `${r} ms`).join(', ')}`,
+    );
+
+    expect(srv.child.exitCode, srv.output()).toBeNull();
+    expect(acks.failures.length, 'the outages were seen').toBeGreaterThan(0);
+    for (const f of acks.failures)
+      expect(f).toEqual({ status: 503, code: 'service_unavailable', retryAfter: '2' });
+    for (const r of recoveries) expect(r).toBeLessThan(RECOVERY_LIMIT_MS);
+    expect(acks.approved.length).toBeGreaterThan(0);
+
+    const sheets = await fc.query<{ id: string }>(`select id from sheets where id = any($1)`, [
+      acks.created,
+    ]);
+    expect(sheets).toHaveLength(acks.created.length);
+    const revs = await fc.query<{ id: string; state: string; change_note: string }>(
+      `select id, state, change_note from revisions where id = any($1)`,
+      [acks.saved.map((s) => s.revisionId)],
+    );
+    const byId = new Map(revs.map((r) => [r.id, r]));
+    for (const s of acks.saved) expect(byId.get(s.revisionId)?.change_note).toBe(s.note);
+    const states = await fc.query<{ id: string; state: string }>(
+      `select id, state from revisions where id = any($1)`,
+      [[...acks.submitted, ...acks.approved]],
+    );
+    const state = new Map(states.map((r) => [r.id, r.state]));
+    for (const id of acks.submitted) expect(['in_check', 'approved']).toContain(state.get(id));
+    for (const id of acks.approved) expect(state.get(id)).toBe('approved');
+    for (const [what, q] of Object.entries(halfRecordQueries))
+      expect(await fc.query(q), what).toEqual([]);
+  }, 150000);
 });

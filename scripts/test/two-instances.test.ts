@@ -101,4 +101,56 @@ describe('two server processes on one database', () => {
     );
     expect(rows[0]).toEqual({ state: 'approved', approved: 1 });
   });
+
+  // Last in this file: it kills process a.
+  it('keeps serving on one process when the other is killed under load; sessions and mail go on', async () => {
+    const session = await signIn(a.url, 'engineer2');
+    const before = await submittedOn(a, 'Mail before the kill');
+    const found = (doc: string) => smtp.mails.filter((m) => m.raw.includes(doc));
+    for (const t = Date.now(); found(before.documentNumber).length === 0 && Date.now() - t < 20000;)
+      await sleep(100);
+    expect(found(before.documentNumber)).toHaveLength(1);
+
+    let running = true;
+    const answers: { on: 'a' | 'b'; status: number; at: number }[] = [];
+    const load = async (on: 'a' | 'b') => {
+      const base = on === 'a' ? a.url : b.url;
+      while (running) {
+        let status = 0;
+        try {
+          status = (await call(base, 'GET', '/api/sheets', { token: engineer, timeoutMs: 5000 }))
+            .status;
+        } catch {
+          await sleep(50); // a is gone: no answer
+        }
+        answers.push({ on, status, at: Date.now() });
+      }
+    };
+    const loaders = [load('a'), load('b'), load('b')];
+    await sleep(1500);
+    const killedAt = Date.now();
+    a.child.kill('SIGKILL');
+    await new Promise((resolve) => a.child.once('exit', resolve));
+    await sleep(2000);
+    // The session begun on a goes on on b: its access token and its refresh cookie.
+    expect((await call(b.url, 'GET', '/api/auth/me', { token: session.token })).status).toBe(200);
+    const refreshed = await call(b.url, 'POST', '/api/auth/refresh', { cookie: session.cookie });
+    expect(refreshed.status, JSON.stringify(refreshed.body)).toBe(200);
+    const after = await submittedOn(b, 'Mail after the kill');
+    running = false;
+    await Promise.all(loaders);
+
+    const onB = answers.filter((x) => x.on === 'b');
+    expect(onB.filter((x) => x.at > killedAt).length).toBeGreaterThan(10);
+    expect(onB.filter((x) => x.status !== 200)).toEqual([]);
+    expect(
+      answers.filter((x) => x.on === 'a' && x.at < killedAt && x.status === 200).length,
+    ).toBeGreaterThan(0);
+
+    for (const t = Date.now(); found(after.documentNumber).length === 0 && Date.now() - t < 20000;)
+      await sleep(100);
+    await sleep(2000); // b polls every 0.5 s: a second delivery would be here by now
+    expect(found(after.documentNumber)).toHaveLength(1);
+    expect(found(before.documentNumber)).toHaveLength(1);
+  }, 90000);
 });

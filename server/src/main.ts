@@ -1,5 +1,6 @@
 import 'reflect-metadata';
 import { createApp } from './app.js';
+import { isConnectionError } from '@holdfast/db';
 import { ConfigError, loadSettings } from './config/env.js';
 
 async function main(): Promise<void> {
@@ -14,6 +15,14 @@ async function main(): Promise<void> {
     throw error;
   }
   const { app, logger, uiServed } = await createApp(settings);
+  // pg-boss 10 marks a finished job complete or failed without awaiting it; with PostgreSQL gone
+  // that promise rejects unhandled and Node would end the process. A lost connection is an
+  // outage the server rides out (the job is tried again once it expires, and the outbox row
+  // stops a second mail); any other unhandled rejection still ends the process.
+  process.on('unhandledRejection', (reason) => {
+    if (!isConnectionError(reason)) throw reason;
+    logger.warn(`database connection lost under a background task: ${String(reason)}`);
+  });
   app.enableShutdownHooks(['SIGINT', 'SIGTERM']);
   if (!uiServed) logger.warn(`no built UI at ${settings.UI_DIST}; serving the API only`);
   try {

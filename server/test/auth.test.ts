@@ -106,6 +106,26 @@ describe('auth: sign-in, me, refresh, sign-out', () => {
     expect((await ctx.request('GET', '/api/auth/me', { token })).status).toBe(401);
   });
 
+  it('ends a remembered user at once when another process changes the row (change notice)', async () => {
+    const token = await ctx.token('checker2');
+    // Read twice: the second answer comes from the memory of signed-in users.
+    for (let i = 0; i < 2; i++)
+      expect((await ctx.request('GET', '/api/auth/me', { token })).status).toBe(200);
+    // As another server process would sign the user out: straight in the database.
+    await ctx.db
+      .updateTable('users')
+      .set((eb) => ({ sessionVersion: eb('sessionVersion', '+', 1) }))
+      .where('email', '=', demoEmail('checker2'))
+      .execute();
+    let status = 0;
+    const deadline = Date.now() + 2000;
+    while (Date.now() < deadline && status !== 401) {
+      status = (await ctx.request('GET', '/api/auth/me', { token })).status;
+      if (status !== 401) await new Promise((r) => setTimeout(r, 20));
+    }
+    expect(status).toBe(401);
+  });
+
   it('PATCH /api/auth/me changes only the unit system preference', async () => {
     const res = await ctx.request('PATCH', '/api/auth/me', {
       as: 'viewer',

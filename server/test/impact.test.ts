@@ -1,7 +1,7 @@
 import { sql } from 'kysely';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { CriteriaService } from '../src/criteria/criteria.service.js';
-import { evaluateSheet } from '../src/revisions/calc-engine.js';
+import { evaluateSheet } from '../src/calc/calc-engine.js';
 import type { CriterionValue } from '@holdfast/calc';
 import { stricterValues } from './criteria-fixture.js';
 import {

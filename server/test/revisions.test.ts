@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import type { SheetEvaluation } from '@holdfast/calc';
-import { evaluateSheet, sheetTypeDefinition } from '../src/revisions/calc-engine.js';
+import { evaluateSheet, sheetTypeDefinition } from '../src/calc/calc-engine.js';
 import { CriteriaService } from '../src/criteria/criteria.service.js';
 import { stricterValues } from './criteria-fixture.js';
 import {

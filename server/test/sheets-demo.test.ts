@@ -4,7 +4,7 @@ import type { DB } from '@holdfast/db';
 import { seed as seedDemoPlant } from '../../db/dist/seeds/20261202100000_demo_plant.js';
 import { DemoAttachments } from '../src/attachments/demo-attachments.js';
 import { CriteriaService } from '../src/criteria/criteria.service.js';
-import { evaluateSheet } from '../src/revisions/calc-engine.js';
+import { evaluateSheet } from '../src/calc/calc-engine.js';
 import { contentHash } from '../src/revisions/revision-codes.js';
 import { createSheetsContext, type SheetsContext } from './sheets-fixture.js';
 

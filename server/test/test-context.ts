@@ -16,6 +16,7 @@ import {
 import type { Role, Session } from '@holdfast/shared';
 import { createApp } from '../src/app.js';
 import { loadSettings, type AppSettings } from '../src/config/env.js';
+import { SignedInUsers } from '../src/users/signed-in-users.js';
 import { Database } from '../src/database/database.js';
 import { workerDatabaseUrl } from './worker-database.js';
 
@@ -222,6 +223,8 @@ export async function createTestContext(options: TestContextOptions = {}): Promi
       } else {
         await db.insertInto('users').values(snapshot).execute();
       }
+      // The truncate ran with triggers off, so no change notice went out.
+      app.get(SignedInUsers).forgetAll();
     },
     async close() {
       await app.close();

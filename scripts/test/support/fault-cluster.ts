@@ -129,7 +129,9 @@ export async function startFaultCluster(
       }
     },
     async dispose() {
-      for (const s of servers) await stopChild(s.child);
+      // A process a test killed has exited already: waiting for its exit would wait for ever.
+      for (const s of servers)
+        if (s.child.exitCode === null && s.child.signalCode === null) await stopChild(s.child);
       await cluster.stop('immediate');
       rmSync(cluster.dataDir, { recursive: true, force: true });
       rmSync(path.join(path.dirname(cluster.dataDir), `${name}.secret`), { force: true });

@@ -12,6 +12,7 @@ import { RevisionsService } from '../revisions/revisions.service.js';
 import { ObjectStorage } from '../storage/object-storage.js';
 import { AppConfig } from '../config/app-config.js';
 import { nameForType, sanitizeFileName, sniffContentType } from './sniff.js';
+import { UsersRepository } from '../users/users.repository.js';
 
 type People = Map<string, { id: string; displayName: string; initials: string }>;
 
@@ -54,6 +55,7 @@ export class AttachmentsService {
     private readonly storage: ObjectStorage,
     private readonly revisions: RevisionsService,
     private readonly revisionsRepo: RevisionsRepository,
+    private readonly users: UsersRepository,
     private readonly audit: AuditService,
     private readonly config: AppConfig,
   ) {}
@@ -68,7 +70,7 @@ export class AttachmentsService {
       .where('fieldRecordId', 'is', null)
       .orderBy('createdAt', 'asc')
       .execute();
-    const people = await this.revisionsRepo.people(rows.map((r) => r.uploadedBy));
+    const people = await this.users.people(rows.map((r) => r.uploadedBy));
     return rows.map((r) => toAttachment(r, people));
   }
 
@@ -135,7 +137,7 @@ export class AttachmentsService {
         });
         return created;
       });
-      return toAttachment(row, await this.revisionsRepo.people([user.id]));
+      return toAttachment(row, await this.users.people([user.id]));
     } catch (e) {
       await this.storage.delete(storageKey);
       throw e;

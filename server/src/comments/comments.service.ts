@@ -9,6 +9,7 @@ import { AuditService } from '../audit/audit.service.js';
 import { canComment } from '../revisions/read-rules.js';
 import { RevisionsRepository } from '../revisions/revisions.repository.js';
 import { RevisionsService } from '../revisions/revisions.service.js';
+import { UsersRepository } from '../users/users.repository.js';
 
 type People = Map<string, { id: string; displayName: string; initials: string }>;
 
@@ -43,6 +44,7 @@ export class CommentsService {
     private readonly db: Database,
     private readonly revisions: RevisionsService,
     private readonly revisionsRepo: RevisionsRepository,
+    private readonly users: UsersRepository,
     private readonly audit: AuditService,
   ) {}
 
@@ -55,7 +57,7 @@ export class CommentsService {
       .orderBy('createdAt', 'asc')
       .orderBy('id', 'asc')
       .execute();
-    const people = await this.revisionsRepo.people(rows.map((r) => r.authorId));
+    const people = await this.users.people(rows.map((r) => r.authorId));
     const top = rows
       .filter((r) => !r.parentId)
       .map((r) => ({ ...toComment(r, people), replies: [] as Comment[] }));
@@ -109,7 +111,7 @@ export class CommentsService {
       });
       return created;
     });
-    return toComment(row, await this.revisionsRepo.people([user.id]));
+    return toComment(row, await this.users.people([user.id]));
   }
 
   /** Resolve or reopen: the comment's author, the revision's author, the sheet owner or a checker. */
@@ -150,6 +152,6 @@ export class CommentsService {
       });
       return updated;
     });
-    return toComment(row, await this.revisionsRepo.people([row.authorId]));
+    return toComment(row, await this.users.people([row.authorId]));
   }
 }

@@ -1,5 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import { criterionSpec } from '@holdfast/calc';
+import { criterionUnit } from '../calc/calc-engine.js';
 import type {
   ConfirmCriterionInput,
   CreateCriteriaSetInput,
@@ -31,7 +31,7 @@ export class CriteriaAdminService {
       if (taken) throw conflict(`A criteria set with the id "${input.id}" exists already.`);
       const values = input.values.map((v) => ({
         ...v,
-        unit: criterionSpec(v.key)?.unit ?? v.unit,
+        unit: criterionUnit(v.key) ?? v.unit,
       }));
       await this.repo.createSet(
         trx,

@@ -1,5 +1,5 @@
 import { Injectable, Logger, type OnModuleInit } from '@nestjs/common';
-import { criterionSpec, type CriteriaSet } from '@holdfast/calc';
+import type { CriteriaSet } from '@holdfast/calc';
 import type {
   CriteriaSetDetail,
   CriteriaSetSummary,
@@ -10,7 +10,7 @@ import type { DB } from '@holdfast/db';
 import { badRequest, notFound } from '../common/errors/api-exception.js';
 import { Database } from '../database/database.js';
 import { AuditService } from '../audit/audit.service.js';
-import { shippedCriteriaSets } from '../revisions/calc-engine.js';
+import { criterionUnit, shippedCriteriaSets } from '../calc/calc-engine.js';
 import { ReviewsService } from '../reviews/reviews.service.js';
 import { CriteriaRepository } from './criteria.repository.js';
 import { confirmationsFor } from './confirmations.js';
@@ -129,7 +129,7 @@ export class CriteriaService implements OnModuleInit {
         criteriaSetId: id,
         version,
         // An empty unit means the declared one; the record always names it.
-        values: input.values.map((v) => ({ ...v, unit: criterionSpec(v.key)?.unit ?? v.unit })),
+        values: input.values.map((v) => ({ ...v, unit: criterionUnit(v.key) ?? v.unit })),
         note: input.note,
         publishedBy: actorId,
       });

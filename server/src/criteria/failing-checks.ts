@@ -1,5 +1,5 @@
 import type { CriteriaSet, SheetInputs } from '@holdfast/calc';
-import { evaluateStoredRecord } from '../revisions/calc-engine.js';
+import { evaluateStoredRecord } from '../calc/calc-engine.js';
 
 export interface FailingCheck {
   id: string;

@@ -1,7 +1,7 @@
 import { Injectable, Logger } from '@nestjs/common';
 import type { ImpactReport } from '@holdfast/shared';
-import { Database } from '../database/database.js';
 import { failingChecks } from './failing-checks.js';
+import { ReviewsRepository } from '../reviews/reviews.repository.js';
 import { CriteriaService } from './criteria.service.js';
 
 /**
@@ -13,28 +13,13 @@ export class ImpactService {
   private readonly logger = new Logger('ImpactService');
 
   constructor(
-    private readonly db: Database,
     private readonly criteria: CriteriaService,
+    private readonly reviews: ReviewsRepository,
   ) {}
 
   async impact(setId: string, version?: number): Promise<ImpactReport> {
     const criteria = await this.criteria.load(setId, version ?? 'latest');
-    const approved = await this.db
-      .selectFrom('revisions as r')
-      .innerJoin('sheets as s', 's.id', 'r.sheetId')
-      .select([
-        'r.id',
-        'r.label',
-        'r.inputs',
-        's.id as sheetId',
-        's.documentNumber',
-        's.title',
-        's.sheetType',
-      ])
-      .where('r.state', '=', 'approved')
-      .where('r.criteriaSetId', '=', setId)
-      .orderBy('s.documentNumber')
-      .execute();
+    const approved = await this.reviews.approvedUsing(setId);
     const items: ImpactReport['items'] = [];
     for (const rev of approved) {
       const failing = failingChecks(rev.sheetType, rev.inputs, criteria, (e) =>

@@ -1,6 +1,6 @@
 import type { FieldCheckInput, FieldRecord, FieldRecordKind, PersonRef } from '@holdfast/shared';
 import type { RecordRevision, StoredFieldRecord } from './field-records.repository.js';
-import { fieldTargets, judgeMeasurement } from './field-targets.js';
+import { fieldTargets, judgeMeasurement } from '../calc/field-targets.js';
 
 type People = Map<string, PersonRef>;
 

@@ -31,7 +31,7 @@ import {
   formChecks,
   judgeMeasurement,
   outOfToleranceAsLeft,
-} from './field-targets.js';
+} from '../calc/field-targets.js';
 
 const invalid = (fields: FieldIssue[]) => badRequest('Some fields are not valid.', fields);
 

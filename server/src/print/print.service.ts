@@ -22,6 +22,7 @@ import { loadPrintSettings } from './print-settings.js';
 import type { PrintableSheet } from './printable-sheet.js';
 import { RenderPool, RenderQueueFullError, type PrintKind } from './render-pool.js';
 import { PerUserLimit } from './user-limit.js';
+import { UsersRepository } from '../users/users.repository.js';
 
 export type { PrintKind } from './render-pool.js';
 
@@ -85,6 +86,7 @@ export class PrintService implements OnApplicationBootstrap, OnModuleDestroy {
     private readonly criteria: CriteriaService,
     private readonly config: AppConfig,
     private readonly reviews: ReviewsRepository,
+    private readonly users: UsersRepository,
   ) {}
 
   onApplicationBootstrap(): void {
@@ -150,7 +152,7 @@ export class PrintService implements OnApplicationBootstrap, OnModuleDestroy {
       this.reviews.clearedFor(id),
       state === 'approved' ? this.reviews.openFor(id) : undefined,
     ]);
-    const people = await this.reviews.people(cleared.map((c) => c.clearedBy));
+    const people = await this.users.people(cleared.map((c) => c.clearedBy));
     return [...cleared.filter((c) => c.clearedHow === 'disposition'), ...(open ? [open] : [])].map(
       (r) => {
         const by = r.clearedBy ? people.get(r.clearedBy) : undefined;

@@ -20,9 +20,9 @@ export class ReviewsRepository {
       .select('cs.name as criteriaSetName');
   }
 
-  /** Approved revisions that use a criteria set, with what the flag and its mail need. */
-  approvedUsing(trx: Kysely<DB>, setId: string) {
-    return trx
+  /** Approved revisions that use a criteria set: what the impact check, the flag and its mail need. */
+  approvedUsing(setId: string, db: Kysely<DB> = this.db) {
+    return db
       .selectFrom('revisions as r')
       .innerJoin('sheets as s', 's.id', 'r.sheetId')
       .select([
@@ -121,18 +121,6 @@ export class ReviewsRepository {
       .where('clearedAt', 'is', null)
       .returning(['id', 'clearedAt'])
       .executeTakeFirst();
-  }
-
-  /** Users by id, for who wrote a disposition. */
-  async people(ids: (string | null)[]): Promise<Map<string, Person>> {
-    const wanted = [...new Set(ids.filter((x): x is string => !!x))];
-    if (wanted.length === 0) return new Map();
-    const rows = await this.db
-      .selectFrom('users')
-      .select(['id', 'displayName', 'initials'])
-      .where('id', 'in', wanted)
-      .execute();
-    return new Map(rows.map((r) => [r.id, r]));
   }
 
   /** Open flags on sheets I own or revisions I checked. */

@@ -19,6 +19,7 @@ import { OutboxService } from '../outbox/outbox.service.js';
 import { canReadContent, ownPart } from '../revisions/revision-access.js';
 import { underReviewMail } from './review-mail.js';
 import { ReviewsRepository, type Person, type ReviewWithSet } from './reviews.repository.js';
+import { UsersRepository } from '../users/users.repository.js';
 
 /**
  * Approvals follow criteria changes. Publishing a criteria version re-evaluates every approved
@@ -33,6 +34,7 @@ export class ReviewsService {
   constructor(
     private readonly db: Database,
     private readonly repo: ReviewsRepository,
+    private readonly users: UsersRepository,
     private readonly audit: AuditService,
     private readonly outbox: OutboxService,
     private readonly config: AppConfig,
@@ -40,7 +42,7 @@ export class ReviewsService {
 
   /** Inside the publish transaction: flag, audit and mail every approval the version fails. */
   async flagAfterPublish(trx: Kysely<DB>, actorId: string, criteria: CriteriaSet): Promise<number> {
-    const approved = await this.repo.approvedUsing(trx, criteria.id);
+    const approved = await this.repo.approvedUsing(criteria.id, trx);
     let flagged = 0;
     for (const rev of approved) {
       const failing = newlyFailing(
@@ -73,7 +75,7 @@ export class ReviewsService {
           newFlag: isNew,
         },
       });
-      const to = await this.emails(trx, [rev.ownerId, rev.checkerId]);
+      const to = await this.users.activeEmails([rev.ownerId, rev.checkerId], trx);
       await this.outbox.enqueueMail(
         trx,
         underReviewMail(
@@ -121,7 +123,7 @@ export class ReviewsService {
       this.repo.openFor(revisionId),
       this.repo.clearedFor(revisionId),
     ]);
-    const people = await this.repo.people(cleared.map((c) => c.clearedBy));
+    const people = await this.users.people(cleared.map((c) => c.clearedBy));
     return {
       open: open ? present(open, people) : null,
       cleared: cleared.map((c) => present(c, people)),
@@ -180,19 +182,6 @@ export class ReviewsService {
     if (!canReadContent(user, rev))
       throw forbidden('Only approved revisions are open to your role.');
     return rev;
-  }
-
-  private async emails(trx: Kysely<DB>, ids: (string | null)[]): Promise<string[]> {
-    const wanted = [...new Set(ids.filter((x): x is string => !!x))];
-    if (wanted.length === 0) return [];
-    const rows = await trx
-      .selectFrom('users')
-      .select('email')
-      .where('id', 'in', wanted)
-      .where('active', '=', true)
-      .orderBy('email')
-      .execute();
-    return rows.map((r) => r.email);
   }
 }
 

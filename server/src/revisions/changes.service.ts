@@ -3,7 +3,7 @@ import type { SheetInputs } from '@holdfast/calc';
 import type { RevisionChanges } from '@holdfast/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { Database } from '../database/database.js';
-import { fieldLabel } from './calc-engine.js';
+import { fieldLabel } from '../calc/calc-engine.js';
 import { diffInputs } from './diff.js';
 import { RevisionsRepository } from './revisions.repository.js';
 import { RevisionsService } from './revisions.service.js';

@@ -5,7 +5,7 @@ import type { AuthUser } from '../auth/auth-user.js';
 import { conflict } from '../common/errors/api-exception.js';
 import { CriteriaService } from '../criteria/criteria.service.js';
 import { failingChecks } from '../criteria/failing-checks.js';
-import { coreVersion, evaluateStoredRecord } from './calc-engine.js';
+import { coreVersion, evaluateStoredRecord } from '../calc/calc-engine.js';
 import { diffChecks, diffResults } from './diff.js';
 import { RevisionsService } from './revisions.service.js';
 

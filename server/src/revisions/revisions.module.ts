@@ -1,6 +1,7 @@
 import { Module } from '@nestjs/common';
 import { CriteriaModule } from '../criteria/criteria.module.js';
 import { ReviewsModule } from '../reviews/reviews.module.js';
+import { UsersModule } from '../users/users.module.js';
 import { ChangesService } from './changes.service.js';
 import { DriftService } from './drift.service.js';
 import { RevisionsController } from './revisions.controller.js';
@@ -9,9 +10,9 @@ import { RevisionsService } from './revisions.service.js';
 import { WorkflowService } from './workflow.service.js';
 
 @Module({
-  imports: [CriteriaModule, ReviewsModule],
+  imports: [CriteriaModule, ReviewsModule, UsersModule],
   controllers: [RevisionsController],
   providers: [RevisionsRepository, RevisionsService, WorkflowService, DriftService, ChangesService],
-  exports: [RevisionsRepository, RevisionsService],
+  exports: [RevisionsRepository, RevisionsService, UsersModule],
 })
 export class RevisionsModule {}

@@ -49,39 +49,4 @@ export class RevisionsRepository {
       .executeTakeFirst();
     return row?.label;
   }
-
-  /** Users by id, for person references. */
-  async people(ids: (string | null | undefined)[], db: Kysely<DB> = this.db) {
-    const wanted = [...new Set(ids.filter((x): x is string => !!x))];
-    if (wanted.length === 0)
-      return new Map<string, { id: string; displayName: string; initials: string }>();
-    const rows = await db
-      .selectFrom('users')
-      .select(['id', 'displayName', 'initials'])
-      .where('id', 'in', wanted)
-      .execute();
-    return new Map(rows.map((r) => [r.id, r]));
-  }
-
-  /** E-mail addresses of active checkers other than `exceptId`. */
-  async checkerEmails(exceptId: string, db: Kysely<DB> = this.db): Promise<string[]> {
-    const rows = await db
-      .selectFrom('users')
-      .select('email')
-      .where('role', '=', 'checker')
-      .where('active', '=', true)
-      .where('id', '<>', exceptId)
-      .orderBy('email')
-      .execute();
-    return rows.map((r) => r.email);
-  }
-
-  async email(userId: string, db: Kysely<DB> = this.db): Promise<string | undefined> {
-    const row = await db
-      .selectFrom('users')
-      .select(['email', 'active'])
-      .where('id', '=', userId)
-      .executeTakeFirst();
-    return row?.active ? row.email : undefined;
-  }
 }

@@ -11,14 +11,16 @@ import { CriteriaService } from '../criteria/criteria.service.js';
 import { canCheck, canEdit, canReadContent, isEditableState } from './revision-access.js';
 import { toRevision } from './revision-mapper.js';
 import { RevisionsRepository, type RevisionWithSheet } from './revisions.repository.js';
-import { previewOrReject, rejectUnknownInputs } from './evaluate.js';
-import { coreVersion } from './calc-engine.js';
+import { previewOrReject, rejectUnknownInputs } from '../calc/evaluate.js';
+import { coreVersion } from '../calc/calc-engine.js';
+import { UsersRepository } from '../users/users.repository.js';
 
 @Injectable()
 export class RevisionsService {
   constructor(
     private readonly db: Database,
     private readonly repo: RevisionsRepository,
+    private readonly users: UsersRepository,
     private readonly criteria: CriteriaService,
     private readonly audit: AuditService,
   ) {}
@@ -42,7 +44,7 @@ export class RevisionsService {
   }
 
   async present(user: AuthUser, rev: RevisionWithSheet): Promise<Revision> {
-    const people = await this.repo.people([rev.authorId, rev.checkerId]);
+    const people = await this.users.people([rev.authorId, rev.checkerId]);
     const editable = canEdit(user, rev);
     return toRevision(rev, people, {
       supersededByLabel: rev.supersededById ? await this.repo.label(rev.supersededById) : undefined,

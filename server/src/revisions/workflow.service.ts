@@ -16,8 +16,8 @@ import { AuditService } from '../audit/audit.service.js';
 import { CriteriaService } from '../criteria/criteria.service.js';
 import { OutboxService } from '../outbox/outbox.service.js';
 import { ReviewsService } from '../reviews/reviews.service.js';
-import { coreVersion, fieldLabel, resolveInputsOf } from './calc-engine.js';
-import { evaluateCompleteOrReject } from './evaluate.js';
+import { coreVersion, fieldLabel, resolveInputsOf } from '../calc/calc-engine.js';
+import { evaluateCompleteOrReject } from '../calc/evaluate.js';
 import { approvedMail, returnedMail, submittedMail } from './notifications.js';
 import { canCheck, ownPart } from './revision-access.js';
 import { contentHash, newVerificationCode } from './revision-codes.js';
@@ -29,6 +29,7 @@ import {
   storedUnconfirmed,
   withPerson,
 } from './revisions.service.js';
+import { UsersRepository } from '../users/users.repository.js';
 
 /**
  * The check-and-approve workflow: draft/returned → in check → approved (previous approved →
@@ -40,6 +41,7 @@ export class WorkflowService {
   constructor(
     private readonly db: Database,
     private readonly repo: RevisionsRepository,
+    private readonly users: UsersRepository,
     private readonly revisions: RevisionsService,
     private readonly criteria: CriteriaService,
     private readonly audit: AuditService,
@@ -122,7 +124,7 @@ export class WorkflowService {
           justification,
         },
       });
-      const to = await this.repo.checkerEmails(rev.authorId, trx);
+      const to = await this.users.checkerEmails(rev.authorId, trx);
       await this.outbox.enqueueMail(
         trx,
         submittedMail(
@@ -213,7 +215,7 @@ export class WorkflowService {
           note: input.note ?? null,
         },
       });
-      const to = await this.repo.email(rev.authorId, trx);
+      const [to] = await this.users.activeEmails([rev.authorId], trx);
       await this.outbox.enqueueMail(
         trx,
         approvedMail(
@@ -260,7 +262,7 @@ export class WorkflowService {
           comment: input.comment,
         },
       });
-      const to = await this.repo.email(rev.authorId, trx);
+      const [to] = await this.users.activeEmails([rev.authorId], trx);
       await this.outbox.enqueueMail(
         trx,
         returnedMail(

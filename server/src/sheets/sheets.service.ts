@@ -24,7 +24,7 @@ import {
   evaluateSheet,
   fieldLabel,
   startingInputs,
-} from '../revisions/calc-engine.js';
+} from '../calc/calc-engine.js';
 import { diffChecks, diffInputs, diffResults } from '../revisions/diff.js';
 import { canReadContent } from '../revisions/revision-access.js';
 import { auditFor } from '../revisions/read-rules.js';
@@ -35,6 +35,7 @@ import { RevisionsService } from '../revisions/revisions.service.js';
 import type { SheetEvaluation } from '@holdfast/calc';
 import { toSheetSummary } from './sheet-mapper.js';
 import { SheetsRepository } from './sheets.repository.js';
+import { UsersRepository } from '../users/users.repository.js';
 
 /** A preview evaluation for a new draft; a draft may start incomplete, so failures give null. */
 function preview(
@@ -55,6 +56,7 @@ export class SheetsService {
     private readonly db: Database,
     private readonly repo: SheetsRepository,
     private readonly revisionsRepo: RevisionsRepository,
+    private readonly users: UsersRepository,
     private readonly revisions: RevisionsService,
     private readonly criteria: CriteriaService,
     private readonly audit: AuditService,
@@ -69,7 +71,7 @@ export class SheetsService {
     const row = await this.repo.findSummary(id, db);
     if (!row) throw notFound('Sheet not found.');
     const revs = await this.revisionsRepo.listForSheet(id, db);
-    const people = await this.revisionsRepo.people(
+    const people = await this.users.people(
       revs.flatMap((r) => [r.authorId, r.checkerId]),
       db,
     );
@@ -254,12 +256,7 @@ export class SheetsService {
       throw notFound('Both revisions must belong to this sheet.');
     if (!canReadContent(user, a) || !canReadContent(user, b))
       throw forbidden('Only approved revisions are open to your role.');
-    const people = await this.revisionsRepo.people([
-      a.authorId,
-      a.checkerId,
-      b.authorId,
-      b.checkerId,
-    ]);
+    const people = await this.users.people([a.authorId, a.checkerId, b.authorId, b.checkerId]);
     return {
       from: toRevisionSummary(a, people),
       to: toRevisionSummary(b, people),

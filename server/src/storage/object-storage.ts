@@ -73,11 +73,22 @@ export class ObjectStorage implements OnModuleInit, OnModuleDestroy {
   private async ensureBucket(): Promise<void> {
     const Bucket = this.settings.S3_BUCKET;
     try {
-      await this.client.send(new HeadBucketCommand({ Bucket }));
+      await this.client.send(new HeadBucketCommand({ Bucket }), this.deadline());
     } catch (e) {
       if (httpStatus(e) !== 404) throw e;
-      await this.client.send(new CreateBucketCommand({ Bucket }));
+      await this.client.send(new CreateBucketCommand({ Bucket }), this.deadline());
     }
+  }
+
+  /**
+   * A deadline for one whole operation, retries included. The SDK's socket timeouts do not end a
+   * request to storage that accepts the connection and never answers (the fault test saw an
+   * upload wait past 30 s), so each call is also aborted after two attempts' worth of
+   * S3_TIMEOUT_MS, plus a second per MiB sent (a floor of 1 MiB/s for large uploads).
+   */
+  private deadline(bytes = 0) {
+    const ms = 2 * this.settings.S3_TIMEOUT_MS + Math.ceil(bytes / 1048576) * 1000;
+    return { abortSignal: AbortSignal.timeout(ms) };
   }
 
   async put(key: string, body: Buffer, contentType: string): Promise<void> {
@@ -89,6 +100,7 @@ export class ObjectStorage implements OnModuleInit, OnModuleDestroy {
           Body: body,
           ContentType: contentType,
         }),
+        this.deadline(body.length),
       );
     } catch (e) {
       if (httpStatus(e) === 404) {
@@ -104,6 +116,7 @@ export class ObjectStorage implements OnModuleInit, OnModuleDestroy {
     try {
       const out = await this.client.send(
         new GetObjectCommand({ Bucket: this.settings.S3_BUCKET, Key: key }),
+        this.deadline(),
       );
       const bytes = await out.Body?.transformToByteArray();
       return bytes ? Buffer.from(bytes) : Buffer.alloc(0);
@@ -119,6 +132,7 @@ export class ObjectStorage implements OnModuleInit, OnModuleDestroy {
     try {
       await this.client.send(
         new DeleteObjectCommand({ Bucket: this.settings.S3_BUCKET, Key: key }),
+        this.deadline(),
       );
     } catch (e) {
       this.logger.error(`delete ${key} failed, object left orphaned: ${describe(e)}`);

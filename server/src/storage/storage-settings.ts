@@ -16,7 +16,7 @@ const schema = z.object({
   S3_EMBEDDED: flag,
   /** Port of the embedded fake on 127.0.0.1 (0 = any free port). */
   S3_PORT: z.coerce.number().int().min(0).max(65535).default(4569),
-  /** Request timeout towards the storage, ms; a dead endpoint answers 503 after this. */
+  /** Request timeout towards the storage, ms; a dead or hanging endpoint answers 503 within twice this. */
   S3_TIMEOUT_MS: z.coerce.number().int().positive().default(5000),
 });
 

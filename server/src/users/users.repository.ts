@@ -2,10 +2,14 @@ import { Injectable } from '@nestjs/common';
 import type { DB, NewUserRow, UserRow, UserRowUpdate } from '@holdfast/db';
 import type { Kysely } from 'kysely';
 import { Database } from '../database/database.js';
+import { SignedInUsers } from './signed-in-users.js';
 
 @Injectable()
 export class UsersRepository {
-  constructor(private readonly db: Database) {}
+  constructor(
+    private readonly db: Database,
+    private readonly signedIn: SignedInUsers,
+  ) {}
 
   findById(id: string, db: Kysely<DB> = this.db): Promise<UserRow | undefined> {
     return db.selectFrom('users').selectAll().where('id', '=', id).executeTakeFirst();
@@ -17,6 +21,46 @@ export class UsersRepository {
       .selectAll()
       .where('email', '=', email.toLowerCase())
       .executeTakeFirst();
+  }
+
+  /** Users by id (name and initials), for person references. */
+  async people(ids: (string | null | undefined)[], db: Kysely<DB> = this.db) {
+    const wanted = [...new Set(ids.filter((x): x is string => !!x))];
+    if (wanted.length === 0)
+      return new Map<string, { id: string; displayName: string; initials: string }>();
+    const rows = await db
+      .selectFrom('users')
+      .select(['id', 'displayName', 'initials'])
+      .where('id', 'in', wanted)
+      .execute();
+    return new Map(rows.map((r) => [r.id, r]));
+  }
+
+  /** E-mail addresses of the active users among `ids`, sorted; inactive ones get no mail. */
+  async activeEmails(ids: (string | null)[], db: Kysely<DB> = this.db): Promise<string[]> {
+    const wanted = [...new Set(ids.filter((x): x is string => !!x))];
+    if (wanted.length === 0) return [];
+    const rows = await db
+      .selectFrom('users')
+      .select('email')
+      .where('id', 'in', wanted)
+      .where('active', '=', true)
+      .orderBy('email')
+      .execute();
+    return rows.map((r) => r.email);
+  }
+
+  /** E-mail addresses of active checkers other than `exceptId`. */
+  async checkerEmails(exceptId: string, db: Kysely<DB> = this.db): Promise<string[]> {
+    const rows = await db
+      .selectFrom('users')
+      .select('email')
+      .where('role', '=', 'checker')
+      .where('active', '=', true)
+      .where('id', '<>', exceptId)
+      .orderBy('email')
+      .execute();
+    return rows.map((r) => r.email);
   }
 
   list(): Promise<UserRow[]> {
@@ -33,6 +77,7 @@ export class UsersRepository {
   }
 
   update(id: string, patch: UserRowUpdate): Promise<UserRow | undefined> {
+    this.signedIn.forget(id);
     return this.db
       .updateTable('users')
       .set(patch)
@@ -46,6 +91,7 @@ export class UsersRepository {
    * under, and the guard refuses older ones. Refresh tokens are untouched (see revokeSessions).
    */
   async endAccessTokens(userId: string, db: Kysely<DB> = this.db): Promise<void> {
+    this.signedIn.forget(userId);
     await db
       .updateTable('users')
       .set((eb) => ({ sessionVersion: eb('sessionVersion', '+', 1) }))
@@ -55,6 +101,7 @@ export class UsersRepository {
 
   /** A new password hash; ends every session (access and refresh) of the user. */
   async setPassword(userId: string, passwordHash: string, db: Kysely<DB> = this.db): Promise<void> {
+    this.signedIn.forget(userId);
     await db.updateTable('users').set({ passwordHash }).where('id', '=', userId).execute();
     await this.endAccessTokens(userId, db);
     await this.revokeSessions(userId, db);

@@ -1,12 +1,13 @@
 import { Module } from '@nestjs/common';
 import { FieldRecordsModule } from '../field-records/field-records.module.js';
 import { VerifyThrottlerGuard } from './verify-throttler.guard.js';
+import { VerifyRepository } from './verify.repository.js';
 import { VerifyController } from './verify.controller.js';
 import { VerifyService } from './verify.service.js';
 
 @Module({
   imports: [FieldRecordsModule],
   controllers: [VerifyController],
-  providers: [VerifyService, VerifyThrottlerGuard],
+  providers: [VerifyRepository, VerifyService, VerifyThrottlerGuard],
 })
 export class VerifyModule {}

@@ -5,7 +5,7 @@ import type { AuthUser } from '../../auth/auth-user.js';
 import { AppConfig } from '../../config/app-config.js';
 import { CriteriaService } from '../../criteria/criteria.service.js';
 import { FieldRecordsService } from '../../field-records/field-records.service.js';
-import { CHECK_LABELS } from '../../field-records/field-targets.js';
+import { CHECK_LABELS } from '../../calc/field-targets.js';
 import { RevisionsService } from '../../revisions/revisions.service.js';
 import { SheetsService } from '../../sheets/sheets.service.js';
 import { buildPrintableSheet } from '../build-printable-sheet.js';

@@ -8,6 +8,7 @@ import {
   unknownInputKeys,
   type ResolvedInput,
   getSheetType,
+  criterionSpec,
   isCalcInputError as calcInputErrorGuard,
   type CriteriaSet,
   type FieldError,
@@ -33,6 +34,11 @@ export function sheetTypeDefinition(id: string): SheetTypeDefinition {
   const found = getSheetType(id);
   if (!found) throw new UnknownSheetTypeError(id);
   return found;
+}
+
+/** The SI unit the core states a criterion in; undefined for a key it does not declare. */
+export function criterionUnit(key: string): string | undefined {
+  return criterionSpec(key)?.unit;
 }
 
 /** The criteria sets shipped with the core (seeded as version 1 in the database). */
