@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Button, Popover, Stack, Text, UnstyledButton } from '@mantine/core';
 import { IconArrowDownRight, IconArrowUpRight, IconTargetArrow } from '@tabler/icons-react';
-import type { CheckDriver } from '../utils/check-drivers';
+import type { CheckDriver } from '@holdfast/calc';
 import { fieldDomId } from './field-input';
 
 /** Scrolls an input into view and puts the cursor in it. */

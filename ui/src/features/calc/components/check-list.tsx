@@ -1,7 +1,6 @@
 import { memo, type ReactNode } from 'react';
 import { Group, Paper, Stack, Text } from '@mantine/core';
-import type { CheckResult, Dimension } from '@holdfast/calc';
-import type { CheckDriver } from '../utils/check-drivers';
+import type { CheckDriver, CheckResult, Dimension } from '@holdfast/calc';
 import { CheckDriversButton } from './check-drivers-button';
 import { Verdict } from './verdict';
 import { UtilisationBar } from './utilisation-bar';

@@ -14,8 +14,7 @@ import {
   Title,
 } from '@mantine/core';
 import { IconAlertTriangle, IconBolt } from '@tabler/icons-react';
-import type { SectionDefinition, SheetEvaluation } from '@holdfast/calc';
-import type { CheckDriver } from '../utils/check-drivers';
+import type { CheckDriver, SectionDefinition, SheetEvaluation } from '@holdfast/calc';
 import { CheckDriversButton } from './check-drivers-button';
 import { CheckList } from './check-list';
 import { DerivationList } from './derivation-list';

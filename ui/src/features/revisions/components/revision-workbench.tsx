@@ -1,13 +1,17 @@
 import { useCallback, useMemo, useRef, useState, type ReactNode } from 'react';
 import { Alert, Box, Stack } from '@mantine/core';
 import { IconLock } from '@tabler/icons-react';
-import type { CriteriaSet, SheetEvaluation, SheetTypeDefinition } from '@holdfast/calc';
+import {
+  checkDrivers,
+  type CriteriaSet,
+  type SheetEvaluation,
+  type SheetTypeDefinition,
+} from '@holdfast/calc';
 import type { Revision } from '@holdfast/shared';
 import { InputSections } from '../../calc/components/input-sections';
 import { ResultsPanel } from '../../calc/components/results-panel';
 import { useLiveEvaluation } from '../../calc/hooks/use-live-evaluation';
 import { useNumberFormat } from '../../calc/hooks/use-number-format';
-import { checkDrivers } from '../../calc/utils/check-drivers';
 import { checkField, fieldMessages } from '../../calc/utils/field-check';
 import type { UnitSystem } from '../../calc/utils/units';
 import { useRevisionDraft } from '../hooks/use-revision-draft';
