@@ -1,5 +1,6 @@
 import { memo, type ReactNode } from 'react';
 import { Badge, Box, Button, Group, Paper, SimpleGrid, Stack, Title } from '@mantine/core';
+import { Aside } from './aside';
 import type {
   FieldDefinition,
   InputValue,
@@ -159,7 +160,7 @@ const FieldRow = memo(function FieldRow(props: FieldRowProps) {
       ) : null}
       {renderAside ? (
         <Box pos="absolute" top={0} right={0}>
-          {renderAside(field.key)}
+          <Aside id={field.key} render={renderAside} />
         </Box>
       ) : null}
     </Box>
