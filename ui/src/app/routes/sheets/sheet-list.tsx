@@ -31,7 +31,7 @@ import { sheetsQueryOptions, useSheets } from '../../../features/sheets/api/get-
 import type { SheetListParams } from '../../../features/sheets/api/sheet-keys';
 import { CreateSheetDialog } from '../../../features/sheets/components/create-sheet-dialog';
 import { SheetsTable, type SortKey } from '../../../features/sheets/components/sheets-table';
-import { stateLabel } from '../../../features/sheets/components/state-badge';
+import { stateLabel } from '../../../features/sheets/utils/state-label';
 import { positionGroups } from './position-groups';
 import { useListOutputs } from './use-list-outputs';
 
