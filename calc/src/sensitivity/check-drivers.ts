@@ -18,6 +18,8 @@ export interface CheckDriver {
 const STEP = 0.01;
 /** Effects smaller than this (in magnitude) are noise from rounding, not a driver. */
 const NEGLIGIBLE = 1e-4;
+/** Effects within this relative difference rank as equal (finite-difference rounding). */
+const TIE = 1e-6;
 
 function nudged(v: InputValue | undefined, factor: number): InputValue | undefined {
   if (typeof v === 'number') return v !== 0 && Number.isFinite(v) ? v * factor : undefined;
@@ -33,7 +35,8 @@ function nudged(v: InputValue | undefined, factor: number): InputValue | undefin
  * nudged up by 1 % (down by 1 % when the higher value is refused, e.g. at its upper bound) and the
  * relative change of the utilisation is divided by the relative change of the input. Choices,
  * flags, zero and missing inputs are skipped; so is an input whose nudge is refused both ways, and
- * one whose effect is negligible. Strongest first (by magnitude), at most `limit`.
+ * one whose effect is negligible. Strongest first (by magnitude; equal ones in field order), at
+ * most `limit`.
  *
  * `utilisationOf` returns null when the inputs cannot be evaluated. Pure: no clock, no I/O.
  */
@@ -45,21 +48,29 @@ export function rankDrivers(
 ): CheckDriver[] {
   const base = utilisationOf(inputs);
   if (base === null || base === 0 || !Number.isFinite(base)) return [];
-  const out: CheckDriver[] = [];
-  for (const field of fields) {
+  const out: (CheckDriver & { order: number })[] = [];
+  for (const [order, field] of fields.entries()) {
     for (const factor of [1 + STEP, 1 - STEP]) {
       const x = nudged(inputs[field.key], factor);
       if (x === undefined) break;
       const u = utilisationOf({ ...inputs, [field.key]: x });
       if (u === null || !Number.isFinite(u)) continue;
       const effect = (u - base) / base / (factor - 1);
-      if (Math.abs(effect) > NEGLIGIBLE) out.push({ key: field.key, label: field.label, effect });
+      if (Math.abs(effect) > NEGLIGIBLE)
+        out.push({ key: field.key, label: field.label, effect, order });
       break;
     }
   }
+  // Factors of a product all have the same elasticity but for rounding: such ties keep the
+  // sheet's own field order (the order the engineer reads them in).
+  const stronger = (a: CheckDriver, b: CheckDriver) => {
+    const d = Math.abs(b.effect) - Math.abs(a.effect);
+    return Math.abs(d) > TIE * Math.max(Math.abs(a.effect), Math.abs(b.effect)) ? d : 0;
+  };
   return out
-    .sort((a, b) => Math.abs(b.effect) - Math.abs(a.effect) || a.key.localeCompare(b.key))
-    .slice(0, Math.max(0, limit));
+    .sort((a, b) => stronger(a, b) || a.order - b.order)
+    .slice(0, Math.max(0, limit))
+    .map(({ key, label, effect }) => ({ key, label, effect }));
 }
 
 /**
