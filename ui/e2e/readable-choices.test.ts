@@ -112,5 +112,24 @@ describe.skipIf(skipReason !== null)('choices read whole at 1024 px and above', 
       expect(await cutChoices(page)).toEqual([]);
       await screenshot(page, `choices-sheet-list-${width}`);
     });
+
+    it(`in the new-sheet dialog at ${width} px`, async () => {
+      const { page } = browser;
+      await page.setViewportSize({ width, height: 900 });
+      await page.goto(`${baseUrl}/sheets`);
+      await page.getByRole('button', { name: 'New sheet' }).click();
+      const dialog = page.getByRole('dialog', { name: 'New calculation sheet' });
+      for (const label of [/^Brake position/, /^Sheet type/]) {
+        await dialog.getByRole('combobox', { name: label }).click();
+        const options = page.getByRole('option');
+        await options.first().waitFor();
+        const texts = await options.allTextContents();
+        const longest = texts.reduce((a, t) => (t.length > a.length ? t : a), '');
+        await page.getByRole('option', { name: longest, exact: true }).click();
+      }
+      expect(await cutChoices(page)).toEqual([]);
+      await screenshot(page, `choices-new-sheet-${width}`);
+      await page.keyboard.press('Escape');
+    });
   }
 });
