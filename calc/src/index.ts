@@ -65,6 +65,7 @@ export * from './stopping/limits.js';
 export * from './stopping/speed-at-set.js';
 export * from './stopping/overspeed.js';
 export { limitCheck, type LimitCheck } from './core/limit-check.js';
+export { checkDrivers, rankDrivers, type CheckDriver } from './sensitivity/check-drivers.js';
 export * from './release/release.js';
 export * from './release/stroke-wear.js';
 export * from './shoe-brake/wear-limits.js';

@@ -1,29 +1,5 @@
 import { demoPassword, demoUsers, type DemoUserKey } from './demo-users';
 
-/** Calls the API of the app under test as a demo user (set-up steps that are not under test). */
-export async function apiClientAs(baseUrl: string, who: DemoUserKey) {
-  const res = await fetch(`${baseUrl}/api/auth/sign-in`, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ email: demoUsers[who].email, password: demoPassword }),
-  });
-  if (!res.ok) throw new Error(`sign-in as ${who} failed: ${res.status}`);
-  const { accessToken } = (await res.json()) as { accessToken: string };
-  return async <T = unknown>(method: string, path: string, body?: unknown): Promise<T> => {
-    const r = await fetch(`${baseUrl}/api${path}`, {
-      method,
-      headers: {
-        Authorization: `Bearer ${accessToken}`,
-        ...(body === undefined ? {} : { 'Content-Type': 'application/json' }),
-      },
-      body: body === undefined ? undefined : JSON.stringify(body),
-    });
-    const text = await r.text();
-    if (!r.ok) throw new Error(`${method} ${path}: ${r.status} ${text}`);
-    return (text ? JSON.parse(text) : undefined) as T;
-  };
-}
-
 interface RegisterAnswer {
   sites: { machines: { positions: { id: string; tag: string }[] }[] }[];
 }
@@ -55,9 +31,25 @@ export async function createHoistSheet(
 
 const tokens = new Map<string, string>();
 
+/** A demo user's access token, signed in once per app and user (the sign-in throttle is never reached). */
+async function tokenFor(baseUrl: string, who: DemoUserKey, fresh = false): Promise<string> {
+  const key = `${baseUrl} ${who}`;
+  const cached = tokens.get(key);
+  if (cached && !fresh) return cached;
+  const res = await fetch(`${baseUrl}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ email: demoUsers[who].email, password: demoPassword }),
+  });
+  if (!res.ok) throw new Error(`sign-in as ${who}: ${res.status} ${await res.text()}`);
+  const token = ((await res.json()) as { accessToken: string }).accessToken;
+  tokens.set(key, token);
+  return token;
+}
+
 /**
- * Calls the API as a demo user, for setting up a scene faster than clicking through it. Tokens are
- * cached per user so the sign-in throttle is never reached.
+ * Calls the API as a demo user, for setting up a scene faster than clicking through it (set-up
+ * steps that are not under test). A token a test has signed out is replaced once.
  */
 export async function apiAs<T = any>(
   baseUrl: string,
@@ -66,28 +58,27 @@ export async function apiAs<T = any>(
   path: string,
   body?: unknown,
 ): Promise<T> {
-  let token = tokens.get(who);
-  if (!token) {
-    const res = await fetch(`${baseUrl}/api/auth/sign-in`, {
-      method: 'POST',
-      headers: { 'Content-Type': 'application/json' },
-      body: JSON.stringify({ email: demoUsers[who].email, password: demoPassword }),
+  const send = async (token: string) =>
+    fetch(`${baseUrl}/api${path}`, {
+      method,
+      headers: {
+        Authorization: `Bearer ${token}`,
+        ...(body === undefined ? {} : { 'Content-Type': 'application/json' }),
+      },
+      body: body === undefined ? undefined : JSON.stringify(body),
     });
-    if (!res.ok) throw new Error(`sign-in as ${who}: ${res.status} ${await res.text()}`);
-    token = ((await res.json()) as { accessToken: string }).accessToken;
-    tokens.set(who, token);
-  }
-  const res = await fetch(`${baseUrl}/api${path}`, {
-    method,
-    headers: {
-      Authorization: `Bearer ${token}`,
-      ...(body === undefined ? {} : { 'Content-Type': 'application/json' }),
-    },
-    body: body === undefined ? undefined : JSON.stringify(body),
-  });
+  let res = await send(await tokenFor(baseUrl, who));
+  if (res.status === 401) res = await send(await tokenFor(baseUrl, who, true));
   const text = await res.text();
   if (!res.ok) throw new Error(`${method} ${path} as ${who}: ${res.status} ${text}`);
   return (text ? JSON.parse(text) : undefined) as T;
+}
+
+/** `apiAs` bound to one user (signed in now, so a refused sign-in shows here). */
+export async function apiClientAs(baseUrl: string, who: DemoUserKey) {
+  await tokenFor(baseUrl, who);
+  return <T = unknown>(method: string, path: string, body?: unknown): Promise<T> =>
+    apiAs<T>(baseUrl, who, method, path, body);
 }
 
 /** Creates a sheet on the first register position through the API; returns its ids. */

@@ -1,6 +1,7 @@
 import { Suspense, useEffect } from 'react';
-import { AppShell, Burger, Group, Text } from '@mantine/core';
-import { useDisclosure } from '@mantine/hooks';
+import { ActionIcon, AppShell, Burger, Group, Text } from '@mantine/core';
+import { IconLayoutSidebarLeftCollapse, IconLayoutSidebarLeftExpand } from '@tabler/icons-react';
+import { useDisclosure, useMediaQuery } from '@mantine/hooks';
 import { Link, Navigate, Outlet, useLocation } from 'react-router-dom';
 import { Wordmark } from '../components/brand/wordmark';
 import { PageLoader } from '../components/page-loader';
@@ -10,6 +11,7 @@ import { UserMenu } from '../features/auth/components/user-menu';
 import { useRouteHandle } from '../lib/route-handle';
 import { useSession } from '../lib/session';
 import { FrameNav } from './frame-nav';
+import { useNavCollapsed } from './use-nav-collapsed';
 import classes from './app-frame.module.css';
 
 /** The signed-in frame: header, navigation, page, and the safety caution on calculation pages. */
@@ -18,6 +20,11 @@ export function AppFrame() {
   const location = useLocation();
   const handle = useRouteHandle();
   const [navOpen, { toggle, close }] = useDisclosure(false);
+  const wideScreen = useMediaQuery('(min-width: 48em)') ?? false;
+  const [navCollapsed, toggleNavCollapsed] = useNavCollapsed(
+    session.user?.id ?? '',
+    handle.compactNav === true,
+  );
 
   useEffect(() => {
     document.title = handle.title ? `${handle.title} · Holdfast` : 'Holdfast';
@@ -32,7 +39,11 @@ export function AppFrame() {
   return (
     <AppShell
       header={{ height: 56 }}
-      navbar={{ width: 232, breakpoint: 'sm', collapsed: { mobile: !navOpen } }}
+      navbar={{
+        width: 232,
+        breakpoint: 'sm',
+        collapsed: { mobile: !navOpen, desktop: navCollapsed },
+      }}
       footer={handle.caution ? { height: { base: 76, md: 48 } } : undefined}
       padding="lg"
       className={classes.shell}
@@ -59,6 +70,23 @@ export function AppFrame() {
               color="white"
               aria-label={navOpen ? 'Close navigation' : 'Open navigation'}
             />
+            <ActionIcon
+              visibleFrom="sm"
+              variant="subtle"
+              color="white"
+              size="lg"
+              onClick={toggleNavCollapsed}
+              aria-label={navCollapsed ? 'Show navigation' : 'Hide navigation'}
+              aria-expanded={!navCollapsed}
+              aria-controls="frame-nav"
+              data-testid="nav-toggle"
+            >
+              {navCollapsed ? (
+                <IconLayoutSidebarLeftExpand size={20} aria-hidden />
+              ) : (
+                <IconLayoutSidebarLeftCollapse size={20} aria-hidden />
+              )}
+            </ActionIcon>
             <Link
               to={paths.home.build()}
               className={classes.brand}
@@ -73,7 +101,8 @@ export function AppFrame() {
           <UserMenu />
         </Group>
       </AppShell.Header>
-      <AppShell.Navbar className={classes.navbar}>
+      {/* A collapsed navigation is only moved off screen: inert keeps Tab out of it. */}
+      <AppShell.Navbar className={classes.navbar} id="frame-nav" inert={wideScreen && navCollapsed}>
         <FrameNav user={session.user} />
       </AppShell.Navbar>
       <AppShell.Main className={classes.main} id="main-content" tabIndex={-1}>

@@ -1,5 +1,6 @@
 import { useEffect, useState, type ReactNode } from 'react';
-import { Alert, Button, Group, Modal, Stack, Textarea } from '@mantine/core';
+import { Modal, Stack, Textarea } from '@mantine/core';
+import { DialogActions } from './dialog-actions';
 import { errorMessage, isApiRequestError } from '../lib/api-client';
 
 export interface ActionDialogProps {
@@ -75,19 +76,15 @@ export function ActionDialog(props: ActionDialogProps) {
           data-autofocus
           maxLength={4000}
         />
-        {formError ? (
-          <Alert color="fail" variant="light" role="alert">
-            {formError}
-          </Alert>
-        ) : null}
-        <Group justify="flex-end">
-          <Button variant="default" onClick={onClose} disabled={busy}>
-            Cancel
-          </Button>
-          <Button color={props.confirmColor} onClick={() => void confirm()} loading={busy}>
-            {props.confirmLabel}
-          </Button>
-        </Group>
+        <DialogActions
+          error={formError}
+          onCancel={onClose}
+          holdCancelWhilePending
+          confirmLabel={props.confirmLabel}
+          confirmColor={props.confirmColor}
+          onConfirm={() => void confirm()}
+          pending={busy}
+        />
       </Stack>
     </Modal>
   );

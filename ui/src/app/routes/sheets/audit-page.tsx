@@ -1,22 +1,17 @@
 import { useMemo, useState } from 'react';
-import { Anchor, Paper, Skeleton, Switch, Table, Text } from '@mantine/core';
-import type { QueryClient } from '@tanstack/react-query';
-import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Paper, Skeleton, Switch, Table, Text } from '@mantine/core';
+import { useParams } from 'react-router-dom';
 import { Page } from '../../../components/layouts/page';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import type { RouteHandle } from '../../../lib/route-handle';
-import { sheetQueryOptions, useSheet } from '../../../features/sheets/api/get-sheet';
+import { useSheet } from '../../../features/sheets/api/get-sheet';
+import { sheetEyebrow, sheetSubpageLoader } from './sheet-subpage';
 import { useSheetAudit } from '../../../features/sheets/api/get-sheet-audit';
 import { auditActionWords, auditDetail } from '../../../features/sheets/utils/audit-words';
 
 export const handle: RouteHandle = { wide: true, title: 'Audit trail' };
 
-export function clientLoader(queryClient: QueryClient) {
-  return async ({ params }: LoaderFunctionArgs) => {
-    await queryClient.ensureQueryData(sheetQueryOptions(params.sheetId!));
-    return null;
-  };
-}
+export const clientLoader = sheetSubpageLoader;
 
 const when = (iso: string) =>
   new Date(iso).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'medium' });
@@ -39,13 +34,7 @@ export function Component() {
 
   return (
     <Page
-      eyebrow={
-        sheet.data ? (
-          <Anchor component={Link} to={`/sheets/${sheetId}`} size="xs">
-            {sheet.data.documentNumber} · {sheet.data.title}
-          </Anchor>
-        ) : undefined
-      }
+      eyebrow={sheetEyebrow(sheet.data)}
       title="Audit trail"
       description="Every recorded change to this sheet, oldest first. The trail cannot be edited."
     >

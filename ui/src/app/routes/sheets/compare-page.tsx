@@ -1,23 +1,18 @@
-import { Anchor, Group, Paper, Select, Skeleton, Stack, Text } from '@mantine/core';
-import type { QueryClient } from '@tanstack/react-query';
-import { Link, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Group, Paper, Select, Skeleton, Stack, Text } from '@mantine/core';
+import { useParams, useSearchParams } from 'react-router-dom';
 import { Page } from '../../../components/layouts/page';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import type { RouteHandle } from '../../../lib/route-handle';
 import { useCurrentUser } from '../../../lib/session';
 import { useComparison } from '../../../features/compare/api/get-comparison';
 import { CompareView } from '../../../features/compare/components/compare-view';
-import { sheetQueryOptions, useSheet } from '../../../features/sheets/api/get-sheet';
+import { useSheet } from '../../../features/sheets/api/get-sheet';
+import { sheetEyebrow, sheetSubpageLoader } from './sheet-subpage';
 import { visibleRevisions } from './sheet-page';
 
 export const handle: RouteHandle = { caution: true, wide: true, title: 'Compare revisions' };
 
-export function clientLoader(queryClient: QueryClient) {
-  return async ({ params }: LoaderFunctionArgs) => {
-    await queryClient.ensureQueryData(sheetQueryOptions(params.sheetId!));
-    return null;
-  };
-}
+export const clientLoader = sheetSubpageLoader;
 
 export function Component() {
   const { sheetId = '' } = useParams();
@@ -38,13 +33,7 @@ export function Component() {
 
   return (
     <Page
-      eyebrow={
-        sheet.data ? (
-          <Anchor component={Link} to={`/sheets/${sheetId}`} size="xs">
-            {sheet.data.documentNumber} · {sheet.data.title}
-          </Anchor>
-        ) : undefined
-      }
+      eyebrow={sheetEyebrow(sheet.data)}
       title="Compare revisions"
       description="Inputs that changed and how each result and check moved."
     >

@@ -31,7 +31,8 @@ import { sheetsQueryOptions, useSheets } from '../../../features/sheets/api/get-
 import type { SheetListParams } from '../../../lib/query-keys';
 import { CreateSheetDialog } from '../../../features/sheets/components/create-sheet-dialog';
 import { SheetsTable, type SortKey } from '../../../features/sheets/components/sheets-table';
-import { stateLabel } from '../../../features/sheets/components/state-badge';
+import { stateLabel } from '../../../lib/state-label';
+import { fitWidth } from '../../../lib/fit-width';
 import { positionGroups } from './position-groups';
 import { useListOutputs } from './use-list-outputs';
 
@@ -63,6 +64,9 @@ export function clientLoader(queryClient: QueryClient) {
     return null;
   };
 }
+
+const stateOptions = revisionStates.map((s) => ({ value: s, label: stateLabel(s) }));
+const typeOptions = sheetTypeIds.map((id) => ({ value: id, label: sheetTypeTitle(id) }));
 
 export function Component() {
   const user = useCurrentUser();
@@ -99,6 +103,10 @@ export function Component() {
         .filter((s) => !params.siteId || s.id === params.siteId)
         .flatMap((s) => s.machines.map((m) => ({ value: m.id, label: `${m.tag} — ${m.name}` }))),
     [sites, params.siteId],
+  );
+  const siteOptions = useMemo(
+    () => sites.map((s) => ({ value: s.id, label: `${s.code} — ${s.name}` })),
+    [sites],
   );
   const canCreate = user.role === 'engineer' || user.role === 'checker';
   const onSort = (key: SortKey) =>
@@ -151,8 +159,11 @@ export function Component() {
             label="State"
             placeholder="Any"
             clearable
-            w={140}
-            data={revisionStates.map((s) => ({ value: s, label: stateLabel(s) }))}
+            w={fitWidth(
+              stateOptions.map((o) => o.label),
+              140,
+            )}
+            data={stateOptions}
             value={params.state ?? null}
             onChange={(v) => set({ state: v ?? undefined })}
           />
@@ -160,8 +171,11 @@ export function Component() {
             label="Site"
             placeholder="Any"
             clearable
-            w={170}
-            data={sites.map((s) => ({ value: s.id, label: `${s.code} — ${s.name}` }))}
+            w={fitWidth(
+              siteOptions.map((o) => o.label),
+              170,
+            )}
+            data={siteOptions}
             value={params.siteId ?? null}
             onChange={(v) => set({ siteId: v ?? undefined, machineId: undefined })}
           />
@@ -170,7 +184,10 @@ export function Component() {
             placeholder="Any"
             clearable
             searchable
-            w={200}
+            w={fitWidth(
+              machines.map((o) => o.label),
+              200,
+            )}
             data={machines}
             value={params.machineId ?? null}
             onChange={(v) => set({ machineId: v ?? undefined })}
@@ -179,8 +196,11 @@ export function Component() {
             label="Sheet type"
             placeholder="Any"
             clearable
-            w={190}
-            data={sheetTypeIds.map((id) => ({ value: id, label: sheetTypeTitle(id) }))}
+            w={fitWidth(
+              typeOptions.map((o) => o.label),
+              190,
+            )}
+            data={typeOptions}
             value={params.sheetType ?? null}
             onChange={(v) => set({ sheetType: v ?? undefined })}
           />

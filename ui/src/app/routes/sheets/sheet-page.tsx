@@ -17,7 +17,7 @@ import { UnderReviewBanner } from '../../../features/criteria-review/components/
 import { RevisionView } from './revision-view';
 import { SheetHeader } from './sheet-header';
 
-export const handle: RouteHandle = { caution: true, wide: true, title: 'Sheet' };
+export const handle: RouteHandle = { caution: true, wide: true, compactNav: true, title: 'Sheet' };
 
 export function clientLoader(queryClient: QueryClient) {
   return async ({ params }: LoaderFunctionArgs) => {

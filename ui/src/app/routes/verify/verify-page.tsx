@@ -19,6 +19,7 @@ import { SafetyCaution } from '../../../components/safety-caution';
 import { isApiRequestError, errorMessage } from '../../../lib/api-client';
 import type { RouteHandle } from '../../../lib/route-handle';
 import { useVerification } from '../../../features/verify/api/get-verification';
+import { stateLabel } from '../../../lib/state-label';
 
 export const handle: RouteHandle = { title: 'Check a printout' };
 
@@ -65,7 +66,7 @@ function Result({ code }: { code: string }) {
         </Text>
         <Text size="sm">{r.title}</Text>
         <Text size="sm">
-          State: {r.state.replace('_', ' ')}
+          State: {stateLabel(r.state)}
           {r.approvedAt ? `, approved ${new Date(r.approvedAt).toLocaleDateString('en-GB')}` : ''}
         </Text>
         {r.underReview ? (

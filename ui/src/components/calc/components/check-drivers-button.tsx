@@ -1,7 +1,7 @@
-import { useState } from 'react';
+import { memo, useState } from 'react';
 import { Button, Popover, Stack, Text, UnstyledButton } from '@mantine/core';
 import { IconArrowDownRight, IconArrowUpRight, IconTargetArrow } from '@tabler/icons-react';
-import type { CheckDriver } from '../utils/check-drivers';
+import type { CheckDriver } from '@holdfast/calc';
 import { fieldDomId } from './field-input';
 
 /** Scrolls an input into view and puts the cursor in it. */
@@ -13,14 +13,23 @@ export function focusField(key: string): void {
 }
 
 /** "Inputs that drive this": the inputs that move a check, each a link to the field. */
-export function CheckDriversButton({ label, find }: { label: string; find: () => CheckDriver[] }) {
+export const CheckDriversButton = memo(function CheckDriversButton({
+  label,
+  checkId,
+  find,
+}: {
+  label: string;
+  checkId: string;
+  /** Ranks the drivers of a check; called when the list is opened, never per key. */
+  find: (checkId: string) => CheckDriver[];
+}) {
   const [drivers, setDrivers] = useState<CheckDriver[] | null>(null);
   return (
     <Popover
       width={320}
       position="bottom-end"
       shadow="md"
-      onOpen={() => setDrivers(find())}
+      onOpen={() => setDrivers(find(checkId))}
       withinPortal
     >
       <Popover.Target>
@@ -68,4 +77,4 @@ export function CheckDriversButton({ label, find }: { label: string; find: () =>
       </Popover.Dropdown>
     </Popover>
   );
-}
+});

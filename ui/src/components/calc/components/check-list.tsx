@@ -1,11 +1,12 @@
 import { memo, type ReactNode } from 'react';
-import { Group, Paper, Stack, Text } from '@mantine/core';
-import type { CheckResult, Dimension } from '@holdfast/calc';
-import type { CheckDriver } from '../utils/check-drivers';
+import { Stack, Text } from '@mantine/core';
+import type { CheckDriver, CheckResult, Dimension } from '@holdfast/calc';
+import { Aside } from './aside';
 import { CheckDriversButton } from './check-drivers-button';
 import { Verdict } from './verdict';
 import { UtilisationBar } from './utilisation-bar';
 import { presentSI, type UnitSystem } from '../utils/units';
+import classes from './check-list.module.css';
 
 export interface CheckListProps {
   checks: CheckResult[];
@@ -51,38 +52,35 @@ const CheckRow = memo(function CheckRow({
   const limit = presentSI(check.limit, dim, unitSystem);
   const relation = check.kind === 'max' ? '≤' : '≥';
   return (
-    <Paper
-      component="li"
-      p="sm"
+    <li
+      className={classes.row}
       data-check={check.id}
       data-pass={check.pass}
       aria-label={`${check.label}: ${check.pass ? 'pass' : 'fail'}`}
     >
-      <Group justify="space-between" wrap="nowrap" align="flex-start" gap="sm">
-        <Stack gap={2} style={{ minWidth: 0 }}>
-          <Text fw={600} size="sm">
-            {check.label}
-          </Text>
-          <Text size="sm" ff="monospace">
+      <div className={classes.head}>
+        <div className={classes.text}>
+          <p className={classes.label}>{check.label}</p>
+          <p className={classes.figures}>
             {value.text}{' '}
-            <Text span c="dimmed" ff="monospace">
+            <span className={classes.dimmed}>
               {relation} {limit.text} {check.kind === 'max' ? 'allowed' : 'required'}
-            </Text>
-          </Text>
-        </Stack>
-        <Group gap={6} wrap="nowrap" style={{ flexShrink: 0 }}>
+            </span>
+          </p>
+        </div>
+        <div className={classes.aside}>
           {findDrivers && !check.pass ? (
-            <CheckDriversButton label={check.label} find={() => findDrivers(check.id)} />
+            <CheckDriversButton label={check.label} checkId={check.id} find={findDrivers} />
           ) : null}
-          {renderAside?.(check.id)}
+          {renderAside ? <Aside id={check.id} render={renderAside} /> : null}
           <Verdict pass={check.pass} />
-        </Group>
-      </Group>
+        </div>
+      </div>
       <UtilisationBar utilisation={check.utilisation} pass={check.pass} />
-      <Text size="xs" c="dimmed" mt={4}>
+      <p className={classes.source}>
         {check.message ? `${check.message} · ` : ''}Limit: {check.source}
-      </Text>
-    </Paper>
+      </p>
+    </li>
   );
 }, sameRow);
 

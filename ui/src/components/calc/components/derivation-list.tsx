@@ -2,6 +2,7 @@ import { useState, type ReactNode } from 'react';
 import { Box, Code, Collapse, Group, Stack, Text, Title, UnstyledButton } from '@mantine/core';
 import { IconChevronRight } from '@tabler/icons-react';
 import type { DerivationStep, Dimension, SectionDefinition } from '@holdfast/calc';
+import { Aside } from './aside';
 import { sectionOrder } from './results-table';
 import { presentSI, type UnitSystem } from '../utils/units';
 
@@ -39,7 +40,9 @@ export function DerivationList({
                   key={step.id}
                   step={step}
                   unitSystem={unitSystem}
-                  aside={renderStepAside?.(step.id)}
+                  aside={
+                    renderStepAside ? <Aside id={step.id} render={renderStepAside} /> : undefined
+                  }
                 />
               ))}
             </Stack>

@@ -1,5 +1,5 @@
 import { memo, useCallback, type ReactNode } from 'react';
-import { Checkbox, Group, NativeSelect, Text } from '@mantine/core';
+import { Checkbox, Group, NativeSelect, Radio, Stack, Text } from '@mantine/core';
 import type { FieldDefinition, InputValue } from '@holdfast/calc';
 import { NumberField, UnitField } from './unit-field';
 import { SymbolText } from './symbol-text';
@@ -14,6 +14,9 @@ export interface FieldInputProps {
   error?: string;
   readOnly?: boolean;
 }
+
+/** Up to this many choices are shown as radio buttons, more as a select box. */
+const RADIO_CHOICES = 3;
 
 export function fieldDomId(key: string): string {
   return `field-${key}`;
@@ -67,6 +70,36 @@ export const FieldInput = memo(function FieldInput({
         readOnly={readOnly}
         placeholder={readOnly ? undefined : examplePlaceholder(field)}
       />
+    );
+  }
+  if (field.kind === 'choice' && (field.choices?.length ?? 0) <= RADIO_CHOICES) {
+    // A few choices written out in words: all in view, each label wrapping as it needs (a select
+    // box cuts its chosen text to the box's width).
+    const chosen = typeof value === 'string' ? value : String(value ?? '');
+    const focusable = field.choices!.some((c) => c.value === chosen)
+      ? chosen
+      : field.choices![0]!.value;
+    return (
+      <Radio.Group
+        label={label}
+        description={field.help}
+        error={error}
+        value={chosen}
+        onChange={set}
+        data-choice={field.key}
+      >
+        <Stack gap={6} mt={6}>
+          {field.choices!.map((c) => (
+            <Radio
+              key={c.value}
+              id={c.value === focusable ? id : undefined}
+              value={c.value}
+              label={c.label}
+              disabled={readOnly}
+            />
+          ))}
+        </Stack>
+      </Radio.Group>
     );
   }
   if (field.kind === 'choice') {

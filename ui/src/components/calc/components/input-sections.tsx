@@ -1,5 +1,6 @@
 import { memo, type ReactNode } from 'react';
 import { Badge, Box, Button, Group, Paper, SimpleGrid, Stack, Title } from '@mantine/core';
+import { Aside } from './aside';
 import type {
   FieldDefinition,
   InputValue,
@@ -122,14 +123,25 @@ interface FieldRowProps {
   onConfirm?: (keys: string[]) => void;
 }
 
+/** Longest choice label (characters) that still reads whole in one column of the two-column grid. */
+const NARROW_CHOICE = 26;
+
+/** A choice field whose options are written out in words takes the whole row, so none is cut off. */
+function wideChoice(field: FieldDefinition): boolean {
+  return (field.choices ?? []).some((c) => c.label.length > NARROW_CHOICE);
+}
+
 const FieldRow = memo(function FieldRow(props: FieldRowProps) {
   const { field, renderAside, unconfirmed } = props;
+  const wide = wideChoice(field);
   return (
     <Box
       pos="relative"
       data-field={field.key}
       data-unconfirmed={unconfirmed || undefined}
-      pr={renderAside ? 28 : undefined}
+      // The marker sits on the label line; a select box below it may use the full width.
+      pr={renderAside && !wide ? 28 : undefined}
+      style={wide ? { gridColumn: '1 / -1' } : undefined}
     >
       <FieldInput
         field={field}
@@ -159,7 +171,7 @@ const FieldRow = memo(function FieldRow(props: FieldRowProps) {
       ) : null}
       {renderAside ? (
         <Box pos="absolute" top={0} right={0}>
-          {renderAside(field.key)}
+          <Aside id={field.key} render={renderAside} />
         </Box>
       ) : null}
     </Box>

@@ -14,8 +14,7 @@ import {
   Title,
 } from '@mantine/core';
 import { IconAlertTriangle, IconBolt } from '@tabler/icons-react';
-import type { SectionDefinition, SheetEvaluation } from '@holdfast/calc';
-import type { CheckDriver } from '../utils/check-drivers';
+import type { CheckDriver, SectionDefinition, SheetEvaluation } from '@holdfast/calc';
 import { CheckDriversButton } from './check-drivers-button';
 import { CheckList } from './check-list';
 import { DerivationList } from './derivation-list';
@@ -110,21 +109,13 @@ export const ResultsPanel = memo(function ResultsPanel(props: ResultsPanelProps)
           data-testid="failing-summary"
         >
           {failingChecks.map((c) => (
-            <Group
+            <FailingRow
               key={c.id}
-              component="li"
-              gap={6}
-              wrap="nowrap"
-              justify="space-between"
-              data-failing={c.id}
-            >
-              <Text size="sm" c="fail.8" fw={600} truncate="end" style={{ flex: 1, minWidth: 0 }}>
-                ✕ {c.label} ({Math.round(c.utilisation * 100)} % of limit)
-              </Text>
-              {props.findDrivers ? (
-                <CheckDriversButton label={c.label} find={() => props.findDrivers!(c.id)} />
-              ) : null}
-            </Group>
+              id={c.id}
+              label={c.label}
+              percent={Math.round(c.utilisation * 100)}
+              findDrivers={props.findDrivers}
+            />
           ))}
         </Box>
       ) : null}
@@ -160,23 +151,7 @@ export const ResultsPanel = memo(function ResultsPanel(props: ResultsPanelProps)
         </Stack>
       ) : (
         <Box style={{ opacity: evaluation ? 1 : 0.55 }}>
-          {shown.warnings.length > 0 ? (
-            <Alert
-              color="amber"
-              variant="outline"
-              mb="sm"
-              p="xs"
-              title={`Notes from the calculation (${shown.warnings.length})`}
-            >
-              <Spoiler maxHeight={44} showLabel="Show all" hideLabel="Show less" fz="sm">
-                <List size="xs" spacing={2}>
-                  {shown.warnings.map((w) => (
-                    <List.Item key={w}>{w}</List.Item>
-                  ))}
-                </List>
-              </Spoiler>
-            </Alert>
-          ) : null}
+          <CalculationNotes warnings={shown.warnings} />
           <Tabs defaultValue="checks" keepMounted={false}>
             <Tabs.List mb="sm" style={{ flexWrap: 'wrap' }}>
               <Tabs.Tab value="checks" px="xs">
@@ -228,3 +203,48 @@ export const ResultsPanel = memo(function ResultsPanel(props: ResultsPanelProps)
     </Paper>
   );
 });
+
+/** One failing check in the summary; renders again only when its rounded share of the limit moves. */
+const FailingRow = memo(function FailingRow(props: {
+  id: string;
+  label: string;
+  percent: number;
+  findDrivers?: (checkId: string) => CheckDriver[];
+}) {
+  return (
+    <Group component="li" gap={6} wrap="nowrap" justify="space-between" data-failing={props.id}>
+      <Text size="sm" c="fail.8" fw={600} truncate="end" style={{ flex: 1, minWidth: 0 }}>
+        ✕ {props.label} ({props.percent} % of limit)
+      </Text>
+      {props.findDrivers ? (
+        <CheckDriversButton label={props.label} checkId={props.id} find={props.findDrivers} />
+      ) : null}
+    </Group>
+  );
+});
+
+/** The core's notes on the inputs; a new evaluation with the same notes does not render them again. */
+const CalculationNotes = memo(
+  function CalculationNotes({ warnings }: { warnings: readonly string[] }) {
+    if (warnings.length === 0) return null;
+    return (
+      <Alert
+        color="amber"
+        variant="outline"
+        mb="sm"
+        p="xs"
+        title={`Notes from the calculation (${warnings.length})`}
+      >
+        <Spoiler maxHeight={44} showLabel="Show all" hideLabel="Show less" fz="sm">
+          <List size="xs" spacing={2}>
+            {warnings.map((w) => (
+              <List.Item key={w}>{w}</List.Item>
+            ))}
+          </List>
+        </Spoiler>
+      </Alert>
+    );
+  },
+  (a, b) =>
+    a.warnings.length === b.warnings.length && a.warnings.every((w, k) => w === b.warnings[k]),
+);

@@ -73,6 +73,9 @@ export const UnitField = memo(function UnitField(props: UnitFieldProps) {
   const choices = unitChoices(dimension);
   const knownUnit = choices.some((c) => c.value === unit);
   const data = knownUnit ? choices : [{ value: unit, label: unit }, ...choices];
+  // Room for the longest unit this field offers, so a chosen unit is never cut off.
+  const longestUnit = data.reduce((n, c) => Math.max(n, c.label.length), 0);
+  const pickerWidth = `max(96px, calc(${longestUnit}ch + 30px))`;
 
   function handleText(next: string) {
     setText(next);
@@ -133,7 +136,7 @@ export const UnitField = memo(function UnitField(props: UnitFieldProps) {
       spellCheck={false}
       onChange={(e) => handleText(e.currentTarget.value)}
       rightSection={picker}
-      rightSectionWidth={96}
+      rightSectionWidth={pickerWidth}
       rightSectionPointerEvents="all"
       styles={{ input: { fontVariantNumeric: 'tabular-nums' } }}
       placeholder={props.placeholder}

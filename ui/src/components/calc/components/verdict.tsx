@@ -1,8 +1,15 @@
+import { memo } from 'react';
 import { Badge } from '@mantine/core';
 import { IconCircleCheck, IconCircleX } from '@tabler/icons-react';
 
 /** PASS or FAIL in words with an icon; the colour only repeats what the word says. */
-export function Verdict({ pass, size = 'md' }: { pass: boolean; size?: 'sm' | 'md' | 'lg' }) {
+export const Verdict = memo(function Verdict({
+  pass,
+  size = 'md',
+}: {
+  pass: boolean;
+  size?: 'sm' | 'md' | 'lg';
+}) {
   const Icon = pass ? IconCircleCheck : IconCircleX;
   return (
     <Badge
@@ -15,4 +22,4 @@ export function Verdict({ pass, size = 'md' }: { pass: boolean; size?: 'sm' | 'm
       {pass ? 'Pass' : 'Fail'}
     </Badge>
   );
-}
+});

@@ -1,14 +1,6 @@
-import {
-  Alert,
-  Button,
-  Group,
-  Modal,
-  PasswordInput,
-  Select,
-  Stack,
-  TextInput,
-} from '@mantine/core';
+import { Alert, Group, Modal, PasswordInput, Select, Stack, TextInput } from '@mantine/core';
 import { schemaResolver, useForm } from '@mantine/form';
+import { DialogActions } from '../../../components/dialog-actions';
 import { notifications } from '@mantine/notifications';
 import { createUserSchema, type CreateUserInput } from '@holdfast/shared';
 import { ApiRequestError, errorMessage } from '../../../lib/api-error';
@@ -123,14 +115,12 @@ export function CreateUserDialog({ opened, onClose }: { opened: boolean; onClose
             autoComplete="new-password"
             {...form.getInputProps('password')}
           />
-          <Group justify="flex-end" mt="sm">
-            <Button variant="default" onClick={close}>
-              Cancel
-            </Button>
-            <Button type="submit" loading={create.isPending}>
-              Create user
-            </Button>
-          </Group>
+          <DialogActions
+            onCancel={close}
+            confirmLabel="Create user"
+            pending={create.isPending}
+            mt="sm"
+          />
         </Stack>
       </form>
     </Modal>

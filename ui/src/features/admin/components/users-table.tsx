@@ -7,6 +7,7 @@ import { useUpdateUser, type UpdateUserVariables } from '../api/update-user';
 import { ResetPasswordButton } from './reset-password-button';
 import { roleOptions } from './role-options';
 import classes from './users-table.module.css';
+import { fitWidth } from '../../../lib/fit-width';
 
 function StatusBadge({ active }: { active: boolean }) {
   return active ? (
@@ -84,6 +85,10 @@ export function UsersTable({ users, currentUserId }: { users: User[]; currentUse
                       size="xs"
                       aria-label={`Role of ${user.displayName}`}
                       data={roleOptions}
+                      w={fitWidth(
+                        roleOptions.map((o) => o.label),
+                        120,
+                      )}
                       value={user.role}
                       allowDeselect={false}
                       disabled={self || busy(user)}

@@ -1,5 +1,6 @@
 import { useEffect, useState } from 'react';
-import { Alert, Button, Group, Modal, Stack, Text, TextInput } from '@mantine/core';
+import { Modal, Stack, Text, TextInput } from '@mantine/core';
+import { DialogActions } from '../../../components/dialog-actions';
 import type { CriterionValueInput } from '@holdfast/shared';
 import { errorMessage, isApiRequestError } from '../../../lib/api-client';
 import { useConfirmCriterion } from '../api/confirm-criterion';
@@ -51,19 +52,17 @@ export function ConfirmValueDialog({ setId, version, value, onClose }: ConfirmVa
             onChange={(e) => setClause(e.currentTarget.value)}
             error={fields.clause}
           />
-          {confirm.isError && !fields.document && !fields.clause ? (
-            <Alert color="fail" role="alert">
-              {errorMessage(confirm.error)}
-            </Alert>
-          ) : null}
-          <Group justify="flex-end">
-            <Button variant="default" onClick={onClose}>
-              Cancel
-            </Button>
-            <Button onClick={submit} loading={confirm.isPending}>
-              Record confirmation
-            </Button>
-          </Group>
+          <DialogActions
+            error={
+              confirm.isError && !fields.document && !fields.clause
+                ? errorMessage(confirm.error)
+                : null
+            }
+            onCancel={onClose}
+            confirmLabel="Record confirmation"
+            onConfirm={submit}
+            pending={confirm.isPending}
+          />
         </Stack>
       ) : null}
     </Modal>

@@ -1,5 +1,6 @@
 import { useEffect, useState } from 'react';
-import { Alert, Button, Group, Modal, Stack, Text, TextInput, Textarea } from '@mantine/core';
+import { Group, Modal, Stack, Text, TextInput, Textarea } from '@mantine/core';
+import { DialogActions } from '../../../components/dialog-actions';
 import type { CriterionValueInput } from '@holdfast/shared';
 import { errorMessage, isApiRequestError } from '../../../lib/api-client';
 import { useCreateCriteriaSet } from '../api/create-criteria-set';
@@ -105,19 +106,15 @@ export function CreateCriteriaSetDialog(props: CreateCriteriaSetDialogProps) {
           onChange={(e) => setNote(e.currentTarget.value)}
           error={fields.note}
         />
-        {create.isError && Object.keys(fields).length === 0 ? (
-          <Alert color="fail" role="alert">
-            {errorMessage(create.error)}
-          </Alert>
-        ) : null}
-        <Group justify="flex-end">
-          <Button variant="default" onClick={onClose}>
-            Cancel
-          </Button>
-          <Button onClick={submit} loading={create.isPending}>
-            Create the set
-          </Button>
-        </Group>
+        <DialogActions
+          error={
+            create.isError && Object.keys(fields).length === 0 ? errorMessage(create.error) : null
+          }
+          onCancel={onClose}
+          confirmLabel="Create the set"
+          onConfirm={submit}
+          pending={create.isPending}
+        />
       </Stack>
     </Modal>
   );

@@ -2,6 +2,7 @@ import { Badge, Button, Select, Stack, Table, Text, TextInput } from '@mantine/c
 import type { CriterionConfirmation, CriterionValueInput } from '@holdfast/shared';
 import { criterionSpec } from '@holdfast/calc';
 import { presentSI } from '../../../components/calc/utils/units';
+import { fitWidth } from '../../../lib/fit-width';
 
 /**
  * A stored criterion (SI) in the trade's units, e.g. 2 100 000 Pa·m/s → 2.100 MPa·m/s. Editing
@@ -132,6 +133,10 @@ export function CriteriaValuesTable({
                     size="xs"
                     aria-label={`${v.label} standing`}
                     data={STANDINGS}
+                    w={fitWidth(
+                      STANDINGS.map((o) => o.label),
+                      120,
+                    )}
                     value={v.confidence}
                     allowDeselect={false}
                     onChange={(c) =>

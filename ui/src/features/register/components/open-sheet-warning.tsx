@@ -2,6 +2,7 @@ import { Alert, Anchor, List } from '@mantine/core';
 import { IconAlertTriangle } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
 import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
+import { stateLabel } from '../../../lib/state-label';
 import { useRegister } from '../api/get-register';
 
 /**
@@ -43,7 +44,7 @@ export function OpenSheetWarning({
             <Anchor component={Link} to={`/sheets/${o.sheetId}`} size="sm">
               {o.documentNumber} rev. {o.revisionLabel}
             </Anchor>{' '}
-            — {sheetTypeTitle(o.sheetType)}, {o.state.replace('_', ' ')}
+            — {sheetTypeTitle(o.sheetType)}, {stateLabel(o.state).toLowerCase()}
           </List.Item>
         ))}
       </List>

@@ -2,14 +2,13 @@ import { Anchor, Button, Stack, Table, Text } from '@mantine/core';
 import { Link } from 'react-router-dom';
 import type { Position } from '@holdfast/shared';
 import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
+import { stateLabel } from '../../../lib/state-label';
 
 export interface PositionRowProps {
   position: Position;
   /** Shown to those who may edit the register. */
   onEdit?: () => void;
 }
-
-const state = (s: string) => s.replace('_', ' ');
 
 /** One brake position: what it is in the plant's words, its sheet in force per sheet type. */
 export function PositionRow({ position: p, onEdit }: PositionRowProps) {
@@ -54,7 +53,7 @@ export function PositionRow({ position: p, onEdit }: PositionRowProps) {
         )}
         {p.openSheets.map((o) => (
           <Text key={o.sheetId} size="xs" c="dimmed">
-            Open: {o.documentNumber} rev. {o.revisionLabel} ({state(o.state)})
+            Open: {o.documentNumber} rev. {o.revisionLabel} ({stateLabel(o.state).toLowerCase()})
           </Text>
         ))}
       </Table.Td>

@@ -1,5 +1,6 @@
 import { useEffect, useState } from 'react';
-import { Alert, Button, Group, Modal, Select, Stack, TextInput } from '@mantine/core';
+import { Modal, Select, Stack, TextInput } from '@mantine/core';
+import { DialogActions } from '../../../components/dialog-actions';
 import { errorMessage, isApiRequestError } from '../../../lib/api-client';
 import { useSaveRegisterItem, type RegisterKind } from '../api/save-register-item';
 
@@ -113,19 +114,12 @@ export function RegisterFormDialog(props: RegisterFormDialogProps) {
               />
             ),
           )}
-          {formError ? (
-            <Alert color="fail" variant="light" role="alert">
-              {formError}
-            </Alert>
-          ) : null}
-          <Group justify="flex-end">
-            <Button variant="default" onClick={onClose}>
-              Cancel
-            </Button>
-            <Button type="submit" loading={save.isPending}>
-              {confirmLabel}
-            </Button>
-          </Group>
+          <DialogActions
+            error={formError}
+            onCancel={onClose}
+            confirmLabel={confirmLabel}
+            pending={save.isPending}
+          />
         </Stack>
       </form>
     </Modal>

@@ -3,7 +3,10 @@ import { act, fireEvent, screen, waitFor, within } from '@testing-library/react'
 import { renderWithProviders } from '../../../testing/render';
 import { jsonError, mockFetch } from '../../../testing/mock-fetch';
 import { testUsers } from '../../../testing/fixtures';
-import { fixtureCriteria, leverBrakeFixture } from '../../../components/calc/testing/lever-brake-fixture';
+import {
+  fixtureCriteria,
+  leverBrakeFixture,
+} from '../../../components/calc/testing/lever-brake-fixture';
 import { makeRevision } from '../testing-revision';
 import { RevisionWorkbench } from './revision-workbench';
 

@@ -1,13 +1,17 @@
 import { useCallback, useMemo, useRef, useState, type ReactNode } from 'react';
 import { Alert, Box, Stack } from '@mantine/core';
 import { IconLock } from '@tabler/icons-react';
-import type { CriteriaSet, SheetEvaluation, SheetTypeDefinition } from '@holdfast/calc';
+import {
+  checkDrivers,
+  type CriteriaSet,
+  type SheetEvaluation,
+  type SheetTypeDefinition,
+} from '@holdfast/calc';
 import type { Revision } from '@holdfast/shared';
 import { InputSections } from '../../../components/calc/components/input-sections';
 import { ResultsPanel } from '../../../components/calc/components/results-panel';
 import { useLiveEvaluation } from '../../../components/calc/hooks/use-live-evaluation';
 import { useNumberFormat } from '../../../components/calc/hooks/use-number-format';
-import { checkDrivers } from '../../../components/calc/utils/check-drivers';
 import { checkField, fieldMessages } from '../../../components/calc/utils/field-check';
 import type { UnitSystem } from '../../../components/calc/utils/units';
 import { useRevisionDraft } from '../hooks/use-revision-draft';

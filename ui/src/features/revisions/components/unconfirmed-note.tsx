@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { Alert, Button, Group, Text } from '@mantine/core';
 import { IconFlask } from '@tabler/icons-react';
 
@@ -5,7 +6,7 @@ import { IconFlask } from '@tabler/icons-react';
  * Values that came from the example duty or a copied sheet and were never changed or confirmed.
  * They are marked beside each field; Send for check refuses until none is left.
  */
-export function UnconfirmedNote({
+export const UnconfirmedNote = memo(function UnconfirmedNote({
   fields,
   onConfirmAll,
 }: {
@@ -37,4 +38,4 @@ export function UnconfirmedNote({
       </Group>
     </Alert>
   );
-}
+});

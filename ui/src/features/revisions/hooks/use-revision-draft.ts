@@ -2,7 +2,12 @@ import { useCallback, useEffect, useRef, useState } from 'react';
 import type { InputValue, SheetInputs, SheetTypeDefinition } from '@holdfast/calc';
 import type { Revision } from '@holdfast/shared';
 import { withMissingFields } from '../../../components/calc/utils/sheet-types';
-import { convertQuantity, defaultUnit, isQuantity, type UnitSystem } from '../../../components/calc/utils/units';
+import {
+  convertQuantity,
+  defaultUnit,
+  isQuantity,
+  type UnitSystem,
+} from '../../../components/calc/utils/units';
 import {
   changedKeys,
   clearLocalDraft,

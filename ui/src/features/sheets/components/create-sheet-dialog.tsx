@@ -1,5 +1,6 @@
 import { useEffect, useState } from 'react';
-import { Button, Group, Modal, Select, Stack, TextInput } from '@mantine/core';
+import { Modal, Select, Stack, TextInput } from '@mantine/core';
+import { DialogActions } from '../../../components/dialog-actions';
 import { createSheetSchema, sheetTypeIds, toFieldIssues, type SheetDetail } from '@holdfast/shared';
 import { errorMessage, isApiRequestError } from '../../../lib/api-client';
 import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
@@ -111,14 +112,12 @@ export function CreateSheetDialog({
           onCopyFrom={setCopyFrom}
           error={errors['start.revisionId']}
         />
-        <Group justify="flex-end">
-          <Button variant="default" onClick={onClose}>
-            Cancel
-          </Button>
-          <Button onClick={submit} loading={create.isPending}>
-            Create sheet
-          </Button>
-        </Group>
+        <DialogActions
+          onCancel={onClose}
+          confirmLabel="Create sheet"
+          onConfirm={submit}
+          pending={create.isPending}
+        />
       </Stack>
     </Modal>
   );

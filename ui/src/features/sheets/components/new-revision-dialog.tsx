@@ -1,5 +1,6 @@
 import { useState } from 'react';
-import { Button, Group, Modal, Stack, Text, TextInput } from '@mantine/core';
+import { Modal, Stack, Text, TextInput } from '@mantine/core';
+import { DialogActions } from '../../../components/dialog-actions';
 import { errorMessage, isApiRequestError } from '../../../lib/api-client';
 import { useCreateRevision } from '../api/create-revision';
 
@@ -47,14 +48,13 @@ export function NewRevisionDialog({ sheetId, opened, onClose, onCreated }: NewRe
           }
           data-autofocus
         />
-        <Group justify="flex-end">
-          <Button variant="default" onClick={onClose}>
-            Cancel
-          </Button>
-          <Button onClick={submit} loading={create.isPending} disabled={!note.trim()}>
-            Start revision
-          </Button>
-        </Group>
+        <DialogActions
+          onCancel={onClose}
+          confirmLabel="Start revision"
+          onConfirm={submit}
+          pending={create.isPending}
+          confirmDisabled={!note.trim()}
+        />
       </Stack>
     </Modal>
   );

@@ -7,16 +7,15 @@ import {
   IconPencil,
 } from '@tabler/icons-react';
 import type { RevisionState } from '@holdfast/shared';
+import { stateLabel } from '../../../lib/state-label';
 
-const STATES: Record<RevisionState, { label: string; color: string; icon: typeof IconPencil }> = {
-  draft: { label: 'Draft', color: 'gray', icon: IconPencil },
-  in_check: { label: 'In check', color: 'amber', icon: IconEye },
-  returned: { label: 'Returned', color: 'fail', icon: IconArrowBackUp },
-  approved: { label: 'Approved', color: 'pass', icon: IconCircleCheck },
-  superseded: { label: 'Superseded', color: 'steel', icon: IconArchive },
+const STATES: Record<RevisionState, { color: string; icon: typeof IconPencil }> = {
+  draft: { color: 'gray', icon: IconPencil },
+  in_check: { color: 'amber', icon: IconEye },
+  returned: { color: 'fail', icon: IconArrowBackUp },
+  approved: { color: 'pass', icon: IconCircleCheck },
+  superseded: { color: 'steel', icon: IconArchive },
 };
-
-export const stateLabel = (state: RevisionState) => STATES[state].label;
 
 /** A revision state in words with an icon; colour only repeats the word. */
 export function StateBadge({
@@ -34,7 +33,7 @@ export function StateBadge({
       leftSection={<s.icon size={12} aria-hidden />}
       data-state={state}
     >
-      {s.label}
+      {stateLabel(state)}
     </Badge>
   );
 }

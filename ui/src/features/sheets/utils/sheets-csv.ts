@@ -1,5 +1,6 @@
 import type { SheetSummary } from '@holdfast/shared';
 import { toCsv } from '../../../lib/csv';
+import { stateLabel } from '../../../lib/state-label';
 
 /** The sheet list as CSV: one row per sheet, what a register of calculations needs. */
 export function sheetsCsv(items: SheetSummary[], typeTitle: (id: string) => string): string {
@@ -26,7 +27,7 @@ export function sheetsCsv(items: SheetSummary[], typeTitle: (id: string) => stri
       s.position.tag,
       typeTitle(s.sheetType),
       s.latest.label,
-      s.latest.state.replace('_', ' '),
+      stateLabel(s.latest.state),
       s.approved ? s.approved.label : '',
       s.approved ? s.approved.approvedAt.slice(0, 10) : '',
       s.owner.displayName,

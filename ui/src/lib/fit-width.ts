@@ -1,0 +1,9 @@
+/**
+ * A width for a select box that shows its longest choice whole: the label's characters in `ch`
+ * (a digit's width, wider than most letters of the UI font, so it errs on the roomy side) plus the
+ * box's padding and its chevron or clear button. Never below `min` px, never wider than its row.
+ */
+export function fitWidth(labels: readonly string[], min = 0): string {
+  const longest = labels.reduce((n, l) => Math.max(n, l.length), 0);
+  return `min(100%, max(${min}px, calc(${longest}ch + 3.5rem)))`;
+}
