@@ -1,4 +1,5 @@
 export type * from './core/types.js';
+export type * from './field/tolerance-types.js';
 export {
   CalcInputError,
   isCalcInputError,
@@ -93,3 +94,10 @@ export { makeCheck, type CheckSpec } from './sheets/checks.js';
 export { SAFETY_CAUTIONS } from './sheets/sheet-output.js';
 export * from './field/wear-trend.js';
 export { studentTQuantile, studentTCdf } from './field/student-t.js';
+export {
+  evaluateTolerance,
+  toleranceBounds,
+  settingsWithTolerance,
+  type ToleratedSetting,
+} from './field/evaluate-tolerance.js';
+export * as fieldTolerances from './field/tolerances.js';

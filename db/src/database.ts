@@ -20,7 +20,7 @@ export type CreatedAt = ColumnType<Date, Date | string | undefined, never>;
 export type UpdatedAt = ColumnType<Date, Date | string | undefined, Date | string>;
 export type Timestamp = ColumnType<Date, Date | string, Date | string>;
 
-export type RoleValue = 'engineer' | 'checker' | 'viewer' | 'admin';
+export type RoleValue = 'engineer' | 'checker' | 'viewer' | 'admin' | 'technician';
 export type UnitSystemValue = 'SI' | 'US';
 export type NumberFormatValue = 'point' | 'comma';
 

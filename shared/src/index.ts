@@ -17,3 +17,8 @@ export * from './verify/verify.schema.js';
 export * from './revisions/canonical-json.js';
 export * from './reviews/criteria-review.schema.js';
 export * from './mail/failed-mail.schema.js';
+export * from './field-records/tolerance.schema.js';
+export * from './field-records/field-record.schema.js';
+export * from './field-records/schedule.schema.js';
+export * from './field-records/verify-record.schema.js';
+export * from './field-records/routes.js';

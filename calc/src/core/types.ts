@@ -3,6 +3,7 @@
  * the PDF) is one of these. Values inside calc are SI; `unit` strings are mathjs unit text.
  */
 import type { DIMENSION_IDS } from '../ids.js';
+import type { FieldTolerance } from '../field/tolerance-types.js';
 
 /** A physical quantity as a user typed it or as the core reports it, e.g. { value: 12, unit: 'kN' }. */
 export interface Quantity {
@@ -209,6 +210,8 @@ export interface FieldCardPlacement {
   stack?: string;
   /** For a disc-spring stack: the back-off angle and the preload get their own places. */
   role?: 'backOff' | 'preload';
+  /** The band the measured value must lie in, with its source; absent for a derived value. */
+  tolerance?: FieldTolerance;
 }
 
 /** The field setting card of a sheet type, declared with the sheet (never guessed from labels). */

@@ -1,18 +1,26 @@
 import type { FieldCardLayout, FieldCardPlacement } from '../core/types.js';
+import type { FieldTolerance } from '../field/tolerance-types.js';
+import * as T from '../field/tolerances.js';
 
 const spring: FieldCardPlacement = { group: 'spring' };
 const thruster: FieldCardPlacement = { group: 'thruster' };
 const clearance: FieldCardPlacement = { group: 'clearance' };
+/** A placement with the tolerance the measured value must meet. */
+const tol = (p: FieldCardPlacement, tolerance: FieldTolerance): FieldCardPlacement => ({
+  ...p,
+  tolerance,
+});
 
 /** A disc-spring stack's settings: back-off angle, preload, and the rest beside them. */
 function stack(
   name: string,
-  keys: { backOff: string; preload: string; others: readonly string[] },
+  keys: { backOff: string; preload: string; setLength: string; others: readonly string[] },
 ): Record<string, FieldCardPlacement> {
   const s = { group: 'discStack', stack: name } as const;
   return {
-    [keys.backOff]: { ...s, role: 'backOff' },
-    [keys.preload]: { ...s, role: 'preload' },
+    [keys.backOff]: { ...s, role: 'backOff', tolerance: T.BACK_OFF_ANGLE },
+    [keys.preload]: { ...s, role: 'preload', tolerance: T.STACK_PRELOAD },
+    [keys.setLength]: { ...s, tolerance: T.STACK_SET_LENGTH },
     ...Object.fromEntries(keys.others.map((k) => [k, s])),
   };
 }
@@ -23,29 +31,35 @@ export const SHOE_STACK_TITLES = { holder: 'Shoe holder', equaliser: 'Equaliser'
 /** Field card of both shoe-brake sheets (hoist and travel). */
 export const SHOE_FIELD_CARD: FieldCardLayout = {
   settings: {
-    springLength: spring,
-    springForce: spring,
-    shoeClearance: clearance,
-    workingStroke: thruster,
-    reserveStroke: thruster,
+    springLength: tol(spring, T.SPRING_LENGTH),
+    springForce: tol(spring, T.SPRING_FORCE),
+    shoeClearance: tol(clearance, T.SHOE_CLEARANCE),
+    workingStroke: tol(thruster, T.WORKING_STROKE),
+    reserveStroke: tol(thruster, T.RESERVE_STROKE),
     minReserveStroke: thruster,
     wearToReadjust: thruster,
     ...stack(SHOE_STACK_TITLES.holder, {
       backOff: 'holderBackOff',
       preload: 'holderPreload',
-      others: ['holderSetLength'],
+      setLength: 'holderSetLength',
+      others: [],
     }),
     ...stack(SHOE_STACK_TITLES.equaliser, {
       backOff: 'equaliserBackOff',
       preload: 'equaliserPreload',
-      others: ['equaliserSetLength'],
+      setLength: 'equaliserSetLength',
+      others: [],
     }),
   },
   springTables: ['spring-setting'],
 };
 
 export const CALIPER_FIELD_CARD: FieldCardLayout = {
-  settings: { clampForce: spring, airGap: clearance, wear: thruster },
+  settings: {
+    clampForce: tol(spring, T.SPRING_FORCE),
+    airGap: tol(clearance, T.AIR_GAP),
+    wear: thruster,
+  },
   springTables: ['clamp-setting'],
 };
 
@@ -53,7 +67,8 @@ const discStack = (k: 'a' | 'b', name: string) =>
   stack(name, {
     backOff: `${k}.backOffAngle`,
     preload: `${k}.preload`,
-    others: [`${k}.setLength`, `${k}.angleForRequired`],
+    setLength: `${k}.setLength`,
+    others: [`${k}.angleForRequired`],
   });
 
 /** Stack names as the disc-spring-stack sheet titles them. */

@@ -1,7 +1,11 @@
 import { z } from 'zod';
 import { singleLineText } from '../text/plain-text.js';
 
-export const roles = ['engineer', 'checker', 'viewer', 'admin'] as const;
+/**
+ * `technician` (fitter): sees approved revisions, their field cards and the register, records
+ * field work and signs it; never sees drafts. Countersigning is for engineers and checkers.
+ */
+export const roles = ['engineer', 'checker', 'viewer', 'admin', 'technician'] as const;
 export const roleSchema = z.enum(roles);
 export type Role = z.infer<typeof roleSchema>;
 

@@ -6,6 +6,7 @@ const roleColour: Record<Role, string> = {
   checker: 'teal',
   viewer: 'gray',
   admin: 'amber',
+  technician: 'grape',
 };
 
 export const roleLabel: Record<Role, string> = {
@@ -13,6 +14,7 @@ export const roleLabel: Record<Role, string> = {
   checker: 'Checker',
   viewer: 'Viewer',
   admin: 'Admin',
+  technician: 'Technician',
 };
 
 export function RoleBadge({ role, ...rest }: { role: Role } & Omit<BadgeProps, 'color'>) {

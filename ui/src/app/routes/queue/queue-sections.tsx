@@ -51,6 +51,7 @@ export function queueSections(role: Role): QueueSectionSpec[] {
     case 'engineer':
       return [returned, drafts, approvedMine];
     case 'viewer':
+    case 'technician':
       return [approvedToFile];
     case 'admin':
       return [];
@@ -62,6 +63,7 @@ export const roleLine: Record<Role, string> = {
   engineer: 'Your sheets that need you.',
   viewer: 'Approved sheets to read, print and file.',
   admin: 'People and acceptance criteria are yours to keep.',
+  technician: 'Approved sheets and their field cards for the brakes you set.',
 };
 
 /** The administrator's work is not in sheets: point at the screens where it is done. */
