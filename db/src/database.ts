@@ -2,6 +2,7 @@ import type { ColumnType, Generated, Insertable, Selectable, Updateable } from '
 import type { AccountTables } from './account-tables.js';
 import type { SheetTables } from './sheet-tables.js';
 import type { ReviewTables } from './review-tables.js';
+import type { FieldRecordTables } from './field-record-tables.js';
 
 /**
  * The typed database interface, written by hand to match `db/migrations`.
@@ -60,7 +61,8 @@ export interface FoundationTables {
   refreshTokens: RefreshTokensTable;
 }
 
-export interface DB extends FoundationTables, SheetTables, ReviewTables, AccountTables {}
+export interface DB
+  extends FoundationTables, SheetTables, ReviewTables, AccountTables, FieldRecordTables {}
 
 export type UserRow = Selectable<UsersTable>;
 export type NewUserRow = Insertable<UsersTable>;

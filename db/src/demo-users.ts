@@ -10,7 +10,10 @@ export interface DemoUser {
   role: RoleValue;
 }
 
-/** Invented people; a second engineer and checker let segregation of duties be shown. */
+/**
+ * Invented people; a second engineer and checker let segregation of duties be shown; the
+ * technician is the fitter who brings field records back.
+ */
 export const demoUsers: readonly DemoUser[] = [
   { email: 'engineer@holdfast.test', displayName: 'Erin Vale', initials: 'EV', role: 'engineer' },
   { email: 'engineer2@holdfast.test', displayName: 'Tomas Reed', initials: 'TR', role: 'engineer' },
@@ -18,4 +21,10 @@ export const demoUsers: readonly DemoUser[] = [
   { email: 'checker2@holdfast.test', displayName: 'Idris Okafor', initials: 'IO', role: 'checker' },
   { email: 'viewer@holdfast.test', displayName: 'Pia Novak', initials: 'PN', role: 'viewer' },
   { email: 'admin@holdfast.test', displayName: 'Sam Ortiz', initials: 'SO', role: 'admin' },
+  {
+    email: 'technician@holdfast.test',
+    displayName: 'Noor Halden',
+    initials: 'NH',
+    role: 'technician',
+  },
 ];

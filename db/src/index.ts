@@ -21,6 +21,7 @@ export {
 export type * from './sheet-tables.js';
 export type * from './review-tables.js';
 export type * from './account-tables.js';
+export type * from './field-record-tables.js';
 export { checkPasswordStrength, type PasswordVerdict } from './password-strength.js';
 export { demoRequested } from './demo-flag.js';
 export { createAdmin, type NewAdmin } from './create-admin.js';

@@ -135,6 +135,8 @@ export interface AttachmentsTable {
   sha256: string;
   storageKey: string;
   uploadedBy: string;
+  /** Set for a photo of a field record (the record owns it; revisionId is the record's revision). */
+  fieldRecordId: ColumnType<string | null, string | null | undefined, never>;
   createdAt: CreatedAt;
 }
 

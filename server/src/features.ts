@@ -3,6 +3,7 @@ import { AuthModule } from './auth/auth.module.js';
 import { HealthModule } from './health/health.module.js';
 import { UsersModule } from './users/users.module.js';
 import { PrintModule } from './print/print.module.js';
+import { FieldRecordsModule } from './field-records/field-records.module.js';
 import { SheetFeatureModules } from './sheets/sheet-features.js';
 
 /**
@@ -15,4 +16,5 @@ export const featureModules: Array<Type<unknown> | DynamicModule> = [
   HealthModule,
   ...SheetFeatureModules,
   PrintModule,
+  FieldRecordsModule,
 ];

@@ -3,7 +3,14 @@ import { policyAdmits, type RoutePolicy } from '../src/auth/policy.js';
 import type { RouteInfo } from '../src/common/routes/list-routes.js';
 
 export type Caller = Role | 'anonymous';
-export const callers: readonly Caller[] = ['anonymous', 'engineer', 'checker', 'viewer', 'admin'];
+export const callers: readonly Caller[] = [
+  'anonymous',
+  'engineer',
+  'checker',
+  'viewer',
+  'admin',
+  'technician',
+];
 
 /** A well-formed id that matches no row, for `:param` segments. */
 export const NIL_ID = '00000000-0000-4000-8000-000000000000';

@@ -1,6 +1,7 @@
 import { Controller, Get, Module } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { roles } from '@holdfast/shared';
 import { AppModule } from '../src/app.module.js';
 import { listRoutes, type RouteInfo } from '../src/common/routes/list-routes.js';
 import { callers, guardOutcome, probePath, routeKey } from './route-matrix.js';
@@ -33,8 +34,7 @@ describe('route policies', () => {
     const bad = routes.filter(
       (r) =>
         r.policy?.kind === 'roles' &&
-        (r.policy.roles.length === 0 ||
-          r.policy.roles.some((x) => !['engineer', 'checker', 'viewer', 'admin'].includes(x))),
+        (r.policy.roles.length === 0 || r.policy.roles.some((x) => !roles.includes(x))),
     );
     expect(bad.map(routeKey)).toEqual([]);
   });

@@ -27,6 +27,7 @@ export const demoLogins = [
   'checker2',
   'viewer',
   'admin',
+  'technician',
 ] as const;
 export type DemoLogin = (typeof demoLogins)[number];
 export const demoEmail = (who: DemoLogin) => `${who}@holdfast.test`;
@@ -37,6 +38,7 @@ export const roleLogins: Record<Role, DemoLogin> = {
   checker: 'checker',
   viewer: 'viewer',
   admin: 'admin',
+  technician: 'technician',
 };
 
 /**

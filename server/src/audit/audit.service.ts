@@ -8,7 +8,8 @@ export interface AuditEntry {
   actorId: string | null;
   /** e.g. 'revision.saved', 'revision.submitted', 'sheet.created'. */
   action: string;
-  entity: 'sheet' | 'revision' | 'comment' | 'attachment' | 'criteria-set' | 'register';
+  entity:
+    'sheet' | 'revision' | 'comment' | 'attachment' | 'criteria-set' | 'register' | 'field-record';
   entityId: string;
   sheetId?: string | null;
   before?: unknown;

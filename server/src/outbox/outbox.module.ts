@@ -10,6 +10,6 @@ import { OutboxService } from './outbox.service.js';
 @Module({
   controllers: [FailedMailController],
   providers: [Mailer, JobQueue, OutboxService, FailedMailService],
-  exports: [OutboxService],
+  exports: [OutboxService, JobQueue],
 })
 export class OutboxModule {}

@@ -1,4 +1,4 @@
-import type { FieldSetting } from '@holdfast/calc';
+import { getSheetType, type FieldSetting, type FieldTolerance } from '@holdfast/calc';
 import { Document, Page, Text, View } from '@react-pdf/renderer';
 import { groupFieldSettings, type DiscStackSetup } from './field-card-groups.js';
 import { qty } from './format.js';
@@ -8,6 +8,9 @@ import { Heading, Table } from './parts/table.js';
 import type { PrintableSheet, PrintUnitSystem } from './printable-sheet.js';
 import { Frame } from './sheet-document.js';
 import { colours, s } from './theme.js';
+import { toleranceText } from './field-record/tolerance-text.js';
+
+type Tolerances = (key: string) => FieldTolerance | undefined;
 
 const Box = (props: { h?: number }) => (
   <View
@@ -24,6 +27,7 @@ const Box = (props: { h?: number }) => (
 function SettingsWithBoxes(props: {
   items: FieldSetting[];
   system: PrintUnitSystem;
+  tolerance: Tolerances;
   prefix?: string;
 }) {
   const label = (f: FieldSetting) => {
@@ -39,12 +43,14 @@ function SettingsWithBoxes(props: {
       columns={[
         { title: 'Setting', flex: 3 },
         { title: 'Target', flex: 1.3, align: 'right' },
+        { title: 'Tolerance', flex: 1.3 },
         { title: 'Measured', flex: 1.3 },
         { title: 'Initials', width: 44 },
       ]}
       rows={props.items.map((f) => [
         label(f),
         qty(f.value, f.dimension, props.system),
+        toleranceText(props.tolerance(f.key), f.dimension, props.system),
         <Box key="m" />,
         <Box key="i" />,
       ])}
@@ -52,8 +58,13 @@ function SettingsWithBoxes(props: {
   );
 }
 
-function DiscStack(props: { stack: DiscStackSetup; system: PrintUnitSystem }) {
+function DiscStack(props: {
+  stack: DiscStackSetup;
+  system: PrintUnitSystem;
+  tolerance: Tolerances;
+}) {
   const { stack, system } = props;
+  const backOffTol = stack.backOff ? props.tolerance(stack.backOff.key) : undefined;
   const q = (f: FieldSetting | null) =>
     f ? qty(f.value, f.dimension, system, f.dimension === 'angle' ? 3 : 4) : 'see sheet';
   return (
@@ -66,12 +77,23 @@ function DiscStack(props: { stack: DiscStackSetup; system: PrintUnitSystem }) {
         2. Back off the nut by <Text style={{ fontWeight: 700 }}>{q(stack.backOff)}</Text> and lock
         it.
       </Text>
+      {backOffTol && stack.backOff && (
+        <Text>
+          Tolerance {toleranceText(backOffTol, stack.backOff.dimension, system)}
+          {backOffTol.rule ? `. ${backOffTol.rule}` : ''} ({backOffTol.source})
+        </Text>
+      )}
       <Text>
         3. The stack then carries a preload of about{' '}
         <Text style={{ fontWeight: 700 }}>{q(stack.preload)}</Text>.
       </Text>
       {stack.others.length > 0 && (
-        <SettingsWithBoxes items={stack.others} system={system} prefix={stack.name} />
+        <SettingsWithBoxes
+          items={stack.others}
+          system={system}
+          tolerance={props.tolerance}
+          prefix={stack.name}
+        />
       )}
       <View style={{ flexDirection: 'row', marginTop: 3, alignItems: 'center' }}>
         <Text style={{ width: 150 }}>Back-off applied (measured):</Text>
@@ -101,6 +123,8 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
   const system = sheet.unitSystem;
   const ev = sheet.evaluation;
   const g = ev ? groupFieldSettings(ev) : null;
+  const card = getSheetType(sheet.sheetType.id)?.fieldCard;
+  const tolerance: Tolerances = (key) => card?.settings[key]?.tolerance;
   return (
     <Document
       title={`${sheet.documentNumber} rev ${sheet.revision.label} — field setting card`}
@@ -126,7 +150,7 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
                     ? 'Clamp force setting'
                     : 'Main spring setting'}
                 </Heading>
-                <SettingsWithBoxes items={g.spring} system={system} />
+                <SettingsWithBoxes items={g.spring} system={system} tolerance={tolerance} />
                 {g.springTables.map((t) => (
                   <SettingTable key={t.id} table={t} system={system} />
                 ))}
@@ -139,7 +163,11 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
                     ? 'Thruster stroke, reserve and shoe clearance'
                     : 'Clearance and wear'}
                 </Heading>
-                <SettingsWithBoxes items={[...g.thruster, ...g.clearance]} system={system} />
+                <SettingsWithBoxes
+                  items={[...g.thruster, ...g.clearance]}
+                  system={system}
+                  tolerance={tolerance}
+                />
                 <Text style={{ fontSize: 7.5 }}>
                   Lining wear uses up the reserve: re-adjust before it falls below the minimum
                   given, or the brake loses torque.
@@ -151,17 +179,17 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
                 {/* The heading travels with the first stack: never alone at a page foot. */}
                 <View wrap={false}>
                   <Heading>Disc-spring stacks</Heading>
-                  <DiscStack stack={g.discStacks[0]} system={system} />
+                  <DiscStack stack={g.discStacks[0]} system={system} tolerance={tolerance} />
                 </View>
                 {g.discStacks.slice(1).map((st) => (
-                  <DiscStack key={st.name} stack={st} system={system} />
+                  <DiscStack key={st.name} stack={st} system={system} tolerance={tolerance} />
                 ))}
               </View>
             )}
             {g.other.length > 0 && (
               <View>
                 <Heading>Other settings</Heading>
-                <SettingsWithBoxes items={g.other} system={system} />
+                <SettingsWithBoxes items={g.other} system={system} tolerance={tolerance} />
               </View>
             )}
             {g.otherTables.map((t) => (

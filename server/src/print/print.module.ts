@@ -1,5 +1,8 @@
 import { Module } from '@nestjs/common';
 import { CriteriaModule } from '../criteria/criteria.module.js';
+import { FieldRecordsModule } from '../field-records/field-records.module.js';
+import { FieldRecordPrintController } from './field-record/field-record-print.controller.js';
+import { FieldRecordPrintService } from './field-record/field-record-print.service.js';
 import { RevisionsModule } from '../revisions/revisions.module.js';
 import { ReviewsModule } from '../reviews/reviews.module.js';
 import { SheetsRepository } from '../sheets/sheets.repository.js';
@@ -14,8 +17,14 @@ import { SafetyFileService } from './safety-file.service.js';
  * provides its own (stateless) SheetsService over the same repositories.
  */
 @Module({
-  imports: [CriteriaModule, RevisionsModule, ReviewsModule],
-  controllers: [PrintController, SafetyFileController],
-  providers: [PrintService, SafetyFileService, SheetsService, SheetsRepository],
+  imports: [CriteriaModule, RevisionsModule, ReviewsModule, FieldRecordsModule],
+  controllers: [PrintController, SafetyFileController, FieldRecordPrintController],
+  providers: [
+    PrintService,
+    SafetyFileService,
+    SheetsService,
+    SheetsRepository,
+    FieldRecordPrintService,
+  ],
 })
 export class PrintModule {}

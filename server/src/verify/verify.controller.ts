@@ -1,7 +1,12 @@
 import { Controller, Get, Param, UseGuards } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { Throttle } from '@nestjs/throttler';
-import { verificationCodeSchema, type VerifyResult } from '@holdfast/shared';
+import {
+  verificationCodeSchema,
+  type FieldRecordVerify,
+  type VerifyResult,
+} from '@holdfast/shared';
+import { FieldRecordsService } from '../field-records/field-records.service.js';
 import { Public } from '../auth/policy.js';
 import { ZodValidationPipe } from '../common/pipes/zod-validation.pipe.js';
 import { VerifyThrottlerGuard, verifyLimit } from './verify-throttler.guard.js';
@@ -10,16 +15,21 @@ import { VerifyService } from './verify.service.js';
 @ApiTags('verify')
 @Controller('verify')
 export class VerifyController {
-  constructor(private readonly verifier: VerifyService) {}
+  constructor(
+    private readonly verifier: VerifyService,
+    private readonly fieldRecords: FieldRecordsService,
+  ) {}
 
   @Get(':code')
   @Public()
   @UseGuards(VerifyThrottlerGuard)
   // The app's throttler is named 'login'; this route gets its own limit and counter.
   @Throttle({ login: { limit: verifyLimit, ttl: 60_000 } })
-  verify(
+  async verify(
     @Param('code', new ZodValidationPipe(verificationCodeSchema, 'code')) code: string,
-  ): Promise<VerifyResult> {
-    return this.verifier.verify(code);
+  ): Promise<VerifyResult | FieldRecordVerify> {
+    // A printed field record carries a code of the same shape; its answer says so (`kind`).
+    const record = await this.fieldRecords.verify(code);
+    return record ?? this.verifier.verify(code);
   }
 }

@@ -1,0 +1,250 @@
+import { randomUUID } from 'node:crypto';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import pg from 'pg';
+import { createDatabase, createMigrationDatabase } from '../src/connection.js';
+import { migrateToLatest } from '../src/migrate.js';
+import { seed } from '../src/seed.js';
+import { createFreshDatabase } from './fresh-database.js';
+// @ts-expect-error plain ESM helper without type declarations
+import * as roles from '../../scripts/lib/db-roles.mjs';
+
+/**
+ * A countersigned field record is a record: the server's own credentials (holdfast_app) cannot
+ * change or delete it, its measurements, checks, signatures or photos, nor truncate the tables.
+ * Provisioned as in least-privilege.test.ts.
+ */
+describe('field records in PostgreSQL, as the app role', () => {
+  let fresh: Awaited<ReturnType<typeof createFreshDatabase>>;
+  let app: pg.Client;
+  let positionId: string;
+  let revisionId: string;
+  let userId: string;
+  let otherId: string;
+
+  const as = (base: string, role: string) => {
+    const u = new URL(base);
+    const secret = decodeURIComponent(new URL(process.env.DATABASE_URL!).password);
+    u.username = role;
+    u.password = encodeURIComponent(roles.rolePassword(secret, role) as string);
+    return u.toString();
+  };
+  const refused = async (text: string, values: unknown[] = []) => {
+    const e = await app.query(text, values).then(
+      () => {
+        throw new Error(`succeeded: ${text}`);
+      },
+      (err: { code?: string; message: string }) => err,
+    );
+    return e;
+  };
+
+  async function newRecord(): Promise<string> {
+    const id = randomUUID();
+    await app.query(
+      `insert into field_records (id, position_id, revision_id, kind, performed_at, created_by)
+       values ($1, $2, $3, 'periodic-inspection', now(), $4)`,
+      [id, positionId, revisionId, userId],
+    );
+    await app.query(
+      `insert into field_record_measurements (record_id, setting_key, ordinal, as_found, as_left)
+       values ($1, 'springLength', 0, 0.2, 0.2001)`,
+      [id],
+    );
+    await app.query(
+      `insert into field_record_checks (record_id, key, result) values ($1, 'no-drag-shoe-a', 'ok')`,
+      [id],
+    );
+    return id;
+  }
+  async function sign(id: string) {
+    await app.query(`update field_records set status = 'signed' where id = $1`, [id]);
+    await app.query(
+      `insert into field_record_signatures (record_id, kind, user_id, display_name, initials)
+       values ($1, 'technician', $2, 'T', 'TT')`,
+      [id, userId],
+    );
+  }
+  async function countersign(id: string) {
+    await app.query(
+      `insert into field_record_signatures (record_id, kind, user_id, display_name, initials)
+       values ($1, 'countersign', $2, 'C', 'CC')`,
+      [id, otherId],
+    );
+    await app.query(`update field_records set status = 'countersigned' where id = $1`, [id]);
+  }
+
+  beforeAll(async () => {
+    fresh = await createFreshDatabase('field_rec');
+    const name = new URL(fresh.url).pathname.slice(1);
+    const secret = decodeURIComponent(new URL(process.env.DATABASE_URL!).password);
+    const admin = new pg.Client({ connectionString: fresh.url });
+    await admin.connect();
+    await admin.query(roles.clusterRolesSql(secret) as string);
+    await admin.query(roles.databaseRolesSql(name) as string);
+    await admin.end();
+    const ownerUrl = as(fresh.url, roles.OWNER_ROLE);
+    const plain = createMigrationDatabase(ownerUrl);
+    await migrateToLatest(plain);
+    await plain.destroy();
+    const owned = createDatabase({ connectionString: ownerUrl, max: 1 });
+    await seed(owned);
+    await owned.destroy();
+    app = new pg.Client({ connectionString: as(fresh.url, roles.APP_ROLE) });
+    await app.connect();
+    const rev = await app.query(
+      `select r.id, s.position_id from revisions r join sheets s on s.id = r.sheet_id limit 1`,
+    );
+    revisionId = rev.rows[0].id;
+    positionId = rev.rows[0].position_id;
+    const users = await app.query(`select id from users order by email limit 2`);
+    userId = users.rows[0].id;
+    otherId = users.rows[1].id;
+  }, 120000);
+  afterAll(async () => {
+    await app?.end();
+    await fresh?.drop();
+  });
+
+  it('a draft can be edited and its parts replaced', async () => {
+    const id = await newRecord();
+    await app.query(`update field_records set findings = 'ok' where id = $1`, [id]);
+    await app.query(`update field_record_measurements set as_left = 0.2 where record_id = $1`, [
+      id,
+    ]);
+    await app.query(`delete from field_record_checks where record_id = $1`, [id]);
+  });
+
+  it('signed: content is frozen, only the countersignature may follow', async () => {
+    const id = await newRecord();
+    await sign(id);
+    expect(
+      (await refused(`update field_records set findings = 'x' where id = $1`, [id])).code,
+    ).toBe('HF001');
+    expect(
+      (await refused(`update field_record_measurements set as_left = 1 where record_id = $1`, [id]))
+        .code,
+    ).toBe('HF001');
+    expect(
+      (
+        await refused(
+          `insert into field_record_checks (record_id, key, result) values ($1, 'linkage-condition', 'ok')`,
+          [id],
+        )
+      ).code,
+    ).toBe('HF001');
+    expect((await refused(`delete from field_records where id = $1`, [id])).code).toBe('HF001');
+  });
+
+  it('countersigned: no update, no delete of the record or any part, no new photos', async () => {
+    const id = await newRecord();
+    await sign(id);
+    await countersign(id);
+    const attempts = [
+      [`update field_records set findings = 'rewritten' where id = $1`, [id]],
+      [`update field_records set status = 'draft' where id = $1`, [id]],
+      [`delete from field_records where id = $1`, [id]],
+      [`update field_record_measurements set as_left = 0.3 where record_id = $1`, [id]],
+      [`delete from field_record_measurements where record_id = $1`, [id]],
+      [`update field_record_checks set result = 'not-ok' where record_id = $1`, [id]],
+      [`delete from field_record_checks where record_id = $1`, [id]],
+      [`update field_record_signatures set display_name = 'Someone' where record_id = $1`, [id]],
+      [`delete from field_record_signatures where record_id = $1`, [id]],
+      [
+        `insert into attachments (revision_id, file_name, content_type, size, sha256, storage_key, uploaded_by, field_record_id)
+         values ($2, 'p.png', 'image/png', 1, repeat('a', 64), $3, $4, $1)`,
+        [id, revisionId, `probe/${id}`, userId],
+      ],
+    ] as const;
+    for (const [text, values] of attempts) {
+      const e = await refused(text, [...values]);
+      expect(e.code, text).toBe('HF001');
+    }
+    const row = await app.query(`select status, findings from field_records where id = $1`, [id]);
+    expect(row.rows[0]).toEqual({ status: 'countersigned', findings: '' });
+  });
+
+  it('a draft cannot jump to countersigned', async () => {
+    const id = await newRecord();
+    const e = await refused(`update field_records set status = 'countersigned' where id = $1`, [
+      id,
+    ]);
+    expect(e.code).toBe('HF001');
+  });
+
+  it('the field-record tables refuse TRUNCATE (the app role has no TRUNCATE either)', async () => {
+    for (const t of [
+      'field_records',
+      'field_record_measurements',
+      'field_record_checks',
+      'field_record_signatures',
+    ]) {
+      const e = await refused(`truncate table ${t} cascade`);
+      expect(e.code, t).toMatch(/42501|HF001/);
+    }
+  });
+
+  it('the users table accepts the technician role', async () => {
+    const { rows } = await app.query(
+      `select pg_get_constraintdef(oid) as def from pg_constraint where conname = 'users_role_check'`,
+    );
+    expect(rows[0].def).toContain('technician');
+  });
+});
+
+describe('demo field records', () => {
+  let fresh: Awaited<ReturnType<typeof createFreshDatabase>>;
+  let db: ReturnType<typeof createDatabase>;
+  beforeAll(async () => {
+    fresh = await createFreshDatabase('field_demo');
+    const plain = createMigrationDatabase(fresh.url);
+    await migrateToLatest(plain);
+    await plain.destroy();
+    db = createDatabase({ connectionString: fresh.url, max: 1 });
+    await seed(db, true);
+  }, 120000);
+  afterAll(async () => {
+    await db?.destroy();
+    await fresh?.drop();
+  });
+
+  it('hold a wear trend, an out-of-tolerance record with its reason, and an overdue interval; seeding twice adds nothing', async () => {
+    const rows = await db
+      .selectFrom('fieldRecords as f')
+      .innerJoin('brakePositions as p', 'p.id', 'f.positionId')
+      .select(['p.tag', 'f.id', 'f.status', 'f.performedAt', 'f.outOfTolerance'])
+      .orderBy('f.performedAt')
+      .execute();
+    const mh = rows.filter((r) => r.tag === 'MH-B1');
+    expect(mh.length).toBeGreaterThanOrEqual(6);
+    const span = mh.at(-1)!.performedAt.getTime() - mh[0]!.performedAt.getTime();
+    expect(span).toBeGreaterThan(90 * 86_400_000);
+    const reserve = await db
+      .selectFrom('fieldRecordMeasurements')
+      .select(['recordId', 'asFound', 'asLeft'])
+      .where('settingKey', '=', 'reserveStroke')
+      .where(
+        'recordId',
+        'in',
+        mh.map((r) => r.id),
+      )
+      .execute();
+    const series = mh.map((r) => {
+      const m = reserve.find((x) => x.recordId === r.id)!;
+      return m.asFound ?? m.asLeft!;
+    });
+    for (let i = 1; i < series.length; i++) expect(series[i]).toBeLessThan(series[i - 1]!);
+    const out = rows.filter((r) => r.outOfTolerance);
+    expect(out.map((r) => [r.tag, r.status])).toEqual([['DB-1', 'signed']]);
+    const reason = await db
+      .selectFrom('fieldRecordMeasurements')
+      .select('reason')
+      .where('recordId', '=', out[0]!.id)
+      .executeTakeFirstOrThrow();
+    expect(reason.reason).not.toBe('');
+    const tr = rows.filter((r) => r.tag === 'TR-B1');
+    expect(Date.now() - tr.at(-1)!.performedAt.getTime()).toBeGreaterThan(30 * 86_400_000);
+    await seed(db, true);
+    const again = await db.selectFrom('fieldRecords').select('id').execute();
+    expect(again).toHaveLength(rows.length);
+  });
+});

@@ -1,0 +1,279 @@
+import { Injectable } from '@nestjs/common';
+import type { Kysely } from 'kysely';
+import type {
+  DB,
+  FieldRecordCheckRow,
+  FieldRecordMeasurementRow,
+  FieldRecordRow,
+  FieldRecordSignatureRow,
+} from '@holdfast/db';
+import type { FieldCheckInput, FieldMeasurementInput } from '@holdfast/shared';
+import { Database } from '../database/database.js';
+
+/** A record with everything it owns, as stored. */
+export interface StoredFieldRecord {
+  record: FieldRecordRow;
+  measurements: FieldRecordMeasurementRow[];
+  checks: FieldRecordCheckRow[];
+  signatures: FieldRecordSignatureRow[];
+}
+
+/** The revision a record is made against, with its sheet and what the server needs of both. */
+export interface RecordRevision {
+  revisionId: string;
+  label: string;
+  state: string;
+  evaluation: unknown;
+  sheetId: string;
+  documentNumber: string;
+  title: string;
+  sheetType: string;
+  ownerId: string;
+  positionId: string;
+  approvedRevisionId: string | null;
+  underReview: boolean;
+}
+
+/** All Kysely of the field-records feature. Returns rows or undefined; throws no HTTP errors. */
+@Injectable()
+export class FieldRecordsRepository {
+  constructor(readonly db: Database) {}
+
+  transaction<T>(fn: (trx: Kysely<DB>) => Promise<T>): Promise<T> {
+    return this.db.transaction().execute(fn);
+  }
+
+  async revision(
+    revisionId: string,
+    db: Kysely<DB> = this.db,
+  ): Promise<RecordRevision | undefined> {
+    const row = await db
+      .selectFrom('revisions as r')
+      .innerJoin('sheets as s', 's.id', 'r.sheetId')
+      .select((eb) => [
+        'r.id as revisionId',
+        'r.label',
+        'r.state',
+        'r.evaluation',
+        's.id as sheetId',
+        's.documentNumber',
+        's.title',
+        's.sheetType',
+        's.ownerId',
+        's.positionId',
+        's.approvedRevisionId',
+        eb
+          .exists(
+            eb
+              .selectFrom('criteriaReviews as c')
+              .select('c.id')
+              .whereRef('c.revisionId', '=', 'r.id')
+              .where('c.clearedAt', 'is', null),
+          )
+          .as('underReview'),
+      ])
+      .where('r.id', '=', revisionId)
+      .executeTakeFirst();
+    return row ? { ...row, underReview: Boolean(row.underReview) } : undefined;
+  }
+
+  async positionTag(positionId: string, db: Kysely<DB> = this.db): Promise<string | undefined> {
+    const row = await db
+      .selectFrom('brakePositions')
+      .select('tag')
+      .where('id', '=', positionId)
+      .executeTakeFirst();
+    return row?.tag;
+  }
+
+  async load(id: string, db: Kysely<DB> = this.db): Promise<StoredFieldRecord | undefined> {
+    const record = await db
+      .selectFrom('fieldRecords')
+      .selectAll()
+      .where('id', '=', id)
+      .executeTakeFirst();
+    if (!record) return undefined;
+    return { record, ...(await this.parts([id], db)).get(id)! };
+  }
+
+  /** Records by position (oldest first) or status; parts loaded in one query each. */
+  async list(
+    filter: { positionId?: string; status?: string; ids?: string[] },
+    db: Kysely<DB> = this.db,
+  ): Promise<StoredFieldRecord[]> {
+    let q = db.selectFrom('fieldRecords').selectAll();
+    if (filter.positionId) q = q.where('positionId', '=', filter.positionId);
+    if (filter.status) q = q.where('status', '=', filter.status as 'draft');
+    if (filter.ids) q = q.where('id', 'in', filter.ids.length ? filter.ids : ['']);
+    const records = await q.orderBy('performedAt', 'asc').orderBy('id').limit(1000).execute();
+    const parts = await this.parts(
+      records.map((r) => r.id),
+      db,
+    );
+    return records.map((record) => ({ record, ...parts.get(record.id)! }));
+  }
+
+  private async parts(ids: string[], db: Kysely<DB>) {
+    const out = new Map<string, Omit<StoredFieldRecord, 'record'>>(
+      ids.map((id) => [id, { measurements: [], checks: [], signatures: [] }]),
+    );
+    if (ids.length === 0) return out;
+    const [m, c, s] = await Promise.all([
+      db
+        .selectFrom('fieldRecordMeasurements')
+        .selectAll()
+        .where('recordId', 'in', ids)
+        .orderBy('ordinal')
+        .execute(),
+      db.selectFrom('fieldRecordChecks').selectAll().where('recordId', 'in', ids).execute(),
+      db.selectFrom('fieldRecordSignatures').selectAll().where('recordId', 'in', ids).execute(),
+    ]);
+    for (const r of m) out.get(r.recordId)!.measurements.push(r);
+    for (const r of c) out.get(r.recordId)!.checks.push(r);
+    for (const r of s) out.get(r.recordId)!.signatures.push(r);
+    return out;
+  }
+
+  /** Inserts the record unless its id exists; true when this call created it. */
+  async insert(
+    trx: Kysely<DB>,
+    row: {
+      id: string;
+      positionId: string;
+      revisionId: string;
+      kind: string;
+      performedAt: string;
+      meterHours: number | null;
+      findings: string;
+      outOfTolerance: boolean;
+      createdBy: string;
+    },
+  ): Promise<boolean> {
+    const inserted = await trx
+      .insertInto('fieldRecords')
+      .values(row)
+      .onConflict((oc) => oc.column('id').doNothing())
+      .returning('id')
+      .executeTakeFirst();
+    return inserted !== undefined;
+  }
+
+  async lockForUpdate(trx: Kysely<DB>, id: string): Promise<FieldRecordRow | undefined> {
+    return trx
+      .selectFrom('fieldRecords')
+      .selectAll()
+      .where('id', '=', id)
+      .forUpdate()
+      .executeTakeFirst();
+  }
+
+  async update(
+    trx: Kysely<DB>,
+    id: string,
+    set: Partial<{
+      kind: string;
+      performedAt: string;
+      meterHours: number | null;
+      findings: string;
+      outOfTolerance: boolean;
+      status: 'signed' | 'countersigned';
+      verificationCode: string;
+    }>,
+  ): Promise<void> {
+    await trx.updateTable('fieldRecords').set(set).where('id', '=', id).execute();
+  }
+
+  async replaceMeasurements(
+    trx: Kysely<DB>,
+    id: string,
+    items: FieldMeasurementInput[],
+  ): Promise<void> {
+    await trx.deleteFrom('fieldRecordMeasurements').where('recordId', '=', id).execute();
+    if (items.length === 0) return;
+    await trx
+      .insertInto('fieldRecordMeasurements')
+      .values(
+        items.map((m, ordinal) => ({
+          recordId: id,
+          settingKey: m.settingKey,
+          ordinal,
+          asFound: m.asFound,
+          asLeft: m.asLeft,
+          reason: m.reason,
+        })),
+      )
+      .execute();
+  }
+
+  async replaceChecks(trx: Kysely<DB>, id: string, items: FieldCheckInput[]): Promise<void> {
+    await trx.deleteFrom('fieldRecordChecks').where('recordId', '=', id).execute();
+    if (items.length === 0) return;
+    await trx
+      .insertInto('fieldRecordChecks')
+      .values(items.map((c) => ({ recordId: id, ...c })))
+      .execute();
+  }
+
+  async addSignature(
+    trx: Kysely<DB>,
+    row: {
+      recordId: string;
+      kind: 'technician' | 'countersign';
+      userId: string;
+      displayName: string;
+      initials: string;
+      note?: string;
+    },
+  ): Promise<void> {
+    await trx.insertInto('fieldRecordSignatures').values(row).execute();
+  }
+
+  async people(ids: string[], db: Kysely<DB> = this.db) {
+    const wanted = [...new Set(ids)];
+    if (wanted.length === 0)
+      return new Map<string, { id: string; displayName: string; initials: string }>();
+    const rows = await db
+      .selectFrom('users')
+      .select(['id', 'displayName', 'initials'])
+      .where('id', 'in', wanted)
+      .execute();
+    return new Map(rows.map((r) => [r.id, r]));
+  }
+
+  /** E-mail addresses of the sheet's owner and the plant engineers (active engineers, checkers). */
+  async notifyEmails(ownerId: string, exceptId: string, db: Kysely<DB> = this.db) {
+    const rows = await db
+      .selectFrom('users')
+      .select('email')
+      .where('active', '=', true)
+      .where('id', '<>', exceptId)
+      .where((eb) => eb.or([eb('id', '=', ownerId), eb('role', 'in', ['engineer', 'checker'])]))
+      .orderBy('email')
+      .execute();
+    return rows.map((r) => r.email);
+  }
+
+  async verificationCodeTaken(code: string, db: Kysely<DB> = this.db): Promise<boolean> {
+    const [a, b] = await Promise.all([
+      db
+        .selectFrom('fieldRecords')
+        .select('id')
+        .where('verificationCode', '=', code)
+        .executeTakeFirst(),
+      db
+        .selectFrom('revisions')
+        .select('id')
+        .where('verificationCode', '=', code)
+        .executeTakeFirst(),
+    ]);
+    return a !== undefined || b !== undefined;
+  }
+
+  byVerificationCode(code: string) {
+    return this.db
+      .selectFrom('fieldRecords')
+      .select('id')
+      .where('verificationCode', '=', code)
+      .executeTakeFirst();
+  }
+}

@@ -1,0 +1,367 @@
+import { Injectable } from '@nestjs/common';
+import type { Kysely } from 'kysely';
+import type { DB } from '@holdfast/db';
+import type {
+  CreateFieldRecordInput,
+  FieldForm,
+  FieldIssue,
+  FieldRecordVerify,
+  FieldMeasurementInput,
+  FieldRecord,
+  FieldRecordSummary,
+  UpdateFieldRecordInput,
+} from '@holdfast/shared';
+import type { AuthUser } from '../auth/auth-user.js';
+import { effectiveRoles } from '../auth/policy.js';
+import { AuditService } from '../audit/audit.service.js';
+import { badRequest, conflict, forbidden, notFound } from '../common/errors/api-exception.js';
+import { AppConfig } from '../config/app-config.js';
+import { OutboxService } from '../outbox/outbox.service.js';
+import { newVerificationCode } from '../revisions/revision-codes.js';
+import { canReadContent } from '../revisions/revision-access.js';
+import { toFieldRecord } from './field-record-mapper.js';
+import {
+  FieldRecordsRepository,
+  type RecordRevision,
+  type StoredFieldRecord,
+} from './field-records.repository.js';
+import { outOfToleranceMail } from './field-notifications.js';
+import {
+  fieldTargets,
+  formChecks,
+  judgeMeasurement,
+  outOfToleranceAsLeft,
+} from './field-targets.js';
+
+const invalid = (fields: FieldIssue[]) => badRequest('Some fields are not valid.', fields);
+
+/**
+ * The rules of field records: made against an approved revision of the position's sheet; a
+ * draft is edited by whoever made it; the maker signs, a plant engineer (engineer or checker)
+ * who did not sign countersigns. An as-left value outside its tolerance needs a reason before
+ * signing, and signing it tells the sheet's owner and the plant engineers.
+ */
+@Injectable()
+export class FieldRecordsService {
+  constructor(
+    private readonly repo: FieldRecordsRepository,
+    private readonly audit: AuditService,
+    private readonly outbox: OutboxService,
+    private readonly config: AppConfig,
+  ) {}
+
+  /** A revision a field record may be made against: one that was released (approved). */
+  private async releasedRevision(
+    user: AuthUser,
+    revisionId: string,
+    db?: Kysely<DB>,
+  ): Promise<RecordRevision> {
+    const rev = await this.repo.revision(revisionId, db);
+    if (!rev || !canReadContent(user, rev)) throw notFound('Revision not found.');
+    if (rev.state !== 'approved' && rev.state !== 'superseded') {
+      throw invalid([
+        { path: 'revisionId', message: 'field records are made against an approved revision' },
+      ]);
+    }
+    return rev;
+  }
+
+  async form(user: AuthUser, revisionId: string): Promise<FieldForm> {
+    const rev = await this.releasedRevision(user, revisionId);
+    return {
+      revisionId: rev.revisionId,
+      sheetId: rev.sheetId,
+      documentNumber: rev.documentNumber,
+      revisionLabel: rev.label,
+      sheetType: rev.sheetType,
+      positionId: rev.positionId,
+      targets: fieldTargets(rev.sheetType, rev.evaluation),
+      checks: formChecks,
+    };
+  }
+
+  private async present(s: StoredFieldRecord, db?: Kysely<DB>): Promise<FieldRecord> {
+    const rev = (await this.repo.revision(s.record.revisionId, db))!;
+    const tag = (await this.repo.positionTag(s.record.positionId, db)) ?? '';
+    const people = await this.repo.people([s.record.createdBy], db);
+    return toFieldRecord(s, rev, tag, people);
+  }
+
+  async get(id: string): Promise<FieldRecord> {
+    const s = await this.repo.load(id);
+    if (!s) throw notFound('Field record not found.');
+    return this.present(s);
+  }
+
+  async list(filter: { positionId?: string; status?: string }): Promise<FieldRecordSummary[]> {
+    const items = await this.history(filter);
+    return items.map((r) => ({
+      id: r.id,
+      positionId: r.positionId,
+      positionTag: r.positionTag,
+      revisionId: r.revisionId,
+      documentNumber: r.documentNumber,
+      revisionLabel: r.revisionLabel,
+      kind: r.kind,
+      status: r.status,
+      performedAt: r.performedAt,
+      meterHours: r.meterHours,
+      outOfTolerance: r.outOfTolerance,
+      flags: r.flags,
+      signed: r.signed,
+      countersigned: r.countersigned,
+    }));
+  }
+
+  /** Full records, oldest first. */
+  async history(filter: { positionId?: string; status?: string }): Promise<FieldRecord[]> {
+    const stored = await this.repo.list(filter);
+    const out: FieldRecord[] = [];
+    for (const s of stored) out.push(await this.present(s));
+    return out;
+  }
+
+  /** Measured keys must be on the revision's field card; returns the out-of-tolerance flag. */
+  private judge(rev: RecordRevision, measurements: FieldMeasurementInput[]) {
+    const targets = new Map(
+      fieldTargets(rev.sheetType, rev.evaluation).map((t) => [t.settingKey, t]),
+    );
+    const issues: FieldIssue[] = [];
+    measurements.forEach((m, i) => {
+      if (!targets.has(m.settingKey)) {
+        issues.push({
+          path: `measurements.${i}.settingKey`,
+          message: `${m.settingKey} is not a value of this revision's field card`,
+        });
+      }
+    });
+    if (issues.length) throw invalid(issues);
+    const judged = measurements.map((m) => judgeMeasurement(m, targets));
+    return { judged, out: outOfToleranceAsLeft(judged).length > 0 };
+  }
+
+  /** Idempotent by the client's id: the same id again returns the stored record, created false. */
+  async create(
+    user: AuthUser,
+    input: CreateFieldRecordInput,
+  ): Promise<{ record: FieldRecord; created: boolean }> {
+    const existing = await this.repo.load(input.id);
+    if (existing) return this.sameRecord(user, existing, input);
+    const rev = await this.releasedRevision(user, input.revisionId);
+    if (rev.positionId !== input.positionId) {
+      throw invalid([{ path: 'positionId', message: "not the position of the revision's sheet" }]);
+    }
+    const { out } = this.judge(rev, input.measurements);
+    const created = await this.repo.transaction(async (trx) => {
+      const fresh = await this.repo.insert(trx, {
+        id: input.id,
+        positionId: input.positionId,
+        revisionId: input.revisionId,
+        kind: input.kind,
+        performedAt: input.performedAt,
+        meterHours: input.meterHours,
+        findings: input.findings,
+        outOfTolerance: out,
+        createdBy: user.id,
+      });
+      if (!fresh) return false;
+      await this.repo.replaceMeasurements(trx, input.id, input.measurements);
+      await this.repo.replaceChecks(trx, input.id, input.checks);
+      await this.audit.record(trx, {
+        actorId: user.id,
+        action: 'field-record.created',
+        entity: 'field-record',
+        entityId: input.id,
+        sheetId: rev.sheetId,
+        after: { kind: input.kind, revision: rev.label, position: input.positionId },
+      });
+      return true;
+    });
+    const stored = (await this.repo.load(input.id))!;
+    if (!created) return this.sameRecord(user, stored, input);
+    return { record: await this.present(stored), created: true };
+  }
+
+  /** A retried create: the same maker gets the stored record; anyone else a conflict. */
+  private async sameRecord(user: AuthUser, s: StoredFieldRecord, input: CreateFieldRecordInput) {
+    if (s.record.createdBy !== user.id || s.record.positionId !== input.positionId) {
+      throw conflict('A field record with this id already exists.', { id: input.id });
+    }
+    return { record: await this.present(s), created: false };
+  }
+
+  private async editable(trx: Kysely<DB>, user: AuthUser, id: string) {
+    const row = await this.repo.lockForUpdate(trx, id);
+    if (!row) throw notFound('Field record not found.');
+    if (row.createdBy !== user.id)
+      throw forbidden('Only the person who made this record may change or sign it.');
+    if (row.status !== 'draft')
+      throw conflict(`The record is ${row.status} and can no longer change.`);
+    return row;
+  }
+
+  async update(user: AuthUser, id: string, input: UpdateFieldRecordInput): Promise<FieldRecord> {
+    await this.repo.transaction(async (trx) => {
+      const row = await this.editable(trx, user, id);
+      const rev = (await this.repo.revision(row.revisionId, trx))!;
+      const stored = (await this.repo.load(id, trx))!;
+      const measurements =
+        input.measurements ??
+        stored.measurements.map((m) => ({
+          settingKey: m.settingKey,
+          asFound: m.asFound,
+          asLeft: m.asLeft,
+          reason: m.reason,
+        }));
+      const { out } = this.judge(rev, measurements);
+      await this.repo.update(trx, id, {
+        ...(input.kind !== undefined ? { kind: input.kind } : {}),
+        ...(input.performedAt !== undefined ? { performedAt: input.performedAt } : {}),
+        ...(input.meterHours !== undefined ? { meterHours: input.meterHours } : {}),
+        ...(input.findings !== undefined ? { findings: input.findings } : {}),
+        outOfTolerance: out,
+      });
+      if (input.measurements) await this.repo.replaceMeasurements(trx, id, input.measurements);
+      if (input.checks) await this.repo.replaceChecks(trx, id, input.checks);
+      await this.audit.record(trx, {
+        actorId: user.id,
+        action: 'field-record.updated',
+        entity: 'field-record',
+        entityId: id,
+        sheetId: rev.sheetId,
+        after: { fields: Object.keys(input) },
+      });
+    });
+    return this.get(id);
+  }
+
+  async sign(user: AuthUser, id: string): Promise<FieldRecord> {
+    await this.repo.transaction(async (trx) => {
+      const row = await this.editable(trx, user, id);
+      const stored = (await this.repo.load(id, trx))!;
+      const rev = (await this.repo.revision(row.revisionId, trx))!;
+      const record = toFieldRecord(stored, rev, '', new Map());
+      const out = outOfToleranceAsLeft(record.measurements);
+      const missing = out.filter((i) => record.measurements[i]!.reason.trim() === '');
+      if (missing.length > 0) {
+        throw invalid(
+          missing.map((i) => ({
+            path: `measurements.${i}.reason`,
+            message: 'as left is outside the tolerance: give the reason before signing',
+          })),
+        );
+      }
+      let code = newVerificationCode(id);
+      while (await this.repo.verificationCodeTaken(code, trx)) code = newVerificationCode(id);
+      await this.repo.update(trx, id, {
+        status: 'signed',
+        verificationCode: code,
+        outOfTolerance: out.length > 0,
+      });
+      await this.repo.addSignature(trx, {
+        recordId: id,
+        kind: 'technician',
+        userId: user.id,
+        displayName: user.displayName,
+        initials: user.initials,
+      });
+      await this.audit.record(trx, {
+        actorId: user.id,
+        action: 'field-record.signed',
+        entity: 'field-record',
+        entityId: id,
+        sheetId: rev.sheetId,
+        after: { status: 'signed', outOfTolerance: out.length },
+      });
+      if (out.length > 0) {
+        const tag = (await this.repo.positionTag(row.positionId, trx)) ?? '';
+        const lines = out.map((i) => {
+          const m = record.measurements[i]!;
+          const v = m.asLeftVerdict!;
+          return `${m.label}: off by ${v.display.deviation.toPrecision(3)} ${v.display.label} — ${m.reason}`;
+        });
+        await this.outbox.enqueueMail(
+          trx,
+          outOfToleranceMail(
+            this.config.settings.PUBLIC_URL,
+            {
+              recordId: id,
+              positionTag: tag,
+              documentNumber: rev.documentNumber,
+              revisionLabel: rev.label,
+            },
+            await this.repo.notifyEmails(rev.ownerId, user.id, trx),
+            user.displayName,
+            lines,
+          ),
+        );
+      }
+    });
+    return this.get(id);
+  }
+
+  async countersign(user: AuthUser, id: string, note: string): Promise<FieldRecord> {
+    if (!effectiveRoles(user.role).includes('engineer')) {
+      throw forbidden('A plant engineer (engineer or checker) countersigns.');
+    }
+    await this.repo.transaction(async (trx) => {
+      const row = await this.repo.lockForUpdate(trx, id);
+      if (!row) throw notFound('Field record not found.');
+      if (row.status !== 'signed') {
+        throw conflict(
+          row.status === 'draft'
+            ? 'The record must be signed by the technician first.'
+            : 'The record is already countersigned.',
+        );
+      }
+      const stored = (await this.repo.load(id, trx))!;
+      const signer = stored.signatures.find((s) => s.kind === 'technician');
+      if (signer?.userId === user.id || row.createdBy === user.id) {
+        throw forbidden(
+          'Someone other than the person who made and signed the record countersigns it.',
+        );
+      }
+      await this.repo.addSignature(trx, {
+        recordId: id,
+        kind: 'countersign',
+        userId: user.id,
+        displayName: user.displayName,
+        initials: user.initials,
+        note,
+      });
+      await this.repo.update(trx, id, { status: 'countersigned' });
+      const rev = (await this.repo.revision(row.revisionId, trx))!;
+      await this.audit.record(trx, {
+        actorId: user.id,
+        action: 'field-record.countersigned',
+        entity: 'field-record',
+        entityId: id,
+        sheetId: rev.sheetId,
+        after: { status: 'countersigned' },
+      });
+    });
+    return this.get(id);
+  }
+
+  /** The public answer for a code printed on a field record; undefined when none carries it. */
+  async verify(code: string): Promise<FieldRecordVerify | undefined> {
+    const hit = await this.repo.byVerificationCode(code);
+    if (!hit) return undefined;
+    const r = await this.get(hit.id);
+    return {
+      kind: 'field-record',
+      recordKind: r.kind,
+      positionTag: r.positionTag,
+      performedAt: r.performedAt,
+      status: r.status,
+      signedAt: r.signed?.at ?? null,
+      countersignedAt: r.countersigned?.at ?? null,
+      setTo: {
+        documentNumber: r.documentNumber,
+        revisionLabel: r.revisionLabel,
+        current: !r.flags.superseded,
+        underReview: r.flags.underReview,
+      },
+    };
+  }
+}

@@ -1,0 +1,79 @@
+import {
+  evaluateTolerance,
+  getSheetType,
+  type Dimension,
+  type FieldSetting,
+  type SheetEvaluation,
+} from '@holdfast/calc';
+import type {
+  FieldCheckKey,
+  FieldMeasurement,
+  FieldMeasurementInput,
+  FieldTarget,
+} from '@holdfast/shared';
+import { fieldCheckKeys, fieldCheckKeysWithValue } from '@holdfast/shared';
+
+/** Labels of the explicit check items, as the form and the printed record show them. */
+export const CHECK_LABELS: Record<FieldCheckKey, string> = {
+  'no-drag-shoe-a': 'No drag on shoe A when released',
+  'no-drag-shoe-b': 'No drag on shoe B when released',
+  'set-release-cycles': 'Set/release cycles repeated and re-measured',
+  'thruster-condition': 'Thruster condition (oil, seals, stroke free)',
+  'linkage-condition': 'Linkage condition (pins, bushes, wear)',
+  'lining-thickness-shoe-a': 'Lining thickness, shoe A',
+  'lining-thickness-shoe-b': 'Lining thickness, shoe B',
+};
+
+export const formChecks = fieldCheckKeys.map((key) => ({
+  key,
+  label: CHECK_LABELS[key],
+  hasValue: fieldCheckKeysWithValue.includes(key),
+}));
+
+/** The field card's targets of a frozen evaluation, each with the tolerance its sheet declares. */
+export function fieldTargets(sheetType: string, evaluation: unknown): FieldTarget[] {
+  const settings = (evaluation as Partial<SheetEvaluation> | null)?.fieldSettings ?? [];
+  const card = getSheetType(sheetType)?.fieldCard;
+  return settings.map((s: FieldSetting) => {
+    const p = card?.settings[s.key];
+    return {
+      settingKey: s.key,
+      label: s.label,
+      value: s.value,
+      unit: s.unit,
+      dimension: s.dimension,
+      group: p?.group ?? 'other',
+      ...(p?.stack ? { stack: p.stack } : {}),
+      ...(p?.role ? { role: p.role } : {}),
+      ...(s.note ? { note: s.note } : {}),
+      tolerance: p?.tolerance ?? null,
+    };
+  });
+}
+
+/** A stored measurement with its target and the verdicts on as found and as left. */
+export function judgeMeasurement(
+  m: FieldMeasurementInput,
+  targets: ReadonlyMap<string, FieldTarget>,
+): FieldMeasurement {
+  const t = targets.get(m.settingKey);
+  const judge = (v: number | null) =>
+    v === null || !t?.tolerance
+      ? null
+      : evaluateTolerance(t.value, v, t.tolerance, t.dimension as Dimension);
+  return {
+    ...m,
+    label: t?.label ?? m.settingKey,
+    target: t?.value ?? null,
+    unit: t?.unit ?? '',
+    dimension: t?.dimension ?? '',
+    tolerance: t?.tolerance ?? null,
+    asFoundVerdict: judge(m.asFound),
+    asLeftVerdict: judge(m.asLeft),
+  };
+}
+
+/** Indexes of measurements whose as-left value is outside its tolerance. */
+export function outOfToleranceAsLeft(measurements: FieldMeasurement[]): number[] {
+  return measurements.flatMap((m, i) => (m.asLeftVerdict?.status === 'out' ? [i] : []));
+}

@@ -1,0 +1,142 @@
+import type { Dimension } from '@holdfast/calc';
+import type { FieldRecord } from '@holdfast/shared';
+import { Document, Page, Text, View } from '@react-pdf/renderer';
+import { qty } from '../format.js';
+import { Caution } from '../parts/caution.js';
+import { Heading, Table } from '../parts/table.js';
+import type { PrintableSheet } from '../printable-sheet.js';
+import { Frame } from '../sheet-document.js';
+import { colours, s } from '../theme.js';
+import { toleranceText } from './tolerance-text.js';
+
+export const RECORD_KIND_TITLES: Record<FieldRecord['kind'], string> = {
+  commissioning: 'Commissioning (first setting)',
+  'periodic-inspection': 'Periodic inspection',
+  're-adjustment': 'Re-adjustment for lining wear',
+  'lining-replacement': 'Lining replacement',
+  'after-repair': 'After repair',
+};
+
+const STATUS_TEXT: Record<FieldRecord['status'], string> = {
+  draft: 'DRAFT — not signed',
+  signed: 'Signed by the technician, waiting for countersignature',
+  countersigned: 'Countersigned',
+};
+
+const date = (iso: string) => iso.slice(0, 16).replace('T', ' ') + ' UTC';
+
+/** The printed field record: what was found and left, against the revision it was set to. */
+export function FieldRecordDocument(props: {
+  record: FieldRecord;
+  sheet: PrintableSheet;
+  qr: string | null;
+  checkLabels: Record<string, string>;
+}) {
+  const { record: r, sheet, qr } = props;
+  const system = sheet.unitSystem;
+  const val = (v: number | null, dim: string) =>
+    v === null ? '—' : qty(v, dim as Dimension, system);
+  const verdict = (m: FieldRecord['measurements'][number]) =>
+    m.asLeftVerdict ? (m.asLeftVerdict.status === 'in' ? 'in' : 'OUT') : '—';
+  const flags = [
+    r.flags.superseded && 'The revision this brake was set to has since been superseded.',
+    r.flags.underReview && 'The revision this brake was set to is under review.',
+  ].filter((x): x is string => typeof x === 'string');
+  return (
+    <Document
+      title={`${r.positionTag} field record ${r.performedAt.slice(0, 10)}`}
+      creator="Holdfast"
+      producer="Holdfast"
+    >
+      <Page size={sheet.paper} style={s.page}>
+        <Frame sheet={sheet} qr={qr} kind="Field record" />
+        <Text style={{ fontWeight: 700, marginBottom: 2 }}>
+          {RECORD_KIND_TITLES[r.kind]} — {r.positionTag} {sheet.position.description}
+        </Text>
+        <Text>
+          Performed {date(r.performedAt)}
+          {r.meterHours !== null ? `, meter ${r.meterHours} h` : ''}. Set to calculation{' '}
+          {r.documentNumber} rev {r.revisionLabel}. Status: {STATUS_TEXT[r.status]}.
+        </Text>
+        {flags.map((f) => (
+          <Text key={f} style={{ color: colours.caution, fontWeight: 700 }}>
+            {f}
+          </Text>
+        ))}
+        <Caution />
+        <Heading>Measurements</Heading>
+        <Table
+          columns={[
+            { title: 'Setting', flex: 2.6 },
+            { title: 'Target', flex: 1.2, align: 'right' },
+            { title: 'Tolerance', flex: 1.3 },
+            { title: 'As found', flex: 1.2, align: 'right' },
+            { title: 'As left', flex: 1.2, align: 'right' },
+            { title: 'In tol.', width: 34 },
+          ]}
+          rows={r.measurements.map((m) => [
+            m.label,
+            val(m.target, m.dimension),
+            toleranceText(m.tolerance, m.dimension as Dimension, system),
+            val(m.asFound, m.dimension),
+            val(m.asLeft, m.dimension),
+            verdict(m),
+          ])}
+        />
+        {r.measurements
+          .filter((m) => m.reason)
+          .map((m) => (
+            <Text key={m.settingKey}>
+              Reason, {m.label}: {m.reason}
+            </Text>
+          ))}
+        <Text style={{ fontSize: 7 }}>
+          Tolerances are common practice unless a source is named; the maker&apos;s data and the
+          governing standard decide where they differ.
+        </Text>
+        <Heading>Checks</Heading>
+        <Table
+          columns={[
+            { title: 'Check', flex: 3 },
+            { title: 'Result', flex: 1 },
+            { title: 'Value / note', flex: 2.4 },
+          ]}
+          rows={r.checks.map((c) => [
+            props.checkLabels[c.key] ?? c.key,
+            c.result === 'ok' ? 'OK' : c.result === 'not-ok' ? 'NOT OK' : 'n/a',
+            [
+              c.value !== null ? qty(c.value, 'length', system) : '',
+              c.cycles !== null ? `${c.cycles} cycles` : '',
+              c.note,
+            ]
+              .filter(Boolean)
+              .join('; '),
+          ])}
+        />
+        <Heading>Findings</Heading>
+        <Text>{r.findings || 'None recorded.'}</Text>
+        <View wrap={false}>
+          <Heading>Signatures</Heading>
+          <Table
+            columns={[
+              { title: 'Role', flex: 1.4 },
+              { title: 'Name', flex: 2 },
+              { title: 'Signed', flex: 1.6 },
+            ]}
+            rows={[
+              ['Technician', r.signed, 'not signed'],
+              ['Plant engineer', r.countersigned, 'not countersigned'],
+            ].map(([role, sig, none]) => {
+              const g = sig as FieldRecord['signed'];
+              return [
+                role as string,
+                g ? `${g.by.displayName} (${g.by.initials})` : '',
+                g ? date(g.at) : (none as string),
+              ];
+            })}
+          />
+        </View>
+      </Page>
+    </Document>
+  );
+}

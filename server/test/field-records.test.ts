@@ -1,0 +1,382 @@
+import { randomUUID } from 'node:crypto';
+import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { InspectionScheduleService } from '../src/field-records/inspection-schedule.service.js';
+import { Database } from '../src/database/database.js';
+import { ensurePoppler, inspectPdf } from '../src/print/testing/poppler.js';
+import {
+  approve,
+  createSheet,
+  createSheetsContext,
+  makeRegister,
+  submit,
+  waitFor,
+  type Register,
+  type SheetsContext,
+} from './sheets-fixture.js';
+
+describe('field records', () => {
+  let ctx: SheetsContext;
+  let reg: Register;
+  let revisionId: string;
+  let draftRevisionId: string;
+  let targets: { settingKey: string; value: number; tolerance: unknown }[];
+
+  beforeAll(async () => {
+    ctx = await createSheetsContext();
+  });
+  afterAll(() => ctx?.closeAll());
+  beforeEach(async () => {
+    await ctx.resetAll();
+    reg = await makeRegister(ctx);
+    const sheet = await createSheet(ctx, reg);
+    const a = await submit(ctx, sheet.revisions[0].id);
+    await approve(ctx, a.id);
+    revisionId = a.id;
+    const draft = await createSheet(ctx, reg, { title: 'Second brake' });
+    draftRevisionId = draft.revisions[0].id;
+    const form = await ctx.request('GET', `/api/revisions/${revisionId}/field-form`, {
+      as: 'technician',
+    });
+    expect(form.status, form.text).toBe(200);
+    targets = form.body.targets;
+  });
+
+  const spring = () => targets.find((t) => t.settingKey === 'springLength')!;
+  const body = (over: Record<string, unknown> = {}) => ({
+    id: randomUUID(),
+    positionId: reg.positionId,
+    revisionId,
+    kind: 'commissioning',
+    performedAt: '2026-11-30T09:00:00Z',
+    measurements: [{ settingKey: 'springLength', asFound: null, asLeft: spring().value }],
+    checks: [{ key: 'no-drag-shoe-a', result: 'ok' }],
+    ...over,
+  });
+
+  it('the form lists each target with its tolerance and its source', () => {
+    const s = spring();
+    expect(s.tolerance).toMatchObject({ source: 'common practice', band: { kind: 'absolute' } });
+    expect(targets.find((t) => t.settingKey === 'holderBackOff')?.tolerance).toMatchObject({
+      direction: 'loosen',
+    });
+  });
+
+  it('a technician never sees a draft revision, nor makes a record against one', async () => {
+    const rev = await ctx.request('GET', `/api/revisions/${draftRevisionId}`, { as: 'technician' });
+    expect(rev.body.inputs ?? null).toBeNull();
+    const form = await ctx.request('GET', `/api/revisions/${draftRevisionId}/field-form`, {
+      as: 'technician',
+    });
+    expect(form.status).toBe(404);
+    const res = await ctx.request('POST', '/api/field-records', {
+      as: 'technician',
+      body: body({ revisionId: draftRevisionId }),
+    });
+    expect(res.status).toBe(404);
+  });
+
+  it('create is idempotent by the client id: 201, then 200 with the same record, stored once', async () => {
+    const b = body();
+    const first = await ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
+    expect(first.status, first.text).toBe(201);
+    const again = await ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
+    expect(again.status, again.text).toBe(200);
+    expect(again.body.id).toBe(first.body.id);
+    const list = await ctx.request('GET', `/api/field-records?positionId=${reg.positionId}`, {
+      as: 'viewer',
+    });
+    expect(list.body.items).toHaveLength(1);
+    // Ten retries racing each other still leave one record.
+    const c = body();
+    const raced = await Promise.all(
+      Array.from({ length: 10 }, () =>
+        ctx.request('POST', '/api/field-records', { as: 'technician', body: c }),
+      ),
+    );
+    expect(raced.map((r) => r.status).sort()).toEqual([
+      200, 200, 200, 200, 200, 200, 200, 200, 200, 201,
+    ]);
+    const db = ctx.app.get(Database);
+    const n = await db
+      .selectFrom('fieldRecords')
+      .select((e) => e.fn.countAll<string>().as('n'))
+      .executeTakeFirstOrThrow();
+    expect(Number(n.n)).toBe(2);
+  });
+
+  it('bad input is a 400 with field paths', async () => {
+    const res = await ctx.request('POST', '/api/field-records', {
+      as: 'technician',
+      body: body({
+        kind: 'guesswork',
+        measurements: [{ settingKey: 'springLength', asLeft: 'long' }],
+      }),
+    });
+    expect(res.status).toBe(400);
+    const paths = res.body.error.fields.map((f: { path: string }) => f.path);
+    expect(paths).toEqual(expect.arrayContaining(['kind', 'measurements.0.asLeft']));
+    const unknownKey = await ctx.request('POST', '/api/field-records', {
+      as: 'technician',
+      body: body({ measurements: [{ settingKey: 'nonsense', asLeft: 1 }] }),
+    });
+    expect(unknownKey.status).toBe(400);
+    expect(unknownKey.body.error.fields[0].path).toBe('measurements.0.settingKey');
+  });
+
+  it('out of tolerance as left: no signature without a reason; with one, owner and plant engineers are told', async () => {
+    const s = spring();
+    const b = body({
+      measurements: [{ settingKey: 'springLength', asFound: null, asLeft: s.value + 0.002 }],
+    });
+    const created = await ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
+    expect(created.body.outOfTolerance).toBe(true);
+    expect(created.body.measurements[0].asLeftVerdict).toMatchObject({ status: 'out' });
+    const refused = await ctx.request('POST', `/api/field-records/${b.id}/sign`, {
+      as: 'technician',
+      body: {},
+    });
+    expect(refused.status).toBe(400);
+    expect(refused.body.error.fields[0].path).toBe('measurements.0.reason');
+    const upd = await ctx.request('PATCH', `/api/field-records/${b.id}`, {
+      as: 'technician',
+      body: {
+        measurements: [
+          {
+            settingKey: 'springLength',
+            asLeft: s.value + 0.002,
+            reason: 'Adjuster nut seized; new nut ordered.',
+          },
+        ],
+      },
+    });
+    expect(upd.status, upd.text).toBe(200);
+    const signed = await ctx.request('POST', `/api/field-records/${b.id}/sign`, {
+      as: 'technician',
+      body: {},
+    });
+    expect(signed.status, signed.text).toBe(200);
+    expect(signed.body.status).toBe('signed');
+    expect(signed.body.signed.by.initials).toBe('NH');
+    expect(signed.body.verificationCode).toMatch(/^[A-Z2-7]{10}$/);
+    const mail = await waitFor(() =>
+      ctx.smtp.mails.find((m) => m.raw.includes('out of tolerance')),
+    );
+    expect(mail.to).toEqual(
+      expect.arrayContaining(['engineer@holdfast.test', 'checker@holdfast.test']),
+    );
+    const due = await ctx.request('GET', '/api/field-records/due', { as: 'checker' });
+    expect(due.body.awaitingCountersign).toEqual([
+      expect.objectContaining({ recordId: b.id, outOfTolerance: true }),
+    ]);
+  });
+
+  it('sign then countersign: by a plant engineer who did not sign; then the record is immutable', async () => {
+    const b = body();
+    await ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
+    expect(
+      (
+        await ctx.request('POST', `/api/field-records/${b.id}/countersign`, {
+          as: 'checker',
+          body: {},
+        })
+      ).status,
+    ).toBe(409);
+    await ctx.request('POST', `/api/field-records/${b.id}/sign`, { as: 'technician', body: {} });
+    expect(
+      (
+        await ctx.request('POST', `/api/field-records/${b.id}/countersign`, {
+          as: 'technician',
+          body: {},
+        })
+      ).status,
+    ).toBe(403);
+    expect(
+      (
+        await ctx.request('POST', `/api/field-records/${b.id}/countersign`, {
+          as: 'viewer',
+          body: {},
+        })
+      ).status,
+    ).toBe(403);
+    const cs = await ctx.request('POST', `/api/field-records/${b.id}/countersign`, {
+      as: 'checker',
+      body: { note: 'Seen on site.' },
+    });
+    expect(cs.status, cs.text).toBe(200);
+    expect(cs.body.status).toBe('countersigned');
+    const edit = await ctx.request('PATCH', `/api/field-records/${b.id}`, {
+      as: 'technician',
+      body: { findings: 'changed later' },
+    });
+    expect(edit.status).toBe(409);
+    const audit = await ctx.app
+      .get(Database)
+      .selectFrom('auditEvents')
+      .select('action')
+      .where('entityId', '=', b.id)
+      .orderBy('at')
+      .execute();
+    expect(audit.map((a) => a.action)).toEqual([
+      'field-record.created',
+      'field-record.signed',
+      'field-record.countersigned',
+    ]);
+    const state = await ctx.request(
+      'GET',
+      `/api/register/positions/${reg.positionId}/field-state`,
+      {
+        as: 'technician',
+      },
+    );
+    expect(state.body.setTo).toMatchObject({ revisionId, superseded: false });
+  });
+
+  it('prints the record with targets, tolerances, signatures and a code /verify answers for', async () => {
+    ensurePoppler();
+    const b = body({
+      measurements: [
+        { settingKey: 'springLength', asFound: 0.2, asLeft: spring().value, reason: '' },
+      ],
+      findings: 'Lining at 9 mm on both shoes.',
+    });
+    await ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
+    const signed = await ctx.request('POST', `/api/field-records/${b.id}/sign`, {
+      as: 'technician',
+      body: {},
+    });
+    const res = await fetch(`${ctx.baseUrl}/api/field-records/${b.id}/pdf`, {
+      headers: { authorization: `Bearer ${await ctx.token('viewer')}` },
+    });
+    expect(res.status).toBe(200);
+    expect(res.headers.get('content-type')).toContain('application/pdf');
+    const facts = inspectPdf(Buffer.from(await res.arrayBuffer()), 'field-record');
+    facts.text = facts.text.replace(/\s+/g, ' ');
+    expect(facts.text).toContain('Field record');
+    expect(facts.text).toContain('Main spring length as set');
+    expect(facts.text).toMatch(/± 0\.50* mm/);
+    expect(facts.text).toContain('Noor Halden (NH)');
+    expect(facts.text).toContain(signed.body.verificationCode);
+    expect(facts.text).toContain('Lining at 9 mm on both shoes.');
+    expect(facts.fonts.length).toBeGreaterThan(0);
+    expect(facts.fonts.every((f) => f.embedded)).toBe(true);
+    const v = await ctx.request('GET', `/api/verify/${signed.body.verificationCode}`);
+    expect(v.status).toBe(200);
+    expect(v.body).toMatchObject({
+      kind: 'field-record',
+      status: 'signed',
+      setTo: { revisionLabel: 'A', current: true },
+    });
+  });
+
+  it('a record made against a revision since superseded is flagged', async () => {
+    const b = body();
+    await ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
+    const sheetId = (await ctx.request('GET', `/api/revisions/${revisionId}`, { as: 'engineer' }))
+      .body.sheetId;
+    const next = await ctx.request('POST', `/api/sheets/${sheetId}/revisions`, {
+      as: 'engineer',
+      body: { changeNote: 'B.' },
+    });
+    await submit(ctx, next.body.id);
+    await approve(ctx, next.body.id);
+    const got = await ctx.request('GET', `/api/field-records/${b.id}`, { as: 'technician' });
+    expect(got.body.flags).toEqual({ superseded: true, underReview: false });
+  });
+
+  it('due and overdue lists, and a reminder sent once ahead of the due date', async () => {
+    const put = await ctx.request(
+      'PUT',
+      `/api/register/positions/${reg.positionId}/inspection-interval`,
+      {
+        as: 'engineer',
+        body: { basis: 'days', every: 30, remindDaysAhead: 7 },
+      },
+    );
+    expect(put.status, put.text).toBe(200);
+    const b = body({ performedAt: new Date(Date.now() - 25 * 86_400_000).toISOString() });
+    await ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
+    await ctx.request('POST', `/api/field-records/${b.id}/sign`, { as: 'technician', body: {} });
+    const due = await ctx.request('GET', '/api/field-records/due', { as: 'technician' });
+    expect(due.body.due.map((d: { positionId: string }) => d.positionId)).toEqual([reg.positionId]);
+    expect(due.body.overdue).toEqual([]);
+    const schedule = ctx.app.get(InspectionScheduleService);
+    expect(await schedule.sendReminders()).toBe(1);
+    expect(await schedule.sendReminders()).toBe(0);
+    await waitFor(() => ctx.smtp.mails.find((m) => m.raw.includes('inspection due')));
+    await new Promise((r) => setTimeout(r, 1500));
+    expect(ctx.smtp.mails.filter((m) => m.raw.includes('inspection due'))).toHaveLength(1);
+    const later = await schedule.due(
+      { id: randomUUID(), role: 'technician' } as never,
+      new Date(Date.now() + 10 * 86_400_000),
+    );
+    expect(later.overdue.map((d) => d.positionId)).toEqual([reg.positionId]);
+  });
+});
+
+describe('field-record routes × roles', () => {
+  let ctx: SheetsContext;
+  beforeAll(async () => {
+    ctx = await createSheetsContext();
+    await ctx.resetAll();
+  });
+  afterAll(() => ctx?.closeAll());
+
+  const NIL = '00000000-0000-4000-8000-000000000000';
+  // Probes with an empty body or an id that matches nothing: allowed callers reach validation
+  // (400) or a missing row (404); the rest get 401/403 from the guard.
+  const rows: [string, string, Record<string, number>, unknown?][] = [
+    [
+      'GET',
+      '/api/field-records',
+      { anonymous: 401, engineer: 200, checker: 200, viewer: 200, admin: 200, technician: 200 },
+    ],
+    [
+      'POST',
+      '/api/field-records',
+      { anonymous: 401, engineer: 400, checker: 400, viewer: 403, admin: 403, technician: 400 },
+      {},
+    ],
+    [
+      'PATCH',
+      `/api/field-records/${NIL}`,
+      { anonymous: 401, engineer: 404, checker: 404, viewer: 403, admin: 403, technician: 404 },
+      {},
+    ],
+    [
+      'POST',
+      `/api/field-records/${NIL}/sign`,
+      { anonymous: 401, engineer: 404, checker: 404, viewer: 403, admin: 403, technician: 404 },
+      {},
+    ],
+    [
+      'POST',
+      `/api/field-records/${NIL}/countersign`,
+      { anonymous: 401, engineer: 404, checker: 404, viewer: 403, admin: 403, technician: 403 },
+      {},
+    ],
+    [
+      'PUT',
+      `/api/register/positions/${NIL}/inspection-interval`,
+      { anonymous: 401, engineer: 400, checker: 400, viewer: 403, admin: 403, technician: 403 },
+      {},
+    ],
+    [
+      'GET',
+      `/api/register/positions/${NIL}/field-state`,
+      { anonymous: 401, engineer: 404, checker: 404, viewer: 404, admin: 404, technician: 404 },
+    ],
+  ];
+  for (const [method, path, want, body] of rows) {
+    it(`${method} ${path.replace(NIL, ':id')}`, async () => {
+      const got: Record<string, number> = {};
+      for (const caller of Object.keys(want)) {
+        const res = await ctx.request(method, path, {
+          ...(caller === 'anonymous' ? {} : { as: caller as 'technician' }),
+          ...(body !== undefined ? { body } : {}),
+        });
+        got[caller] = res.status;
+      }
+      expect(got).toEqual(want);
+    });
+  }
+});
