@@ -10,9 +10,11 @@ import { usePositionState } from '../../../features/field-records/api/get-positi
 import { RecordTimeline } from '../../../features/field-records/components/record-timeline';
 import { WearChart } from '../../../features/field-records/components/wear-chart';
 import {
+  MIN_RESERVE_KEY,
   liningSeries,
   reserveStrokeSeries,
 } from '../../../features/field-records/components/wear-series';
+import { useFieldForm } from '../../../features/field-records/api/get-field-form';
 import { kindLabel } from './record-form';
 
 export const handle: RouteHandle = { title: 'Field records' };
@@ -52,6 +54,10 @@ export function Component() {
   const state = usePositionState(positionId);
   const records = history.data?.items ?? [];
   const tag = records[0]?.positionTag;
+  // The minimum reserve stroke is a printed target of the revision the brake was last set to.
+  const lastRevision = records[records.length - 1]?.revisionId ?? '';
+  const form = useFieldForm(lastRevision);
+  const minimum = form.data?.targets.find((t) => t.settingKey === MIN_RESERVE_KEY)?.value ?? null;
   const canCountersign = user.role === 'engineer' || user.role === 'checker';
   return (
     <Page title={tag ? `Field records · ${tag}` : 'Field records'}>
@@ -71,7 +77,7 @@ export function Component() {
               interval set for the position and follow the brake and thruster makers&apos; data.
             </Alert>
             <SimpleGrid cols={{ base: 1, md: 2 }} spacing="md">
-              <WearChart title="Reserve stroke" series={reserveStrokeSeries(records)} />
+              <WearChart title="Reserve stroke" series={reserveStrokeSeries(records, minimum)} />
               <WearChart
                 title="Lining thickness, shoe A"
                 series={liningSeries(records, 'lining-thickness-shoe-a')}

@@ -25,5 +25,5 @@ export function fieldFormQueryOptions(revisionId: string) {
 }
 
 export function useFieldForm(revisionId: string) {
-  return useQuery(fieldFormQueryOptions(revisionId));
+  return useQuery({ ...fieldFormQueryOptions(revisionId), enabled: revisionId !== '' });
 }

@@ -104,14 +104,14 @@ function rec(
 }
 
 describe('wear series from the records', () => {
-  it('starts at the last setting and predicts the minimum (the lower tolerance bound)', () => {
+  it('starts at the last setting and predicts when the minimum is reached', () => {
     const records = [
       rec('2025-01-01', 'commissioning', null, 0.012, 0.008),
       rec('2025-04-11', 'periodic-inspection', 0.011, 0.011, 0.0078),
       rec('2025-07-20', 'periodic-inspection', 0.0104, 0.0104, 0.0075),
       rec('2025-10-28', 'periodic-inspection', 0.0092, 0.0092, 0.0074),
     ];
-    const s = reserveStrokeSeries(records);
+    const s = reserveStrokeSeries(records, 0.006);
     expect(s.readings.map((r) => r.value)).toEqual([0.012, 0.011, 0.0104, 0.0092]);
     expect(s.minimum).toBeCloseTo(0.006, 12);
     expect(s.fit?.kind).toBe('trend');
@@ -130,7 +130,7 @@ describe('wear series from the records', () => {
       rec('2025-07-20', 're-adjustment', 0.0075, 0.012),
       rec('2025-10-28', 'periodic-inspection', 0.0112, 0.0112),
     ];
-    const s = reserveStrokeSeries(records);
+    const s = reserveStrokeSeries(records, 0.006);
     expect(s.readings.map((r) => r.value)).toEqual([0.012, 0.0112]);
     expect(s.fit).toBeNull();
     expect(s.note).toMatch(/at least 3 readings/);

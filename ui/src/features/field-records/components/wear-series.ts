@@ -3,8 +3,6 @@ import {
   isCalcInputError,
   length,
   time,
-  toleranceBounds,
-  type FieldTolerance,
   type WearReading,
   type WearTrend,
 } from '@holdfast/calc';
@@ -13,6 +11,8 @@ import type { FieldRecord } from '@holdfast/shared';
 const DAY_S = 86400;
 /** The measurement the reserve-stroke trend is fitted to (the field card's key). */
 export const RESERVE_KEY = 'reserveStroke';
+/** The field-form target holding the minimum reserve stroke (printed, not measured). */
+export const MIN_RESERVE_KEY = 'minReserveStroke';
 const RESET_KINDS = new Set<FieldRecord['kind']>([
   'commissioning',
   're-adjustment',
@@ -22,7 +22,7 @@ const RESET_KINDS = new Set<FieldRecord['kind']>([
 export interface WearSeries {
   /** Readings since the brake was last set: the as-left value then, the as-found values after. */
   readings: { at: Date; value: number }[];
-  /** The lowest accepted reserve stroke (the tolerance's lower bound), SI, when declared. */
+  /** The minimum reserve stroke (the field form's 'minReserveStroke' target), SI, when known. */
   minimum: number | null;
   fit: WearTrend | null;
   /** Why there is no fit (too few readings, no spread), in the fitter's words. */
@@ -35,16 +35,15 @@ const seconds = (iso: string) => Date.parse(iso) / 1000;
  * The reserve-stroke series of a position since its last setting. A re-adjustment, lining
  * change or commissioning sets the stroke anew, so readings before it belong to another line.
  */
-export function reserveStrokeSeries(records: readonly FieldRecord[]): WearSeries {
+export function reserveStrokeSeries(
+  records: readonly FieldRecord[],
+  minimum: number | null,
+): WearSeries {
   const sorted = [...records].sort((a, b) => a.performedAt.localeCompare(b.performedAt));
   let readings: WearSeries['readings'] = [];
-  let minimum: number | null = null;
   for (const r of sorted) {
     const m = r.measurements.find((x) => x.settingKey === RESERVE_KEY);
     if (!m) continue;
-    if (m.target !== null && m.tolerance) {
-      minimum = toleranceBounds(m.target, m.tolerance as FieldTolerance).lower;
-    }
     const at = new Date(r.performedAt);
     const reset = RESET_KINDS.has(r.kind) || (m.asLeft !== null && m.asLeft !== m.asFound);
     if (m.asFound !== null && !RESET_KINDS.has(r.kind)) readings.push({ at, value: m.asFound });
