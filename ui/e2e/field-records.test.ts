@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { apiClientAs } from './support/api';
 import { seriousViolations } from './support/axe';
 import { e2eBaseUrl, e2eSkipReason, launchBrowser, type BrowserSession } from './support/browser';
@@ -35,7 +35,7 @@ describe.skipIf(skipReason !== null)('field records in the browser', () => {
   let form: FieldFormAnswer;
 
   beforeAll(async () => {
-    browser = await launchBrowser({ width: 390, height: 844 });
+    browser = await launchBrowser({ width: 1024, height: 844 });
     const call = await apiClientAs(baseUrl, 'technician');
     const register = await call<RegisterAnswer>('GET', '/register');
     const position = register.sites
@@ -45,13 +45,19 @@ describe.skipIf(skipReason !== null)('field records in the browser', () => {
     revisionId = position.inForce[0]!.revisionId;
     form = await call<FieldFormAnswer>('GET', `/revisions/${revisionId}/field-form`);
   });
+  afterEach(async () => {
+    await browser?.context.setOffline(false);
+  });
   afterAll(async () => {
     await browser?.close();
   });
 
   it('offline: the record waits on the device and reaches the server exactly once', async () => {
     const { page, context } = browser;
+    // The frame shows the signed-in name only beside the side navigation; sign in wide, then
+    // work at phone width.
     await signInAs(page, baseUrl, 'technician');
+    await page.setViewportSize({ width: 390, height: 844 });
     await page.goto(`${baseUrl}/field-records/new/${revisionId}`);
     await page.getByRole('heading', { name: 'Settings measured' }).waitFor();
 
@@ -63,10 +69,12 @@ describe.skipIf(skipReason !== null)('field records in the browser', () => {
     const first = page.locator(`[data-setting="${measured[0]!.settingKey}"]`);
     await first.getByRole('textbox', { name: 'As found' }).pressSequentially('12.5');
     await first.getByRole('textbox', { name: 'As left' }).pressSequentially('12.5');
+    // 12.5 mm is far off any spring-length target: out of tolerance at once, and a reason is
+    // asked for before the record can be saved.
+    await first.getByText('Out of tolerance', { exact: false }).first().waitFor();
     await first
-      .getByText(/tolerance/)
-      .first()
-      .waitFor();
+      .getByRole('textbox', { name: /Why it is left out of tolerance/ })
+      .pressSequentially('Tensioner seized; new one ordered');
     for (const c of form.checks) {
       await page.getByRole('radiogroup', { name: c.label }).getByText('N/A').click();
     }

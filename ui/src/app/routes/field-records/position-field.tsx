@@ -33,7 +33,7 @@ function AtAGlance({ state }: { state: PositionFieldState }) {
         Last inspected:{' '}
         {state.lastInspected ? state.lastInspected.performedAt.slice(0, 10) : 'never'}
       </Text>
-      <Text c={due?.overdue ? 'red' : undefined} fw={due?.overdue ? 700 : undefined}>
+      <Text c={due?.overdue ? 'fail.8' : undefined} fw={due?.overdue ? 700 : undefined}>
         Next due:{' '}
         {due?.date
           ? due.date.slice(0, 10)

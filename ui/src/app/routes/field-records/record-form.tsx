@@ -171,7 +171,7 @@ function RecordForm({ form }: { form: FieldForm }) {
         onChange={(e) => setFindings(e.currentTarget.value)}
       />
       {Object.keys(errors).length > 0 && (
-        <Text c="red" role="alert">
+        <Text c="fail.8" role="alert">
           Some entries need attention before the record can be saved.
         </Text>
       )}
@@ -198,7 +198,7 @@ function RecordForm({ form }: { form: FieldForm }) {
           </Button>
         )}
       </Group>
-      {sign.isError && <Text c="red">{errorMessage(sign.error)}</Text>}
+      {sign.isError && <Text c="fail.8">{errorMessage(sign.error)}</Text>}
     </Stack>
   );
 }

@@ -41,7 +41,7 @@ export function CheckItems(props: {
                 onChange={(v) => props.onChange(c.key, { ...d, result: v as FieldCheckResult })}
               />
               {error && (
-                <Text size="sm" c="red">
+                <Text size="sm" c="fail.8">
                   {error}
                 </Text>
               )}

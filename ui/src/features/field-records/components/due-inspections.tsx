@@ -17,7 +17,7 @@ function Line({ d }: { d: DueInspection }) {
       </Anchor>{' '}
       {dueText(d)}
       {d.nextDue.overdue ? (
-        <Badge ml="xs" color="red" size="sm">
+        <Badge ml="xs" color="fail" size="sm">
           overdue
         </Badge>
       ) : null}

@@ -13,7 +13,7 @@ function VerdictBadge({ target, value }: { target: FieldTarget; value: InputValu
   const sign = dev > 0 ? '+' : dev < 0 ? '−' : '±';
   const text = `${sign}${Math.abs(Number(dev.toPrecision(3)))} ${verdict.display.label}`;
   return (
-    <Badge color={verdict.status === 'in' ? 'teal' : 'red'} variant="light" size="lg">
+    <Badge color={verdict.status === 'in' ? 'pass' : 'fail'} size="lg">
       {verdict.status === 'in' ? 'In tolerance' : 'Out of tolerance'} ({text})
     </Badge>
   );

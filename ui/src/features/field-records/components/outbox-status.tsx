@@ -3,10 +3,10 @@ import { outboxStateLabel } from '../offline/use-outbox';
 import type { OutboxEntry } from '../offline/outbox-store';
 
 const colour: Record<OutboxEntry['state'], string> = {
-  saved: 'yellow',
-  sending: 'blue',
-  sent: 'teal',
-  refused: 'red',
+  saved: 'amber',
+  sending: 'steel',
+  sent: 'pass',
+  refused: 'fail',
 };
 
 /** Where a record saved on this device stands: saved, sending, sent, or refused and why. */

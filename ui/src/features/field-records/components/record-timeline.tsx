@@ -3,7 +3,7 @@ import type { FieldRecord } from '@holdfast/shared';
 import { errorMessage } from '../../../lib/api-client';
 import { useSignFieldRecord } from '../api/sign-field-record';
 
-const statusColour = { draft: 'gray', signed: 'blue', countersigned: 'teal' } as const;
+const statusColour = { draft: 'gray', signed: 'steel', countersigned: 'pass' } as const;
 
 /** The records of a position, newest first; plant engineers countersign signed ones here. */
 export function RecordTimeline(props: {
@@ -24,9 +24,9 @@ export function RecordTimeline(props: {
             </Text>
             <Group gap={4}>
               <Badge color={statusColour[r.status]}>{r.status}</Badge>
-              {r.outOfTolerance && <Badge color="red">out of tolerance</Badge>}
-              {r.flags.superseded && <Badge color="orange">revision superseded</Badge>}
-              {r.flags.underReview && <Badge color="orange">revision under review</Badge>}
+              {r.outOfTolerance && <Badge color="fail">out of tolerance</Badge>}
+              {r.flags.superseded && <Badge color="amber">revision superseded</Badge>}
+              {r.flags.underReview && <Badge color="amber">revision under review</Badge>}
             </Group>
           </Group>
           <Text size="sm">
@@ -46,7 +46,7 @@ export function RecordTimeline(props: {
             </Button>
           )}
           {sign.isError && sign.variables?.id === r.id && (
-            <Text c="red" size="sm">
+            <Text c="fail.8" size="sm">
               {errorMessage(sign.error)}
             </Text>
           )}
