@@ -100,6 +100,8 @@ export { travelShoeBrakeSheet, evaluateTravelShoeBrake } from './sheets/travel-s
 export { caliperDiscBrakeSheet, evaluateCaliperDiscBrake } from './sheets/caliper-disc-brake.js';
 export { makeCheck, type CheckSpec } from './sheets/checks.js';
 export { SAFETY_CAUTIONS } from './sheets/sheet-output.js';
+export * from './field/wear-trend.js';
+export { studentTQuantile, studentTCdf } from './field/student-t.js';
 export {
   evaluateTolerance,
   toleranceBounds,

@@ -32,6 +32,7 @@ describe.skipIf(skipReason !== null)('accessibility of the main screens', () => 
   let browser: BrowserSession;
   let approved = { sheetId: '', revisionId: '' };
   let draft = { sheetId: '', revisionId: '' };
+  let field = { positionId: '', revisionId: '' };
 
   beforeAll(async () => {
     browser = await launchBrowser({ width: 1024, height: 900 });
@@ -45,6 +46,14 @@ describe.skipIf(skipReason !== null)('accessibility of the main screens', () => 
     approved = { sheetId: a.id, revisionId: a.approved!.id };
     const d = items.find((s) => s.latest.state === 'draft')!;
     draft = { sheetId: d.id, revisionId: d.latest.id };
+    const register = await apiAs(baseUrl, 'engineer', 'GET', '/register');
+    const positions = (
+      register.sites as {
+        machines: { positions: { id: string; inForce: { revisionId: string }[] }[] }[];
+      }[]
+    ).flatMap((site) => site.machines.flatMap((m) => m.positions));
+    const set = positions.find((p) => p.inForce.length > 0)!;
+    field = { positionId: set.id, revisionId: set.inForce[0]!.revisionId };
   });
   afterAll(async () => {
     await browser?.close();
@@ -99,6 +108,19 @@ describe.skipIf(skipReason !== null)('accessibility of the main screens', () => 
       ready: heading('Undelivered mail'),
     },
     { name: 'account', who: 'engineer', path: () => '/account', ready: heading('Your account') },
+    {
+      name: 'field-record-form',
+      who: 'technician',
+      path: () => `/field-records/new/${field.revisionId}`,
+      ready: heading('Settings measured'),
+    },
+    {
+      name: 'field-position',
+      who: 'technician',
+      path: () => `/positions/${field.positionId}/field`,
+      ready: heading('Timeline'),
+    },
+    { name: 'queue-technician', who: 'technician', path: () => '/', ready: heading('Work queue') },
     {
       name: 'reset-password',
       who: null,

@@ -14,9 +14,12 @@ import '@mantine/dropzone/styles.css';
 import '@mantine/charts/styles.css';
 import './app/global.css';
 import { App } from './app/app';
+import { registerServiceWorker } from './app/service-worker';
 
 createRoot(document.getElementById('root')!).render(
   <StrictMode>
     <App />
   </StrictMode>,
 );
+
+registerServiceWorker();

@@ -42,6 +42,12 @@ export const demoUsers = {
     role: 'viewer',
   },
   admin: { email: 'admin@holdfast.test', displayName: 'Sam Ortiz', initials: 'SO', role: 'admin' },
+  technician: {
+    email: 'technician@holdfast.test',
+    displayName: 'Noor Halden',
+    initials: 'NH',
+    role: 'technician',
+  },
 } as const satisfies Record<string, DemoUser>;
 
 export type DemoUserKey = keyof typeof demoUsers;

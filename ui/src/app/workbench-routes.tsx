@@ -44,5 +44,13 @@ export function workbenchRoutes(queryClient: QueryClient): RouteObject[] {
     { path: 'sheets/:sheetId/audit', lazy: lazy(() => import('./routes/sheets/audit-page')) },
     { path: 'equipment', lazy: lazy(() => import('./routes/equipment/equipment')) },
     { path: 'criteria', lazy: lazy(() => import('./routes/criteria/criteria')) },
+    {
+      path: 'field-records/new/:revisionId',
+      lazy: lazy(() => import('./routes/field-records/record-form')),
+    },
+    {
+      path: 'positions/:positionId/field',
+      lazy: lazy(() => import('./routes/field-records/position-field')),
+    },
   ];
 }

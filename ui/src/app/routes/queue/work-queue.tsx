@@ -8,6 +8,7 @@ import { useWorkQueue, workQueueQueryOptions } from '../../../features/queue/api
 import { QueueSection } from '../../../features/queue/components/queue-section';
 import { StateBadge } from '../../../features/sheets/components/state-badge';
 import { UnderReviewQueue } from '../../../features/criteria-review/components/under-review-queue';
+import { DueInspectionsPanel } from '../../../features/field-records/components/due-inspections';
 import { AdminQueue, queueSections, roleLine } from './queue-sections';
 
 export const handle: RouteHandle = { title: 'Work queue' };
@@ -39,6 +40,7 @@ export function Component() {
       ) : (
         <SimpleGrid cols={{ base: 1, md: 2 }} spacing="md">
           <UnderReviewQueue />
+          {user.role !== 'admin' && user.role !== 'viewer' ? <DueInspectionsPanel /> : null}
           {queueSections(user.role).map((section) => (
             <QueueSection
               key={section.id}

@@ -1,4 +1,4 @@
-import { Anchor, Button, Stack, Table, Text } from '@mantine/core';
+import { Anchor, Button, Group, Stack, Table, Text } from '@mantine/core';
 import { Link } from 'react-router-dom';
 import type { Position } from '@holdfast/shared';
 import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
@@ -51,6 +51,25 @@ export function PositionRow({ position: p, onEdit }: PositionRowProps) {
             ))}
           </Stack>
         )}
+        {p.inForce.length > 0 ? (
+          <Group gap="xs" mt={4}>
+            <Anchor component={Link} to={`/positions/${p.id}/field`} size="sm">
+              Field records
+            </Anchor>
+            {p.inForce.map((f) => (
+              <Anchor
+                key={f.revisionId}
+                component={Link}
+                to={`/field-records/new/${f.revisionId}`}
+                size="sm"
+                aria-label={`Record field work on ${p.tag} against ${f.documentNumber} rev. ${f.revisionLabel}`}
+              >
+                Record field work
+                {p.inForce.length > 1 ? ` (${f.documentNumber})` : ''}
+              </Anchor>
+            ))}
+          </Group>
+        ) : null}
         {p.openSheets.map((o) => (
           <Text key={o.sheetId} size="xs" c="dimmed">
             Open: {o.documentNumber} rev. {o.revisionLabel} ({stateLabel(o.state).toLowerCase()})

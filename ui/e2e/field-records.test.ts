@@ -1,0 +1,114 @@
+import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
+import { apiClientAs } from './support/api';
+import { seriousViolations } from './support/axe';
+import { e2eBaseUrl, e2eSkipReason, launchBrowser, type BrowserSession } from './support/browser';
+import { screenshot } from './support/screenshot';
+import { signInAs } from './support/sign-in';
+
+const skipReason = e2eSkipReason();
+if (skipReason) console.warn(`[browser] field-record tests skipped: ${skipReason}`);
+
+interface RegisterAnswer {
+  sites: {
+    machines: {
+      positions: { id: string; tag: string; inForce: { revisionId: string }[] }[];
+    }[];
+  }[];
+}
+interface FieldFormAnswer {
+  targets: { settingKey: string; label: string; tolerance: unknown }[];
+  checks: { key: string; label: string; hasValue: boolean }[];
+}
+interface ListAnswer {
+  items: { id: string }[];
+}
+
+/**
+ * Issue 13 item 6: a fitter records at 390 px, key by key; without a connection the record is
+ * kept on the device and sent when the connection returns, and the server holds it exactly once.
+ */
+describe.skipIf(skipReason !== null)('field records in the browser', () => {
+  const baseUrl = e2eBaseUrl()!;
+  let browser: BrowserSession;
+  let positionId = '';
+  let revisionId = '';
+  let form: FieldFormAnswer;
+
+  beforeAll(async () => {
+    browser = await launchBrowser({ width: 1024, height: 844 });
+    const call = await apiClientAs(baseUrl, 'technician');
+    const register = await call<RegisterAnswer>('GET', '/register');
+    const position = register.sites
+      .flatMap((s) => s.machines.flatMap((m) => m.positions))
+      .find((p) => p.inForce.length > 0)!;
+    positionId = position.id;
+    revisionId = position.inForce[0]!.revisionId;
+    form = await call<FieldFormAnswer>('GET', `/revisions/${revisionId}/field-form`);
+  });
+  afterEach(async () => {
+    await browser?.context.setOffline(false);
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('offline: the record waits on the device and reaches the server exactly once', async () => {
+    const { page, context } = browser;
+    // The frame shows the signed-in name only beside the side navigation; sign in wide, then
+    // work at phone width.
+    await signInAs(page, baseUrl, 'technician');
+    await page.setViewportSize({ width: 390, height: 844 });
+    await page.goto(`${baseUrl}/field-records/new/${revisionId}`);
+    await page.getByRole('heading', { name: 'Settings measured' }).waitFor();
+
+    await context.setOffline(true);
+    await page.getByLabel('Work done').selectOption('periodic-inspection');
+    const measured = form.targets.filter((t) => t.tolerance !== null);
+    expect(measured.length).toBeGreaterThan(0);
+    // The first value is typed key by key, with a decimal point, as a fitter would.
+    const first = page.locator(`[data-setting="${measured[0]!.settingKey}"]`);
+    await first.getByRole('textbox', { name: 'As found' }).pressSequentially('12.5');
+    await first.getByRole('textbox', { name: 'As left' }).pressSequentially('12.5');
+    // 12.5 mm is far off any spring-length target: out of tolerance at once, and a reason is
+    // asked for before the record can be saved.
+    await first.getByText('Out of tolerance', { exact: false }).first().waitFor();
+    await first
+      .getByRole('textbox', { name: /Why it is left out of tolerance/ })
+      .pressSequentially('Tensioner seized; new one ordered');
+    for (const c of form.checks) {
+      await page.getByRole('radiogroup', { name: c.label }).getByText('N/A').click();
+    }
+    await page.getByRole('textbox', { name: 'Findings' }).pressSequentially('Checked offline');
+    await page.getByRole('button', { name: 'Save record' }).click();
+    await expect
+      .poll(() => page.getByTestId('outbox-state').textContent())
+      .toBe('Saved on this device');
+    await screenshot(page, 'field-record-390-offline');
+
+    const call = await apiClientAs(baseUrl, 'technician');
+    const before = await call<ListAnswer>('GET', `/field-records?positionId=${positionId}`);
+
+    await context.setOffline(false);
+    await expect.poll(() => page.getByTestId('outbox-state').textContent()).toBe('Sent');
+    const after = await call<ListAnswer>('GET', `/field-records?positionId=${positionId}`);
+    expect(after.items.length).toBe(before.items.length + 1);
+
+    // Coming back again (a second 'online') sends nothing twice.
+    await context.setOffline(true);
+    await context.setOffline(false);
+    await page.waitForTimeout(500);
+    const again = await call<ListAnswer>('GET', `/field-records?positionId=${positionId}`);
+    expect(again.items.length).toBe(after.items.length);
+  });
+
+  it('the record form and the position page pass the accessibility check', async () => {
+    const { page } = browser;
+    await page.goto(`${baseUrl}/field-records/new/${revisionId}`);
+    await page.getByRole('heading', { name: 'Settings measured' }).waitFor();
+    expect(await seriousViolations(page)).toEqual([]);
+    await page.goto(`${baseUrl}/positions/${positionId}/field`);
+    await page.getByRole('heading', { name: 'Timeline' }).waitFor();
+    await screenshot(page, 'field-position-390');
+    expect(await seriousViolations(page)).toEqual([]);
+  });
+});

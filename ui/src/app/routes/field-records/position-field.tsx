@@ -1,0 +1,103 @@
+import { useParams } from 'react-router-dom';
+import { Alert, SimpleGrid, Skeleton, Stack, Text, Title } from '@mantine/core';
+import type { PositionFieldState } from '@holdfast/shared';
+import { Page } from '../../../components/layouts/page';
+import { ErrorPanel } from '../../../components/errors/error-panel';
+import type { RouteHandle } from '../../../lib/route-handle';
+import { useCurrentUser } from '../../../lib/session';
+import { usePositionHistory } from '../../../features/field-records/api/get-position-history';
+import { usePositionState } from '../../../features/field-records/api/get-position-state';
+import { RecordTimeline } from '../../../features/field-records/components/record-timeline';
+import { WearChart } from '../../../features/field-records/components/wear-chart';
+import {
+  MIN_RESERVE_KEY,
+  liningSeries,
+  reserveStrokeSeries,
+} from '../../../features/field-records/components/wear-series';
+import { useFieldForm } from '../../../features/field-records/api/get-field-form';
+import { kindLabel } from './record-form';
+
+export const handle: RouteHandle = { title: 'Field records' };
+
+function AtAGlance({ state }: { state: PositionFieldState }) {
+  const due = state.nextDue;
+  return (
+    <SimpleGrid cols={{ base: 1, sm: 2 }} spacing="sm">
+      <Text>
+        Set to:{' '}
+        {state.setTo
+          ? `${state.setTo.documentNumber} rev. ${state.setTo.revisionLabel} (${state.setTo.performedAt.slice(0, 10)})${state.setTo.superseded ? ', superseded since' : ''}`
+          : 'not recorded'}
+      </Text>
+      <Text>
+        Last inspected:{' '}
+        {state.lastInspected ? state.lastInspected.performedAt.slice(0, 10) : 'never'}
+      </Text>
+      <Text c={due?.overdue ? 'fail.8' : undefined} fw={due?.overdue ? 700 : undefined}>
+        Next due:{' '}
+        {due?.date
+          ? due.date.slice(0, 10)
+          : due?.meterHours != null
+            ? `at ${due.meterHours} h`
+            : 'no interval set'}
+        {due?.overdue ? ' (overdue)' : ''}
+      </Text>
+      <Text>Open findings: {state.openFindings.length}</Text>
+    </SimpleGrid>
+  );
+}
+
+export function Component() {
+  const { positionId = '' } = useParams();
+  const user = useCurrentUser();
+  const history = usePositionHistory(positionId);
+  const state = usePositionState(positionId);
+  const records = history.data?.items ?? [];
+  const tag = records[0]?.positionTag;
+  // The minimum reserve stroke is a printed target of the revision the brake was last set to.
+  const lastRevision = records[records.length - 1]?.revisionId ?? '';
+  const form = useFieldForm(lastRevision);
+  const minimum = form.data?.targets.find((t) => t.settingKey === MIN_RESERVE_KEY)?.value ?? null;
+  const canCountersign = user.role === 'engineer' || user.role === 'checker';
+  return (
+    <Page title={tag ? `Field records · ${tag}` : 'Field records'}>
+      <Stack gap="lg">
+        {state.isPending && <Skeleton h={60} />}
+        {state.isError && <ErrorPanel error={state.error} />}
+        {state.data && <AtAGlance state={state.data} />}
+        {history.isPending && <Skeleton h={240} />}
+        {history.isError && <ErrorPanel error={history.error} />}
+        {history.data && (
+          <>
+            <Title order={2} size="h3">
+              Wear and the next re-adjustment
+            </Title>
+            <Alert color="gray">
+              The prediction is a statistical estimate from the readings so far; inspect at the
+              interval set for the position and follow the brake and thruster makers&apos; data.
+            </Alert>
+            <SimpleGrid cols={{ base: 1, md: 2 }} spacing="md">
+              <WearChart title="Reserve stroke" series={reserveStrokeSeries(records, minimum)} />
+              <WearChart
+                title="Lining thickness, shoe A"
+                series={liningSeries(records, 'lining-thickness-shoe-a')}
+              />
+              <WearChart
+                title="Lining thickness, shoe B"
+                series={liningSeries(records, 'lining-thickness-shoe-b')}
+              />
+            </SimpleGrid>
+            <Title order={2} size="h3">
+              Timeline
+            </Title>
+            <RecordTimeline
+              records={records}
+              kindLabel={kindLabel}
+              canCountersign={canCountersign}
+            />
+          </>
+        )}
+      </Stack>
+    </Page>
+  );
+}

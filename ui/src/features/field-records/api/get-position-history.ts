@@ -1,0 +1,26 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { positionFieldHistorySchema, type PositionFieldHistory } from '@holdfast/shared';
+import { api } from '../../../lib/api-client';
+import { fieldApi } from './paths';
+import { fieldRecordKeys } from './sign-field-record';
+
+export function getPositionHistory(
+  positionId: string,
+  signal?: AbortSignal,
+): Promise<PositionFieldHistory> {
+  return api.get(fieldApi('positionHistory', { positionId }), {
+    schema: positionFieldHistorySchema,
+    signal,
+  });
+}
+
+export function positionHistoryQueryOptions(positionId: string) {
+  return queryOptions({
+    queryKey: fieldRecordKeys.history(positionId),
+    queryFn: ({ signal }) => getPositionHistory(positionId, signal),
+  });
+}
+
+export function usePositionHistory(positionId: string) {
+  return useQuery(positionHistoryQueryOptions(positionId));
+}

@@ -1,0 +1,59 @@
+import { Anchor, Badge, Paper, Stack, Text, Title } from '@mantine/core';
+import { Link } from 'react-router-dom';
+import type { DueInspection } from '@holdfast/shared';
+import { useDueInspections } from '../api/get-due-inspections';
+
+function dueText(d: DueInspection): string {
+  if (d.nextDue.date) return `due ${d.nextDue.date.slice(0, 10)}`;
+  if (d.nextDue.meterHours !== null) return `due at ${d.nextDue.meterHours} h`;
+  return 'no interval set';
+}
+
+function Line({ d }: { d: DueInspection }) {
+  return (
+    <Text size="sm">
+      <Anchor component={Link} to={`/positions/${d.positionId}/field`}>
+        {d.siteCode} · {d.machineTag} · {d.positionTag}
+      </Anchor>{' '}
+      {dueText(d)}
+      {d.nextDue.overdue ? (
+        <Badge ml="xs" color="fail" size="sm">
+          overdue
+        </Badge>
+      ) : null}
+    </Text>
+  );
+}
+
+/** Brake inspections overdue and coming due, and field records awaiting a countersignature. */
+export function DueInspectionsPanel() {
+  const due = useDueInspections();
+  if (!due.data) return null;
+  const { overdue, due: soon, awaitingCountersign } = due.data;
+  return (
+    <Paper withBorder p="md" component="section" aria-labelledby="field-due-title">
+      <Title order={2} size="h4" id="field-due-title" mb="xs">
+        Field inspections
+      </Title>
+      <Stack gap={4}>
+        {overdue.length + soon.length + awaitingCountersign.length === 0 && (
+          <Text size="sm" c="dimmed">
+            Nothing due.
+          </Text>
+        )}
+        {overdue.map((d) => (
+          <Line key={d.positionId} d={d} />
+        ))}
+        {soon.map((d) => (
+          <Line key={d.positionId} d={d} />
+        ))}
+        {awaitingCountersign.map((r) => (
+          <Text size="sm" key={r.recordId}>
+            {r.positionTag}: record of {r.performedAt.slice(0, 10)} awaits your countersignature
+            {r.outOfTolerance ? ' (out of tolerance)' : ''}
+          </Text>
+        ))}
+      </Stack>
+    </Paper>
+  );
+}

@@ -1,0 +1,72 @@
+import {
+  evaluateTolerance,
+  toSI,
+  type Dimension,
+  type FieldTolerance,
+  type InputValue,
+  type ToleranceVerdict,
+} from '@holdfast/calc';
+import type { FieldMeasurementInput, FieldTarget } from '@holdfast/shared';
+import { isQuantity } from '../../calc/utils/units';
+
+/** What the fitter typed for one target: as found, as left (each a quantity or raw text), why. */
+export interface MeasurementDraft {
+  asFound?: InputValue;
+  asLeft?: InputValue;
+  reason: string;
+}
+
+export type ReadValue = { kind: 'empty' } | { kind: 'value'; si: number } | { kind: 'invalid' };
+
+/** A typed value in SI, or why it is not one yet. */
+export function readSI(value: InputValue | undefined, dimension: string): ReadValue {
+  if (value === undefined || value === '') return { kind: 'empty' };
+  if (!isQuantity(value) || !Number.isFinite(value.value)) return { kind: 'invalid' };
+  try {
+    return { kind: 'value', si: toSI(value.value, value.unit, dimension as Dimension) };
+  } catch {
+    return { kind: 'invalid' };
+  }
+}
+
+/** In or out of the target's tolerance; null without a value or a tolerance. */
+export function verdictFor(target: FieldTarget, value: ReadValue): ToleranceVerdict | null {
+  if (value.kind !== 'value' || !target.tolerance) return null;
+  return evaluateTolerance(
+    target.value,
+    value.si,
+    target.tolerance as FieldTolerance,
+    target.dimension as Dimension,
+  );
+}
+
+/**
+ * The measurements of the form as the API takes them, and the field errors that stop a save:
+ * a value that is not a number, an as-left value out of tolerance without a reason.
+ */
+export function buildMeasurements(
+  targets: readonly FieldTarget[],
+  drafts: Readonly<Record<string, MeasurementDraft>>,
+): { measurements: FieldMeasurementInput[]; errors: Record<string, string> } {
+  const measurements: FieldMeasurementInput[] = [];
+  const errors: Record<string, string> = {};
+  for (const t of targets) {
+    const d = drafts[t.settingKey];
+    if (!d) continue;
+    const found = readSI(d.asFound, t.dimension);
+    const left = readSI(d.asLeft, t.dimension);
+    if (found.kind === 'invalid') errors[`${t.settingKey}.asFound`] = 'Enter a number';
+    if (left.kind === 'invalid') errors[`${t.settingKey}.asLeft`] = 'Enter a number';
+    if (found.kind === 'empty' && left.kind === 'empty') continue;
+    if (verdictFor(t, left)?.status === 'out' && d.reason.trim() === '') {
+      errors[`${t.settingKey}.reason`] = 'Out of tolerance as left: say why';
+    }
+    measurements.push({
+      settingKey: t.settingKey,
+      asFound: found.kind === 'value' ? found.si : null,
+      asLeft: left.kind === 'value' ? left.si : null,
+      reason: d.reason.trim(),
+    });
+  }
+  return { measurements, errors };
+}

@@ -1,0 +1,107 @@
+import { openDB, type DBSchema, type IDBPDatabase } from 'idb';
+import type { CreateFieldRecordInput } from '@holdfast/shared';
+
+/**
+ * Field records kept on the device until the server has them. Keyed by the record's own id,
+ * generated on the device, so saving the same record twice overwrites rather than duplicates,
+ * and sending it again is safe (the server's create is idempotent by that id).
+ */
+export type OutboxState = 'saved' | 'sending' | 'sent' | 'refused';
+
+export interface OutboxEntry {
+  id: string;
+  payload: CreateFieldRecordInput;
+  state: OutboxState;
+  /** ISO time the fitter saved it on the device. */
+  savedAt: string;
+  /** How many times sending was tried. */
+  attempts: number;
+  /** Why the server refused it, with the field errors, or the last connection failure. */
+  message?: string;
+  fields?: { path: string; message: string }[];
+}
+
+interface OutboxDb extends DBSchema {
+  outbox: { key: string; value: OutboxEntry; indexes: { state: OutboxState } };
+}
+
+const DB_NAME = 'holdfast-field-records';
+let dbPromise: Promise<IDBPDatabase<OutboxDb>> | null = null;
+
+function db(): Promise<IDBPDatabase<OutboxDb>> {
+  dbPromise ??= openDB<OutboxDb>(DB_NAME, 1, {
+    upgrade(database) {
+      const store = database.createObjectStore('outbox', { keyPath: 'id' });
+      store.createIndex('state', 'state');
+    },
+  });
+  return dbPromise;
+}
+
+type Listener = () => void;
+const listeners = new Set<Listener>();
+
+/** Calls `fn` after every change to the outbox (for the state shown to the fitter). */
+export function subscribeOutbox(fn: Listener): () => void {
+  listeners.add(fn);
+  return () => listeners.delete(fn);
+}
+
+function changed(): void {
+  for (const fn of listeners) fn();
+}
+
+/** Keeps a record on the device, ready to send; replaces an unsent entry with the same id. */
+export async function saveToOutbox(payload: CreateFieldRecordInput, now = new Date()) {
+  const database = await db();
+  const existing = await database.get('outbox', payload.id);
+  if (existing?.state === 'sent') throw new Error('this record has already been sent');
+  const entry: OutboxEntry = {
+    id: payload.id,
+    payload,
+    state: 'saved',
+    savedAt: now.toISOString(),
+    attempts: existing?.attempts ?? 0,
+  };
+  await database.put('outbox', entry);
+  changed();
+  return entry;
+}
+
+export async function listOutbox(): Promise<OutboxEntry[]> {
+  const all = await (await db()).getAll('outbox');
+  return all.sort((a, b) => a.savedAt.localeCompare(b.savedAt));
+}
+
+export async function getOutboxEntry(id: string): Promise<OutboxEntry | undefined> {
+  return (await db()).get('outbox', id);
+}
+
+/** Writes an entry's new state in one transaction. */
+export async function updateOutboxEntry(
+  id: string,
+  patch: Partial<Omit<OutboxEntry, 'id' | 'payload'>>,
+): Promise<OutboxEntry | undefined> {
+  const tx = (await db()).transaction('outbox', 'readwrite');
+  const entry = await tx.store.get(id);
+  if (!entry) {
+    await tx.done;
+    return undefined;
+  }
+  const next = { ...entry, ...patch };
+  await tx.store.put(next);
+  await tx.done;
+  changed();
+  return next;
+}
+
+/** Drops an entry the fitter no longer wants (a refused one after re-entering it, or a sent one). */
+export async function removeFromOutbox(id: string): Promise<void> {
+  await (await db()).delete('outbox', id);
+  changed();
+}
+
+/** For tests: forget the open connection so a fresh IndexedDB can be used. */
+export function resetOutboxConnection(): void {
+  dbPromise = null;
+}

@@ -1,0 +1,119 @@
+import 'fake-indexeddb/auto';
+import { IDBFactory } from 'fake-indexeddb';
+import { beforeEach, describe, expect, it } from 'vitest';
+import type { CreateFieldRecordInput } from '@holdfast/shared';
+import { ApiRequestError } from '../../../lib/api-error';
+import { flushOutbox } from './outbox-sender';
+import { listOutbox, resetOutboxConnection, saveToOutbox } from './outbox-store';
+
+const record = (id: string): CreateFieldRecordInput => ({
+  id,
+  positionId: '2b1c3d4e-5f60-4a7b-8c9d-0e1f2a3b4c5d',
+  revisionId: '3c2d4e5f-6071-4b8c-9d0e-1f2a3b4c5d6e',
+  kind: 'periodic-inspection',
+  performedAt: '2026-12-01T09:30:00Z',
+  meterHours: null,
+  measurements: [{ settingKey: 'reserveStroke', asFound: 0.009, asLeft: 0.012, reason: '' }],
+  checks: [],
+  findings: '',
+});
+const A = '0f5e2a1c-7d3b-4c8e-9a6f-1b2c3d4e5f60';
+const B = '1a6f3b2d-8e4c-4d9f-8b7a-2c3d4e5f6071';
+
+/** A stand-in server that keeps records by id, as the real create does. */
+function fakeServer() {
+  const stored = new Map<string, CreateFieldRecordInput>();
+  let calls = 0;
+  let mode: 'offline' | 'up' | 'refuse' | 'error' = 'up';
+  return {
+    stored,
+    calls: () => calls,
+    set: (m: typeof mode) => (mode = m),
+    send: async (p: CreateFieldRecordInput) => {
+      calls++;
+      if (mode === 'offline') throw ApiRequestError.network();
+      if (mode === 'error') throw new ApiRequestError(503, 'service_unavailable', 'not ready');
+      if (mode === 'refuse') {
+        throw new ApiRequestError(400, 'validation_failed', 'Invalid record', [
+          { path: 'measurements.0.asLeft', message: 'must be a number' },
+        ]);
+      }
+      stored.set(p.id, p);
+      return p;
+    },
+  };
+}
+
+beforeEach(() => {
+  globalThis.indexedDB = new IDBFactory();
+  resetOutboxConnection();
+});
+
+describe('field record outbox', () => {
+  it('keeps records while offline and sends each exactly once when back', async () => {
+    const server = fakeServer();
+    server.set('offline');
+    await saveToOutbox(record(A), new Date('2026-12-01T10:00:00Z'));
+    await saveToOutbox(record(B), new Date('2026-12-01T10:05:00Z'));
+    expect(await flushOutbox(server.send)).toBe(0);
+    // Offline stops the run at the first failure: the second is not tried in vain.
+    expect(server.calls()).toBe(1);
+    expect((await listOutbox()).map((e) => e.state)).toEqual(['saved', 'saved']);
+
+    server.set('up');
+    expect(await flushOutbox(server.send)).toBe(2);
+    expect(await flushOutbox(server.send)).toBe(0);
+    expect([...server.stored.keys()].sort()).toEqual([A, B].sort());
+    const entries = await listOutbox();
+    expect(entries.map((e) => e.state)).toEqual(['sent', 'sent']);
+    expect(entries[0]!.attempts).toBe(2);
+  });
+
+  it('saving the same record again replaces it instead of adding a second', async () => {
+    await saveToOutbox(record(A));
+    await saveToOutbox({ ...record(A), findings: 'Lining A worn at the heel' });
+    const entries = await listOutbox();
+    expect(entries).toHaveLength(1);
+    expect(entries[0]!.payload.findings).toBe('Lining A worn at the heel');
+  });
+
+  it('a record left "sending" (tab closed mid-send) is sent again, and the server keeps one', async () => {
+    const server = fakeServer();
+    await saveToOutbox(record(A));
+    await server.send(record(A)); // the first send reached the server, its answer was lost
+    const { updateOutboxEntry } = await import('./outbox-store');
+    await updateOutboxEntry(A, { state: 'sending' });
+    expect(await flushOutbox(server.send)).toBe(1);
+    expect(server.stored.size).toBe(1);
+  });
+
+  it('a refusal keeps the record with the field errors for the fitter', async () => {
+    const server = fakeServer();
+    server.set('refuse');
+    await saveToOutbox(record(A));
+    await flushOutbox(server.send);
+    const [entry] = await listOutbox();
+    expect(entry!.state).toBe('refused');
+    expect(entry!.fields).toEqual([{ path: 'measurements.0.asLeft', message: 'must be a number' }]);
+    // Refused records are not sent again on their own.
+    server.set('up');
+    expect(await flushOutbox(server.send)).toBe(0);
+  });
+
+  it('a server error leaves the record waiting for the next try', async () => {
+    const server = fakeServer();
+    server.set('error');
+    await saveToOutbox(record(A));
+    await flushOutbox(server.send);
+    const [entry] = await listOutbox();
+    expect(entry!.state).toBe('saved');
+    expect(entry!.message).toBe('not ready');
+  });
+
+  it('refuses to overwrite a record that was already sent', async () => {
+    const server = fakeServer();
+    await saveToOutbox(record(A));
+    await flushOutbox(server.send);
+    await expect(saveToOutbox(record(A))).rejects.toThrow(/already been sent/);
+  });
+});
