@@ -22,4 +22,3 @@ export * from './field-records/tolerance.schema.js';
 export * from './field-records/field-record.schema.js';
 export * from './field-records/schedule.schema.js';
 export * from './field-records/verify-record.schema.js';
-export * from './field-records/routes.js';

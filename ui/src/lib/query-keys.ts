@@ -66,5 +66,16 @@ export const reviewKeys = {
   queue: () => [...reviewKeys.all, 'queue'] as const,
 };
 
+/** Field records: the fitters' work on a position, and the form a record is made from. */
+export const fieldRecordKeys = {
+  all: ['field-records'] as const,
+  history: (positionId: string) => [...fieldRecordKeys.all, 'position', positionId] as const,
+  state: (positionId: string) => [...fieldRecordKeys.all, 'state', positionId] as const,
+  due: () => [...fieldRecordKeys.all, 'due'] as const,
+};
+export const fieldFormKeys = {
+  form: (revisionId: string) => ['field-form', revisionId] as const,
+};
+
 /** Public verification look-ups. */
 export const verifyKeys = { code: (code: string) => ['verify', code] as const };

@@ -1,14 +1,14 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { fieldFormSchema, type FieldForm } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { fieldApi } from './paths';
-
-export const fieldFormKeys = {
-  form: (revisionId: string) => ['field-form', revisionId] as const,
-};
+import { fieldFormKeys } from '../../../lib/query-keys';
 
 export function getFieldForm(revisionId: string, signal?: AbortSignal): Promise<FieldForm> {
-  return api.get(fieldApi('form', { revisionId }), { schema: fieldFormSchema, signal });
+  return api.get(apiPath(apiRoutes.fieldRecords.form, { revisionId }), {
+    schema: fieldFormSchema,
+    signal,
+  });
 }
 
 /**

@@ -1,14 +1,14 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { positionFieldHistorySchema, type PositionFieldHistory } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { fieldApi } from './paths';
-import { fieldRecordKeys } from './sign-field-record';
+import { fieldRecordKeys } from '../../../lib/query-keys';
 
 export function getPositionHistory(
   positionId: string,
   signal?: AbortSignal,
 ): Promise<PositionFieldHistory> {
-  return api.get(fieldApi('positionHistory', { positionId }), {
+  return api.get(apiPath(apiRoutes.fieldRecords.positionHistory, { positionId }), {
     schema: positionFieldHistorySchema,
     signal,
   });

@@ -1,14 +1,14 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { positionFieldStateSchema, type PositionFieldState } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { fieldApi } from './paths';
-import { fieldRecordKeys } from './sign-field-record';
+import { fieldRecordKeys } from '../../../lib/query-keys';
 
 export function getPositionState(
   positionId: string,
   signal?: AbortSignal,
 ): Promise<PositionFieldState> {
-  return api.get(fieldApi('positionState', { positionId }), {
+  return api.get(apiPath(apiRoutes.fieldRecords.positionState, { positionId }), {
     schema: positionFieldStateSchema,
     signal,
   });
@@ -17,7 +17,7 @@ export function getPositionState(
 /** The brake at a glance: set to which revision, last inspected, next due, open findings. */
 export function positionStateQueryOptions(positionId: string) {
   return queryOptions({
-    queryKey: [...fieldRecordKeys.all, 'state', positionId] as const,
+    queryKey: fieldRecordKeys.state(positionId),
     queryFn: ({ signal }) => getPositionState(positionId, signal),
   });
 }

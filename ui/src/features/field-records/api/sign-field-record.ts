@@ -1,21 +1,23 @@
+import { apiPath, apiRoutes } from '@holdfast/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { fieldRecordSchema, type FieldRecord } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
-import { fieldApi } from './paths';
-
-export const fieldRecordKeys = {
-  all: ['field-records'] as const,
-  history: (positionId: string) => ['field-records', 'position', positionId] as const,
-};
+import { fieldRecordKeys } from '../../../lib/query-keys';
 
 /** The technician signs the record as themself. */
 export function signFieldRecord(id: string): Promise<FieldRecord> {
-  return api.post(fieldApi('sign', { id }), { body: {}, schema: fieldRecordSchema });
+  return api.post(apiPath(apiRoutes.fieldRecords.sign, { id }), {
+    body: {},
+    schema: fieldRecordSchema,
+  });
 }
 
 /** A plant engineer countersigns; the record is immutable from then on. */
 export function countersignFieldRecord(id: string, note = ''): Promise<FieldRecord> {
-  return api.post(fieldApi('countersign', { id }), { body: { note }, schema: fieldRecordSchema });
+  return api.post(apiPath(apiRoutes.fieldRecords.countersign, { id }), {
+    body: { note },
+    schema: fieldRecordSchema,
+  });
 }
 
 export function useSignFieldRecord() {

@@ -1,7 +1,7 @@
 import { Paper, SegmentedControl, Stack, Text } from '@mantine/core';
 import type { FieldCheckResult, FieldForm } from '@holdfast/shared';
 import type { InputValue } from '@holdfast/calc';
-import { UnitField } from '../../calc/components/unit-field';
+import { UnitField } from '../../../components/calc/components/unit-field';
 
 export interface CheckDraft {
   result: FieldCheckResult | null;

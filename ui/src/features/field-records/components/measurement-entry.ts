@@ -7,7 +7,7 @@ import {
   type ToleranceVerdict,
 } from '@holdfast/calc';
 import type { FieldMeasurementInput, FieldTarget } from '@holdfast/shared';
-import { isQuantity } from '../../calc/utils/units';
+import { isQuantity } from '../../../components/calc/utils/units';
 
 /** What the fitter typed for one target: as found, as left (each a quantity or raw text), why. */
 export interface MeasurementDraft {

@@ -1,8 +1,8 @@
 import { Badge, Group, Paper, Stack, Text, Textarea } from '@mantine/core';
 import type { FieldTarget } from '@holdfast/shared';
 import type { Dimension, InputValue } from '@holdfast/calc';
-import { UnitField } from '../../calc/components/unit-field';
-import { defaultUnit, presentSI } from '../../calc/utils/units';
+import { UnitField } from '../../../components/calc/components/unit-field';
+import { defaultUnit, presentSI } from '../../../components/calc/utils/units';
 import { readSI, verdictFor, type MeasurementDraft } from './measurement-entry';
 
 function VerdictBadge({ target, value }: { target: FieldTarget; value: InputValue | undefined }) {
