@@ -70,7 +70,9 @@ export async function seed(db: Kysely<DB>): Promise<void> {
     db,
     'TR-B1',
     'travel-shoe-brake',
-    'approved',
+    // Set 55 days ago to the first issue, approved then; revision B (core 1.1.0) came since, so
+    // the record shows the flag and the brake is due to be set to B.
+    'superseded',
     [
       {
         daysAgo: 55,

@@ -279,7 +279,7 @@ describe('field records', () => {
         headers: { authorization: `Bearer ${await ctx.token('technician')}` },
         body: form,
       });
-      return { status: res.status, body: await res.json() };
+      return { status: res.status, body: (await res.json()) as any };
     };
     const png = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 0]);
     const ok = await send(png, 'shoe-a.png');

@@ -15,6 +15,7 @@ const matrix: Row[] = [
     engineer: 200,
     checker: 200,
     viewer: 200,
+    technician: 200,
     admin: 200,
   },
   {
@@ -25,6 +26,7 @@ const matrix: Row[] = [
     engineer: 400,
     checker: 400,
     viewer: 400,
+    technician: 400,
     admin: 400,
   },
   {
@@ -34,6 +36,7 @@ const matrix: Row[] = [
     engineer: 401,
     checker: 401,
     viewer: 401,
+    technician: 401,
     admin: 401,
   },
   {
@@ -43,6 +46,7 @@ const matrix: Row[] = [
     engineer: 204,
     checker: 204,
     viewer: 204,
+    technician: 204,
     admin: 204,
   },
   {
@@ -52,6 +56,7 @@ const matrix: Row[] = [
     engineer: 200,
     checker: 200,
     viewer: 200,
+    technician: 200,
     admin: 200,
   },
   {
@@ -62,6 +67,7 @@ const matrix: Row[] = [
     engineer: 200,
     checker: 200,
     viewer: 200,
+    technician: 200,
     admin: 200,
   },
   {
@@ -71,6 +77,7 @@ const matrix: Row[] = [
     engineer: 403,
     checker: 403,
     viewer: 403,
+    technician: 403,
     admin: 200,
   },
   {
@@ -81,6 +88,7 @@ const matrix: Row[] = [
     engineer: 403,
     checker: 403,
     viewer: 403,
+    technician: 403,
     admin: 400,
   },
   {
@@ -91,6 +99,7 @@ const matrix: Row[] = [
     engineer: 403,
     checker: 403,
     viewer: 403,
+    technician: 403,
     admin: 404,
   },
   {
@@ -101,6 +110,7 @@ const matrix: Row[] = [
     engineer: 400,
     checker: 400,
     viewer: 400,
+    technician: 400,
     admin: 400,
   },
   {
@@ -111,6 +121,7 @@ const matrix: Row[] = [
     engineer: 400,
     checker: 400,
     viewer: 400,
+    technician: 400,
     admin: 400,
   },
   {
@@ -120,10 +131,11 @@ const matrix: Row[] = [
     engineer: 403,
     checker: 403,
     viewer: 403,
+    technician: 403,
     admin: 404,
   },
 ];
-const callers: Caller[] = ['anonymous', 'engineer', 'checker', 'viewer', 'admin'];
+const callers: Caller[] = ['anonymous', 'engineer', 'checker', 'viewer', 'technician', 'admin'];
 
 describe('foundation routes × roles', () => {
   let ctx: TestContext;

@@ -29,7 +29,8 @@ export function readInputs<const Fs extends readonly FieldDefinition[]>(
   for (let k = 0; k < fields.length; k++) {
     const f = fields[k];
     const raw = inputs[f.key];
-    if (raw === undefined || raw === null) {
+    // A box left empty is the same as a field left out: missing when required, else not used.
+    if (isBlank(raw)) {
       if (isRequired(f, inputs)) errors.errors.push({ field: f.key, message: MISSING_MESSAGE });
       continue;
     }

@@ -30,7 +30,7 @@ describe('sheet definitions are the single source', () => {
   const files = sources();
 
   it('reads the sources it guards', () => {
-    expect(files.some((f) => f.file === 'server/src/revisions/calc-engine.ts')).toBe(true);
+    expect(files.some((f) => f.file === 'server/src/calc/calc-engine.ts')).toBe(true);
     expect(files.some((f) => f.file === 'server/src/print/field-card-groups.ts')).toBe(true);
     expect(fieldKeys.length).toBeGreaterThan(100);
   });

@@ -115,6 +115,16 @@ export function unknownInputsOf(sheetType: string, inputs: SheetInputs): FieldEr
   return unknownInputKeys(sheetTypeDefinition(sheetType).fields, inputs);
 }
 
+/**
+ * Stored inputs carried into a new draft, without keys this sheet type no longer declares (an
+ * input an older core asked for and the current one derives, such as the shoe sheets' fixed
+ * lining wear): the engineer could not see or clear them, and save would refuse them.
+ */
+export function withoutRetiredInputs(sheetType: string, inputs: SheetInputs): SheetInputs {
+  const known = new Set(sheetTypeDefinition(sheetType).fields.map((f) => f.key));
+  return Object.fromEntries(Object.entries(inputs).filter(([key]) => known.has(key)));
+}
+
 /** The inputs as the core uses them, as entered and in SI (throws CalcInputError like evaluate). */
 export function resolveInputsOf(sheetType: string, inputs: SheetInputs): ResolvedInput[] {
   return resolveInputs(sheetTypeDefinition(sheetType).fields, inputs);

@@ -24,6 +24,7 @@ import {
   evaluateSheet,
   fieldLabel,
   startingInputs,
+  withoutRetiredInputs,
 } from '../calc/calc-engine.js';
 import { diffChecks, diffInputs, diffResults } from '../revisions/diff.js';
 import { canReadContent } from '../revisions/revision-access.js';
@@ -177,7 +178,10 @@ export class SheetsService {
     if (source.state !== 'approved') throw refuse('only an approved revision can be copied');
     if (source.sheetType !== input.sheetType)
       throw refuse(`that revision is a ${source.sheetType} sheet, not ${input.sheetType}`);
-    const inputs = structuredClone(source.inputs as SheetInputs);
+    const inputs = withoutRetiredInputs(
+      input.sheetType,
+      structuredClone(source.inputs as SheetInputs),
+    );
     // Copied values were right for another brake: each stays marked until confirmed for this one.
     return { inputs, unconfirmed: Object.keys(inputs), copiedFrom: source.id };
   }
@@ -208,7 +212,7 @@ export class SheetsService {
         );
       }
       const criteria = await this.criteria.load(sheet.criteriaSetId, 'latest', trx);
-      const inputs = latest.inputs as SheetInputs;
+      const inputs = withoutRetiredInputs(sheet.sheetType, latest.inputs as SheetInputs);
       const evaluation = preview(sheet.sheetType, inputs, criteria);
       const seq = latest.seq + 1;
       const rev = await trx
