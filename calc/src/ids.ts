@@ -41,3 +41,9 @@ export const DIMENSION_IDS = [
   'frequency',
   'dimensionless',
 ] as const;
+
+/** How far a criteria value or a field tolerance can be trusted, best first. */
+export const CONFIDENCE_LEVELS = ['published', 'secondary', 'common practice', 'memory'] as const;
+
+/** The blocks of the field setting card, in print order. */
+export const FIELD_CARD_GROUPS = ['spring', 'thruster', 'clearance', 'discStack', 'other'] as const;

@@ -2,7 +2,7 @@
  * The public shapes of the calculation core. Everything that leaves calc (to shared, server, ui,
  * the PDF) is one of these. Values inside calc are SI; `unit` strings are mathjs unit text.
  */
-import type { DIMENSION_IDS } from '../ids.js';
+import type { CONFIDENCE_LEVELS, DIMENSION_IDS, FIELD_CARD_GROUPS } from '../ids.js';
 import type { FieldTolerance } from '../field/tolerance-types.js';
 
 /** A physical quantity as a user typed it or as the core reports it, e.g. { value: 12, unit: 'kN' }. */
@@ -189,7 +189,7 @@ export interface CriterionValue {
   unit: string;
   /** e.g. 'published: 29 CFR 1910.179(f)(2)', 'common practice', 'from memory — check the governing standard'. */
   source: string;
-  confidence: 'published' | 'secondary' | 'common practice' | 'memory';
+  confidence: (typeof CONFIDENCE_LEVELS)[number];
 }
 
 export interface CriteriaSet {
@@ -201,7 +201,7 @@ export interface CriteriaSet {
 }
 
 /** The block of the field setting card a field setting prints in. */
-export type FieldCardGroup = 'spring' | 'thruster' | 'clearance' | 'discStack' | 'other';
+export type FieldCardGroup = (typeof FIELD_CARD_GROUPS)[number];
 
 /** Where one field setting (by its key) goes on the field card, and what it is there. */
 export interface FieldCardPlacement {

@@ -1,4 +1,5 @@
 import { criteriaValueProblems, REQUIRED_CRITERIA } from '@holdfast/calc';
+import { CONFIDENCE_LEVELS } from '@holdfast/calc/ids';
 import { z } from 'zod';
 import { multiLineText, singleLineText } from '../text/plain-text.js';
 import { isoDateSchema, personRefSchema } from '../sheets/person-ref.schema.js';
@@ -14,7 +15,7 @@ export const criterionValueSchema = z
       max: 400,
       minMessage: 'name the source, or say "common practice"',
     }),
-    confidence: z.enum(['published', 'secondary', 'common practice', 'memory']),
+    confidence: z.enum(CONFIDENCE_LEVELS),
   })
   .strict();
 export type CriterionValueInput = z.infer<typeof criterionValueSchema>;

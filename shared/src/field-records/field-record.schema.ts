@@ -1,3 +1,4 @@
+import { DIMENSION_IDS, FIELD_CARD_GROUPS } from '@holdfast/calc/ids';
 import { z } from 'zod';
 import { multiLineText, singleLineText } from '../text/plain-text.js';
 import { isoDateSchema, personRefSchema } from '../sheets/person-ref.schema.js';
@@ -133,8 +134,8 @@ export const fieldTargetSchema = z.object({
   /** Target in SI, in `unit`. */
   value: z.number(),
   unit: z.string(),
-  dimension: z.string(),
-  group: z.enum(['spring', 'thruster', 'clearance', 'discStack', 'other']),
+  dimension: z.enum(DIMENSION_IDS),
+  group: z.enum(FIELD_CARD_GROUPS),
   stack: z.string().optional(),
   role: z.enum(['backOff', 'preload']).optional(),
   note: z.string().optional(),

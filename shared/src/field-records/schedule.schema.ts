@@ -92,8 +92,7 @@ export const dueInspectionSchema = z.object({
 export type DueInspection = z.infer<typeof dueInspectionSchema>;
 
 /**
- * GET /api/field-records/due — positions due within the reminder window and overdue ones; also
- * in the work queue under `fieldInspections` (GET /api/work-queue/field-inspections).
+ * GET /api/field-records/due — positions due within the reminder window and overdue ones.
  */
 export const dueInspectionsSchema = z.object({
   due: z.array(dueInspectionSchema),

@@ -1,25 +1,26 @@
+import type { FieldTolerance, ToleranceBand, ToleranceVerdict } from '@holdfast/calc';
+import { CONFIDENCE_LEVELS } from '@holdfast/calc/ids';
 import { z } from 'zod';
 
-/** calc's ToleranceBand as JSON: bounds in the setting's SI unit, or a fraction of the target. */
-export const toleranceBandSchema = z.discriminatedUnion('kind', [
+/** calc's `ToleranceBand` as JSON: bounds in the setting's SI unit, or a fraction of the target. */
+export const toleranceBandSchema: z.ZodType<ToleranceBand> = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('absolute'), minus: z.number(), plus: z.number() }),
   z.object({ kind: z.literal('relative'), minus: z.number(), plus: z.number() }),
   z.object({ kind: z.literal('atLeast') }),
   z.object({ kind: z.literal('atMost') }),
 ]);
 
-/** calc's FieldTolerance as JSON. */
-export const fieldToleranceSchema = z.object({
+/** calc's `FieldTolerance` as JSON. */
+export const fieldToleranceSchema: z.ZodType<FieldTolerance> = z.object({
   band: toleranceBandSchema,
   source: z.string(),
-  confidence: z.enum(['published', 'secondary', 'common practice', 'memory']),
+  confidence: z.enum(CONFIDENCE_LEVELS),
   rule: z.string().optional(),
   direction: z.enum(['loosen', 'tighten']).optional(),
 });
-export type FieldToleranceJson = z.infer<typeof fieldToleranceSchema>;
 
-/** calc's ToleranceVerdict as JSON. */
-export const toleranceVerdictSchema = z.object({
+/** calc's `ToleranceVerdict` as JSON. */
+export const toleranceVerdictSchema: z.ZodType<ToleranceVerdict> = z.object({
   status: z.enum(['in', 'out']),
   deviationSI: z.number(),
   lowerSI: z.number().nullable(),
@@ -32,4 +33,3 @@ export const toleranceVerdictSchema = z.object({
     upper: z.number().nullable(),
   }),
 });
-export type ToleranceVerdictJson = z.infer<typeof toleranceVerdictSchema>;
