@@ -158,20 +158,25 @@ export default tseslint.config(
   },
   // Kysely only in repositories: services and controllers speak to repositories, never to the
   // query builder or the database handle. The files listed in kyselyNotYetMoved still do and are
-  // being moved (issue 14); the list only shrinks.
-  ...[true, false].map((inPrint) => ({
-    files: ['*.service.ts', '*.controller.ts'].map(
-      (f) => `server/src/${inPrint ? 'print/' : ''}**/${f}`,
-    ),
-    ignores: inPrint ? kyselyNotYetMoved : [...kyselyNotYetMoved, 'server/src/print/**'],
+  // being moved (issue 14); the list only shrinks. The rule replaces the calc door above for these
+  // files, so it carries the door too, except in printing.
+  {
+    files: ['server/src/**/*.service.ts', 'server/src/**/*.controller.ts'],
+    ignores: kyselyNotYetMoved,
     rules: {
       '@typescript-eslint/no-restricted-imports': [
         'error',
-        {
-          paths: inPrint ? queryBuilderBans : [calcDoor, ...queryBuilderBans],
-          patterns: databaseHandleBan,
-        },
+        { paths: [calcDoor, ...queryBuilderBans], patterns: databaseHandleBan },
       ],
     },
-  })),
+  },
+  {
+    files: ['server/src/print/**/*.service.ts', 'server/src/print/**/*.controller.ts'],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        { paths: queryBuilderBans, patterns: databaseHandleBan },
+      ],
+    },
+  },
 );
