@@ -1,4 +1,4 @@
-import { Derivation, type StepOptions } from '../core/step.js';
+import { compute, type Derivation, type StepOptions } from '../core/step.js';
 import { backOffAngleForPreload } from './back-off.js';
 import { discConstants, type DiscConstants } from './disc.js';
 import * as fd from './formulas.js';
@@ -47,60 +47,67 @@ export interface StackSetInput {
  * Evaluates one stack set by tightening flat and backing off, recording every value as a
  * derivation step (ids prefixed with `prefix`, e.g. 'a-'). Validates first (CalcInputError).
  */
-export function deriveStackSet(input: StackSetInput, d: Derivation, prefix = ''): StackSetResult {
+/** With `d` undefined only the values are computed (no derivation text: a tolerance end). */
+export function deriveStackSet(
+  input: StackSetInput,
+  d: Derivation | undefined,
+  prefix = '',
+): StackSetResult {
   validateStack(input.stack);
   const { stack, lead, angle } = input;
   const disc = stack.disc;
   const o = stackStepOptions(prefix);
-  const delta = d.step(f.fDelta, { De: disc.De, Di: disc.Di }, o.delta);
-  const K1 = d.step(f.fK1, { d: delta }, o.K1);
-  const K2 = d.step(f.fK2, { d: delta }, o.K2);
-  const K3 = d.step(f.fK3, { d: delta }, o.K3);
+  const delta = compute(d, f.fDelta, { De: disc.De, Di: disc.Di }, o.delta);
+  const K1 = compute(d, f.fK1, { d: delta }, o.K1);
+  const K2 = compute(d, f.fK2, { d: delta }, o.K2);
+  const K3 = compute(d, f.fK3, { d: delta }, o.K3);
   const c = discConstants(disc);
   let K4 = 1;
   if (c.K4 !== 1) {
-    const C1 = d.step(f.fC1, { tr: c.tCalc, t: disc.t, l0: disc.l0 }, o.C1);
-    const C2 = d.step(f.fC2, { C1, tr: c.tCalc, t: disc.t, l0: disc.l0 }, o.C2);
-    K4 = d.step(f.fK4, { C1, C2 }, o.K4);
+    const C1 = compute(d, f.fC1, { tr: c.tCalc, t: disc.t, l0: disc.l0 }, o.C1);
+    const C2 = compute(d, f.fC2, { C1, tr: c.tCalc, t: disc.t, l0: disc.l0 }, o.C2);
+    K4 = compute(d, f.fK4, { C1, C2 }, o.K4);
   }
   const t = c.tCalc;
-  const h0 = d.step(f.fH0, { l0: disc.l0, t }, o.h0);
-  const release = d.step(f.fRelease, { Pt: lead, theta: angle }, o.release);
+  const h0 = compute(d, f.fH0, { l0: disc.l0, t }, o.h0);
+  const release = compute(d, f.fRelease, { Pt: lead, theta: angle }, o.release);
   const i = stack.seriesCount;
   const n = stack.parallelCount;
-  const s = d.step(f.fSetDeflection, { h0, D: release, i }, o.setDeflection);
-  const setRatio = d.step(f.fRatio, { s, h0 }, o.setRatio);
+  const s = compute(d, f.fSetDeflection, { h0, D: release, i }, o.setDeflection);
+  const setRatio = compute(d, f.fRatio, { s, h0 }, o.setRatio);
   // The value objects below are written out in full rather than spread from a shared base
   // ({ ...base, s }): spreading was a visible share of a sheet's evaluation time.
   const { E, nu, De } = disc;
-  const F1 = d.step(f.fDiscForce, { E, nu, t, K1, K4, De, h0, s }, o.discForce);
-  const Fc = d.step(f.fDiscForce, { E, nu, t, K1, K4, De, h0, s: h0 }, o.flatForce);
-  const Fn = d.step(f.fStackNominal, { n, F1 }, o.stackForce);
+  const F1 = compute(d, f.fDiscForce, { E, nu, t, K1, K4, De, h0, s }, o.discForce);
+  const Fc = compute(d, f.fDiscForce, { E, nu, t, K1, K4, De, h0, s: h0 }, o.flatForce);
+  const Fn = compute(d, f.fStackNominal, { n, F1 }, o.stackForce);
   const wM = stack.frictionCone;
   const wR = stack.frictionEdge;
   const fr = { Fn, wM, wR, n };
-  const Fload = d.step(f.fStackLoading, fr, o.stackForceLoading);
-  const Funload = d.step(f.fStackUnloading, fr, o.preload);
+  const Fload = compute(d, f.fStackLoading, fr, o.stackForceLoading);
+  const Funload = compute(d, f.fStackUnloading, fr, o.preload);
   const flatNominal = n * Fc;
-  const flatStackLoading = d.step(
+  const flatStackLoading = compute(
+    d,
     f.fStackLoading,
     { Fn: flatNominal, wM, wR, n },
     o.flatStackForce,
   );
   const sv = { E, nu, t, K1, K4, De, h0, K2, K3, d: delta, s };
-  const OM = d.step(f.fSigmaOM, sv, o.sigmaOM);
-  const I = d.step(f.fSigmaI, sv, o.sigmaI);
-  const II = d.step(f.fSigmaII, sv, o.sigmaII);
-  const III = d.step(f.fSigmaIII, sv, o.sigmaIII);
-  const IV = d.step(f.fSigmaIV, sv, o.sigmaIV);
-  const sigmaOMFlat = d.step(
+  const OM = compute(d, f.fSigmaOM, sv, o.sigmaOM);
+  const I = compute(d, f.fSigmaI, sv, o.sigmaI);
+  const II = compute(d, f.fSigmaII, sv, o.sigmaII);
+  const III = compute(d, f.fSigmaIII, sv, o.sigmaIII);
+  const IV = compute(d, f.fSigmaIV, sv, o.sigmaIV);
+  const sigmaOMFlat = compute(
+    d,
     f.fSigmaOM,
     { E, nu, t, K1, K4, De, h0, K2, K3, d: delta, s: h0 },
     o.sigmaOMFlat,
   );
-  const L0 = d.step(f.fFreeLength, { i, n, l0: disc.l0, t }, o.freeLength);
-  const Lc = d.step(f.fFlatLength, { i, n, t }, o.flatLength);
-  const L1 = d.step(f.fSetLength, { L0, i, s }, o.setLength);
+  const L0 = compute(d, f.fFreeLength, { i, n, l0: disc.l0, t }, o.freeLength);
+  const Lc = compute(d, f.fFlatLength, { i, n, t }, o.flatLength);
+  const L1 = compute(d, f.fSetLength, { L0, i, s }, o.setLength);
   let angleForRequired: number | undefined;
   if (input.requiredPreload !== undefined && input.requiredPreload > 0) {
     const deg = backOffAngleForPreload(stack, lead, input.requiredPreload, c);

@@ -62,9 +62,12 @@ export function hoistRedundancy(r: HoistRedundancyInput): {
     stoppingDistanceLimit: q.length(r.stoppingDistanceLimit),
     driveTrainRating: q.torque(r.driveTrainRating),
   });
-  // With identical brakes the checks of brake 2 repeat those of brake 1: print them once.
+  // With identical brakes the checks of brake 2 repeat those of brake 1: print them once. Both
+  // brakes against the drive train is the sheet's own drive-train check (torque-max-friction),
+  // made with the higher of the long- and short-shoe torques: not a second, lower figure here.
   const checks = res.checks
     .filter((c) => !c.id.startsWith('brake-2-') || r.brakesInstalled < 2)
+    .filter((c) => c.id !== 'brakes-together-drive-train')
     .map((c) =>
       makeCheck({
         ...c,

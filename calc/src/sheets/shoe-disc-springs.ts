@@ -1,6 +1,6 @@
 import type { CriteriaSet, SheetEvaluation } from '../core/types.js';
 import { CalcInputError, isCalcInputError } from '../core/errors.js';
-import { Derivation } from '../core/step.js';
+import type { Derivation } from '../core/step.js';
 import { deriveStackSet } from '../disc-springs/stack-derivation.js';
 import { WORKING_BAND, workingBandWarning } from '../disc-springs/curve.js';
 import type { DiscStack } from '../disc-springs/stack.js';
@@ -71,9 +71,7 @@ export function evaluateShoeDiscSprings(
     // The ends of the back-off tolerance, off the printed derivation: stopping short leaves the
     // stack deeper (nearer flat), running past leaves less preload.
     const at = (angle: number) =>
-      inSheetFields(p, () =>
-        deriveStackSet({ stack, lead, angle: Math.max(0, angle) }, new Derivation(SECTION)),
-      );
+      inSheetFields(p, () => deriveStackSet({ stack, lead, angle: Math.max(0, angle) }, undefined));
     const short = at(theta - tol);
     const past = at(theta + tol);
     const title = TITLES[p];

@@ -9,6 +9,23 @@ for (let k = -30; k <= 30; k++) POW10[k + 30] = 10 ** k;
  * (1e-3 ≤ |x| < 1e9), e.g. 12.4 → '12.40', −0.35 → '−0.3500'. Hand-rolled because
  * Number#toPrecision costs ~0.6 µs and a sheet prints several hundred numbers.
  */
+/**
+ * ⌊log10(abs)⌋ for 1e-30 ≤ abs < 1e30, by comparison with a table of powers of ten:
+ * Math.floor(Math.log10(abs)) was a third of the time of a number printed. The table gives the
+ * exact exponent of every double; log10 may round across a power of ten within a few ulps of it,
+ * and up to 12 digits the carry in placeDigits then lands on the same digits.
+ */
+export function decimalExponent(abs: number): number {
+  let e = 0;
+  if (abs >= 1) {
+    while (abs >= POW10[e + 31]) e++;
+  } else {
+    do e--;
+    while (abs < POW10[e + 30]);
+  }
+  return e;
+}
+
 export function formatNumber(value: number, digits = 4): string {
   if (value === 0) return '0';
   if (!Number.isFinite(value)) return String(value);
@@ -18,23 +35,8 @@ export function formatNumber(value: number, digits = 4): string {
     const [mantissa, exponent] = value.toExponential(Math.max(0, digits - 1)).split('e');
     return `${mantissa.replace('-', '−')}·10^${Number(exponent)}`;
   }
-  let e: number;
-  if (digits <= 12) {
-    // Decimal exponent by comparison with the table: Math.floor(Math.log10(abs)) was a third of
-    // the time of a call. The table gives the exact exponent of every double; log10 may round
-    // across a power of ten within a few ulps of it, and up to 12 digits the carry in placeDigits
-    // then lands on the same digits, so the output is unchanged. Beyond 12 digits those few ulps
-    // show in the last digit, so the log10 estimate stays there.
-    e = 0;
-    if (abs >= 1) {
-      while (abs >= POW10[e + 31]) e++;
-    } else {
-      do e--;
-      while (abs < POW10[e + 30]);
-    }
-  } else {
-    e = Math.floor(Math.log10(abs));
-  }
+  // Beyond 12 digits the few ulps by which log10 may miss show in the last digit: keep it there.
+  const e = digits <= 12 ? decimalExponent(abs) : Math.floor(Math.log10(abs));
   return placeDigits(abs, sign, digits, e);
 }
 

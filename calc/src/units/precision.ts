@@ -1,5 +1,5 @@
 import type { Dimension } from '../core/types.js';
-import { formatNumber } from './format.js';
+import { decimalExponent, formatNumber } from './format.js';
 
 /**
  * How finely a quantity is printed: significant figures, and optionally no finer than a step
@@ -88,25 +88,52 @@ export function formatWithPrecision(
   p: Precision,
 ): string {
   if (value === 0 || !Number.isFinite(value)) return formatNumber(value, p.digits);
-  const step = p.finestIn?.[label] ?? (p.finest === undefined ? undefined : p.finest / factor);
+  const plan = stepPlan(p, factor, label);
   let text: string;
-  if (step === undefined) {
+  if (plan === null) {
     text = formatNumber(value, p.digits);
   } else {
-    // A 5 × 10ⁿ or 2 × 10ⁿ step snaps the value to it (0.05 mm feeler steps); a 1 × 10ⁿ step
-    // or an odd one (a step converted to inches) only limits the decimals printed.
-    const decimals = Math.max(0, Math.ceil(-Math.log10(step) - 1e-9));
-    const unit = 10 ** -decimals;
-    const mantissa = Math.round(step / unit);
-    const snapped =
-      Math.abs(step / unit - mantissa) < 1e-9 && mantissa > 1
-        ? Math.round(value / step) * step
-        : value;
-    if (Math.abs(snapped) < unit / 2) return '0';
-    const e = Math.floor(Math.log10(Math.abs(snapped)));
-    text = formatNumber(snapped, Math.max(1, Math.min(p.digits, e + 1 + decimals)));
+    const snapped = plan.snap ? Math.round(value / plan.step) * plan.step : value;
+    if (Math.abs(snapped) < plan.unit / 2) return '0';
+    const e = decimalExponent(Math.abs(snapped));
+    text = formatNumber(snapped, Math.max(1, Math.min(p.digits, e + 1 + plan.decimals)));
   }
   return p.trim && text.includes('.') && !text.includes('·')
     ? text.replace(/0+$/, '').replace(/\.$/, '')
     : text;
+}
+
+/** What a precision's finest step means in one display unit, worked out once per unit. */
+interface StepPlan {
+  step: number;
+  /** Decimals the step allows, and the value of the last one (0.01 for 2). */
+  decimals: number;
+  unit: number;
+  /** A 5 × 10ⁿ or 2 × 10ⁿ step snaps the value to it (0.05 mm feeler steps); a 1 × 10ⁿ step or
+   * an odd one (a step converted to inches) only limits the decimals printed. */
+  snap: boolean;
+}
+
+// Every printed number of every step comes through here: the plan depends only on the
+// precision and the unit, so it is made once (a log10 and a few divisions per number before).
+const plans = new WeakMap<Precision, Map<string, StepPlan | null>>();
+
+function stepPlan(p: Precision, factor: number, label: string): StepPlan | null {
+  let byUnit = plans.get(p);
+  if (!byUnit) plans.set(p, (byUnit = new Map()));
+  const key = label || String(factor);
+  let plan = byUnit.get(key);
+  if (plan === undefined) {
+    const step = p.finestIn?.[label] ?? (p.finest === undefined ? undefined : p.finest / factor);
+    if (step === undefined) plan = null;
+    else {
+      const decimals = Math.max(0, Math.ceil(-Math.log10(step) - 1e-9));
+      const unit = 10 ** -decimals;
+      const mantissa = Math.round(step / unit);
+      const snap = Math.abs(step / unit - mantissa) < 1e-9 && mantissa > 1;
+      plan = { step, decimals, unit, snap };
+    }
+    byUnit.set(key, plan);
+  }
+  return plan;
 }
