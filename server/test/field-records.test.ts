@@ -13,6 +13,7 @@ import {
   type Register,
   type SheetsContext,
 } from './sheets-fixture.js';
+import type { DemoLogin } from './test-context.js';
 
 describe('field records', () => {
   let ctx: SheetsContext;
@@ -271,12 +272,12 @@ describe('field records', () => {
   it('photos go through the attachment path, owned by the record, and only onto a draft', async () => {
     const b = body();
     await ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
-    const send = async (bytes: Buffer, name: string) => {
+    const send = async (bytes: Buffer, name: string, as: DemoLogin = 'technician') => {
       const form = new FormData();
       form.append('file', new Blob([new Uint8Array(bytes)]), name);
       const res = await fetch(`${ctx.baseUrl}/api/field-records/${b.id}/attachments`, {
         method: 'POST',
-        headers: { authorization: `Bearer ${await ctx.token('technician')}` },
+        headers: { authorization: `Bearer ${await ctx.token(as)}` },
         body: form,
       });
       return { status: res.status, body: (await res.json()) as any };
@@ -285,6 +286,9 @@ describe('field records', () => {
     const ok = await send(png, 'shoe-a.png');
     expect(ok.status).toBe(201);
     expect((await send(Buffer.from('not a photo'), 'x.png')).status).toBe(415);
+    // An engineer may record field work, but adds photos only to records of their own.
+    expect((await send(png, 'other.png', 'engineer')).status).toBe(403);
+    expect((await send(png, 'viewer.png', 'viewer')).status).toBe(403);
     const list = await ctx.request('GET', `/api/field-records/${b.id}/attachments`, {
       as: 'viewer',
     });
