@@ -80,9 +80,21 @@ describe('field records in PostgreSQL, as the app role', () => {
     await app.query(`delete from field_record_checks where record_id = $1`, [id]);
   });
 
-  it('signed: content is frozen, only the countersignature may follow', async () => {
+  const addPhoto = (id: string) =>
+    app.query(
+      `insert into attachments (revision_id, file_name, content_type, size, sha256, storage_key, uploaded_by, field_record_id)
+       values ($2, 'p.png', 'image/png', 1, repeat('a', 64), $3, $4, $1)`,
+      [id, revisionId, `probe/${randomUUID()}`, userId],
+    );
+
+  it('signed: content and photos are frozen, only the countersignature may follow', async () => {
     const id = await newRecord();
+    await addPhoto(id);
     await sign(id);
+    expect((await failure(addPhoto(id))).code).toBe('HF001');
+    expect((await refused(`delete from attachments where field_record_id = $1`, [id])).code).toBe(
+      'HF001',
+    );
     expect(
       (await refused(`update field_records set findings = 'x' where id = $1`, [id])).code,
     ).toBe('HF001');
