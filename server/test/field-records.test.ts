@@ -232,6 +232,27 @@ describe('field records', () => {
     expect(state.body.setTo).toMatchObject({ revisionId, superseded: false });
   });
 
+  it("who may write: only recorders create, only the maker edits and signs, no countersigning one's own", async () => {
+    const post = (as: DemoLogin, path: string, b: unknown = {}) =>
+      ctx.request('POST', path, { as, body: b }).then((r) => r.status);
+    expect(await post('viewer', '/api/field-records', body())).toBe(403);
+    expect(await post('admin', '/api/field-records', body())).toBe(403);
+    const fitter = body();
+    expect(await post('technician', '/api/field-records', fitter)).toBe(201);
+    const patch = await ctx.request('PATCH', `/api/field-records/${fitter.id}`, {
+      as: 'engineer',
+      body: { findings: 'not mine to write' },
+    });
+    expect(patch.status).toBe(403);
+    expect(await post('engineer', `/api/field-records/${fitter.id}/sign`)).toBe(403);
+    // An engineer may record field work too, but a second person countersigns it.
+    const own = body();
+    expect(await post('engineer', '/api/field-records', own)).toBe(201);
+    expect(await post('engineer', `/api/field-records/${own.id}/sign`)).toBe(200);
+    expect(await post('engineer', `/api/field-records/${own.id}/countersign`)).toBe(403);
+    expect(await post('checker', `/api/field-records/${own.id}/countersign`)).toBe(200);
+  });
+
   it('prints the record with targets, tolerances, signatures and a code /verify answers for', async () => {
     ensurePoppler();
     const b = body({
