@@ -17,6 +17,11 @@ import {
 } from './support/fault-cluster.js';
 import { startSmtpCapture, type SmtpCapture } from './support/smtp-capture.js';
 import { emptyAcks, halfRecordQueries, workflowWorker } from './support/workflow-load.js';
+import {
+  emptyFieldRecordAcks,
+  fieldRecordHalfQueries,
+  fieldRecordWorker,
+} from './support/field-record-load.js';
 
 /**
  * Faults on a real server process against a PostgreSQL cluster of its own (see
@@ -31,6 +36,8 @@ const SMTP_OUTAGE_MS = Number(process.env.HOLDFAST_FAULT_SMTP_OUTAGE_MS ?? 5000)
 const PG_ROUNDS = 5;
 /** Crashes during the save–submit–approve load (each round is a few seconds). */
 const WORKFLOW_ROUNDS = 3;
+/** Crashes while fitters create and sign field records. */
+const FIELD_ROUNDS = 3;
 const RECOVERY_LIMIT_MS = 2000;
 const S3_TIMEOUT_MS = 2000;
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
@@ -262,6 +269,73 @@ describe('faults on a running server', () => {
     expect(up.status, JSON.stringify(up.body)).toBe(201);
     expect((await attachmentCount(draftId)).a).toBe(before.a + 1);
   }, 60000);
+
+  it(`keeps every acknowledged field record and signature through ${FIELD_ROUNDS} crashes, each once and none in part`, async () => {
+    // A released revision of the position's sheet, as the fitters work against.
+    const { revisionId } = await submitted('Field records under crashes');
+    const checker = (await signIn(srv.url, 'checker')).token;
+    const rev = await call(srv.url, 'GET', `/api/revisions/${revisionId}`, { token: checker });
+    const approved = await call(srv.url, 'POST', `/api/revisions/${revisionId}/approve`, {
+      token: checker,
+      body: { rowVersion: rev.body.rowVersion },
+    });
+    expect(approved.status, JSON.stringify(approved.body)).toBe(200);
+    const technician = (await signIn(srv.url, 'technician')).token;
+    const form = await call(srv.url, 'GET', `/api/revisions/${revisionId}/field-form`, {
+      token: technician,
+    });
+    expect(form.status, JSON.stringify(form.body)).toBe(200);
+    const springLength = (form.body.targets as { settingKey: string; value: number }[]).find(
+      (t) => t.settingKey === 'springLength',
+    )!.value;
+
+    const acks = emptyFieldRecordAcks();
+    let running = true;
+    const workers = Array.from({ length: 3 }, () =>
+      fieldRecordWorker(
+        srv.url,
+        technician,
+        { positionId, revisionId, springLength },
+        () => running,
+        acks,
+      ),
+    );
+    for (let round = 0; round < FIELD_ROUNDS; round++) {
+      const seen = { c: acks.created.length, s: acks.signed.length };
+      const waitFrom = Date.now();
+      while (
+        (acks.created.length === seen.c || acks.signed.length === seen.s) &&
+        Date.now() - waitFrom < 20000
+      )
+        await sleep(10);
+      await fc.crash();
+      await sleep(500);
+      await fc.restart();
+      const upAt = Date.now();
+      while (!acks.okAt.some((t) => t > upAt) && Date.now() - upAt < 15000) await sleep(5);
+    }
+    running = false;
+    await Promise.all(workers);
+    console.log(
+      `PostgreSQL crash under field records: ${acks.created.length} created, ${acks.signed.length} signed ` +
+        `(${acks.inDoubt.length} found signed after a failed answer); ${acks.failures.length} refused`,
+    );
+
+    expect(srv.child.exitCode, srv.output()).toBeNull();
+    expect(acks.failures.length, 'the outages were seen').toBeGreaterThan(0);
+    for (const f of acks.failures)
+      expect(f).toEqual({ status: 503, code: 'service_unavailable', retryAfter: '2' });
+    expect(acks.signed.length).toBeGreaterThan(0);
+    const rows = await fc.query<{ id: string; status: string }>(
+      `select id, status from field_records where id = any($1)`,
+      [acks.created],
+    );
+    expect(rows).toHaveLength(acks.created.length);
+    const status = new Map(rows.map((r) => [r.id, r.status]));
+    for (const id of [...acks.signed, ...acks.inDoubt]) expect(status.get(id), id).toBe('signed');
+    for (const [what, q] of Object.entries(fieldRecordHalfQueries))
+      expect(await fc.query(q), what).toEqual([]);
+  }, 150000);
 
   // Last: it leaves mail jobs that were in hand at a crash until they expire.
   it(`keeps every acknowledged save, submission and approval through ${WORKFLOW_ROUNDS} crashes, and half of none`, async () => {
