@@ -5,38 +5,22 @@ import { createDatabase, createMigrationDatabase } from '../src/connection.js';
 import { migrateToLatest } from '../src/migrate.js';
 import { seed } from '../src/seed.js';
 import { createFreshDatabase } from './fresh-database.js';
-// @ts-expect-error plain ESM helper without type declarations
-import * as roles from '../../scripts/lib/db-roles.mjs';
+import { failure, provisionedDatabase, type ProvisionedDatabase } from './provisioned-database.js';
 
 /**
  * A countersigned field record is a record: the server's own credentials (holdfast_app) cannot
  * change or delete it, its measurements, checks, signatures or photos, nor truncate the tables.
- * Provisioned as in least-privilege.test.ts.
+ * Provisioned as `npm start` does it (provisioned-database.ts).
  */
 describe('field records in PostgreSQL, as the app role', () => {
-  let fresh: Awaited<ReturnType<typeof createFreshDatabase>>;
+  let db: ProvisionedDatabase;
   let app: pg.Client;
   let positionId: string;
   let revisionId: string;
   let userId: string;
   let otherId: string;
 
-  const as = (base: string, role: string) => {
-    const u = new URL(base);
-    const secret = decodeURIComponent(new URL(process.env.DATABASE_URL!).password);
-    u.username = role;
-    u.password = encodeURIComponent(roles.rolePassword(secret, role) as string);
-    return u.toString();
-  };
-  const refused = async (text: string, values: unknown[] = []) => {
-    const e = await app.query(text, values).then(
-      () => {
-        throw new Error(`succeeded: ${text}`);
-      },
-      (err: { code?: string; message: string }) => err,
-    );
-    return e;
-  };
+  const refused = (text: string, values: unknown[] = []) => failure(app.query(text, values));
 
   async function newRecord(): Promise<string> {
     const id = randomUUID();
@@ -74,23 +58,8 @@ describe('field records in PostgreSQL, as the app role', () => {
   }
 
   beforeAll(async () => {
-    fresh = await createFreshDatabase('field_rec');
-    const name = new URL(fresh.url).pathname.slice(1);
-    const secret = decodeURIComponent(new URL(process.env.DATABASE_URL!).password);
-    const admin = new pg.Client({ connectionString: fresh.url });
-    await admin.connect();
-    await admin.query(roles.clusterRolesSql(secret) as string);
-    await admin.query(roles.databaseRolesSql(name) as string);
-    await admin.end();
-    const ownerUrl = as(fresh.url, roles.OWNER_ROLE);
-    const plain = createMigrationDatabase(ownerUrl);
-    await migrateToLatest(plain);
-    await plain.destroy();
-    const owned = createDatabase({ connectionString: ownerUrl, max: 1 });
-    await seed(owned);
-    await owned.destroy();
-    app = new pg.Client({ connectionString: as(fresh.url, roles.APP_ROLE) });
-    await app.connect();
+    db = await provisionedDatabase('field_rec');
+    app = db.app;
     const rev = await app.query(
       `select r.id, s.position_id from revisions r join sheets s on s.id = r.sheet_id limit 1`,
     );
@@ -100,10 +69,7 @@ describe('field records in PostgreSQL, as the app role', () => {
     userId = users.rows[0].id;
     otherId = users.rows[1].id;
   }, 120000);
-  afterAll(async () => {
-    await app?.end();
-    await fresh?.drop();
-  });
+  afterAll(() => db?.close());
 
   it('a draft can be edited and its parts replaced', async () => {
     const id = await newRecord();
@@ -114,9 +80,21 @@ describe('field records in PostgreSQL, as the app role', () => {
     await app.query(`delete from field_record_checks where record_id = $1`, [id]);
   });
 
-  it('signed: content is frozen, only the countersignature may follow', async () => {
+  const addPhoto = (id: string) =>
+    app.query(
+      `insert into attachments (revision_id, file_name, content_type, size, sha256, storage_key, uploaded_by, field_record_id)
+       values ($2, 'p.png', 'image/png', 1, repeat('a', 64), $3, $4, $1)`,
+      [id, revisionId, `probe/${randomUUID()}`, userId],
+    );
+
+  it('signed: content and photos are frozen, only the countersignature may follow', async () => {
     const id = await newRecord();
+    await addPhoto(id);
     await sign(id);
+    expect((await failure(addPhoto(id))).code).toBe('HF001');
+    expect((await refused(`delete from attachments where field_record_id = $1`, [id])).code).toBe(
+      'HF001',
+    );
     expect(
       (await refused(`update field_records set findings = 'x' where id = $1`, [id])).code,
     ).toBe('HF001');

@@ -1,63 +1,21 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import pg from 'pg';
-import { createDatabase, createMigrationDatabase } from '../src/connection.js';
-import { migrateToLatest } from '../src/migrate.js';
-import { seed } from '../src/seed.js';
-import { createFreshDatabase } from './fresh-database.js';
-// @ts-expect-error plain ESM helper without type declarations
-import * as roles from '../../scripts/lib/db-roles.mjs';
+import { failure, provisionedDatabase, type ProvisionedDatabase } from './provisioned-database.js';
 
 /**
- * The server's own credentials (holdfast_app) against the records it must not be able to destroy.
- * The database is provisioned exactly as `npm start` does it (scripts/lib/db-roles.mjs), migrated
- * and seeded as the owner role; DATABASE_URL is the cluster's superuser, whose password is the
- * secret the role passwords derive from.
+ * The server's own credentials (holdfast_app) against the records it must not be able to destroy,
+ * in a database provisioned as `npm start` does it (provisioned-database.ts).
  */
 describe('least privilege: the app role', () => {
-  let fresh: Awaited<ReturnType<typeof createFreshDatabase>>;
+  let db: ProvisionedDatabase;
   let ownerUrl: string;
-  let appUrl: string;
   let app: pg.Client;
 
-  const as = (base: string, role: string) => {
-    const u = new URL(base);
-    const secret = decodeURIComponent(new URL(process.env.DATABASE_URL!).password);
-    u.username = role;
-    u.password = encodeURIComponent(roles.rolePassword(secret, role) as string);
-    return u.toString();
-  };
-  const failure = (p: Promise<unknown>) =>
-    p.then(
-      () => {
-        throw new Error('the statement succeeded');
-      },
-      (e: { code?: string; message: string }) => e,
-    );
-
   beforeAll(async () => {
-    fresh = await createFreshDatabase('least_priv');
-    const name = new URL(fresh.url).pathname.slice(1);
-    const secret = decodeURIComponent(new URL(process.env.DATABASE_URL!).password);
-    const admin = new pg.Client({ connectionString: fresh.url });
-    await admin.connect();
-    await admin.query(roles.clusterRolesSql(secret) as string);
-    await admin.query(roles.databaseRolesSql(name) as string);
-    await admin.end();
-    ownerUrl = as(fresh.url, roles.OWNER_ROLE);
-    appUrl = as(fresh.url, roles.APP_ROLE);
-    const plain = createMigrationDatabase(ownerUrl);
-    await migrateToLatest(plain);
-    await plain.destroy();
-    const owned = createDatabase({ connectionString: ownerUrl, max: 1 });
-    await seed(owned);
-    await owned.destroy();
-    app = new pg.Client({ connectionString: appUrl });
-    await app.connect();
+    db = await provisionedDatabase('least_priv');
+    ({ ownerUrl, app } = db);
   }, 120000);
-  afterAll(async () => {
-    await app?.end();
-    await fresh?.drop();
-  });
+  afterAll(() => db?.close());
 
   it('is neither superuser nor owner of anything it writes to', async () => {
     const { rows } = await app.query(

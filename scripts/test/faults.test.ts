@@ -17,6 +17,11 @@ import {
 } from './support/fault-cluster.js';
 import { startSmtpCapture, type SmtpCapture } from './support/smtp-capture.js';
 import { emptyAcks, halfRecordQueries, workflowWorker } from './support/workflow-load.js';
+import {
+  emptyFieldRecordAcks,
+  fieldRecordHalfQueries,
+  fieldRecordWorker,
+} from './support/field-record-load.js';
 
 /**
  * Faults on a real server process against a PostgreSQL cluster of its own (see
@@ -31,6 +36,8 @@ const SMTP_OUTAGE_MS = Number(process.env.HOLDFAST_FAULT_SMTP_OUTAGE_MS ?? 5000)
 const PG_ROUNDS = 5;
 /** Crashes during the save–submit–approve load (each round is a few seconds). */
 const WORKFLOW_ROUNDS = 3;
+/** Crashes while fitters create and sign field records. */
+const FIELD_ROUNDS = 3;
 const RECOVERY_LIMIT_MS = 2000;
 const S3_TIMEOUT_MS = 2000;
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
@@ -263,6 +270,88 @@ describe('faults on a running server', () => {
     expect((await attachmentCount(draftId)).a).toBe(before.a + 1);
   }, 60000);
 
+  /**
+   * Crashes PostgreSQL `rounds` times, each once every one of `counts` has moved since the round
+   * began (or after 20 s), and restarts it; returns, per round, the time from the restart to the
+   * first acknowledged write (`okAt`).
+   */
+  const crashRounds = async (rounds: number, counts: () => number[], okAt: number[]) => {
+    const recoveries: number[] = [];
+    for (let round = 0; round < rounds; round++) {
+      const seen = counts();
+      const waitFrom = Date.now();
+      while (counts().some((n, i) => n === seen[i]) && Date.now() - waitFrom < 20000)
+        await sleep(10);
+      await fc.crash();
+      await sleep(500);
+      await fc.restart();
+      const upAt = Date.now();
+      while (!okAt.some((t) => t > upAt) && Date.now() - upAt < 15000) await sleep(5);
+      recoveries.push(Math.min(...okAt.filter((t) => t > upAt)) - upAt);
+    }
+    return recoveries;
+  };
+
+  it(`keeps every acknowledged field record and signature through ${FIELD_ROUNDS} crashes, each once and none in part`, async () => {
+    // A released revision of the position's sheet, as the fitters work against.
+    const { revisionId } = await submitted('Field records under crashes');
+    const checker = (await signIn(srv.url, 'checker')).token;
+    const rev = await call(srv.url, 'GET', `/api/revisions/${revisionId}`, { token: checker });
+    const approved = await call(srv.url, 'POST', `/api/revisions/${revisionId}/approve`, {
+      token: checker,
+      body: { rowVersion: rev.body.rowVersion },
+    });
+    expect(approved.status, JSON.stringify(approved.body)).toBe(200);
+    const technician = (await signIn(srv.url, 'technician')).token;
+    const form = await call(srv.url, 'GET', `/api/revisions/${revisionId}/field-form`, {
+      token: technician,
+    });
+    expect(form.status, JSON.stringify(form.body)).toBe(200);
+    const springLength = (form.body.targets as { settingKey: string; value: number }[]).find(
+      (t) => t.settingKey === 'springLength',
+    )!.value;
+
+    const acks = emptyFieldRecordAcks();
+    let running = true;
+    const workers = Array.from({ length: 3 }, () =>
+      fieldRecordWorker(
+        srv.url,
+        technician,
+        { positionId, revisionId, springLength },
+        () => running,
+        acks,
+      ),
+    );
+    const recoveries = await crashRounds(
+      FIELD_ROUNDS,
+      () => [acks.created.length, acks.signed.length],
+      acks.okAt,
+    );
+    running = false;
+    await Promise.all(workers);
+    console.log(
+      `PostgreSQL crash under field records: ${acks.created.length} created, ${acks.signed.length} signed ` +
+        `(${acks.inDoubt.length} found signed after a failed answer); ${acks.failures.length} refused; ` +
+        `first write after restart: ${recoveries.map((r) => `${r} ms`).join(', ')}`,
+    );
+
+    expect(srv.child.exitCode, srv.output()).toBeNull();
+    expect(acks.failures.length, 'the outages were seen').toBeGreaterThan(0);
+    for (const f of acks.failures)
+      expect(f).toEqual({ status: 503, code: 'service_unavailable', retryAfter: '2' });
+    for (const r of recoveries) expect(r).toBeLessThan(RECOVERY_LIMIT_MS);
+    expect(acks.signed.length).toBeGreaterThan(0);
+    const rows = await fc.query<{ id: string; status: string }>(
+      `select id, status from field_records where id = any($1)`,
+      [acks.created],
+    );
+    expect(rows).toHaveLength(acks.created.length);
+    const status = new Map(rows.map((r) => [r.id, r.status]));
+    for (const id of [...acks.signed, ...acks.inDoubt]) expect(status.get(id), id).toBe('signed');
+    for (const [what, q] of Object.entries(fieldRecordHalfQueries))
+      expect(await fc.query(q), what).toEqual([]);
+  }, 150000);
+
   // Last: it leaves mail jobs that were in hand at a crash until they expire.
   it(`keeps every acknowledged save, submission and approval through ${WORKFLOW_ROUNDS} crashes, and half of none`, async () => {
     const checker = (await signIn(srv.url, 'checker')).token;
@@ -271,25 +360,12 @@ describe('faults on a running server', () => {
     const workers = ['a', 'b', 'c'].map((label) =>
       workflowWorker(srv.url, { engineer, checker }, positionId, label, () => running, acks),
     );
-    const recoveries: number[] = [];
-    for (let round = 0; round < WORKFLOW_ROUNDS; round++) {
-      // Crash with work of every kind done since the last round, so each kind meets a crash.
-      const seen = { s: acks.saved.length, u: acks.submitted.length, a: acks.approved.length };
-      const waitFrom = Date.now();
-      while (
-        (acks.saved.length === seen.s ||
-          acks.submitted.length === seen.u ||
-          acks.approved.length === seen.a) &&
-        Date.now() - waitFrom < 20000
-      )
-        await sleep(10);
-      await fc.crash();
-      await sleep(500);
-      await fc.restart();
-      const upAt = Date.now();
-      while (!acks.okAt.some((t) => t > upAt) && Date.now() - upAt < 15000) await sleep(5);
-      recoveries.push(Math.min(...acks.okAt.filter((t) => t > upAt)) - upAt);
-    }
+    // Crash with work of every kind done since the last round, so each kind meets a crash.
+    const recoveries = await crashRounds(
+      WORKFLOW_ROUNDS,
+      () => [acks.saved.length, acks.submitted.length, acks.approved.length],
+      acks.okAt,
+    );
     running = false;
     await Promise.all(workers);
     console.log(

@@ -1,31 +1,14 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import {
-  createSheet,
-  createSheetsContext,
-  getRevision,
-  makeRegister,
-  submit,
-  type Register,
-  type SheetsContext,
-} from './sheets-fixture.js';
+import { describe, expect, it } from 'vitest';
+import { createSheet, getRevision, submit, sheetsSuite } from './sheets-fixture.js';
 
 describe('optimistic concurrency', () => {
-  let ctx: SheetsContext;
-  let reg: Register;
-  beforeAll(async () => {
-    ctx = await createSheetsContext();
-  });
-  beforeEach(async () => {
-    await ctx.resetAll();
-    reg = await makeRegister(ctx);
-  });
-  afterAll(() => ctx?.closeAll());
+  const s = sheetsSuite();
 
   it('two saves of the same version: one wins, the other gets 409 with the current version', async () => {
-    const sheet = await createSheet(ctx, reg);
-    const rev = await getRevision(ctx, sheet.revisions[0].id);
+    const sheet = await createSheet(s.ctx, s.reg);
+    const rev = await getRevision(s.ctx, sheet.revisions[0].id);
     const save = (note: string) =>
-      ctx.request('PUT', `/api/revisions/${rev.id}`, {
+      s.ctx.request('PUT', `/api/revisions/${rev.id}`, {
         as: 'engineer',
         body: {
           inputs: rev.inputs,
@@ -40,40 +23,40 @@ describe('optimistic concurrency', () => {
     expect(lost.body.error.code).toBe('conflict');
     expect(lost.body.error.details.currentRowVersion).toBe(rev.rowVersion + 1);
     const won = results.find((r) => r.status === 200)!;
-    expect((await getRevision(ctx, rev.id)).changeNote).toBe(won.body.changeNote);
+    expect((await getRevision(s.ctx, rev.id)).changeNote).toBe(won.body.changeNote);
   });
 
   it('a stale save after another save is refused, never silently overwriting', async () => {
-    const sheet = await createSheet(ctx, reg);
-    const rev = await getRevision(ctx, sheet.revisions[0].id);
+    const sheet = await createSheet(s.ctx, s.reg);
+    const rev = await getRevision(s.ctx, sheet.revisions[0].id);
     const body = { inputs: rev.inputs, unitSystem: 'SI', rowVersion: rev.rowVersion };
     expect(
       (
-        await ctx.request('PUT', `/api/revisions/${rev.id}`, {
+        await s.ctx.request('PUT', `/api/revisions/${rev.id}`, {
           as: 'engineer',
           body: { ...body, changeNote: 'one' },
         })
       ).status,
     ).toBe(200);
-    const stale = await ctx.request('PUT', `/api/revisions/${rev.id}`, {
+    const stale = await s.ctx.request('PUT', `/api/revisions/${rev.id}`, {
       as: 'engineer',
       body: { ...body, changeNote: 'two' },
     });
     expect(stale.status).toBe(409);
-    expect((await getRevision(ctx, rev.id)).changeNote).toBe('one');
+    expect((await getRevision(s.ctx, rev.id)).changeNote).toBe('one');
   });
 
   it('two checkers approving at once: exactly one succeeds', async () => {
-    const sheet = await createSheet(ctx, reg);
+    const sheet = await createSheet(s.ctx, s.reg);
     const id = sheet.revisions[0].id;
-    await submit(ctx, id);
-    const rv = (await getRevision(ctx, id, 'checker')).rowVersion;
+    await submit(s.ctx, id);
+    const rv = (await getRevision(s.ctx, id, 'checker')).rowVersion;
     const results = await Promise.all([
-      ctx.request('POST', `/api/revisions/${id}/approve`, {
+      s.ctx.request('POST', `/api/revisions/${id}/approve`, {
         as: 'checker',
         body: { rowVersion: rv },
       }),
-      ctx.request('POST', `/api/revisions/${id}/return`, {
+      s.ctx.request('POST', `/api/revisions/${id}/return`, {
         as: 'checker2',
         body: { rowVersion: rv, comment: 'No.' },
       }),
@@ -82,16 +65,16 @@ describe('optimistic concurrency', () => {
   });
 
   it('two new revisions at once: one draft, one 409', async () => {
-    const sheet = await createSheet(ctx, reg);
+    const sheet = await createSheet(s.ctx, s.reg);
     const id = sheet.revisions[0].id;
-    await submit(ctx, id);
-    const rv = (await getRevision(ctx, id, 'checker')).rowVersion;
-    await ctx.request('POST', `/api/revisions/${id}/approve`, {
+    await submit(s.ctx, id);
+    const rv = (await getRevision(s.ctx, id, 'checker')).rowVersion;
+    await s.ctx.request('POST', `/api/revisions/${id}/approve`, {
       as: 'checker',
       body: { rowVersion: rv },
     });
     const make = () =>
-      ctx.request('POST', `/api/sheets/${sheet.id}/revisions`, {
+      s.ctx.request('POST', `/api/sheets/${sheet.id}/revisions`, {
         as: 'engineer',
         body: { changeNote: 'Next.' },
       });

@@ -7,34 +7,27 @@ import {
   approve,
   createSheet,
   createSheetsContext,
-  makeRegister,
+  sheetsSuite,
   submit,
   waitFor,
-  type Register,
   type SheetsContext,
 } from './sheets-fixture.js';
+import type { DemoLogin } from './test-context.js';
 
 describe('field records', () => {
-  let ctx: SheetsContext;
-  let reg: Register;
+  const suite = sheetsSuite();
   let revisionId: string;
   let draftRevisionId: string;
   let targets: { settingKey: string; value: number; tolerance: unknown }[];
 
-  beforeAll(async () => {
-    ctx = await createSheetsContext();
-  });
-  afterAll(() => ctx?.closeAll());
   beforeEach(async () => {
-    await ctx.resetAll();
-    reg = await makeRegister(ctx);
-    const sheet = await createSheet(ctx, reg);
-    const a = await submit(ctx, sheet.revisions[0].id);
-    await approve(ctx, a.id);
+    const sheet = await createSheet(suite.ctx, suite.reg);
+    const a = await submit(suite.ctx, sheet.revisions[0].id);
+    await approve(suite.ctx, a.id);
     revisionId = a.id;
-    const draft = await createSheet(ctx, reg, { title: 'Second brake' });
+    const draft = await createSheet(suite.ctx, suite.reg, { title: 'Second brake' });
     draftRevisionId = draft.revisions[0].id;
-    const form = await ctx.request('GET', `/api/revisions/${revisionId}/field-form`, {
+    const form = await suite.ctx.request('GET', `/api/revisions/${revisionId}/field-form`, {
       as: 'technician',
     });
     expect(form.status, form.text).toBe(200);
@@ -44,7 +37,7 @@ describe('field records', () => {
   const spring = () => targets.find((t) => t.settingKey === 'springLength')!;
   const body = (over: Record<string, unknown> = {}) => ({
     id: randomUUID(),
-    positionId: reg.positionId,
+    positionId: suite.reg.positionId,
     revisionId,
     kind: 'commissioning',
     performedAt: '2026-11-30T09:00:00Z',
@@ -62,13 +55,15 @@ describe('field records', () => {
   });
 
   it('a technician never sees a draft revision, nor makes a record against one', async () => {
-    const rev = await ctx.request('GET', `/api/revisions/${draftRevisionId}`, { as: 'technician' });
+    const rev = await suite.ctx.request('GET', `/api/revisions/${draftRevisionId}`, {
+      as: 'technician',
+    });
     expect(rev.body.inputs ?? null).toBeNull();
-    const form = await ctx.request('GET', `/api/revisions/${draftRevisionId}/field-form`, {
+    const form = await suite.ctx.request('GET', `/api/revisions/${draftRevisionId}/field-form`, {
       as: 'technician',
     });
     expect(form.status).toBe(404);
-    const res = await ctx.request('POST', '/api/field-records', {
+    const res = await suite.ctx.request('POST', '/api/field-records', {
       as: 'technician',
       body: body({ revisionId: draftRevisionId }),
     });
@@ -77,26 +72,36 @@ describe('field records', () => {
 
   it('create is idempotent by the client id: 201, then 200 with the same record, stored once', async () => {
     const b = body();
-    const first = await ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
+    const first = await suite.ctx.request('POST', '/api/field-records', {
+      as: 'technician',
+      body: b,
+    });
     expect(first.status, first.text).toBe(201);
-    const again = await ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
+    const again = await suite.ctx.request('POST', '/api/field-records', {
+      as: 'technician',
+      body: b,
+    });
     expect(again.status, again.text).toBe(200);
     expect(again.body.id).toBe(first.body.id);
-    const list = await ctx.request('GET', `/api/field-records?positionId=${reg.positionId}`, {
-      as: 'viewer',
-    });
+    const list = await suite.ctx.request(
+      'GET',
+      `/api/field-records?positionId=${suite.reg.positionId}`,
+      {
+        as: 'viewer',
+      },
+    );
     expect(list.body.items).toHaveLength(1);
     // Ten retries racing each other still leave one record.
     const c = body();
     const raced = await Promise.all(
       Array.from({ length: 10 }, () =>
-        ctx.request('POST', '/api/field-records', { as: 'technician', body: c }),
+        suite.ctx.request('POST', '/api/field-records', { as: 'technician', body: c }),
       ),
     );
     expect(raced.map((r) => r.status).sort()).toEqual([
       200, 200, 200, 200, 200, 200, 200, 200, 200, 201,
     ]);
-    const db = ctx.app.get(Database);
+    const db = suite.ctx.app.get(Database);
     const n = await db
       .selectFrom('fieldRecords')
       .select((e) => e.fn.countAll<string>().as('n'))
@@ -105,7 +110,7 @@ describe('field records', () => {
   });
 
   it('bad input is a 400 with field paths', async () => {
-    const res = await ctx.request('POST', '/api/field-records', {
+    const res = await suite.ctx.request('POST', '/api/field-records', {
       as: 'technician',
       body: body({
         kind: 'guesswork',
@@ -115,7 +120,7 @@ describe('field records', () => {
     expect(res.status).toBe(400);
     const paths = res.body.error.fields.map((f: { path: string }) => f.path);
     expect(paths).toEqual(expect.arrayContaining(['kind', 'measurements.0.asLeft']));
-    const unknownKey = await ctx.request('POST', '/api/field-records', {
+    const unknownKey = await suite.ctx.request('POST', '/api/field-records', {
       as: 'technician',
       body: body({ measurements: [{ settingKey: 'nonsense', asLeft: 1 }] }),
     });
@@ -128,16 +133,19 @@ describe('field records', () => {
     const b = body({
       measurements: [{ settingKey: 'springLength', asFound: null, asLeft: s.value + 0.002 }],
     });
-    const created = await ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
+    const created = await suite.ctx.request('POST', '/api/field-records', {
+      as: 'technician',
+      body: b,
+    });
     expect(created.body.outOfTolerance).toBe(true);
     expect(created.body.measurements[0].asLeftVerdict).toMatchObject({ status: 'out' });
-    const refused = await ctx.request('POST', `/api/field-records/${b.id}/sign`, {
+    const refused = await suite.ctx.request('POST', `/api/field-records/${b.id}/sign`, {
       as: 'technician',
       body: {},
     });
     expect(refused.status).toBe(400);
     expect(refused.body.error.fields[0].path).toBe('measurements.0.reason');
-    const upd = await ctx.request('PATCH', `/api/field-records/${b.id}`, {
+    const upd = await suite.ctx.request('PATCH', `/api/field-records/${b.id}`, {
       as: 'technician',
       body: {
         measurements: [
@@ -150,7 +158,7 @@ describe('field records', () => {
       },
     });
     expect(upd.status, upd.text).toBe(200);
-    const signed = await ctx.request('POST', `/api/field-records/${b.id}/sign`, {
+    const signed = await suite.ctx.request('POST', `/api/field-records/${b.id}/sign`, {
       as: 'technician',
       body: {},
     });
@@ -159,12 +167,12 @@ describe('field records', () => {
     expect(signed.body.signed.by.initials).toBe('NH');
     expect(signed.body.verificationCode).toMatch(/^[A-Z2-7]{10}$/);
     const mail = await waitFor(() =>
-      ctx.smtp.mails.find((m) => m.raw.includes('out of tolerance')),
+      suite.ctx.smtp.mails.find((m) => m.raw.includes('out of tolerance')),
     );
     expect(mail.to).toEqual(
       expect.arrayContaining(['engineer@holdfast.test', 'checker@holdfast.test']),
     );
-    const due = await ctx.request('GET', '/api/field-records/due', { as: 'checker' });
+    const due = await suite.ctx.request('GET', '/api/field-records/due', { as: 'checker' });
     expect(due.body.awaitingCountersign).toEqual([
       expect.objectContaining({ recordId: b.id, outOfTolerance: true }),
     ]);
@@ -172,19 +180,22 @@ describe('field records', () => {
 
   it('sign then countersign: by a plant engineer who did not sign; then the record is immutable', async () => {
     const b = body();
-    await ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
+    await suite.ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
     expect(
       (
-        await ctx.request('POST', `/api/field-records/${b.id}/countersign`, {
+        await suite.ctx.request('POST', `/api/field-records/${b.id}/countersign`, {
           as: 'checker',
           body: {},
         })
       ).status,
     ).toBe(409);
-    await ctx.request('POST', `/api/field-records/${b.id}/sign`, { as: 'technician', body: {} });
+    await suite.ctx.request('POST', `/api/field-records/${b.id}/sign`, {
+      as: 'technician',
+      body: {},
+    });
     expect(
       (
-        await ctx.request('POST', `/api/field-records/${b.id}/countersign`, {
+        await suite.ctx.request('POST', `/api/field-records/${b.id}/countersign`, {
           as: 'technician',
           body: {},
         })
@@ -192,24 +203,24 @@ describe('field records', () => {
     ).toBe(403);
     expect(
       (
-        await ctx.request('POST', `/api/field-records/${b.id}/countersign`, {
+        await suite.ctx.request('POST', `/api/field-records/${b.id}/countersign`, {
           as: 'viewer',
           body: {},
         })
       ).status,
     ).toBe(403);
-    const cs = await ctx.request('POST', `/api/field-records/${b.id}/countersign`, {
+    const cs = await suite.ctx.request('POST', `/api/field-records/${b.id}/countersign`, {
       as: 'checker',
       body: { note: 'Seen on site.' },
     });
     expect(cs.status, cs.text).toBe(200);
     expect(cs.body.status).toBe('countersigned');
-    const edit = await ctx.request('PATCH', `/api/field-records/${b.id}`, {
+    const edit = await suite.ctx.request('PATCH', `/api/field-records/${b.id}`, {
       as: 'technician',
       body: { findings: 'changed later' },
     });
     expect(edit.status).toBe(409);
-    const audit = await ctx.app
+    const audit = await suite.ctx.app
       .get(Database)
       .selectFrom('auditEvents')
       .select('action')
@@ -221,14 +232,35 @@ describe('field records', () => {
       'field-record.signed',
       'field-record.countersigned',
     ]);
-    const state = await ctx.request(
+    const state = await suite.ctx.request(
       'GET',
-      `/api/register/positions/${reg.positionId}/field-state`,
+      `/api/register/positions/${suite.reg.positionId}/field-state`,
       {
         as: 'technician',
       },
     );
     expect(state.body.setTo).toMatchObject({ revisionId, superseded: false });
+  });
+
+  it("who may write: only recorders create, only the maker edits and signs, no countersigning one's own", async () => {
+    const post = (as: DemoLogin, path: string, b: unknown = {}) =>
+      suite.ctx.request('POST', path, { as, body: b }).then((r) => r.status);
+    expect(await post('viewer', '/api/field-records', body())).toBe(403);
+    expect(await post('admin', '/api/field-records', body())).toBe(403);
+    const fitter = body();
+    expect(await post('technician', '/api/field-records', fitter)).toBe(201);
+    const patch = await suite.ctx.request('PATCH', `/api/field-records/${fitter.id}`, {
+      as: 'engineer',
+      body: { findings: 'not mine to write' },
+    });
+    expect(patch.status).toBe(403);
+    expect(await post('engineer', `/api/field-records/${fitter.id}/sign`)).toBe(403);
+    // An engineer may record field work too, but a second person countersigns it.
+    const own = body();
+    expect(await post('engineer', '/api/field-records', own)).toBe(201);
+    expect(await post('engineer', `/api/field-records/${own.id}/sign`)).toBe(200);
+    expect(await post('engineer', `/api/field-records/${own.id}/countersign`)).toBe(403);
+    expect(await post('checker', `/api/field-records/${own.id}/countersign`)).toBe(200);
   });
 
   it('prints the record with targets, tolerances, signatures and a code /verify answers for', async () => {
@@ -239,13 +271,13 @@ describe('field records', () => {
       ],
       findings: 'Lining at 9 mm on both shoes.',
     });
-    await ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
-    const signed = await ctx.request('POST', `/api/field-records/${b.id}/sign`, {
+    await suite.ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
+    const signed = await suite.ctx.request('POST', `/api/field-records/${b.id}/sign`, {
       as: 'technician',
       body: {},
     });
-    const res = await fetch(`${ctx.baseUrl}/api/field-records/${b.id}/pdf`, {
-      headers: { authorization: `Bearer ${await ctx.token('viewer')}` },
+    const res = await fetch(`${suite.ctx.baseUrl}/api/field-records/${b.id}/pdf`, {
+      headers: { authorization: `Bearer ${await suite.ctx.token('viewer')}` },
     });
     expect(res.status).toBe(200);
     expect(res.headers.get('content-type')).toContain('application/pdf');
@@ -259,7 +291,7 @@ describe('field records', () => {
     expect(facts.text).toContain('Lining at 9 mm on both shoes.');
     expect(facts.fonts.length).toBeGreaterThan(0);
     expect(facts.fonts.every((f) => f.embedded)).toBe(true);
-    const v = await ctx.request('GET', `/api/verify/${signed.body.verificationCode}`);
+    const v = await suite.ctx.request('GET', `/api/verify/${signed.body.verificationCode}`);
     expect(v.status).toBe(200);
     expect(v.body).toMatchObject({
       kind: 'field-record',
@@ -270,13 +302,13 @@ describe('field records', () => {
 
   it('photos go through the attachment path, owned by the record, and only onto a draft', async () => {
     const b = body();
-    await ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
-    const send = async (bytes: Buffer, name: string) => {
+    await suite.ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
+    const send = async (bytes: Buffer, name: string, as: DemoLogin = 'technician') => {
       const form = new FormData();
       form.append('file', new Blob([new Uint8Array(bytes)]), name);
-      const res = await fetch(`${ctx.baseUrl}/api/field-records/${b.id}/attachments`, {
+      const res = await fetch(`${suite.ctx.baseUrl}/api/field-records/${b.id}/attachments`, {
         method: 'POST',
-        headers: { authorization: `Bearer ${await ctx.token('technician')}` },
+        headers: { authorization: `Bearer ${await suite.ctx.token(as)}` },
         body: form,
       });
       return { status: res.status, body: (await res.json()) as any };
@@ -285,41 +317,48 @@ describe('field records', () => {
     const ok = await send(png, 'shoe-a.png');
     expect(ok.status).toBe(201);
     expect((await send(Buffer.from('not a photo'), 'x.png')).status).toBe(415);
-    const list = await ctx.request('GET', `/api/field-records/${b.id}/attachments`, {
+    // An engineer may record field work, but adds photos only to records of their own.
+    expect((await send(png, 'other.png', 'engineer')).status).toBe(403);
+    expect((await send(png, 'viewer.png', 'viewer')).status).toBe(403);
+    const list = await suite.ctx.request('GET', `/api/field-records/${b.id}/attachments`, {
       as: 'viewer',
     });
     expect(list.body.items.map((a: { id: string }) => a.id)).toEqual([ok.body.id]);
-    const revFiles = await ctx.request('GET', `/api/revisions/${revisionId}/attachments`, {
+    const revFiles = await suite.ctx.request('GET', `/api/revisions/${revisionId}/attachments`, {
       as: 'engineer',
     });
     expect(revFiles.body.items).toEqual([]);
-    const dl = await fetch(`${ctx.baseUrl}/api/attachments/${ok.body.id}/download`, {
-      headers: { authorization: `Bearer ${await ctx.token('technician')}` },
+    const dl = await fetch(`${suite.ctx.baseUrl}/api/attachments/${ok.body.id}/download`, {
+      headers: { authorization: `Bearer ${await suite.ctx.token('technician')}` },
     });
     expect(Buffer.from(await dl.arrayBuffer())).toEqual(png);
-    await ctx.request('POST', `/api/field-records/${b.id}/sign`, { as: 'technician', body: {} });
+    await suite.ctx.request('POST', `/api/field-records/${b.id}/sign`, {
+      as: 'technician',
+      body: {},
+    });
     expect((await send(png, 'late.png')).status).toBe(409);
   });
 
   it('a record made against a revision since superseded is flagged', async () => {
     const b = body();
-    await ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
-    const sheetId = (await ctx.request('GET', `/api/revisions/${revisionId}`, { as: 'engineer' }))
-      .body.sheetId;
-    const next = await ctx.request('POST', `/api/sheets/${sheetId}/revisions`, {
+    await suite.ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
+    const sheetId = (
+      await suite.ctx.request('GET', `/api/revisions/${revisionId}`, { as: 'engineer' })
+    ).body.sheetId;
+    const next = await suite.ctx.request('POST', `/api/sheets/${sheetId}/revisions`, {
       as: 'engineer',
       body: { changeNote: 'B.' },
     });
-    await submit(ctx, next.body.id);
-    await approve(ctx, next.body.id);
-    const got = await ctx.request('GET', `/api/field-records/${b.id}`, { as: 'technician' });
+    await submit(suite.ctx, next.body.id);
+    await approve(suite.ctx, next.body.id);
+    const got = await suite.ctx.request('GET', `/api/field-records/${b.id}`, { as: 'technician' });
     expect(got.body.flags).toEqual({ superseded: true, underReview: false });
   });
 
   it('due and overdue lists, and a reminder sent once ahead of the due date', async () => {
-    const put = await ctx.request(
+    const put = await suite.ctx.request(
       'PUT',
-      `/api/register/positions/${reg.positionId}/inspection-interval`,
+      `/api/register/positions/${suite.reg.positionId}/inspection-interval`,
       {
         as: 'engineer',
         body: { basis: 'days', every: 30, remindDaysAhead: 7 },
@@ -327,22 +366,27 @@ describe('field records', () => {
     );
     expect(put.status, put.text).toBe(200);
     const b = body({ performedAt: new Date(Date.now() - 25 * 86_400_000).toISOString() });
-    await ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
-    await ctx.request('POST', `/api/field-records/${b.id}/sign`, { as: 'technician', body: {} });
-    const due = await ctx.request('GET', '/api/field-records/due', { as: 'technician' });
-    expect(due.body.due.map((d: { positionId: string }) => d.positionId)).toEqual([reg.positionId]);
+    await suite.ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
+    await suite.ctx.request('POST', `/api/field-records/${b.id}/sign`, {
+      as: 'technician',
+      body: {},
+    });
+    const due = await suite.ctx.request('GET', '/api/field-records/due', { as: 'technician' });
+    expect(due.body.due.map((d: { positionId: string }) => d.positionId)).toEqual([
+      suite.reg.positionId,
+    ]);
     expect(due.body.overdue).toEqual([]);
-    const schedule = ctx.app.get(InspectionScheduleService);
+    const schedule = suite.ctx.app.get(InspectionScheduleService);
     expect(await schedule.sendReminders()).toBe(1);
     expect(await schedule.sendReminders()).toBe(0);
-    await waitFor(() => ctx.smtp.mails.find((m) => m.raw.includes('inspection due')));
+    await waitFor(() => suite.ctx.smtp.mails.find((m) => m.raw.includes('inspection due')));
     await new Promise((r) => setTimeout(r, 1500));
-    expect(ctx.smtp.mails.filter((m) => m.raw.includes('inspection due'))).toHaveLength(1);
+    expect(suite.ctx.smtp.mails.filter((m) => m.raw.includes('inspection due'))).toHaveLength(1);
     const later = await schedule.due(
       { id: randomUUID(), role: 'technician' } as never,
       new Date(Date.now() + 10 * 86_400_000),
     );
-    expect(later.overdue.map((d) => d.positionId)).toEqual([reg.positionId]);
+    expect(later.overdue.map((d) => d.positionId)).toEqual([suite.reg.positionId]);
   });
 });
 

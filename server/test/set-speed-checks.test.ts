@@ -1,31 +1,15 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import {
-  createSheet,
-  createSheetsContext,
-  getRevision,
-  makeRegister,
-  type Register,
-  type SheetsContext,
-} from './sheets-fixture.js';
+import { describe, expect, it } from 'vitest';
+import { createSheet, getRevision, sheetsSuite } from './sheets-fixture.js';
 
 // Issue 10 item 6 through the API: the scenarios that found each gap are refused at submit
 // (failing checks need a written justification) and name the check.
 describe('checks at the speed the brake sets with, through the API', () => {
-  let ctx: SheetsContext;
-  let reg: Register;
-  beforeAll(async () => {
-    ctx = await createSheetsContext();
-  });
-  beforeEach(async () => {
-    await ctx.resetAll();
-    reg = await makeRegister(ctx);
-  });
-  afterAll(() => ctx?.closeAll());
+  const s = sheetsSuite();
 
   async function submitWith(sheetType: string, change: Record<string, unknown>) {
-    const sheet = await createSheet(ctx, reg, { sheetType });
-    const rev = await getRevision(ctx, sheet.revisions[0].id);
-    const put = await ctx.request('PUT', `/api/revisions/${rev.id}`, {
+    const sheet = await createSheet(s.ctx, s.reg, { sheetType });
+    const rev = await getRevision(s.ctx, sheet.revisions[0].id);
+    const put = await s.ctx.request('PUT', `/api/revisions/${rev.id}`, {
       as: 'engineer',
       body: {
         inputs: { ...rev.inputs, ...change },
@@ -36,8 +20,8 @@ describe('checks at the speed the brake sets with, through the API', () => {
       },
     });
     expect(put.status, put.text).toBe(200);
-    const saved = await getRevision(ctx, rev.id);
-    return ctx.request('POST', `/api/revisions/${rev.id}/submit`, {
+    const saved = await getRevision(s.ctx, rev.id);
+    return s.ctx.request('POST', `/api/revisions/${rev.id}/submit`, {
       as: 'engineer',
       body: { rowVersion: saved.rowVersion },
     });

@@ -1,6 +1,6 @@
 // Shared set-up of the sheets e2e suites: SMTP capture, embedded S3, the register and helpers.
 import { SMTPServer } from 'smtp-server';
-import { expect } from 'vitest';
+import { afterAll, beforeAll, beforeEach, expect } from 'vitest';
 import { CriteriaService } from '../src/criteria/criteria.service.js';
 import { JobQueue, MAIL_QUEUE } from '../src/outbox/job-queue.js';
 import { createTestContext, type DemoLogin, type TestContext } from './test-context.js';
@@ -118,6 +118,23 @@ export async function createSheetsContext(
       await smtp.stop();
     },
   });
+}
+
+/**
+ * The usual suite: one app for the file, every table emptied and a fresh register before each
+ * test. Read `suite.ctx` and `suite.reg` inside the tests (they are set by the hooks).
+ */
+export function sheetsSuite(): { ctx: SheetsContext; reg: Register } {
+  const suite = {} as { ctx: SheetsContext; reg: Register };
+  beforeAll(async () => {
+    suite.ctx = await createSheetsContext();
+  });
+  beforeEach(async () => {
+    await suite.ctx.resetAll();
+    suite.reg = await makeRegister(suite.ctx);
+  });
+  afterAll(() => suite.ctx?.closeAll());
+  return suite;
 }
 
 export interface Register {

@@ -7,23 +7,16 @@ import {
   Res,
   StreamableFile,
   UploadedFile,
-  UseInterceptors,
 } from '@nestjs/common';
-import { FileInterceptor } from '@nestjs/platform-express';
-import { ApiBearerAuth, ApiBody, ApiConsumes, ApiTags } from '@nestjs/swagger';
-import {
-  MAX_ATTACHMENT_BYTES,
-  type Attachment,
-  type AttachmentList,
-  apiRoutes,
-} from '@holdfast/shared';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { type Attachment, type AttachmentList, apiRoutes } from '@holdfast/shared';
 import type { Response } from 'express';
-import { memoryStorage } from 'multer';
 import { CurrentUser, type AuthUser } from '../auth/auth-user.js';
 import { Roles, SignedIn } from '../auth/policy.js';
 import { UuidParamPipe } from '../common/pipes/uuid-param.pipe.js';
 import { AttachmentsService } from './attachments.service.js';
 import { contentDisposition } from './sniff.js';
+import { FileUpload } from './stored-file.js';
 
 @ApiTags('attachments')
 @ApiBearerAuth()
@@ -43,16 +36,7 @@ export class AttachmentsController {
   @Post(apiRoutes.attachments.upload.path)
   @HttpCode(201)
   @Roles('engineer')
-  @ApiConsumes('multipart/form-data')
-  @ApiBody({
-    schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' } } },
-  })
-  @UseInterceptors(
-    FileInterceptor('file', {
-      storage: memoryStorage(),
-      limits: { fileSize: MAX_ATTACHMENT_BYTES, files: 1 },
-    }),
-  )
+  @FileUpload()
   upload(
     @CurrentUser() user: AuthUser,
     @Param('id', UuidParamPipe) id: string,

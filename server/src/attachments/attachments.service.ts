@@ -1,50 +1,26 @@
-import { createHash, randomUUID } from 'node:crypto';
+import { randomUUID } from 'node:crypto';
 import { Injectable, Logger } from '@nestjs/common';
 import type { Attachment } from '@holdfast/shared';
-import type { AttachmentRow, DB } from '@holdfast/db';
+import type { DB } from '@holdfast/db';
 import type { Kysely } from 'kysely';
 import type { AuthUser } from '../auth/auth-user.js';
-import { ApiException, badRequest, notFound } from '../common/errors/api-exception.js';
+import { ApiException, notFound } from '../common/errors/api-exception.js';
 import { Database } from '../database/database.js';
 import { AuditService } from '../audit/audit.service.js';
 import { RevisionsRepository } from '../revisions/revisions.repository.js';
 import { RevisionsService } from '../revisions/revisions.service.js';
 import { ObjectStorage } from '../storage/object-storage.js';
 import { AppConfig } from '../config/app-config.js';
-import { nameForType, sanitizeFileName, sniffContentType } from './sniff.js';
+import { nameForType, sniffContentType } from './sniff.js';
+import {
+  givenFileName,
+  requireFile,
+  sha256Of,
+  storeThenRecord,
+  toAttachment,
+  type UploadedFile,
+} from './stored-file.js';
 import { UsersRepository } from '../users/users.repository.js';
-
-type People = Map<string, { id: string; displayName: string; initials: string }>;
-
-function toAttachment(r: AttachmentRow, people: People): Attachment {
-  return {
-    id: r.id,
-    revisionId: r.revisionId,
-    fileName: r.fileName,
-    contentType: r.contentType as Attachment['contentType'],
-    size: Number(r.size),
-    sha256: r.sha256,
-    uploadedBy: people.get(r.uploadedBy) ?? {
-      id: r.uploadedBy,
-      displayName: 'Unknown user',
-      initials: '??',
-    },
-    createdAt: r.createdAt.toISOString(),
-  };
-}
-
-/** multer hands over the multipart file name decoded as latin1; recover its UTF-8 text. */
-function utf8Name(name: string): string {
-  if (!/[\u0080-\u00ff]/.test(name)) return name;
-  const utf8 = Buffer.from(name, 'latin1').toString('utf8');
-  return utf8.includes('\uFFFD') ? name : utf8;
-}
-
-export interface UploadedFile {
-  originalname: string;
-  buffer: Buffer;
-  size: number;
-}
 
 @Injectable()
 export class AttachmentsService {
@@ -74,23 +50,17 @@ export class AttachmentsService {
     return rows.map((r) => toAttachment(r, people));
   }
 
-  /**
-   * Sniff, hash, store the object, then write the row in a transaction; if the row cannot be
-   * written the object is deleted again, so a failed upload leaves no half record.
-   */
+  /** Sniff, hash, store the object, then write the row (stored-file.ts). */
   async upload(
     user: AuthUser,
     revisionId: string,
-    file: UploadedFile | undefined,
+    sent: UploadedFile | undefined,
   ): Promise<Attachment> {
-    if (!file)
-      throw badRequest('Some fields are not valid.', [
-        { path: 'file', message: 'attach a file in the field "file"' },
-      ]);
+    const file = requireFile(sent, 'a file');
     const rev = await this.revisions.load(user, revisionId);
     this.revisions.assertEditable(user, rev, rev.rowVersion);
     await this.assertQuota(this.db, revisionId, file.buffer.length);
-    const givenName = sanitizeFileName(utf8Name(file.originalname));
+    const givenName = givenFileName(file);
     const contentType = sniffContentType(file.buffer, givenName);
     if (!contentType) {
       throw new ApiException(
@@ -101,11 +71,10 @@ export class AttachmentsService {
       );
     }
     const fileName = nameForType(givenName, contentType);
-    const sha256 = createHash('sha256').update(file.buffer).digest('hex');
+    const sha256 = sha256Of(file.buffer);
     const storageKey = `revisions/${revisionId}/${randomUUID()}`;
-    await this.storage.put(storageKey, file.buffer, contentType);
-    try {
-      const row = await this.db.transaction().execute(async (trx) => {
+    const row = await storeThenRecord(this.storage, storageKey, file.buffer, contentType, () =>
+      this.db.transaction().execute(async (trx) => {
         // The revision row lock serialises uploads to one revision, so the quota holds under races.
         await trx
           .selectFrom('revisions')
@@ -136,12 +105,9 @@ export class AttachmentsService {
           after: { revision: rev.label, fileName, contentType, size: file.buffer.length, sha256 },
         });
         return created;
-      });
-      return toAttachment(row, await this.users.people([user.id]));
-    } catch (e) {
-      await this.storage.delete(storageKey);
-      throw e;
-    }
+      }),
+    );
+    return toAttachment(row, await this.users.people([user.id]));
   }
 
   /** Refuses an upload that would take the revision past its file count or byte quota. */
@@ -189,7 +155,7 @@ export class AttachmentsService {
         },
       );
     }
-    const actual = createHash('sha256').update(bytes).digest('hex');
+    const actual = sha256Of(bytes);
     if (actual !== row.sha256) {
       this.logger.error(
         `attachment ${id}: checksum mismatch (stored ${row.sha256}, read ${actual})`,

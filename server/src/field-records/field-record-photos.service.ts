@@ -1,39 +1,25 @@
-import { createHash, randomUUID } from 'node:crypto';
+import { randomUUID } from 'node:crypto';
 import { Injectable } from '@nestjs/common';
-import type { AttachmentRow } from '@holdfast/db';
+import type { FieldRecordRow } from '@holdfast/db';
 import type { Attachment } from '@holdfast/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { AuditService } from '../audit/audit.service.js';
-import { sanitizeFileName, nameForType, sniffContentType } from '../attachments/sniff.js';
+import { nameForType, sniffContentType } from '../attachments/sniff.js';
 import {
-  ApiException,
-  badRequest,
-  conflict,
-  forbidden,
-  notFound,
-} from '../common/errors/api-exception.js';
+  givenFileName,
+  requireFile,
+  sha256Of,
+  storeThenRecord,
+  toAttachment,
+  type UploadedFile,
+} from '../attachments/stored-file.js';
+import { ApiException, conflict, forbidden, notFound } from '../common/errors/api-exception.js';
 import { ObjectStorage } from '../storage/object-storage.js';
+import { UsersRepository } from '../users/users.repository.js';
 import { FieldRecordsRepository } from './field-records.repository.js';
 
 /** Photos a record may hold; each is also bounded by the attachment size limit. */
 export const MAX_PHOTOS_PER_RECORD = 20;
-
-type People = Map<string, { id: string; displayName: string; initials: string }>;
-
-const toAttachment = (r: AttachmentRow, people: People): Attachment => ({
-  id: r.id,
-  revisionId: r.revisionId,
-  fileName: r.fileName,
-  contentType: r.contentType as Attachment['contentType'],
-  size: Number(r.size),
-  sha256: r.sha256,
-  uploadedBy: people.get(r.uploadedBy) ?? {
-    id: r.uploadedBy,
-    displayName: 'Unknown user',
-    initials: '??',
-  },
-  createdAt: r.createdAt.toISOString(),
-});
 
 /**
  * Photos of a field record go the attachments' way (sniffed by content, hashed, stored as
@@ -45,29 +31,28 @@ export class FieldRecordPhotosService {
   constructor(
     private readonly repo: FieldRecordsRepository,
     private readonly storage: ObjectStorage,
+    private readonly users: UsersRepository,
     private readonly audit: AuditService,
   ) {}
 
   async list(recordId: string): Promise<Attachment[]> {
     if (!(await this.repo.load(recordId))) throw notFound('Field record not found.');
     const rows = await this.repo.photos(recordId);
-    const people = await this.repo.people(rows.map((r) => r.uploadedBy));
+    const people = await this.users.people(rows.map((r) => r.uploadedBy));
     return rows.map((r) => toAttachment(r, people));
   }
 
   async upload(
     user: AuthUser,
     recordId: string,
-    file: { originalname: string; buffer: Buffer } | undefined,
+    sent: UploadedFile | undefined,
   ): Promise<Attachment> {
-    if (!file) {
-      throw badRequest('Some fields are not valid.', [
-        { path: 'file', message: 'attach a photo in the field "file"' },
-      ]);
-    }
+    const file = requireFile(sent, 'a photo');
     const stored = await this.repo.load(recordId);
     if (!stored) throw notFound('Field record not found.');
-    const givenName = sanitizeFileName(file.originalname);
+    // Checked here before the bytes are stored, and again under the row lock.
+    assertMayAddPhoto(user, stored.record);
+    const givenName = givenFileName(file);
     const contentType = sniffContentType(file.buffer, givenName);
     if (contentType !== 'image/png' && contentType !== 'image/jpeg') {
       throw new ApiException(415, 'unsupported_media_type', 'Photos are PNG or JPEG.', [
@@ -75,17 +60,13 @@ export class FieldRecordPhotosService {
       ]);
     }
     const fileName = nameForType(givenName, contentType);
-    const sha256 = createHash('sha256').update(file.buffer).digest('hex');
+    const sha256 = sha256Of(file.buffer);
     const storageKey = `field-records/${recordId}/${randomUUID()}`;
-    await this.storage.put(storageKey, file.buffer, contentType);
-    try {
-      const row = await this.repo.transaction(async (trx) => {
+    const row = await storeThenRecord(this.storage, storageKey, file.buffer, contentType, () =>
+      this.repo.transaction(async (trx) => {
         const rec = await this.repo.lockForUpdate(trx, recordId);
         if (!rec) throw notFound('Field record not found.');
-        if (rec.createdBy !== user.id)
-          throw forbidden('Only the maker of a record adds its photos.');
-        if (rec.status !== 'draft')
-          throw conflict(`The record is ${rec.status}; photos go with a draft.`);
+        assertMayAddPhoto(user, rec);
         if ((await this.repo.countPhotos(trx, recordId)) >= MAX_PHOTOS_PER_RECORD) {
           throw new ApiException(
             413,
@@ -112,11 +93,18 @@ export class FieldRecordPhotosService {
           after: { fileName, contentType, size: file.buffer.length, sha256 },
         });
         return created;
-      });
-      return toAttachment(row, await this.repo.people([user.id]));
-    } catch (e) {
-      await this.storage.delete(storageKey);
-      throw e;
-    }
+      }),
+    );
+    return toAttachment(row, await this.users.people([user.id]));
   }
+}
+
+/** Photos go with a draft, added by its maker. */
+function assertMayAddPhoto(
+  user: AuthUser,
+  rec: Pick<FieldRecordRow, 'createdBy' | 'status'>,
+): void {
+  if (rec.createdBy !== user.id) throw forbidden('Only the maker of a record adds its photos.');
+  if (rec.status !== 'draft')
+    throw conflict(`The record is ${rec.status}; photos go with a draft.`);
 }

@@ -9,11 +9,8 @@ import {
   Query,
   Res,
   UploadedFile,
-  UseInterceptors,
 } from '@nestjs/common';
-import { FileInterceptor } from '@nestjs/platform-express';
-import { memoryStorage } from 'multer';
-import { ApiBearerAuth, ApiBody, ApiConsumes, ApiTags } from '@nestjs/swagger';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import {
   countersignFieldRecordSchema,
@@ -26,17 +23,17 @@ import {
   type FieldRecord,
   type FieldRecordList,
   type UpdateFieldRecordInput,
-  MAX_ATTACHMENT_BYTES,
   type Attachment,
   type AttachmentList,
   apiRoutes,
 } from '@holdfast/shared';
-import { FieldRecordPhotosService } from './field-record-photos.service.js';
+import { FileUpload } from '../attachments/stored-file.js';
 import { CurrentUser, type AuthUser } from '../auth/auth-user.js';
 import { Roles, SignedIn } from '../auth/policy.js';
 import { ApiBodySchema } from '../common/openapi.js';
 import { UuidParamPipe } from '../common/pipes/uuid-param.pipe.js';
 import { ZodValidationPipe } from '../common/pipes/zod-validation.pipe.js';
+import { FieldRecordPhotosService } from './field-record-photos.service.js';
 import { FieldRecordsService } from './field-records.service.js';
 import { InspectionScheduleService } from './inspection-schedule.service.js';
 
@@ -133,16 +130,7 @@ export class FieldRecordsController {
   @Post(apiRoutes.fieldRecords.upload.path)
   @HttpCode(201)
   @Roles(...RECORDERS)
-  @ApiConsumes('multipart/form-data')
-  @ApiBody({
-    schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' } } },
-  })
-  @UseInterceptors(
-    FileInterceptor('file', {
-      storage: memoryStorage(),
-      limits: { fileSize: MAX_ATTACHMENT_BYTES, files: 1 },
-    }),
-  )
+  @FileUpload()
   uploadPhoto(
     @CurrentUser() user: AuthUser,
     @Param('id', UuidParamPipe) id: string,

@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { StorageModule } from '../storage/storage.module.js';
+import { UsersModule } from '../users/users.module.js';
 import { FieldRecordPhotosService } from './field-record-photos.service.js';
 import { FieldRecordsController } from './field-records.controller.js';
 import { FieldRecordsRepository } from './field-records.repository.js';
@@ -10,7 +11,7 @@ import { InspectionScheduleService } from './inspection-schedule.service.js';
 import { PositionFieldController } from './position-field.controller.js';
 
 @Module({
-  imports: [StorageModule],
+  imports: [StorageModule, UsersModule],
   controllers: [FieldRecordsController, PositionFieldController],
   providers: [
     FieldRecordsRepository,

@@ -228,18 +228,6 @@ export class FieldRecordsRepository {
     await trx.insertInto('fieldRecordSignatures').values(row).execute();
   }
 
-  async people(ids: string[], db: Kysely<DB> = this.db) {
-    const wanted = [...new Set(ids)];
-    if (wanted.length === 0)
-      return new Map<string, { id: string; displayName: string; initials: string }>();
-    const rows = await db
-      .selectFrom('users')
-      .select(['id', 'displayName', 'initials'])
-      .where('id', 'in', wanted)
-      .execute();
-    return new Map(rows.map((r) => [r.id, r]));
-  }
-
   /** E-mail addresses of the sheet's owner and the plant engineers (active engineers, checkers). */
   async notifyEmails(ownerId: string, exceptId: string, db: Kysely<DB> = this.db) {
     const rows = await db

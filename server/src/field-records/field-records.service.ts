@@ -17,6 +17,7 @@ import { AuditService } from '../audit/audit.service.js';
 import { badRequest, conflict, forbidden, notFound } from '../common/errors/api-exception.js';
 import { AppConfig } from '../config/app-config.js';
 import { OutboxService } from '../outbox/outbox.service.js';
+import { UsersRepository } from '../users/users.repository.js';
 import { newVerificationCode } from '../revisions/revision-codes.js';
 import { canReadContent } from '../revisions/revision-access.js';
 import { toFieldRecord } from './field-record-mapper.js';
@@ -45,6 +46,7 @@ const invalid = (fields: FieldIssue[]) => badRequest('Some fields are not valid.
 export class FieldRecordsService {
   constructor(
     private readonly repo: FieldRecordsRepository,
+    private readonly users: UsersRepository,
     private readonly audit: AuditService,
     private readonly outbox: OutboxService,
     private readonly config: AppConfig,
@@ -83,7 +85,7 @@ export class FieldRecordsService {
   private async present(s: StoredFieldRecord, db?: Kysely<DB>): Promise<FieldRecord> {
     const rev = (await this.repo.revision(s.record.revisionId, db))!;
     const tag = (await this.repo.positionTag(s.record.positionId, db)) ?? '';
-    const people = await this.repo.people([s.record.createdBy], db);
+    const people = await this.users.people([s.record.createdBy], db);
     return toFieldRecord(s, rev, tag, people);
   }
 

@@ -9,6 +9,7 @@ import { SheetsRepository } from '../sheets/sheets.repository.js';
 import { SheetsService } from '../sheets/sheets.service.js';
 import { PrintController } from './print.controller.js';
 import { PrintService } from './print.service.js';
+import { RevisionPrintable } from './revision-printable.js';
 import { SafetyFileController } from './safety-file.controller.js';
 import { SafetyFileService } from './safety-file.service.js';
 
@@ -21,6 +22,7 @@ import { SafetyFileService } from './safety-file.service.js';
   controllers: [PrintController, SafetyFileController, FieldRecordPrintController],
   providers: [
     PrintService,
+    RevisionPrintable,
     SafetyFileService,
     SheetsService,
     SheetsRepository,

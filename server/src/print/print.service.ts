@@ -1,23 +1,15 @@
-import {
-  Injectable,
-  NotFoundException,
-  type OnApplicationBootstrap,
-  type OnModuleDestroy,
-} from '@nestjs/common';
+import { Injectable, type OnApplicationBootstrap, type OnModuleDestroy } from '@nestjs/common';
 import { createHash } from 'node:crypto';
-import { getSheetType } from '@holdfast/calc';
 import type { PrintQuery } from '@holdfast/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { ApiException } from '../common/errors/api-exception.js';
-import { AppConfig } from '../config/app-config.js';
 import { CriteriaService } from '../criteria/criteria.service.js';
 import { ReviewsRepository } from '../reviews/reviews.repository.js';
 import type { CriterionConfirmation } from '@holdfast/shared';
 import type { PrintCriteriaReview, PrintCriterion } from './printable-sheet.js';
 import { RevisionsService } from '../revisions/revisions.service.js';
-import { SheetsService } from '../sheets/sheets.service.js';
-import { buildPrintableSheet } from './build-printable-sheet.js';
 import { PdfCache } from './pdf-cache.js';
+import { RevisionPrintable } from './revision-printable.js';
 import { loadPrintSettings } from './print-settings.js';
 import type { PrintableSheet } from './printable-sheet.js';
 import { RenderPool, RenderQueueFullError, type PrintKind } from './render-pool.js';
@@ -82,9 +74,8 @@ export class PrintService implements OnApplicationBootstrap, OnModuleDestroy {
 
   constructor(
     private readonly revisions: RevisionsService,
-    private readonly sheets: SheetsService,
+    private readonly printable: RevisionPrintable,
     private readonly criteria: CriteriaService,
-    private readonly config: AppConfig,
     private readonly reviews: ReviewsRepository,
     private readonly users: UsersRepository,
   ) {}
@@ -124,21 +115,7 @@ export class PrintService implements OnApplicationBootstrap, OnModuleDestroy {
     const hit = frozenKey ? this.cache.get(frozenKey) : undefined;
     if (hit) return { bytes: hit, fileName };
 
-    const sheetType = getSheetType(revision.sheetType);
-    if (!sheetType)
-      throw new NotFoundException(`Sheet type ${revision.sheetType} is not known to this server.`);
-    const [sheet, criteriaSet] = await Promise.all([
-      this.sheets.detail(revision.sheetId),
-      this.criteria.load(revision.criteriaSetId, revision.criteriaSetVersion),
-    ]);
-    const printable = buildPrintableSheet({
-      sheet,
-      revision,
-      sheetType,
-      criteriaSet,
-      verifyBaseUrl: this.config.settings.PUBLIC_URL,
-      paper: query.paper,
-    });
+    const printable = await this.printable.build(revision, query.paper);
     printable.criteriaReviews = criteriaReviews;
     printable.criteria.values = withConfirmations(printable.criteria.values, confirmations);
     const key = frozenKey ?? cacheKey(kind, id, revision.rowVersion, printable);

@@ -7,7 +7,7 @@ import { Heading, Table } from '../parts/table.js';
 import type { PrintableSheet } from '../printable-sheet.js';
 import { Frame } from '../sheet-document.js';
 import { colours, s } from '../theme.js';
-import { toleranceText } from './tolerance-text.js';
+import { targetText, toleranceText } from './tolerance-text.js';
 
 export const RECORD_KIND_TITLES: Record<FieldRecord['kind'], string> = {
   commissioning: 'Commissioning (first setting)',
@@ -76,7 +76,7 @@ export function FieldRecordDocument(props: {
           ]}
           rows={r.measurements.map((m) => [
             m.label,
-            val(m.target, m.dimension),
+            targetText(m, system),
             toleranceText(m.tolerance, m.dimension as Dimension, system),
             val(m.asFound, m.dimension),
             val(m.asLeft, m.dimension),

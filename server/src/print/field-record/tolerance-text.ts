@@ -1,5 +1,5 @@
 import type { Dimension, FieldTolerance } from '@holdfast/calc';
-import { formatNumber } from '@holdfast/calc';
+import { settingPrecision } from '@holdfast/calc';
 import { qty } from '../format.js';
 import type { PrintUnitSystem } from '../printable-sheet.js';
 
@@ -20,7 +20,8 @@ export function toleranceText(
     case 'atMost':
       return '≤ target';
     case 'relative': {
-      const pct = (v: number) => `${formatNumber(v * 100, 3)} %`;
+      // 5 %, not 5.00 %: no trailing zeros a band of whole or half percent does not have.
+      const pct = (v: number) => `${Number((v * 100).toPrecision(3))} %`;
       return b.minus === b.plus ? `± ${pct(b.plus)}` : `−${pct(b.minus)} / +${pct(b.plus)}`;
     }
     case 'absolute': {
@@ -28,4 +29,14 @@ export function toleranceText(
       return b.minus === b.plus ? `± ${q(b.plus)}` : `−${q(b.minus)} / +${q(b.plus)}`;
     }
   }
+}
+
+/** A target as printed in the Target column: as the field card prints it, to the step it is set by. */
+export function targetText(
+  m: { settingKey: string; dimension: string; target: number | null },
+  system: PrintUnitSystem,
+): string {
+  if (m.target === null) return '—';
+  const dimension = m.dimension as Dimension;
+  return qty(m.target, dimension, system, settingPrecision(m.settingKey, dimension));
 }
