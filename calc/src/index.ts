@@ -108,4 +108,5 @@ export {
   settingsWithTolerance,
   type ToleratedSetting,
 } from './field/evaluate-tolerance.js';
+export { toleranceText } from './field/tolerance-text.js';
 export * as fieldTolerances from './field/tolerances.js';

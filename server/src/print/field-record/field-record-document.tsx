@@ -1,4 +1,4 @@
-import type { Dimension } from '@holdfast/calc';
+import { toleranceText, type Dimension } from '@holdfast/calc';
 import type { FieldRecord } from '@holdfast/shared';
 import { Document, Page, Text, View } from '@react-pdf/renderer';
 import { qty } from '../format.js';
@@ -7,7 +7,6 @@ import { Heading, Table } from '../parts/table.js';
 import type { PrintableSheet } from '../printable-sheet.js';
 import { Frame } from '../sheet-document.js';
 import { colours, s } from '../theme.js';
-import { toleranceText } from './tolerance-text.js';
 
 export const RECORD_KIND_TITLES: Record<FieldRecord['kind'], string> = {
   commissioning: 'Commissioning (first setting)',
