@@ -101,6 +101,7 @@ export { caliperDiscBrakeSheet, evaluateCaliperDiscBrake } from './sheets/calipe
 export { makeCheck, type CheckSpec } from './sheets/checks.js';
 export { SAFETY_CAUTIONS } from './sheets/sheet-output.js';
 export * from './field/wear-trend.js';
+export * from './field/wear-series.js';
 export { studentTQuantile, studentTCdf } from './field/student-t.js';
 export {
   evaluateTolerance,
