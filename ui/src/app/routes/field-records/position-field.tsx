@@ -16,7 +16,6 @@ import {
   RESERVE_KEY,
 } from '../../../features/field-records/components/wear-series';
 import { useFieldForm } from '../../../features/field-records/api/get-field-form';
-import { kindLabel } from './record-form';
 
 export const handle: RouteHandle = { title: 'Field records' };
 
@@ -98,11 +97,7 @@ export function Component() {
             <Title order={2} size="h3">
               Timeline
             </Title>
-            <RecordTimeline
-              records={records}
-              kindLabel={kindLabel}
-              canCountersign={canCountersign}
-            />
+            <RecordTimeline records={records} canCountersign={canCountersign} />
           </>
         )}
       </Stack>

@@ -13,6 +13,7 @@ import {
   Title,
 } from '@mantine/core';
 import {
+  fieldRecordKindLabels,
   fieldRecordKinds,
   type CreateFieldRecordInput,
   type FieldCheckInput,
@@ -40,14 +41,6 @@ import {
 import classes from './record-form.module.css';
 
 export const handle: RouteHandle = { title: 'Field record', caution: true };
-
-export const kindLabel: Record<FieldRecordKind, string> = {
-  commissioning: 'Commissioning (first setting)',
-  'periodic-inspection': 'Periodic inspection',
-  're-adjustment': 'Re-adjustment for lining wear',
-  'lining-replacement': 'Lining replacement',
-  'after-repair': 'After repair',
-};
 
 function localNow(): string {
   const d = new Date();
@@ -134,7 +127,7 @@ function RecordForm({ form }: { form: FieldForm }) {
       )}
       <NativeSelect
         label="Work done"
-        data={fieldRecordKinds.map((k) => ({ value: k, label: kindLabel[k] }))}
+        data={fieldRecordKinds.map((k) => ({ value: k, label: fieldRecordKindLabels[k] }))}
         value={kind}
         onChange={(e) => setKind(e.currentTarget.value as FieldRecordKind)}
       />
