@@ -69,8 +69,8 @@ describe.skipIf(skipReason !== null)('field records in the browser', () => {
     const first = page.locator(`[data-setting="${measured[0]!.settingKey}"]`);
     await first.getByRole('textbox', { name: 'As found' }).pressSequentially('12.5');
     await first.getByRole('textbox', { name: 'As left' }).pressSequentially('12.5');
-    // 12.5 mm is far off any spring-length target: out of tolerance at once, and a reason is
-    // asked for before the record can be saved.
+    // 12.5 in the setting's own unit is far off the demo's first target (a back-off angle, a
+    // preload or a length): out of tolerance at once, and a reason is asked for before saving.
     await first.getByText('Out of tolerance', { exact: false }).first().waitFor();
     await first
       .getByRole('textbox', { name: /Why it is left out of tolerance/ })
@@ -108,6 +108,12 @@ describe.skipIf(skipReason !== null)('field records in the browser', () => {
     expect(await seriousViolations(page)).toEqual([]);
     await page.goto(`${baseUrl}/positions/${positionId}/field`);
     await page.getByRole('heading', { name: 'Timeline' }).waitFor();
+    // The demo position's readings wear steadily: each chart states its rate, briefly.
+    const summaries = await page.getByTestId('wear-summary').allTextContents();
+    expect(summaries.length).toBe(3);
+    for (const text of summaries) {
+      expect(text).toMatch(/^Wear rate \d+(\.\d+)? ± \d(\.\d+)? mm per 30 days/);
+    }
     await screenshot(page, 'field-position-390');
     expect(await seriousViolations(page)).toEqual([]);
   });

@@ -10,8 +10,14 @@ const dateText = (dayNumber: number) =>
   dateOf(dayNumber * DAY_S)
     .toISOString()
     .slice(0, 10);
-/** A wear rate to two significant figures: the readings are taken to 0.5 mm at best. */
-const rateText = (rate: number) => formatNumber(mmPerMonth(rate), 2);
+/**
+ * The wear rate to two significant figures and its standard error to one: readings are taken to
+ * 0.1-0.5 mm, so further digits of either say nothing.
+ */
+const rateText = (rate: number, se: number) =>
+  `${formatNumber(mmPerMonth(rate), 2)} ± ${formatNumber(mmPerMonth(se), 1)}`;
+/** Axis ticks and tooltips in mm: at most two decimals, none that are only zeros (24, not 24.00). */
+const mmText = (v: number) => String(Number(v.toFixed(2)));
 
 /**
  * Readings of one length over time with the fitted line, the minimum, and the predicted date the
@@ -59,7 +65,7 @@ export function WearChart({ title, series }: { title: string; series: WearSeries
           legendProps={{ verticalAlign: 'bottom', height: 40 }}
           yAxisLabel="mm"
           gridAxis="xy"
-          valueFormatter={(v) => v.toFixed(2)}
+          valueFormatter={mmText}
           xAxisProps={{ type: 'number', domain: ['dataMin', 'dataMax'], tickFormatter: dateText }}
           referenceLines={referenceLines.map((l) => ({
             ...(l.x !== undefined ? { x: l.x } : { y: l.y }),
@@ -71,7 +77,7 @@ export function WearChart({ title, series }: { title: string; series: WearSeries
       )}
       <Text component="figcaption" size="sm" mt={4} data-testid="wear-summary">
         {fit && fit.kind === 'trend'
-          ? `Wear rate ${rateText(fit.rate)} ± ${rateText(fit.rateStandardError)} mm per 30 days (± one standard error, ${fit.n} readings).` +
+          ? `Wear rate ${rateText(fit.rate, fit.rateStandardError)} mm per 30 days (± one standard error, ${fit.n} readings).` +
             (crossing
               ? ` Minimum reached about ${dateOf(crossing.at).toISOString().slice(0, 10)}, 95 % prediction interval ${dateOf(crossing.lower).toISOString().slice(0, 10)} to ${dateOf(crossing.upper).toISOString().slice(0, 10)}: plan the re-adjustment before the first date.`
               : '')
