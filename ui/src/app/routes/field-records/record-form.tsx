@@ -33,6 +33,7 @@ import {
   CheckItems,
   type CheckDraft,
 } from '../../../features/field-records/components/check-items';
+import { refusedFieldErrors } from '../../../features/field-records/components/refused-fields';
 import {
   buildMeasurements,
   readSI,
@@ -81,6 +82,11 @@ function RecordForm({ form }: { form: FieldForm }) {
   const [findings, setFindings] = useState('');
   const [errors, setErrors] = useState<Record<string, string>>({});
   const entry = outbox.entries.find((e) => e.id === id);
+  // A record the server refused shows its reasons under the boxes, beside the form's own checks.
+  const shown =
+    entry?.state === 'refused'
+      ? { ...refusedFieldErrors(entry.payload, entry.fields ?? []), ...errors }
+      : errors;
   const measured = form.targets.filter((t) => t.tolerance !== null);
   const withAsFound = kind !== 'commissioning';
 
@@ -135,7 +141,7 @@ function RecordForm({ form }: { form: FieldForm }) {
         type="datetime-local"
         label="Done at"
         value={performedAt}
-        error={errors.performedAt}
+        error={shown.performedAt}
         onChange={(e) => setPerformedAt(e.currentTarget.value)}
       />
       <Title order={3}>Settings measured</Title>
@@ -145,7 +151,7 @@ function RecordForm({ form }: { form: FieldForm }) {
           target={t}
           withAsFound={withAsFound}
           draft={drafts[t.settingKey] ?? { reason: '' }}
-          errors={errors}
+          errors={shown}
           onChange={(next) => setDrafts((d) => ({ ...d, [t.settingKey]: next }))}
         />
       ))}
@@ -153,7 +159,7 @@ function RecordForm({ form }: { form: FieldForm }) {
       <CheckItems
         checks={form.checks}
         drafts={checks}
-        errors={errors}
+        errors={shown}
         onChange={(key, next) => setChecks((c) => ({ ...c, [key]: next }))}
       />
       <Textarea
@@ -161,6 +167,7 @@ function RecordForm({ form }: { form: FieldForm }) {
         autosize
         minRows={3}
         value={findings}
+        error={shown.findings}
         onChange={(e) => setFindings(e.currentTarget.value)}
       />
       {Object.keys(errors).length > 0 && (

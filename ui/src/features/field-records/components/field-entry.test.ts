@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { LINING_CHANGE_KIND, STROKE_SETTING_KINDS } from '@holdfast/calc';
-import { fieldRecordKinds, type FieldTarget } from '@holdfast/shared';
+import { fieldRecordKinds, type CreateFieldRecordInput, type FieldTarget } from '@holdfast/shared';
 import { buildMeasurements } from './measurement-entry';
+import { refusedFieldErrors } from './refused-fields';
 
 const target: FieldTarget = {
   settingKey: 'springLength',
@@ -46,5 +47,39 @@ describe('wear series keys and kinds', () => {
     for (const kind of [...STROKE_SETTING_KINDS, LINING_CHANGE_KIND]) {
       expect(fieldRecordKinds).toContain(kind);
     }
+  });
+});
+
+describe('a refused record', () => {
+  it('puts the server’s field errors under the boxes they belong to', () => {
+    const payload: CreateFieldRecordInput = {
+      id: '0f5e2a1c-7d3b-4c8e-9a6f-1b2c3d4e5f60',
+      positionId: '2b1c3d4e-5f60-4a7b-8c9d-0e1f2a3b4c5d',
+      revisionId: '3c2d4e5f-6071-4b8c-9d0e-1f2a3b4c5d6e',
+      kind: 'periodic-inspection',
+      performedAt: '2026-12-01T09:30:00Z',
+      meterHours: null,
+      measurements: [
+        { settingKey: 'springLength', asFound: 0.2, asLeft: 0.2, reason: '' },
+        { settingKey: 'reserveStroke', asFound: 0.01, asLeft: 0.012, reason: '' },
+      ],
+      checks: [{ key: 'lining-thickness-shoe-a', result: 'ok', value: 1, cycles: null, note: '' }],
+      findings: '',
+    };
+    expect(
+      refusedFieldErrors(payload, [
+        { path: 'measurements.1.asLeft', message: 'too large' },
+        { path: 'checks.0.value', message: 'thicker than a new lining' },
+        { path: 'checks.0.result', message: 'unknown result' },
+        { path: 'performedAt', message: 'in the future' },
+        { path: 'measurements.7.asLeft', message: 'no such row' },
+      ]),
+    ).toEqual({
+      'reserveStroke.asLeft': 'too large',
+      'checks.lining-thickness-shoe-a.value': 'thicker than a new lining',
+      'checks.lining-thickness-shoe-a': 'unknown result',
+      performedAt: 'in the future',
+      'measurements.7.asLeft': 'no such row',
+    });
   });
 });
