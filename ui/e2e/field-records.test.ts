@@ -20,7 +20,7 @@ interface FieldFormAnswer {
   checks: { key: string; label: string; hasValue: boolean }[];
 }
 interface ListAnswer {
-  items: { id: string }[];
+  items: { id: string; meterHours: number | null }[];
 }
 
 /**
@@ -63,6 +63,7 @@ describe.skipIf(skipReason !== null)('field records in the browser', () => {
 
     await context.setOffline(true);
     await page.getByLabel('Work done').selectOption('periodic-inspection');
+    await page.getByRole('textbox', { name: /^Hour meter/ }).pressSequentially('12406.5');
     const measured = form.targets.filter((t) => t.tolerance !== null);
     expect(measured.length).toBeGreaterThan(0);
     // The first value is typed key by key, with a decimal point, as a fitter would.
@@ -92,6 +93,8 @@ describe.skipIf(skipReason !== null)('field records in the browser', () => {
     await expect.poll(() => page.getByTestId('outbox-state').textContent()).toBe('Sent');
     const after = await call<ListAnswer>('GET', `/field-records?positionId=${positionId}`);
     expect(after.items.length).toBe(before.items.length + 1);
+    const added = after.items.find((r) => !before.items.some((b) => b.id === r.id))!;
+    expect(added.meterHours).toBe(12406.5);
 
     // Coming back again (a second 'online') sends nothing twice.
     await context.setOffline(true);

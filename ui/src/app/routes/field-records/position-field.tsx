@@ -38,7 +38,7 @@ function AtAGlance({ state }: { state: PositionFieldState }) {
         {due?.date
           ? due.date.slice(0, 10)
           : due?.meterHours != null
-            ? `at ${due.meterHours} h`
+            ? `at ${Math.floor(due.meterHours)} h`
             : 'no interval set'}
         {due?.overdue ? ' (overdue)' : ''}
       </Text>

@@ -20,7 +20,9 @@ import {
   type FieldRecordKind,
   type FieldForm,
 } from '@holdfast/shared';
+import type { InputValue } from '@holdfast/calc';
 import { Page } from '../../../components/layouts/page';
+import { NumberField } from '../../../components/calc/components/unit-field';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import type { RouteHandle } from '../../../lib/route-handle';
 import { errorMessage } from '../../../lib/api-client';
@@ -47,6 +49,12 @@ function localNow(): string {
   const d = new Date();
   d.setSeconds(0, 0);
   return new Date(d.getTime() - d.getTimezoneOffset() * 60000).toISOString().slice(0, 16);
+}
+
+/** The hour meter as typed: null when left empty, undefined when it is not a number ≥ 0. */
+function readHours(value: InputValue | undefined): number | null | undefined {
+  if (value === undefined || value === '') return null;
+  return typeof value === 'number' && Number.isFinite(value) && value >= 0 ? value : undefined;
 }
 
 function buildChecks(form: FieldForm, drafts: Record<string, CheckDraft>) {
@@ -80,6 +88,7 @@ function RecordForm({ form }: { form: FieldForm }) {
   const [drafts, setDrafts] = useState<Record<string, MeasurementDraft>>({});
   const [checks, setChecks] = useState<Record<string, CheckDraft>>({});
   const [findings, setFindings] = useState('');
+  const [meterHours, setMeterHours] = useState<InputValue | undefined>(undefined);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const entry = outbox.entries.find((e) => e.id === id);
   // A record the server refused shows its reasons under the boxes, beside the form's own checks.
@@ -96,6 +105,8 @@ function RecordForm({ form }: { form: FieldForm }) {
     const all = { ...m.errors, ...c.errors };
     const when = new Date(performedAt);
     if (Number.isNaN(when.getTime())) all.performedAt = 'Enter the date and time of the work';
+    const hours = readHours(meterHours);
+    if (hours === undefined) all.meterHours = 'Enter the hours as a number, 0 or more';
     setErrors(all);
     if (Object.keys(all).length > 0 || !form.positionId) return;
     const payload: CreateFieldRecordInput = {
@@ -104,7 +115,7 @@ function RecordForm({ form }: { form: FieldForm }) {
       revisionId: form.revisionId,
       kind,
       performedAt: when.toISOString(),
-      meterHours: null,
+      meterHours: hours ?? null,
       measurements: m.measurements,
       checks: c.checks,
       findings: findings.trim(),
@@ -117,6 +128,7 @@ function RecordForm({ form }: { form: FieldForm }) {
     setDrafts({});
     setChecks({});
     setFindings('');
+    setMeterHours(undefined);
     setErrors({});
   }
 
@@ -143,6 +155,14 @@ function RecordForm({ form }: { form: FieldForm }) {
         value={performedAt}
         error={shown.performedAt}
         onChange={(e) => setPerformedAt(e.currentTarget.value)}
+      />
+      <NumberField
+        id="meter-hours"
+        label="Hour meter"
+        description="The machine's hour meter reading, where it has one (hour-based intervals count from it)"
+        value={meterHours}
+        error={shown.meterHours}
+        onChange={setMeterHours}
       />
       <Title order={3}>Settings measured</Title>
       {measured.map((t) => (
