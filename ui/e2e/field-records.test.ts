@@ -79,6 +79,7 @@ describe.skipIf(skipReason !== null)('field records in the browser', () => {
     for (const c of form.checks) {
       await page.getByRole('radiogroup', { name: c.label }).getByText('N/A').click();
     }
+    await page.getByRole('textbox', { name: 'Cycles run' }).pressSequentially('5');
     await page.getByRole('textbox', { name: 'Findings' }).pressSequentially('Checked offline');
     await page.getByRole('button', { name: 'Save record' }).click();
     await expect

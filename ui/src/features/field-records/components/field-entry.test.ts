@@ -71,6 +71,7 @@ describe('a refused record', () => {
         { path: 'measurements.1.asLeft', message: 'too large' },
         { path: 'checks.0.value', message: 'thicker than a new lining' },
         { path: 'checks.0.result', message: 'unknown result' },
+        { path: 'checks.0.cycles', message: 'at most 1000' },
         { path: 'performedAt', message: 'in the future' },
         { path: 'measurements.7.asLeft', message: 'no such row' },
       ]),
@@ -78,6 +79,7 @@ describe('a refused record', () => {
       'reserveStroke.asLeft': 'too large',
       'checks.lining-thickness-shoe-a.value': 'thicker than a new lining',
       'checks.lining-thickness-shoe-a': 'unknown result',
+      'checks.lining-thickness-shoe-a.cycles': 'at most 1000',
       performedAt: 'in the future',
       'measurements.7.asLeft': 'no such row',
     });

@@ -2,7 +2,7 @@ import type { CreateFieldRecordInput } from '@holdfast/shared';
 
 /**
  * The server's field errors on a refused record, keyed as the record form keys its own errors
- * (`<settingKey>.asLeft`, `checks.<key>.value`, `performedAt`), so each shows under its box.
+ * (`<settingKey>.asLeft`, `checks.<key>.value`, `checks.<key>.cycles`, `performedAt`), so each shows under its box.
  * A path the form has no box for keeps the server's path (the status panel lists it).
  */
 export function refusedFieldErrors(
@@ -17,10 +17,8 @@ export function refusedFieldErrors(
     if (list === 'measurements' && part && payload.measurements[i]) {
       key = `${payload.measurements[i].settingKey}.${part}`;
     } else if (list === 'checks' && payload.checks[i]) {
-      key =
-        part === 'value'
-          ? `checks.${payload.checks[i].key}.value`
-          : `checks.${payload.checks[i].key}`;
+      const check = `checks.${payload.checks[i].key}`;
+      key = part === 'value' || part === 'cycles' ? `${check}.${part}` : check;
     }
     errors[key] ??= f.message;
   }
