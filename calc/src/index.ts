@@ -101,6 +101,7 @@ export { caliperDiscBrakeSheet, evaluateCaliperDiscBrake } from './sheets/calipe
 export { makeCheck, type CheckSpec } from './sheets/checks.js';
 export { SAFETY_CAUTIONS } from './sheets/sheet-output.js';
 export * from './field/wear-trend.js';
+export * from './field/wear-series.js';
 export { studentTQuantile, studentTCdf } from './field/student-t.js';
 export {
   evaluateTolerance,
@@ -108,4 +109,5 @@ export {
   settingsWithTolerance,
   type ToleratedSetting,
 } from './field/evaluate-tolerance.js';
+export { toleranceText } from './field/tolerance-text.js';
 export * as fieldTolerances from './field/tolerances.js';

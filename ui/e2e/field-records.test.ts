@@ -20,7 +20,7 @@ interface FieldFormAnswer {
   checks: { key: string; label: string; hasValue: boolean }[];
 }
 interface ListAnswer {
-  items: { id: string }[];
+  items: { id: string; meterHours: number | null }[];
 }
 
 /**
@@ -63,14 +63,15 @@ describe.skipIf(skipReason !== null)('field records in the browser', () => {
 
     await context.setOffline(true);
     await page.getByLabel('Work done').selectOption('periodic-inspection');
+    await page.getByRole('textbox', { name: /^Hour meter/ }).pressSequentially('12406.5');
     const measured = form.targets.filter((t) => t.tolerance !== null);
     expect(measured.length).toBeGreaterThan(0);
     // The first value is typed key by key, with a decimal point, as a fitter would.
     const first = page.locator(`[data-setting="${measured[0]!.settingKey}"]`);
     await first.getByRole('textbox', { name: 'As found' }).pressSequentially('12.5');
     await first.getByRole('textbox', { name: 'As left' }).pressSequentially('12.5');
-    // 12.5 mm is far off any spring-length target: out of tolerance at once, and a reason is
-    // asked for before the record can be saved.
+    // 12.5 in the setting's own unit is far off the demo's first target (a back-off angle, a
+    // preload or a length): out of tolerance at once, and a reason is asked for before saving.
     await first.getByText('Out of tolerance', { exact: false }).first().waitFor();
     await first
       .getByRole('textbox', { name: /Why it is left out of tolerance/ })
@@ -78,6 +79,7 @@ describe.skipIf(skipReason !== null)('field records in the browser', () => {
     for (const c of form.checks) {
       await page.getByRole('radiogroup', { name: c.label }).getByText('N/A').click();
     }
+    await page.getByRole('textbox', { name: 'Cycles run' }).pressSequentially('5');
     await page.getByRole('textbox', { name: 'Findings' }).pressSequentially('Checked offline');
     await page.getByRole('button', { name: 'Save record' }).click();
     await expect
@@ -92,6 +94,8 @@ describe.skipIf(skipReason !== null)('field records in the browser', () => {
     await expect.poll(() => page.getByTestId('outbox-state').textContent()).toBe('Sent');
     const after = await call<ListAnswer>('GET', `/field-records?positionId=${positionId}`);
     expect(after.items.length).toBe(before.items.length + 1);
+    const added = after.items.find((r) => !before.items.some((b) => b.id === r.id))!;
+    expect(added.meterHours).toBe(12406.5);
 
     // Coming back again (a second 'online') sends nothing twice.
     await context.setOffline(true);
@@ -108,6 +112,12 @@ describe.skipIf(skipReason !== null)('field records in the browser', () => {
     expect(await seriousViolations(page)).toEqual([]);
     await page.goto(`${baseUrl}/positions/${positionId}/field`);
     await page.getByRole('heading', { name: 'Timeline' }).waitFor();
+    // The demo position's readings wear steadily: each chart states its rate, briefly.
+    const summaries = await page.getByTestId('wear-summary').allTextContents();
+    expect(summaries.length).toBe(3);
+    for (const text of summaries) {
+      expect(text).toMatch(/^Wear rate \d+(\.\d+)? ± \d(\.\d+)? mm per 30 days/);
+    }
     await screenshot(page, 'field-position-390');
     expect(await seriousViolations(page)).toEqual([]);
   });

@@ -2,6 +2,7 @@ import {
   getSheetType,
   settingPrecision,
   toSI,
+  toleranceText,
   type FieldSetting,
   type FieldTolerance,
 } from '@holdfast/calc';
@@ -14,7 +15,6 @@ import { Heading, Table } from './parts/table.js';
 import type { PrintableSheet, PrintUnitSystem } from './printable-sheet.js';
 import { Frame } from './sheet-document.js';
 import { colours, s } from './theme.js';
-import { toleranceText } from './field-record/tolerance-text.js';
 
 type Tolerances = (key: string) => FieldTolerance | undefined;
 

@@ -14,6 +14,14 @@ export const fieldRecordKinds = [
 ] as const;
 export const fieldRecordKindSchema = z.enum(fieldRecordKinds);
 export type FieldRecordKind = z.infer<typeof fieldRecordKindSchema>;
+/** Each kind of work in words, as the record form, the timeline and the printed record name it. */
+export const fieldRecordKindLabels: Readonly<Record<FieldRecordKind, string>> = {
+  commissioning: 'Commissioning (first setting)',
+  'periodic-inspection': 'Periodic inspection',
+  're-adjustment': 'Re-adjustment for lining wear',
+  'lining-replacement': 'Lining replacement',
+  'after-repair': 'After repair',
+};
 
 /** draft → signed (technician) → countersigned (plant engineer; immutable from then on). */
 export const fieldRecordStatuses = ['draft', 'signed', 'countersigned'] as const;

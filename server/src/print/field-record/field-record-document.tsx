@@ -1,5 +1,5 @@
-import type { Dimension } from '@holdfast/calc';
-import type { FieldRecord } from '@holdfast/shared';
+import { toleranceText, type Dimension } from '@holdfast/calc';
+import { fieldRecordKindLabels, type FieldRecord } from '@holdfast/shared';
 import { Document, Page, Text, View } from '@react-pdf/renderer';
 import { qty } from '../format.js';
 import { Caution } from '../parts/caution.js';
@@ -7,15 +7,7 @@ import { Heading, Table } from '../parts/table.js';
 import type { PrintableSheet } from '../printable-sheet.js';
 import { Frame } from '../sheet-document.js';
 import { colours, s } from '../theme.js';
-import { targetText, toleranceText } from './tolerance-text.js';
-
-export const RECORD_KIND_TITLES: Record<FieldRecord['kind'], string> = {
-  commissioning: 'Commissioning (first setting)',
-  'periodic-inspection': 'Periodic inspection',
-  're-adjustment': 'Re-adjustment for lining wear',
-  'lining-replacement': 'Lining replacement',
-  'after-repair': 'After repair',
-};
+import { targetText } from './target-text.js';
 
 const STATUS_TEXT: Record<FieldRecord['status'], string> = {
   draft: 'DRAFT — not signed',
@@ -51,7 +43,7 @@ export function FieldRecordDocument(props: {
       <Page size={sheet.paper} style={s.page}>
         <Frame sheet={sheet} qr={qr} kind="Field record" />
         <Text style={{ fontWeight: 700, marginBottom: 2 }}>
-          {RECORD_KIND_TITLES[r.kind]} — {r.positionTag} {sheet.position.description}
+          {fieldRecordKindLabels[r.kind]} — {r.positionTag} {sheet.position.description}
         </Text>
         <Text>
           Performed {date(r.performedAt)}

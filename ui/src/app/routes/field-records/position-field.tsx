@@ -1,5 +1,6 @@
 import { useParams } from 'react-router-dom';
 import { Alert, SimpleGrid, Skeleton, Stack, Text, Title } from '@mantine/core';
+import { length, liningSeries, strokeSeries } from '@holdfast/calc';
 import type { PositionFieldState } from '@holdfast/shared';
 import { Page } from '../../../components/layouts/page';
 import { ErrorPanel } from '../../../components/errors/error-panel';
@@ -10,12 +11,11 @@ import { usePositionState } from '../../../features/field-records/api/get-positi
 import { RecordTimeline } from '../../../features/field-records/components/record-timeline';
 import { WearChart } from '../../../features/field-records/components/wear-chart';
 import {
+  LINING_KEYS,
   MIN_RESERVE_KEY,
-  liningSeries,
-  reserveStrokeSeries,
+  RESERVE_KEY,
 } from '../../../features/field-records/components/wear-series';
 import { useFieldForm } from '../../../features/field-records/api/get-field-form';
-import { kindLabel } from './record-form';
 
 export const handle: RouteHandle = { title: 'Field records' };
 
@@ -38,7 +38,7 @@ function AtAGlance({ state }: { state: PositionFieldState }) {
         {due?.date
           ? due.date.slice(0, 10)
           : due?.meterHours != null
-            ? `at ${due.meterHours} h`
+            ? `at ${Math.floor(due.meterHours)} h`
             : 'no interval set'}
         {due?.overdue ? ' (overdue)' : ''}
       </Text>
@@ -54,9 +54,10 @@ export function Component() {
   const state = usePositionState(positionId);
   const records = history.data?.items ?? [];
   const tag = records[0]?.positionTag;
-  // The minimum reserve stroke is a printed target of the revision the brake was last set to.
-  const lastRevision = records[records.length - 1]?.revisionId ?? '';
-  const form = useFieldForm(lastRevision);
+  // The minimum reserve stroke is a printed target of the revision the brake was last set to
+  // (the server's setTo; an inspection may have been recorded against another revision since).
+  const setTo = state.data?.setTo?.revisionId ?? records[records.length - 1]?.revisionId ?? '';
+  const form = useFieldForm(setTo);
   const minimum = form.data?.targets.find((t) => t.settingKey === MIN_RESERVE_KEY)?.value ?? null;
   const canCountersign = user.role === 'engineer' || user.role === 'checker';
   return (
@@ -77,24 +78,26 @@ export function Component() {
               interval set for the position and follow the brake and thruster makers&apos; data.
             </Alert>
             <SimpleGrid cols={{ base: 1, md: 2 }} spacing="md">
-              <WearChart title="Reserve stroke" series={reserveStrokeSeries(records, minimum)} />
               <WearChart
-                title="Lining thickness, shoe A"
-                series={liningSeries(records, 'lining-thickness-shoe-a')}
+                title="Reserve stroke"
+                series={strokeSeries(
+                  records,
+                  RESERVE_KEY,
+                  minimum === null ? null : length(minimum),
+                )}
               />
-              <WearChart
-                title="Lining thickness, shoe B"
-                series={liningSeries(records, 'lining-thickness-shoe-b')}
-              />
+              {LINING_KEYS.map((key, i) => (
+                <WearChart
+                  key={key}
+                  title={`Lining thickness, shoe ${'AB'[i]}`}
+                  series={liningSeries(records, key)}
+                />
+              ))}
             </SimpleGrid>
             <Title order={2} size="h3">
               Timeline
             </Title>
-            <RecordTimeline
-              records={records}
-              kindLabel={kindLabel}
-              canCountersign={canCountersign}
-            />
+            <RecordTimeline records={records} canCountersign={canCountersign} />
           </>
         )}
       </Stack>

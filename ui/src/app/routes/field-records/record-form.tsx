@@ -13,13 +13,16 @@ import {
   Title,
 } from '@mantine/core';
 import {
+  fieldRecordKindLabels,
   fieldRecordKinds,
   type CreateFieldRecordInput,
   type FieldCheckInput,
   type FieldRecordKind,
   type FieldForm,
 } from '@holdfast/shared';
+import type { InputValue } from '@holdfast/calc';
 import { Page } from '../../../components/layouts/page';
+import { NumberField } from '../../../components/calc/components/unit-field';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import type { RouteHandle } from '../../../lib/route-handle';
 import { errorMessage } from '../../../lib/api-client';
@@ -32,6 +35,7 @@ import {
   CheckItems,
   type CheckDraft,
 } from '../../../features/field-records/components/check-items';
+import { refusedFieldErrors } from '../../../features/field-records/components/refused-fields';
 import {
   buildMeasurements,
   readSI,
@@ -41,18 +45,24 @@ import classes from './record-form.module.css';
 
 export const handle: RouteHandle = { title: 'Field record', caution: true };
 
-export const kindLabel: Record<FieldRecordKind, string> = {
-  commissioning: 'Commissioning (first setting)',
-  'periodic-inspection': 'Periodic inspection',
-  're-adjustment': 'Re-adjustment for lining wear',
-  'lining-replacement': 'Lining replacement',
-  'after-repair': 'After repair',
-};
-
 function localNow(): string {
   const d = new Date();
   d.setSeconds(0, 0);
   return new Date(d.getTime() - d.getTimezoneOffset() * 60000).toISOString().slice(0, 16);
+}
+
+/** The hour meter as typed: null when left empty, undefined when it is not a number ≥ 0. */
+function readHours(value: InputValue | undefined): number | null | undefined {
+  if (value === undefined || value === '') return null;
+  return typeof value === 'number' && Number.isFinite(value) && value >= 0 ? value : undefined;
+}
+
+/** A count as typed: null when left empty, undefined when it is not a whole number 0-1000. */
+function readCount(value: InputValue | undefined): number | null | undefined {
+  if (value === undefined || value === '') return null;
+  return typeof value === 'number' && Number.isInteger(value) && value >= 0 && value <= 1000
+    ? value
+    : undefined;
 }
 
 function buildChecks(form: FieldForm, drafts: Record<string, CheckDraft>) {
@@ -66,11 +76,13 @@ function buildChecks(form: FieldForm, drafts: Record<string, CheckDraft>) {
     }
     const v = c.hasValue ? readSI(d.value, 'length') : { kind: 'empty' as const };
     if (v.kind === 'invalid') errors[`checks.${c.key}.value`] = 'Enter a number';
+    const cycles = readCount(d.cycles);
+    if (cycles === undefined) errors[`checks.${c.key}.cycles`] = 'Enter a whole number, 0 to 1000';
     checks.push({
       key: c.key,
       result: d.result,
       value: v.kind === 'value' ? v.si : null,
-      cycles: null,
+      cycles: cycles ?? null,
       note: '',
     });
   }
@@ -86,8 +98,14 @@ function RecordForm({ form }: { form: FieldForm }) {
   const [drafts, setDrafts] = useState<Record<string, MeasurementDraft>>({});
   const [checks, setChecks] = useState<Record<string, CheckDraft>>({});
   const [findings, setFindings] = useState('');
+  const [meterHours, setMeterHours] = useState<InputValue | undefined>(undefined);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const entry = outbox.entries.find((e) => e.id === id);
+  // A record the server refused shows its reasons under the boxes, beside the form's own checks.
+  const shown =
+    entry?.state === 'refused'
+      ? { ...refusedFieldErrors(entry.payload, entry.fields ?? []), ...errors }
+      : errors;
   const measured = form.targets.filter((t) => t.tolerance !== null);
   const withAsFound = kind !== 'commissioning';
 
@@ -97,6 +115,8 @@ function RecordForm({ form }: { form: FieldForm }) {
     const all = { ...m.errors, ...c.errors };
     const when = new Date(performedAt);
     if (Number.isNaN(when.getTime())) all.performedAt = 'Enter the date and time of the work';
+    const hours = readHours(meterHours);
+    if (hours === undefined) all.meterHours = 'Enter the hours as a number, 0 or more';
     setErrors(all);
     if (Object.keys(all).length > 0 || !form.positionId) return;
     const payload: CreateFieldRecordInput = {
@@ -105,7 +125,7 @@ function RecordForm({ form }: { form: FieldForm }) {
       revisionId: form.revisionId,
       kind,
       performedAt: when.toISOString(),
-      meterHours: null,
+      meterHours: hours ?? null,
       measurements: m.measurements,
       checks: c.checks,
       findings: findings.trim(),
@@ -118,6 +138,7 @@ function RecordForm({ form }: { form: FieldForm }) {
     setDrafts({});
     setChecks({});
     setFindings('');
+    setMeterHours(undefined);
     setErrors({});
   }
 
@@ -134,7 +155,7 @@ function RecordForm({ form }: { form: FieldForm }) {
       )}
       <NativeSelect
         label="Work done"
-        data={fieldRecordKinds.map((k) => ({ value: k, label: kindLabel[k] }))}
+        data={fieldRecordKinds.map((k) => ({ value: k, label: fieldRecordKindLabels[k] }))}
         value={kind}
         onChange={(e) => setKind(e.currentTarget.value as FieldRecordKind)}
       />
@@ -142,8 +163,16 @@ function RecordForm({ form }: { form: FieldForm }) {
         type="datetime-local"
         label="Done at"
         value={performedAt}
-        error={errors.performedAt}
+        error={shown.performedAt}
         onChange={(e) => setPerformedAt(e.currentTarget.value)}
+      />
+      <NumberField
+        id="meter-hours"
+        label="Hour meter"
+        description="The machine's hour meter reading, where it has one (hour-based intervals count from it)"
+        value={meterHours}
+        error={shown.meterHours}
+        onChange={setMeterHours}
       />
       <Title order={3}>Settings measured</Title>
       {measured.map((t) => (
@@ -152,7 +181,7 @@ function RecordForm({ form }: { form: FieldForm }) {
           target={t}
           withAsFound={withAsFound}
           draft={drafts[t.settingKey] ?? { reason: '' }}
-          errors={errors}
+          errors={shown}
           onChange={(next) => setDrafts((d) => ({ ...d, [t.settingKey]: next }))}
         />
       ))}
@@ -160,7 +189,7 @@ function RecordForm({ form }: { form: FieldForm }) {
       <CheckItems
         checks={form.checks}
         drafts={checks}
-        errors={errors}
+        errors={shown}
         onChange={(key, next) => setChecks((c) => ({ ...c, [key]: next }))}
       />
       <Textarea
@@ -168,6 +197,7 @@ function RecordForm({ form }: { form: FieldForm }) {
         autosize
         minRows={3}
         value={findings}
+        error={shown.findings}
         onChange={(e) => setFindings(e.currentTarget.value)}
       />
       {Object.keys(errors).length > 0 && (

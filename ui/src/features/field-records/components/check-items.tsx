@@ -1,12 +1,17 @@
 import { Paper, SegmentedControl, Stack, Text } from '@mantine/core';
-import type { FieldCheckResult, FieldForm } from '@holdfast/shared';
+import type { FieldCheckKey, FieldCheckResult, FieldForm } from '@holdfast/shared';
 import type { InputValue } from '@holdfast/calc';
-import { UnitField } from '../../../components/calc/components/unit-field';
+import { NumberField, UnitField } from '../../../components/calc/components/unit-field';
 
 export interface CheckDraft {
   result: FieldCheckResult | null;
   value?: InputValue;
+  /** How many set/release cycles were run before re-measuring (that check only). */
+  cycles?: InputValue;
 }
+
+/** The check that counts set/release cycles. */
+export const CYCLES_CHECK = 'set-release-cycles' satisfies FieldCheckKey;
 
 const RESULTS = [
   { value: 'ok', label: 'OK' },
@@ -44,6 +49,16 @@ export function CheckItems(props: {
                 <Text size="sm" c="fail.8">
                   {error}
                 </Text>
+              )}
+              {c.key === CYCLES_CHECK && (
+                <NumberField
+                  id={`check-${c.key}-cycles`}
+                  label="Cycles run"
+                  integer
+                  value={d.cycles}
+                  error={props.errors[`checks.${c.key}.cycles`]}
+                  onChange={(v) => props.onChange(c.key, { ...d, cycles: v })}
+                />
               )}
               {c.hasValue && (
                 <UnitField

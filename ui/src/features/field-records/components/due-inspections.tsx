@@ -5,7 +5,7 @@ import { useDueInspections } from '../api/get-due-inspections';
 
 function dueText(d: DueInspection): string {
   if (d.nextDue.date) return `due ${d.nextDue.date.slice(0, 10)}`;
-  if (d.nextDue.meterHours !== null) return `due at ${d.nextDue.meterHours} h`;
+  if (d.nextDue.meterHours !== null) return `due at ${Math.floor(d.nextDue.meterHours)} h`;
   return 'no interval set';
 }
 

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import type { FieldRecord, FieldTarget } from '@holdfast/shared';
+import { LINING_CHANGE_KIND, STROKE_SETTING_KINDS } from '@holdfast/calc';
+import { fieldRecordKinds, type CreateFieldRecordInput, type FieldTarget } from '@holdfast/shared';
 import { buildMeasurements } from './measurement-entry';
-import { liningSeries, reserveStrokeSeries } from './wear-series';
+import { refusedFieldErrors } from './refused-fields';
 
 const target: FieldTarget = {
   settingKey: 'springLength',
@@ -40,99 +41,47 @@ describe('record form measurements', () => {
   });
 });
 
-const POS = '2b1c3d4e-5f60-4a7b-8c9d-0e1f2a3b4c5d';
-const REV = '3c2d4e5f-6071-4b8c-9d0e-1f2a3b4c5d6e';
-const person = {
-  id: '4d3e5f60-7182-4c9d-8e0f-2a3b4c5d6e7f',
-  displayName: 'A. Fitter',
-  initials: 'AF',
-};
-let n = 0;
-function rec(
-  date: string,
-  kind: FieldRecord['kind'],
-  found: number | null,
-  left: number | null,
-  lining?: number,
-): FieldRecord {
-  n++;
-  return {
-    id: `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`,
-    positionId: POS,
-    positionTag: 'BR-1',
-    revisionId: REV,
-    sheetId: REV,
-    documentNumber: 'CS-1',
-    revisionLabel: 'A',
-    kind,
-    status: 'countersigned',
-    performedAt: `${date}T08:00:00.000Z`,
-    meterHours: null,
-    measurements: [
-      {
-        settingKey: 'reserveStroke',
-        asFound: found,
-        asLeft: left,
-        reason: '',
-        label: 'Reserve stroke',
-        target: 0.012,
-        unit: 'm',
-        dimension: 'length',
-        tolerance: {
-          band: { kind: 'absolute', minus: 0.006, plus: 0.002 },
-          source: 'common practice',
-          confidence: 'common practice',
-        },
-        asFoundVerdict: null,
-        asLeftVerdict: null,
-      },
-    ],
-    checks:
-      lining === undefined
-        ? []
-        : [{ key: 'lining-thickness-shoe-a', result: 'ok', value: lining, cycles: null, note: '' }],
-    findings: '',
-    outOfTolerance: false,
-    flags: { superseded: false, underReview: false },
-    createdBy: person,
-    createdAt: `${date}T09:00:00.000Z`,
-    updatedAt: `${date}T09:00:00.000Z`,
-    signed: null,
-    countersigned: null,
-    verificationCode: null,
-  };
-}
-
-describe('wear series from the records', () => {
-  it('starts at the last setting and predicts when the minimum is reached', () => {
-    const records = [
-      rec('2025-01-01', 'commissioning', null, 0.012, 0.008),
-      rec('2025-04-11', 'periodic-inspection', 0.011, 0.011, 0.0078),
-      rec('2025-07-20', 'periodic-inspection', 0.0104, 0.0104, 0.0075),
-      rec('2025-10-28', 'periodic-inspection', 0.0092, 0.0092, 0.0074),
-    ];
-    const s = reserveStrokeSeries(records, 0.006);
-    expect(s.readings.map((r) => r.value)).toEqual([0.012, 0.011, 0.0104, 0.0092]);
-    expect(s.minimum).toBeCloseTo(0.006, 12);
-    expect(s.fit?.kind).toBe('trend');
-    // Readings 100 days apart as in calc's hand case (12.0, 11.0, 10.4, 9.2 mm): 666.67 days on.
-    if (s.fit?.kind === 'trend' && s.fit.crossing) {
-      const days = (s.fit.crossing.at * 1000 - Date.parse('2025-01-01T08:00:00Z')) / 86400000;
-      expect(days).toBeCloseTo(666.67, 1);
+describe('wear series keys and kinds', () => {
+  it('names only kinds of work a field record can have', () => {
+    // calc's wear series restarts on these kinds by name; a renamed kind must fail here.
+    for (const kind of [...STROKE_SETTING_KINDS, LINING_CHANGE_KIND]) {
+      expect(fieldRecordKinds).toContain(kind);
     }
-    expect(liningSeries(records, 'lining-thickness-shoe-a').readings).toHaveLength(4);
   });
+});
 
-  it('a re-adjustment starts a new line; too few readings is said, not fitted', () => {
-    const records = [
-      rec('2025-01-01', 'commissioning', null, 0.012),
-      rec('2025-04-11', 'periodic-inspection', 0.011, 0.011),
-      rec('2025-07-20', 're-adjustment', 0.0075, 0.012),
-      rec('2025-10-28', 'periodic-inspection', 0.0112, 0.0112),
-    ];
-    const s = reserveStrokeSeries(records, 0.006);
-    expect(s.readings.map((r) => r.value)).toEqual([0.012, 0.0112]);
-    expect(s.fit).toBeNull();
-    expect(s.note).toMatch(/at least 3 readings/);
+describe('a refused record', () => {
+  it('puts the server’s field errors under the boxes they belong to', () => {
+    const payload: CreateFieldRecordInput = {
+      id: '0f5e2a1c-7d3b-4c8e-9a6f-1b2c3d4e5f60',
+      positionId: '2b1c3d4e-5f60-4a7b-8c9d-0e1f2a3b4c5d',
+      revisionId: '3c2d4e5f-6071-4b8c-9d0e-1f2a3b4c5d6e',
+      kind: 'periodic-inspection',
+      performedAt: '2026-12-01T09:30:00Z',
+      meterHours: null,
+      measurements: [
+        { settingKey: 'springLength', asFound: 0.2, asLeft: 0.2, reason: '' },
+        { settingKey: 'reserveStroke', asFound: 0.01, asLeft: 0.012, reason: '' },
+      ],
+      checks: [{ key: 'lining-thickness-shoe-a', result: 'ok', value: 1, cycles: null, note: '' }],
+      findings: '',
+    };
+    expect(
+      refusedFieldErrors(payload, [
+        { path: 'measurements.1.asLeft', message: 'too large' },
+        { path: 'checks.0.value', message: 'thicker than a new lining' },
+        { path: 'checks.0.result', message: 'unknown result' },
+        { path: 'checks.0.cycles', message: 'at most 1000' },
+        { path: 'performedAt', message: 'in the future' },
+        { path: 'measurements.7.asLeft', message: 'no such row' },
+      ]),
+    ).toEqual({
+      'reserveStroke.asLeft': 'too large',
+      'checks.lining-thickness-shoe-a.value': 'thicker than a new lining',
+      'checks.lining-thickness-shoe-a': 'unknown result',
+      'checks.lining-thickness-shoe-a.cycles': 'at most 1000',
+      performedAt: 'in the future',
+      'measurements.7.asLeft': 'no such row',
+    });
   });
 });

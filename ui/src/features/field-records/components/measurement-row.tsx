@@ -1,39 +1,47 @@
 import { Badge, Group, Paper, Stack, Text, Textarea } from '@mantine/core';
 import type { FieldTarget } from '@holdfast/shared';
-import type { Dimension, InputValue } from '@holdfast/calc';
+import {
+  formatWithPrecision,
+  settingPrecision,
+  toDisplay,
+  toleranceText,
+  type Dimension,
+  type InputValue,
+  type ToleranceVerdict,
+} from '@holdfast/calc';
 import { UnitField } from '../../../components/calc/components/unit-field';
-import { defaultUnit, presentSI } from '../../../components/calc/utils/units';
+import { defaultUnit } from '../../../components/calc/utils/units';
 import { readSI, verdictFor, type MeasurementDraft } from './measurement-entry';
+
+/** A field setting in its display unit, to the step a fitter can measure (calc's precision table). */
+function settingText(target: FieldTarget, valueSI: number): string {
+  const dim = target.dimension as Dimension;
+  return toDisplay(valueSI, dim, 'SI', undefined, settingPrecision(target.settingKey, dim)).text;
+}
+
+/**
+ * How far a value lies from its target, to the same measurable step. A deviation is a difference,
+ * so it is read from the verdict's offset-free display deviation (°C and K differ by an offset).
+ */
+function deviationText(target: FieldTarget, verdict: ToleranceVerdict): string {
+  const dim = target.dimension as Dimension;
+  const { deviation, label } = verdict.display;
+  const perSI = toDisplay(1, dim, 'SI').value - toDisplay(0, dim, 'SI').value;
+  const p = settingPrecision(target.settingKey, dim);
+  const sign = deviation > 0 ? '+' : deviation < 0 ? '−' : '±';
+  return `${sign}${formatWithPrecision(Math.abs(deviation), 1 / perSI, label, p)} ${label}`.trim();
+}
 
 function VerdictBadge({ target, value }: { target: FieldTarget; value: InputValue | undefined }) {
   const read = readSI(value, target.dimension);
   const verdict = verdictFor(target, read);
   if (!verdict) return null;
-  const dev = verdict.display.deviation;
-  const sign = dev > 0 ? '+' : dev < 0 ? '−' : '±';
-  const text = `${sign}${Math.abs(Number(dev.toPrecision(3)))} ${verdict.display.label}`;
   return (
     <Badge color={verdict.status === 'in' ? 'pass' : 'fail'} size="lg">
-      {verdict.status === 'in' ? 'In tolerance' : 'Out of tolerance'} ({text})
+      {verdict.status === 'in' ? 'In tolerance' : 'Out of tolerance'} (
+      {deviationText(target, verdict)})
     </Badge>
   );
-}
-
-function toleranceText(target: FieldTarget): string {
-  const t = target.tolerance;
-  if (!t) return 'no tolerance declared';
-  const dim = target.dimension as Dimension;
-  const show = (si: number) => presentSI(si, dim, 'SI').text;
-  switch (t.band.kind) {
-    case 'absolute':
-      return `−${show(t.band.minus)} / +${show(t.band.plus)}`;
-    case 'relative':
-      return `−${(t.band.minus * 100).toFixed(1)} % / +${(t.band.plus * 100).toFixed(1)} %`;
-    case 'atLeast':
-      return 'at least the target';
-    case 'atMost':
-      return 'at most the target';
-  }
 }
 
 export interface MeasurementRowProps {
@@ -63,8 +71,10 @@ export function MeasurementRow({
         <div>
           <Text fw={600}>{target.label}</Text>
           <Text size="sm" c="dimmed">
-            Target {presentSI(target.value, dim, 'SI').text}, tolerance {toleranceText(target)}
-            {target.tolerance ? ` (${target.tolerance.source})` : ''}
+            Target {settingText(target, target.value)}, tolerance{' '}
+            {target.tolerance
+              ? `${toleranceText(target.tolerance, dim)} (${target.tolerance.source})`
+              : 'none declared'}
           </Text>
           {target.tolerance?.rule && <Text size="sm">{target.tolerance.rule}</Text>}
         </div>

@@ -1,5 +1,5 @@
 import { Badge, Button, Group, Paper, Stack, Text } from '@mantine/core';
-import type { FieldRecord } from '@holdfast/shared';
+import { fieldRecordKindLabels, type FieldRecord } from '@holdfast/shared';
 import { errorMessage } from '../../../lib/api-client';
 import { useSignFieldRecord } from '../api/sign-field-record';
 
@@ -8,7 +8,6 @@ const statusColour = { draft: 'gray', signed: 'steel', countersigned: 'pass' } a
 /** The records of a position, newest first; plant engineers countersign signed ones here. */
 export function RecordTimeline(props: {
   records: readonly FieldRecord[];
-  kindLabel: Record<FieldRecord['kind'], string>;
   canCountersign: boolean;
 }) {
   const sign = useSignFieldRecord();
@@ -20,7 +19,7 @@ export function RecordTimeline(props: {
         <Paper withBorder p="sm" radius="md" component="li" key={r.id} data-record={r.id}>
           <Group justify="space-between" wrap="wrap" gap="xs">
             <Text fw={600}>
-              {r.performedAt.slice(0, 10)} · {props.kindLabel[r.kind]}
+              {r.performedAt.slice(0, 10)} · {fieldRecordKindLabels[r.kind]}
             </Text>
             <Group gap={4}>
               <Badge color={statusColour[r.status]}>{r.status}</Badge>

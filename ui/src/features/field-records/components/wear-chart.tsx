@@ -1,10 +1,23 @@
 import { Paper, Text, Title } from '@mantine/core';
 import { LineChart } from '@mantine/charts';
-import { dateOf, mmPerMonth, type WearSeries } from './wear-series';
+import { formatNumber, wearLineAt, type WearSeries } from '@holdfast/calc';
+import { dateOf, mmPerMonth } from './wear-series';
 
-const DAY_MS = 86400000;
-const day = (d: Date) => Math.round(d.getTime() / DAY_MS);
-const dateText = (dayNumber: number) => new Date(dayNumber * DAY_MS).toISOString().slice(0, 10);
+const DAY_S = 86400;
+/** Whole days since 1970 of a series time in seconds: the chart's x axis. */
+const day = (s: number) => Math.round(s / DAY_S);
+const dateText = (dayNumber: number) =>
+  dateOf(dayNumber * DAY_S)
+    .toISOString()
+    .slice(0, 10);
+/**
+ * The wear rate to two significant figures and its standard error to one: readings are taken to
+ * 0.1-0.5 mm, so further digits of either say nothing.
+ */
+const rateText = (rate: number, se: number) =>
+  `${formatNumber(mmPerMonth(rate), 2)} ± ${formatNumber(mmPerMonth(se), 1)}`;
+/** Axis ticks and tooltips in mm: at most two decimals, none that are only zeros (24, not 24.00). */
+const mmText = (v: number) => String(Number(v.toFixed(2)));
 
 /**
  * Readings of one length over time with the fitted line, the minimum, and the predicted date the
@@ -18,11 +31,9 @@ export function WearChart({ title, series }: { title: string; series: WearSeries
     Measured: r.value * 1000,
   }));
   if (fit) {
-    const first = readings[0]!.at.getTime() / 1000;
-    const last = crossing ? crossing.at : readings[readings.length - 1]!.at.getTime() / 1000;
-    for (const s of [first, last]) {
-      rows.push({ x: day(dateOf(s)), Fitted: (fit.intercept + fit.slope * s) * 1000 });
-    }
+    const first = readings[0]!.at;
+    const last = crossing ? crossing.at : readings[readings.length - 1]!.at;
+    for (const s of [first, last]) rows.push({ x: day(s), Fitted: wearLineAt(fit, s) * 1000 });
   }
   rows.sort((a, b) => a.x - b.x);
   const referenceLines: { x?: number; y?: number; label: string; color: string }[] = [];
@@ -30,8 +41,8 @@ export function WearChart({ title, series }: { title: string; series: WearSeries
     referenceLines.push({ y: minimum * 1000, label: 'minimum', color: 'fail.7' });
   if (crossing) {
     referenceLines.push(
-      { x: day(dateOf(crossing.lower)), label: 'from', color: 'amber.8' },
-      { x: day(dateOf(crossing.upper)), label: 'to', color: 'amber.8' },
+      { x: day(crossing.lower), label: 'from', color: 'amber.8' },
+      { x: day(crossing.upper), label: 'to', color: 'amber.8' },
     );
   }
   return (
@@ -54,7 +65,7 @@ export function WearChart({ title, series }: { title: string; series: WearSeries
           legendProps={{ verticalAlign: 'bottom', height: 40 }}
           yAxisLabel="mm"
           gridAxis="xy"
-          valueFormatter={(v) => v.toFixed(2)}
+          valueFormatter={mmText}
           xAxisProps={{ type: 'number', domain: ['dataMin', 'dataMax'], tickFormatter: dateText }}
           referenceLines={referenceLines.map((l) => ({
             ...(l.x !== undefined ? { x: l.x } : { y: l.y }),
@@ -66,7 +77,7 @@ export function WearChart({ title, series }: { title: string; series: WearSeries
       )}
       <Text component="figcaption" size="sm" mt={4} data-testid="wear-summary">
         {fit && fit.kind === 'trend'
-          ? `Wear rate ${mmPerMonth(fit.rate).toFixed(3)} ± ${mmPerMonth(fit.rateStandardError).toFixed(3)} mm per 30 days (± one standard error, ${fit.n} readings).` +
+          ? `Wear rate ${rateText(fit.rate, fit.rateStandardError)} mm per 30 days (± one standard error, ${fit.n} readings).` +
             (crossing
               ? ` Minimum reached about ${dateOf(crossing.at).toISOString().slice(0, 10)}, 95 % prediction interval ${dateOf(crossing.lower).toISOString().slice(0, 10)} to ${dateOf(crossing.upper).toISOString().slice(0, 10)}: plan the re-adjustment before the first date.`
               : '')
