@@ -1,6 +1,5 @@
 import type { CheckResult, CriteriaSet } from '../core/types.js';
 import { compute, type Derivation } from '../core/step.js';
-import { criterion } from '../criteria/lookup.js';
 import { driveTrainOverload } from '../duty/drive-train-overload.js';
 import { loadConsistency } from '../duty/load-consistency.js';
 import { rubbingSpeedFormula } from '../shoe-brake/lining-duty.js';
@@ -8,7 +7,7 @@ import { dutyAtSet } from '../stopping/speed-at-set.js';
 import type { StoppingResult } from '../stopping/stopping.js';
 import * as q from '../units/quantities.js';
 import { makeCheck, sheetCheck } from './checks.js';
-import { overspeedAtSet } from './overspeed-at-set.js';
+import { overspeedAtSet, pvAtSetCheck } from './at-set-checks.js';
 import type { CaliperInputs } from './caliper-disc-brake-fields.js';
 import type { CaliperDuty, CaliperTorques } from './caliper-disc-brake-torque.js';
 
@@ -70,7 +69,6 @@ export function caliperAtSet(
       symbol: 'v_o,set',
     },
   );
-  const pvLimit = criterion(criteria, 'pvLimit');
   const checks = [
     makeCheck({
       id: 'rubbing-speed',
@@ -82,16 +80,7 @@ export function caliperAtSet(
       dimension: 'speed',
       source: "equipment data (user input): disc maker's speed rating",
     }),
-    makeCheck({
-      id: 'pv',
-      section: 'lining',
-      label: 'p·v when the brake sets ≤ limit',
-      value: at.pv,
-      limit: pvLimit.value,
-      kind: 'max',
-      dimension: 'pv',
-      source: pvLimit.source,
-    }),
+    pvAtSetCheck(at.pv, criteria),
   ];
   checks.push(
     ...overspeedAtSet(

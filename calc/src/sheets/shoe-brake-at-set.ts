@@ -1,6 +1,5 @@
 import type { CheckResult, CriteriaSet } from '../core/types.js';
 import type { Derivation } from '../core/step.js';
-import { criterion } from '../criteria/lookup.js';
 import { driveTrainOverload } from '../duty/drive-train-overload.js';
 import { pivotDistance, pivotedShoeTorque } from '../shoe-brake/pivoted-shoe.js';
 import { shortShoeTorque } from '../shoe-brake/short-shoe.js';
@@ -9,7 +8,7 @@ import { dutyAtSet } from '../stopping/speed-at-set.js';
 import type { StoppingResult } from '../stopping/stopping.js';
 import * as q from '../units/quantities.js';
 import { makeCheck, sheetCheck } from './checks.js';
-import { overspeedAtSet } from './overspeed-at-set.js';
+import { overspeedAtSet, pvAtSetCheck } from './at-set-checks.js';
 import type { ShoeInputs } from './shoe-brake-fields.js';
 import type { ShoeDuty } from './shoe-brake-evaluate.js';
 import type { ShoeLining, ShoeTorques } from './shoe-brake-torque.js';
@@ -38,7 +37,6 @@ export function shoeDutyAtSet(
     },
     d,
   );
-  const pvLimit = criterion(criteria, 'pvLimit');
   return [
     makeCheck({
       id: 'rubbing-speed',
@@ -50,16 +48,7 @@ export function shoeDutyAtSet(
       dimension: 'speed',
       source: "equipment data (user input): drum maker's peripheral speed rating",
     }),
-    makeCheck({
-      id: 'pv',
-      section: 'lining',
-      label: 'p·v when the brake sets ≤ limit',
-      value: at.pv,
-      limit: pvLimit.value,
-      kind: 'max',
-      dimension: 'pv',
-      source: pvLimit.source,
-    }),
+    pvAtSetCheck(at.pv, criteria),
   ];
 }
 

@@ -1,8 +1,9 @@
-import type { CheckResult } from '../core/types.js';
+import type { CheckResult, CriteriaSet } from '../core/types.js';
 import type { Derivation } from '../core/step.js';
+import { criterion } from '../criteria/lookup.js';
 import { maxSetDelay, overspeedChecks } from '../stopping/overspeed.js';
 import * as q from '../units/quantities.js';
-import { sheetCheck } from './checks.js';
+import { makeCheck, sheetCheck } from './checks.js';
 
 /** Speeds of a sheet with a set delay, all on the brake shaft except the motor's rating. */
 export interface OverspeedAtSetInput {
@@ -56,4 +57,19 @@ export function overspeedAtSet(input: OverspeedAtSetInput, d: Derivation): Check
       "Shorten the set delay (thruster at its coldest oil: maker's data) or add a faster-setting brake.",
     ),
   );
+}
+
+/** p·v at the speed the brake sets with against the criteria set's limit (section 'lining'). */
+export function pvAtSetCheck(pv: number, criteria: CriteriaSet): CheckResult {
+  const pvLimit = criterion(criteria, 'pvLimit');
+  return makeCheck({
+    id: 'pv',
+    section: 'lining',
+    label: 'p·v when the brake sets ≤ limit',
+    value: pv,
+    limit: pvLimit.value,
+    kind: 'max',
+    dimension: 'pv',
+    source: pvLimit.source,
+  });
 }
