@@ -17,7 +17,7 @@ export const REF = {
     "external/internal shoe moments, Budynas & Nisbett, Shigley's MED 8th ed., §16-2/16-3",
   wear: 'spring extension from lining wear through the linkage travel ratio; force loss = rate × extension (statics, common practice)',
   pressure:
-    "mean pressure on projected area b·D·sin(β/2) (Shigley's MED, friction-material table note); peak per p = pa·cos θ",
+    "mean pressure on projected area b·D·sin(β/2) (Shigley's MED 8th ed., Table 16-3 note); peak per p = pa·cos θ",
   pv: 'pressure–velocity product p·v (common practice for lining duty)',
   caliper:
     "uniform-wear disc brake, Budynas & Nisbett, Shigley's MED 8th ed., §16-5 (r_e = (r_o + r_i)/2)",

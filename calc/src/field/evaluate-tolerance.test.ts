@@ -156,4 +156,10 @@ describe('field-card tolerance declarations', () => {
     }
     expect(seen).toBeGreaterThanOrEqual(measured.length);
   });
+
+  it('the caliper air gap keeps the clearance band but speaks of pads, not shoes', () => {
+    expect(T.AIR_GAP.band).toEqual(T.SHOE_CLEARANCE.band);
+    expect(T.AIR_GAP.rule).toMatch(/each pad/);
+    expect(T.AIR_GAP.rule).not.toMatch(/shoe/);
+  });
 });

@@ -45,7 +45,10 @@ export const SHOE_CLEARANCE: FieldTolerance = {
 };
 
 /** Caliper air gap each side: −0.1 mm / +0.2 mm. */
-export const AIR_GAP: FieldTolerance = SHOE_CLEARANCE;
+export const AIR_GAP: FieldTolerance = {
+  ...SHOE_CLEARANCE,
+  rule: 'Measure each pad separately; the two sides should match.',
+};
 
 /**
  * Disc-spring stack back-off angle: tightened flat, then backed off. The nut only ever turns

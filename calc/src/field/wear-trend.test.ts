@@ -165,7 +165,10 @@ describe('wear trend properties', () => {
           field: 'y',
         });
         expect(fit.kind).toBe('trend');
-        if (fit.kind !== 'trend' || !fit.crossing) return;
+        // A trend with a minimum always has a crossing: a missing one fails, not skips.
+        if (fit.kind !== 'trend') return;
+        expect(fit.crossing).toBeDefined();
+        if (!fit.crossing) return;
         expect(fit.residualStd / MM).toBeLessThan(1e-6 * start);
         const exact = epochDays + ((start - minimum) / ratePerYear) * 365;
         expect(Math.abs(fit.crossing.at / DAY - exact)).toBeLessThan(1e-6 * exact + 1e-3);
@@ -195,7 +198,9 @@ describe('wear trend properties', () => {
             field: 'y',
           });
           fc.pre(fit.kind === 'trend');
-          if (fit.kind !== 'trend' || !fit.crossing) return;
+          if (fit.kind !== 'trend') return;
+          expect(fit.crossing).toBeDefined();
+          if (!fit.crossing) return;
           expect(fit.residualStd).toBeGreaterThan(0);
           expect(fit.crossing.upper).toBeGreaterThan(fit.crossing.lower);
           expect(fit.crossing.lower).toBeLessThanOrEqual(fit.crossing.at);

@@ -16,7 +16,7 @@ import {
   wahlFormula,
 } from './formulas.js';
 
-/** End types of Shigley's MED Table 10-1: extra total coils N_e and solid-length term e_s. */
+/** End types of Shigley's MED 10th ed., Table 10-1: extra total coils N_e and solid-length term e_s. */
 export const END_TYPES = {
   plain: { label: 'Plain ends', extraCoils: 0, solidExtra: 1 },
   'plain-ground': { label: 'Plain and ground ends', extraCoils: 1, solidExtra: 0 },
@@ -26,7 +26,7 @@ export const END_TYPES = {
 export type SpringEndType = keyof typeof END_TYPES;
 
 /**
- * End-condition constant α for buckling (Shigley's MED Table 10-2, from memory): both ends on
+ * End-condition constant α for buckling (Shigley's MED 10th ed., Table 10-2, from memory): both ends on
  * flat parallel surfaces (fixed) 0.5; one fixed, one pivoted 0.707; both pivoted 1; one end free 2.
  */
 export const END_FIXITY = { fixedFixed: 0.5, fixedPivoted: 0.707, pivotedPivoted: 1, fixedFree: 2 };
@@ -51,7 +51,7 @@ export interface CompressionSpringInput {
   allowableShearSolid: Pressure;
   /** 'bergstrasser' (default; Shigley, EN 13906-1) or 'wahl'. */
   correction?: 'bergstrasser' | 'wahl';
-  /** Fractional overrun to solid ξ: F_solid ≥ (1 + ξ)·F_max; default 0.15 (Shigley §10-8, from memory). */
+  /** Fractional overrun to solid ξ: F_solid ≥ (1 + ξ)·F_max; default 0.15 (Shigley's MED 10th ed., §10-8, from memory). */
   overrun?: Ratio;
 }
 

@@ -72,6 +72,10 @@ describe('overspeed', () => {
     const c = check(e, 'motor-overspeed');
     expect(c.pass).toBe(true);
     expect(c.value).toBeCloseTo(step(e, 'speed-after-delay') * 40, 9);
+    // The longest delay is found at the brake shaft: the motor's limit divided by the ratio.
+    const alpha = step(e, 'delay-acceleration');
+    const omega0 = step(e, 'speed-after-delay') - alpha * 0.3;
+    expect(step(e, 'max-set-delay')).toBeCloseTo(((2200 * Math.PI) / 30 / 40 - omega0) / alpha, 6);
     const slow = run(caliper, { setDelay: { value: 10, unit: 's' } });
     expect(check(slow, 'motor-overspeed').pass).toBe(false);
   });
@@ -81,6 +85,8 @@ describe('overspeed', () => {
     const c = check(e, 'motor-overspeed');
     expect(c.value).toBeCloseTo((1450 * 2 * Math.PI) / 60, 9);
     expect(c.pass).toBe(true);
+    // No acceleration during the delay: no longest delay to print (not an infinity).
+    expect(e.derivation.some((x) => x.id === 'max-set-delay')).toBe(false);
   });
 });
 

@@ -1,14 +1,13 @@
 import type { CheckResult, CriteriaSet } from '../core/types.js';
 import { compute, type Derivation } from '../core/step.js';
-import { criterion } from '../criteria/lookup.js';
 import { driveTrainOverload } from '../duty/drive-train-overload.js';
 import { loadConsistency } from '../duty/load-consistency.js';
 import { rubbingSpeedFormula } from '../shoe-brake/lining-duty.js';
-import { maxSetDelay, overspeedChecks } from '../stopping/overspeed.js';
 import { dutyAtSet } from '../stopping/speed-at-set.js';
 import type { StoppingResult } from '../stopping/stopping.js';
 import * as q from '../units/quantities.js';
 import { makeCheck, sheetCheck } from './checks.js';
+import { overspeedAtSet, pvAtSetCheck } from './at-set-checks.js';
 import type { CaliperInputs } from './caliper-disc-brake-fields.js';
 import type { CaliperDuty, CaliperTorques } from './caliper-disc-brake-torque.js';
 
@@ -70,7 +69,6 @@ export function caliperAtSet(
       symbol: 'v_o,set',
     },
   );
-  const pvLimit = criterion(criteria, 'pvLimit');
   const checks = [
     makeCheck({
       id: 'rubbing-speed',
@@ -82,44 +80,18 @@ export function caliperAtSet(
       dimension: 'speed',
       source: "equipment data (user input): disc maker's speed rating",
     }),
-    makeCheck({
-      id: 'pv',
-      section: 'lining',
-      label: 'p·v when the brake sets ≤ limit',
-      value: at.pv,
-      limit: pvLimit.value,
-      kind: 'max',
-      dimension: 'pv',
-      source: pvLimit.source,
-    }),
+    pvAtSetCheck(at.pv, criteria),
   ];
-  d.section = 'stopping';
-  const motorMax = q.angularSpeed(v.motorMaxSpeed);
-  const over = overspeedChecks(
-    {
-      setSpeed: stop.speedAfterDelay,
-      motorRatio: q.ratio(v.ratioToBrake),
-      motorMaxSpeed: motorMax,
-    },
-    d,
-  );
-  const alpha = duty.driveTorque / v.inertia;
-  const maxAtBrake = motorMax / v.ratioToBrake;
-  // A vanishing α_d sets no limit on the delay: skip the step rather than print an infinity.
-  if (
-    alpha > 0 &&
-    maxAtBrake > duty.brakeSpeed &&
-    Number.isFinite((maxAtBrake - duty.brakeSpeed) / alpha)
-  ) {
-    maxSetDelay(duty.brakeSpeed, q.angularSpeed(maxAtBrake), q.angularAcceleration(alpha), d);
-  }
   checks.push(
-    ...over.checks.map((c) =>
-      sheetCheck(
-        c,
-        'stopping',
-        "Shorten the set delay (thruster at its coldest oil: maker's data) or add a faster-setting brake.",
-      ),
+    ...overspeedAtSet(
+      {
+        setSpeed: stop.speedAfterDelay,
+        brakeSpeed: duty.brakeSpeed,
+        motorRatio: v.ratioToBrake,
+        motorMaxSpeed: v.motorMaxSpeed,
+        delayAcceleration: duty.driveTorque / v.inertia,
+      },
+      d,
     ),
   );
   d.section = 'brake';

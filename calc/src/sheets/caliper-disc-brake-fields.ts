@@ -2,7 +2,8 @@ import type { SectionDefinition } from '../core/types.js';
 import { LININGS } from '../criteria/linings.js';
 import { choice, num, qty, withBounds, type InputsOf } from './field-builders.js';
 import { CALIPER_BOUNDS } from './field-bounds.js';
-import { ARRANGEMENT_CHOICES, SET_DELAY_HELP, SET_DELAY_LABEL } from './hoist-shoe-brake.js';
+import { ARRANGEMENT_CHOICES } from './hoist-shoe-brake.js';
+import { setDelayFields } from './set-delay-fields.js';
 
 export const CALIPER_SECTIONS: SectionDefinition[] = [
   { id: 'duty', title: 'Duty at the brake shaft' },
@@ -110,22 +111,7 @@ export const CALIPER_FIELDS = withBounds(
         help: 'When given, the static torque is checked against m·g·v_0/ω_b so that torque, speed and inertia describe the same hoist.',
       },
     ),
-    qty(U, 'setDelay', SET_DELAY_LABEL, 't_d', 'time', 0.3, 's', 's', {
-      min: 0,
-      max: 10,
-      help: SET_DELAY_HELP,
-    }),
-    qty(
-      U,
-      'motorMaxSpeed',
-      "Motor maximum permissible speed (motor maker's data)",
-      'n_max',
-      'angularSpeed',
-      2200,
-      'rpm',
-      'rpm',
-      { min: 0, exclusiveMin: true, max: 20000 },
-    ),
+    ...setDelayFields(2200),
     qty(
       U,
       'maxStoppingDistance',

@@ -35,6 +35,18 @@ export function stoppingChart(
   };
 }
 
+/** Title and axes of every torque–wear chart (caliper spring sweep, shoe-brake stroke chain). */
+export const TORQUE_WEAR_AXES = {
+  id: 'torque-wear',
+  title: 'Brake torque against lining wear',
+  xLabel: 'Lining wear per shoe',
+  xUnit: 'm',
+  xDimension: 'length',
+  yLabel: 'Brake torque',
+  yUnit: 'N m',
+  yDimension: 'torque',
+} as const satisfies Partial<ChartData>;
+
 /** Brake torque against lining wear at μ min and μ nominal, with the required torque line. */
 export function torqueWearChart(
   torqueNewNominal: number,
@@ -60,14 +72,7 @@ export function torqueWearChart(
     min.push({ x: w, y: torqueNewMin * f });
   }
   return {
-    id: 'torque-wear',
-    title: 'Brake torque against lining wear',
-    xLabel: 'Lining wear per shoe',
-    xUnit: 'm',
-    xDimension: 'length',
-    yLabel: 'Brake torque',
-    yUnit: 'N m',
-    yDimension: 'torque',
+    ...TORQUE_WEAR_AXES,
     series: [
       { name: 'μ nominal', points: nominal },
       { name: 'μ min', points: min },

@@ -102,10 +102,13 @@ export function hoistTestRequirements(r: {
   requiredTorque: number;
   brakesInstalled: number;
 }): string[] {
-  const testLoad = Math.round((1.25 * r.ratedLoad) / 10) * 10;
+  // Rounded to 10 kg downwards, so the printed test load never exceeds 125 % of the rated load;
+  // the static test torque rounded upwards, so the test never applies less than the required torque.
+  const testLoad = Math.floor((1.25 * r.ratedLoad) / 10) * 10;
+  const testTorque = Math.ceil(r.requiredTorque);
   const each = r.brakesInstalled > 1 ? ' with each holding brake alone (the other held open)' : '';
   return [
     `Load test before service: test load not more than 125 % of the rated load, here at most ${testLoad} kg (29 CFR 1910.179(k)(2), from memory; ASME B30.2 states the same limit, from memory). Static: hold the test load clear of the ground${each}. Dynamic: stop the rated load lowering at full speed${each} (common practice).`,
-    `Static torque test after the linings have bedded in: with the brake set, apply ${Math.round(r.requiredTorque)} N·m (the required torque) at the brake shaft with a torque wrench or lever and weight${each}; the drum must not turn (common practice, no published source).`,
+    `Static torque test after the linings have bedded in: with the brake set, apply ${testTorque} N·m (the required torque) at the brake shaft with a torque wrench or lever and weight${each}; the drum must not turn (common practice, no published source).`,
   ];
 }

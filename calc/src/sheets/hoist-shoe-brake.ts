@@ -20,6 +20,7 @@ import {
 import * as q from '../units/quantities.js';
 import { choice, num, qty, withBounds } from './field-builders.js';
 import { HOIST_BOUNDS } from './field-bounds.js';
+import { setDelayFields } from './set-delay-fields.js';
 import { readInputs } from './sheet-inputs.js';
 import { SHOE_FIELD_CARD } from './field-card-layouts.js';
 import { finish, newEvaluation, publishSteps } from './sheet-output.js';
@@ -32,12 +33,6 @@ import {
 } from './hoist-redundancy.js';
 
 const U = 'duty';
-
-/** The set delay is a method choice: the slowest set the thruster makes, at its coldest oil. */
-export const SET_DELAY_LABEL =
-  "Brake set delay at the thruster's coldest oil (power off to full torque)";
-export const SET_DELAY_HELP =
-  "Take the thruster's set time at the coldest oil temperature of the site from the thruster maker's data: cold oil sets slowest, and the load speeds up until the brake acts.";
 
 export const ARRANGEMENT_CHOICES = [
   { value: 'single', label: 'One holding brake, control braking other than mechanical' },
@@ -150,22 +145,7 @@ export const HOIST_DUTY_FIELDS = [
       help: 'No credit for gear losses while lowering in an emergency stop: leave 1 unless the gearbox maker states a back-driving efficiency (common practice).',
     },
   ),
-  qty(U, 'setDelay', SET_DELAY_LABEL, 't_d', 'time', 0.3, 's', 's', {
-    min: 0,
-    max: 10,
-    help: SET_DELAY_HELP,
-  }),
-  qty(
-    U,
-    'motorMaxSpeed',
-    "Motor maximum permissible speed (motor maker's data)",
-    'n_max',
-    'angularSpeed',
-    2200,
-    'rpm',
-    'rpm',
-    { min: 0, exclusiveMin: true, max: 20000 },
-  ),
+  ...setDelayFields(2200),
   qty(
     U,
     'maxStoppingDistance',

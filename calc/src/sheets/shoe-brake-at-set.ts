@@ -1,15 +1,14 @@
 import type { CheckResult, CriteriaSet } from '../core/types.js';
 import type { Derivation } from '../core/step.js';
-import { criterion } from '../criteria/lookup.js';
 import { driveTrainOverload } from '../duty/drive-train-overload.js';
 import { pivotDistance, pivotedShoeTorque } from '../shoe-brake/pivoted-shoe.js';
 import { shortShoeTorque } from '../shoe-brake/short-shoe.js';
 import { travelRatioCheck } from '../shoe-brake/travel-ratio.js';
-import { maxSetDelay, overspeedChecks } from '../stopping/overspeed.js';
 import { dutyAtSet } from '../stopping/speed-at-set.js';
 import type { StoppingResult } from '../stopping/stopping.js';
 import * as q from '../units/quantities.js';
 import { makeCheck, sheetCheck } from './checks.js';
+import { overspeedAtSet, pvAtSetCheck } from './at-set-checks.js';
 import type { ShoeInputs } from './shoe-brake-fields.js';
 import type { ShoeDuty } from './shoe-brake-evaluate.js';
 import type { ShoeLining, ShoeTorques } from './shoe-brake-torque.js';
@@ -38,7 +37,6 @@ export function shoeDutyAtSet(
     },
     d,
   );
-  const pvLimit = criterion(criteria, 'pvLimit');
   return [
     makeCheck({
       id: 'rubbing-speed',
@@ -50,16 +48,7 @@ export function shoeDutyAtSet(
       dimension: 'speed',
       source: "equipment data (user input): drum maker's peripheral speed rating",
     }),
-    makeCheck({
-      id: 'pv',
-      section: 'lining',
-      label: 'p·v when the brake sets ≤ limit',
-      value: at.pv,
-      limit: pvLimit.value,
-      kind: 'max',
-      dimension: 'pv',
-      source: pvLimit.source,
-    }),
+    pvAtSetCheck(at.pv, criteria),
   ];
 }
 
@@ -69,35 +58,15 @@ export function shoeDutyAtSet(
  */
 export function shoeOverspeed(duty: ShoeDuty, stop: StoppingResult, d: Derivation): CheckResult[] {
   if (duty.motorMaxSpeed === undefined) return [];
-  d.section = 'stopping';
-  const r = overspeedChecks(
+  return overspeedAtSet(
     {
       setSpeed: stop.speedAfterDelay,
-      motorRatio: q.ratio(1),
-      motorMaxSpeed: q.angularSpeed(duty.motorMaxSpeed),
+      brakeSpeed: duty.brakeSpeed,
+      motorRatio: 1,
+      motorMaxSpeed: duty.motorMaxSpeed,
+      delayAcceleration: duty.driveTorque / duty.inertia,
     },
     d,
-  );
-  const alpha = duty.driveTorque / duty.inertia;
-  // A vanishing α_d (no driving torque worth the name) sets no limit on the delay: skip the step.
-  if (
-    alpha > 0 &&
-    duty.motorMaxSpeed > duty.brakeSpeed &&
-    Number.isFinite((duty.motorMaxSpeed - duty.brakeSpeed) / alpha)
-  ) {
-    maxSetDelay(
-      q.angularSpeed(duty.brakeSpeed),
-      q.angularSpeed(duty.motorMaxSpeed),
-      q.angularAcceleration(alpha),
-      d,
-    );
-  }
-  return r.checks.map((c) =>
-    sheetCheck(
-      c,
-      'stopping',
-      'Shorten the set delay (thruster at its coldest oil: maker’s data) or add a faster-setting brake.',
-    ),
   );
 }
 

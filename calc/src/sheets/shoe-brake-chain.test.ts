@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { getCriteriaSet } from '../criteria/lookup.js';
 import { nearlyEqual } from '../testing/expect-close.js';
+import { hoistTestRequirements } from './hoist-redundancy.js';
 import { demoInputs, getSheetType } from './registry.js';
 
 const crane = getCriteriaSet('crane-hoist')!;
@@ -192,6 +193,17 @@ describe('main spring, thruster extremes and test requirements', () => {
     expect(w).toMatch(/at most 12500 kg/);
     expect(w).toMatch(/1910\.179\(k\)\(2\)/);
     expect(w).toMatch(/each holding brake alone/);
-    expect(w).toMatch(/Static torque test after the linings have bedded in: .*179 N·m/);
+    expect(w).toMatch(/Static torque test after the linings have bedded in: .*apply 180 N·m/);
+  });
+
+  it('never prints a test load above 125 % nor a test torque below the required torque', () => {
+    // 1.25 × 10 005 kg = 12 506.25 kg: 12 510 kg would exceed the limit; 100.2 N·m is not 100.
+    const [load, torque] = hoistTestRequirements({
+      ratedLoad: 10_005,
+      requiredTorque: 100.2,
+      brakesInstalled: 1,
+    });
+    expect(load).toMatch(/at most 12500 kg/);
+    expect(torque).toMatch(/apply 101 N·m/);
   });
 });

@@ -7,6 +7,7 @@ import {
 } from '../shoe-brake/wear-limits.js';
 import { strokeWearChain, torqueWearPoints } from '../release/stroke-wear.js';
 import * as q from '../units/quantities.js';
+import { TORQUE_WEAR_AXES } from './charts.js';
 import { makeCheck } from './checks.js';
 import type { ShoeInputs } from './shoe-brake-fields.js';
 import type { ShoeTorques } from './shoe-brake-torque.js';
@@ -155,14 +156,7 @@ export function chainWearChart(
     maxWear,
   );
   return {
-    id: 'torque-wear',
-    title: 'Brake torque against lining wear',
-    xLabel: 'Lining wear per shoe',
-    xUnit: 'm',
-    xDimension: 'length',
-    yLabel: 'Brake torque',
-    yUnit: 'N m',
-    yDimension: 'torque',
+    ...TORQUE_WEAR_AXES,
     series: [
       { name: 'μ nominal', points: min.map((p) => ({ x: p.x, y: p.y * nominalPerMin })) },
       { name: 'μ min', points: min },

@@ -122,7 +122,7 @@ export const LINING_FIELDS = [
     min: 0,
     exclusiveMin: true,
     max: 1,
-    help: "Design texts advise 50–75 % of the test μ for design (Shigley's MED, Table 16-3 note).",
+    help: "Design texts advise 50–75 % of the test μ for design (Shigley's MED 8th ed., Table 16-3 note).",
   }),
   num(L, 'muMax', 'Friction coefficient, maximum', 'μ_max', 0.45, {
     min: 0,

@@ -65,7 +65,7 @@ export const MAIN_SPRING_FIELDS = [
   num(B, 'springEndFixity', 'Main spring end-condition constant for buckling', 'α', 0.5, {
     min: 0.1,
     max: 3,
-    help: "0.5 both ends on flat parallel plates, 0.707 one pivoted, 1 both pivoted, 2 one end free (Shigley's MED Table 10-2, from memory).",
+    help: "0.5 both ends on flat parallel plates, 0.707 one pivoted, 1 both pivoted, 2 one end free (Shigley's MED 10th ed., Table 10-2, from memory).",
   }),
   qty(
     B,

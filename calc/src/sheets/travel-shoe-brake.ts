@@ -23,7 +23,7 @@ import { SHOE_FIELD_CARD } from './field-card-layouts.js';
 import { finish, newEvaluation, publishSteps } from './sheet-output.js';
 import { SHOE_BRAKE_FIELDS, SHOE_SECTIONS } from './shoe-brake-fields.js';
 import { evaluateShoeBrake, validateShoeInputs } from './shoe-brake-evaluate.js';
-import { SET_DELAY_HELP, SET_DELAY_LABEL } from './hoist-shoe-brake.js';
+import { setDelayFields } from './set-delay-fields.js';
 
 const U = 'duty';
 
@@ -113,22 +113,7 @@ export const TRAVEL_DUTY_FIELDS = [
     'lb ft^2',
     { min: 0 },
   ),
-  qty(U, 'setDelay', SET_DELAY_LABEL, 't_d', 'time', 0.3, 's', 's', {
-    min: 0,
-    max: 10,
-    help: SET_DELAY_HELP,
-  }),
-  qty(
-    U,
-    'motorMaxSpeed',
-    "Motor maximum permissible speed (motor maker's data)",
-    'n_max',
-    'angularSpeed',
-    3000,
-    'rpm',
-    'rpm',
-    { min: 0, exclusiveMin: true, max: 20000 },
-  ),
+  ...setDelayFields(3000),
 ] as const;
 
 /** Shoe-brake demo values sized for the travel demo (smaller drum and spring than the hoist). */

@@ -5,7 +5,7 @@ import { defineFormula } from '../core/step.js';
  * on a drum worn or re-machined to its smallest diameter (same shoe force, smaller radius).
  */
 export const REF_DRUM =
-  'torque ∝ friction radius at equal shoe force (statics; Shigley’s MED §16-2); the lining’s arc change with thickness is neglected';
+  'torque ∝ friction radius at equal shoe force (statics; Budynas & Nisbett, Shigley’s MED 8th ed., §16-2); the lining’s arc change with thickness is neglected';
 
 export const liningWearAllowanceFormula = defineFormula({
   id: 'lining-wear-allowance',

@@ -163,9 +163,3 @@ export function formatInUnit(valueSI: number, unit: PrintUnit, digits?: number):
       : formatNumber(value, digits);
   return text + unit.suffix;
 }
-
-/** Printed SI label of a dimension's storage unit, e.g. 'N·m'. */
-export function siLabelFor(dimension: Dimension): string {
-  const units = PRINT_UNITS[dimension];
-  return units.find((x) => x.factor === 1 && !x.offset)?.label ?? '';
-}

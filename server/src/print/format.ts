@@ -28,8 +28,9 @@ export function qtyParts(
   valueSI: number,
   dimension: Dimension,
   system: PrintUnitSystem,
+  precision?: Precision,
 ): { value: number; text: string; label: string } {
-  const d = toDisplay(valueSI, dimension, system);
+  const d = toDisplay(valueSI, dimension, system, undefined, precision);
   const text = d.label ? d.text.slice(0, d.text.length - d.label.length).trim() : d.text;
   return { value: d.value, text, label: d.label };
 }

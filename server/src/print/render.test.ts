@@ -97,6 +97,8 @@ describe('calculation sheet PDF', () => {
     expect(t).toContain('Brake torque against lining wear');
     expect(t).toContain('Set point');
     expect(t).toContain('Spring setting table');
+    // Field settings print to what a fitter measures (feeler step 0.05 mm), as the card does.
+    expect(t).toMatch(/Shoe clearance each side 0\.80 mm/);
     expect(t).toMatch(/\[\d+\] Textbook of machine elements, 3rd ed\., §12\.4/);
   });
 

@@ -1,4 +1,4 @@
-import type { SheetEvaluation } from '@holdfast/calc';
+import { settingPrecision, type SheetEvaluation } from '@holdfast/calc';
 import { Text, View } from '@react-pdf/renderer';
 import { pct, qtyParts, qty, unitLabel } from '../format.js';
 import type { PrintableSheet, PrintUnitSystem } from '../printable-sheet.js';
@@ -25,7 +25,10 @@ export function SettingTable(props: {
       <Table
         columns={[...columns, ...extra]}
         rows={table.rows.map((row) => [
-          ...table.columns.map((c) => qtyParts(row[c.key], c.dimension, system).text),
+          ...table.columns.map(
+            (c) =>
+              qtyParts(row[c.key], c.dimension, system, settingPrecision(c.key, c.dimension)).text,
+          ),
           ...extra.map(() => ''),
         ])}
       />
@@ -63,7 +66,7 @@ export function fieldSettingsBlocks(ctx: BlockContext, sheet: PrintableSheet): F
         ],
         rows: ev.fieldSettings.map((f) => [
           f.label,
-          qty(f.value, f.dimension, system),
+          qty(f.value, f.dimension, system, settingPrecision(f.key, f.dimension)),
           f.note ?? '',
         ]),
       }),
@@ -76,7 +79,10 @@ export function fieldSettingsBlocks(ctx: BlockContext, sheet: PrintableSheet): F
         continuedTitle: t.title,
         columns: settingColumns(t, system),
         rows: t.rows.map((row) =>
-          t.columns.map((c) => qtyParts(row[c.key], c.dimension, system).text),
+          t.columns.map(
+            (c) =>
+              qtyParts(row[c.key], c.dimension, system, settingPrecision(c.key, c.dimension)).text,
+          ),
         ),
       }),
     );
