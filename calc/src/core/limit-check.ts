@@ -55,5 +55,20 @@ export function checkOutcome(
 
 /** Builds a LimitCheck with checkOutcome. */
 export function limitCheck(spec: Omit<LimitCheck, 'utilisation' | 'pass'>): LimitCheck {
-  return { ...spec, ...checkOutcome(spec.value, spec.limit, spec.kind, spec.strict) };
+  const { utilisation, pass } = checkOutcome(spec.value, spec.limit, spec.kind, spec.strict);
+  // Written out rather than spread ({ ...spec, ...outcome }): two spreads per check were a
+  // visible share of a sheet's evaluation.
+  const out: LimitCheck = {
+    id: spec.id,
+    label: spec.label,
+    value: spec.value,
+    limit: spec.limit,
+    dimension: spec.dimension,
+    kind: spec.kind,
+    utilisation,
+    pass,
+    source: spec.source,
+  };
+  if (spec.strict !== undefined) out.strict = spec.strict;
+  return out;
 }

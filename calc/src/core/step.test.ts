@@ -137,3 +137,41 @@ describe('closure compilation matches mathjs', () => {
     expect(nearlyEqual(f.evaluate(scope), expected, 1e-12)).toBe(true);
   });
 });
+
+describe('a recorded step writes its substituted line when read', () => {
+  const record = () => {
+    const d = new Derivation('brake');
+    d.step(torque, { mu: 0.35, N: 12400, D: 0.4 }, { symbol: 'M_b,min' });
+    return d.steps[0];
+  };
+  const line = 'M_b,min = 0.35 · 12.4 kN · 400.0 mm';
+
+  it('reads the same line as substitute() gives, every time', () => {
+    const s = record();
+    expect(s.substituted).toBe(line);
+    expect(s.substituted).toBe(line);
+  });
+
+  it('keeps the line through JSON, structured clone and spreading, and nothing else', () => {
+    const s = record();
+    const keys = [
+      'id',
+      'section',
+      'label',
+      'symbol',
+      'formula',
+      'value',
+      'unit',
+      'dimension',
+      'reference',
+      'substituted',
+    ];
+    const json = JSON.parse(JSON.stringify(s)) as Record<string, unknown>;
+    expect(Object.keys(json).sort()).toEqual([...keys].sort());
+    expect(json.substituted).toBe(line);
+    const clone = structuredClone(s) as unknown as Record<string | symbol, unknown>;
+    expect(clone.substituted).toBe(line);
+    expect(Object.getOwnPropertySymbols(clone)).toEqual([]);
+    expect({ ...s }.substituted).toBe(line);
+  });
+});

@@ -163,6 +163,33 @@ export interface StepOptions {
   reference?: string;
 }
 
+/** What a step needs to write its substituted line when it is first read. */
+interface PendingText {
+  formula: Formula<string, Dimension>;
+  values: Record<string, number>;
+  symbol: string | undefined;
+  text: string | undefined;
+}
+
+// Symbol-keyed, so JSON.stringify and structured clone leave it out.
+const PENDING = Symbol('pending substitution');
+
+/**
+ * The substituted line is written when first read (the sheet view, the printed sheet, JSON), not
+ * when the step is recorded: a sheet records ~120 steps per keystroke and writing every line was
+ * most of an evaluation's time, while the editor shows a few at once. An own enumerable accessor,
+ * so spreading, JSON.stringify and structured clone all still see the text; one shared descriptor,
+ * so every step has the same shape. `values` is the caller's fresh literal, never changed after.
+ */
+const SUBSTITUTED: PropertyDescriptor = {
+  enumerable: true,
+  configurable: true,
+  get(this: { [PENDING]: PendingText }): string {
+    const p = this[PENDING];
+    return (p.text ??= p.formula.substitute(p.values, p.symbol));
+  },
+};
+
 /**
  * Records derivation steps in order. `step()` computes a formula, checks the result is finite,
  * records the formula text, the substitution, the value and its SI unit, and returns the value.
@@ -196,19 +223,19 @@ export class Derivation {
       : symbol
         ? symbol + formula.text.slice(spec.symbol.length)
         : formula.text;
-    const substituted = formula.substitute(values, symbol);
-    const step: DerivationStep = {
+    const step = {
       id,
       section: options?.section ?? this.section,
       label: options?.label ?? spec.label,
       symbol: symbol ?? spec.symbol,
       formula: formulaText,
-      substituted,
       value,
       unit: DIMENSIONS[spec.dimension].siUnit,
       dimension: spec.dimension,
       reference: options?.reference ?? spec.reference,
-    };
+      [PENDING]: { formula, values, symbol, text: undefined } as PendingText,
+    } as unknown as DerivationStep;
+    Object.defineProperty(step, 'substituted', SUBSTITUTED);
     this.steps.push(step);
     this.byId.set(id, step);
     return value;

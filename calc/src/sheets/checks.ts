@@ -28,18 +28,7 @@ export interface CheckSpec {
 export function makeCheck(spec: CheckSpec): CheckResult {
   const { value, limit, kind } = spec;
   const { utilisation, pass } = checkOutcome(value, limit, kind, spec.strict, spec.base);
-  let v = formatForDerivation(value, spec.dimension);
-  let l = formatForDerivation(limit, spec.dimension);
-  // Printed to the same text but not equal: more figures, so the verdict can be read off.
-  if (v === l && value !== limit) {
-    v = formatForDerivation(value, spec.dimension, 6);
-    l = formatForDerivation(limit, spec.dimension, 6);
-  }
-  const rel = kind === 'max' ? (spec.strict ? '<' : '≤') : spec.strict ? '>' : '≥';
-  const message = pass
-    ? `${spec.label}: ${v} ${rel} ${l} — pass (utilisation ${(utilisation * 100).toFixed(0)} %).`
-    : `${spec.label}: ${v} is not ${rel} ${l} — FAIL.${spec.failHint ? ` ${spec.failHint}` : ''}`;
-  return {
+  const check = {
     id: spec.id,
     section: spec.section,
     label: spec.label,
@@ -51,8 +40,46 @@ export function makeCheck(spec: CheckSpec): CheckResult {
     utilisation,
     pass,
     source: spec.source,
-    message,
-  };
+    [PENDING]: { spec, text: undefined } as PendingMessage,
+  } as unknown as CheckResult;
+  Object.defineProperty(check, 'message', MESSAGE);
+  return check;
+}
+
+interface PendingMessage {
+  spec: CheckSpec;
+  text: string | undefined;
+}
+
+// Symbol-keyed, so JSON.stringify and structured clone leave it out.
+const PENDING = Symbol('pending check message');
+
+/**
+ * The message is written when first read, like a derivation step's substituted line (see
+ * core/step.ts): a sheet makes ~45 checks per keystroke and the editor shows a few messages.
+ */
+const MESSAGE: PropertyDescriptor = {
+  enumerable: true,
+  configurable: true,
+  get(this: CheckResult & { [PENDING]: PendingMessage }): string {
+    const p = this[PENDING];
+    return (p.text ??= checkMessage(p.spec, this.utilisation, this.pass));
+  },
+};
+
+function checkMessage(spec: CheckSpec, utilisation: number, pass: boolean): string {
+  const { value, limit, kind } = spec;
+  let v = formatForDerivation(value, spec.dimension);
+  let l = formatForDerivation(limit, spec.dimension);
+  // Printed to the same text but not equal: more figures, so the verdict can be read off.
+  if (v === l && value !== limit) {
+    v = formatForDerivation(value, spec.dimension, 6);
+    l = formatForDerivation(limit, spec.dimension, 6);
+  }
+  const rel = kind === 'max' ? (spec.strict ? '<' : '≤') : spec.strict ? '>' : '≥';
+  return pass
+    ? `${spec.label}: ${v} ${rel} ${l} — pass (utilisation ${(utilisation * 100).toFixed(0)} %).`
+    : `${spec.label}: ${v} is not ${rel} ${l} — FAIL.${spec.failHint ? ` ${spec.failHint}` : ''}`;
 }
 
 /** A check from a formula function (LimitCheck) placed in a sheet section, with optional advice. */
