@@ -83,7 +83,7 @@ export function caliperStopAndHeat(
     makeCheck({
       id: 'temperature-steady',
       section: 'thermal',
-      label: 'Mean steady bulk {drum} temperature ≤ pad max operating temperature',
+      label: 'Mean steady bulk disc temperature ≤ pad max operating temperature',
       value: Tss,
       limit: lining.maxOperatingTemperature,
       kind: 'max',

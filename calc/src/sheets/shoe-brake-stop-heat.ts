@@ -107,7 +107,7 @@ export function shoeStopDistanceAndHeat(
     makeCheck({
       id: 'temperature-steady',
       section: 'thermal',
-      label: 'Mean steady bulk {drum} temperature ≤ lining max operating temperature',
+      label: 'Mean steady bulk drum temperature ≤ lining max operating temperature',
       value: Tss,
       limit: lining.maxOperatingTemperature,
       kind: 'max',
