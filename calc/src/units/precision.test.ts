@@ -56,6 +56,11 @@ describe('printing precision per quantity', () => {
     expect(mm('springLength', 0.2225)).toBe('222.5 mm');
     expect(mm('springLength', 0.22262)).toBe('222.5 mm');
     expect(mm('reserveStroke', 0.02)).toBe('20.0 mm');
+    // Wear allowances are under a millimetre: to 0.05 mm, never to the steel rule's 0.5 mm
+    // (0.60 mm printed as 0.5 mm, or 0.80 mm as 1.0 mm, tells the fitter the wrong point).
+    expect(mm('wearToReadjust', 0.0006)).toBe('0.60 mm');
+    expect(mm('wearTorqueLost', 0.0008)).toBe('0.80 mm');
+    expect(mm('wear', 0.00103)).toBe('1.05 mm');
     // Angles in degrees to 1°; forces by their dimension.
     const deg = toDisplay(Math.PI / 3, 'angle', 'SI', undefined, settingPrecision('x', 'angle'));
     expect(deg.text).toBe('60 °');

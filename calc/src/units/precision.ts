@@ -63,7 +63,13 @@ export const SETTING_PRECISION: readonly { match: RegExp; finest: number; why: s
     why: 'a disc-spring stack is measured with a caliper, read to 0.05 mm; its whole set deflection is under 1 mm, so 0.1 mm would be too coarse',
   },
   {
-    match: /springLength|stroke|wear/i,
+    // Before the steel-rule rule: 'wearTorqueLost' must not print 0.80 mm as 1.0 mm.
+    match: /wear/i,
+    finest: 5e-5,
+    why: 'lining wear is read off the lining thickness with a caliper, to 0.05 mm; the wear allowances are under a millimetre, so 0.5 mm steps would print 0.60 mm as 0.5 mm',
+  },
+  {
+    match: /springLength|stroke/i,
     finest: 5e-4,
     why: 'spring length over its cups and thruster strokes are measured with a steel rule, to 0.5 mm',
   },
