@@ -75,7 +75,7 @@ export const headroomFormula = defineFormula({
 
 export const wornReserveFormula = defineFormula({
   id: 'reserve-stroke-worn',
-  label: 'Reserve stroke at fully worn lining',
+  label: 'Reserve stroke left after the lining wear w',
   symbol: 's_r,w',
   expression: 's_r0 - w * r_t',
   symbols: {
@@ -146,7 +146,11 @@ export interface ReleaseResult {
  *
  * Source: statics (virtual work); stroke terms common practice — the thruster maker's data governs.
  */
-export function releaseAndStroke(input: ReleaseInput, d?: Derivation): ReleaseResult {
+export function releaseAndStroke(
+  input: ReleaseInput,
+  d?: Derivation,
+  options?: { wearSteps?: boolean },
+): ReleaseResult {
   requireRange(input.clearance, 'clearance', { min: 0, exclusiveMin: true }, 'm');
   requireRange(input.springTravelRatio, 'springTravelRatio', { min: 0, exclusiveMin: true });
   requireRange(input.thrusterTravelRatio, 'thrusterTravelRatio', { min: 0, exclusiveMin: true });
@@ -179,12 +183,15 @@ export function releaseAndStroke(input: ReleaseInput, d?: Derivation): ReleaseRe
     s_r0: input.reserveStroke,
     s_w: workingStroke,
   });
-  const wornReserveStroke = compute(d, wornReserveFormula, {
+  // A sheet that prints the stroke–wear chain of its own records these two there: off here, they
+  // are computed without steps instead of printing the same value twice.
+  const dw = options?.wearSteps === false ? undefined : d;
+  const wornReserveStroke = compute(dw, wornReserveFormula, {
     s_r0: input.reserveStroke,
     w: input.wear,
     r_t: input.thrusterTravelRatio,
   });
-  const wearToReadjust = compute(d, wearToReadjustFormula, {
+  const wearToReadjust = compute(dw, wearToReadjustFormula, {
     s_r0: input.reserveStroke,
     s_min: input.minReserveStroke,
     r_t: input.thrusterTravelRatio,

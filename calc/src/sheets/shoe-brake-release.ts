@@ -35,6 +35,7 @@ export function shoeRelease(
       minReserveStroke: q.length(v.minReserveStroke),
     },
     d,
+    { wearSteps: false },
   );
   const ratioCrit = criterion(criteria, 'thrusterForceRatio');
   return {

@@ -106,6 +106,7 @@ export function shoeLining(
     q.length(wear),
     q.ratio(v.springTravelRatio),
     d,
+    { words: 'at the re-adjustment point', wearSymbol: 'w_adj' },
   );
   const Nw = shoeNormalForce(worn.force, q.ratio(v.leverRatio), q.ratio(v.linkageEfficiency), d, {
     id: 'shoe-normal-force-worn',

@@ -102,6 +102,7 @@ export function shoeMainSpring(
       id: 'spring-force-highest',
       label: 'Main spring force at the highest setting with the shoes lifted',
       symbol: 'F_s,max,rel',
+      names: { F_s: 'F_s,max' },
     },
   );
   const s = withSheetFields(() =>

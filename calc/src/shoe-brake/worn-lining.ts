@@ -19,7 +19,7 @@ export const springExtensionFormula = defineFormula({
 
 export const wornSpringForceFormula = defineFormula({
   id: 'worn-spring-force',
-  label: 'Spring force at fully worn lining',
+  label: 'Spring force after the wear w (before re-adjustment)',
   symbol: 'F_s,w',
   expression: 'F_s - k * dL',
   symbols: {
@@ -48,13 +48,28 @@ export function wornSpringForce(
   wear: Length,
   travelRatio: Ratio,
   d?: Derivation,
+  /** Where on the wear scale this is, for the printed steps: 'at the re-adjustment point', w_adj. */
+  point?: { words: string; wearSymbol: string },
 ): { extension: Length; force: Force } {
   requireRange(springForce, 'springForce', { min: 0, exclusiveMin: true }, 'N');
   requireRange(rate, 'springRate', { min: 0 }, 'N/m');
   requireRange(wear, 'wear', { min: 0 }, 'm');
   requireRange(travelRatio, 'travelRatio', { min: 0, exclusiveMin: true });
-  const extension = compute(d, springExtensionFormula, { w: wear, r_s: travelRatio });
-  const force = compute(d, wornSpringForceFormula, { F_s: springForce, k: rate, dL: extension });
+  const extension = compute(
+    d,
+    springExtensionFormula,
+    { w: wear, r_s: travelRatio },
+    point && {
+      label: `Spring extension caused by lining wear, ${point.words}`,
+      names: { w: point.wearSymbol },
+    },
+  );
+  const force = compute(
+    d,
+    wornSpringForceFormula,
+    { F_s: springForce, k: rate, dL: extension },
+    point && { label: `Spring force ${point.words}` },
+  );
   if (!(force > 0)) {
     throw new CalcInputError([
       {
