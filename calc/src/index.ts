@@ -107,6 +107,7 @@ export {
   evaluateTolerance,
   toleranceBounds,
   settingsWithTolerance,
+  settingTolerance,
   type ToleratedSetting,
 } from './field/evaluate-tolerance.js';
 export { toleranceText } from './field/tolerance-text.js';

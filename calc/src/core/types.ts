@@ -139,6 +139,11 @@ export interface FieldSetting {
   unit: string;
   dimension: Dimension;
   note?: string;
+  /**
+   * The tolerance this sheet's inputs set for the setting (a declared back-off tolerance), which
+   * replaces the one its field card declares; absent: the card's (see `settingTolerance`).
+   */
+  tolerance?: FieldTolerance;
 }
 
 /** One input as the core used it: what was entered, and its value in SI. */

@@ -89,14 +89,25 @@ export function evaluateTolerance(
 }
 
 /** A field setting of an evaluated sheet with the tolerance its field card declares, if any. */
-export interface ToleratedSetting extends FieldSetting {
+export interface ToleratedSetting extends Omit<FieldSetting, 'tolerance'> {
   tolerance: FieldTolerance | null;
 }
 
-/** The field settings of an evaluation with their declared tolerances, in the card's order. */
+/**
+ * The tolerance a field setting is measured against: the one the sheet's inputs set for it, else
+ * the one its field card declares, else none.
+ */
+export function settingTolerance(
+  setting: FieldSetting,
+  card: FieldCardLayout | undefined,
+): FieldTolerance | null {
+  return setting.tolerance ?? card?.settings[setting.key]?.tolerance ?? null;
+}
+
+/** The field settings of an evaluation with their tolerances (`settingTolerance`), in order. */
 export function settingsWithTolerance(
   settings: readonly FieldSetting[],
   card: FieldCardLayout,
 ): ToleratedSetting[] {
-  return settings.map((s) => ({ ...s, tolerance: card.settings[s.key]?.tolerance ?? null }));
+  return settings.map((s) => ({ ...s, tolerance: settingTolerance(s, card) }));
 }

@@ -54,7 +54,7 @@ describe('disc springs on the shoe sheets', () => {
 
   it('prints the tolerance and the never-tighten rule on the back-off setting', () => {
     const n = demo.fieldSettings.find((f) => f.key === 'equaliserBackOff')!.note!;
-    expect(n).toMatch(/±30°/);
+    expect(n).toMatch(/back off up to 30° further/);
     expect(n).toMatch(/never tighten/);
   });
 
@@ -62,5 +62,34 @@ describe('disc springs on the shoe sheets', () => {
     expect(() => hoist.evaluate({ ...demoInputs(hoist), discFrictionEdge: 0.5 }, crane)).toThrow(
       /discFrictionEdge/,
     );
+  });
+});
+
+describe('the back-off tolerance the card measures against', () => {
+  const demo = hoist.evaluate(demoInputs(hoist), crane);
+  const setting = (key: string) => demo.fieldSettings.find((f) => f.key === key);
+
+  it("is the sheet's declared tolerance, one-sided (holder 60° +15°, equaliser 240° +30°)", () => {
+    const deg = Math.PI / 180;
+    for (const [key, plus] of [
+      ['holderBackOff', 15],
+      ['equaliserBackOff', 30],
+    ] as const) {
+      const band = setting(key)?.tolerance?.band;
+      expect(band?.kind).toBe('absolute');
+      if (band?.kind !== 'absolute') continue;
+      expect(band.minus).toBe(0);
+      expect(nearlyEqual(band.plus, plus * deg, 1e-12)).toBe(true);
+      expect(setting(key)?.tolerance?.direction).toBe('loosen');
+    }
+  });
+
+  it('goes with the input: a 20° tolerance gives a +20° band', () => {
+    const e = hoist.evaluate(
+      { ...demoInputs(hoist), equaliserBackOffTolerance: { value: 20, unit: 'deg' } },
+      crane,
+    );
+    const band = e.fieldSettings.find((f) => f.key === 'equaliserBackOff')?.tolerance?.band;
+    expect(band?.kind === 'absolute' && Math.round((band.plus * 180) / Math.PI)).toBe(20);
   });
 });

@@ -4,6 +4,7 @@ import type { Derivation } from '../core/step.js';
 import { deriveStackSet } from '../disc-springs/stack-derivation.js';
 import { WORKING_BAND, workingBandWarning } from '../disc-springs/curve.js';
 import type { DiscStack } from '../disc-springs/stack.js';
+import { BACK_OFF_ANGLE } from '../field/tolerances.js';
 import { makeCheck } from './checks.js';
 import { sigmaOMFlatCheck } from './disc-spring-stack-output.js';
 import { SHOE_STACK_TITLES } from './field-card-layouts.js';
@@ -94,7 +95,14 @@ export function evaluateShoeDiscSprings(
         value: v[`${p}BackOff`],
         unit: 'rad',
         dimension: 'angle',
-        note: `${PRACTICE[p]}. Tolerance ±${fmtDeg(tol)}°. To line up a slot, back off further within the tolerance — never tighten.`,
+        note: `${PRACTICE[p]}. To line up a slot, back off up to ${fmtDeg(tol)}° further — never tighten.`,
+        // The card's band is the sheet's declared tolerance, one-sided: the nut only turns back.
+        // The sheet also checks the stack at −tolerance, as margin for reading the angle.
+        tolerance: {
+          ...BACK_OFF_ANGLE,
+          band: { kind: 'absolute', minus: 0, plus: tol },
+          source: 'declared input (sheet): back-off tolerance; one-sided: common practice',
+        },
       },
       {
         key: `${p}Preload`,

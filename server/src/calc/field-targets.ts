@@ -1,6 +1,7 @@
 import {
   evaluateTolerance,
   getSheetType,
+  settingTolerance,
   type Dimension,
   type FieldSetting,
   type SheetEvaluation,
@@ -46,7 +47,7 @@ export function fieldTargets(sheetType: string, evaluation: unknown): FieldTarge
       ...(p?.stack ? { stack: p.stack } : {}),
       ...(p?.role ? { role: p.role } : {}),
       ...(s.note ? { note: s.note } : {}),
-      tolerance: p?.tolerance ?? null,
+      tolerance: settingTolerance(s, card),
     };
   });
 }

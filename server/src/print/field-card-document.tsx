@@ -1,5 +1,6 @@
 import {
   getSheetType,
+  settingTolerance,
   settingPrecision,
   toSI,
   toleranceText,
@@ -158,7 +159,10 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
   const ev = sheet.evaluation;
   const g = ev ? groupFieldSettings(ev) : null;
   const card = getSheetType(sheet.sheetType.id)?.fieldCard;
-  const tolerance: Tolerances = (key) => card?.settings[key]?.tolerance;
+  const tolerance: Tolerances = (key) => {
+    const s = ev?.fieldSettings.find((f) => f.key === key);
+    return (s ? settingTolerance(s, card) : card?.settings[key]?.tolerance) ?? undefined;
+  };
   return (
     <Document
       title={`${sheet.documentNumber} rev ${sheet.revision.label} — field setting card`}

@@ -68,3 +68,19 @@ describe.each(TYPES)('%s, real evaluation', (sheetTypeId) => {
     expect(card.text).toContain('Set by');
   });
 });
+
+describe('hoist field card, real evaluation', () => {
+  it(
+    "prints each stack's back-off tolerance as the sheet declares it, one-sided",
+    async () => {
+      ensurePoppler();
+      const sheet = realPrintable({ sheetTypeId: 'hoist-shoe-brake', state: 'approved' });
+      const card = inspectPdf(await renderFieldCardPdf(sheet), 'real-hoist-card-tolerance');
+      const text = card.text.replace(/\s+/g, ' ');
+      // Demo: holder 60° with 15° declared, equaliser 240° with 30° declared.
+      expect(text).toMatch(/Shoe holder.*?Tolerance −0 ?° \/ \+15 ?°/);
+      expect(text).toMatch(/Equaliser.*?Tolerance −0 ?° \/ \+30 ?°/);
+    },
+    SLOW,
+  );
+});

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import type { ResolvedInput, SheetEvaluation, SheetInputs } from '@holdfast/calc';
 // The dependency-free ids module: the API schemas derive from calc without loading the core.
 import { DIMENSION_IDS, SHEET_TYPE_IDS } from '@holdfast/calc/ids';
+import { fieldToleranceSchema } from '../field-records/tolerance.schema.js';
 
 /** Sheet types of the calc registry, taken from calc. */
 export const sheetTypeIds = SHEET_TYPE_IDS;
@@ -122,6 +123,7 @@ export const sheetEvaluationSchema: z.ZodType<SheetEvaluation> = z.object({
       unit: z.string(),
       dimension,
       note: z.string().optional(),
+      tolerance: fieldToleranceSchema.optional(),
     }),
   ),
   tables: z.array(
