@@ -103,7 +103,11 @@ export interface StrokeWearResult {
  * @example strokeWearChain({ nominalStroke: length(0.05), reserveStroke: length(0.02),
  *   minReserveStroke: length(0.005), thrusterTravelRatio: ratio(25), ... }).clearance // 1.2 mm
  */
-export function strokeWearChain(input: StrokeWearInput, d?: Derivation): StrokeWearResult {
+export function strokeWearChain(
+  input: StrokeWearInput,
+  d?: Derivation,
+  options?: { torqueStep?: boolean },
+): StrokeWearResult {
   const pos = { min: 0, exclusiveMin: true };
   requireRange(input.nominalStroke, 'nominalStroke', pos, 'm');
   requireRange(input.reserveStroke, 'reserveStroke', { min: 0, max: input.nominalStroke }, 'm');
@@ -133,13 +137,19 @@ export function strokeWearChain(input: StrokeWearInput, d?: Derivation): StrokeW
       { field: 'springForce', message: 'the spring goes slack before the re-adjustment point' },
     ]);
   }
-  const torqueAtReadjust = compute(d, torqueAtWearFormula, {
-    M_0: input.torqueNew,
-    F_s: input.springForce,
-    k: input.springRate,
-    r_s: input.springTravelRatio,
-    w: Math.max(0, wearAtReadjust),
-  });
+  // A sheet that derives the worn torque step by step (worn spring force, normal force, torque)
+  // computes this value without a step rather than print the same torque twice.
+  const torqueAtReadjust = compute(
+    options?.torqueStep === false ? undefined : d,
+    torqueAtWearFormula,
+    {
+      M_0: input.torqueNew,
+      F_s: input.springForce,
+      k: input.springRate,
+      r_s: input.springTravelRatio,
+      w: Math.max(0, wearAtReadjust),
+    },
+  );
   const torqueAtWear = (w: number): number => {
     if (!(w < wearReserveUsed)) return 0;
     const F = input.springForce - kr * Math.max(0, w);

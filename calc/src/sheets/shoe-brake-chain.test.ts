@@ -71,6 +71,21 @@ describe('stroke–wear–setting chain on the shoe sheets', () => {
     expect(check(e, 'torque-drum-wear-limit')!.pass).toBe(false);
   });
 
+  it('stops and holds with the lowest torque in service (drum at its wear limit), as the required-torque check does', () => {
+    const lowest = result(demo, 'torque-drum-limit')!;
+    expect(check(demo, 'stops-load')!.value).toBe(lowest);
+    expect(check(demo, 'each-brake-holds-alone')!.value).toBe(lowest);
+    expect(check(demo, 'torque-drum-wear-limit')!.value).toBe(lowest);
+    // The deceleration step is worked out with that torque.
+    const decel = demo.derivation.find((s) => s.id === 'brake-deceleration')!;
+    expect(decel.substituted).toContain('276.5 N·m');
+    // A larger drum wear allowance lengthens the stop.
+    const worn = hoist.evaluate({ ...demoInputs(hoist), drumWearAllowance: '8 mm' }, crane);
+    expect(check(worn, 'stopping-distance')!.value).toBeGreaterThan(
+      check(demo, 'stopping-distance')!.value,
+    );
+  });
+
   it('a minimum lining thickness at or above the new thickness is refused on its field', () => {
     expect(() =>
       hoist.evaluate({ ...demoInputs(hoist), liningMinThickness: '8 mm' }, crane),

@@ -69,6 +69,7 @@ export function shoeChain(v: ShoeInputs, b: ShoeTorques, d: Derivation): ShoeCha
       torqueNew: b.min,
     },
     d,
+    { torqueStep: false },
   );
   const checks = chain.checks.map((c) =>
     makeCheck({
@@ -97,7 +98,7 @@ export function shoeWearLimits(
   wearAtReadjust: number,
   required: { value: number; source: string },
   d: Derivation,
-): { checks: CheckResult[]; warnings: string[] } {
+): { lowestTorque: q.Torque; checks: CheckResult[]; warnings: string[] } {
   d.section = 'lining';
   const wL = compute(d, liningWearAllowanceFormula, {
     t: v.liningThickness,
@@ -110,6 +111,7 @@ export function shoeWearLimits(
   });
   const adjustments = wearAtReadjust > 0 ? Math.floor(wL / wearAtReadjust) : 0;
   return {
+    lowestTorque: M,
     checks: [
       makeCheck({
         id: 'torque-drum-wear-limit',

@@ -47,7 +47,7 @@ export interface ShoeOutcome {
   torquePerMu: number;
   wornFraction: number;
   torqueMaxNew: number;
-  /** Torque at μ min at the re-adjustment point (the sheet's worn case). */
+  /** Lowest torque in service: μ min at the re-adjustment point, drum at its wear limit. */
   torqueMinWorn: number;
   /** Torque at μ max with new lining and the spring at the top of its adjustable range. */
   torqueMaxTopOfRange: number;
@@ -96,8 +96,10 @@ export function evaluateShoeBrake(
     { value: duty.requiredTorque, source: duty.requiredSource },
     d,
   );
-  const stop = shoeStop(duty, l.wornMin, d);
-  const stops = shoeStopsCheck(duty, l.wornMin, stop);
+  // The stop is worked out with the lowest torque the brake gives in service (μ min, re-adjustment
+  // point, drum at its wear limit), the same torque the required-torque check holds to.
+  const stop = shoeStop(duty, limits.lowestTorque, d);
+  const stops = shoeStopsCheck(duty, limits.lowestTorque, stop);
   out.checks.push(
     ...shoeTorqueChecks(v, duty, b, l, lining),
     ...limits.checks,
@@ -156,7 +158,7 @@ export function evaluateShoeBrake(
     torquePerMu,
     wornFraction,
     torqueMaxNew: b.max,
-    torqueMinWorn: l.wornMin,
+    torqueMinWorn: limits.lowestTorque,
     torqueMaxTopOfRange: (b.max * v.springForceMax) / b.springForce,
     stopMinWorn: stop,
   };

@@ -37,7 +37,7 @@ export function shoeStopsCheck(
     check: makeCheck({
       id: 'stops-load',
       section: 'stopping',
-      label: `Brake torque (μ min, worn) exceeds the driving torque while ${duty.stopCase}`,
+      label: `Lowest brake torque in service exceeds the driving torque while ${duty.stopCase}`,
       value: wornMinTorque,
       limit: duty.driveTorque,
       kind: 'min',
