@@ -26,7 +26,13 @@ export {
   normaliseUnitText,
   type UnitConversion,
 } from './units/conversion.js';
-export { toDisplay, displayUnitFor, type UnitSystem, type DisplayValue } from './units/display.js';
+export {
+  toDisplay,
+  displayUnitFor,
+  withUnit,
+  type UnitSystem,
+  type DisplayValue,
+} from './units/display.js';
 export { formatNumber, formatForDerivation } from './units/format.js';
 export {
   PRECISION,

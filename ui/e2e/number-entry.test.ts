@@ -76,7 +76,7 @@ describe.skipIf(skipReason !== null)('number entry, typed key by key', () => {
 
     const angle = await typeInto(page, ANGLE, '200');
     await page
-      .getByText(/Must be at most 170 °\./)
+      .getByText(/Must be at most 170°\./)
       .first()
       .waitFor();
     await expect(page.getByText(/2\.96705/).count()).resolves.toBe(0);

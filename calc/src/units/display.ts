@@ -37,7 +37,7 @@ export function toDisplay(
     typeof precision === 'number'
       ? formatNumber(value, precision)
       : formatWithPrecision(value, c.factor, c.label, precision);
-  const text = c.label ? `${number} ${c.label}` : number;
+  const text = withUnit(number, c.label);
   return { value, unit: c.unit, label: c.label, text };
 }
 
@@ -45,4 +45,13 @@ export function toDisplay(
 export function displayUnitFor(dimension: Dimension, system: UnitSystem): string {
   const info = DIMENSIONS[dimension];
   return system === 'US' ? info.displayUS : info.displaySI;
+}
+
+/**
+ * A printed number with its unit label: '12.4 kN', '20 °C', but '60°' — the degree of arc takes
+ * no space (SI Brochure, 9th edition, 5.4.3); a number without a label stays bare.
+ */
+export function withUnit(number: string, label: string): string {
+  if (!label) return number;
+  return label === '°' ? number + label : `${number} ${label}`;
 }

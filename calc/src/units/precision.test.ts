@@ -63,7 +63,7 @@ describe('printing precision per quantity', () => {
     expect(mm('wear', 0.00103)).toBe('1.05 mm');
     // Angles in degrees to 1°; forces by their dimension.
     const deg = toDisplay(Math.PI / 3, 'angle', 'SI', undefined, settingPrecision('x', 'angle'));
-    expect(deg.text).toBe('60 °');
+    expect(deg.text).toBe('60°');
     expect(settingPrecision('holderPreload', 'force')).toBe(PRECISION.force);
   });
 

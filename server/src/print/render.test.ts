@@ -199,8 +199,8 @@ describe('field setting card PDF', () => {
     expect(t).toMatch(/Shoe clearance each side 0\.80 mm/);
     expect(t).toContain('Disc-spring stacks Shoe holder 1. Tighten the nut');
     expect(t).toContain('Tighten the nut until the disc-spring stack is just flat');
-    expect(t).toMatch(/Back off the nut by 60 ° and lock it/);
-    expect(t).toMatch(/Back off the nut by 180 ° and lock it/);
+    expect(t).toMatch(/Back off the nut by 60° and lock it/);
+    expect(t).toMatch(/Back off the nut by 180° and lock it/);
     expect(t).toMatch(/preload of about 3100 N/);
     expect(t).toContain('no shoe drags');
     expect(t).toContain('Set and release the brake at least five times');

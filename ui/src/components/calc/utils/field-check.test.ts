@@ -34,10 +34,10 @@ describe('checkField', () => {
   it('speaks bounds in the unit the engineer typed, to 4 significant figures', () => {
     const deg = unitLabel('angle', 'deg');
     expect(checkField(angle, { value: 200, unit: 'deg' }, 'point')).toBe(
-      `Must be at most 170 ${deg}.`,
+      `Must be at most 170${deg}.`,
     );
     expect(checkField(angle, { value: -5, unit: 'deg' }, 'point')).toBe(
-      `Must be at least 0 ${deg}.`,
+      `Must be at least 0${deg}.`,
     );
     expect(checkField(angle, { value: 120, unit: 'deg' }, 'point')).toBeNull();
   });

@@ -1,11 +1,11 @@
-import { fromSI, toSI, type FieldDefinition, type InputValue } from '@holdfast/calc';
+import { fromSI, toSI, withUnit, type FieldDefinition, type InputValue } from '@holdfast/calc';
 import { messageNumber, readNumber, type NumberFormat } from './number-entry';
 import { isQuantity, unitLabel } from './units';
 
 /**
  * The message for one field, in the words and the unit the engineer is looking at, or null when
  * the field holds a usable value. The calc core checks the same bounds in SI for the server and
- * the printout; this speaks them in the field's own unit ("at most 170 °", not 2.967 rad).
+ * the printout; this speaks them in the field's own unit ("at most 170°", not 2.967 rad).
  */
 export function checkField(
   field: FieldDefinition,
@@ -54,7 +54,7 @@ function rangeMessage(
     }
   }
   const label = quantity ? unitLabel(dimension, unit) : '';
-  const say = (x: number) => `${messageNumber(shown(x), format)}${label ? ` ${label}` : ''}`;
+  const say = (x: number) => withUnit(messageNumber(shown(x), format), label);
   const { min, max, exclusiveMin } = field;
   if (min !== undefined && (exclusiveMin ? !(si > min) : !(si >= min))) {
     return `Must be ${exclusiveMin ? 'more than' : 'at least'} ${say(min)}.`;

@@ -5,6 +5,7 @@ import {
   settingPrecision,
   toDisplay,
   toleranceText,
+  withUnit,
   type Dimension,
   type InputValue,
   type ToleranceVerdict,
@@ -29,7 +30,7 @@ function deviationText(target: FieldTarget, verdict: ToleranceVerdict): string {
   const perSI = toDisplay(1, dim, 'SI').value - toDisplay(0, dim, 'SI').value;
   const p = settingPrecision(target.settingKey, dim);
   const sign = deviation > 0 ? '+' : deviation < 0 ? '−' : '±';
-  return `${sign}${formatWithPrecision(Math.abs(deviation), 1 / perSI, label, p)} ${label}`.trim();
+  return withUnit(`${sign}${formatWithPrecision(Math.abs(deviation), 1 / perSI, label, p)}`, label);
 }
 
 function VerdictBadge({ target, value }: { target: FieldTarget; value: InputValue | undefined }) {
