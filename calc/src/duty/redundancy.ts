@@ -70,7 +70,7 @@ export interface RedundancyResult {
 /**
  * Redundancy of the holding brakes of a hoisting unit. For hot metal with power control braking
  * the rule asks for at least two holding brakes; with two, each must hold 100 % of the full-load
- * hoisting torque. Checked here: the number installed; each brake alone (μ min, worn) holds 100 %
+ * hoisting torque. Checked here: the number installed; each brake alone (its lowest torque in service) holds 100 %
  * of the hoisting torque; each brake alone stops the load from the highest lowering speed after
  * its set delay (torque above the back-driving torque, and within the allowed distance when
  * given); all brakes together at μ max with springs at the top of their range stay within the
@@ -119,7 +119,7 @@ export function holdingBrakeRedundancy(input: RedundancyInput, d?: Derivation): 
       checks.push(
         limitCheck({
           id: `brake-${n}-holds-alone`,
-          label: `Brake ${n} alone (μ min, worn) ≥ 100 % of the full-load hoisting torque`,
+          label: `Brake ${n} alone (lowest torque in service) ≥ 100 % of the full-load hoisting torque`,
           value: b.torqueMinWorn,
           limit: input.hoistingTorque,
           dimension: 'torque',
