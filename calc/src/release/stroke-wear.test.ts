@@ -42,6 +42,14 @@ describe('strokeWearChain', () => {
     expect(d.find('clearance-from-stroke')!.formula).toBe('ε = (s_n − s_r,0) / r_t');
   });
 
+  it('relaxation lowers every worn torque from F_s·(1 − ρ_s), and not the new-lining torque', () => {
+    const r = strokeWearChain({ ...demo, relaxation: q.ratio(0.02) });
+    // F at 0.6 mm = 1100·0.98 − 40·5·0.6 = 958 N
+    close(r.torqueAtReadjust, (332.7737 * 958) / 1100, 1e-12);
+    close(r.torqueAtWear(0), 332.7737 * 0.98, 1e-12);
+    expect(r.torqueAtWear(0.8e-3)).toBe(0);
+  });
+
   it('the chart points show the drop to zero as a vertical step at w_0', () => {
     const r = strokeWearChain(demo);
     const pts = torqueWearPoints(r, 1e-3, 10);

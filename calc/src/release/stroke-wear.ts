@@ -47,17 +47,18 @@ export const torqueAtWearFormula = defineFormula({
   id: 'torque-at-readjust',
   label: 'Brake torque at the re-adjustment point',
   symbol: 'M_b,adj',
-  expression: 'M_0 * (F_s - k * r_s * w) / F_s',
+  expression: 'M_0 * (F_s * (1 - rho) - k * r_s * w) / F_s',
   symbols: {
     M_0: { text: 'M_b,0', dimension: 'torque' },
     F_s: { text: 'F_s', dimension: 'force' },
+    rho: { text: 'ρ_s', ...R },
     k: { text: 'k_s', dimension: 'stiffness' },
     r_s: { text: 'r_s', ...R },
     w: { text: 'w_adj', ...L },
   },
   dimension: 'torque',
   reference:
-    'spring extension from wear through the travel ratio: F = F_s − k·r_s·w; torque ∝ spring force (statics)',
+    'spring extension from wear through the travel ratio: F = F_s·(1 − ρ_s) − k·r_s·w, ρ_s the relaxation in service; torque ∝ spring force (statics)',
 });
 
 export interface StrokeWearInput {
@@ -76,6 +77,8 @@ export interface StrokeWearInput {
   springTravelRatio: Ratio;
   /** Brake torque with new lining at the friction coefficient of interest (μ min for the check), N·m. */
   torqueNew: Torque;
+  /** Share of the set force lost to spring relaxation in service, ρ_s in [0, 1) (default 0). */
+  relaxation?: Ratio;
   /** Required torque, N·m (optional: adds the torque check at the re-adjustment point). */
   requiredTorque?: Torque;
 }
@@ -132,7 +135,12 @@ export function strokeWearChain(
     r_t,
   });
   const kr = input.springRate * input.springTravelRatio;
-  if (!(input.springForce - kr * Math.max(0, wearAtReadjust) > 0)) {
+  const rho = input.relaxation ?? 0;
+  if (input.relaxation !== undefined)
+    requireRange(input.relaxation, 'springRelaxation', { min: 0, max: 1, exclusiveMax: true });
+  // The spring's force in service, after relaxation: where every worn case starts from.
+  const inService = input.springForce * (1 - rho);
+  if (!(inService - kr * Math.max(0, wearAtReadjust) > 0)) {
     throw new CalcInputError([
       { field: 'springForce', message: 'the spring goes slack before the re-adjustment point' },
     ]);
@@ -145,6 +153,7 @@ export function strokeWearChain(
     {
       M_0: input.torqueNew,
       F_s: input.springForce,
+      rho,
       k: input.springRate,
       r_s: input.springTravelRatio,
       w: Math.max(0, wearAtReadjust),
@@ -152,7 +161,7 @@ export function strokeWearChain(
   );
   const torqueAtWear = (w: number): number => {
     if (!(w < wearReserveUsed)) return 0;
-    const F = input.springForce - kr * Math.max(0, w);
+    const F = inService - kr * Math.max(0, w);
     return F > 0 ? (input.torqueNew * F) / input.springForce : 0;
   };
   const checks: LimitCheck[] = [

@@ -30,8 +30,10 @@ describe('stroke–wear–setting chain on the shoe sheets', () => {
   it('the worn case is the re-adjustment point (20 − 5) mm ÷ 25 = 0.6 mm; torque is lost at 0.8 mm', () => {
     expect(nearlyEqual(result(demo, 'wear-readjust-point')!, 0.0006, 1e-12)).toBe(true);
     expect(nearlyEqual(result(demo, 'wear-reserve-used')!, 0.0008, 1e-12)).toBe(true);
-    // F_s,w = 1100 − 40 N/mm · 5 · 0.6 mm = 980 N
-    expect(nearlyEqual(result(demo, 'worn-spring-force')!, 980, 1e-9)).toBe(true);
+    // F_s,r = 1150 N · (1 − 0.02) = 1127 N; F_s,w = 1127 − 40 N/mm · 5 · 0.6 mm = 1007 N
+    const relaxed = demo.derivation.find((x) => x.id === 'spring-force-relaxed')!;
+    expect(nearlyEqual(relaxed.value, 1127, 1e-9)).toBe(true);
+    expect(nearlyEqual(result(demo, 'worn-spring-force')!, 1007, 1e-9)).toBe(true);
     expect(demo.checks.map((c) => c.label).join(' ')).not.toMatch(/fully worn/);
   });
 
@@ -78,7 +80,7 @@ describe('stroke–wear–setting chain on the shoe sheets', () => {
     expect(check(demo, 'torque-drum-wear-limit')!.value).toBe(lowest);
     // The deceleration step is worked out with that torque.
     const decel = demo.derivation.find((s) => s.id === 'brake-deceleration')!;
-    expect(decel.substituted).toContain('276.5 N·m');
+    expect(decel.substituted).toContain(`${lowest.toFixed(1)} N·m`);
     // A larger drum wear allowance lengthens the stop.
     const worn = hoist.evaluate({ ...demoInputs(hoist), drumWearAllowance: '8 mm' }, crane);
     expect(check(worn, 'stopping-distance')!.value).toBeGreaterThan(
@@ -220,5 +222,49 @@ describe('main spring, thruster extremes and test requirements', () => {
     });
     expect(load).toMatch(/at most 12500 kg/);
     expect(torque).toMatch(/apply 101 N·m/);
+  });
+});
+
+describe('spring relaxation in service', () => {
+  const base = demoInputs(hoist);
+  const none: Record<string, unknown> = { ...base };
+  delete none.springRelaxation;
+  const demo = hoist.evaluate(base, crane);
+  const without = hoist.evaluate(none as never, crane);
+  const step = (e: ReturnType<typeof hoist.evaluate>, id: string) =>
+    e.derivation.find((s) => s.id === id);
+
+  it('starts every worn case from F_s·(1 − ρ_s): the worn force falls by ρ_s·F_s exactly', () => {
+    const F = 1150;
+    const drop = step(without, 'worn-spring-force')!.value - step(demo, 'worn-spring-force')!.value;
+    expect(nearlyEqual(drop, 0.02 * F, 1e-9)).toBe(true);
+    expect(step(demo, 'worn-spring-force')!.formula).toBe('F_s,w = F_s,r − k_s · ΔL_s');
+    // The chart and the setting table come from the same relaxed force as the printed steps.
+    const ch = demo.charts.find((c) => c.id === 'torque-wear')!;
+    const min = ch.series.find((s) => s.name === 'μ min')!.points;
+    const atAdj = min.find((p) => nearlyEqual(p.x, 0.0006, 1e-9))!;
+    expect(nearlyEqual(atAdj.y, result(demo, 'torque-worn-min')!, 1e-6)).toBe(true);
+  });
+
+  it('keeps the full set force for the new-lining and drive-train torques', () => {
+    expect(result(demo, 'torque-max')).toBe(result(without, 'torque-max'));
+    expect(check(demo, 'torque-max-friction')!.value).toBe(
+      check(without, 'torque-max-friction')!.value,
+    );
+  });
+
+  it('raises the low end of the permitted band by 1/(1 − ρ_s)', () => {
+    const low = (e: typeof demo) => Number(/band (\d+)/.exec(e.tables[0]!.title)![1]);
+    expect(low(demo)).toBeGreaterThan(low(without));
+  });
+
+  it('says so when left empty, and refuses a share above 0.3 on its field', () => {
+    expect(without.warnings.some((w) => /Spring relaxation not entered/.test(w))).toBe(true);
+    expect(demo.warnings.some((w) => /Spring relaxation not entered/.test(w))).toBe(false);
+    expect(() => hoist.evaluate({ ...base, springRelaxation: 0.5 }, crane)).toThrow(
+      expect.objectContaining({
+        fields: [expect.objectContaining({ field: 'springRelaxation' })],
+      }),
+    );
   });
 });

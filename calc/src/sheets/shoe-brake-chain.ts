@@ -67,6 +67,7 @@ export function shoeChain(v: ShoeInputs, b: ShoeTorques, d: Derivation): ShoeCha
       springRate: q.stiffness(v.springRate),
       springTravelRatio: q.ratio(v.springTravelRatio),
       torqueNew: b.min,
+      relaxation: v.springRelaxation === undefined ? undefined : q.ratio(v.springRelaxation),
     },
     d,
     { torqueStep: false },

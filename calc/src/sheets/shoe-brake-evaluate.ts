@@ -110,6 +110,11 @@ export function evaluateShoeBrake(
     ...shoeOverspeed(duty, stop, d),
   );
   out.warnings.push(...limits.warnings);
+  if (v.springRelaxation === undefined) {
+    out.warnings.push(
+      "Spring relaxation not entered: the worn torques, the stop and the setting band take the spring at its full set force. Enter the spring maker's figure for the service temperature.",
+    );
+  }
   out.charts.push(stops.chart);
   if (stop.stops) {
     const heat = shoeStopDistanceAndHeat(v, duty, stop, lining, d);

@@ -43,7 +43,7 @@ export const BRAKE_FIELDS = [
     ],
     "Short shoe and pivoted symmetrical long shoe per Budynas & Nisbett, Shigley's MED 8th ed., §16-2 and §16-4. The long shoe gives more torque (about 6 % at 70°): use the short shoe for the required torque and the stop; the drive-train check always takes the higher of the two.",
   ),
-  qty(B, 'springForce', 'Main spring force as set (new lining)', 'F_s', 'force', 1100, 'N', 'lbf', {
+  qty(B, 'springForce', 'Main spring force as set (new lining)', 'F_s', 'force', 1150, 'N', 'lbf', {
     min: 0,
     exclusiveMin: true,
   }),
@@ -76,6 +76,19 @@ export const BRAKE_FIELDS = [
     'N',
     'lbf',
     { min: 0, exclusiveMin: true },
+  ),
+  num(
+    B,
+    'springRelaxation',
+    'Spring force lost to relaxation in service (fraction of the set force)',
+    'ρ_s',
+    0.02,
+    {
+      min: 0,
+      max: 0.3,
+      required: false,
+      help: "Spring maker's data for the spring's service temperature and stress (for example 0.02 = 2 %). It lowers the torque of the worn cases, the stop and the setting band; the new-lining and drive-train torques keep the full force. Left empty, the sheet allows for none and says so.",
+    },
   ),
   num(B, 'leverRatio', 'Lever ratio (shoe normal force ÷ spring force, ideal)', 'i', 2.5, {
     min: 0,

@@ -125,6 +125,7 @@ export function shoeSettings(
   if (lim.high > lim.low) {
     const minPerN = b.min / Fs;
     const loss = v.springRate * v.springTravelRatio * chain.wearAtReadjust;
+    const kept = 1 - (v.springRelaxation ?? 0);
     rows = settingTable(
       lim.low,
       lim.high,
@@ -133,7 +134,7 @@ export function shoeSettings(
       b.nominal / Fs,
       minPerN,
       11,
-    ).map((r) => ({ ...r, torqueMinWorn: Math.max(0, r.springForce - loss) * minPerN }));
+    ).map((r) => ({ ...r, torqueMinWorn: Math.max(0, r.springForce * kept - loss) * minPerN }));
   } else {
     warnings.push(
       'No spring setting in the adjustable range gives the required torque at μ min on the worn lining and drum while staying within the drive-train rating at μ max: the setting table is empty.',
@@ -163,7 +164,10 @@ export function shoeSettings(
         { key: 'torqueMin', label: 'Torque at μ min', unit: 'N m', dimension: 'torque' },
         {
           key: 'torqueMinWorn',
-          label: 'Torque at μ min, worn to re-adjust',
+          label:
+            v.springRelaxation === undefined
+              ? 'Torque at μ min, worn to re-adjust'
+              : 'Torque at μ min, worn to re-adjust, spring relaxed',
           unit: 'N m',
           dimension: 'torque',
         },
@@ -223,7 +227,11 @@ export function permittedBand(
   const Fs = b.springForce;
   const loss = v.springRate * v.springTravelRatio * chain.wearAtReadjust;
   const minPerN = ((b.min / Fs) * (v.drumDiameter - v.drumWearAllowance)) / v.drumDiameter;
-  const low = Math.max(v.springForceMin, band.required / minPerN + loss);
+  // In service the spring keeps (1 − ρ_s) of its set force before wear takes its share.
+  const low = Math.max(
+    v.springForceMin,
+    (band.required / minPerN + loss) / (1 - (v.springRelaxation ?? 0)),
+  );
   const high = Math.min(
     v.springForceMax,
     v.maxBrakeTorque / ((b.max / Fs) * Math.max(1, band.brakesOnTrain)),

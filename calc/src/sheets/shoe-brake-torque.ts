@@ -106,7 +106,10 @@ export function shoeLining(
     q.length(wear),
     q.ratio(v.springTravelRatio),
     d,
-    { words: 'at the re-adjustment point', wearSymbol: 'w_adj' },
+    {
+      point: { words: 'at the re-adjustment point', wearSymbol: 'w_adj' },
+      relaxation: v.springRelaxation === undefined ? undefined : q.ratio(v.springRelaxation),
+    },
   );
   const Nw = shoeNormalForce(worn.force, q.ratio(v.leverRatio), q.ratio(v.linkageEfficiency), d, {
     id: 'shoe-normal-force-worn',

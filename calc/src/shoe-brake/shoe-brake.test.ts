@@ -107,6 +107,22 @@ describe('worn lining', () => {
     close(r.force, 4000, 1e-12);
     close(wornTorqueFraction(5000, 100_000, 0.002, 5), 0.8, 1e-12);
   });
+  it('with relaxation ρ_s the spring starts from F_s·(1 − ρ_s): 5000·0.97 − 1000 = 3850 N', () => {
+    const d = new Derivation('lining');
+    const r = wornSpringForce(force(5000), stiffness(100_000), length(0.002), ratio(5), d, {
+      relaxation: ratio(0.03),
+    });
+    close(r.force, 3850, 1e-12);
+    expect(d.find('spring-force-relaxed')!.substituted).toBe('F_s,r = 5000 N · (1 − 0.03)');
+    expect(d.find('worn-spring-force')!.formula).toBe('F_s,w = F_s,r − k_s · ΔL_s');
+    expect(() =>
+      wornSpringForce(force(5000), stiffness(100_000), length(0.002), ratio(5), undefined, {
+        relaxation: ratio(1),
+      }),
+    ).toThrow(
+      expect.objectContaining({ fields: [expect.objectContaining({ field: 'springRelaxation' })] }),
+    );
+  });
   it('a spring that would go slack is reported on the wear field', () => {
     try {
       wornSpringForce(force(5000), stiffness(100_000), length(0.02), ratio(5));

@@ -17,6 +17,19 @@ export const springExtensionFormula = defineFormula({
   reference: REF.wear,
 });
 
+export const relaxedSpringForceFormula = defineFormula({
+  id: 'spring-force-relaxed',
+  label: 'Spring force in service, after relaxation',
+  symbol: 'F_s,r',
+  expression: 'F_s * (1 - rho)',
+  symbols: {
+    F_s: { text: 'F_s', dimension: 'force' },
+    rho: { text: 'ρ_s', dimension: 'dimensionless' },
+  },
+  dimension: 'force',
+  reference: "spring maker's data (relaxation at the service temperature and stress)",
+});
+
 export const wornSpringForceFormula = defineFormula({
   id: 'worn-spring-force',
   label: 'Spring force after the wear w (before re-adjustment)',
@@ -36,7 +49,7 @@ export const wornSpringForceFormula = defineFormula({
  * extends by ΔL = w·r_s (r_s = spring travel per unit shoe travel; for an ideal symmetric
  * double-shoe linkage r_s = 2·i by virtual work) and loses k·ΔL: F_w = F_s − k·w·r_s.
  * Torque scales with F_w/F_s. A spring that would go slack is an input error (wear beyond what the
- * setting can follow).
+ * setting can follow). With a relaxation ρ_s the spring starts from F_s·(1 − ρ_s) in service.
  *
  * @param springForce F_s, N (> 0); @param rate k, N/m (≥ 0); @param wear w, m (≥ 0)
  * @param travelRatio r_s (> 0)
@@ -48,13 +61,25 @@ export function wornSpringForce(
   wear: Length,
   travelRatio: Ratio,
   d?: Derivation,
-  /** Where on the wear scale this is, for the printed steps: 'at the re-adjustment point', w_adj. */
-  point?: { words: string; wearSymbol: string },
+  options?: {
+    /** Where on the wear scale this is, for the printed steps: 'at the re-adjustment point', w_adj. */
+    point?: { words: string; wearSymbol: string };
+    /** Share of the set force lost to relaxation in service, ρ_s in [0, 1). */
+    relaxation?: Ratio;
+  },
 ): { extension: Length; force: Force } {
+  const point = options?.point;
   requireRange(springForce, 'springForce', { min: 0, exclusiveMin: true }, 'N');
   requireRange(rate, 'springRate', { min: 0 }, 'N/m');
   requireRange(wear, 'wear', { min: 0 }, 'm');
   requireRange(travelRatio, 'travelRatio', { min: 0, exclusiveMin: true });
+  const rho = options?.relaxation;
+  if (rho !== undefined)
+    requireRange(rho, 'springRelaxation', { min: 0, max: 1, exclusiveMax: true });
+  const inService =
+    rho === undefined
+      ? springForce
+      : compute(d, relaxedSpringForceFormula, { F_s: springForce, rho });
   const extension = compute(
     d,
     springExtensionFormula,
@@ -67,8 +92,13 @@ export function wornSpringForce(
   const force = compute(
     d,
     wornSpringForceFormula,
-    { F_s: springForce, k: rate, dL: extension },
-    point && { label: `Spring force ${point.words}` },
+    { F_s: inService, k: rate, dL: extension },
+    point || rho !== undefined
+      ? {
+          ...(point ? { label: `Spring force ${point.words}` } : {}),
+          ...(rho !== undefined ? { names: { F_s: 'F_s,r' } } : {}),
+        }
+      : undefined,
   );
   if (!(force > 0)) {
     throw new CalcInputError([

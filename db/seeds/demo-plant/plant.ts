@@ -84,6 +84,7 @@ const C2 = 'checker2@holdfast.test';
 // Inputs of the first issues as entered before core 1.1.0 asked for them apart: the stop took the
 // gear efficiency as credit, the long-shoe torque was the model, all stops were one count.
 const CORE_1_0_HOIST: DemoRevision['set'] = [
+  ['springForce', { value: 1100, unit: 'N' }],
   ['backDrivingEfficiency', 0.88],
   ['torqueModel', 'pivoted'],
   ['stopsPerHour', { value: 60, unit: '1/h' }],
@@ -106,7 +107,11 @@ const RECHECK_1_1 = [
   'stopsPerHour',
   'emergencyStopsPerHour',
   'motorMaxSpeed',
+  'springRelaxation',
+  'springForce',
 ];
+/** Inputs the first issues did not have (spring relaxation came with core 1.1.0). */
+const NOT_IN_1_0 = ['springRelaxation'];
 
 export const demoSheets: DemoSheet[] = [
   {
@@ -123,6 +128,7 @@ export const demoSheets: DemoSheet[] = [
         changeNote: 'First issue.',
         // As entered under core 1.0.0: gear-loss credit while lowering, long-shoe torque, one stop count.
         set: CORE_1_0_HOIST,
+        leaveOut: NOT_IN_1_0,
         daysAgo: 120,
       },
       {
@@ -177,6 +183,7 @@ export const demoSheets: DemoSheet[] = [
         checker: C,
         changeNote: 'First issue.',
         set: CORE_1_0_TRAVEL,
+        leaveOut: NOT_IN_1_0,
         daysAgo: 60,
       },
       {
@@ -184,7 +191,7 @@ export const demoSheets: DemoSheet[] = [
         author: E2,
         checker: C2,
         changeNote:
-          'Re-checked with calculation core 1.1.0: motor maximum speed 3000 rpm from the motor data; set delay is the thruster set time at its coldest oil (maker’s data); 30 stops per hour split into 28 service and 2 emergency stops; torque model long shoe → short shoe for the requirement (conservative); drive train checked at μ max with the spring at 800 N; spring travel ratio checked against the lever ratio. All checks pass; no change on site.',
+          'Re-checked with calculation core 1.1.0: motor maximum speed 3000 rpm from the motor data; set delay is the thruster set time at its coldest oil (maker’s data); 30 stops per hour split into 28 service and 2 emergency stops; torque model long shoe → short shoe for the requirement (conservative); drive train checked at μ max with the spring at 800 N; spring travel ratio checked against the lever ratio; spring relaxation 2 % (spring maker’s data) now taken off the worn torques, the stop and the setting band. All checks pass; no change on site.',
         demoValues: RECHECK_1_1,
         daysAgo: 0,
       },
