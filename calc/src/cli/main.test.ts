@@ -56,6 +56,13 @@ describe('holdfast-calc CLI', { timeout: 120_000 }, () => {
     expect(JSON.parse(r.stdout).criteriaSetId).toBe('general-industry');
   });
 
+  it('refuses --criteria without a set id instead of using the default set', () => {
+    const r = run(['hoist-shoe-brake', '-', '--criteria'], JSON.stringify(hoistDemo));
+    expect(r.status).toBe(2);
+    expect(r.stdout).toBe('');
+    expect(errorOf(r.stderr).error.code).toBe('USAGE');
+  });
+
   it('prints field errors to stderr and exits 2 on bad input', () => {
     const r = run(['travel-shoe-brake', '-'], JSON.stringify({ travelSpeed: '40 kg', muMin: 2 }));
     expect(r.status).toBe(2);

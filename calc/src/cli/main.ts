@@ -48,11 +48,14 @@ function parseArgs(argv: string[]): {
   };
   const rest: string[] = [];
   for (let k = 0; k < argv.length; k++) {
-    const a = argv[k];
+    const a = argv[k]!; // k < argv.length
     if (a === '--help' || a === '-h') out.help = true;
     else if (a === '--demo') out.demo = true;
-    else if (a === '--criteria') out.criteria = argv[++k];
-    else if (a.startsWith('--criteria=')) out.criteria = a.slice('--criteria='.length);
+    else if (a === '--criteria') {
+      // A trailing --criteria would otherwise fall back to the sheet's default set unnoticed.
+      out.criteria = argv[++k];
+      if (out.criteria === undefined) fail(`--criteria needs a criteria set id\n${USAGE}`);
+    } else if (a.startsWith('--criteria=')) out.criteria = a.slice('--criteria='.length);
     else rest.push(a);
   }
   [out.sheet, out.file] = rest;

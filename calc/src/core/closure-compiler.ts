@@ -61,23 +61,24 @@ function build(n: AnyNode, declared: ReadonlySet<string>): Evaluator {
     case 'SymbolNode': {
       const name = n.name ?? '';
       // Declared symbols win over constants (a symbol named e is a length, not Euler's number).
-      if (!declared.has(name) && name in CONSTANTS) {
-        const c = CONSTANTS[name];
-        return () => c;
-      }
-      return (s) => s[name];
+      const c = declared.has(name) ? undefined : CONSTANTS[name];
+      if (typeof c === 'number') return () => c;
+      // defineFormula refuses undeclared symbols and its values type carries every declared one.
+      return (s) => s[name]!;
     }
     case 'ParenthesisNode':
       return sub(n.content as AnyNode);
     case 'OperatorNode': {
       const args = (n.args ?? []).map(sub);
-      if (args.length === 1) {
-        const [a] = args;
+      const [a, b] = args;
+      if (args.length === 1 && a) {
         if (n.op === '-') return (s) => -a(s);
         if (n.op === '+') return a;
         throw new Error(`unary ${n.op}`);
       }
-      const [a, b] = args;
+      // Anything but two operands is left to mathjs (the caller's fallback).
+      if (args.length !== 2 || !a || !b)
+        throw new Error(`operator ${n.op} with ${args.length} operands`);
       switch (n.op) {
         case '+':
           return (s) => a(s) + b(s);
@@ -98,10 +99,8 @@ function build(n: AnyNode, declared: ReadonlySet<string>): Evaluator {
       const fn = FUNCTIONS[name];
       if (!fn) throw new Error(`function ${name}`);
       const args = (n.args ?? []).map(sub);
-      if (args.length === 1) {
-        const [a] = args;
-        return (s) => fn(a(s));
-      }
+      const [a] = args;
+      if (args.length === 1 && a) return (s) => fn(a(s));
       return (s) => fn(...args.map((x) => x(s)));
     }
     default:

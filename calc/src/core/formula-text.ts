@@ -40,7 +40,7 @@ export function renderPieces(node: MathNode, symbols: ReadonlySet<string>): Text
         const inner = n.content as AnyNode;
         // (−expm1(x)) prints (1 − e^(x)) once, not ((1 − e^(x))).
         if (inner.type === 'OperatorNode' && inner.op === '-' && inner.args?.length === 1) {
-          if (isExpm1(inner.args[0])) {
+          if (isExpm1(argOf(inner, 0))) {
             walk(inner);
             return;
           }
@@ -55,20 +55,20 @@ export function renderPieces(node: MathNode, symbols: ReadonlySet<string>): Text
         const op = n.op ?? '';
         if (args.length === 1) {
           // −expm1(x) is written as the mathematics it computes: (1 − e^(x)).
-          const inner = args[0];
+          const inner = argOf(n, 0);
           if (op === '-' && isExpm1(inner)) {
             out.push('(1 − e^(');
-            walk(inner.args![0]);
+            walk(argOf(inner, 0));
             out.push('))');
             return;
           }
           out.push(op === '-' ? '−' : op);
-          walk(args[0]);
+          walk(inner);
           return;
         }
         if (op === '^') {
-          walk(args[0]);
-          const exp = args[1];
+          walk(argOf(n, 0));
+          const exp = argOf(n, 1);
           const sup = exp.type === 'ConstantNode' ? SUPERSCRIPTS[String(exp.value)] : undefined;
           if (sup) out.push(sup);
           else {
@@ -77,9 +77,9 @@ export function renderPieces(node: MathNode, symbols: ReadonlySet<string>): Text
           }
           return;
         }
-        walk(args[0]);
+        walk(argOf(n, 0));
         out.push(OPERATOR_TEXT[op] ?? ` ${op} `);
-        walk(args[1]);
+        walk(argOf(n, 1));
         return;
       }
       case 'FunctionNode': {
@@ -88,13 +88,13 @@ export function renderPieces(node: MathNode, symbols: ReadonlySet<string>): Text
         // expm1 is a software function (e^x − 1 without cancellation): print the mathematics.
         if (isExpm1(n)) {
           out.push('(e^(');
-          walk(args[0]);
+          walk(argOf(n, 0));
           out.push(') − 1)');
           return;
         }
         if (name === 'exp' && args.length === 1) {
           out.push('e^(');
-          walk(args[0]);
+          walk(argOf(n, 0));
           out.push(')');
           return;
         }
@@ -112,6 +112,13 @@ export function renderPieces(node: MathNode, symbols: ReadonlySet<string>): Text
   };
   walk(node as unknown as AnyNode);
   return mergeStrings(out);
+}
+
+/** An operand of a parsed node; mathjs gives operators and calls theirs, so a miss is a fault. */
+function argOf(n: AnyNode, i: number): AnyNode {
+  const a = n.args?.[i];
+  if (!a) throw new Error(`formula-text: ${n.type} ${n.op ?? ''} has no operand ${i + 1}`);
+  return a;
 }
 
 function isExpm1(n: AnyNode): boolean {

@@ -80,9 +80,11 @@ export function defineFormula<S extends string, D extends Dimension>(
   const slots: (string | ValueSlot)[] = pieces.map((p, k) => {
     if (typeof p === 'string') return p;
     const next = pieces[k + 1];
+    const symbolSpec = symbols[p.symbol];
+    if (!symbolSpec) throw new Error(`formula ${spec.id}: symbol "${p.symbol}" has no spec`);
     return {
       symbol: p.symbol,
-      units: printUnitsOf(symbols[p.symbol].dimension),
+      units: printUnitsOf(symbolSpec.dimension),
       powered: typeof next === 'string' && /^[²³^]/.test(next),
       memo: memoIndex.get(p.symbol) ?? -1,
     };
@@ -91,7 +93,8 @@ export function defineFormula<S extends string, D extends Dimension>(
   const prefix = `${spec.symbol} = `;
   const body = (names: Readonly<Record<string, string | undefined>>) =>
     pieces
-      .map((p) => (typeof p === 'string' ? p : (names[p.symbol] ?? symbols[p.symbol].text)))
+      // Every piece's symbol has a spec: building the slots above checked it.
+      .map((p) => (typeof p === 'string' ? p : (names[p.symbol] ?? symbols[p.symbol]!.text)))
       .join('');
   const text = prefix + body({});
   return {
@@ -110,22 +113,24 @@ export function defineFormula<S extends string, D extends Dimension>(
       const memo = memoIndex.size > 0 ? new Array<string>(memoIndex.size) : undefined;
       // One unit per dimension within a step (never 10.80 kN·m − 5999 N·m): the unit the
       // largest value of that dimension needs. Only dimensions with more than one print unit.
+      // values[symbol]! below: Record<S, number> carries every declared symbol, and the slots
+      // hold only declared ones (checked when the formula was defined).
       let largest: Map<PrintUnits, number> | undefined;
       if (multiUnit) {
         largest = new Map();
         for (const p of slots) {
           if (typeof p === 'string' || p.units.length < 2) continue;
-          const v = Math.abs((values as Record<string, number>)[p.symbol]);
+          const v = Math.abs((values as Record<string, number>)[p.symbol]!);
           if (v > (largest.get(p.units) ?? -1)) largest.set(p.units, v);
         }
       }
       for (let k = 0; k < slots.length; k++) {
-        const p = slots[k];
+        const p = slots[k]!; // k < slots.length
         if (typeof p === 'string') {
           out += p;
           continue;
         }
-        const v = (values as Record<string, number>)[p.symbol];
+        const v = (values as Record<string, number>)[p.symbol]!;
         const unit = pickPrintUnit(p.units, largest?.get(p.units) ?? v);
         const printed =
           p.memo < 0 ? formatInUnit(v, unit) : (memo![p.memo] ??= formatInUnit(v, unit));

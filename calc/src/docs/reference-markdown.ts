@@ -119,6 +119,8 @@ export function criteriaMarkdown(sets: readonly CriteriaSet[]): string {
       `| \`${l.id}\` | ${l.label} | ${l.muTypical} | ${(l.maxTemperature - 273.15).toFixed(0)} | ${(l.maxOperatingTemperature - 273.15).toFixed(0)} | ${l.workingPressureMin / 1e3}–${l.workingPressureMax / 1e3} | ${l.maxPressure / 1e6} |`,
     );
   }
-  lines.push('', `Source: ${LININGS[0].source}.`);
+  const source = LININGS[0]?.source;
+  if (!source) throw new Error('the lining table is empty');
+  lines.push('', `Source: ${source}.`);
   return lines.join('\n');
 }

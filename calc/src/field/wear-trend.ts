@@ -177,7 +177,7 @@ function validate(input: WearTrendInput): void {
       { field, message: `a wear trend needs at least 3 readings (got ${readings.length})` },
     ]);
   }
-  const first = readings[0].at;
+  const first = readings[0]!.at; // at least 3 readings, checked above
   if (readings.every((r) => r.at === first)) {
     throw new CalcInputError([
       { field, message: 'all readings have the same date: no spread in time to fit a rate' },

@@ -205,7 +205,7 @@ export function torqueWearPoints(
   const w0 = chain.wearReserveUsed;
   for (let k = 0; k <= steps; k++) {
     const w = (maxWear * k) / steps;
-    if (w0 > 0 && pts.length && pts[pts.length - 1].x < w0 && w >= w0) {
+    if (w0 > 0 && pts.length && pts[pts.length - 1]!.x < w0 && w >= w0) {
       const before = chain.torqueAtWear(w0 * (1 - 1e-12));
       pts.push({ x: w0, y: before }, { x: w0, y: 0 });
       if (w === w0) continue;

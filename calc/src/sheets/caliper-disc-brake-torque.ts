@@ -18,7 +18,7 @@ import { pvFormula, rubbingSpeedFormula } from '../shoe-brake/lining-duty.js';
 import * as q from '../units/quantities.js';
 import { makeCheck } from './checks.js';
 import type { CaliperInputs } from './caliper-disc-brake-fields.js';
-import { ARRANGEMENT_KEY } from './hoist-shoe-brake.js';
+import { arrangementKey } from './hoist-shoe-brake.js';
 
 /** The duty at the brake shaft (section 'duty'). */
 export interface CaliperDuty {
@@ -60,7 +60,7 @@ export function caliperDuty(v: CaliperInputs, criteria: CriteriaSet, d: Derivati
   });
   const basis = v.referenceBasis as ReferenceBasis;
   const Mref = basis === 'motor' ? MmotB : basis === 'hoisting' ? Mhoist : Mhold;
-  const factor = criterion(criteria, ARRANGEMENT_KEY[v.brakeArrangement]);
+  const factor = criterion(criteria, arrangementKey(v.brakeArrangement));
   const Mreq = requiredBrakeTorque(q.ratio(factor.value), q.torque(Mref), d, basis);
   // Emergency stop: the overhauling load back-drives the train with η_bd (no gear-loss credit).
   const Md = compute(

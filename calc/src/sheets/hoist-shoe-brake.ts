@@ -45,6 +45,13 @@ export const ARRANGEMENT_KEY: Record<string, string> = {
   two: 'torqueFactorEachOfTwo',
 };
 
+/** The torque-factor criterion of a brake arrangement; readInputs admits only ARRANGEMENT_CHOICES. */
+export function arrangementKey(arrangement: string): string {
+  const key = ARRANGEMENT_KEY[arrangement];
+  if (key === undefined) throw new Error(`brake arrangement "${arrangement}" has no criterion key`);
+  return key;
+}
+
 export const HOIST_DUTY_FIELDS = [
   qty(U, 'motorPower', 'Motor rated power', 'P', 'power', 22, 'kW', 'hp', {
     min: 0,
@@ -215,7 +222,7 @@ export function evaluateHoistShoeBrake(
   const basis = v.referenceBasis as ReferenceBasis;
   const Mref =
     basis === 'motor' ? Mmot : basis === 'hoisting' ? load.hoistingTorque : load.holdingTorque;
-  const factor = criterion(criteria, ARRANGEMENT_KEY[v.brakeArrangement]);
+  const factor = criterion(criteria, arrangementKey(v.brakeArrangement));
   const Mreq = requiredBrakeTorque(q.ratio(factor.value), Mref, d, basis);
   out.warnings.push(
     `Required torque = ${factor.value} × ${REFERENCE_BASIS_TEXT[basis]}; efficiency credit: hoisting torque divides by η, holding torque multiplies by η.`,

@@ -27,7 +27,7 @@ export function readInputs<const Fs extends readonly FieldDefinition[]>(
   const values: Record<string, number | string | boolean> = {};
   const errors = new FieldErrorCollector();
   for (let k = 0; k < fields.length; k++) {
-    const f = fields[k];
+    const f = fields[k]!; // k < fields.length
     const raw = inputs[f.key];
     // A box left empty is the same as a field left out: missing when required, else not used.
     if (isBlank(raw)) {
@@ -108,14 +108,19 @@ export function closestKey(key: string, keys: readonly string[]): string | undef
 /** Levenshtein distance (insert, delete, substitute; each costs one). */
 export function editDistance(a: string, b: string): number {
   let prev = Array.from({ length: b.length + 1 }, (_, j) => j);
+  // Every index below is in range: prev and cur hold b.length + 1 entries, i ≤ a.length, j ≤ b.length.
   for (let i = 1; i <= a.length; i++) {
     const cur = [i];
     for (let j = 1; j <= b.length; j++) {
-      cur[j] = Math.min(prev[j] + 1, cur[j - 1] + 1, prev[j - 1] + (a[i - 1] === b[j - 1] ? 0 : 1));
+      cur[j] = Math.min(
+        prev[j]! + 1,
+        cur[j - 1]! + 1,
+        prev[j - 1]! + (a[i - 1] === b[j - 1] ? 0 : 1),
+      );
     }
     prev = cur;
   }
-  return prev[b.length];
+  return prev[b.length]!;
 }
 
 function fail(f: FieldDefinition, message: string): never {

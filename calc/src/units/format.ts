@@ -17,11 +17,13 @@ for (let k = -30; k <= 30; k++) POW10[k + 30] = 10 ** k;
  */
 export function decimalExponent(abs: number): number {
   let e = 0;
+  // Within the stated range every index is in the table (outside it a miss compares false and
+  // the loop stops at the table's edge).
   if (abs >= 1) {
-    while (abs >= POW10[e + 31]) e++;
+    while (abs >= POW10[e + 31]!) e++;
   } else {
     do e--;
-    while (abs < POW10[e + 30]);
+    while (abs < POW10[e + 30]!);
   }
   return e;
 }
@@ -33,7 +35,8 @@ export function formatNumber(value: number, digits = 4): string {
   const sign = value < 0 ? '−' : '';
   if (abs < 1e-3 || abs >= 1e9 || digits < 1 || digits > 15) {
     const [mantissa, exponent] = value.toExponential(Math.max(0, digits - 1)).split('e');
-    return `${mantissa.replace('-', '−')}·10^${Number(exponent)}`;
+    // toExponential of a finite number always has a mantissa.
+    return `${mantissa!.replace('-', '−')}·10^${Number(exponent)}`;
   }
   // Beyond 12 digits the few ulps by which log10 may miss show in the last digit: keep it there.
   const e = digits <= 12 ? decimalExponent(abs) : Math.floor(Math.log10(abs));
@@ -46,8 +49,9 @@ export function formatNumber(value: number, digits = 4): string {
  * Exported for the test that compares exponent estimates; use formatNumber.
  */
 export function placeDigits(abs: number, sign: string, digits: number, e: number): string {
-  let m = Math.round(abs * POW10[digits - 1 - e + 30]);
-  if (m >= POW10[digits + 30]) {
+  // In the table: formatNumber passes digits 1 to 15 and e near −3 to 8 (1e-3 ≤ abs < 1e9).
+  let m = Math.round(abs * POW10[digits - 1 - e + 30]!);
+  if (m >= POW10[digits + 30]!) {
     m = Math.round(m / 10);
     e += 1;
   }
@@ -148,10 +152,11 @@ export function formatInPrintUnits(valueSI: number, units: PrintUnits, digits?: 
 
 /** The print unit for a magnitude: the first whose bound it is below, else the largest. */
 export function pickPrintUnit(units: PrintUnits, valueSI: number): PrintUnit {
+  // k stays below units.length, and every dimension has at least one print unit (UNIT_SPECS).
   for (let k = 0; k < units.length - 1; k++) {
-    if (Math.abs(valueSI) < units[k].below) return units[k];
+    if (Math.abs(valueSI) < units[k]!.below) return units[k]!;
   }
-  return units[units.length - 1];
+  return units[units.length - 1]!;
 }
 
 /** An SI value in one given print unit, to its dimension's precision or to `digits` figures. */

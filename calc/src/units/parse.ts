@@ -11,7 +11,8 @@ export function parseQuantityText(text: string, field = 'value'): Quantity {
   if (!match) {
     throw new CalcInputError([{ field, message: `"${text}" is not a number with a unit` }]);
   }
-  return { value: Number(match[1]), unit: match[2] };
+  // Both groups always take part in a match (the second may be empty).
+  return { value: Number(match[1]), unit: match[2]! };
 }
 
 function isQuantity(v: unknown): v is Quantity {
