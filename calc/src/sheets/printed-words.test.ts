@@ -8,7 +8,7 @@ import { demoInputs, getCriteriaSet, sheetTypes } from '../index.js';
 describe('printed words of every demo sheet', () => {
   for (const sheet of sheetTypes) {
     it(`${sheet.id}: no placeholder or unfilled value`, () => {
-      const r = sheet.evaluate(demoInputs(sheet), getCriteriaSet('general-industry'));
+      const r = sheet.evaluate(demoInputs(sheet), getCriteriaSet('general-industry')!);
       const texts = [
         ...r.checks.flatMap((c) => [c.label, c.message, c.source]),
         ...r.results.map((x) => x.label),
