@@ -16,7 +16,6 @@ import {
   fieldRecordKindLabels,
   fieldRecordKinds,
   type CreateFieldRecordInput,
-  type FieldCheckInput,
   type FieldRecordKind,
   type FieldForm,
 } from '@holdfast/shared';
@@ -35,12 +34,17 @@ import {
   CheckItems,
   type CheckDraft,
 } from '../../../features/field-records/components/check-items';
+import { PhotoPicker } from '../../../features/field-records/components/photo-picker';
+import {
+  waitingPhotos,
+  type OutboxPhoto,
+} from '../../../features/field-records/offline/outbox-store';
 import { refusedFieldErrors } from '../../../features/field-records/components/refused-fields';
 import {
   buildMeasurements,
-  readSI,
   type MeasurementDraft,
 } from '../../../features/field-records/components/measurement-entry';
+import { buildChecks, readHours } from './record-entry';
 import classes from './record-form.module.css';
 
 export const handle: RouteHandle = { title: 'Field record', caution: true };
@@ -49,44 +53,6 @@ function localNow(): string {
   const d = new Date();
   d.setSeconds(0, 0);
   return new Date(d.getTime() - d.getTimezoneOffset() * 60000).toISOString().slice(0, 16);
-}
-
-/** The hour meter as typed: null when left empty, undefined when it is not a number ≥ 0. */
-function readHours(value: InputValue | undefined): number | null | undefined {
-  if (value === undefined || value === '') return null;
-  return typeof value === 'number' && Number.isFinite(value) && value >= 0 ? value : undefined;
-}
-
-/** A count as typed: null when left empty, undefined when it is not a whole number 0-1000. */
-function readCount(value: InputValue | undefined): number | null | undefined {
-  if (value === undefined || value === '') return null;
-  return typeof value === 'number' && Number.isInteger(value) && value >= 0 && value <= 1000
-    ? value
-    : undefined;
-}
-
-function buildChecks(form: FieldForm, drafts: Record<string, CheckDraft>) {
-  const checks: FieldCheckInput[] = [];
-  const errors: Record<string, string> = {};
-  for (const c of form.checks) {
-    const d = drafts[c.key];
-    if (!d?.result) {
-      errors[`checks.${c.key}`] = 'Answer this check';
-      continue;
-    }
-    const v = c.hasValue ? readSI(d.value, 'length') : { kind: 'empty' as const };
-    if (v.kind === 'invalid') errors[`checks.${c.key}.value`] = 'Enter a number';
-    const cycles = readCount(d.cycles);
-    if (cycles === undefined) errors[`checks.${c.key}.cycles`] = 'Enter a whole number, 0 to 1000';
-    checks.push({
-      key: c.key,
-      result: d.result,
-      value: v.kind === 'value' ? v.si : null,
-      cycles: cycles ?? null,
-      note: '',
-    });
-  }
-  return { checks, errors };
 }
 
 function RecordForm({ form }: { form: FieldForm }) {
@@ -100,7 +66,10 @@ function RecordForm({ form }: { form: FieldForm }) {
   const [findings, setFindings] = useState('');
   const [meterHours, setMeterHours] = useState<InputValue | undefined>(undefined);
   const [errors, setErrors] = useState<Record<string, string>>({});
+  // Photos picked before the record is first saved; after that they go to the outbox at once.
+  const [photos, setPhotos] = useState<OutboxPhoto[]>([]);
   const entry = outbox.entries.find((e) => e.id === id);
+  const photosWaiting = waitingPhotos(entry).length;
   // A record the server refused shows its reasons under the boxes, beside the form's own checks.
   const shown =
     entry?.state === 'refused'
@@ -130,7 +99,13 @@ function RecordForm({ form }: { form: FieldForm }) {
       checks: c.checks,
       findings: findings.trim(),
     };
-    await outbox.save(payload);
+    await outbox.save(payload, photos);
+    setPhotos([]);
+  }
+
+  function addPhotos(picked: OutboxPhoto[]) {
+    if (entry) void outbox.addPhotos(id, picked);
+    else setPhotos((p) => [...p, ...picked]);
   }
 
   function startAnother() {
@@ -140,6 +115,8 @@ function RecordForm({ form }: { form: FieldForm }) {
     setFindings('');
     setMeterHours(undefined);
     setErrors({});
+    setPhotos([]);
+    sign.reset();
   }
 
   return (
@@ -200,6 +177,14 @@ function RecordForm({ form }: { form: FieldForm }) {
         error={shown.findings}
         onChange={(e) => setFindings(e.currentTarget.value)}
       />
+      <PhotoPicker
+        photos={[...(entry?.photos ?? []), ...photos]}
+        unsaved={new Set(photos.map((p) => p.id))}
+        onAdd={addPhotos}
+        onRemove={(photoId) => setPhotos((p) => p.filter((x) => x.id !== photoId))}
+        online={outbox.online}
+        disabled={sign.isSuccess}
+      />
       {Object.keys(errors).length > 0 && (
         <Text c="fail.8" role="alert">
           Some entries need attention before the record can be saved.
@@ -216,7 +201,7 @@ function RecordForm({ form }: { form: FieldForm }) {
           <Button
             size="lg"
             loading={sign.isPending}
-            disabled={!outbox.online || sign.isSuccess}
+            disabled={!outbox.online || sign.isSuccess || photosWaiting > 0}
             onClick={() => sign.mutate({ id })}
           >
             {sign.isSuccess ? 'Signed' : 'Sign the record'}
@@ -228,6 +213,12 @@ function RecordForm({ form }: { form: FieldForm }) {
           </Button>
         )}
       </Group>
+      {entry?.state === 'sent' && photosWaiting > 0 && !sign.isSuccess && (
+        <Text size="sm">
+          {photosWaiting === 1 ? '1 photo is' : `${photosWaiting} photos are`} still to be sent:
+          sign once they are on the server, as a signed record takes no more photos.
+        </Text>
+      )}
       {sign.isError && <Text c="fail.8">{errorMessage(sign.error)}</Text>}
     </Stack>
   );
