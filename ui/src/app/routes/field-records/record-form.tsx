@@ -1,9 +1,7 @@
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import { useParams } from 'react-router-dom';
 import {
   Alert,
-  Button,
-  Group,
   NativeSelect,
   Skeleton,
   Stack,
@@ -22,29 +20,32 @@ import {
 import type { InputValue } from '@holdfast/calc';
 import { Page } from '../../../components/layouts/page';
 import { NumberField } from '../../../components/calc/components/unit-field';
-import { ErrorPanel } from '../../../components/errors/error-panel';
 import type { RouteHandle } from '../../../lib/route-handle';
-import { errorMessage } from '../../../lib/api-client';
 import { useFieldForm } from '../../../features/field-records/api/get-field-form';
 import { useSignFieldRecord } from '../../../features/field-records/api/sign-field-record';
 import { useOutbox } from '../../../features/field-records/offline/use-outbox';
-import { OutboxStatus } from '../../../features/field-records/components/outbox-status';
 import { MeasurementRow } from '../../../features/field-records/components/measurement-row';
 import {
   CheckItems,
   type CheckDraft,
 } from '../../../features/field-records/components/check-items';
 import { PhotoPicker } from '../../../features/field-records/components/photo-picker';
+import type { OutboxPhoto } from '../../../features/field-records/offline/outbox-store';
 import {
-  waitingPhotos,
-  type OutboxPhoto,
-} from '../../../features/field-records/offline/outbox-store';
+  clearFormDraft,
+  hasEntries,
+  loadFormDraft,
+  storeFormDraft,
+} from '../../../features/field-records/offline/form-draft';
+import { useCurrentUser } from '../../../lib/session';
 import { refusedFieldErrors } from '../../../features/field-records/components/refused-fields';
 import {
   buildMeasurements,
   type MeasurementDraft,
 } from '../../../features/field-records/components/measurement-entry';
 import { buildChecks, readHours } from './record-entry';
+import { RecordActions } from './record-actions';
+import { FormUnavailable } from './form-unavailable';
 import classes from './record-form.module.css';
 
 export const handle: RouteHandle = { title: 'Field record', caution: true };
@@ -58,24 +59,52 @@ function localNow(): string {
 function RecordForm({ form }: { form: FieldForm }) {
   const outbox = useOutbox();
   const sign = useSignFieldRecord();
-  const [id, setId] = useState(() => crypto.randomUUID());
-  const [kind, setKind] = useState<FieldRecordKind>('periodic-inspection');
-  const [performedAt, setPerformedAt] = useState(localNow);
-  const [drafts, setDrafts] = useState<Record<string, MeasurementDraft>>({});
-  const [checks, setChecks] = useState<Record<string, CheckDraft>>({});
-  const [findings, setFindings] = useState('');
-  const [meterHours, setMeterHours] = useState<InputValue | undefined>(undefined);
+  const user = useCurrentUser();
+  // What was typed here before a reload or a lost session, kept on this device.
+  const [kept] = useState(() => loadFormDraft(user.id, form.revisionId));
+  const [id, setId] = useState(() => kept?.id ?? crypto.randomUUID());
+  const [kind, setKind] = useState<FieldRecordKind>(kept?.kind ?? 'periodic-inspection');
+  const [performedAt, setPerformedAt] = useState(() => kept?.performedAt || localNow());
+  const [drafts, setDrafts] = useState<Record<string, MeasurementDraft>>(kept?.drafts ?? {});
+  const [checks, setChecks] = useState<Record<string, CheckDraft>>(kept?.checks ?? {});
+  const [findings, setFindings] = useState(kept?.findings ?? '');
+  const [meterHours, setMeterHours] = useState<InputValue | undefined>(kept?.meterHours);
   const [errors, setErrors] = useState<Record<string, string>>({});
   // Photos picked before the record is first saved; after that they go to the outbox at once.
   const [photos, setPhotos] = useState<OutboxPhoto[]>([]);
   const entry = outbox.entries.find((e) => e.id === id);
-  const photosWaiting = waitingPhotos(entry).length;
   // A record the server refused shows its reasons under the boxes, beside the form's own checks.
   const shown =
     entry?.state === 'refused'
       ? { ...refusedFieldErrors(entry.payload, entry.fields ?? []), ...errors }
       : errors;
   const measured = form.targets.filter((t) => t.tolerance !== null);
+  const signed = sign.isSuccess;
+  useEffect(() => {
+    // A signed record is the server's now; until then every change is kept on the device.
+    if (signed) clearFormDraft(user.id, form.revisionId);
+    else
+      storeFormDraft(user.id, form.revisionId, {
+        id,
+        kind,
+        performedAt,
+        drafts,
+        checks,
+        findings,
+        meterHours,
+      });
+  }, [
+    signed,
+    user.id,
+    form.revisionId,
+    id,
+    kind,
+    performedAt,
+    drafts,
+    checks,
+    findings,
+    meterHours,
+  ]);
   const withAsFound = kind !== 'commissioning';
 
   async function save() {
@@ -124,6 +153,11 @@ function RecordForm({ form }: { form: FieldForm }) {
       <Text>
         {form.documentNumber} rev. {form.revisionLabel}
       </Text>
+      {kept && hasEntries(kept) && (
+        <Text size="sm" data-testid="draft-restored">
+          What you entered on this form before was kept on this device and is shown again.
+        </Text>
+      )}
       {!form.positionId && (
         <Alert color="red" title="No brake position">
           This revision is not set to a brake position in the register, so no record can be made
@@ -190,36 +224,13 @@ function RecordForm({ form }: { form: FieldForm }) {
           Some entries need attention before the record can be saved.
         </Text>
       )}
-      {entry && <OutboxStatus entry={entry} online={outbox.online} />}
-      <Group grow>
-        {entry?.state !== 'sent' && (
-          <Button size="lg" onClick={() => void save()}>
-            Save record
-          </Button>
-        )}
-        {entry?.state === 'sent' && (
-          <Button
-            size="lg"
-            loading={sign.isPending}
-            disabled={!outbox.online || sign.isSuccess || photosWaiting > 0}
-            onClick={() => sign.mutate({ id })}
-          >
-            {sign.isSuccess ? 'Signed' : 'Sign the record'}
-          </Button>
-        )}
-        {entry?.state === 'sent' && (
-          <Button size="lg" variant="default" onClick={startAnother}>
-            Start another record
-          </Button>
-        )}
-      </Group>
-      {entry?.state === 'sent' && photosWaiting > 0 && !sign.isSuccess && (
-        <Text size="sm">
-          {photosWaiting === 1 ? '1 photo is' : `${photosWaiting} photos are`} still to be sent:
-          sign once they are on the server, as a signed record takes no more photos.
-        </Text>
-      )}
-      {sign.isError && <Text c="fail.8">{errorMessage(sign.error)}</Text>}
+      <RecordActions
+        entry={entry}
+        online={outbox.online}
+        sign={sign}
+        onSave={() => void save()}
+        onStartAnother={startAnother}
+      />
     </Stack>
   );
 }
@@ -230,7 +241,7 @@ export function Component() {
   return (
     <Page title="Field record">
       {query.isPending && <Skeleton h={320} />}
-      {query.isError && <ErrorPanel error={query.error} />}
+      {query.isError && <FormUnavailable error={query.error} />}
       {query.data && <RecordForm form={query.data} />}
     </Page>
   );

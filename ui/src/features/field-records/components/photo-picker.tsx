@@ -46,7 +46,7 @@ export function PhotoPicker(props: PhotoPickerProps) {
     <Input.Wrapper
       id={id}
       label="Photos"
-      description={`PNG or JPEG, up to ${formatBytes(MAX_ATTACHMENT_BYTES)} each, at most ${MAX_PHOTOS_PER_RECORD} per record. Kept on this device with the record and sent after it.`}
+      description={`PNG or JPEG, up to ${formatBytes(MAX_ATTACHMENT_BYTES)} each, at most ${MAX_PHOTOS_PER_RECORD} per record. Kept on this device once the record is saved, and sent after it.`}
       error={
         refused.length > 0
           ? refused.map((r) => `${r.name} was not added: ${r.reason}`).join(' ')
