@@ -121,6 +121,7 @@ describe.skipIf(skipReason !== null)('accessibility of the main screens', () => 
       ready: heading('Timeline'),
     },
     { name: 'queue-technician', who: 'technician', path: () => '/', ready: heading('Work queue') },
+    { name: 'field-work', who: 'technician', path: () => '/field', ready: heading('Field work') },
     {
       name: 'reset-password',
       who: null,

@@ -13,6 +13,7 @@
 import type { RouteObject } from 'react-router-dom';
 import {
   IconBuildingFactory2,
+  IconClipboardCheck,
   IconFileDescription,
   IconListCheck,
   IconScale,
@@ -26,6 +27,13 @@ export const workbenchNav: NavItem[] = [
   { label: 'Work queue', to: '/', icon: IconListCheck, end: true },
   { label: 'Sheets', to: '/sheets', icon: IconFileDescription },
   { label: 'Equipment', to: '/equipment', icon: IconBuildingFactory2 },
+  // Those who may record field work (the server's RECORDERS; checkers inherit engineer).
+  {
+    label: 'Field work',
+    to: '/field',
+    icon: IconClipboardCheck,
+    roles: ['technician', 'engineer', 'checker'],
+  },
   { label: 'Criteria sets', to: '/criteria', icon: IconScale },
 ];
 
@@ -44,6 +52,7 @@ export function workbenchRoutes(queryClient: QueryClient): RouteObject[] {
     { path: 'sheets/:sheetId/audit', lazy: lazy(() => import('./routes/sheets/audit-page')) },
     { path: 'equipment', lazy: lazy(() => import('./routes/equipment/equipment')) },
     { path: 'criteria', lazy: lazy(() => import('./routes/criteria/criteria')) },
+    { path: 'field', lazy: lazy(() => import('./routes/field-records/field-work')) },
     {
       path: 'field-records/new/:revisionId',
       lazy: lazy(() => import('./routes/field-records/record-form')),

@@ -72,6 +72,7 @@ export const fieldRecordKeys = {
   history: (positionId: string) => [...fieldRecordKeys.all, 'position', positionId] as const,
   state: (positionId: string) => [...fieldRecordKeys.all, 'state', positionId] as const,
   due: () => [...fieldRecordKeys.all, 'due'] as const,
+  list: (status: string) => [...fieldRecordKeys.all, 'list', status] as const,
 };
 export const fieldFormKeys = {
   form: (revisionId: string) => ['field-form', revisionId] as const,

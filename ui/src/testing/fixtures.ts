@@ -30,6 +30,20 @@ export const testUsers = {
     initials: 'PN',
     role: 'viewer',
   }),
+  technician: makeUser({
+    id: '3f2e1d0c-9b8a-4765-8432-10fedcba9876',
+    email: 'technician@holdfast.test',
+    displayName: 'Teo Marsh',
+    initials: 'TM',
+    role: 'technician',
+  }),
+  checker: makeUser({
+    id: '5a4b3c2d-1e0f-4a9b-8c7d-6e5f4a3b2c1d',
+    email: 'checker@holdfast.test',
+    displayName: 'Kit Rowe',
+    initials: 'KR',
+    role: 'checker',
+  }),
 } satisfies Record<string, User>;
 
 export function makeSession(user: User = testUsers.engineer, token = 'access-token-1'): Session {

@@ -3,6 +3,7 @@ import { IconInfoCircle } from '@tabler/icons-react';
 import { Navigate, useSearchParams } from 'react-router-dom';
 import { Wordmark } from '../../../components/brand/wordmark';
 import { SignInForm } from '../../../features/auth/components/sign-in-form';
+import { OutboxSignInNotice } from '../../../features/field-records/components/outbox-sign-in-notice';
 import { useSession } from '../../../lib/session';
 import classes from './sign-in.module.css';
 
@@ -40,6 +41,7 @@ export function Component() {
                 Your session has ended. Sign in again to carry on.
               </Alert>
             ) : null}
+            <OutboxSignInNotice returnsTo={next} />
             <SignInForm />
           </Stack>
         </Paper>

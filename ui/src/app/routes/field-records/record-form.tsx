@@ -1,9 +1,7 @@
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import { useParams } from 'react-router-dom';
 import {
   Alert,
-  Button,
-  Group,
   NativeSelect,
   Skeleton,
   Stack,
@@ -16,31 +14,38 @@ import {
   fieldRecordKindLabels,
   fieldRecordKinds,
   type CreateFieldRecordInput,
-  type FieldCheckInput,
   type FieldRecordKind,
   type FieldForm,
 } from '@holdfast/shared';
 import type { InputValue } from '@holdfast/calc';
 import { Page } from '../../../components/layouts/page';
 import { NumberField } from '../../../components/calc/components/unit-field';
-import { ErrorPanel } from '../../../components/errors/error-panel';
 import type { RouteHandle } from '../../../lib/route-handle';
-import { errorMessage } from '../../../lib/api-client';
 import { useFieldForm } from '../../../features/field-records/api/get-field-form';
 import { useSignFieldRecord } from '../../../features/field-records/api/sign-field-record';
 import { useOutbox } from '../../../features/field-records/offline/use-outbox';
-import { OutboxStatus } from '../../../features/field-records/components/outbox-status';
 import { MeasurementRow } from '../../../features/field-records/components/measurement-row';
 import {
   CheckItems,
   type CheckDraft,
 } from '../../../features/field-records/components/check-items';
+import { PhotoPicker } from '../../../features/field-records/components/photo-picker';
+import type { OutboxPhoto } from '../../../features/field-records/offline/outbox-store';
+import {
+  clearFormDraft,
+  hasEntries,
+  loadFormDraft,
+  storeFormDraft,
+} from '../../../features/field-records/offline/form-draft';
+import { useCurrentUser } from '../../../lib/session';
 import { refusedFieldErrors } from '../../../features/field-records/components/refused-fields';
 import {
   buildMeasurements,
-  readSI,
   type MeasurementDraft,
 } from '../../../features/field-records/components/measurement-entry';
+import { buildChecks, readHours } from './record-entry';
+import { RecordActions } from './record-actions';
+import { FormUnavailable } from './form-unavailable';
 import classes from './record-form.module.css';
 
 export const handle: RouteHandle = { title: 'Field record', caution: true };
@@ -51,55 +56,22 @@ function localNow(): string {
   return new Date(d.getTime() - d.getTimezoneOffset() * 60000).toISOString().slice(0, 16);
 }
 
-/** The hour meter as typed: null when left empty, undefined when it is not a number ≥ 0. */
-function readHours(value: InputValue | undefined): number | null | undefined {
-  if (value === undefined || value === '') return null;
-  return typeof value === 'number' && Number.isFinite(value) && value >= 0 ? value : undefined;
-}
-
-/** A count as typed: null when left empty, undefined when it is not a whole number 0-1000. */
-function readCount(value: InputValue | undefined): number | null | undefined {
-  if (value === undefined || value === '') return null;
-  return typeof value === 'number' && Number.isInteger(value) && value >= 0 && value <= 1000
-    ? value
-    : undefined;
-}
-
-function buildChecks(form: FieldForm, drafts: Record<string, CheckDraft>) {
-  const checks: FieldCheckInput[] = [];
-  const errors: Record<string, string> = {};
-  for (const c of form.checks) {
-    const d = drafts[c.key];
-    if (!d?.result) {
-      errors[`checks.${c.key}`] = 'Answer this check';
-      continue;
-    }
-    const v = c.hasValue ? readSI(d.value, 'length') : { kind: 'empty' as const };
-    if (v.kind === 'invalid') errors[`checks.${c.key}.value`] = 'Enter a number';
-    const cycles = readCount(d.cycles);
-    if (cycles === undefined) errors[`checks.${c.key}.cycles`] = 'Enter a whole number, 0 to 1000';
-    checks.push({
-      key: c.key,
-      result: d.result,
-      value: v.kind === 'value' ? v.si : null,
-      cycles: cycles ?? null,
-      note: '',
-    });
-  }
-  return { checks, errors };
-}
-
 function RecordForm({ form }: { form: FieldForm }) {
   const outbox = useOutbox();
   const sign = useSignFieldRecord();
-  const [id, setId] = useState(() => crypto.randomUUID());
-  const [kind, setKind] = useState<FieldRecordKind>('periodic-inspection');
-  const [performedAt, setPerformedAt] = useState(localNow);
-  const [drafts, setDrafts] = useState<Record<string, MeasurementDraft>>({});
-  const [checks, setChecks] = useState<Record<string, CheckDraft>>({});
-  const [findings, setFindings] = useState('');
-  const [meterHours, setMeterHours] = useState<InputValue | undefined>(undefined);
+  const user = useCurrentUser();
+  // What was typed here before a reload or a lost session, kept on this device.
+  const [kept] = useState(() => loadFormDraft(user.id, form.revisionId));
+  const [id, setId] = useState(() => kept?.id ?? crypto.randomUUID());
+  const [kind, setKind] = useState<FieldRecordKind>(kept?.kind ?? 'periodic-inspection');
+  const [performedAt, setPerformedAt] = useState(() => kept?.performedAt || localNow());
+  const [drafts, setDrafts] = useState<Record<string, MeasurementDraft>>(kept?.drafts ?? {});
+  const [checks, setChecks] = useState<Record<string, CheckDraft>>(kept?.checks ?? {});
+  const [findings, setFindings] = useState(kept?.findings ?? '');
+  const [meterHours, setMeterHours] = useState<InputValue | undefined>(kept?.meterHours);
   const [errors, setErrors] = useState<Record<string, string>>({});
+  // Photos picked before the record is first saved; after that they go to the outbox at once.
+  const [photos, setPhotos] = useState<OutboxPhoto[]>([]);
   const entry = outbox.entries.find((e) => e.id === id);
   // A record the server refused shows its reasons under the boxes, beside the form's own checks.
   const shown =
@@ -107,6 +79,32 @@ function RecordForm({ form }: { form: FieldForm }) {
       ? { ...refusedFieldErrors(entry.payload, entry.fields ?? []), ...errors }
       : errors;
   const measured = form.targets.filter((t) => t.tolerance !== null);
+  const signed = sign.isSuccess;
+  useEffect(() => {
+    // A signed record is the server's now; until then every change is kept on the device.
+    if (signed) clearFormDraft(user.id, form.revisionId);
+    else
+      storeFormDraft(user.id, form.revisionId, {
+        id,
+        kind,
+        performedAt,
+        drafts,
+        checks,
+        findings,
+        meterHours,
+      });
+  }, [
+    signed,
+    user.id,
+    form.revisionId,
+    id,
+    kind,
+    performedAt,
+    drafts,
+    checks,
+    findings,
+    meterHours,
+  ]);
   const withAsFound = kind !== 'commissioning';
 
   async function save() {
@@ -130,7 +128,13 @@ function RecordForm({ form }: { form: FieldForm }) {
       checks: c.checks,
       findings: findings.trim(),
     };
-    await outbox.save(payload);
+    await outbox.save(payload, photos);
+    setPhotos([]);
+  }
+
+  function addPhotos(picked: OutboxPhoto[]) {
+    if (entry) void outbox.addPhotos(id, picked);
+    else setPhotos((p) => [...p, ...picked]);
   }
 
   function startAnother() {
@@ -140,6 +144,8 @@ function RecordForm({ form }: { form: FieldForm }) {
     setFindings('');
     setMeterHours(undefined);
     setErrors({});
+    setPhotos([]);
+    sign.reset();
   }
 
   return (
@@ -147,6 +153,11 @@ function RecordForm({ form }: { form: FieldForm }) {
       <Text>
         {form.documentNumber} rev. {form.revisionLabel}
       </Text>
+      {kept && hasEntries(kept) && (
+        <Text size="sm" data-testid="draft-restored">
+          What you entered on this form before was kept on this device and is shown again.
+        </Text>
+      )}
       {!form.positionId && (
         <Alert color="red" title="No brake position">
           This revision is not set to a brake position in the register, so no record can be made
@@ -200,35 +211,26 @@ function RecordForm({ form }: { form: FieldForm }) {
         error={shown.findings}
         onChange={(e) => setFindings(e.currentTarget.value)}
       />
+      <PhotoPicker
+        photos={[...(entry?.photos ?? []), ...photos]}
+        unsaved={new Set(photos.map((p) => p.id))}
+        onAdd={addPhotos}
+        onRemove={(photoId) => setPhotos((p) => p.filter((x) => x.id !== photoId))}
+        online={outbox.online}
+        disabled={sign.isSuccess}
+      />
       {Object.keys(errors).length > 0 && (
         <Text c="fail.8" role="alert">
           Some entries need attention before the record can be saved.
         </Text>
       )}
-      {entry && <OutboxStatus entry={entry} online={outbox.online} />}
-      <Group grow>
-        {entry?.state !== 'sent' && (
-          <Button size="lg" onClick={() => void save()}>
-            Save record
-          </Button>
-        )}
-        {entry?.state === 'sent' && (
-          <Button
-            size="lg"
-            loading={sign.isPending}
-            disabled={!outbox.online || sign.isSuccess}
-            onClick={() => sign.mutate({ id })}
-          >
-            {sign.isSuccess ? 'Signed' : 'Sign the record'}
-          </Button>
-        )}
-        {entry?.state === 'sent' && (
-          <Button size="lg" variant="default" onClick={startAnother}>
-            Start another record
-          </Button>
-        )}
-      </Group>
-      {sign.isError && <Text c="fail.8">{errorMessage(sign.error)}</Text>}
+      <RecordActions
+        entry={entry}
+        online={outbox.online}
+        sign={sign}
+        onSave={() => void save()}
+        onStartAnother={startAnother}
+      />
     </Stack>
   );
 }
@@ -239,7 +241,7 @@ export function Component() {
   return (
     <Page title="Field record">
       {query.isPending && <Skeleton h={320} />}
-      {query.isError && <ErrorPanel error={query.error} />}
+      {query.isError && <FormUnavailable error={query.error} />}
       {query.data && <RecordForm form={query.data} />}
     </Page>
   );

@@ -1,8 +1,11 @@
 import { Stack, Table, Text, Title } from '@mantine/core';
 import type { Dimension, SheetEvaluation } from '@holdfast/calc';
-import { presentSI, type UnitSystem } from '../utils/units';
+import { presentSetting, presentSI, type UnitSystem } from '../utils/units';
 
-/** The numbers the field team sets and measures, and the setting tables. */
+/**
+ * The numbers the field team sets and measures, and the setting tables, to the same figures as
+ * the printed field card and sheet (each setting to the step a fitter sets it by).
+ */
 export function FieldSettingsView({
   evaluation,
   unitSystem,
@@ -30,7 +33,7 @@ export function FieldSettingsView({
                   ) : null}
                 </Table.Td>
                 <Table.Td ff="monospace" ta="right" style={{ whiteSpace: 'nowrap' }}>
-                  {presentSI(s.value, s.dimension as Dimension, unitSystem).text}
+                  {presentSetting(s.value, s.key, s.dimension as Dimension, unitSystem).text}
                 </Table.Td>
               </Table.Tr>
             ))}
@@ -64,8 +67,12 @@ export function FieldSettingsView({
                     {heads.map((c) => (
                       <Table.Td key={c.key} ff="monospace" ta="right">
                         {
-                          presentSI(row[c.key] ?? Number.NaN, c.dimension as Dimension, unitSystem)
-                            .number
+                          presentSetting(
+                            row[c.key] ?? Number.NaN,
+                            c.key,
+                            c.dimension as Dimension,
+                            unitSystem,
+                          ).number
                         }
                       </Table.Td>
                     ))}

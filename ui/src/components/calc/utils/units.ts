@@ -2,6 +2,7 @@ import {
   displayUnitFor,
   formatNumber,
   fromSI,
+  settingPrecision,
   toDisplay,
   toSI,
   unitsFor,
@@ -71,6 +72,27 @@ export function presentSI(
   } catch {
     const number = formatNumber(valueSI, digits);
     return { number, unit: '', text: number };
+  }
+}
+
+/**
+ * A field setting as the printed field card shows it: in the unit system, to the step a fitter
+ * sets it by (calc's `settingPrecision`, the same function the card prints with), so the screen
+ * and the card never disagree (a spring length of 0.2227 m reads 222.5 mm on both).
+ */
+export function presentSetting(
+  valueSI: number,
+  key: string,
+  dimension: Dimension,
+  system: UnitSystem,
+): { number: string; unit: string; text: string } {
+  if (!Number.isFinite(valueSI)) return { number: '—', unit: '', text: '—' };
+  try {
+    const d = toDisplay(valueSI, dimension, system, undefined, settingPrecision(key, dimension));
+    const number = d.label ? d.text.slice(0, d.text.length - d.label.length).trim() : d.text;
+    return { number, unit: d.label, text: d.text };
+  } catch {
+    return presentSI(valueSI, dimension, system);
   }
 }
 

@@ -19,7 +19,7 @@ import { errorMessage } from '../../../lib/api-client';
 import { useAttachments } from '../api/get-attachments';
 import { useDownloadAttachment } from '../api/download-attachment';
 import { useUploadAttachment } from '../api/upload-attachment';
-import { formatBytes } from '../utils/format-bytes';
+import { formatBytes } from '../../../lib/format-bytes';
 
 interface Upload {
   name: string;

@@ -10,9 +10,10 @@ function dueText(d: DueInspection): string {
 }
 
 function Line({ d }: { d: DueInspection }) {
+  // A div, not a paragraph: the overdue badge is a block element.
   return (
-    <Text size="sm">
-      <Anchor component={Link} to={`/positions/${d.positionId}/field`}>
+    <Text size="sm" component="div">
+      <Anchor component={Link} to={`/positions/${d.positionId}/field`} underline="always">
         {d.siteCode} · {d.machineTag} · {d.positionTag}
       </Anchor>{' '}
       {dueText(d)}

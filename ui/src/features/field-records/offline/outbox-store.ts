@@ -8,6 +8,27 @@ import type { CreateFieldRecordInput } from '@holdfast/shared';
  */
 export type OutboxState = 'saved' | 'sending' | 'sent' | 'refused';
 
+/** Where a photo kept with a record stands: waiting to be sent, on the server, or refused. */
+export type OutboxPhotoState = 'waiting' | 'sent' | 'refused';
+
+/**
+ * A photo kept on the device with its record, sent after the record (the server takes photos
+ * only for a record it has, while it is a draft).
+ */
+export interface OutboxPhoto {
+  /** Made on the device, to tell two photos of the same name apart. */
+  id: string;
+  name: string;
+  /** The content type the browser gave; the server decides by the bytes. */
+  type: string;
+  size: number;
+  /** The bytes: an ArrayBuffer is stored by every IndexedDB, a File not by all. */
+  bytes: ArrayBuffer;
+  state: OutboxPhotoState;
+  /** The server's reason for refusing it. */
+  message?: string;
+}
+
 export interface OutboxEntry {
   id: string;
   payload: CreateFieldRecordInput;
@@ -19,6 +40,8 @@ export interface OutboxEntry {
   /** Why the server refused it, with the field errors, or the last connection failure. */
   message?: string;
   fields?: { path: string; message: string }[];
+  /** Photos to send once the record is on the server (absent in entries saved before photos). */
+  photos?: OutboxPhoto[];
 }
 
 interface OutboxDb extends DBSchema {
@@ -51,8 +74,15 @@ function changed(): void {
   for (const fn of listeners) fn();
 }
 
-/** Keeps a record on the device, ready to send; replaces an unsent entry with the same id. */
-export async function saveToOutbox(payload: CreateFieldRecordInput, now = new Date()) {
+/**
+ * Keeps a record on the device, ready to send; replaces an unsent entry with the same id and
+ * keeps the photos it already held, adding `photos`.
+ */
+export async function saveToOutbox(
+  payload: CreateFieldRecordInput,
+  now = new Date(),
+  photos: readonly OutboxPhoto[] = [],
+) {
   const database = await db();
   const existing = await database.get('outbox', payload.id);
   if (existing?.state === 'sent') throw new Error('this record has already been sent');
@@ -62,6 +92,7 @@ export async function saveToOutbox(payload: CreateFieldRecordInput, now = new Da
     state: 'saved',
     savedAt: now.toISOString(),
     attempts: existing?.attempts ?? 0,
+    photos: [...(existing?.photos ?? []), ...photos],
   };
   await database.put('outbox', entry);
   changed();
@@ -93,6 +124,40 @@ export async function updateOutboxEntry(
   await tx.done;
   changed();
   return next;
+}
+
+/** Adds photos to a record already kept on the device (also after it was sent). */
+export async function addOutboxPhotos(id: string, photos: readonly OutboxPhoto[]) {
+  const tx = (await db()).transaction('outbox', 'readwrite');
+  const entry = await tx.store.get(id);
+  if (!entry) {
+    await tx.done;
+    throw new Error('this record is not kept on this device');
+  }
+  await tx.store.put({ ...entry, photos: [...(entry.photos ?? []), ...photos] });
+  await tx.done;
+  changed();
+}
+
+/** Writes one photo's new state. */
+export async function updateOutboxPhoto(
+  id: string,
+  photoId: string,
+  patch: Pick<OutboxPhoto, 'state' | 'message'>,
+): Promise<void> {
+  const tx = (await db()).transaction('outbox', 'readwrite');
+  const entry = await tx.store.get(id);
+  if (entry) {
+    const photos = (entry.photos ?? []).map((p) => (p.id === photoId ? { ...p, ...patch } : p));
+    await tx.store.put({ ...entry, photos });
+  }
+  await tx.done;
+  changed();
+}
+
+/** Photos of an entry still to be sent. */
+export function waitingPhotos(entry: OutboxEntry | undefined): OutboxPhoto[] {
+  return (entry?.photos ?? []).filter((p) => p.state === 'waiting');
 }
 
 /** Drops an entry the fitter no longer wants (a refused one after re-entering it, or a sent one). */

@@ -4,7 +4,13 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import type { CreateFieldRecordInput } from '@holdfast/shared';
 import { ApiRequestError } from '../../../lib/api-error';
 import { flushOutbox } from './outbox-sender';
-import { listOutbox, resetOutboxConnection, saveToOutbox } from './outbox-store';
+import {
+  addOutboxPhotos,
+  listOutbox,
+  resetOutboxConnection,
+  saveToOutbox,
+  type OutboxPhoto,
+} from './outbox-store';
 
 const record = (id: string): CreateFieldRecordInput => ({
   id,
@@ -115,5 +121,95 @@ describe('field record outbox', () => {
     await saveToOutbox(record(A));
     await flushOutbox(server.send);
     await expect(saveToOutbox(record(A))).rejects.toThrow(/already been sent/);
+  });
+});
+
+const photo = (name: string, bytes = [0xff, 0xd8, 0xff]): OutboxPhoto => ({
+  id: `photo-${name}`,
+  name,
+  type: 'image/jpeg',
+  size: bytes.length,
+  bytes: new Uint8Array(bytes).buffer,
+  state: 'waiting',
+});
+
+/** A stand-in photo upload: keeps what it was sent per record, or fails as told. */
+function fakePhotos() {
+  const stored: { recordId: string; name: string; bytes: number[] }[] = [];
+  let mode: 'offline' | 'up' = 'up';
+  return {
+    stored,
+    set: (m: typeof mode) => (mode = m),
+    send: async (recordId: string, p: OutboxPhoto) => {
+      if (mode === 'offline') throw ApiRequestError.network();
+      if (p.name.endsWith('.gif')) {
+        throw new ApiRequestError(415, 'unsupported_media_type', 'Photos are PNG or JPEG.', [
+          { path: 'file', message: 'content is not a PNG or JPEG image' },
+        ]);
+      }
+      stored.push({ recordId, name: p.name, bytes: [...new Uint8Array(p.bytes)] });
+      return p;
+    },
+  };
+}
+
+describe('photos kept with a record in the outbox', () => {
+  it('keeps photos offline and sends each once, after its record, when back', async () => {
+    const server = fakeServer();
+    const photos = fakePhotos();
+    server.set('offline');
+    photos.set('offline');
+    await saveToOutbox(record(A), new Date(), [photo('shoe-a.jpg'), photo('shoe-b.jpg')]);
+    await flushOutbox(server.send, photos.send);
+    expect(photos.stored).toEqual([]);
+    const [kept] = await listOutbox();
+    expect(kept!.photos!.map((p) => [p.name, p.state])).toEqual([
+      ['shoe-a.jpg', 'waiting'],
+      ['shoe-b.jpg', 'waiting'],
+    ]);
+    expect([...new Uint8Array(kept!.photos![0]!.bytes)]).toEqual([0xff, 0xd8, 0xff]);
+
+    server.set('up');
+    photos.set('up');
+    expect(await flushOutbox(server.send, photos.send)).toBe(1);
+    await flushOutbox(server.send, photos.send);
+    expect(server.stored.has(A)).toBe(true);
+    expect(photos.stored.map((p) => [p.recordId, p.name])).toEqual([
+      [A, 'shoe-a.jpg'],
+      [A, 'shoe-b.jpg'],
+    ]);
+    const [sent] = await listOutbox();
+    expect(sent!.photos!.every((p) => p.state === 'sent')).toBe(true);
+  });
+
+  it('a photo the server refuses is marked with its reason; the others still go', async () => {
+    const server = fakeServer();
+    const photos = fakePhotos();
+    await saveToOutbox(record(A), new Date(), [photo('sketch.gif'), photo('lining.jpg')]);
+    await flushOutbox(server.send, photos.send);
+    const [entry] = await listOutbox();
+    expect(entry!.state).toBe('sent');
+    expect(entry!.photos!.map((p) => [p.name, p.state, p.message])).toEqual([
+      ['sketch.gif', 'refused', 'Photos are PNG or JPEG.'],
+      ['lining.jpg', 'sent', undefined],
+    ]);
+    expect(photos.stored.map((p) => p.name)).toEqual(['lining.jpg']);
+  });
+
+  it('photos added after the record was sent go on the next run; saving again keeps them', async () => {
+    const server = fakeServer();
+    const photos = fakePhotos();
+    server.set('offline');
+    await saveToOutbox(record(A), new Date(), [photo('before.jpg')]);
+    // Re-saving the unsent record (an edit) keeps the photo already kept with it.
+    await saveToOutbox({ ...record(A), findings: 'Drag on shoe B' }, new Date());
+    expect((await listOutbox())[0]!.photos!.map((p) => p.name)).toEqual(['before.jpg']);
+    server.set('up');
+    await flushOutbox(server.send, photos.send);
+    await addOutboxPhotos(A, [photo('after.jpg')]);
+    expect(await flushOutbox(server.send, photos.send)).toBe(0);
+    expect(photos.stored.map((p) => p.name)).toEqual(['before.jpg', 'after.jpg']);
+    // The record itself is not sent again for the later photo.
+    expect(server.calls()).toBe(1);
   });
 });

@@ -1,0 +1,55 @@
+import { Button, Group, Text } from '@mantine/core';
+import { errorMessage } from '../../../lib/api-client';
+import type { useSignFieldRecord } from '../../../features/field-records/api/sign-field-record';
+import { OutboxStatus } from '../../../features/field-records/components/outbox-status';
+import {
+  waitingPhotos,
+  type OutboxEntry,
+} from '../../../features/field-records/offline/outbox-store';
+
+/** Where the record stands on the device, and save, sign or start another as it allows. */
+export function RecordActions(props: {
+  entry: OutboxEntry | undefined;
+  online: boolean;
+  sign: ReturnType<typeof useSignFieldRecord>;
+  onSave: () => void;
+  onStartAnother: () => void;
+}) {
+  const { entry, online, sign } = props;
+  const sent = entry?.state === 'sent';
+  const photosWaiting = waitingPhotos(entry).length;
+  return (
+    <>
+      {entry && <OutboxStatus entry={entry} online={online} />}
+      <Group grow>
+        {!sent && (
+          <Button size="lg" onClick={props.onSave}>
+            Save record
+          </Button>
+        )}
+        {sent && (
+          <Button
+            size="lg"
+            loading={sign.isPending}
+            disabled={!online || sign.isSuccess || photosWaiting > 0}
+            onClick={() => sign.mutate({ id: entry.id })}
+          >
+            {sign.isSuccess ? 'Signed' : 'Sign the record'}
+          </Button>
+        )}
+        {sent && (
+          <Button size="lg" variant="default" onClick={props.onStartAnother}>
+            Start another record
+          </Button>
+        )}
+      </Group>
+      {sent && photosWaiting > 0 && !sign.isSuccess && (
+        <Text size="sm">
+          {photosWaiting === 1 ? '1 photo is' : `${photosWaiting} photos are`} still to be sent:
+          sign once they are on the server, as a signed record takes no more photos.
+        </Text>
+      )}
+      {sign.isError && <Text c="fail.8">{errorMessage(sign.error)}</Text>}
+    </>
+  );
+}

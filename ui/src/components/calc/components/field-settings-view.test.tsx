@@ -1,0 +1,99 @@
+import { describe, expect, it } from 'vitest';
+import { screen, within } from '@testing-library/react';
+import { settingPrecision, toDisplay, type SheetEvaluation } from '@holdfast/calc';
+import { renderWithProviders } from '../../../testing/render';
+import { FieldSettingsView } from './field-settings-view';
+
+function evaluation(parts: Partial<SheetEvaluation>): SheetEvaluation {
+  return {
+    sheetType: 'shoe-brake-release',
+    coreVersion: 'test',
+    criteriaSetId: 'test',
+    criteriaSetVersion: 1,
+    results: [],
+    checks: [],
+    derivation: [],
+    charts: [],
+    fieldSettings: [],
+    tables: [],
+    warnings: [],
+    pass: true,
+    ...parts,
+  };
+}
+
+const spring = {
+  key: 'springLength',
+  label: 'Main spring length as set',
+  value: 0.2227,
+  unit: 'm',
+  dimension: 'length' as const,
+};
+
+/** What the printed card prints: calc's toDisplay with the setting's precision. */
+function printed(value: number, key: string, system: 'SI' | 'US'): string {
+  return toDisplay(value, 'length', system, undefined, settingPrecision(key, 'length')).text;
+}
+
+describe('FieldSettingsView', () => {
+  it('shows a spring length of 0.2227 m as the card prints it: 222.5 mm, to the 0.5 mm rule step', () => {
+    renderWithProviders(
+      <FieldSettingsView evaluation={evaluation({ fieldSettings: [spring] })} unitSystem="SI" />,
+    );
+    const row = screen.getByRole('row', { name: /Main spring length as set/ });
+    expect(row).toHaveTextContent('222.5 mm');
+    // Rounded by dimension alone it would read 222.7 mm, which the card never prints.
+    expect(row).not.toHaveTextContent('222.7');
+    expect(printed(0.2227, 'springLength', 'SI')).toBe('222.5 mm');
+  });
+
+  it('rounds a shoe clearance to the 0.05 mm feeler step, and US units as the card does', () => {
+    const clearance = {
+      key: 'shoeClearance',
+      label: 'Shoe clearance each side',
+      value: 0.00083,
+      unit: 'm',
+      dimension: 'length' as const,
+    };
+    const { unmount } = renderWithProviders(
+      <FieldSettingsView
+        evaluation={evaluation({ fieldSettings: [spring, clearance] })}
+        unitSystem="SI"
+      />,
+    );
+    expect(screen.getByRole('row', { name: /Shoe clearance each side/ })).toHaveTextContent(
+      '0.85 mm',
+    );
+    unmount();
+    renderWithProviders(
+      <FieldSettingsView evaluation={evaluation({ fieldSettings: [spring] })} unitSystem="US" />,
+    );
+    expect(screen.getByRole('row', { name: /Main spring length as set/ })).toHaveTextContent(
+      printed(0.2227, 'springLength', 'US'),
+    );
+  });
+
+  it('prints setting-table cells to the same steps as the printed table', () => {
+    renderWithProviders(
+      <FieldSettingsView
+        evaluation={evaluation({
+          tables: [
+            {
+              id: 'spring-table',
+              title: 'Spring setting table',
+              columns: [
+                { key: 'springLength', label: 'Spring length', unit: 'm', dimension: 'length' },
+              ],
+              rows: [{ springLength: 0.2227 }, { springLength: 0.21862 }],
+            },
+          ],
+        })}
+        unitSystem="SI"
+      />,
+    );
+    const table = screen.getByRole('table', { name: 'Spring setting table' });
+    expect(within(table).getByRole('columnheader')).toHaveTextContent('Spring length (mm)');
+    const cells = within(table).getAllByRole('cell');
+    expect(cells.map((c) => c.textContent)).toEqual(['222.5', '218.5']);
+  });
+});

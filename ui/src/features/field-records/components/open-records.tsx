@@ -1,0 +1,51 @@
+import { Anchor, Badge, Paper, Stack, Text, Title } from '@mantine/core';
+import { Link } from 'react-router-dom';
+import { fieldRecordKindLabels, type FieldRecordStatus } from '@holdfast/shared';
+import { ErrorPanel } from '../../../components/errors/error-panel';
+import { useFieldRecords } from '../api/get-field-records';
+
+const titles: Record<Exclude<FieldRecordStatus, 'countersigned'>, string> = {
+  draft: 'Records not yet signed',
+  signed: 'Signed, awaiting countersignature',
+};
+
+/** Field records still open in one status, each linked to its position's field page. */
+export function OpenRecords({ status }: { status: 'draft' | 'signed' }) {
+  const records = useFieldRecords(status);
+  const titleId = `field-records-${status}-title`;
+  return (
+    <Paper withBorder p="md" component="section" aria-labelledby={titleId}>
+      <Title order={2} size="h4" id={titleId} mb="xs">
+        {titles[status]}
+      </Title>
+      {records.isError ? (
+        <ErrorPanel error={records.error} onRetry={() => void records.refetch()} />
+      ) : !records.data ? (
+        <Text size="sm" c="dimmed">
+          Loading…
+        </Text>
+      ) : records.data.items.length === 0 ? (
+        <Text size="sm" c="dimmed">
+          None.
+        </Text>
+      ) : (
+        <Stack gap={4} component="ul" p={0} m={0} style={{ listStyle: 'none' }}>
+          {records.data.items.map((r) => (
+            <Text size="sm" component="li" key={r.id}>
+              <Anchor component={Link} to={`/positions/${r.positionId}/field`} underline="always">
+                {r.positionTag}
+              </Anchor>{' '}
+              {r.performedAt.slice(0, 10)} · {fieldRecordKindLabels[r.kind]} · {r.documentNumber}{' '}
+              rev. {r.revisionLabel}
+              {r.outOfTolerance ? (
+                <Badge ml="xs" color="fail" size="sm">
+                  out of tolerance
+                </Badge>
+              ) : null}
+            </Text>
+          ))}
+        </Stack>
+      )}
+    </Paper>
+  );
+}
