@@ -78,7 +78,7 @@ export class FieldRecordsService {
       sheetType: rev.sheetType,
       positionId: rev.positionId,
       targets: fieldTargets(rev.sheetType, rev.evaluation),
-      checks: formChecks,
+      checks: formChecks(rev.sheetType),
     };
   }
 
