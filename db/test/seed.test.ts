@@ -1,4 +1,5 @@
 import type { Kysely } from 'kysely';
+import { fieldCheckKeys } from '@holdfast/shared';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createDatabase, createMigrationDatabase } from '../src/connection.js';
 import type { DB } from '../src/database.js';
@@ -47,6 +48,28 @@ describe('seed', () => {
     expect(engineer.passwordHash).toMatch(/^\$argon2id\$/);
     expect(await verifyPassword(engineer.passwordHash, DEMO_PASSWORD)).toBe(true);
     expect(await verifyPassword(engineer.passwordHash, 'something-else')).toBe(false);
+  });
+
+  it('signs no demo field record with a check item unanswered, as the server refuses to', async () => {
+    const signed = await db
+      .selectFrom('fieldRecords')
+      .select('id')
+      .where('status', '<>', 'draft')
+      .execute();
+    expect(signed.length).toBeGreaterThan(0);
+    const checks = await db
+      .selectFrom('fieldRecordChecks')
+      .select(['recordId', 'key'])
+      .where(
+        'recordId',
+        'in',
+        signed.map((r) => r.id),
+      )
+      .execute();
+    for (const r of signed) {
+      const keys = checks.filter((c) => c.recordId === r.id).map((c) => c.key);
+      expect(keys.sort(), r.id).toEqual([...fieldCheckKeys].sort());
+    }
   });
 
   it('is idempotent and keeps changes made since', async () => {
