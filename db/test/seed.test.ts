@@ -72,6 +72,40 @@ describe('seed', () => {
     }
   });
 
+  it('a demo change note says "no change on site" only where no field setting moved, "re-set" only where one did', async () => {
+    const revs = await db
+      .selectFrom('revisions')
+      .select(['sheetId', 'seq', 'label', 'changeNote', 'evaluation'])
+      .orderBy('sheetId')
+      .orderBy('seq')
+      .execute();
+    const settings = (e: unknown) =>
+      new Map(
+        ((e as { fieldSettings?: { key: string; value: number }[] }).fieldSettings ?? []).map(
+          (f) => [f.key, f.value],
+        ),
+      );
+    const moved = (a: Map<string, number>, b: Map<string, number>) =>
+      [...new Set([...a.keys(), ...b.keys()])].filter((k) => {
+        const x = a.get(k);
+        const y = b.get(k);
+        return x === undefined || y === undefined || Math.abs(x - y) > 1e-9 * Math.abs(x);
+      });
+    let told = 0;
+    for (const [i, r] of revs.entries()) {
+      const before = revs[i - 1];
+      if (!before || before.sheetId !== r.sheetId) continue;
+      const changed = moved(settings(before.evaluation), settings(r.evaluation));
+      const where = `${r.label}: ${r.changeNote}`;
+      if (/no change on site/i.test(r.changeNote)) {
+        told++;
+        expect(changed, where).toEqual([]);
+      }
+      if (/\bre-set\b/i.test(r.changeNote)) expect(changed.length, where).toBeGreaterThan(0);
+    }
+    expect(told).toBeGreaterThan(0);
+  });
+
   it('is idempotent and keeps changes made since', async () => {
     await db
       .updateTable('users')
