@@ -18,6 +18,7 @@ interface Visit {
   found: Record<string, number>;
   left: Record<string, number>;
   reasons?: Record<string, string>;
+  /** Lining thickness of shoe (pad) A and B; null when judged at the wear limit by eye. */
   lining: [number, number] | null;
   findings: string;
   meterHours?: number;
@@ -215,12 +216,12 @@ async function addVisits(
         { key: 'set-release-cycles', result: 'ok', cycles: 5 },
         { key: 'thruster-condition', result: 'ok' },
         { key: 'linkage-condition', result: 'ok' },
-        ...(v.lining
-          ? [
-              { key: 'lining-thickness-shoe-a', result: 'ok', value: v.lining[0] },
-              { key: 'lining-thickness-shoe-b', result: 'ok', value: v.lining[1] },
-            ]
-          : []),
+        // Signed, so every item is answered (the server signs nothing less).
+        ...(['lining-thickness-shoe-a', 'lining-thickness-shoe-b'] as const).map((key, i) =>
+          v.lining
+            ? { key, result: 'ok', value: v.lining[i] }
+            : { key, result: 'not-ok', note: 'At the wear limit, judged by eye; see findings.' },
+        ),
       ];
       await trx
         .insertInto('fieldRecordChecks')

@@ -1,4 +1,5 @@
 import type { Kysely } from 'kysely';
+import { fieldCheckKeys } from '@holdfast/shared';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createDatabase, createMigrationDatabase } from '../src/connection.js';
 import type { DB } from '../src/database.js';
@@ -47,6 +48,62 @@ describe('seed', () => {
     expect(engineer.passwordHash).toMatch(/^\$argon2id\$/);
     expect(await verifyPassword(engineer.passwordHash, DEMO_PASSWORD)).toBe(true);
     expect(await verifyPassword(engineer.passwordHash, 'something-else')).toBe(false);
+  });
+
+  it('signs no demo field record with a check item unanswered, as the server refuses to', async () => {
+    const signed = await db
+      .selectFrom('fieldRecords')
+      .select('id')
+      .where('status', '<>', 'draft')
+      .execute();
+    expect(signed.length).toBeGreaterThan(0);
+    const checks = await db
+      .selectFrom('fieldRecordChecks')
+      .select(['recordId', 'key'])
+      .where(
+        'recordId',
+        'in',
+        signed.map((r) => r.id),
+      )
+      .execute();
+    for (const r of signed) {
+      const keys = checks.filter((c) => c.recordId === r.id).map((c) => c.key);
+      expect(keys.sort(), r.id).toEqual([...fieldCheckKeys].sort());
+    }
+  });
+
+  it('a demo change note says "no change on site" only where no field setting moved, "re-set" only where one did', async () => {
+    const revs = await db
+      .selectFrom('revisions')
+      .select(['sheetId', 'seq', 'label', 'changeNote', 'evaluation'])
+      .orderBy('sheetId')
+      .orderBy('seq')
+      .execute();
+    const settings = (e: unknown) =>
+      new Map(
+        ((e as { fieldSettings?: { key: string; value: number }[] }).fieldSettings ?? []).map(
+          (f) => [f.key, f.value],
+        ),
+      );
+    const moved = (a: Map<string, number>, b: Map<string, number>) =>
+      [...new Set([...a.keys(), ...b.keys()])].filter((k) => {
+        const x = a.get(k);
+        const y = b.get(k);
+        return x === undefined || y === undefined || Math.abs(x - y) > 1e-9 * Math.abs(x);
+      });
+    let told = 0;
+    for (const [i, r] of revs.entries()) {
+      const before = revs[i - 1];
+      if (!before || before.sheetId !== r.sheetId) continue;
+      const changed = moved(settings(before.evaluation), settings(r.evaluation));
+      const where = `${r.label}: ${r.changeNote}`;
+      if (/no change on site/i.test(r.changeNote)) {
+        told++;
+        expect(changed, where).toEqual([]);
+      }
+      if (/\bre-set\b/i.test(r.changeNote)) expect(changed.length, where).toBeGreaterThan(0);
+    }
+    expect(told).toBeGreaterThan(0);
   });
 
   it('is idempotent and keeps changes made since', async () => {

@@ -1,5 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { fieldCheckKeys } from '@holdfast/shared';
 import { InspectionScheduleService } from '../src/field-records/inspection-schedule.service.js';
 import { Database } from '../src/database/database.js';
 import { ensurePoppler, inspectPdf } from '../src/print/testing/poppler.js';
@@ -42,7 +43,8 @@ describe('field records', () => {
     kind: 'commissioning',
     performedAt: '2026-11-30T09:00:00Z',
     measurements: [{ settingKey: 'springLength', asFound: null, asLeft: spring().value }],
-    checks: [{ key: 'no-drag-shoe-a', result: 'ok' }],
+    // Every item answered: a record is signed only then.
+    checks: fieldCheckKeys.map((key) => ({ key, result: 'ok' })),
     ...over,
   });
 

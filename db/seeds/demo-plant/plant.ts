@@ -135,7 +135,9 @@ export const demoSheets: DemoSheet[] = [
         state: 'approved',
         author: E,
         checker: C2,
-        changeNote: 'Ladle mass raised; spring re-set.',
+        // What `vary` changes: the first quantity input, the motor power (× 1.08).
+        changeNote:
+          'Hoist motor uprated, 22 → 23.76 kW (motor data). The brake is sized on the full-load hoisting torque, which the motor does not change: all checks pass with the settings of rev A; no change on site.',
         vary: [0, 1.08],
         daysAgo: 30,
       },
@@ -144,7 +146,7 @@ export const demoSheets: DemoSheet[] = [
         author: E,
         checker: C,
         changeNote:
-          'Re-checked with calculation core 1.1.0: rubbing speed and p·v now at the speed the brake sets with (the load speeds up during the set delay); no credit for gear losses in the emergency stop (η_bd 0.88 → 1); torque model long shoe → short shoe for the requirement (conservative); motor maximum speed 2200 rpm from the motor data; set delay 0.3 s is the thruster set time at its coldest oil (maker’s data); 60 stops per hour split into 56 service and 4 emergency stops; drive train checked at μ max with the spring at 1600 N. Longer stopping distance and warmer drum, all checks pass; no change on site.',
+          'Re-checked with calculation core 1.1.0: rubbing speed and p·v now at the speed the brake sets with (the load speeds up during the set delay); no credit for gear losses in the emergency stop (η_bd 0.88 → 1); torque model long shoe → short shoe for the requirement (conservative); motor maximum speed 2200 rpm from the motor data; set delay 0.3 s is the thruster set time at its coldest oil (maker’s data); 60 stops per hour split into 56 service and 4 emergency stops; drive train checked at μ max with the spring at 1600 N. Longer stopping distance (0.19 → 0.24 m) and warmer drum (steady 66 → 77 °C), all checks pass; field settings as rev B (spring, shoe clearance, disc-spring back-offs): no change on site.',
         demoValues: RECHECK_1_1,
         daysAgo: 0,
       },

@@ -2,6 +2,7 @@
 // record is created under the id the device gave it, again and again until acknowledged (a
 // retried create returns the stored record), then signed until acknowledged.
 import { randomUUID } from 'node:crypto';
+import { fieldCheckKeys } from '@holdfast/shared';
 import { call } from './fault-cluster.js';
 
 export interface FieldRecordAcks {
@@ -56,7 +57,8 @@ export async function fieldRecordWorker(
       kind: 'periodic-inspection',
       performedAt: new Date().toISOString(),
       measurements: [{ settingKey: 'springLength', asFound: null, asLeft: record.springLength }],
-      checks: [{ key: 'no-drag-shoe-a', result: 'ok' }],
+      // Every item answered: the server signs nothing less.
+      checks: fieldCheckKeys.map((key) => ({ key, result: 'ok' })),
     };
     let created = false;
     while (running() && !created) {
@@ -84,10 +86,10 @@ export async function fieldRecordWorker(
 
 /** Queries that must come back empty: each names a field record written only in part. */
 export const fieldRecordHalfQueries: Record<string, string> = {
-  'a field record without its measurement and check': `
+  'a field record without its measurement and checks': `
     select f.id from field_records f
     where (select count(*) from field_record_measurements m where m.record_id = f.id) <> 1
-       or (select count(*) from field_record_checks c where c.record_id = f.id) <> 1`,
+       or (select count(*) from field_record_checks c where c.record_id = f.id) <> ${fieldCheckKeys.length}`,
   'a field record without exactly one creation event': `
     select f.id from field_records f
     where (select count(*) from audit_events a

@@ -13,9 +13,9 @@ import type {
   FieldTarget,
 } from '@holdfast/shared';
 import { fieldCheckKeys, fieldCheckKeysWithValue } from '@holdfast/shared';
+import { rotorOf } from './brake-rotor.js';
 
-/** Labels of the explicit check items, as the form and the printed record show them. */
-export const CHECK_LABELS: Record<FieldCheckKey, string> = {
+const DRUM_CHECK_LABELS: Record<FieldCheckKey, string> = {
   'no-drag-shoe-a': 'No drag on shoe A when released',
   'no-drag-shoe-b': 'No drag on shoe B when released',
   'set-release-cycles': 'Set/release cycles repeated and re-measured',
@@ -25,11 +25,35 @@ export const CHECK_LABELS: Record<FieldCheckKey, string> = {
   'lining-thickness-shoe-b': 'Lining thickness, shoe B',
 };
 
-export const formChecks = fieldCheckKeys.map((key) => ({
-  key,
-  label: CHECK_LABELS[key],
-  hasValue: fieldCheckKeysWithValue.includes(key),
-}));
+// A caliper's two pads take the places of shoes A and B; its release unit may be a thruster or
+// a hydraulic unit, so the item names neither. The keys stay: they are stored identifiers.
+const DISC_CHECK_LABELS: Record<FieldCheckKey, string> = {
+  'no-drag-shoe-a': 'No drag on pad A when released',
+  'no-drag-shoe-b': 'No drag on pad B when released',
+  'set-release-cycles': 'Set/release cycles repeated and re-measured',
+  'thruster-condition': 'Release unit condition (oil, seals, stroke free)',
+  'linkage-condition': 'Caliper condition (pins, guides, levers, wear)',
+  'lining-thickness-shoe-a': 'Lining thickness, pad A',
+  'lining-thickness-shoe-b': 'Lining thickness, pad B',
+};
+
+/**
+ * Labels of the explicit check items of a sheet type, as the record form (through the field-form
+ * API, the UI's only source of them) and the printed record show them.
+ */
+export function checkLabels(sheetType: string): Readonly<Record<FieldCheckKey, string>> {
+  return rotorOf(sheetType) === 'disc' ? DISC_CHECK_LABELS : DRUM_CHECK_LABELS;
+}
+
+/** The check items of the record form of a sheet type. */
+export function formChecks(sheetType: string) {
+  const labels = checkLabels(sheetType);
+  return fieldCheckKeys.map((key) => ({
+    key,
+    label: labels[key],
+    hasValue: fieldCheckKeysWithValue.includes(key),
+  }));
+}
 
 /** The field card's targets of a frozen evaluation, each with the tolerance its sheet declares. */
 export function fieldTargets(sheetType: string, evaluation: unknown): FieldTarget[] {

@@ -11,6 +11,7 @@ import type {
   FieldRecordSummary,
   UpdateFieldRecordInput,
 } from '@holdfast/shared';
+import { fieldCheckKeys } from '@holdfast/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { effectiveRoles } from '../auth/policy.js';
 import { AuditService } from '../audit/audit.service.js';
@@ -28,6 +29,7 @@ import {
 } from './field-records.repository.js';
 import { outOfToleranceMail } from './field-notifications.js';
 import {
+  checkLabels,
   fieldTargets,
   formChecks,
   judgeMeasurement,
@@ -35,6 +37,21 @@ import {
 } from '../calc/field-targets.js';
 
 const invalid = (fields: FieldIssue[]) => badRequest('Some fields are not valid.', fields);
+
+/**
+ * A signature says every check item was looked at: each needs an answer (OK, not OK or N/A)
+ * before signing, though a draft may hold only some. The form asks the same; this is the rule.
+ */
+function unansweredChecks(sheetType: string, checks: FieldRecord['checks']): FieldIssue[] {
+  const answered = new Set(checks.map((c) => c.key));
+  const labels = checkLabels(sheetType);
+  return fieldCheckKeys
+    .filter((key) => !answered.has(key))
+    .map((key) => ({
+      path: `checks.${key}`,
+      message: `${labels[key]}: not answered; answer every check before signing`,
+    }));
+}
 
 /**
  * The rules of field records: made against an approved revision of the position's sheet; a
@@ -78,7 +95,7 @@ export class FieldRecordsService {
       sheetType: rev.sheetType,
       positionId: rev.positionId,
       targets: fieldTargets(rev.sheetType, rev.evaluation),
-      checks: formChecks,
+      checks: formChecks(rev.sheetType),
     };
   }
 
@@ -245,14 +262,14 @@ export class FieldRecordsService {
       const record = toFieldRecord(stored, rev, '', new Map());
       const out = outOfToleranceAsLeft(record.measurements);
       const missing = out.filter((i) => record.measurements[i]!.reason.trim() === '');
-      if (missing.length > 0) {
-        throw invalid(
-          missing.map((i) => ({
-            path: `measurements.${i}.reason`,
-            message: 'as left is outside the tolerance: give the reason before signing',
-          })),
-        );
-      }
+      const issues: FieldIssue[] = [
+        ...missing.map((i) => ({
+          path: `measurements.${i}.reason`,
+          message: 'as left is outside the tolerance: give the reason before signing',
+        })),
+        ...unansweredChecks(rev.sheetType, record.checks),
+      ];
+      if (issues.length > 0) throw invalid(issues);
       let code = newVerificationCode(id);
       while (await this.repo.verificationCodeTaken(code, trx)) code = newVerificationCode(id);
       await this.repo.update(trx, id, {

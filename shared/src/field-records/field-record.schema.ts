@@ -29,8 +29,10 @@ export const fieldRecordStatusSchema = z.enum(fieldRecordStatuses);
 export type FieldRecordStatus = z.infer<typeof fieldRecordStatusSchema>;
 
 /**
- * The checks a fitter does on every visit, as explicit items. Shoes are A and B as the field card
- * names them; a caliper brake answers 'not-applicable' where an item has no meaning.
+ * The checks a fitter does on every visit, as explicit items. The keys are stored identifiers in
+ * drum-brake words (shoes A and B as the field card names them); on a caliper brake the same keys
+ * stand for pads A and B, its release unit and the caliper, and the field form's labels say so.
+ * An item with no meaning on a brake is answered 'not-applicable'.
  */
 export const fieldCheckKeys = [
   'no-drag-shoe-a',

@@ -2,7 +2,7 @@ import { Injectable } from '@nestjs/common';
 import type { PrintQuery } from '@holdfast/shared';
 import type { AuthUser } from '../../auth/auth-user.js';
 import { FieldRecordsService } from '../../field-records/field-records.service.js';
-import { CHECK_LABELS } from '../../calc/field-targets.js';
+import { checkLabels } from '../../calc/field-targets.js';
 import { RevisionsService } from '../../revisions/revisions.service.js';
 import { RevisionPrintable } from '../revision-printable.js';
 import { renderFieldRecordPdf } from './render-field-record.js';
@@ -27,7 +27,11 @@ export class FieldRecordPrintService {
       { ...revision, verificationCode: record.verificationCode },
       paper,
     );
-    const bytes = await renderFieldRecordPdf(record, printable, CHECK_LABELS);
+    const bytes = await renderFieldRecordPdf(
+      record,
+      printable,
+      checkLabels(printable.sheetType.id),
+    );
     const marking = record.status === 'draft' ? '-draft' : '';
     const fileName =
       `${record.positionTag}-field-record-${record.performedAt.slice(0, 10)}${marking}.pdf`.replace(

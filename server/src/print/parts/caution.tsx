@@ -1,14 +1,10 @@
 import { Text, View } from '@react-pdf/renderer';
+import type { BrakeRotor } from '../../calc/brake-rotor.js';
 import type { TextMeasure } from '../measure.js';
 import { colours } from '../theme.js';
 
-/** What the brake acts on: a drum-brake card never speaks of discs, a caliper card of drums. */
-export type BrakeRotor = 'drum' | 'disc';
-
-/** The rotor of a sheet type: only the caliper disc brake acts on a disc. */
-export function rotorOf(sheetTypeId: string): BrakeRotor {
-  return sheetTypeId === 'caliper-disc-brake' ? 'disc' : 'drum';
-}
+// The check items of a field record are worded by the same rule (calc/field-targets.ts).
+export { rotorOf, type BrakeRotor } from '../../calc/brake-rotor.js';
 
 /**
  * The usual cautions for work on a spring-applied, thruster-released brake, printed on the sheet
