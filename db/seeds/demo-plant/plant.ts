@@ -115,7 +115,7 @@ const NOT_IN_1_0 = ['springRelaxation'];
 
 export const demoSheets: DemoSheet[] = [
   {
-    title: 'Ladle crane 1 main hoist brake 1, heavier ladle',
+    title: 'Ladle crane 1 main hoist brake 1, uprated motor',
     machine: 'LC-1',
     position: 'MH-B1',
     sheetType: 'hoist-shoe-brake',
@@ -146,7 +146,7 @@ export const demoSheets: DemoSheet[] = [
         author: E,
         checker: C,
         changeNote:
-          'Re-checked with calculation core 1.1.0: rubbing speed and p·v now at the speed the brake sets with (the load speeds up during the set delay); no credit for gear losses in the emergency stop (η_bd 0.88 → 1); torque model long shoe → short shoe for the requirement (conservative); motor maximum speed 2200 rpm from the motor data; set delay 0.3 s is the thruster set time at its coldest oil (maker’s data); 60 stops per hour split into 56 service and 4 emergency stops; drive train checked at μ max with the spring at 1600 N. Longer stopping distance (0.19 → 0.24 m) and warmer drum (steady 66 → 77 °C), all checks pass; field settings as rev B (spring, shoe clearance, disc-spring back-offs): no change on site.',
+          'Re-checked with calculation core 1.1.0: rubbing speed and p·v now at the speed the brake sets with (the load speeds up during the set delay); no credit for gear losses in the emergency stop (η_bd 0.88 → 1); torque model long shoe → short shoe for the requirement (conservative); motor maximum speed 2200 rpm from the motor data; set delay 0.3 s is the thruster set time at its coldest oil (maker’s data); 60 stops per hour split into 56 service and 4 emergency stops; drive train checked at μ max with the spring at 1600 N; spring relaxation 2 % (spring maker’s data) taken off the worn torques, the stop and the setting band, and the stop worked out with the lowest torque in service (drum at its wear limit). To keep the stop within 250 mm the main spring is re-set 1100 → 1150 N (set length 222.5 → 221.5 mm; permitted band now 771–1600 N). Stopping distance 0.19 → 0.23 m, steady drum temperature 66 → 76 °C; all checks pass. On site: re-set the main spring to the card; shoe clearance, reserve stroke and disc-spring back-offs as rev B.',
         demoValues: RECHECK_1_1,
         daysAgo: 0,
       },
