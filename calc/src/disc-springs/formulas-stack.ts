@@ -14,12 +14,23 @@ const L = { dimension: 'length' } as const;
 const R = { dimension: 'dimensionless' } as const;
 const F = { dimension: 'force' } as const;
 
+/** The back-off in turns of the nut: what the fitter counts, and what the lead multiplies. */
+export const fTurns = defineFormula({
+  id: 'turns',
+  label: 'Back-off in turns of the nut',
+  symbol: 'n_θ',
+  expression: 'theta / (2 * pi)',
+  symbols: { theta: { text: 'θ', dimension: 'angle' } },
+  dimension: 'dimensionless',
+  reference: REF_BACKOFF,
+});
+
 export const fRelease = defineFormula({
   id: 'release',
   label: 'Axial release of the back-off',
   symbol: 'Δ',
-  expression: 'Pt * theta / (2 * pi)',
-  symbols: { Pt: { text: 'P', ...L }, theta: { text: 'θ', dimension: 'angle' } },
+  expression: 'Pt * n',
+  symbols: { Pt: { text: 'P', ...L }, n: { text: 'n_θ', dimension: 'dimensionless' } },
   dimension: 'length',
   reference: REF_BACKOFF,
 });

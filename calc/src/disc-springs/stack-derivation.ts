@@ -70,7 +70,8 @@ export function deriveStackSet(
   }
   const t = c.tCalc;
   const h0 = compute(d, f.fH0, { l0: disc.l0, t }, o.h0);
-  const release = compute(d, f.fRelease, { Pt: lead, theta: angle }, o.release);
+  const turns = compute(d, f.fTurns, { theta: angle }, o.turns);
+  const release = compute(d, f.fRelease, { Pt: lead, n: turns }, o.release);
   const i = stack.seriesCount;
   const n = stack.parallelCount;
   const s = compute(d, f.fSetDeflection, { h0, D: release, i }, o.setDeflection);
@@ -148,6 +149,7 @@ function stepOptionsFor(prefix: string) {
     C2: o('C2'),
     K4: o('K4'),
     h0: o('h0'),
+    turns: o('turns'),
     release: o('release'),
     setDeflection: o('set-deflection'),
     setRatio: o('set-ratio'),

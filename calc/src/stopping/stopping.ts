@@ -92,6 +92,16 @@ export const stopAngleFormula = defineFormula({
   reference: REF.stopping,
 });
 
+export const stopRevolutionsFormula = defineFormula({
+  id: 'stopping-revolutions',
+  label: 'Brake-shaft revolutions during the stop',
+  symbol: 'n_s',
+  expression: 'phi_s / (2 * pi)',
+  symbols: { phi_s: { text: 'φ_s', dimension: 'angle' } },
+  dimension: 'dimensionless',
+  reference: 'definition (one revolution is 2π rad)',
+});
+
 export const stopDistanceFormula = defineFormula({
   id: 'stopping-distance',
   label: 'Stopping distance at the load',
@@ -232,6 +242,8 @@ export function stopping(input: StoppingInput, d?: Derivation, prefix = ''): Sto
     { omega_0, omega_1, t_d: input.setDelay, t_b },
     o(stopAngleFormula),
   );
+  // Not used further: the same rotation in revolutions, which is how it is counted on the shaft.
+  compute(d, stopRevolutionsFormula, { phi_s }, o(stopRevolutionsFormula));
   const v_0 = input.loadSpeed;
   const stoppingDistance = compute(
     d,
