@@ -1,6 +1,7 @@
 import { sql } from 'kysely';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import {
+  approve,
   createSheet,
   createSheetsContext,
   makeRegister,
@@ -157,5 +158,48 @@ describe('sheet list: search, filters, sort, pagination', () => {
     const all = await ctx.request('GET', '/api/sheets?pageSize=1', { as: 'viewer' });
     expect(all.body.total).toBe(10012);
     for (const ms of Object.values(timings)) expect(ms).toBeLessThan(500);
+  });
+
+  it('writes each row as the sheet detail summarises it (JSON built by PostgreSQL)', async () => {
+    const reg = await makeRegister(ctx, 'JSN');
+    const draft = await createSheet(ctx, reg, { title: 'Quote " back\\slash \u00e9 brake' });
+    const inCheck = await createSheet(ctx, reg, { title: 'In check brake', as: 'engineer2' });
+    await submit(ctx, inCheck.revisions[0].id, 'engineer2');
+    const approved = await createSheet(ctx, reg, { title: 'Approved brake' });
+    await submit(ctx, approved.revisions[0].id);
+    await approve(ctx, approved.revisions[0].id);
+    const list = await ctx.request('GET', `/api/sheets?siteId=${reg.siteId}&sort=title`, {
+      as: 'viewer',
+    });
+    expect(list.status, list.text).toBe(200);
+    expect(list.headers.get('content-type')).toBe('application/json; charset=utf-8');
+    expect(Object.keys(list.body)).toEqual(['items', 'total', 'page', 'pageSize']);
+    expect(list.body).toMatchObject({ total: 3, page: 1, pageSize: 25 });
+    const ids = [approved.id, inCheck.id, draft.id];
+    expect(list.body.items.map((s: { id: string }) => s.id)).toEqual(ids);
+    for (const [i, id] of ids.entries()) {
+      const detail = await ctx.request('GET', `/api/sheets/${id}`, { as: 'viewer' });
+      const { criteriaSetId: _c, revisions: _r, ...summary } = detail.body;
+      // Same values, same key order, same ISO dates as toSheetSummary writes them.
+      expect(JSON.stringify(list.body.items[i])).toBe(JSON.stringify(summary));
+    }
+    expect(list.body.items[0].approved).toMatchObject({ label: 'A' });
+    expect(list.body.items[0].approved.approvedAt).toMatch(
+      /^\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d\.\d{3}Z$/,
+    );
+    expect(list.body.items[2]).toMatchObject({
+      title: 'Quote " back\\slash \u00e9 brake',
+      approved: null,
+    });
+    expect(list.body.items[1].latest.state).toBe('in_check');
+    // The same request again (a prepared statement by now) and a page past the end.
+    const again = await ctx.request('GET', `/api/sheets?siteId=${reg.siteId}&sort=title`, {
+      as: 'viewer',
+    });
+    expect(again.text).toBe(list.text);
+    const past = await ctx.request('GET', `/api/sheets?siteId=${reg.siteId}&page=3&pageSize=2`, {
+      as: 'viewer',
+    });
+    expect(past.text).toBe('{"items":[],"total":3,"page":3,"pageSize":2}');
   });
 });

@@ -1,6 +1,10 @@
 import type { SheetSummary } from '@holdfast/shared';
 import type { SheetSummaryRow } from './sheets.repository.js';
 
+/**
+ * A sheet's summary for the detail route. The register list writes the same JSON in SQL
+ * (`sheet-summary.sql.ts`): change both together (list.test.ts compares them).
+ */
 export function toSheetSummary(r: SheetSummaryRow): SheetSummary {
   return {
     id: r.id,

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, HttpCode, Param, Post, Query } from '@nestjs/common';
+import { Body, Controller, Get, Header, HttpCode, Param, Post, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import {
   compareQuerySchema,
@@ -21,6 +21,7 @@ import { Roles, SignedIn } from '../auth/policy.js';
 import { ApiBodySchema } from '../common/openapi.js';
 import { UuidParamPipe } from '../common/pipes/uuid-param.pipe.js';
 import { ZodValidationPipe } from '../common/pipes/zod-validation.pipe.js';
+import { JSON_CONTENT_TYPE, type JsonText } from '../http/json-text.js';
 import { sheetDetailFor } from '../revisions/read-rules.js';
 import { SheetsService } from './sheets.service.js';
 
@@ -32,9 +33,10 @@ export class SheetsController {
 
   @Get(apiRoutes.sheets.list.path)
   @SignedIn()
+  @Header('Content-Type', JSON_CONTENT_TYPE)
   list(
     @Query(new ZodValidationPipe(sheetListQuerySchema, 'query')) query: SheetListQuery,
-  ): Promise<SheetList> {
+  ): Promise<JsonText<SheetList>> {
     return this.sheets.list(query);
   }
 

@@ -34,6 +34,7 @@ import { toRevisionSummary } from '../revisions/revision-mapper.js';
 import { RevisionsRepository } from '../revisions/revisions.repository.js';
 import { RevisionsService } from '../revisions/revisions.service.js';
 import type { SheetEvaluation } from '@holdfast/calc';
+import type { JsonText } from '../http/json-text.js';
 import { toSheetSummary } from './sheet-mapper.js';
 import { SheetsRepository } from './sheets.repository.js';
 import { UsersRepository } from '../users/users.repository.js';
@@ -63,9 +64,10 @@ export class SheetsService {
     private readonly audit: AuditService,
   ) {}
 
-  async list(query: SheetListQuery): Promise<SheetList> {
-    const { rows, total } = await this.repo.list(query);
-    return { items: rows.map(toSheetSummary), total, page: query.page, pageSize: query.pageSize };
+  /** The register page as JSON text, in the key order of `SheetList`. */
+  async list(query: SheetListQuery): Promise<JsonText<SheetList>> {
+    const { items, total } = await this.repo.listJson(query);
+    return `{"items":${items},"total":${total},"page":${query.page},"pageSize":${query.pageSize}}`;
   }
 
   async detail(id: string, db: Kysely<DB> = this.db): Promise<SheetDetail> {
