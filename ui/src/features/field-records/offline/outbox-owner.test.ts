@@ -5,6 +5,7 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import type { CreateFieldRecordInput } from '@holdfast/shared';
 import { flushOutbox } from './outbox-sender';
 import {
+  addOutboxPhotos,
   claimOutboxEntries,
   listOutbox,
   resetOutboxConnection,
@@ -98,9 +99,11 @@ describe('outbox entries belong to the person who saved them', () => {
   it("refuses to save over another person's entry and keeps theirs as it was", async () => {
     await saveToOutbox(record(R1, 'Noor'), NOOR);
     await expect(saveToOutbox(record(R1, 'Tomas'), TOMAS)).rejects.toThrow(/another person/);
+    await expect(addOutboxPhotos(R1, [photo], TOMAS.id)).rejects.toThrow(/another person/);
     const [kept] = await listOutbox();
     expect(kept!.payload.findings).toBe('Noor');
     expect(kept!.owner?.id).toBe(NOOR.id);
+    expect(kept!.photos).toEqual([]);
   });
 
   it('stops sending as soon as the session is no longer the owner (signed out mid-run)', async () => {

@@ -187,13 +187,18 @@ export async function updateOutboxEntry(
   return next;
 }
 
-/** Adds photos to a record already kept on the device (also after it was sent). */
-export async function addOutboxPhotos(id: string, photos: readonly OutboxPhoto[]) {
+/**
+ * Adds photos to a record `userId` kept on the device (also after it was sent); never to another
+ * person's record, whose photos would then go under their name.
+ */
+export async function addOutboxPhotos(id: string, photos: readonly OutboxPhoto[], userId: string) {
   const tx = (await db()).transaction('outbox', 'readwrite');
   const entry = await tx.store.get(id);
-  if (!entry) {
+  if (!entry || !ownedBy(entry, userId)) {
     await tx.done;
-    throw new Error('this record is not kept on this device');
+    throw new Error(
+      entry ? 'this record was saved by another person' : 'this record is not kept on this device',
+    );
   }
   await tx.store.put({ ...entry, photos: [...(entry.photos ?? []), ...photos] });
   await tx.done;

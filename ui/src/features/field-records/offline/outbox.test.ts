@@ -215,7 +215,7 @@ describe('photos kept with a record in the outbox', () => {
     expect((await listOutbox())[0]!.photos!.map((p) => p.name)).toEqual(['before.jpg']);
     server.set('up');
     await flush(server.send, photos.send);
-    await addOutboxPhotos(A, [photo('after.jpg')]);
+    await addOutboxPhotos(A, [photo('after.jpg')], NOOR.id);
     expect(await flush(server.send, photos.send)).toBe(0);
     expect(photos.stored.map((p) => p.name)).toEqual(['before.jpg', 'after.jpg']);
     // The record itself is not sent again for the later photo.

@@ -71,7 +71,7 @@ export function useOutbox(
   /** Photos added to a record already kept on the device; sent after it. */
   const addPhotos = useCallback(
     async (id: string, photos: readonly OutboxPhoto[]) => {
-      await addOutboxPhotos(id, photos);
+      await addOutboxPhotos(id, photos, userId);
       if (navigator.onLine) void flushOutbox(userId, send, sendPhoto);
     },
     [userId, send, sendPhoto],
