@@ -8,6 +8,7 @@ import { PageLoader } from '../components/page-loader';
 import { SafetyCaution } from '../components/safety-caution';
 import { paths } from '../config/paths';
 import { UserMenu } from '../features/auth/components/user-menu';
+import { DeviceOutboxNotice } from '../features/field-records/components/device-outbox-notice';
 import { useRouteHandle } from '../lib/route-handle';
 import { useSession } from '../lib/session';
 import { FrameNav } from './frame-nav';
@@ -107,6 +108,7 @@ export function AppFrame() {
       </AppShell.Navbar>
       <AppShell.Main className={classes.main} id="main-content" tabIndex={-1}>
         <div className={handle.wide ? classes.wide : classes.content}>
+          <DeviceOutboxNotice key={session.user.id} user={session.user} />
           <Suspense fallback={<PageLoader />}>
             <Outlet />
           </Suspense>

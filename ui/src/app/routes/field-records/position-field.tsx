@@ -12,6 +12,7 @@ import { RecordTimeline } from '../../../features/field-records/components/recor
 import { WearChart } from '../../../features/field-records/components/wear-chart';
 import {
   LINING_KEYS,
+  liningChartTitle,
   MIN_RESERVE_KEY,
   RESERVE_KEY,
 } from '../../../features/field-records/components/wear-series';
@@ -86,10 +87,10 @@ export function Component() {
                   minimum === null ? null : length(minimum),
                 )}
               />
-              {LINING_KEYS.map((key, i) => (
+              {LINING_KEYS.map((key) => (
                 <WearChart
                   key={key}
-                  title={`Lining thickness, shoe ${'AB'[i]}`}
+                  title={liningChartTitle(form.data?.checks, key)}
                   series={liningSeries(records, key)}
                 />
               ))}

@@ -57,9 +57,9 @@ function localNow(): string {
 }
 
 function RecordForm({ form }: { form: FieldForm }) {
-  const outbox = useOutbox();
-  const sign = useSignFieldRecord();
   const user = useCurrentUser();
+  const outbox = useOutbox(user);
+  const sign = useSignFieldRecord();
   // What was typed here before a reload or a lost session, kept on this device.
   const [kept] = useState(() => loadFormDraft(user.id, form.revisionId));
   const [id, setId] = useState(() => kept?.id ?? crypto.randomUUID());

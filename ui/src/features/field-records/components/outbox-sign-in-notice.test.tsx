@@ -20,6 +20,7 @@ const record: CreateFieldRecordInput = {
   checks: [],
   findings: 'Checked offline',
 };
+const owner = testUsers.technician;
 const formPath = `/field-records/new/${record.revisionId}`;
 
 function setOnline(online: boolean) {
@@ -44,7 +45,7 @@ afterEach(() => vi.restoreAllMocks());
 
 describe('sign-in page after a reload without a connection', () => {
   it('says plainly that saved work waits on the device, and signs back in when online', async () => {
-    await saveToOutbox(record, new Date(), [
+    await saveToOutbox(record, owner, new Date(), [
       {
         id: 'p1',
         name: 'shoe-a.jpg',
@@ -64,7 +65,7 @@ describe('sign-in page after a reload without a connection', () => {
     expect(notice).toHaveTextContent('cannot open the record form until it returns');
     expect(
       await screen.findByText(
-        /Nothing saved is lost: 1 field record and 1 photo saved on this device wait here and are sent once the connection is back and you are signed in\./,
+        /Nothing saved is lost: 1 field record and 1 photo saved on this device wait here and are sent once the connection is back and the person who saved them is signed in\./,
       ),
     ).toBeInTheDocument();
     expect(mock.callsTo('POST /api/auth/refresh')).toHaveLength(0);
@@ -79,11 +80,11 @@ describe('sign-in page after a reload without a connection', () => {
   });
 
   it('online, tells the user that records kept on the device go once they sign in', async () => {
-    await saveToOutbox(record);
+    await saveToOutbox(record, owner);
     setOnline(true);
     renderSignIn();
     expect(await screen.findByTestId('outbox-notice')).toHaveTextContent(
-      '1 field record saved on this device is waiting to be sent: it goes once you sign in.',
+      `1 field record saved on this device by Teo Marsh (TM) is waiting to be sent: it goes once Teo Marsh signs in.`,
     );
     expect(screen.queryByTestId('offline-notice')).toBeNull();
   });

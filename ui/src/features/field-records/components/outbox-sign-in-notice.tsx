@@ -2,37 +2,40 @@ import { useEffect, useState } from 'react';
 import { Alert, Text } from '@mantine/core';
 import { IconCloudOff, IconInfoCircle } from '@tabler/icons-react';
 import { refreshSession } from '../../../lib/api-client';
-import { listOutbox, subscribeOutbox, waitingPhotos } from '../offline/outbox-store';
+import { listOutbox, subscribeOutbox } from '../offline/outbox-store';
+import {
+  ownerName,
+  summariseOutbox,
+  waitingText,
+  type OutboxSummary,
+} from '../offline/outbox-summary';
 import { useOnline } from '../offline/use-online';
 
-interface Waiting {
-  records: number;
-  photos: number;
-}
+const empty: OutboxSummary = summariseOutbox([], null);
 
-/** What this device still holds for the server; nothing when it has no IndexedDB. */
-async function countWaiting(): Promise<Waiting> {
+/** What this device still holds for the server, by whose it is; nothing without IndexedDB. */
+async function summarise(): Promise<OutboxSummary> {
   try {
-    const entries = await listOutbox();
-    return {
-      records: entries.filter((e) => e.state !== 'sent').length,
-      photos: entries.reduce((n, e) => n + waitingPhotos(e).length, 0),
-    };
+    return summariseOutbox(await listOutbox(), null);
   } catch {
-    return { records: 0, photos: 0 };
+    return empty;
   }
 }
 
-function plural(n: number, one: string, many: string): string {
-  return n === 1 ? `1 ${one}` : `${n} ${many}`;
-}
-
-function waitingText(w: Waiting): string {
-  const parts = [
-    w.records > 0 ? plural(w.records, 'field record', 'field records') : null,
-    w.photos > 0 ? plural(w.photos, 'photo', 'photos') : null,
-  ].filter(Boolean);
-  return parts.join(' and ');
+/** One sentence per person (and one for unassigned entries): what waits and when it goes. */
+function waitingLines(s: OutboxSummary): string[] {
+  const lines = s.others.map((o) => {
+    const one = o.records + o.photos === 1;
+    return `${waitingText(o)} saved on this device by ${ownerName(o.owner)} ${one ? 'is' : 'are'} waiting to be sent: ${one ? 'it goes' : 'they go'} once ${o.owner.displayName} signs in.`;
+  });
+  const u = s.unassignedWaiting;
+  if (u.records + u.photos > 0) {
+    const one = u.records + u.photos === 1;
+    lines.push(
+      `${waitingText(u)} saved on this device before it kept who saved each entry ${one ? 'is' : 'are'} waiting (unassigned): ${one ? 'it goes' : 'they go'} once the person who made ${one ? 'it' : 'them'} signs in and confirms ${one ? 'it is' : 'they are'} theirs.`,
+    );
+  }
+  return lines;
 }
 
 /**
@@ -44,13 +47,13 @@ function waitingText(w: Waiting): string {
  */
 export function OutboxSignInNotice({ returnsTo }: { returnsTo: string }) {
   const online = useOnline();
-  const [waiting, setWaiting] = useState<Waiting>({ records: 0, photos: 0 });
+  const [summary, setSummary] = useState<OutboxSummary>(empty);
 
   useEffect(() => {
     let live = true;
     const reload = () =>
-      void countWaiting().then((w) => {
-        if (live) setWaiting(w);
+      void summarise().then((w) => {
+        if (live) setSummary(w);
       });
     reload();
     const unsubscribe = subscribeOutbox(reload);
@@ -66,8 +69,12 @@ export function OutboxSignInNotice({ returnsTo }: { returnsTo: string }) {
     return () => window.removeEventListener('online', back);
   }, []);
 
-  const held = waitingText(waiting);
-  const one = waiting.records + waiting.photos === 1;
+  const total = [...summary.others, summary.unassignedWaiting].reduce(
+    (w, o) => ({ records: w.records + o.records, photos: w.photos + o.photos }),
+    { records: 0, photos: 0 },
+  );
+  const held = waitingText(total);
+  const one = total.records + total.photos === 1;
   const toRecord = returnsTo.startsWith('/field-records/');
   if (!online) {
     return (
@@ -84,8 +91,8 @@ export function OutboxSignInNotice({ returnsTo }: { returnsTo: string }) {
         </Text>
         <Text size="sm" mt={4}>
           {held
-            ? `Nothing saved is lost: ${held} saved on this device ${one ? 'waits' : 'wait'} here and ${one ? 'is' : 'are'} sent once the connection is back and you are signed in.`
-            : 'Records saved on this device stay here and are sent once the connection is back and you are signed in.'}
+            ? `Nothing saved is lost: ${held} saved on this device ${one ? 'waits' : 'wait'} here and ${one ? 'is' : 'are'} sent once the connection is back and the person who saved ${one ? 'it' : 'them'} is signed in.`
+            : 'Records saved on this device stay here and are sent once the connection is back and the person who saved them is signed in.'}
           {toRecord ? ' What you typed on the record form is kept on this device as well.' : ''}
         </Text>
         <Text size="sm" mt={4}>
@@ -103,7 +110,11 @@ export function OutboxSignInNotice({ returnsTo }: { returnsTo: string }) {
       icon={<IconInfoCircle aria-hidden />}
       data-testid="outbox-notice"
     >
-      {`${held} saved on this device ${one ? 'is' : 'are'} waiting to be sent: ${one ? 'it goes' : 'they go'} once you sign in.`}
+      {waitingLines(summary).map((line) => (
+        <Text size="sm" key={line}>
+          {line}
+        </Text>
+      ))}
     </Alert>
   );
 }

@@ -15,3 +15,17 @@ const DAY_S = 86400;
 export const dateOf = (s: number) => new Date(s * 1000);
 /** Wear rate in mm per 30 days, the unit the chart and text state it in. */
 export const mmPerMonth = (rate: number) => rate * 1000 * 30 * DAY_S;
+
+/**
+ * The title of a lining chart: the label the field form gives the check item, which names shoes
+ * on a drum brake and pads on a caliper brake (the server labels them per rotor). Until the form
+ * has loaded, or if it lacks the item, the title names neither rather than guess.
+ */
+export function liningChartTitle(
+  checks: readonly { key: FieldCheckKey; label: string }[] | undefined,
+  key: (typeof LINING_KEYS)[number],
+): string {
+  const label = checks?.find((c) => c.key === key)?.label;
+  if (label) return label;
+  return `Lining thickness, ${key === 'lining-thickness-shoe-a' ? 'side A' : 'side B'}`;
+}

@@ -1,8 +1,11 @@
 import { isApiRequestError } from '../../../lib/api-client';
+import { sessionStore } from '../../../lib/session';
 import type { CreateFieldRecordInput } from '@holdfast/shared';
 import {
   getOutboxEntry,
+  hasWork,
   listOutbox,
+  ownedBy,
   updateOutboxEntry,
   updateOutboxPhoto,
   waitingPhotos,
@@ -24,24 +27,35 @@ const REFUSED = new Set([400, 403, 404, 409, 413, 422]);
 /** A photo is also refused for its content type (not a PNG or JPEG). */
 const PHOTO_REFUSED = new Set([...REFUSED, 415]);
 
-let running: Promise<number> | null = null;
+const running = new Map<string, Promise<number>>();
+
+/** Whether `userId` is still the one signed in on this page (checked before every request). */
+export function signedInAs(userId: string): () => boolean {
+  return () => sessionStore.getState().user?.id === userId;
+}
 
 /**
- * Sends every record waiting on the device, oldest first, one at a time, and then its photos.
- * A record left 'sending' by a closed tab is sent again: the server keeps one record per id, so
- * a repeat is harmless. Concurrent calls share one run. Resolves to how many records were sent.
+ * Sends every record `userId` saved on the device, oldest first, one at a time, and then its
+ * photos; other people's entries and unassigned ones stay where they are. The server files a
+ * record under the session that sends it, so the run stops as soon as `stillSignedIn` says the
+ * session changed (a sign-out mid-run). A record left 'sending' by a closed tab is sent again:
+ * the server keeps one record per id, so a repeat is harmless. Concurrent calls for one user
+ * share one run. Resolves to how many records were sent.
  */
-export function flushOutbox(send: SendRecord, sendPhoto?: SendPhoto): Promise<number> {
-  running ??= (async () => {
+export function flushOutbox(
+  userId: string,
+  send: SendRecord,
+  sendPhoto?: SendPhoto,
+  stillSignedIn: () => boolean = signedInAs(userId),
+): Promise<number> {
+  const current = running.get(userId);
+  if (current) return current;
+  const run = (async () => {
     let sent = 0;
     try {
-      const waiting = (await listOutbox()).filter(
-        (e) =>
-          e.state === 'saved' ||
-          e.state === 'sending' ||
-          (e.state === 'sent' && waitingPhotos(e).length > 0),
-      );
+      const waiting = (await listOutbox()).filter((e) => ownedBy(e, userId) && hasWork(e));
       for (const entry of waiting) {
+        if (!stillSignedIn()) break;
         if (entry.state !== 'sent') {
           const outcome = await sendOne(entry, send);
           if (outcome === 'sent') sent++;
@@ -49,14 +63,17 @@ export function flushOutbox(send: SendRecord, sendPhoto?: SendPhoto): Promise<nu
           if (outcome === 'offline') break;
           if (outcome !== 'sent') continue;
         }
-        if (sendPhoto && (await sendPhotos(entry.id, sendPhoto)) === 'offline') break;
+        if (!sendPhoto) continue;
+        const photos = await sendPhotos(entry.id, sendPhoto, stillSignedIn);
+        if (photos === 'offline' || photos === 'signed-out') break;
       }
     } finally {
-      running = null;
+      running.delete(userId);
     }
     return sent;
   })();
-  return running;
+  running.set(userId, run);
+  return run;
 }
 
 async function sendOne(
@@ -87,8 +104,13 @@ async function sendOne(
  * Sends the photos of a record the server has, one at a time. Unlike the record, a photo sent
  * twice is stored twice, so a photo is marked sent as soon as the server answers.
  */
-async function sendPhotos(id: string, sendPhoto: SendPhoto): Promise<'done' | 'offline' | 'later'> {
+async function sendPhotos(
+  id: string,
+  sendPhoto: SendPhoto,
+  stillSignedIn: () => boolean,
+): Promise<'done' | 'offline' | 'later' | 'signed-out'> {
   for (const photo of waitingPhotos(await getOutboxEntry(id))) {
+    if (!stillSignedIn()) return 'signed-out';
     try {
       await sendPhoto(id, photo);
       await updateOutboxPhoto(id, photo.id, { state: 'sent', message: undefined });

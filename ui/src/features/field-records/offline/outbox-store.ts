@@ -29,8 +29,24 @@ export interface OutboxPhoto {
   message?: string;
 }
 
+/**
+ * Who made an entry on this device, as they were signed in when they saved it. Only their own
+ * session sends it: the server files a record under whoever's token carries it, so sending
+ * another person's entry would sign their work with the wrong name.
+ */
+export interface OutboxOwner {
+  id: string;
+  displayName: string;
+  initials: string;
+}
+
 export interface OutboxEntry {
   id: string;
+  /**
+   * Absent in entries kept by the version before owners were stored: those are "unassigned"
+   * and sent only after the signed-in user confirms they made them (`claimOutboxEntries`).
+   */
+  owner?: OutboxOwner;
   payload: CreateFieldRecordInput;
   state: OutboxState;
   /** ISO time the fitter saved it on the device. */
@@ -75,19 +91,25 @@ function changed(): void {
 }
 
 /**
- * Keeps a record on the device, ready to send; replaces an unsent entry with the same id and
- * keeps the photos it already held, adding `photos`.
+ * Keeps a record on the device for `owner`, ready to send; replaces an unsent entry with the
+ * same id and keeps the photos it already held, adding `photos`. Another person's entry is never
+ * replaced.
  */
 export async function saveToOutbox(
   payload: CreateFieldRecordInput,
+  owner: OutboxOwner,
   now = new Date(),
   photos: readonly OutboxPhoto[] = [],
 ) {
   const database = await db();
   const existing = await database.get('outbox', payload.id);
   if (existing?.state === 'sent') throw new Error('this record has already been sent');
+  if (existing?.owner && existing.owner.id !== owner.id) {
+    throw new Error('this record was saved on this device by another person');
+  }
   const entry: OutboxEntry = {
     id: payload.id,
+    owner: { id: owner.id, displayName: owner.displayName, initials: owner.initials },
     payload,
     state: 'saved',
     savedAt: now.toISOString(),
@@ -108,10 +130,49 @@ export async function getOutboxEntry(id: string): Promise<OutboxEntry | undefine
   return (await db()).get('outbox', id);
 }
 
+/** Whether `userId` may send this entry: it is theirs (unassigned ones wait to be claimed). */
+export function ownedBy(entry: OutboxEntry, userId: string): boolean {
+  return entry.owner?.id === userId;
+}
+
+/**
+ * Whether an entry has something to send: its record, or photos of a record the server has (a
+ * refused record waits for the fitter, photos and all).
+ */
+export function hasWork(entry: OutboxEntry): boolean {
+  return (
+    entry.state === 'saved' ||
+    entry.state === 'sending' ||
+    (entry.state === 'sent' && waitingPhotos(entry).length > 0)
+  );
+}
+
+/**
+ * The signed-in user takes unassigned entries (kept before owners were stored) as theirs, after
+ * they confirmed they made them; entries of a known person are left alone.
+ */
+export async function claimOutboxEntries(
+  ids: readonly string[],
+  owner: OutboxOwner,
+): Promise<number> {
+  const tx = (await db()).transaction('outbox', 'readwrite');
+  let claimed = 0;
+  for (const id of ids) {
+    const entry = await tx.store.get(id);
+    if (!entry || entry.owner) continue;
+    const { id: ownerId, displayName, initials } = owner;
+    await tx.store.put({ ...entry, owner: { id: ownerId, displayName, initials } });
+    claimed++;
+  }
+  await tx.done;
+  changed();
+  return claimed;
+}
+
 /** Writes an entry's new state in one transaction. */
 export async function updateOutboxEntry(
   id: string,
-  patch: Partial<Omit<OutboxEntry, 'id' | 'payload'>>,
+  patch: Partial<Omit<OutboxEntry, 'id' | 'payload' | 'owner'>>,
 ): Promise<OutboxEntry | undefined> {
   const tx = (await db()).transaction('outbox', 'readwrite');
   const entry = await tx.store.get(id);
@@ -126,13 +187,18 @@ export async function updateOutboxEntry(
   return next;
 }
 
-/** Adds photos to a record already kept on the device (also after it was sent). */
-export async function addOutboxPhotos(id: string, photos: readonly OutboxPhoto[]) {
+/**
+ * Adds photos to a record `userId` kept on the device (also after it was sent); never to another
+ * person's record, whose photos would then go under their name.
+ */
+export async function addOutboxPhotos(id: string, photos: readonly OutboxPhoto[], userId: string) {
   const tx = (await db()).transaction('outbox', 'readwrite');
   const entry = await tx.store.get(id);
-  if (!entry) {
+  if (!entry || !ownedBy(entry, userId)) {
     await tx.done;
-    throw new Error('this record is not kept on this device');
+    throw new Error(
+      entry ? 'this record was saved by another person' : 'this record is not kept on this device',
+    );
   }
   await tx.store.put({ ...entry, photos: [...(entry.photos ?? []), ...photos] });
   await tx.done;

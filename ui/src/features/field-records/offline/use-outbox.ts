@@ -6,20 +6,25 @@ import { flushOutbox, type SendPhoto, type SendRecord } from './outbox-sender';
 import {
   addOutboxPhotos,
   listOutbox,
+  ownedBy,
   saveToOutbox,
   subscribeOutbox,
   type OutboxEntry,
+  type OutboxOwner,
   type OutboxPhoto,
 } from './outbox-store';
 
 /**
- * The records kept on this device and what has become of them, kept current. Sends what is
- * waiting when the page opens, when the browser says the connection is back, and after each save.
+ * The records `user` kept on this device and what has become of them, kept current. Sends what
+ * is theirs when the page opens, when the browser says the connection is back, and after each
+ * save; other people's entries are neither listed nor sent here.
  */
 export function useOutbox(
+  user: OutboxOwner,
   send: SendRecord = createFieldRecord,
   sendPhoto: SendPhoto = uploadFieldPhoto,
 ) {
+  const { id: userId, displayName, initials } = user;
   const [entries, setEntries] = useState<OutboxEntry[]>([]);
   const [online, setOnline] = useState(() => navigator.onLine);
 
@@ -27,7 +32,7 @@ export function useOutbox(
     let live = true;
     const reload = () => {
       void listOutbox().then((list) => {
-        if (live) setEntries(list);
+        if (live) setEntries(list.filter((e) => ownedBy(e, userId)));
       });
     };
     reload();
@@ -36,42 +41,43 @@ export function useOutbox(
       live = false;
       unsubscribe();
     };
-  }, []);
+  }, [userId]);
 
   useEffect(() => {
     const goOnline = () => {
       setOnline(true);
-      void flushOutbox(send, sendPhoto);
+      void flushOutbox(userId, send, sendPhoto);
     };
     const goOffline = () => setOnline(false);
     window.addEventListener('online', goOnline);
     window.addEventListener('offline', goOffline);
-    if (navigator.onLine) void flushOutbox(send, sendPhoto);
+    if (navigator.onLine) void flushOutbox(userId, send, sendPhoto);
     return () => {
       window.removeEventListener('online', goOnline);
       window.removeEventListener('offline', goOffline);
     };
-  }, [send, sendPhoto]);
+  }, [userId, send, sendPhoto]);
 
   const save = useCallback(
     async (payload: CreateFieldRecordInput, photos: readonly OutboxPhoto[] = []) => {
-      const entry = await saveToOutbox(payload, new Date(), photos);
-      if (navigator.onLine) void flushOutbox(send, sendPhoto);
+      const owner = { id: userId, displayName, initials };
+      const entry = await saveToOutbox(payload, owner, new Date(), photos);
+      if (navigator.onLine) void flushOutbox(userId, send, sendPhoto);
       return entry;
     },
-    [send, sendPhoto],
+    [userId, displayName, initials, send, sendPhoto],
   );
 
   /** Photos added to a record already kept on the device; sent after it. */
   const addPhotos = useCallback(
     async (id: string, photos: readonly OutboxPhoto[]) => {
-      await addOutboxPhotos(id, photos);
-      if (navigator.onLine) void flushOutbox(send, sendPhoto);
+      await addOutboxPhotos(id, photos, userId);
+      if (navigator.onLine) void flushOutbox(userId, send, sendPhoto);
     },
-    [send, sendPhoto],
+    [userId, send, sendPhoto],
   );
 
-  return { entries, online, save, addPhotos, retry: () => flushOutbox(send, sendPhoto) };
+  return { entries, online, save, addPhotos, retry: () => flushOutbox(userId, send, sendPhoto) };
 }
 
 /** What the fitter reads for each state. */

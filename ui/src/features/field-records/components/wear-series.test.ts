@@ -1,0 +1,35 @@
+import { describe, expect, it } from 'vitest';
+import type { FieldForm } from '@holdfast/shared';
+import { LINING_KEYS, liningChartTitle } from './wear-series';
+
+// As the field-form API labels them per rotor (server/src/calc/field-targets.ts).
+const drum: FieldForm['checks'] = [
+  { key: 'lining-thickness-shoe-a', label: 'Lining thickness, shoe A', hasValue: true },
+  { key: 'lining-thickness-shoe-b', label: 'Lining thickness, shoe B', hasValue: true },
+];
+const disc: FieldForm['checks'] = [
+  { key: 'no-drag-shoe-a', label: 'No drag on pad A when released', hasValue: false },
+  { key: 'lining-thickness-shoe-a', label: 'Lining thickness, pad A', hasValue: true },
+  { key: 'lining-thickness-shoe-b', label: 'Lining thickness, pad B', hasValue: true },
+];
+
+describe('lining chart titles', () => {
+  it('say shoes on a drum brake and pads on a caliper brake, as the field form labels them', () => {
+    expect(LINING_KEYS.map((k) => liningChartTitle(drum, k))).toEqual([
+      'Lining thickness, shoe A',
+      'Lining thickness, shoe B',
+    ]);
+    expect(LINING_KEYS.map((k) => liningChartTitle(disc, k))).toEqual([
+      'Lining thickness, pad A',
+      'Lining thickness, pad B',
+    ]);
+  });
+
+  it('name neither shoe nor pad before the form has loaded', () => {
+    const titles = LINING_KEYS.map((k) => liningChartTitle(undefined, k));
+    expect(titles).toEqual(['Lining thickness, side A', 'Lining thickness, side B']);
+    for (const t of [...titles, ...LINING_KEYS.map((k) => liningChartTitle([], k))]) {
+      expect(t).not.toMatch(/shoe|pad/);
+    }
+  });
+});
