@@ -68,3 +68,9 @@ export { travelRatioCheck } from '../calc/src/shoe-brake/travel-ratio.js';
 export { compressionSpring } from '../calc/src/helical-spring/compression-spring.js';
 export { strokeWearChain, torqueWearPoints } from '../calc/src/release/stroke-wear.js';
 export { holdingBrakeRedundancy } from '../calc/src/duty/redundancy.js';
+export {
+  leverBending,
+  pinStrength,
+  shoePinLoad,
+  baseBoltTension,
+} from '../calc/src/levers/lever-strength.js';

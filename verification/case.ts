@@ -15,7 +15,8 @@ export type Family =
   | 'disc-springs'
   | 'thread-back-off'
   | 'spring-setting'
-  | 'helical-spring';
+  | 'helical-spring'
+  | 'levers';
 
 export const FAMILIES: readonly Family[] = [
   'duty',
@@ -30,6 +31,7 @@ export const FAMILIES: readonly Family[] = [
   'thread-back-off',
   'spring-setting',
   'helical-spring',
+  'levers',
 ];
 
 /** published: printed in the source; secondary: a copy or derived source; derived: computed by us from a published formula; memory: recalled. */

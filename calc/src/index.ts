@@ -54,6 +54,7 @@ export * from './duty/required-torque.js';
 export * from './duty/drive-train-overload.js';
 export * from './duty/load-consistency.js';
 export * from './duty/redundancy.js';
+export * from './levers/lever-strength.js';
 export * from './shoe-brake/shoe-force.js';
 export * from './shoe-brake/short-shoe.js';
 export * from './shoe-brake/pivoted-shoe.js';

@@ -65,6 +65,17 @@ export const SHOE_BOUNDS: Record<string, [number, number]> = {
   discNu: [0.1, 0.49],
   discFrictionEdge: [0, 0.19],
   discFrictionCone: [0, 0.19],
+  leverMomentArm: [1, 5000],
+  leverSectionWidth: [1, 500],
+  leverSectionDepth: [1, 1000],
+  leverAllowableBending: [1, 2000],
+  shoePinDiameter: [1, 500],
+  shoePinBearingLength: [1, 1000],
+  shoePinAllowableShear: [1, 2000],
+  shoePinAllowableBearing: [0.1, 1000],
+  baseBoltRowSpacing: [10, 10000],
+  baseBoltsPerRow: [1, 20],
+  baseBoltAllowableLoad: [0.01, 10000],
 };
 
 export const HOIST_BOUNDS: Record<string, [number, number]> = {

@@ -22,6 +22,7 @@ import {
   shoeTravelRatio,
 } from './shoe-brake-at-set.js';
 import { shoeMainSpring } from './shoe-main-spring.js';
+import { shoeLevers } from './shoe-levers.js';
 
 /** What the duty part of a sheet hands to the shoe-brake part (all SI). */
 export interface ShoeDuty {
@@ -143,6 +144,7 @@ export function evaluateShoeBrake(
   out.fieldSettings.push(...setting.fieldSettings);
 
   evaluateShoeDiscSprings(v, criteria, d, out);
+  out.checks.push(...shoeLevers(v, d));
 
   const torquePerMu = b.nominal / b.muNominal;
   const wornFraction = l.wornSpringForce / b.springForce;
@@ -212,4 +214,9 @@ const SHOE_PUBLISHED_STEPS = [
   'spring-shear-stress',
   'solid-length',
   'spring-shear-stress-solid',
+  'lever-bending-stress',
+  'shoe-pin-load',
+  'pin-shear-stress',
+  'pin-bearing-pressure',
+  'base-bolt-tension',
 ];

@@ -2,6 +2,7 @@ import type { FieldDefinition, SectionDefinition } from '../core/types.js';
 import { LININGS } from '../criteria/linings.js';
 import { choice, flag, num, qty, type InputsOf } from './field-builders.js';
 import { MAIN_SPRING_FIELDS } from './shoe-main-spring.js';
+import { LEVER_FIELDS } from './shoe-levers.js';
 
 /** Sections shared by the shoe-brake sheets (after each sheet's own duty section). */
 export const SHOE_SECTIONS: SectionDefinition[] = [
@@ -12,6 +13,7 @@ export const SHOE_SECTIONS: SectionDefinition[] = [
   { id: 'release', title: 'Release and thruster stroke' },
   { id: 'setting', title: 'Field settings' },
   { id: 'discSprings', title: 'Disc springs on shoe holder and equaliser' },
+  { id: 'levers', title: 'Levers, pins and base bolts' },
 ];
 
 const B = 'brake';
@@ -449,6 +451,7 @@ export const SHOE_BRAKE_FIELDS = [
   ...THERMAL_FIELDS,
   ...RELEASE_FIELDS,
   ...DISC_SPRING_FIELDS,
+  ...LEVER_FIELDS,
 ] as const;
 
 /** The shoe-brake inputs as the shared shoe-brake formulas read them (SI). */

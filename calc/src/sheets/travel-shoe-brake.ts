@@ -137,6 +137,13 @@ const TRAVEL_DEMO: Record<string, InputValue> = {
   stopsPerHour: { value: 28, unit: '1/h' },
   emergencyStopsPerHour: { value: 2, unit: '1/h' },
   thrusterForce: { value: 220, unit: 'N' },
+  leverMomentArm: { value: 100, unit: 'mm' },
+  leverSectionWidth: { value: 8, unit: 'mm' },
+  leverSectionDepth: { value: 30, unit: 'mm' },
+  shoePinDiameter: { value: 10, unit: 'mm' },
+  shoePinBearingLength: { value: 16, unit: 'mm' },
+  baseBoltRowSpacing: { value: 120, unit: 'mm' },
+  baseBoltAllowableLoad: { value: 3, unit: 'kN' },
 };
 
 const FIELDS = withBounds(
