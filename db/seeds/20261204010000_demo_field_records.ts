@@ -55,8 +55,9 @@ export async function seed(db: Kysely<DB>): Promise<void> {
     daysAgo,
     kind: i === 0 ? 'commissioning' : 'periodic-inspection',
     // Inspections find the reserve stroke and leave it (no re-adjustment yet): as left empty.
-    found: i === 0 ? {} : { ...reserve(stroke), [CLEARANCE]: 0.85 * MM },
-    left: i === 0 ? { ...reserve(stroke), [CLEARANCE]: 0.8 * MM } : {},
+    // Shoe clearance as set on the card's 1.2 mm and found within its −0.1/+0.2 mm band.
+    found: i === 0 ? {} : { ...reserve(stroke), [CLEARANCE]: 1.25 * MM },
+    left: i === 0 ? { ...reserve(stroke), [CLEARANCE]: 1.2 * MM } : {},
     lining: [a * MM, b * MM],
     findings:
       i === 0
@@ -79,7 +80,7 @@ export async function seed(db: Kysely<DB>): Promise<void> {
         daysAgo: 55,
         kind: 'commissioning',
         found: {},
-        left: { [RESERVE]: 20 * MM, [CLEARANCE]: 0.8 * MM },
+        left: { [RESERVE]: 20 * MM, [CLEARANCE]: 1.2 * MM },
         lining: [12 * MM, 12 * MM],
         findings: 'Set to the card; no drag on either shoe after ten cycles.',
         countersign: true,
