@@ -3,6 +3,7 @@ import type { Kysely } from 'kysely';
 import type { SheetEvaluation } from '@holdfast/calc';
 import type { DB } from '../src/database.js';
 import { verificationCode } from './demo-plant/calc-access.js';
+import { judgeStoredMeasurement, judgementColumns } from './demo-plant/field-judgement.js';
 
 const DAY = 24 * 3600 * 1000;
 // Field-card keys of what the fitters measured (the values are field readings, not sheet inputs).
@@ -200,14 +201,12 @@ async function addVisits(
         await trx
           .insertInto('fieldRecordMeasurements')
           .values(
-            keys.map((k, ordinal) => ({
-              recordId: id,
-              settingKey: k,
-              ordinal,
-              asFound: v.found[k] ?? null,
-              asLeft: v.left[k] ?? null,
-              reason: v.reasons?.[k] ?? '',
-            })),
+            keys.map((k, ordinal) => {
+              const m = { settingKey: k, asFound: v.found[k] ?? null, asLeft: v.left[k] ?? null };
+              // Signed, so stored with what it was judged against, as the server signs.
+              const judged = judgementColumns(judgeStoredMeasurement(sheetType, rev.evaluation, m));
+              return { recordId: id, ordinal, ...m, reason: v.reasons?.[k] ?? '', ...judged };
+            }),
           )
           .execute();
       }
