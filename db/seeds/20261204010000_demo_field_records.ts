@@ -3,6 +3,7 @@ import type { Kysely } from 'kysely';
 import type { SheetEvaluation } from '@holdfast/calc';
 import type { DB } from '../src/database.js';
 import { verificationCode } from './demo-plant/calc-access.js';
+import { judgeStoredMeasurement, judgementColumns } from './demo-plant/field-judgement.js';
 
 const DAY = 24 * 3600 * 1000;
 // Field-card keys of what the fitters measured (the values are field readings, not sheet inputs).
@@ -55,8 +56,9 @@ export async function seed(db: Kysely<DB>): Promise<void> {
     daysAgo,
     kind: i === 0 ? 'commissioning' : 'periodic-inspection',
     // Inspections find the reserve stroke and leave it (no re-adjustment yet): as left empty.
-    found: i === 0 ? {} : { ...reserve(stroke), [CLEARANCE]: 0.85 * MM },
-    left: i === 0 ? { ...reserve(stroke), [CLEARANCE]: 0.8 * MM } : {},
+    // Shoe clearance as set on the card's 1.2 mm and found within its −0.1/+0.2 mm band.
+    found: i === 0 ? {} : { ...reserve(stroke), [CLEARANCE]: 1.25 * MM },
+    left: i === 0 ? { ...reserve(stroke), [CLEARANCE]: 1.2 * MM } : {},
     lining: [a * MM, b * MM],
     findings:
       i === 0
@@ -79,7 +81,7 @@ export async function seed(db: Kysely<DB>): Promise<void> {
         daysAgo: 55,
         kind: 'commissioning',
         found: {},
-        left: { [RESERVE]: 20 * MM, [CLEARANCE]: 0.8 * MM },
+        left: { [RESERVE]: 20 * MM, [CLEARANCE]: 1.2 * MM },
         lining: [12 * MM, 12 * MM],
         findings: 'Set to the card; no drag on either shoe after ten cycles.',
         countersign: true,
@@ -199,14 +201,12 @@ async function addVisits(
         await trx
           .insertInto('fieldRecordMeasurements')
           .values(
-            keys.map((k, ordinal) => ({
-              recordId: id,
-              settingKey: k,
-              ordinal,
-              asFound: v.found[k] ?? null,
-              asLeft: v.left[k] ?? null,
-              reason: v.reasons?.[k] ?? '',
-            })),
+            keys.map((k, ordinal) => {
+              const m = { settingKey: k, asFound: v.found[k] ?? null, asLeft: v.left[k] ?? null };
+              // Signed, so stored with what it was judged against, as the server signs.
+              const judged = judgementColumns(judgeStoredMeasurement(sheetType, rev.evaluation, m));
+              return { recordId: id, ordinal, ...m, reason: v.reasons?.[k] ?? '', ...judged };
+            }),
           )
           .execute();
       }

@@ -29,6 +29,16 @@ export interface FieldRecordMeasurementsTable {
   asFound: Nullable<number>;
   asLeft: Nullable<number>;
   reason: Defaulted<string>;
+  // What the measurement was judged against and its verdicts (20261205030000): written at every
+  // save of a draft and last at signing; null on rows signed before that migration.
+  target: Nullable<number>;
+  unit: Nullable<string>;
+  dimension: Nullable<string>;
+  /** calc's FieldTolerance; written as JSON text. */
+  tolerance: ColumnType<unknown, string | null | undefined, string | null>;
+  /** calc's ToleranceVerdict; written as JSON text. */
+  asFoundVerdict: ColumnType<unknown, string | null | undefined, string | null>;
+  asLeftVerdict: ColumnType<unknown, string | null | undefined, string | null>;
 }
 
 export interface FieldRecordChecksTable {

@@ -21,6 +21,21 @@ describe('field records in PostgreSQL, as the app role', () => {
   let otherId: string;
 
   const refused = (text: string, values: unknown[] = []) => failure(app.query(text, values));
+  // A stored verdict, reduced to what these tests need of it.
+  const IN = JSON.stringify({ status: 'in' });
+  const OUT = JSON.stringify({ status: 'out' });
+  // Every column of the stored judgement, rewritten as a release with another tolerance might.
+  const rejudge = [
+    [
+      `update field_record_measurements set tolerance = '{"band":{"kind":"atLeast"}}' where record_id = $1`,
+    ],
+    [`update field_record_measurements set as_found_verdict = $2 where record_id = $1`, OUT],
+    [`update field_record_measurements set as_left_verdict = $2 where record_id = $1`, OUT],
+    [`update field_record_measurements set as_left_verdict = null where record_id = $1`],
+    [`update field_record_measurements set target = 0.25 where record_id = $1`],
+    [`update field_record_measurements set unit = 'in' where record_id = $1`],
+    [`update field_record_measurements set dimension = 'force' where record_id = $1`],
+  ] as const;
 
   async function newRecord(): Promise<string> {
     const id = randomUUID();
@@ -30,9 +45,10 @@ describe('field records in PostgreSQL, as the app role', () => {
       [id, positionId, revisionId, userId],
     );
     await app.query(
-      `insert into field_record_measurements (record_id, setting_key, ordinal, as_found, as_left)
-       values ($1, 'springLength', 0, 0.2, 0.2001)`,
-      [id],
+      `insert into field_record_measurements (record_id, setting_key, ordinal, as_found, as_left,
+         target, unit, dimension, tolerance, as_found_verdict, as_left_verdict)
+       values ($1, 'springLength', 0, 0.2, 0.2001, 0.2, 'mm', 'length', $2, $3, $3)`,
+      [id, JSON.stringify({ band: { kind: 'absolute', minus: 5e-4, plus: 5e-4 } }), IN],
     );
     await app.query(
       `insert into field_record_checks (record_id, key, result) values ($1, 'no-drag-shoe-a', 'ok')`,
@@ -111,6 +127,50 @@ describe('field records in PostgreSQL, as the app role', () => {
       ).code,
     ).toBe('HF001');
     expect((await refused(`delete from field_records where id = $1`, [id])).code).toBe('HF001');
+  });
+
+  it('the judgement stored with a measurement: changes with its draft, then frozen with it', async () => {
+    const id = await newRecord();
+    for (const [text, value] of rejudge) {
+      await app.query(text, value === undefined ? [id] : [id, value]);
+    }
+    await sign(id);
+    for (const [text, value] of rejudge) {
+      const e = await refused(text, value === undefined ? [id] : [id, value]);
+      expect(e.code, text).toBe('HF001');
+    }
+    const id2 = await newRecord();
+    await sign(id2);
+    await countersign(id2);
+    for (const [text, value] of rejudge) {
+      const e = await refused(text, value === undefined ? [id2] : [id2, value]);
+      expect(e.code, text).toBe('HF001');
+    }
+    const row = await app.query(
+      `select target, unit, dimension, as_left_verdict from field_record_measurements where record_id = $1`,
+      [id2],
+    );
+    expect(row.rows[0]).toEqual({
+      target: 0.2,
+      unit: 'mm',
+      dimension: 'length',
+      as_left_verdict: { status: 'in' },
+    });
+  });
+
+  it('a judgement is stored whole: no verdict without the target it was judged against', async () => {
+    const id = await newRecord();
+    const e = await refused(
+      `update field_record_measurements set target = null where record_id = $1`,
+      [id],
+    );
+    expect(e.code).toBe('23514');
+    const e2 = await refused(
+      `insert into field_record_measurements (record_id, setting_key, ordinal, as_left, as_left_verdict)
+       values ($1, 'springForce', 1, 1000, $2)`,
+      [id, IN],
+    );
+    expect(e2.code).toBe('23514');
   });
 
   it('countersigned: no update, no delete of the record or any part, no new photos', async () => {
@@ -219,6 +279,17 @@ describe('demo field records', () => {
       .where('recordId', '=', out[0]!.id)
       .executeTakeFirstOrThrow();
     expect(reason.reason).not.toBe('');
+    // Signed by the demo, so stored with the judgement they were signed with.
+    const judged = await db
+      .selectFrom('fieldRecordMeasurements')
+      .select(['recordId', 'target', 'dimension', 'asLeftVerdict'])
+      .execute();
+    expect(judged.length).toBeGreaterThan(0);
+    expect(judged.every((m) => m.target !== null && m.dimension !== null)).toBe(true);
+    const outRows = judged.filter(
+      (m) => (m.asLeftVerdict as { status: string } | null)?.status === 'out',
+    );
+    expect([...new Set(outRows.map((m) => m.recordId))]).toEqual([out[0]!.id]);
     const tr = rows.filter((r) => r.tag === 'TR-B1');
     expect(Date.now() - tr.at(-1)!.performedAt.getTime()).toBeGreaterThan(30 * 86_400_000);
     await seed(db, true);

@@ -1,4 +1,13 @@
-import type { FieldCheckInput, FieldRecord, FieldRecordKind, PersonRef } from '@holdfast/shared';
+import type { FieldTolerance, ToleranceVerdict } from '@holdfast/calc';
+import type {
+  FieldCheckInput,
+  FieldMeasurement,
+  FieldRecord,
+  FieldRecordKind,
+  FieldTarget,
+  PersonRef,
+} from '@holdfast/shared';
+import type { FieldRecordMeasurementRow } from '@holdfast/db';
 import type { RecordRevision, StoredFieldRecord } from './field-records.repository.js';
 import { fieldTargets, judgeMeasurement } from '../calc/field-targets.js';
 
@@ -11,6 +20,38 @@ export function recordFlags(rev: RecordRevision) {
       rev.state === 'superseded' ||
       (rev.approvedRevisionId !== null && rev.approvedRevisionId !== rev.revisionId),
     underReview: rev.underReview,
+  };
+}
+
+/**
+ * A measurement as the record shows it. A signed record shows the judgement stored when it was
+ * signed, so a later calc release that declares another tolerance changes nothing on it. A draft
+ * is judged now, against its revision's frozen targets. Rows signed before the judgement was
+ * stored (migration 20261205030000) hold none and are judged now as well: for them, the shown
+ * verdicts still follow the current tolerance declarations (docs/field-records.md).
+ */
+function measurementOf(
+  m: FieldRecordMeasurementRow,
+  status: FieldRecord['status'],
+  targets: ReadonlyMap<string, FieldTarget>,
+): FieldMeasurement {
+  const input = {
+    settingKey: m.settingKey,
+    asFound: m.asFound,
+    asLeft: m.asLeft,
+    reason: m.reason,
+  };
+  if (status === 'draft' || m.dimension === null) return judgeMeasurement(input, targets);
+  return {
+    ...input,
+    // The label is the frozen evaluation's, as on the field card the fitter worked from.
+    label: targets.get(m.settingKey)?.label ?? m.settingKey,
+    target: m.target,
+    unit: m.unit ?? '',
+    dimension: m.dimension,
+    tolerance: (m.tolerance as FieldTolerance | null) ?? null,
+    asFoundVerdict: (m.asFoundVerdict as ToleranceVerdict | null) ?? null,
+    asLeftVerdict: (m.asLeftVerdict as ToleranceVerdict | null) ?? null,
   };
 }
 
@@ -45,12 +86,7 @@ export function toFieldRecord(
     status: r.status,
     performedAt: r.performedAt.toISOString(),
     meterHours: r.meterHours,
-    measurements: s.measurements.map((m) =>
-      judgeMeasurement(
-        { settingKey: m.settingKey, asFound: m.asFound, asLeft: m.asLeft, reason: m.reason },
-        targets,
-      ),
-    ),
+    measurements: s.measurements.map((m) => measurementOf(m, r.status, targets)),
     checks: s.checks.map((c): FieldCheckInput => ({
       key: c.key as FieldCheckInput['key'],
       result: c.result as FieldCheckInput['result'],

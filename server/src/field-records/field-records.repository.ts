@@ -7,8 +7,10 @@ import type {
   FieldRecordRow,
   FieldRecordSignatureRow,
 } from '@holdfast/db';
-import type { FieldCheckInput, FieldMeasurementInput } from '@holdfast/shared';
+import type { FieldCheckInput, FieldMeasurement } from '@holdfast/shared';
 import { Database } from '../database/database.js';
+
+const json = (v: unknown) => (v === null ? null : JSON.stringify(v));
 
 /** A record with everything it owns, as stored. */
 export interface StoredFieldRecord {
@@ -183,11 +185,8 @@ export class FieldRecordsRepository {
     await trx.updateTable('fieldRecords').set(set).where('id', '=', id).execute();
   }
 
-  async replaceMeasurements(
-    trx: Kysely<DB>,
-    id: string,
-    items: FieldMeasurementInput[],
-  ): Promise<void> {
+  /** The measurements of a draft with what each is judged against and its verdicts. */
+  async replaceMeasurements(trx: Kysely<DB>, id: string, items: FieldMeasurement[]): Promise<void> {
     await trx.deleteFrom('fieldRecordMeasurements').where('recordId', '=', id).execute();
     if (items.length === 0) return;
     await trx
@@ -200,6 +199,17 @@ export class FieldRecordsRepository {
           asFound: m.asFound,
           asLeft: m.asLeft,
           reason: m.reason,
+          // Whole or not at all (field_record_measurements_judged_check): no target, no judgement.
+          ...(m.target === null
+            ? {}
+            : {
+                target: m.target,
+                unit: m.unit,
+                dimension: m.dimension,
+                tolerance: json(m.tolerance),
+                asFoundVerdict: json(m.asFoundVerdict),
+                asLeftVerdict: json(m.asLeftVerdict),
+              }),
         })),
       )
       .execute();

@@ -170,7 +170,7 @@ export class FieldRecordsService {
     if (rev.positionId !== input.positionId) {
       throw invalid([{ path: 'positionId', message: "not the position of the revision's sheet" }]);
     }
-    const { out } = this.judge(rev, input.measurements);
+    const { judged, out } = this.judge(rev, input.measurements);
     const created = await this.repo.transaction(async (trx) => {
       const fresh = await this.repo.insert(trx, {
         id: input.id,
@@ -184,7 +184,7 @@ export class FieldRecordsService {
         createdBy: user.id,
       });
       if (!fresh) return false;
-      await this.repo.replaceMeasurements(trx, input.id, input.measurements);
+      await this.repo.replaceMeasurements(trx, input.id, judged);
       await this.repo.replaceChecks(trx, input.id, input.checks);
       await this.audit.record(trx, {
         actorId: user.id,
@@ -232,7 +232,7 @@ export class FieldRecordsService {
           asLeft: m.asLeft,
           reason: m.reason,
         }));
-      const { out } = this.judge(rev, measurements);
+      const { judged, out } = this.judge(rev, measurements);
       await this.repo.update(trx, id, {
         ...(input.kind !== undefined ? { kind: input.kind } : {}),
         ...(input.performedAt !== undefined ? { performedAt: input.performedAt } : {}),
@@ -240,7 +240,8 @@ export class FieldRecordsService {
         ...(input.findings !== undefined ? { findings: input.findings } : {}),
         outOfTolerance: out,
       });
-      if (input.measurements) await this.repo.replaceMeasurements(trx, id, input.measurements);
+      // Judged again at every save, so a draft's stored judgement is today's.
+      await this.repo.replaceMeasurements(trx, id, judged);
       if (input.checks) await this.repo.replaceChecks(trx, id, input.checks);
       await this.audit.record(trx, {
         actorId: user.id,
@@ -270,6 +271,9 @@ export class FieldRecordsService {
         ...unansweredChecks(rev.sheetType, record.checks),
       ];
       if (issues.length > 0) throw invalid(issues);
+      // The judgement the technician signs is stored with the measurements, while the record is
+      // still a draft: from here on the database refuses to change it, and reads use it.
+      await this.repo.replaceMeasurements(trx, id, record.measurements);
       let code = newVerificationCode(id);
       while (await this.repo.verificationCodeTaken(code, trx)) code = newVerificationCode(id);
       await this.repo.update(trx, id, {
