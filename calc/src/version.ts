@@ -7,5 +7,10 @@
  * limit; service and emergency stops per hour are entered apart. New checks: motor overspeed,
  * drive train at μ max with the spring at the top of its range (replaces the check at the set
  * force), spring travel ratio against the lever ratio, caliper torque/speed/inertia consistency.
+ * 1.2.0: shoe sheets: the stop and each-brake-alone checks take the lowest torque in service (drum
+ * at its wear limit); optional spring relaxation ρ_s lowers every worn case, the stop and the
+ * setting band; optional lever, shoe-pin and base-bolt strength at the highest spring setting;
+ * lining wear prints to 0.05 mm on the card; a disc-spring stack's back-off tolerance on the card
+ * is the sheet's declared one. Derivation lines and check messages are written when first read.
  */
-export const CORE_VERSION = '1.1.0';
+export const CORE_VERSION = '1.2.0';

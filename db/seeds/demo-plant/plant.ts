@@ -51,7 +51,7 @@ export interface DemoRevision {
    * Inputs this revision enters that differ from the calc demo values, as [field key, value as
    * entered], applied after `vary` (never a copy of a demo value: those come from calc).
    */
-  set?: [string, number | string | { value: number; unit: string }][];
+  set?: [string, number | string | boolean | { value: number; unit: string }][];
   /** Fields this revision takes (back) from the calc demo values, after `set`. */
   demoValues?: string[];
   /** Optional fields this revision leaves out. */
@@ -85,12 +85,14 @@ const C2 = 'checker2@holdfast.test';
 // gear efficiency as credit, the long-shoe torque was the model, all stops were one count.
 const CORE_1_0_HOIST: DemoRevision['set'] = [
   ['springForce', { value: 1100, unit: 'N' }],
+  ['leversEnabled', false],
   ['backDrivingEfficiency', 0.88],
   ['torqueModel', 'pivoted'],
   ['stopsPerHour', { value: 60, unit: '1/h' }],
   ['emergencyStopsPerHour', { value: 0, unit: '1/h' }],
 ];
 const CORE_1_0_TRAVEL: DemoRevision['set'] = [
+  ['leversEnabled', false],
   ['torqueModel', 'pivoted'],
   ['stopsPerHour', { value: 30, unit: '1/h' }],
   ['emergencyStopsPerHour', { value: 0, unit: '1/h' }],
@@ -99,6 +101,21 @@ const CORE_1_0_CALIPER: DemoRevision['set'] = [
   ['backDrivingEfficiency', 0.95],
   ['stopsPerHour', { value: 2, unit: '1/h' }],
   ['emergencyStopsPerHour', { value: 0, unit: '1/h' }],
+];
+/** The lever, pin and base-bolt inputs of the shoe sheets (the first issues did not check them). */
+const LEVER_FIELDS = [
+  'leversEnabled',
+  'leverMomentArm',
+  'leverSectionWidth',
+  'leverSectionDepth',
+  'leverAllowableBending',
+  'shoePinDiameter',
+  'shoePinBearingLength',
+  'shoePinAllowableShear',
+  'shoePinAllowableBearing',
+  'baseBoltRowSpacing',
+  'baseBoltsPerRow',
+  'baseBoltAllowableLoad',
 ];
 /** What the 1.1.0 re-checks enter: the calc demo values of the fields 1.1.0 asks for apart. */
 const RECHECK_1_1 = [
@@ -109,9 +126,10 @@ const RECHECK_1_1 = [
   'motorMaxSpeed',
   'springRelaxation',
   'springForce',
+  ...LEVER_FIELDS,
 ];
-/** Inputs the first issues did not have (spring relaxation came with core 1.1.0). */
-const NOT_IN_1_0 = ['springRelaxation'];
+/** Inputs the first issues did not have (spring relaxation and the lever checks came later). */
+const NOT_IN_1_0 = ['springRelaxation', ...LEVER_FIELDS.filter((k) => k !== 'leversEnabled')];
 
 export const demoSheets: DemoSheet[] = [
   {
@@ -146,7 +164,7 @@ export const demoSheets: DemoSheet[] = [
         author: E,
         checker: C,
         changeNote:
-          'Re-checked with calculation core 1.1.0: rubbing speed and p·v now at the speed the brake sets with (the load speeds up during the set delay); no credit for gear losses in the emergency stop (η_bd 0.88 → 1); torque model long shoe → short shoe for the requirement (conservative); motor maximum speed 2200 rpm from the motor data; set delay 0.3 s is the thruster set time at its coldest oil (maker’s data); 60 stops per hour split into 56 service and 4 emergency stops; drive train checked at μ max with the spring at 1600 N; spring relaxation 2 % (spring maker’s data) taken off the worn torques, the stop and the setting band, and the stop worked out with the lowest torque in service (drum at its wear limit). To keep the stop within 250 mm the main spring is re-set 1100 → 1150 N (set length 222.5 → 221.5 mm; permitted band now 771–1600 N). Stopping distance 0.19 → 0.23 m, steady drum temperature 66 → 76 °C; all checks pass. On site: re-set the main spring to the card; shoe clearance, reserve stroke and disc-spring back-offs as rev B.',
+          'Re-checked with calculation core 1.2.0: rubbing speed and p·v now at the speed the brake sets with (the load speeds up during the set delay); no credit for gear losses in the emergency stop (η_bd 0.88 → 1); torque model long shoe → short shoe for the requirement (conservative); motor maximum speed 2200 rpm from the motor data; set delay 0.3 s is the thruster set time at its coldest oil (maker’s data); 60 stops per hour split into 56 service and 4 emergency stops; drive train checked at μ max with the spring at 1600 N; spring relaxation 2 % (spring maker’s data) taken off the worn torques, the stop and the setting band, and the stop worked out with the lowest torque in service (drum at its wear limit); spring lever, shoe pins and base bolts checked at the highest spring setting (brake maker’s drawing). To keep the stop within 250 mm the main spring is re-set 1100 → 1150 N (set length 222.5 → 221.5 mm; permitted band now 771–1600 N). Stopping distance 0.19 → 0.23 m, steady drum temperature 66 → 76 °C; all checks pass. On site: re-set the main spring to the card; shoe clearance, reserve stroke and disc-spring back-offs as rev B.',
         demoValues: RECHECK_1_1,
         daysAgo: 0,
       },
@@ -193,7 +211,7 @@ export const demoSheets: DemoSheet[] = [
         author: E2,
         checker: C2,
         changeNote:
-          'Re-checked with calculation core 1.1.0: motor maximum speed 3000 rpm from the motor data; set delay is the thruster set time at its coldest oil (maker’s data); 30 stops per hour split into 28 service and 2 emergency stops; torque model long shoe → short shoe for the requirement (conservative); drive train checked at μ max with the spring at 800 N; spring travel ratio checked against the lever ratio; spring relaxation 2 % (spring maker’s data) now taken off the worn torques, the stop and the setting band. All checks pass; no change on site.',
+          'Re-checked with calculation core 1.2.0: motor maximum speed 3000 rpm from the motor data; set delay is the thruster set time at its coldest oil (maker’s data); 30 stops per hour split into 28 service and 2 emergency stops; torque model long shoe → short shoe for the requirement (conservative); drive train checked at μ max with the spring at 800 N; spring travel ratio checked against the lever ratio; spring relaxation 2 % (spring maker’s data) now taken off the worn torques, the stop and the setting band; spring lever, shoe pins and base bolts checked at the highest spring setting (brake maker’s drawing). All checks pass; no change on site.',
         demoValues: RECHECK_1_1,
         daysAgo: 0,
       },
@@ -271,7 +289,7 @@ export const demoSheets: DemoSheet[] = [
         author: E2,
         checker: C,
         changeNote:
-          'Re-checked with calculation core 1.1.0: pad p·v and rubbing speed at the speed the brake sets with; no credit for gear losses in the emergency stop (η_bd 0.95 → 1); 2 stops per hour split into 1 service and 1 emergency stop; hoisted mass 10 300 kg entered, so static torque, load speed and inertia are checked against one another; motor maximum speed 2200 rpm from the motor data; shaft rating checked at μ max with the clamp force at the top of its range. All checks pass; no change on site.',
+          'Re-checked with calculation core 1.2.0: pad p·v and rubbing speed at the speed the brake sets with; no credit for gear losses in the emergency stop (η_bd 0.95 → 1); 2 stops per hour split into 1 service and 1 emergency stop; hoisted mass 10 300 kg entered, so static torque, load speed and inertia are checked against one another; motor maximum speed 2200 rpm from the motor data; shaft rating checked at μ max with the clamp force at the top of its range. All checks pass; no change on site.',
         demoValues: [...RECHECK_1_1, 'loadMass'],
         daysAgo: 6,
       },
