@@ -174,4 +174,18 @@ describe('a recorded step writes its substituted line when read', () => {
     expect(Object.getOwnPropertySymbols(clone)).toEqual([]);
     expect({ ...s }.substituted).toBe(line);
   });
+
+  it('still reads the line from a deeply frozen step', () => {
+    const s = record();
+    const deepFreeze = (o: object) => {
+      for (const k of Reflect.ownKeys(o)) {
+        const d = Object.getOwnPropertyDescriptor(o, k);
+        if (d && 'value' in d && typeof d.value === 'object' && d.value !== null)
+          deepFreeze(d.value);
+      }
+      Object.freeze(o);
+    };
+    deepFreeze(s);
+    expect(s.substituted).toBe(line);
+  });
 });

@@ -191,7 +191,11 @@ const SUBSTITUTED: PropertyDescriptor = {
   configurable: true,
   get(this: { [PENDING]: PendingText }): string {
     const p = this[PENDING];
-    return (p.text ??= p.formula.substitute(p.values, p.symbol));
+    if (p.text !== undefined) return p.text;
+    const text = p.formula.substitute(p.values, p.symbol);
+    // A caller that deep-freezes an evaluation freezes this record too: then write it each time.
+    if (!Object.isFrozen(p)) p.text = text;
+    return text;
   },
 };
 

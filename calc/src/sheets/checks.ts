@@ -63,7 +63,11 @@ const MESSAGE: PropertyDescriptor = {
   configurable: true,
   get(this: CheckResult & { [PENDING]: PendingMessage }): string {
     const p = this[PENDING];
-    return (p.text ??= checkMessage(p.spec, this.utilisation, this.pass));
+    if (p.text !== undefined) return p.text;
+    const text = checkMessage(p.spec, this.utilisation, this.pass);
+    // A caller that deep-freezes an evaluation freezes this record too: then write it each time.
+    if (!Object.isFrozen(p)) p.text = text;
+    return text;
   },
 };
 
