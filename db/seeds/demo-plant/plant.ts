@@ -1,3 +1,5 @@
+import { sheetType } from './calc-access.js';
+
 /**
  * The invented demo plant. No real company, place, person or product: "Northgate Rolling Works"
  * and everything in it are made up for the demonstration.
@@ -102,21 +104,13 @@ const CORE_1_0_CALIPER: DemoRevision['set'] = [
   ['stopsPerHour', { value: 2, unit: '1/h' }],
   ['emergencyStopsPerHour', { value: 0, unit: '1/h' }],
 ];
-/** The lever, pin and base-bolt inputs of the shoe sheets (the first issues did not check them). */
-const LEVER_FIELDS = [
-  'leversEnabled',
-  'leverMomentArm',
-  'leverSectionWidth',
-  'leverSectionDepth',
-  'leverAllowableBending',
-  'shoePinDiameter',
-  'shoePinBearingLength',
-  'shoePinAllowableShear',
-  'shoePinAllowableBearing',
-  'baseBoltRowSpacing',
-  'baseBoltsPerRow',
-  'baseBoltAllowableLoad',
-];
+/**
+ * The lever, pin and base-bolt inputs of the shoe sheets (the first issues did not check them),
+ * read from the sheet definition so the list cannot fall behind it.
+ */
+const LEVER_FIELDS = (sheetType('hoist-shoe-brake')?.fields ?? [])
+  .filter((f) => f.section === 'levers')
+  .map((f) => f.key);
 /** What the 1.1.0 re-checks enter: the calc demo values of the fields 1.1.0 asks for apart. */
 const RECHECK_1_1 = [
   'backDrivingEfficiency',
