@@ -3,16 +3,11 @@ import { apiClientAs } from './support/api';
 import { e2eBaseUrl, e2eSkipReason, launchBrowser, type BrowserSession } from './support/browser';
 import { screenshot } from './support/screenshot';
 import { signInAs, signOut } from './support/sign-in';
+import { firstPositionInForce, type FieldFormAnswer } from './support/field-form';
 
 const skipReason = e2eSkipReason();
 if (skipReason) console.warn(`[browser] field-record owner tests skipped: ${skipReason}`);
 
-interface RegisterAnswer {
-  sites: { machines: { positions: { id: string; inForce: { revisionId: string }[] }[] }[] }[];
-}
-interface FieldFormAnswer {
-  checks: { key: string; label: string }[];
-}
 interface ListAnswer {
   items: { id: string }[];
 }
@@ -37,14 +32,7 @@ describe.skipIf(skipReason !== null)('outbox entries belong to who saved them', 
 
   beforeAll(async () => {
     browser = await launchBrowser({ width: 1024, height: 844 });
-    const call = await apiClientAs(baseUrl, 'technician');
-    const register = await call<RegisterAnswer>('GET', '/register');
-    const position = register.sites
-      .flatMap((s) => s.machines.flatMap((m) => m.positions))
-      .find((p) => p.inForce.length > 0)!;
-    positionId = position.id;
-    revisionId = position.inForce[0]!.revisionId;
-    form = await call<FieldFormAnswer>('GET', `/revisions/${revisionId}/field-form`);
+    ({ positionId, revisionId, form } = await firstPositionInForce(baseUrl));
   });
   afterEach(async () => {
     await browser?.context.setOffline(false);

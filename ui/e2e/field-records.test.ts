@@ -4,21 +4,11 @@ import { seriousViolations } from './support/axe';
 import { e2eBaseUrl, e2eSkipReason, launchBrowser, type BrowserSession } from './support/browser';
 import { screenshot } from './support/screenshot';
 import { signInAs } from './support/sign-in';
+import { firstPositionInForce, type FieldFormAnswer } from './support/field-form';
 
 const skipReason = e2eSkipReason();
 if (skipReason) console.warn(`[browser] field-record tests skipped: ${skipReason}`);
 
-interface RegisterAnswer {
-  sites: {
-    machines: {
-      positions: { id: string; tag: string; inForce: { revisionId: string }[] }[];
-    }[];
-  }[];
-}
-interface FieldFormAnswer {
-  targets: { settingKey: string; label: string; tolerance: unknown }[];
-  checks: { key: string; label: string; hasValue: boolean }[];
-}
 interface ListAnswer {
   items: { id: string; meterHours: number | null }[];
 }
@@ -36,14 +26,7 @@ describe.skipIf(skipReason !== null)('field records in the browser', () => {
 
   beforeAll(async () => {
     browser = await launchBrowser({ width: 1024, height: 844 });
-    const call = await apiClientAs(baseUrl, 'technician');
-    const register = await call<RegisterAnswer>('GET', '/register');
-    const position = register.sites
-      .flatMap((s) => s.machines.flatMap((m) => m.positions))
-      .find((p) => p.inForce.length > 0)!;
-    positionId = position.id;
-    revisionId = position.inForce[0]!.revisionId;
-    form = await call<FieldFormAnswer>('GET', `/revisions/${revisionId}/field-form`);
+    ({ positionId, revisionId, form } = await firstPositionInForce(baseUrl));
   });
   afterEach(async () => {
     await browser?.context.setOffline(false);
