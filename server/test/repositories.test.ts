@@ -1,4 +1,6 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { AuditRepository } from '../src/audit/audit.repository.js';
+import { UnitOfWork } from '../src/database/unit-of-work.js';
 import { SignedInUsers } from '../src/users/signed-in-users.js';
 import { UsersRepository } from '../src/users/users.repository.js';
 import { VerifyRepository } from '../src/verify/verify.repository.js';
@@ -54,6 +56,32 @@ describe('repositories', () => {
     expect(await queue.drafts(engineer)).toEqual([]);
     expect(await queue.awaitingCheckBy(engineer)).toEqual([]);
     expect(await queue.recentlyApproved()).toEqual([]);
+  });
+
+  it('UnitOfWork: what a repository writes with its Tx commits with it, or rolls back with it', async () => {
+    const units = ctx.app.get(UnitOfWork);
+    const audit = ctx.app.get(AuditRepository);
+    const row = (action: string) => ({
+      actorId: null,
+      action,
+      entity: 'register',
+      entityId: '00000000-0000-4000-8000-00000000beef',
+      sheetId: null,
+      before: null,
+      after: null,
+    });
+    const count = async (action: string) =>
+      (await ctx.db.selectFrom('auditEvents').select('id').where('action', '=', action).execute())
+        .length;
+    await units.run((tx) => audit.append(row('test.committed'), tx));
+    await expect(
+      units.run(async (tx) => {
+        await audit.append(row('test.rolled-back'), tx);
+        throw new Error('abandoned');
+      }),
+    ).rejects.toThrow('abandoned');
+    expect(await count('test.committed')).toBe(1);
+    expect(await count('test.rolled-back')).toBe(0);
   });
 
   it('SignedInUsers keeps no row read across a change, and none while not listening', async () => {

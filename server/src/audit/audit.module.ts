@@ -1,6 +1,7 @@
 import { Global, Module } from '@nestjs/common';
+import { AuditRepository } from './audit.repository.js';
 import { AuditService } from './audit.service.js';
 
 @Global()
-@Module({ providers: [AuditService], exports: [AuditService] })
+@Module({ providers: [AuditService, AuditRepository], exports: [AuditService] })
 export class AuditModule {}

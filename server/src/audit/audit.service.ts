@@ -2,7 +2,8 @@ import { Injectable } from '@nestjs/common';
 import type { Kysely } from 'kysely';
 import type { AuditEvent } from '@holdfast/shared';
 import type { DB } from '@holdfast/db';
-import { Database } from '../database/database.js';
+import type { Tx } from '../database/unit-of-work.js';
+import { AuditRepository } from './audit.repository.js';
 
 export interface AuditEntry {
   actorId: string | null;
@@ -18,15 +19,18 @@ export interface AuditEntry {
 
 const json = (v: unknown) => (v === undefined || v === null ? null : JSON.stringify(v));
 
-/** The append-only trail (the table refuses UPDATE and DELETE). Write inside the change's transaction. */
+/**
+ * The append-only trail (the table refuses UPDATE and DELETE). Write inside the change's
+ * transaction: `record(tx, …)` with the `Tx` of `UnitOfWork.run` (a Kysely transaction is still
+ * accepted from services not yet moved to repositories).
+ */
 @Injectable()
 export class AuditService {
-  constructor(private readonly db: Database) {}
+  constructor(private readonly repo: AuditRepository) {}
 
-  async record(trx: Kysely<DB>, entry: AuditEntry): Promise<void> {
-    await trx
-      .insertInto('auditEvents')
-      .values({
+  async record(tx: Tx | Kysely<DB>, entry: AuditEntry): Promise<void> {
+    await this.repo.append(
+      {
         actorId: entry.actorId,
         action: entry.action,
         entity: entry.entity,
@@ -34,30 +38,13 @@ export class AuditService {
         sheetId: entry.sheetId ?? null,
         before: json(entry.before),
         after: json(entry.after),
-      })
-      .execute();
+      },
+      tx,
+    );
   }
 
   async forSheet(sheetId: string): Promise<AuditEvent[]> {
-    const rows = await this.db
-      .selectFrom('auditEvents as a')
-      .leftJoin('users as u', 'u.id', 'a.actorId')
-      .select([
-        'a.id',
-        'a.at',
-        'a.action',
-        'a.entity',
-        'a.entityId',
-        'a.before',
-        'a.after',
-        'u.id as actorId',
-        'u.displayName',
-        'u.initials',
-      ])
-      .where('a.sheetId', '=', sheetId)
-      .orderBy('a.at', 'asc')
-      .orderBy('a.id', 'asc')
-      .execute();
+    const rows = await this.repo.forSheet(sheetId);
     return rows.map((r) => ({
       id: r.id,
       at: r.at.toISOString(),

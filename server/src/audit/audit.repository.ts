@@ -1,0 +1,47 @@
+import { Injectable } from '@nestjs/common';
+import type { Kysely } from 'kysely';
+import type { DB } from '@holdfast/db';
+import { Database } from '../database/database.js';
+import { on, type Tx } from '../database/unit-of-work.js';
+
+export interface AuditRow {
+  actorId: string | null;
+  action: string;
+  entity: string;
+  entityId: string;
+  sheetId: string | null;
+  before: string | null;
+  after: string | null;
+}
+
+/** The audit table: appended to inside the change's transaction, read per sheet. */
+@Injectable()
+export class AuditRepository {
+  constructor(private readonly db: Database) {}
+
+  async append(row: AuditRow, tx: Tx | Kysely<DB>): Promise<void> {
+    await on(this.db, tx).insertInto('auditEvents').values(row).execute();
+  }
+
+  forSheet(sheetId: string) {
+    return this.db
+      .selectFrom('auditEvents as a')
+      .leftJoin('users as u', 'u.id', 'a.actorId')
+      .select([
+        'a.id',
+        'a.at',
+        'a.action',
+        'a.entity',
+        'a.entityId',
+        'a.before',
+        'a.after',
+        'u.id as actorId',
+        'u.displayName',
+        'u.initials',
+      ])
+      .where('a.sheetId', '=', sheetId)
+      .orderBy('a.at', 'asc')
+      .orderBy('a.id', 'asc')
+      .execute();
+  }
+}
