@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useMemo, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { Alert, Grid, Skeleton, Stack, Tabs } from '@mantine/core';
 import { IconAlertTriangle } from '@tabler/icons-react';
 import type { Comment, User } from '@holdfast/shared';
@@ -13,7 +13,10 @@ import { CommentMarker } from '../../../features/review/components/comment-marke
 import { CommentsPanel } from '../../../features/review/components/comments-panel';
 import { groupByAnchor } from '../../../features/review/utils/anchors';
 import { useRevision } from '../../../features/revisions/api/get-revision';
-import { RevisionWorkbench } from '../../../features/revisions/components/revision-workbench';
+import {
+  RevisionWorkbench,
+  type WorkbenchContext,
+} from '../../../features/revisions/components/revision-workbench';
 import { UnderReviewBanner } from '../../../features/criteria-review/components/under-review-banner';
 import { ChangesPanel } from '../../../features/revisions/components/changes-panel';
 import { RevisionActions } from './revision-actions';
@@ -64,23 +67,44 @@ export function RevisionView({ revisionId, user }: { revisionId: string; user: U
     }, 50);
   };
 
-  const marker =
-    (kind: 'input' | 'step' | 'check', label: (k: string) => string) => (key: string) => (
-      <CommentMarker
-        revisionId={revisionId}
-        anchor={{ kind, key }}
-        label={label(key)}
-        comments={grouped.get(`${kind}:${key}`) ?? []}
-        canComment={canComment}
-        canResolve={canComment}
-      />
-    );
+  // The renderers are memoised: every field, check and step row is memoised on them, so a new
+  // function after each autosave (the revision query updates) would render every row and marker
+  // again in the middle of typing.
+  // Step labels are read when a marker renders, from the newest revision: a saved draft carries a
+  // new evaluation object each time, which must not renew the renderers.
+  const latestSteps = useRef(revision?.evaluation?.derivation);
+  latestSteps.current = revision?.evaluation?.derivation;
+  const markers = useMemo(() => {
+    const marker =
+      (kind: 'input' | 'step' | 'check', label: (k: string) => string) => (key: string) => (
+        <CommentMarker
+          revisionId={revisionId}
+          anchor={{ kind, key }}
+          label={label(key)}
+          comments={grouped.get(`${kind}:${key}`) ?? []}
+          canComment={canComment}
+          canResolve={canComment}
+        />
+      );
+    const stepOf = (id: string) => latestSteps.current?.find((s) => s.id === id)?.label ?? id;
+    return {
+      field: marker('input', fieldLabel),
+      step: marker('step', stepOf),
+      check: marker('check', (k) => k),
+    };
+  }, [revisionId, grouped, canComment, fieldLabel]);
+  const openComments = comments.filter((c) => !c.resolved).length;
+  const renderActions = useCallback(
+    (ctx: WorkbenchContext) =>
+      revision ? (
+        <RevisionActions revision={revision} ctx={ctx} openComments={openComments} />
+      ) : null,
+    [revision, openComments],
+  );
 
   if (query.isPending) return <Skeleton h={420} />;
   if (query.isError || !revision)
     return <ErrorPanel error={query.error} onRetry={() => void query.refetch()} />;
-
-  const openComments = comments.filter((c) => !c.resolved).length;
 
   return (
     <>
@@ -105,12 +129,10 @@ export function RevisionView({ revisionId, user }: { revisionId: string; user: U
                 revision={revision}
                 sheetType={sheetType}
                 criteria={criteria.data}
-                renderActions={(ctx) => (
-                  <RevisionActions revision={revision} ctx={ctx} openComments={openComments} />
-                )}
-                renderFieldAside={marker('input', fieldLabel)}
-                renderStepAside={marker('step', stepLabel)}
-                renderCheckAside={marker('check', (k) => k)}
+                renderActions={renderActions}
+                renderFieldAside={markers.field}
+                renderStepAside={markers.step}
+                renderCheckAside={markers.check}
               />
             )
           ) : (
