@@ -1,4 +1,4 @@
-import { lazy, memo, Suspense, type ReactNode } from 'react';
+import { memo, useMemo, type ReactNode } from 'react';
 import {
   Alert,
   Badge,
@@ -9,21 +9,15 @@ import {
   Skeleton,
   Spoiler,
   Stack,
-  Tabs,
   Text,
   Title,
 } from '@mantine/core';
 import { IconAlertTriangle, IconBolt } from '@tabler/icons-react';
 import type { CheckDriver, SectionDefinition, SheetEvaluation } from '@holdfast/calc';
 import { CheckDriversButton } from './check-drivers-button';
-import { CheckList } from './check-list';
-import { DerivationList } from './derivation-list';
-import { FieldSettingsView } from './field-settings-view';
-import { ResultsTable } from './results-table';
+import { EvaluationShown, ResultsTabs } from './results-tabs';
 import { Verdict } from './verdict';
 import type { UnitSystem } from '../utils/units';
-
-const EvaluationCharts = lazy(() => import('./evaluation-charts'));
 
 export interface ResultsPanelProps {
   evaluation: SheetEvaluation | null;
@@ -62,6 +56,22 @@ export const ResultsPanel = memo(function ResultsPanel(props: ResultsPanelProps)
   const shown = evaluation ?? stale ?? null;
   const failingChecks = shown ? shown.checks.filter((c) => !c.pass) : [];
   const failing = failingChecks.length;
+  const { renderCheckAside, renderStepAside, findDrivers } = props;
+  // The tabs are one memoised element: a new evaluation reaches the open panel through context,
+  // so a key renders the panel's rows, not the five tabs, their buttons and panels.
+  const tabs = useMemo(
+    () => (
+      <ResultsTabs
+        failing={failing}
+        sections={sections}
+        unitSystem={unitSystem}
+        renderCheckAside={renderCheckAside}
+        renderStepAside={renderStepAside}
+        findDrivers={findDrivers}
+      />
+    ),
+    [failing, sections, unitSystem, renderCheckAside, renderStepAside, findDrivers],
+  );
   return (
     <Paper
       p="md"
@@ -152,52 +162,7 @@ export const ResultsPanel = memo(function ResultsPanel(props: ResultsPanelProps)
       ) : (
         <Box style={{ opacity: evaluation ? 1 : 0.55 }}>
           <CalculationNotes warnings={shown.warnings} />
-          <Tabs defaultValue="checks" keepMounted={false}>
-            <Tabs.List mb="sm" style={{ flexWrap: 'wrap' }}>
-              <Tabs.Tab value="checks" px="xs">
-                Checks {failing > 0 ? `(${failing} failing)` : ''}
-              </Tabs.Tab>
-              <Tabs.Tab value="results" px="xs">
-                Results
-              </Tabs.Tab>
-              <Tabs.Tab value="steps" px="xs">
-                Derivation
-              </Tabs.Tab>
-              <Tabs.Tab value="charts" px="xs">
-                Charts
-              </Tabs.Tab>
-              <Tabs.Tab value="field" px="xs">
-                Field settings
-              </Tabs.Tab>
-            </Tabs.List>
-            <Tabs.Panel value="checks">
-              <CheckList
-                checks={shown.checks}
-                unitSystem={unitSystem}
-                renderCheckAside={props.renderCheckAside}
-                findDrivers={props.findDrivers}
-              />
-            </Tabs.Panel>
-            <Tabs.Panel value="results">
-              <ResultsTable results={shown.results} sections={sections} unitSystem={unitSystem} />
-            </Tabs.Panel>
-            <Tabs.Panel value="steps">
-              <DerivationList
-                steps={shown.derivation}
-                sections={sections}
-                unitSystem={unitSystem}
-                renderStepAside={props.renderStepAside}
-              />
-            </Tabs.Panel>
-            <Tabs.Panel value="charts">
-              <Suspense fallback={<Skeleton h={240} />}>
-                <EvaluationCharts charts={shown.charts} unitSystem={unitSystem} />
-              </Suspense>
-            </Tabs.Panel>
-            <Tabs.Panel value="field">
-              <FieldSettingsView evaluation={shown} unitSystem={unitSystem} />
-            </Tabs.Panel>
-          </Tabs>
+          <EvaluationShown.Provider value={shown}>{tabs}</EvaluationShown.Provider>
         </Box>
       )}
     </Paper>

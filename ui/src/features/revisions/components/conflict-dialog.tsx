@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { memo, useState } from 'react';
 import { Button, Group, Modal, Stack, Text } from '@mantine/core';
 
 export interface ConflictDialogProps {
@@ -11,7 +11,11 @@ export interface ConflictDialogProps {
  * Someone saved this draft after you opened it. Nothing is merged silently: the user picks whose
  * inputs stay, and the other side is replaced.
  */
-export function ConflictDialog({ opened, onTakeTheirs, onKeepMine }: ConflictDialogProps) {
+export const ConflictDialog = memo(function ConflictDialog({
+  opened,
+  onTakeTheirs,
+  onKeepMine,
+}: ConflictDialogProps) {
   const [busy, setBusy] = useState<'theirs' | 'mine' | null>(null);
   const run = async (which: 'theirs' | 'mine') => {
     setBusy(which);
@@ -56,4 +60,4 @@ export function ConflictDialog({ opened, onTakeTheirs, onKeepMine }: ConflictDia
       </Stack>
     </Modal>
   );
-}
+});
