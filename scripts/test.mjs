@@ -52,32 +52,36 @@ const app = await startAppServer(
 );
 step(`app under test on ${app.url}`);
 
+// The static checks run one after another beside the suites: vitest leaves one of two cores idle
+// for much of the run (browser tests wait on the page), and the checks are CPU-bound. Their
+// output is held and printed when each ends, so it does not interleave with the suites' output.
+const staticChecks = [
+  ['type tests (calc/test-types)', ['tsc', '-p', 'calc/test-types', '--noEmit']],
+  ['type tests (shared/test-types)', ['tsc', '-p', 'shared/test-types', '--noEmit']],
+  ['UI type check', ['tsc', '-p', 'ui', '--noEmit']],
+  ['verification type check', ['tsc', '-p', 'verification', '--noEmit']],
+  ['server test type check', ['tsc', '-p', 'server/test', '--noEmit']],
+  ['lint (eslint)', ['eslint', '.', '--max-warnings=0']],
+  ['formatting (prettier --check)', ['prettier', '--check', '.', '--log-level=warn']],
+];
 const checks = [];
-async function check(name, cmd, args) {
-  const code = await new Promise((resolve) => {
-    const child = spawn(cmd, args, { cwd: projectDir, stdio: 'inherit' });
-    child.on('close', resolve);
+async function check(name, args) {
+  const t0 = Date.now();
+  const { code, output } = await new Promise((resolve) => {
+    const child = spawn('npx', args, { cwd: projectDir, stdio: ['ignore', 'pipe', 'pipe'] });
+    let output = '';
+    child.stdout.on('data', (d) => (output += d));
+    child.stderr.on('data', (d) => (output += d));
+    child.on('close', (code) => resolve({ code, output }));
   });
   checks.push({ name, ok: code === 0 });
+  const took = ((Date.now() - t0) / 1000).toFixed(0);
+  step(`${code === 0 ? 'ok' : 'FAILED'}: ${name} (${took} s)`);
+  if (code !== 0) process.stdout.write(output.endsWith('\n') ? output : `${output}\n`);
 }
-
-await check('type tests (calc/test-types)', 'npx', ['tsc', '-p', 'calc/test-types', '--noEmit']);
-await check('type tests (shared/test-types)', 'npx', [
-  'tsc',
-  '-p',
-  'shared/test-types',
-  '--noEmit',
-]);
-await check('UI type check', 'npx', ['tsc', '-p', 'ui', '--noEmit']);
-await check('verification type check', 'npx', ['tsc', '-p', 'verification', '--noEmit']);
-await check('server test type check', 'npx', ['tsc', '-p', 'server/test', '--noEmit']);
-await check('lint (eslint)', 'npx', ['eslint', '.', '--max-warnings=0']);
-await check('formatting (prettier --check)', 'npx', [
-  'prettier',
-  '--check',
-  '.',
-  '--log-level=warn',
-]);
+const staticDone = (async () => {
+  for (const [name, args] of staticChecks) await check(name, args);
+})();
 
 const report = path.join(outDir, 'vitest.json');
 rmSync(report, { force: true });
@@ -100,6 +104,7 @@ const vitestCode = await new Promise((resolve) => {
   );
   child.on('close', resolve);
 });
+await staticDone;
 
 await stopChild(app.child);
 await cluster.stop();
