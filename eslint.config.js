@@ -85,9 +85,7 @@ const databaseHandleBan = [
   },
 ];
 const kyselyNotYetMoved = [
-  'server/src/attachments/attachments.service.ts',
   'server/src/audit/audit.service.ts',
-  'server/src/comments/comments.service.ts',
   'server/src/criteria/criteria-admin.service.ts',
   'server/src/criteria/criteria.service.ts',
   'server/src/field-records/field-records.service.ts',
