@@ -86,12 +86,9 @@ const databaseHandleBan = [
 ];
 const kyselyNotYetMoved = [
   'server/src/audit/audit.service.ts',
-  'server/src/criteria/criteria-admin.service.ts',
-  'server/src/criteria/criteria.service.ts',
   'server/src/field-records/field-records.service.ts',
   'server/src/register/register-edits.service.ts',
   'server/src/register/register.service.ts',
-  'server/src/reviews/reviews.service.ts',
   'server/src/revisions/changes.service.ts',
   'server/src/revisions/revisions.service.ts',
   'server/src/revisions/workflow.service.ts',
