@@ -1,11 +1,9 @@
 import { randomUUID } from 'node:crypto';
 import { Injectable, Logger } from '@nestjs/common';
 import type { Attachment } from '@holdfast/shared';
-import type { DB } from '@holdfast/db';
-import type { Kysely } from 'kysely';
 import type { AuthUser } from '../auth/auth-user.js';
 import { ApiException, notFound } from '../common/errors/api-exception.js';
-import { Database } from '../database/database.js';
+import { UnitOfWork, type Tx } from '../database/unit-of-work.js';
 import { AuditService } from '../audit/audit.service.js';
 import { RevisionsRepository } from '../revisions/revisions.repository.js';
 import { RevisionsService } from '../revisions/revisions.service.js';
@@ -21,13 +19,15 @@ import {
   type UploadedFile,
 } from './stored-file.js';
 import { UsersRepository } from '../users/users.repository.js';
+import { AttachmentsRepository } from './attachments.repository.js';
 
 @Injectable()
 export class AttachmentsService {
   private readonly logger = new Logger('Attachments');
 
   constructor(
-    private readonly db: Database,
+    private readonly repo: AttachmentsRepository,
+    private readonly units: UnitOfWork,
     private readonly storage: ObjectStorage,
     private readonly revisions: RevisionsService,
     private readonly revisionsRepo: RevisionsRepository,
@@ -38,14 +38,7 @@ export class AttachmentsService {
 
   async list(user: AuthUser, revisionId: string): Promise<Attachment[]> {
     await this.revisions.load(user, revisionId);
-    const rows = await this.db
-      .selectFrom('attachments')
-      .selectAll()
-      .where('revisionId', '=', revisionId)
-      // Photos of field records belong to their record, not to the revision's file list.
-      .where('fieldRecordId', 'is', null)
-      .orderBy('createdAt', 'asc')
-      .execute();
+    const rows = await this.repo.listForRevision(revisionId);
     const people = await this.users.people(rows.map((r) => r.uploadedBy));
     return rows.map((r) => toAttachment(r, people));
   }
@@ -59,7 +52,7 @@ export class AttachmentsService {
     const file = requireFile(sent, 'a file');
     const rev = await this.revisions.load(user, revisionId);
     this.revisions.assertEditable(user, rev, rev.rowVersion);
-    await this.assertQuota(this.db, revisionId, file.buffer.length);
+    await this.assertQuota(revisionId, file.buffer.length);
     const givenName = givenFileName(file);
     const contentType = sniffContentType(file.buffer, givenName);
     if (!contentType) {
@@ -74,18 +67,12 @@ export class AttachmentsService {
     const sha256 = sha256Of(file.buffer);
     const storageKey = `revisions/${revisionId}/${randomUUID()}`;
     const row = await storeThenRecord(this.storage, storageKey, file.buffer, contentType, () =>
-      this.db.transaction().execute(async (trx) => {
+      this.units.run(async (tx) => {
         // The revision row lock serialises uploads to one revision, so the quota holds under races.
-        await trx
-          .selectFrom('revisions')
-          .select('id')
-          .where('id', '=', revisionId)
-          .forUpdate()
-          .execute();
-        await this.assertQuota(trx, revisionId, file.buffer.length);
-        const created = await trx
-          .insertInto('attachments')
-          .values({
+        await this.repo.lockRevision(revisionId, tx);
+        await this.assertQuota(revisionId, file.buffer.length, tx);
+        const created = await this.repo.insert(
+          {
             revisionId,
             fileName,
             contentType,
@@ -93,10 +80,10 @@ export class AttachmentsService {
             sha256,
             storageKey,
             uploadedBy: user.id,
-          })
-          .returningAll()
-          .executeTakeFirstOrThrow();
-        await this.audit.record(trx, {
+          },
+          tx,
+        );
+        await this.audit.record(tx, {
           actorId: user.id,
           action: 'attachment.uploaded',
           entity: 'attachment',
@@ -111,16 +98,10 @@ export class AttachmentsService {
   }
 
   /** Refuses an upload that would take the revision past its file count or byte quota. */
-  private async assertQuota(db: Kysely<DB>, revisionId: string, adding: number): Promise<void> {
+  private async assertQuota(revisionId: string, adding: number, tx?: Tx): Promise<void> {
     const { ATTACHMENTS_PER_REVISION: maxFiles, ATTACHMENT_MB_PER_REVISION: maxMb } =
       this.config.settings;
-    const used = await db
-      .selectFrom('attachments')
-      .select((eb) => [eb.fn.countAll<string>().as('files'), eb.fn.sum<string>('size').as('bytes')])
-      .where('revisionId', '=', revisionId)
-      .executeTakeFirstOrThrow();
-    const files = Number(used.files);
-    const bytes = Number(used.bytes ?? 0);
+    const { files, bytes } = await this.repo.usage(revisionId, tx);
     const maxBytes = maxMb * 1024 * 1024;
     if (files + 1 > maxFiles || bytes + adding > maxBytes) {
       throw new ApiException(
@@ -135,11 +116,7 @@ export class AttachmentsService {
 
   /** The bytes, checked against the stored SHA-256. */
   async download(user: AuthUser, id: string): Promise<{ attachment: Attachment; bytes: Buffer }> {
-    const row = await this.db
-      .selectFrom('attachments')
-      .selectAll()
-      .where('id', '=', id)
-      .executeTakeFirst();
+    const row = await this.repo.find(id);
     if (!row) throw notFound('Attachment not found.');
     await this.revisions.load(user, row.revisionId);
     const bytes = await this.storage.get(row.storageKey);

@@ -1,7 +1,7 @@
 import { createHash, randomUUID } from 'node:crypto';
 import { Injectable, Logger, type OnApplicationBootstrap } from '@nestjs/common';
-import { Database } from '../database/database.js';
 import { ObjectStorage } from '../storage/object-storage.js';
+import { AttachmentsRepository } from './attachments.repository.js';
 
 /** Demo documents that carry a generated data sheet (see db/seeds/*_demo_plant.ts). */
 const DEMO_DOCUMENTS = ['HF-NRW-0005', 'HF-NRW-0006'];
@@ -35,7 +35,7 @@ export class DemoAttachments implements OnApplicationBootstrap {
   private readonly logger = new Logger('DemoAttachments');
 
   constructor(
-    private readonly db: Database,
+    private readonly repo: AttachmentsRepository,
     private readonly storage: ObjectStorage,
   ) {}
 
@@ -48,35 +48,20 @@ export class DemoAttachments implements OnApplicationBootstrap {
   }
 
   async ensure(): Promise<number> {
-    const targets = await this.db
-      .selectFrom('sheets as s')
-      .innerJoin('revisions as r', 'r.id', 's.latestRevisionId')
-      .select(['s.documentNumber', 'r.id as revisionId', 'r.authorId'])
-      .where('s.documentNumber', 'in', DEMO_DOCUMENTS)
-      .where(({ not, exists, selectFrom }) =>
-        not(
-          exists(
-            selectFrom('attachments as a').select('a.id').whereRef('a.revisionId', '=', 'r.id'),
-          ),
-        ),
-      )
-      .execute();
+    const targets = await this.repo.withoutFiles(DEMO_DOCUMENTS);
     for (const t of targets) {
       const bytes = Buffer.from(demoDataSheet(t.documentNumber), 'utf8');
       const storageKey = `revisions/${t.revisionId}/${randomUUID()}`;
       await this.storage.put(storageKey, bytes, 'text/plain');
-      await this.db
-        .insertInto('attachments')
-        .values({
-          revisionId: t.revisionId,
-          fileName: 'thruster-data-sheet-demo.txt',
-          contentType: 'text/plain',
-          size: bytes.length,
-          sha256: createHash('sha256').update(bytes).digest('hex'),
-          storageKey,
-          uploadedBy: t.authorId,
-        })
-        .execute();
+      await this.repo.insert({
+        revisionId: t.revisionId,
+        fileName: 'thruster-data-sheet-demo.txt',
+        contentType: 'text/plain',
+        size: bytes.length,
+        sha256: createHash('sha256').update(bytes).digest('hex'),
+        storageKey,
+        uploadedBy: t.authorId,
+      });
     }
     if (targets.length)
       this.logger.log(

@@ -13,6 +13,7 @@ import { AuthGuard } from './auth.guard.js';
 import { AuthService } from './auth.service.js';
 import { LoginThrottlerGuard } from './login-throttler.guard.js';
 import { PasswordResetService } from './password-reset.service.js';
+import { PasswordResetsRepository } from './password-resets.repository.js';
 import { RefreshTokensRepository } from './refresh-tokens.repository.js';
 import { UserPasswordController } from './user-password.controller.js';
 
@@ -57,6 +58,7 @@ const isNotAuthRoute = (context: ExecutionContext) =>
     AuthService,
     AccessVerifier,
     PasswordResetService,
+    PasswordResetsRepository,
     RefreshTokensRepository,
     LoginThrottlerGuard,
     { provide: APP_GUARD, useClass: AuthGuard },

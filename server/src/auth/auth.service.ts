@@ -1,12 +1,11 @@
 import { createHash, randomBytes } from 'node:crypto';
 import { Injectable, Logger } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
-import { hashPassword, verifyPassword, type DB, type UserRow } from '@holdfast/db';
+import { hashPassword, verifyPassword, type UserRow } from '@holdfast/db';
 import type { ChangePasswordInput, Session, SignInInput } from '@holdfast/shared';
-import type { Kysely } from 'kysely';
 import { AppConfig } from '../config/app-config.js';
 import { badRequest, unauthenticated } from '../common/errors/api-exception.js';
-import { Database } from '../database/database.js';
+import { UnitOfWork, type Tx } from '../database/unit-of-work.js';
 import { UsersRepository } from '../users/users.repository.js';
 import { assertStrongPassword, toUser } from '../users/users.service.js';
 import { ACCESS_TOKEN_SECONDS, type AccessTokenClaims } from './access-token.js';
@@ -29,7 +28,7 @@ export class AuthService {
 
   constructor(
     private readonly config: AppConfig,
-    private readonly db: Database,
+    private readonly units: UnitOfWork,
     private readonly jwt: JwtService,
     private readonly users: UsersRepository,
     private readonly tokens: RefreshTokensRepository,
@@ -70,11 +69,9 @@ export class AuthService {
     }
     // Revoke and insert the successor in one transaction: a concurrent refresh of the same
     // token waits on the row, then finds it rotated (not merely revoked) and gets the grace.
-    const rotated = await this.db
-      .transaction()
-      .execute(async (trx) =>
-        (await this.tokens.revokeIfLive(row.id, trx)) ? this.issue(user, row.id, trx) : undefined,
-      );
+    const rotated = await this.units.run(async (tx) =>
+      (await this.tokens.revokeIfLive(row.id, tx)) ? this.issue(user, row.id, tx) : undefined,
+    );
     if (rotated) return rotated;
     if (await this.tokens.wasRotated(row.id)) return this.issueFor(row.userId, row.id, denied);
     throw denied();
@@ -123,11 +120,7 @@ export class AuthService {
     return this.issue(user, rotatedFrom);
   }
 
-  private async issue(
-    user: UserRow,
-    rotatedFrom?: string,
-    db: Kysely<DB> = this.db,
-  ): Promise<IssuedSession> {
+  private async issue(user: UserRow, rotatedFrom?: string, tx?: Tx): Promise<IssuedSession> {
     const claims: AccessTokenClaims = {
       sub: user.id,
       role: user.role,
@@ -145,7 +138,7 @@ export class AuthService {
         expiresAt: refreshExpiresAt,
         ...(rotatedFrom ? { rotatedFrom } : {}),
       },
-      db,
+      tx,
     );
     return {
       session: { accessToken, expiresIn: ACCESS_TOKEN_SECONDS, user: toUser(user) },

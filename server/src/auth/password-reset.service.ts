@@ -4,11 +4,12 @@ import { hashPassword } from '@holdfast/db';
 import type { CompletePasswordResetInput, PasswordResetIssued } from '@holdfast/shared';
 import { AppConfig } from '../config/app-config.js';
 import { badRequest, notFound } from '../common/errors/api-exception.js';
-import { Database } from '../database/database.js';
+import { UnitOfWork } from '../database/unit-of-work.js';
 import { OutboxService } from '../outbox/outbox.service.js';
 import { UsersRepository } from '../users/users.repository.js';
 import { assertStrongPassword } from '../users/users.service.js';
 import { hashToken } from './auth.service.js';
+import { PasswordResetsRepository } from './password-resets.repository.js';
 
 /** How long a mailed reset link works. */
 export const RESET_LINK_HOURS = 24;
@@ -26,7 +27,8 @@ export class PasswordResetService {
   private readonly logger = new Logger('PasswordReset');
 
   constructor(
-    private readonly db: Database,
+    private readonly units: UnitOfWork,
+    private readonly resets: PasswordResetsRepository,
     private readonly users: UsersRepository,
     private readonly outbox: OutboxService,
     private readonly config: AppConfig,
@@ -35,23 +37,18 @@ export class PasswordResetService {
   async issue(adminId: string, userId: string): Promise<PasswordResetIssued> {
     const token = randomBytes(32).toString('base64url');
     const expiresAt = new Date(Date.now() + RESET_LINK_HOURS * 3600 * 1000);
-    const user = await this.db.transaction().execute(async (trx) => {
-      const row = await this.users.findById(userId, trx);
+    const user = await this.units.run(async (tx) => {
+      const row = await this.users.findById(userId, tx);
       if (!row) throw notFound('No such user.');
-      await trx
-        .updateTable('passwordResets')
-        .set({ usedAt: new Date() })
-        .where('userId', '=', userId)
-        .where('usedAt', 'is', null)
-        .execute();
-      await trx
-        .insertInto('passwordResets')
-        .values({ userId, tokenHash: hashToken(token), requestedBy: adminId, expiresAt })
-        .execute();
-      await this.users.setPassword(userId, LOCKED_PASSWORD, trx);
+      await this.resets.closeOpen(userId, tx);
+      await this.resets.insert(
+        { userId, tokenHash: hashToken(token), requestedBy: adminId, expiresAt },
+        tx,
+      );
+      await this.users.setPassword(userId, LOCKED_PASSWORD, tx);
       const link = `${this.config.settings.PUBLIC_URL.replace(/\/$/, '')}/reset-password#token=${token}`;
       await this.outbox.enqueueMail(
-        trx,
+        tx,
         {
           to: [row.email],
           subject: '[Holdfast] Set a new password',
@@ -79,25 +76,15 @@ export class PasswordResetService {
       badRequest('Some fields are not valid.', [
         { path: 'token', message: 'this link is not valid or has expired; ask for a new one' },
       ]);
-    const reset = await this.db
-      .selectFrom('passwordResets')
-      .selectAll()
-      .where('tokenHash', '=', hashToken(input.token))
-      .executeTakeFirst();
+    const reset = await this.resets.findByHash(hashToken(input.token));
     if (!reset || reset.usedAt || reset.expiresAt.getTime() <= Date.now()) throw invalid();
     const user = await this.users.findById(reset.userId);
     if (!user?.active) throw invalid();
     assertStrongPassword('newPassword', input.newPassword, [user.email, user.displayName]);
     const hash = await hashPassword(input.newPassword);
-    await this.db.transaction().execute(async (trx) => {
-      const used = await trx
-        .updateTable('passwordResets')
-        .set({ usedAt: new Date() })
-        .where('id', '=', reset.id)
-        .where('usedAt', 'is', null)
-        .executeTakeFirst();
-      if (used.numUpdatedRows === 0n) throw invalid();
-      await this.users.setPassword(user.id, hash, trx);
+    await this.units.run(async (tx) => {
+      if (!(await this.resets.markUsed(reset.id, tx))) throw invalid();
+      await this.users.setPassword(user.id, hash, tx);
     });
   }
 }

@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
-import type { DB, RefreshTokenRow } from '@holdfast/db';
-import type { Kysely } from 'kysely';
+import type { RefreshTokenRow } from '@holdfast/db';
 import { Database } from '../database/database.js';
+import { on, type OpenTransaction } from '../database/unit-of-work.js';
 
 @Injectable()
 export class RefreshTokensRepository {
@@ -9,9 +9,9 @@ export class RefreshTokensRepository {
 
   async insert(
     row: { userId: string; tokenHash: string; expiresAt: Date; rotatedFrom?: string },
-    db: Kysely<DB> = this.db,
+    tx?: OpenTransaction,
   ): Promise<void> {
-    await db.insertInto('refreshTokens').values(row).execute();
+    await on(this.db, tx).insertInto('refreshTokens').values(row).execute();
   }
 
   findByHash(tokenHash: string): Promise<RefreshTokenRow | undefined> {
@@ -26,8 +26,8 @@ export class RefreshTokensRepository {
    * Revokes the token if it is still live; returns false when another request got there first,
    * which makes rotation single-use even under concurrent refreshes.
    */
-  async revokeIfLive(id: string, db: Kysely<DB> = this.db): Promise<boolean> {
-    const result = await db
+  async revokeIfLive(id: string, tx?: OpenTransaction): Promise<boolean> {
+    const result = await on(this.db, tx)
       .updateTable('refreshTokens')
       .set({ revokedAt: new Date() })
       .where('id', '=', id)

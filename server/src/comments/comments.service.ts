@@ -4,12 +4,13 @@ import type { CommentRow } from '@holdfast/db';
 import type { AuthUser } from '../auth/auth-user.js';
 import { effectiveRoles } from '../auth/policy.js';
 import { badRequest, forbidden, notFound } from '../common/errors/api-exception.js';
-import { Database } from '../database/database.js';
+import { UnitOfWork } from '../database/unit-of-work.js';
 import { AuditService } from '../audit/audit.service.js';
 import { canComment } from '../revisions/read-rules.js';
 import { RevisionsRepository } from '../revisions/revisions.repository.js';
 import { RevisionsService } from '../revisions/revisions.service.js';
 import { UsersRepository } from '../users/users.repository.js';
+import { CommentsRepository } from './comments.repository.js';
 
 type People = Map<string, { id: string; displayName: string; initials: string }>;
 
@@ -41,7 +42,8 @@ function toComment(r: CommentRow, people: People): Comment {
 @Injectable()
 export class CommentsService {
   constructor(
-    private readonly db: Database,
+    private readonly repo: CommentsRepository,
+    private readonly units: UnitOfWork,
     private readonly revisions: RevisionsService,
     private readonly revisionsRepo: RevisionsRepository,
     private readonly users: UsersRepository,
@@ -50,13 +52,7 @@ export class CommentsService {
 
   async list(user: AuthUser, revisionId: string): Promise<Comment[]> {
     await this.revisions.load(user, revisionId);
-    const rows = await this.db
-      .selectFrom('comments')
-      .selectAll()
-      .where('revisionId', '=', revisionId)
-      .orderBy('createdAt', 'asc')
-      .orderBy('id', 'asc')
-      .execute();
+    const rows = await this.repo.listForRevision(revisionId);
     const people = await this.users.people(rows.map((r) => r.authorId));
     const top = rows
       .filter((r) => !r.parentId)
@@ -76,11 +72,7 @@ export class CommentsService {
     }
     let anchor = input.anchor ?? null;
     if (input.parentId) {
-      const parent = await this.db
-        .selectFrom('comments')
-        .selectAll()
-        .where('id', '=', input.parentId)
-        .executeTakeFirst();
+      const parent = await this.repo.find(input.parentId);
       if (!parent || parent.revisionId !== revisionId || parent.parentId) {
         throw badRequest('Some fields are not valid.', [
           { path: 'parentId', message: 'not a top-level comment of this revision' },
@@ -88,20 +80,19 @@ export class CommentsService {
       }
       anchor = null;
     }
-    const row = await this.db.transaction().execute(async (trx) => {
-      const created = await trx
-        .insertInto('comments')
-        .values({
+    const row = await this.units.run(async (tx) => {
+      const created = await this.repo.insert(
+        {
           revisionId,
           parentId: input.parentId ?? null,
           authorId: user.id,
           body: input.body,
           anchorKind: anchor?.kind ?? null,
           anchorKey: anchor?.key ?? null,
-        })
-        .returningAll()
-        .executeTakeFirstOrThrow();
-      await this.audit.record(trx, {
+        },
+        tx,
+      );
+      await this.audit.record(tx, {
         actorId: user.id,
         action: input.parentId ? 'comment.replied' : 'comment.created',
         entity: 'comment',
@@ -116,32 +107,20 @@ export class CommentsService {
 
   /** Resolve or reopen: the comment's author, the revision's author, the sheet owner or a checker. */
   async update(user: AuthUser, id: string, input: UpdateCommentInput): Promise<Comment> {
-    const row = await this.db.transaction().execute(async (trx) => {
-      const c = await trx
-        .selectFrom('comments')
-        .selectAll()
-        .where('id', '=', id)
-        .forUpdate()
-        .executeTakeFirst();
+    const row = await this.units.run(async (tx) => {
+      const c = await this.repo.find(id, tx, true);
       if (!c) throw notFound('Comment not found.');
-      const rev = await this.revisions.load(user, c.revisionId, trx);
+      // RevisionsService.load still takes the Kysely transaction a Tx stands for; it moves to
+      // Tx with the revisions service (issue 14), and this cast goes with it.
+      const rev = await this.revisions.load(user, c.revisionId, tx as never);
       const allowed =
         c.authorId === user.id ||
         rev.authorId === user.id ||
         rev.ownerId === user.id ||
         effectiveRoles(user.role).includes('checker');
       if (!allowed) throw forbidden('Only the people on this revision can resolve its comments.');
-      const updated = await trx
-        .updateTable('comments')
-        .set({
-          resolved: input.resolved,
-          resolvedBy: input.resolved ? user.id : null,
-          resolvedAt: input.resolved ? new Date() : null,
-        })
-        .where('id', '=', id)
-        .returningAll()
-        .executeTakeFirstOrThrow();
-      await this.audit.record(trx, {
+      const updated = await this.repo.setResolved(id, input.resolved, user.id, tx);
+      await this.audit.record(tx, {
         actorId: user.id,
         action: input.resolved ? 'comment.resolved' : 'comment.reopened',
         entity: 'comment',

@@ -6,7 +6,7 @@ import type {
   CriteriaSetDetail,
 } from '@holdfast/shared';
 import { badRequest, conflict, notFound } from '../common/errors/api-exception.js';
-import { Database } from '../database/database.js';
+import { UnitOfWork } from '../database/unit-of-work.js';
 import { AuditService } from '../audit/audit.service.js';
 import { CriteriaRepository } from './criteria.repository.js';
 import { CriteriaService } from './criteria.service.js';
@@ -15,32 +15,28 @@ import { CriteriaService } from './criteria.service.js';
 @Injectable()
 export class CriteriaAdminService {
   constructor(
-    private readonly db: Database,
+    private readonly units: UnitOfWork,
     private readonly repo: CriteriaRepository,
     private readonly criteria: CriteriaService,
     private readonly audit: AuditService,
   ) {}
 
   async create(actorId: string, input: CreateCriteriaSetInput): Promise<CriteriaSetDetail> {
-    await this.db.transaction().execute(async (trx) => {
-      const taken = await trx
-        .selectFrom('criteriaSets')
-        .select('id')
-        .where('id', '=', input.id)
-        .executeTakeFirst();
-      if (taken) throw conflict(`A criteria set with the id "${input.id}" exists already.`);
+    await this.units.run(async (tx) => {
+      if (await this.repo.setExists(input.id, tx))
+        throw conflict(`A criteria set with the id "${input.id}" exists already.`);
       const values = input.values.map((v) => ({
         ...v,
         unit: criterionUnit(v.key) ?? v.unit,
       }));
       await this.repo.createSet(
-        trx,
+        tx,
         { id: input.id, name: input.name, description: input.description },
         values,
         input.note,
         actorId,
       );
-      await this.audit.record(trx, {
+      await this.audit.record(tx, {
         actorId,
         action: 'criteria-set.created',
         entity: 'criteria-set',
@@ -57,8 +53,8 @@ export class CriteriaAdminService {
     version: number,
     input: ConfirmCriterionInput,
   ): Promise<CriteriaSetDetail> {
-    await this.db.transaction().execute(async (trx) => {
-      const row = await this.repo.version(id, version, trx);
+    await this.units.run(async (tx) => {
+      const row = await this.repo.version(id, version, tx);
       if (!row) throw notFound(`Criteria set ${id} has no version ${version}.`);
       const value = row.values.find((v) => v.key === input.key);
       if (!value) {
@@ -66,7 +62,7 @@ export class CriteriaAdminService {
           { path: 'key', message: `version ${version} of "${id}" has no value "${input.key}"` },
         ]);
       }
-      await this.repo.insertConfirmation(trx, {
+      await this.repo.insertConfirmation(tx, {
         criteriaSetId: id,
         version,
         key: input.key,
@@ -74,7 +70,7 @@ export class CriteriaAdminService {
         clause: input.clause,
         confirmedBy: actorId,
       });
-      await this.audit.record(trx, {
+      await this.audit.record(tx, {
         actorId,
         action: 'criteria-set.value-confirmed',
         entity: 'criteria-set',

@@ -1,8 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import type { CriteriaSet, CriterionValue } from '@holdfast/calc';
-import type { Kysely } from 'kysely';
-import type { DB } from '@holdfast/db';
 import { Database } from '../database/database.js';
+import { on, type OpenTransaction } from '../database/unit-of-work.js';
 
 export interface CriteriaVersionRow {
   criteriaSetId: string;
@@ -61,8 +60,8 @@ export class CriteriaRepository {
     return this.db.selectFrom('criteriaSets').selectAll().where('id', '=', id).executeTakeFirst();
   }
 
-  async versions(id: string, db: Kysely<DB> = this.db): Promise<CriteriaVersionRow[]> {
-    const rows = await db
+  async versions(id: string, tx?: OpenTransaction): Promise<CriteriaVersionRow[]> {
+    const rows = await on(this.db, tx)
       .selectFrom('criteriaSetVersions')
       .selectAll()
       .where('criteriaSetId', '=', id)
@@ -74,9 +73,12 @@ export class CriteriaRepository {
   async version(
     id: string,
     version: number | 'latest',
-    db: Kysely<DB> = this.db,
+    tx?: OpenTransaction,
   ): Promise<CriteriaVersionRow | undefined> {
-    let q = db.selectFrom('criteriaSetVersions').selectAll().where('criteriaSetId', '=', id);
+    let q = on(this.db, tx)
+      .selectFrom('criteriaSetVersions')
+      .selectAll()
+      .where('criteriaSetId', '=', id);
     q =
       version === 'latest'
         ? q.orderBy('version', 'desc').limit(1)
@@ -85,16 +87,37 @@ export class CriteriaRepository {
     return row ? { ...row, values: row.values as CriterionValue[] } : undefined;
   }
 
+  /** Whether a set has this id. */
+  async setExists(id: string, tx?: OpenTransaction): Promise<boolean> {
+    const row = await on(this.db, tx)
+      .selectFrom('criteriaSets')
+      .select('id')
+      .where('id', '=', id)
+      .executeTakeFirst();
+    return row !== undefined;
+  }
+
+  /** Takes the set's row lock (inside the caller's transaction): publishing is one at a time. */
+  async lockSet(id: string, tx: OpenTransaction): Promise<boolean> {
+    const row = await on(this.db, tx)
+      .selectFrom('criteriaSets')
+      .select('id')
+      .where('id', '=', id)
+      .forUpdate()
+      .executeTakeFirst();
+    return row !== undefined;
+  }
+
   /** A new set with its first version (the caller audits it). */
   async createSet(
-    trx: Kysely<DB>,
+    tx: OpenTransaction,
     set: { id: string; name: string; description: string },
     values: CriterionValue[],
     note: string,
     publishedBy: string,
   ): Promise<void> {
-    await trx.insertInto('criteriaSets').values(set).execute();
-    await this.insertVersion(trx, {
+    await on(this.db, tx).insertInto('criteriaSets').values(set).execute();
+    await this.insertVersion(tx, {
       criteriaSetId: set.id,
       version: 1,
       values,
@@ -124,7 +147,7 @@ export class CriteriaRepository {
   }
 
   async insertConfirmation(
-    trx: Kysely<DB>,
+    tx: OpenTransaction,
     row: {
       criteriaSetId: string;
       version: number;
@@ -134,11 +157,11 @@ export class CriteriaRepository {
       confirmedBy: string;
     },
   ): Promise<void> {
-    await trx.insertInto('criteriaConfirmations').values(row).execute();
+    await on(this.db, tx).insertInto('criteriaConfirmations').values(row).execute();
   }
 
   async insertVersion(
-    trx: Kysely<DB>,
+    tx: OpenTransaction,
     row: {
       criteriaSetId: string;
       version: number;
@@ -147,7 +170,7 @@ export class CriteriaRepository {
       publishedBy: string;
     },
   ): Promise<void> {
-    await trx
+    await on(this.db, tx)
       .insertInto('criteriaSetVersions')
       .values({ ...row, values: JSON.stringify(row.values) })
       .execute();

@@ -5,13 +5,12 @@ import type {
   CriteriaSetSummary,
   PublishCriteriaVersionInput,
 } from '@holdfast/shared';
-import type { Kysely } from 'kysely';
-import type { DB } from '@holdfast/db';
 import { badRequest, notFound } from '../common/errors/api-exception.js';
-import { Database } from '../database/database.js';
+import { UnitOfWork, type OpenTransaction } from '../database/unit-of-work.js';
 import { AuditService } from '../audit/audit.service.js';
 import { criterionUnit, shippedCriteriaSets } from '../calc/calc-engine.js';
 import { ReviewsService } from '../reviews/reviews.service.js';
+import { UsersRepository } from '../users/users.repository.js';
 import { CriteriaRepository } from './criteria.repository.js';
 import { confirmationsFor } from './confirmations.js';
 
@@ -20,8 +19,9 @@ export class CriteriaService implements OnModuleInit {
   private readonly logger = new Logger('CriteriaService');
 
   constructor(
-    private readonly db: Database,
+    private readonly units: UnitOfWork,
     private readonly repo: CriteriaRepository,
+    private readonly users: UsersRepository,
     private readonly audit: AuditService,
     private readonly reviews: ReviewsService,
   ) {}
@@ -39,13 +39,9 @@ export class CriteriaService implements OnModuleInit {
   }
 
   /** A version as calc's CriteriaSet, for evaluation. */
-  async load(
-    id: string,
-    version: number | 'latest',
-    db: Kysely<DB> = this.db,
-  ): Promise<CriteriaSet> {
+  async load(id: string, version: number | 'latest', tx?: OpenTransaction): Promise<CriteriaSet> {
     const set = await this.repo.findSet(id);
-    const row = set && (await this.repo.version(id, version, db));
+    const row = set && (await this.repo.version(id, version, tx));
     if (!set || !row) throw notFound(`Criteria set ${id} version ${version} does not exist.`);
     return {
       id,
@@ -64,11 +60,7 @@ export class CriteriaService implements OnModuleInit {
       version === undefined ? versions.at(-1) : versions.find((v) => v.version === version);
     if (!row) throw notFound(`Criteria set ${id} has no version ${version}.`);
     const publisher = row.publishedBy
-      ? await this.db
-          .selectFrom('users')
-          .select(['id', 'displayName', 'initials'])
-          .where('id', '=', row.publishedBy)
-          .executeTakeFirst()
+      ? (await this.users.people([row.publishedBy])).get(row.publishedBy)
       : undefined;
     return {
       id,
@@ -99,15 +91,9 @@ export class CriteriaService implements OnModuleInit {
     id: string,
     input: PublishCriteriaVersionInput,
   ): Promise<CriteriaSetDetail> {
-    const next = await this.db.transaction().execute(async (trx) => {
-      const set = await trx
-        .selectFrom('criteriaSets')
-        .select('id')
-        .where('id', '=', id)
-        .forUpdate()
-        .executeTakeFirst();
-      if (!set) throw notFound(`Criteria set ${id} does not exist.`);
-      const latest = await this.repo.version(id, 'latest', trx);
+    const next = await this.units.run(async (tx) => {
+      if (!(await this.repo.lockSet(id, tx))) throw notFound(`Criteria set ${id} does not exist.`);
+      const latest = await this.repo.version(id, 'latest', tx);
       if (!latest) throw notFound(`Criteria set ${id} has no versions.`);
       const want = new Set(latest.values.map((v) => v.key));
       const got = input.values.map((v) => v.key);
@@ -125,7 +111,7 @@ export class CriteriaService implements OnModuleInit {
       ];
       if (fields.length) throw badRequest('The values do not match the set.', fields);
       const version = latest.version + 1;
-      await this.repo.insertVersion(trx, {
+      await this.repo.insertVersion(tx, {
         criteriaSetId: id,
         version,
         // An empty unit means the declared one; the record always names it.
@@ -133,7 +119,7 @@ export class CriteriaService implements OnModuleInit {
         note: input.note,
         publishedBy: actorId,
       });
-      await this.audit.record(trx, {
+      await this.audit.record(tx, {
         actorId,
         action: 'criteria-set.published',
         entity: 'criteria-set',
@@ -143,7 +129,7 @@ export class CriteriaService implements OnModuleInit {
       });
       // Approvals follow criteria changes: in the same transaction, so no version is ever
       // published without its flags.
-      await this.reviews.flagAfterPublish(trx, actorId, await this.load(id, version, trx));
+      await this.reviews.flagAfterPublish(tx, actorId, await this.load(id, version, tx));
       return version;
     });
     return this.detail(id, next);

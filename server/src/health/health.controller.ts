@@ -2,19 +2,18 @@ import { apiRoutes } from '@holdfast/shared';
 import { Controller, Get, Res } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import type { Health } from '@holdfast/shared';
-import { sql } from 'kysely';
 import type { Response } from 'express';
 import { serverVersion } from '../config/paths.js';
-import { Database } from '../database/database.js';
 import { Public } from '../auth/policy.js';
 import { DATABASE_RETRY_AFTER_SECONDS } from '../common/errors/postgres-errors.js';
+import { HealthRepository } from './health.repository.js';
 
 const DATABASE_TIMEOUT_MS = 1000;
 
 @ApiTags('health')
 @Controller()
 export class HealthController {
-  constructor(private readonly db: Database) {}
+  constructor(private readonly repo: HealthRepository) {}
 
   /** 200 when PostgreSQL answers `select 1` within a second, else 503. Never an error body. */
   @Get(apiRoutes.health.path)
@@ -33,8 +32,8 @@ export class HealthController {
     const timeout = new Promise<false>((resolve) => {
       timer = setTimeout(() => resolve(false), DATABASE_TIMEOUT_MS);
     });
-    const query = sql`select 1`
-      .execute(this.db)
+    const query = this.repo
+      .ping()
       .then(() => true)
       .catch(() => false);
     try {

@@ -1,10 +1,11 @@
 import { Injectable, Logger } from '@nestjs/common';
 import type { FailedMail } from '@holdfast/shared';
 import { notFound } from '../common/errors/api-exception.js';
-import { Database } from '../database/database.js';
+import { UnitOfWork } from '../database/unit-of-work.js';
 import { loadMailSettings } from '../mail/mail-settings.js';
 import type { MailMessage } from '../mail/mailer.js';
 import { JobQueue, MAIL_QUEUE } from './job-queue.js';
+import { OutboxRepository } from './outbox.repository.js';
 
 /**
  * Mail that failed for good: the outbox row is unsent after the first try plus every retry
@@ -16,19 +17,13 @@ export class FailedMailService {
   private readonly retryLimit = loadMailSettings().MAIL_RETRY_LIMIT;
 
   constructor(
-    private readonly db: Database,
+    private readonly repo: OutboxRepository,
+    private readonly units: UnitOfWork,
     private readonly queue: JobQueue,
   ) {}
 
   async list(): Promise<FailedMail[]> {
-    const rows = await this.db
-      .selectFrom('outbox')
-      .selectAll()
-      .where('sentAt', 'is', null)
-      .where('attempts', '>', this.retryLimit)
-      .orderBy('createdAt', 'desc')
-      .limit(200)
-      .execute();
+    const rows = await this.repo.failed(this.retryLimit);
     return rows.map((r) => {
       const message = r.payload as MailMessage;
       return {
@@ -44,16 +39,10 @@ export class FailedMailService {
 
   /** Queue a failed mail again with a fresh set of retries. */
   async resend(id: string, adminId: string): Promise<void> {
-    await this.db.transaction().execute(async (trx) => {
-      const reset = await trx
-        .updateTable('outbox')
-        .set({ attempts: 0, lastError: null })
-        .where('id', '=', id)
-        .where('sentAt', 'is', null)
-        .where('attempts', '>', this.retryLimit)
-        .executeTakeFirst();
-      if (reset.numUpdatedRows === 0n) throw notFound('No failed mail with this id.');
-      await this.queue.sendIn(trx, MAIL_QUEUE, { outboxId: id });
+    await this.units.run(async (tx) => {
+      if (!(await this.repo.resetFailed(id, this.retryLimit, tx)))
+        throw notFound('No failed mail with this id.');
+      await this.queue.sendIn(tx, MAIL_QUEUE, { outboxId: id });
     });
     this.logger.log(`mail ${id} queued again by admin ${adminId}`);
   }

@@ -2,8 +2,9 @@ import { Injectable, Logger, type OnModuleDestroy, type OnModuleInit } from '@ne
 import { CompiledQuery, type Kysely } from 'kysely';
 import PgBoss from 'pg-boss';
 import type pg from 'pg';
-import { createPool } from '@holdfast/db';
+import { createPool, type DB } from '@holdfast/db';
 import { AppConfig } from '../config/app-config.js';
+import type { OpenTransaction } from '../database/unit-of-work.js';
 import { loadMailSettings } from '../mail/mail-settings.js';
 
 export const MAIL_QUEUE = 'mail';
@@ -51,9 +52,13 @@ export class JobQueue implements OnModuleInit, OnModuleDestroy {
     await this.pool.end();
   }
 
-  /** Enqueue inside `trx` (any Kysely bound to the open transaction). */
-  // eslint-disable-next-line @typescript-eslint/no-explicit-any
-  async sendIn(trx: Kysely<any>, queue: string, data: object): Promise<void> {
+  /**
+   * Enqueue inside the caller's open transaction. Infrastructure, not a repository: pg-boss writes
+   * its own SQL, and this runs it on the transaction's connection so the job commits with the
+   * change. A `Tx` is the Kysely transaction underneath (unit-of-work.ts).
+   */
+  async sendIn(tx: OpenTransaction, queue: string, data: object): Promise<void> {
+    const trx = tx as Kysely<DB>;
     const db = {
       executeSql: async (text: string, values: unknown[]) => {
         const result = await trx.executeQuery(CompiledQuery.raw(text, values));

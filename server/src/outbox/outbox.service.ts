@@ -1,9 +1,8 @@
 import { Injectable, Logger, type OnApplicationBootstrap } from '@nestjs/common';
-import type { Kysely } from 'kysely';
-import type { DB } from '@holdfast/db';
-import { Database } from '../database/database.js';
+import type { OpenTransaction } from '../database/unit-of-work.js';
 import { Mailer, type MailMessage } from '../mail/mailer.js';
 import { JobQueue, MAIL_QUEUE } from './job-queue.js';
+import { OutboxRepository } from './outbox.repository.js';
 
 interface MailJob {
   outboxId: string;
@@ -25,7 +24,7 @@ export class OutboxService implements OnApplicationBootstrap {
   private readonly logger = new Logger('Outbox');
 
   constructor(
-    private readonly db: Database,
+    private readonly repo: OutboxRepository,
     private readonly queue: JobQueue,
     private readonly mailer: Mailer,
   ) {}
@@ -40,50 +39,32 @@ export class OutboxService implements OnApplicationBootstrap {
    * its backups never keep a working link longer than delivery needs.
    */
   async enqueueMail(
-    trx: Kysely<DB>,
+    trx: OpenTransaction,
     message: MailMessage,
     opts: { secret?: boolean } = {},
   ): Promise<void> {
     if (message.to.length === 0) return;
     const payload: StoredMail = opts.secret ? { ...message, secret: true } : message;
-    const row = await trx
-      .insertInto('outbox')
-      .values({ kind: 'mail', payload: JSON.stringify(payload) })
-      .returning('id')
-      .executeTakeFirstOrThrow();
-    await this.queue.sendIn(trx, MAIL_QUEUE, { outboxId: row.id } satisfies MailJob);
+    const outboxId = await this.repo.insertMail(JSON.stringify(payload), trx);
+    await this.queue.sendIn(trx, MAIL_QUEUE, { outboxId } satisfies MailJob);
   }
 
   /** Send one outbox message; throws (so pg-boss retries) when SMTP fails. */
   async deliver(outboxId: string): Promise<void> {
-    const row = await this.db
-      .selectFrom('outbox')
-      .selectAll()
-      .where('id', '=', outboxId)
-      .executeTakeFirst();
+    const row = await this.repo.find(outboxId);
     if (!row || row.sentAt) return;
     const { secret, ...message } = row.payload as StoredMail;
     try {
       await this.mailer.send(message);
     } catch (e) {
       const reason = e instanceof Error ? e.message : String(e);
-      await this.db
-        .updateTable('outbox')
-        .set((eb) => ({ attempts: eb('attempts', '+', 1), lastError: reason }))
-        .where('id', '=', outboxId)
-        .execute();
+      await this.repo.recordFailure(outboxId, reason);
       this.logger.warn(`mail ${outboxId} not sent yet (${reason}); will retry`);
       throw e;
     }
-    await this.db
-      .updateTable('outbox')
-      .set((eb) => ({
-        attempts: eb('attempts', '+', 1),
-        sentAt: new Date(),
-        lastError: null,
-        ...(secret ? { payload: JSON.stringify({ ...message, text: SENT_SECRET_TEXT }) } : {}),
-      }))
-      .where('id', '=', outboxId)
-      .execute();
+    await this.repo.recordSent(
+      outboxId,
+      secret ? JSON.stringify({ ...message, text: SENT_SECRET_TEXT }) : undefined,
+    );
   }
 }

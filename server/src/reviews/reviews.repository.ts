@@ -3,6 +3,7 @@ import type { Kysely } from 'kysely';
 import type { CriteriaReviewRow, DB } from '@holdfast/db';
 import type { FailingCheck } from '../criteria/failing-checks.js';
 import { Database } from '../database/database.js';
+import { on, type OpenTransaction } from '../database/unit-of-work.js';
 
 export type ReviewWithSet = CriteriaReviewRow & { criteriaSetName: string };
 export type Person = { id: string; displayName: string; initials: string };
@@ -21,8 +22,8 @@ export class ReviewsRepository {
   }
 
   /** Approved revisions that use a criteria set: what the impact check, the flag and its mail need. */
-  approvedUsing(setId: string, db: Kysely<DB> = this.db) {
-    return db
+  approvedUsing(setId: string, tx?: OpenTransaction) {
+    return on(this.db, tx)
       .selectFrom('revisions as r')
       .innerJoin('sheets as s', 's.id', 'r.sheetId')
       .select([
@@ -43,15 +44,15 @@ export class ReviewsRepository {
       .execute();
   }
 
-  openFor(revisionId: string, db: Kysely<DB> = this.db): Promise<ReviewWithSet | undefined> {
-    return this.withSet(db)
+  openFor(revisionId: string, tx?: OpenTransaction): Promise<ReviewWithSet | undefined> {
+    return this.withSet(on(this.db, tx))
       .where('c.revisionId', '=', revisionId)
       .where('c.clearedAt', 'is', null)
       .executeTakeFirst();
   }
 
-  clearedFor(revisionId: string, db: Kysely<DB> = this.db): Promise<ReviewWithSet[]> {
-    return this.withSet(db)
+  clearedFor(revisionId: string, tx?: OpenTransaction): Promise<ReviewWithSet[]> {
+    return this.withSet(on(this.db, tx))
       .where('c.revisionId', '=', revisionId)
       .where('c.clearedAt', 'is not', null)
       .orderBy('c.clearedAt', 'asc')
@@ -63,7 +64,7 @@ export class ReviewsRepository {
    * it was first raised and now names the newest version that fails. Returns whether it is new.
    */
   async flag(
-    trx: Kysely<DB>,
+    tx: OpenTransaction,
     row: {
       revisionId: string;
       sheetId: string;
@@ -72,6 +73,7 @@ export class ReviewsRepository {
       failing: FailingCheck[];
     },
   ): Promise<{ id: string; isNew: boolean }> {
+    const trx = on(this.db, tx);
     const open = await trx
       .selectFrom('criteriaReviews')
       .select('id')
@@ -102,8 +104,8 @@ export class ReviewsRepository {
   }
 
   /** Clear every open flag of the sheet's earlier revisions; returns the cleared flags. */
-  clearForSheet(trx: Kysely<DB>, sheetId: string, exceptRevisionId: string) {
-    return trx
+  clearForSheet(tx: OpenTransaction, sheetId: string, exceptRevisionId: string) {
+    return on(this.db, tx)
       .updateTable('criteriaReviews')
       .set({ clearedAt: new Date(), clearedHow: 'superseded' })
       .where('sheetId', '=', sheetId)
@@ -113,13 +115,22 @@ export class ReviewsRepository {
       .execute();
   }
 
-  dispose(trx: Kysely<DB>, id: string, userId: string, disposition: string) {
-    return trx
+  dispose(tx: OpenTransaction, id: string, userId: string, disposition: string) {
+    return on(this.db, tx)
       .updateTable('criteriaReviews')
       .set({ clearedAt: new Date(), clearedHow: 'disposition', clearedBy: userId, disposition })
       .where('id', '=', id)
       .where('clearedAt', 'is', null)
       .returning(['id', 'clearedAt'])
+      .executeTakeFirst();
+  }
+
+  /** What deciding who may read a revision needs; undefined when there is no such revision. */
+  revisionAccess(revisionId: string) {
+    return this.db
+      .selectFrom('revisions')
+      .select(['id', 'label', 'state', 'sheetId', 'authorId', 'editorIds', 'submitterIds'])
+      .where('id', '=', revisionId)
       .executeTakeFirst();
   }
 

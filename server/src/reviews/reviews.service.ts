@@ -6,14 +6,12 @@ import type {
   RevisionCriteriaReview,
   UnderReviewQueue,
 } from '@holdfast/shared';
-import type { Kysely } from 'kysely';
-import type { DB } from '@holdfast/db';
 import type { AuthUser } from '../auth/auth-user.js';
 import { effectiveRoles } from '../auth/policy.js';
 import { conflict, forbidden, notFound } from '../common/errors/api-exception.js';
 import { AppConfig } from '../config/app-config.js';
 import { failingChecks } from '../criteria/failing-checks.js';
-import { Database } from '../database/database.js';
+import { UnitOfWork, type OpenTransaction } from '../database/unit-of-work.js';
 import { AuditService } from '../audit/audit.service.js';
 import { OutboxService } from '../outbox/outbox.service.js';
 import { canReadContent, ownPart } from '../revisions/revision-access.js';
@@ -32,7 +30,7 @@ export class ReviewsService {
   private readonly logger = new Logger('ReviewsService');
 
   constructor(
-    private readonly db: Database,
+    private readonly units: UnitOfWork,
     private readonly repo: ReviewsRepository,
     private readonly users: UsersRepository,
     private readonly audit: AuditService,
@@ -41,7 +39,11 @@ export class ReviewsService {
   ) {}
 
   /** Inside the publish transaction: flag, audit and mail every approval the version fails. */
-  async flagAfterPublish(trx: Kysely<DB>, actorId: string, criteria: CriteriaSet): Promise<number> {
+  async flagAfterPublish(
+    trx: OpenTransaction,
+    actorId: string,
+    criteria: CriteriaSet,
+  ): Promise<number> {
     const approved = await this.repo.approvedUsing(criteria.id, trx);
     let flagged = 0;
     for (const rev of approved) {
@@ -98,7 +100,7 @@ export class ReviewsService {
 
   /** Inside the approval transaction: a newer approval clears the sheet's open flags. */
   async clearOnApproval(
-    trx: Kysely<DB>,
+    trx: OpenTransaction,
     actorId: string,
     sheetId: string,
     revisionId: string,
@@ -145,12 +147,12 @@ export class ReviewsService {
       throw forbidden(
         `Four eyes: you ${part} revision ${rev.label}; another checker records whether it stands.`,
       );
-    await this.db.transaction().execute(async (trx) => {
-      const open = await this.repo.openFor(revisionId, trx);
+    await this.units.run(async (tx) => {
+      const open = await this.repo.openFor(revisionId, tx);
       if (!open) throw conflict(`Revision ${rev.label} is not under review.`);
-      const done = await this.repo.dispose(trx, open.id, user.id, input.disposition);
+      const done = await this.repo.dispose(tx, open.id, user.id, input.disposition);
       if (!done) throw conflict(`The review of revision ${rev.label} was closed meanwhile.`);
-      await this.audit.record(trx, {
+      await this.audit.record(tx, {
         actorId: user.id,
         action: 'revision.review-disposed',
         entity: 'revision',
@@ -173,11 +175,7 @@ export class ReviewsService {
   }
 
   private async readable(user: AuthUser, revisionId: string) {
-    const rev = await this.db
-      .selectFrom('revisions')
-      .select(['id', 'label', 'state', 'sheetId', 'authorId', 'editorIds', 'submitterIds'])
-      .where('id', '=', revisionId)
-      .executeTakeFirst();
+    const rev = await this.repo.revisionAccess(revisionId);
     if (!rev) throw notFound('Revision not found.');
     if (!canReadContent(user, rev))
       throw forbidden('Only approved revisions are open to your role.');

@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import type { DB, NewUserRow, UserRow, UserRowUpdate } from '@holdfast/db';
 import type { Kysely } from 'kysely';
 import { Database } from '../database/database.js';
+import { on, type OpenTransaction } from '../database/unit-of-work.js';
 import { SignedInUsers } from './signed-in-users.js';
 
 @Injectable()
@@ -11,8 +12,8 @@ export class UsersRepository {
     private readonly signedIn: SignedInUsers,
   ) {}
 
-  findById(id: string, db: Kysely<DB> = this.db): Promise<UserRow | undefined> {
-    return db.selectFrom('users').selectAll().where('id', '=', id).executeTakeFirst();
+  findById(id: string, tx?: OpenTransaction): Promise<UserRow | undefined> {
+    return on(this.db, tx).selectFrom('users').selectAll().where('id', '=', id).executeTakeFirst();
   }
 
   findByEmail(email: string): Promise<UserRow | undefined> {
@@ -37,10 +38,10 @@ export class UsersRepository {
   }
 
   /** E-mail addresses of the active users among `ids`, sorted; inactive ones get no mail. */
-  async activeEmails(ids: (string | null)[], db: Kysely<DB> = this.db): Promise<string[]> {
+  async activeEmails(ids: (string | null)[], tx?: OpenTransaction): Promise<string[]> {
     const wanted = [...new Set(ids.filter((x): x is string => !!x))];
     if (wanted.length === 0) return [];
-    const rows = await db
+    const rows = await on(this.db, tx)
       .selectFrom('users')
       .select('email')
       .where('id', 'in', wanted)
@@ -90,9 +91,9 @@ export class UsersRepository {
    * Ends the user's access tokens at once: each carries the session version it was issued
    * under, and the guard refuses older ones. Refresh tokens are untouched (see revokeSessions).
    */
-  async endAccessTokens(userId: string, db: Kysely<DB> = this.db): Promise<void> {
+  async endAccessTokens(userId: string, tx?: OpenTransaction): Promise<void> {
     this.signedIn.forget(userId);
-    await db
+    await on(this.db, tx)
       .updateTable('users')
       .set((eb) => ({ sessionVersion: eb('sessionVersion', '+', 1) }))
       .where('id', '=', userId)
@@ -100,16 +101,20 @@ export class UsersRepository {
   }
 
   /** A new password hash; ends every session (access and refresh) of the user. */
-  async setPassword(userId: string, passwordHash: string, db: Kysely<DB> = this.db): Promise<void> {
+  async setPassword(userId: string, passwordHash: string, tx?: OpenTransaction): Promise<void> {
     this.signedIn.forget(userId);
-    await db.updateTable('users').set({ passwordHash }).where('id', '=', userId).execute();
-    await this.endAccessTokens(userId, db);
-    await this.revokeSessions(userId, db);
+    await on(this.db, tx)
+      .updateTable('users')
+      .set({ passwordHash })
+      .where('id', '=', userId)
+      .execute();
+    await this.endAccessTokens(userId, tx);
+    await this.revokeSessions(userId, tx);
   }
 
   /** Ends every session of a user (on deactivation). */
-  async revokeSessions(userId: string, db: Kysely<DB> = this.db): Promise<void> {
-    await db
+  async revokeSessions(userId: string, tx?: OpenTransaction): Promise<void> {
+    await on(this.db, tx)
       .updateTable('refreshTokens')
       .set({ revokedAt: new Date() })
       .where('userId', '=', userId)
