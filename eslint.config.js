@@ -99,9 +99,6 @@ const kyselyNotYetMoved = [
   'server/src/register/register-edits.service.ts',
   'server/src/register/register.service.ts',
   'server/src/reviews/reviews.service.ts',
-  'server/src/revisions/changes.service.ts',
-  'server/src/revisions/revisions.service.ts',
-  'server/src/revisions/workflow.service.ts',
   'server/src/sheets/sheets.service.ts',
 ];
 

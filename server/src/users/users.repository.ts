@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import type { DB, NewUserRow, UserRow, UserRowUpdate } from '@holdfast/db';
 import type { Kysely } from 'kysely';
 import { Database } from '../database/database.js';
+import { on, type Tx } from '../database/unit-of-work.js';
 import { SignedInUsers } from './signed-in-users.js';
 
 @Injectable()
@@ -24,11 +25,11 @@ export class UsersRepository {
   }
 
   /** Users by id (name and initials), for person references. */
-  async people(ids: (string | null | undefined)[], db: Kysely<DB> = this.db) {
+  async people(ids: (string | null | undefined)[], tx?: Tx | Kysely<DB>) {
     const wanted = [...new Set(ids.filter((x): x is string => !!x))];
     if (wanted.length === 0)
       return new Map<string, { id: string; displayName: string; initials: string }>();
-    const rows = await db
+    const rows = await on(this.db, tx)
       .selectFrom('users')
       .select(['id', 'displayName', 'initials'])
       .where('id', 'in', wanted)
@@ -37,10 +38,10 @@ export class UsersRepository {
   }
 
   /** E-mail addresses of the active users among `ids`, sorted; inactive ones get no mail. */
-  async activeEmails(ids: (string | null)[], db: Kysely<DB> = this.db): Promise<string[]> {
+  async activeEmails(ids: (string | null)[], tx?: Tx | Kysely<DB>): Promise<string[]> {
     const wanted = [...new Set(ids.filter((x): x is string => !!x))];
     if (wanted.length === 0) return [];
-    const rows = await db
+    const rows = await on(this.db, tx)
       .selectFrom('users')
       .select('email')
       .where('id', 'in', wanted)
@@ -51,8 +52,8 @@ export class UsersRepository {
   }
 
   /** E-mail addresses of active checkers other than `exceptId`. */
-  async checkerEmails(exceptId: string, db: Kysely<DB> = this.db): Promise<string[]> {
-    const rows = await db
+  async checkerEmails(exceptId: string, tx?: Tx | Kysely<DB>): Promise<string[]> {
+    const rows = await on(this.db, tx)
       .selectFrom('users')
       .select('email')
       .where('role', '=', 'checker')
