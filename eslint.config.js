@@ -99,7 +99,6 @@ const kyselyNotYetMoved = [
   'server/src/register/register-edits.service.ts',
   'server/src/register/register.service.ts',
   'server/src/reviews/reviews.service.ts',
-  'server/src/sheets/sheets.service.ts',
 ];
 
 export default tseslint.config(
