@@ -96,8 +96,6 @@ const kyselyNotYetMoved = [
   'server/src/health/health.controller.ts',
   'server/src/outbox/failed-mail.service.ts',
   'server/src/outbox/outbox.service.ts',
-  'server/src/register/register-edits.service.ts',
-  'server/src/register/register.service.ts',
   'server/src/reviews/reviews.service.ts',
 ];
 
