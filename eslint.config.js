@@ -92,7 +92,6 @@ const kyselyNotYetMoved = [
   'server/src/comments/comments.service.ts',
   'server/src/criteria/criteria-admin.service.ts',
   'server/src/criteria/criteria.service.ts',
-  'server/src/field-records/field-records.service.ts',
   'server/src/health/health.controller.ts',
   'server/src/outbox/failed-mail.service.ts',
   'server/src/outbox/outbox.service.ts',
