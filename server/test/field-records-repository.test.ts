@@ -1,8 +1,11 @@
 import { randomUUID } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
 import { UnitOfWork } from '../src/database/unit-of-work.js';
+import { FieldRecordSigningRepository } from '../src/field-records/field-record-signing.repository.js';
 import { FieldRecordsRepository } from '../src/field-records/field-records.repository.js';
+import { UsersRepository } from '../src/users/users.repository.js';
 import { approve, createSheet, sheetsSuite, submit } from './sheets-fixture.js';
+import { demoEmail } from './test-context.js';
 
 const pause = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
@@ -84,5 +87,63 @@ describe('FieldRecordsRepository with a Tx', () => {
     release();
     await Promise.all([first, second]);
     expect(seen).toBe('re-adjustment');
+  });
+
+  it('signing: codes shared with revisions are taken; a code names its record; rolled back signatures', async () => {
+    const signing = s.ctx.app.get(FieldRecordSigningRepository);
+    const { id, row, revisionId } = await draftRecord();
+    await units().run((tx) => repo().insert(tx, row));
+    const revCode = (
+      await s.ctx.db
+        .selectFrom('revisions')
+        .select('verificationCode')
+        .where('id', '=', revisionId)
+        .executeTakeFirstOrThrow()
+    ).verificationCode!;
+    expect(await signing.verificationCodeTaken(revCode)).toBe(true);
+    expect(await signing.verificationCodeTaken('FREE-CODE-0000')).toBe(false);
+    expect(await signing.byVerificationCode('FREE-CODE-0000')).toBeUndefined();
+    const technician = await s.ctx.userId('technician');
+    const signature = {
+      recordId: id,
+      kind: 'technician' as const,
+      userId: technician,
+      displayName: 'Tech',
+      initials: 'TE',
+    };
+    await expect(
+      units().run(async (tx) => {
+        await repo().update(tx, id, { status: 'signed', verificationCode: 'FREE-CODE-0000' });
+        await signing.addSignature(signature, tx);
+        throw new Error('abandoned');
+      }),
+    ).rejects.toThrow('abandoned');
+    expect(await signing.verificationCodeTaken('FREE-CODE-0000')).toBe(false);
+    expect((await repo().load(id))?.signatures).toEqual([]);
+    await units().run(async (tx) => {
+      await repo().update(tx, id, { status: 'signed', verificationCode: 'FREE-CODE-0000' });
+      await signing.addSignature(signature, tx);
+    });
+    expect(await signing.byVerificationCode('FREE-CODE-0000')).toEqual({ id });
+    expect((await repo().load(id))?.signatures.map((x) => x.kind)).toEqual(['technician']);
+  });
+
+  it('signing: the owner and active plant engineers hear of it, never the signer', async () => {
+    const signing = s.ctx.app.get(FieldRecordSigningRepository);
+    const [owner, checker, technician] = await Promise.all(
+      (['engineer', 'checker', 'technician'] as const).map((w) => s.ctx.userId(w)),
+    );
+    const all = await signing.notifyEmails(owner, technician);
+    expect(all).toContain(demoEmail('engineer'));
+    expect(all).toContain(demoEmail('checker'));
+    expect(all).not.toContain(demoEmail('technician'));
+    expect(all).not.toContain(demoEmail('viewer'));
+    expect([...all].sort()).toEqual(all);
+    await s.ctx.app.get(UsersRepository).update(checker, { active: false });
+    expect(await signing.notifyEmails(owner, technician)).not.toContain(demoEmail('checker'));
+    // A viewer owning the sheet still hears; a checker signing does not hear of their own.
+    const viewer = await s.ctx.userId('viewer');
+    expect(await signing.notifyEmails(viewer, owner)).toContain(demoEmail('viewer'));
+    expect(await signing.notifyEmails(viewer, owner)).not.toContain(demoEmail('engineer'));
   });
 });

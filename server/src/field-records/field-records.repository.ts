@@ -235,60 +235,6 @@ export class FieldRecordsRepository {
       .execute();
   }
 
-  async addSignature(
-    tx: Tx | Kysely<DB>,
-    row: {
-      recordId: string;
-      kind: 'technician' | 'countersign';
-      userId: string;
-      displayName: string;
-      initials: string;
-      note?: string;
-    },
-  ): Promise<void> {
-    const db = on(this.db, tx);
-    await db.insertInto('fieldRecordSignatures').values(row).execute();
-  }
-
-  /** E-mail addresses of the sheet's owner and the plant engineers (active engineers, checkers). */
-  async notifyEmails(ownerId: string, exceptId: string, tx?: Tx | Kysely<DB>) {
-    const db = on(this.db, tx);
-    const rows = await db
-      .selectFrom('users')
-      .select('email')
-      .where('active', '=', true)
-      .where('id', '<>', exceptId)
-      .where((eb) => eb.or([eb('id', '=', ownerId), eb('role', 'in', ['engineer', 'checker'])]))
-      .orderBy('email')
-      .execute();
-    return rows.map((r) => r.email);
-  }
-
-  async verificationCodeTaken(code: string, tx?: Tx | Kysely<DB>): Promise<boolean> {
-    const db = on(this.db, tx);
-    const [a, b] = await Promise.all([
-      db
-        .selectFrom('fieldRecords')
-        .select('id')
-        .where('verificationCode', '=', code)
-        .executeTakeFirst(),
-      db
-        .selectFrom('revisions')
-        .select('id')
-        .where('verificationCode', '=', code)
-        .executeTakeFirst(),
-    ]);
-    return a !== undefined || b !== undefined;
-  }
-
-  byVerificationCode(code: string) {
-    return this.db
-      .selectFrom('fieldRecords')
-      .select('id')
-      .where('verificationCode', '=', code)
-      .executeTakeFirst();
-  }
-
   photos(recordId: string) {
     return this.db
       .selectFrom('attachments')

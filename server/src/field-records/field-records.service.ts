@@ -27,6 +27,7 @@ import {
   type RecordRevision,
   type StoredFieldRecord,
 } from './field-records.repository.js';
+import { FieldRecordSigningRepository } from './field-record-signing.repository.js';
 import { outOfToleranceMail } from './field-notifications.js';
 import {
   checkLabels,
@@ -64,6 +65,7 @@ export class FieldRecordsService {
   constructor(
     private readonly units: UnitOfWork,
     private readonly repo: FieldRecordsRepository,
+    private readonly signing: FieldRecordSigningRepository,
     private readonly users: UsersRepository,
     private readonly audit: AuditService,
     private readonly outbox: OutboxService,
@@ -276,19 +278,22 @@ export class FieldRecordsService {
       // still a draft: from here on the database refuses to change it, and reads use it.
       await this.repo.replaceMeasurements(tx, id, record.measurements);
       let code = newVerificationCode(id);
-      while (await this.repo.verificationCodeTaken(code, tx)) code = newVerificationCode(id);
+      while (await this.signing.verificationCodeTaken(code, tx)) code = newVerificationCode(id);
       await this.repo.update(tx, id, {
         status: 'signed',
         verificationCode: code,
         outOfTolerance: out.length > 0,
       });
-      await this.repo.addSignature(tx, {
-        recordId: id,
-        kind: 'technician',
-        userId: user.id,
-        displayName: user.displayName,
-        initials: user.initials,
-      });
+      await this.signing.addSignature(
+        {
+          recordId: id,
+          kind: 'technician',
+          userId: user.id,
+          displayName: user.displayName,
+          initials: user.initials,
+        },
+        tx,
+      );
       await this.audit.record(tx, {
         actorId: user.id,
         action: 'field-record.signed',
@@ -314,7 +319,7 @@ export class FieldRecordsService {
               documentNumber: rev.documentNumber,
               revisionLabel: rev.label,
             },
-            await this.repo.notifyEmails(rev.ownerId, user.id, tx),
+            await this.signing.notifyEmails(rev.ownerId, user.id, tx),
             user.displayName,
             lines,
           ),
@@ -345,14 +350,17 @@ export class FieldRecordsService {
           'Someone other than the person who made and signed the record countersigns it.',
         );
       }
-      await this.repo.addSignature(tx, {
-        recordId: id,
-        kind: 'countersign',
-        userId: user.id,
-        displayName: user.displayName,
-        initials: user.initials,
-        note,
-      });
+      await this.signing.addSignature(
+        {
+          recordId: id,
+          kind: 'countersign',
+          userId: user.id,
+          displayName: user.displayName,
+          initials: user.initials,
+          note,
+        },
+        tx,
+      );
       await this.repo.update(tx, id, { status: 'countersigned' });
       const rev = (await this.repo.revision(row.revisionId, tx))!;
       await this.audit.record(tx, {
@@ -369,7 +377,7 @@ export class FieldRecordsService {
 
   /** The public answer for a code printed on a field record; undefined when none carries it. */
   async verify(code: string): Promise<FieldRecordVerify | undefined> {
-    const hit = await this.repo.byVerificationCode(code);
+    const hit = await this.signing.byVerificationCode(code);
     if (!hit) return undefined;
     const r = await this.get(hit.id);
     return {
