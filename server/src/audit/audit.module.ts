@@ -3,5 +3,5 @@ import { AuditRepository } from './audit.repository.js';
 import { AuditService } from './audit.service.js';
 
 @Global()
-@Module({ providers: [AuditService, AuditRepository], exports: [AuditService] })
+@Module({ providers: [AuditService, AuditRepository], exports: [AuditService, AuditRepository] })
 export class AuditModule {}

@@ -44,4 +44,16 @@ export class AuditRepository {
       .orderBy('a.id', 'asc')
       .execute();
   }
+
+  /** When an entity had `action` done to it and what it was before, newest first. */
+  eventsFor(entityId: string, action: string, tx?: Tx) {
+    return on(this.db, tx)
+      .selectFrom('auditEvents')
+      .select(['at', 'before'])
+      .where('entityId', '=', entityId)
+      .where('action', '=', action)
+      .orderBy('at', 'desc')
+      .orderBy('id', 'desc')
+      .execute();
+  }
 }

@@ -1,6 +1,7 @@
 import { Module } from '@nestjs/common';
 import { StorageModule } from '../storage/storage.module.js';
 import { UsersModule } from '../users/users.module.js';
+import { FieldRecordSigningRepository } from './field-record-signing.repository.js';
 import { FieldRecordPhotosService } from './field-record-photos.service.js';
 import { FieldRecordsController } from './field-records.controller.js';
 import { FieldRecordsRepository } from './field-records.repository.js';
@@ -15,6 +16,7 @@ import { PositionFieldController } from './position-field.controller.js';
   controllers: [FieldRecordsController, PositionFieldController],
   providers: [
     FieldRecordsRepository,
+    FieldRecordSigningRepository,
     FieldRecordsService,
     InspectionScheduleRepository,
     InspectionScheduleService,

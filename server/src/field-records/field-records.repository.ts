@@ -9,6 +9,7 @@ import type {
 } from '@holdfast/db';
 import type { FieldCheckInput, FieldMeasurement } from '@holdfast/shared';
 import { Database } from '../database/database.js';
+import { on, type Tx } from '../database/unit-of-work.js';
 
 const json = (v: unknown) => (v === null ? null : JSON.stringify(v));
 
@@ -45,10 +46,8 @@ export class FieldRecordsRepository {
     return this.db.transaction().execute(fn);
   }
 
-  async revision(
-    revisionId: string,
-    db: Kysely<DB> = this.db,
-  ): Promise<RecordRevision | undefined> {
+  async revision(revisionId: string, tx?: Tx | Kysely<DB>): Promise<RecordRevision | undefined> {
+    const db = on(this.db, tx);
     const row = await db
       .selectFrom('revisions as r')
       .innerJoin('sheets as s', 's.id', 'r.sheetId')
@@ -79,7 +78,8 @@ export class FieldRecordsRepository {
     return row ? { ...row, underReview: Boolean(row.underReview) } : undefined;
   }
 
-  async positionTag(positionId: string, db: Kysely<DB> = this.db): Promise<string | undefined> {
+  async positionTag(positionId: string, tx?: Tx | Kysely<DB>): Promise<string | undefined> {
+    const db = on(this.db, tx);
     const row = await db
       .selectFrom('brakePositions')
       .select('tag')
@@ -88,7 +88,8 @@ export class FieldRecordsRepository {
     return row?.tag;
   }
 
-  async load(id: string, db: Kysely<DB> = this.db): Promise<StoredFieldRecord | undefined> {
+  async load(id: string, tx?: Tx | Kysely<DB>): Promise<StoredFieldRecord | undefined> {
+    const db = on(this.db, tx);
     const record = await db
       .selectFrom('fieldRecords')
       .selectAll()
@@ -101,8 +102,9 @@ export class FieldRecordsRepository {
   /** Records by position (oldest first) or status; parts loaded in one query each. */
   async list(
     filter: { positionId?: string; status?: string; ids?: string[] },
-    db: Kysely<DB> = this.db,
+    tx?: Tx | Kysely<DB>,
   ): Promise<StoredFieldRecord[]> {
+    const db = on(this.db, tx);
     let q = db.selectFrom('fieldRecords').selectAll();
     if (filter.positionId) q = q.where('positionId', '=', filter.positionId);
     if (filter.status) q = q.where('status', '=', filter.status as 'draft');
@@ -138,7 +140,7 @@ export class FieldRecordsRepository {
 
   /** Inserts the record unless its id exists; true when this call created it. */
   async insert(
-    trx: Kysely<DB>,
+    tx: Tx | Kysely<DB>,
     row: {
       id: string;
       positionId: string;
@@ -151,7 +153,8 @@ export class FieldRecordsRepository {
       createdBy: string;
     },
   ): Promise<boolean> {
-    const inserted = await trx
+    const db = on(this.db, tx);
+    const inserted = await db
       .insertInto('fieldRecords')
       .values(row)
       .onConflict((oc) => oc.column('id').doNothing())
@@ -160,8 +163,9 @@ export class FieldRecordsRepository {
     return inserted !== undefined;
   }
 
-  async lockForUpdate(trx: Kysely<DB>, id: string): Promise<FieldRecordRow | undefined> {
-    return trx
+  async lockForUpdate(tx: Tx | Kysely<DB>, id: string): Promise<FieldRecordRow | undefined> {
+    const db = on(this.db, tx);
+    return db
       .selectFrom('fieldRecords')
       .selectAll()
       .where('id', '=', id)
@@ -170,7 +174,7 @@ export class FieldRecordsRepository {
   }
 
   async update(
-    trx: Kysely<DB>,
+    tx: Tx | Kysely<DB>,
     id: string,
     set: Partial<{
       kind: string;
@@ -182,14 +186,20 @@ export class FieldRecordsRepository {
       verificationCode: string;
     }>,
   ): Promise<void> {
-    await trx.updateTable('fieldRecords').set(set).where('id', '=', id).execute();
+    const db = on(this.db, tx);
+    await db.updateTable('fieldRecords').set(set).where('id', '=', id).execute();
   }
 
   /** The measurements of a draft with what each is judged against and its verdicts. */
-  async replaceMeasurements(trx: Kysely<DB>, id: string, items: FieldMeasurement[]): Promise<void> {
-    await trx.deleteFrom('fieldRecordMeasurements').where('recordId', '=', id).execute();
+  async replaceMeasurements(
+    tx: Tx | Kysely<DB>,
+    id: string,
+    items: FieldMeasurement[],
+  ): Promise<void> {
+    const db = on(this.db, tx);
+    await db.deleteFrom('fieldRecordMeasurements').where('recordId', '=', id).execute();
     if (items.length === 0) return;
-    await trx
+    await db
       .insertInto('fieldRecordMeasurements')
       .values(
         items.map((m, ordinal) => ({
@@ -215,64 +225,14 @@ export class FieldRecordsRepository {
       .execute();
   }
 
-  async replaceChecks(trx: Kysely<DB>, id: string, items: FieldCheckInput[]): Promise<void> {
-    await trx.deleteFrom('fieldRecordChecks').where('recordId', '=', id).execute();
+  async replaceChecks(tx: Tx | Kysely<DB>, id: string, items: FieldCheckInput[]): Promise<void> {
+    const db = on(this.db, tx);
+    await db.deleteFrom('fieldRecordChecks').where('recordId', '=', id).execute();
     if (items.length === 0) return;
-    await trx
+    await db
       .insertInto('fieldRecordChecks')
       .values(items.map((c) => ({ recordId: id, ...c })))
       .execute();
-  }
-
-  async addSignature(
-    trx: Kysely<DB>,
-    row: {
-      recordId: string;
-      kind: 'technician' | 'countersign';
-      userId: string;
-      displayName: string;
-      initials: string;
-      note?: string;
-    },
-  ): Promise<void> {
-    await trx.insertInto('fieldRecordSignatures').values(row).execute();
-  }
-
-  /** E-mail addresses of the sheet's owner and the plant engineers (active engineers, checkers). */
-  async notifyEmails(ownerId: string, exceptId: string, db: Kysely<DB> = this.db) {
-    const rows = await db
-      .selectFrom('users')
-      .select('email')
-      .where('active', '=', true)
-      .where('id', '<>', exceptId)
-      .where((eb) => eb.or([eb('id', '=', ownerId), eb('role', 'in', ['engineer', 'checker'])]))
-      .orderBy('email')
-      .execute();
-    return rows.map((r) => r.email);
-  }
-
-  async verificationCodeTaken(code: string, db: Kysely<DB> = this.db): Promise<boolean> {
-    const [a, b] = await Promise.all([
-      db
-        .selectFrom('fieldRecords')
-        .select('id')
-        .where('verificationCode', '=', code)
-        .executeTakeFirst(),
-      db
-        .selectFrom('revisions')
-        .select('id')
-        .where('verificationCode', '=', code)
-        .executeTakeFirst(),
-    ]);
-    return a !== undefined || b !== undefined;
-  }
-
-  byVerificationCode(code: string) {
-    return this.db
-      .selectFrom('fieldRecords')
-      .select('id')
-      .where('verificationCode', '=', code)
-      .executeTakeFirst();
   }
 
   photos(recordId: string) {
@@ -284,8 +244,9 @@ export class FieldRecordsRepository {
       .execute();
   }
 
-  async countPhotos(trx: Kysely<DB>, recordId: string): Promise<number> {
-    const row = await trx
+  async countPhotos(tx: Tx | Kysely<DB>, recordId: string): Promise<number> {
+    const db = on(this.db, tx);
+    const row = await db
       .selectFrom('attachments')
       .select((eb) => eb.fn.countAll<string>().as('n'))
       .where('fieldRecordId', '=', recordId)
@@ -294,7 +255,7 @@ export class FieldRecordsRepository {
   }
 
   insertPhoto(
-    trx: Kysely<DB>,
+    tx: Tx | Kysely<DB>,
     row: {
       revisionId: string;
       fieldRecordId: string;
@@ -306,6 +267,10 @@ export class FieldRecordsRepository {
       uploadedBy: string;
     },
   ) {
-    return trx.insertInto('attachments').values(row).returningAll().executeTakeFirstOrThrow();
+    return on(this.db, tx)
+      .insertInto('attachments')
+      .values(row)
+      .returningAll()
+      .executeTakeFirstOrThrow();
   }
 }

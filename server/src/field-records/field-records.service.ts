@@ -1,6 +1,4 @@
 import { Injectable } from '@nestjs/common';
-import type { Kysely } from 'kysely';
-import type { DB } from '@holdfast/db';
 import type {
   CreateFieldRecordInput,
   FieldForm,
@@ -17,6 +15,8 @@ import { effectiveRoles } from '../auth/policy.js';
 import { AuditService } from '../audit/audit.service.js';
 import { badRequest, conflict, forbidden, notFound } from '../common/errors/api-exception.js';
 import { AppConfig } from '../config/app-config.js';
+import { passTx } from '../database/tx-bridge.js';
+import { type Tx, UnitOfWork } from '../database/unit-of-work.js';
 import { OutboxService } from '../outbox/outbox.service.js';
 import { UsersRepository } from '../users/users.repository.js';
 import { newVerificationCode } from '../revisions/revision-codes.js';
@@ -27,6 +27,7 @@ import {
   type RecordRevision,
   type StoredFieldRecord,
 } from './field-records.repository.js';
+import { FieldRecordSigningRepository } from './field-record-signing.repository.js';
 import { outOfToleranceMail } from './field-notifications.js';
 import {
   checkLabels,
@@ -62,7 +63,9 @@ function unansweredChecks(sheetType: string, checks: FieldRecord['checks']): Fie
 @Injectable()
 export class FieldRecordsService {
   constructor(
+    private readonly units: UnitOfWork,
     private readonly repo: FieldRecordsRepository,
+    private readonly signing: FieldRecordSigningRepository,
     private readonly users: UsersRepository,
     private readonly audit: AuditService,
     private readonly outbox: OutboxService,
@@ -73,9 +76,9 @@ export class FieldRecordsService {
   private async releasedRevision(
     user: AuthUser,
     revisionId: string,
-    db?: Kysely<DB>,
+    tx?: Tx,
   ): Promise<RecordRevision> {
-    const rev = await this.repo.revision(revisionId, db);
+    const rev = await this.repo.revision(revisionId, tx);
     if (!rev || !canReadContent(user, rev)) throw notFound('Revision not found.');
     if (rev.state !== 'approved' && rev.state !== 'superseded') {
       throw invalid([
@@ -99,10 +102,10 @@ export class FieldRecordsService {
     };
   }
 
-  private async present(s: StoredFieldRecord, db?: Kysely<DB>): Promise<FieldRecord> {
-    const rev = (await this.repo.revision(s.record.revisionId, db))!;
-    const tag = (await this.repo.positionTag(s.record.positionId, db)) ?? '';
-    const people = await this.users.people([s.record.createdBy], db);
+  private async present(s: StoredFieldRecord, tx?: Tx): Promise<FieldRecord> {
+    const rev = (await this.repo.revision(s.record.revisionId, tx))!;
+    const tag = (await this.repo.positionTag(s.record.positionId, tx)) ?? '';
+    const people = await this.users.people([s.record.createdBy], tx);
     return toFieldRecord(s, rev, tag, people);
   }
 
@@ -171,8 +174,8 @@ export class FieldRecordsService {
       throw invalid([{ path: 'positionId', message: "not the position of the revision's sheet" }]);
     }
     const { judged, out } = this.judge(rev, input.measurements);
-    const created = await this.repo.transaction(async (trx) => {
-      const fresh = await this.repo.insert(trx, {
+    const created = await this.units.run(async (tx) => {
+      const fresh = await this.repo.insert(tx, {
         id: input.id,
         positionId: input.positionId,
         revisionId: input.revisionId,
@@ -184,9 +187,9 @@ export class FieldRecordsService {
         createdBy: user.id,
       });
       if (!fresh) return false;
-      await this.repo.replaceMeasurements(trx, input.id, judged);
-      await this.repo.replaceChecks(trx, input.id, input.checks);
-      await this.audit.record(trx, {
+      await this.repo.replaceMeasurements(tx, input.id, judged);
+      await this.repo.replaceChecks(tx, input.id, input.checks);
+      await this.audit.record(tx, {
         actorId: user.id,
         action: 'field-record.created',
         entity: 'field-record',
@@ -209,8 +212,8 @@ export class FieldRecordsService {
     return { record: await this.present(s), created: false };
   }
 
-  private async editable(trx: Kysely<DB>, user: AuthUser, id: string) {
-    const row = await this.repo.lockForUpdate(trx, id);
+  private async editable(tx: Tx, user: AuthUser, id: string) {
+    const row = await this.repo.lockForUpdate(tx, id);
     if (!row) throw notFound('Field record not found.');
     if (row.createdBy !== user.id)
       throw forbidden('Only the person who made this record may change or sign it.');
@@ -220,10 +223,10 @@ export class FieldRecordsService {
   }
 
   async update(user: AuthUser, id: string, input: UpdateFieldRecordInput): Promise<FieldRecord> {
-    await this.repo.transaction(async (trx) => {
-      const row = await this.editable(trx, user, id);
-      const rev = (await this.repo.revision(row.revisionId, trx))!;
-      const stored = (await this.repo.load(id, trx))!;
+    await this.units.run(async (tx) => {
+      const row = await this.editable(tx, user, id);
+      const rev = (await this.repo.revision(row.revisionId, tx))!;
+      const stored = (await this.repo.load(id, tx))!;
       const measurements =
         input.measurements ??
         stored.measurements.map((m) => ({
@@ -233,7 +236,7 @@ export class FieldRecordsService {
           reason: m.reason,
         }));
       const { judged, out } = this.judge(rev, measurements);
-      await this.repo.update(trx, id, {
+      await this.repo.update(tx, id, {
         ...(input.kind !== undefined ? { kind: input.kind } : {}),
         ...(input.performedAt !== undefined ? { performedAt: input.performedAt } : {}),
         ...(input.meterHours !== undefined ? { meterHours: input.meterHours } : {}),
@@ -241,9 +244,9 @@ export class FieldRecordsService {
         outOfTolerance: out,
       });
       // Judged again at every save, so a draft's stored judgement is today's.
-      await this.repo.replaceMeasurements(trx, id, judged);
-      if (input.checks) await this.repo.replaceChecks(trx, id, input.checks);
-      await this.audit.record(trx, {
+      await this.repo.replaceMeasurements(tx, id, judged);
+      if (input.checks) await this.repo.replaceChecks(tx, id, input.checks);
+      await this.audit.record(tx, {
         actorId: user.id,
         action: 'field-record.updated',
         entity: 'field-record',
@@ -256,10 +259,10 @@ export class FieldRecordsService {
   }
 
   async sign(user: AuthUser, id: string): Promise<FieldRecord> {
-    await this.repo.transaction(async (trx) => {
-      const row = await this.editable(trx, user, id);
-      const stored = (await this.repo.load(id, trx))!;
-      const rev = (await this.repo.revision(row.revisionId, trx))!;
+    await this.units.run(async (tx) => {
+      const row = await this.editable(tx, user, id);
+      const stored = (await this.repo.load(id, tx))!;
+      const rev = (await this.repo.revision(row.revisionId, tx))!;
       const record = toFieldRecord(stored, rev, '', new Map());
       const out = outOfToleranceAsLeft(record.measurements);
       const missing = out.filter((i) => record.measurements[i]!.reason.trim() === '');
@@ -273,22 +276,25 @@ export class FieldRecordsService {
       if (issues.length > 0) throw invalid(issues);
       // The judgement the technician signs is stored with the measurements, while the record is
       // still a draft: from here on the database refuses to change it, and reads use it.
-      await this.repo.replaceMeasurements(trx, id, record.measurements);
+      await this.repo.replaceMeasurements(tx, id, record.measurements);
       let code = newVerificationCode(id);
-      while (await this.repo.verificationCodeTaken(code, trx)) code = newVerificationCode(id);
-      await this.repo.update(trx, id, {
+      while (await this.signing.verificationCodeTaken(code, tx)) code = newVerificationCode(id);
+      await this.repo.update(tx, id, {
         status: 'signed',
         verificationCode: code,
         outOfTolerance: out.length > 0,
       });
-      await this.repo.addSignature(trx, {
-        recordId: id,
-        kind: 'technician',
-        userId: user.id,
-        displayName: user.displayName,
-        initials: user.initials,
-      });
-      await this.audit.record(trx, {
+      await this.signing.addSignature(
+        {
+          recordId: id,
+          kind: 'technician',
+          userId: user.id,
+          displayName: user.displayName,
+          initials: user.initials,
+        },
+        tx,
+      );
+      await this.audit.record(tx, {
         actorId: user.id,
         action: 'field-record.signed',
         entity: 'field-record',
@@ -297,14 +303,14 @@ export class FieldRecordsService {
         after: { status: 'signed', outOfTolerance: out.length },
       });
       if (out.length > 0) {
-        const tag = (await this.repo.positionTag(row.positionId, trx)) ?? '';
+        const tag = (await this.repo.positionTag(row.positionId, tx)) ?? '';
         const lines = out.map((i) => {
           const m = record.measurements[i]!;
           const v = m.asLeftVerdict!;
           return `${m.label}: off by ${v.display.deviation.toPrecision(3)} ${v.display.label} — ${m.reason}`;
         });
         await this.outbox.enqueueMail(
-          trx,
+          passTx(tx),
           outOfToleranceMail(
             this.config.settings.PUBLIC_URL,
             {
@@ -313,7 +319,7 @@ export class FieldRecordsService {
               documentNumber: rev.documentNumber,
               revisionLabel: rev.label,
             },
-            await this.repo.notifyEmails(rev.ownerId, user.id, trx),
+            await this.signing.notifyEmails(rev.ownerId, user.id, tx),
             user.displayName,
             lines,
           ),
@@ -327,8 +333,8 @@ export class FieldRecordsService {
     if (!effectiveRoles(user.role).includes('engineer')) {
       throw forbidden('A plant engineer (engineer or checker) countersigns.');
     }
-    await this.repo.transaction(async (trx) => {
-      const row = await this.repo.lockForUpdate(trx, id);
+    await this.units.run(async (tx) => {
+      const row = await this.repo.lockForUpdate(tx, id);
       if (!row) throw notFound('Field record not found.');
       if (row.status !== 'signed') {
         throw conflict(
@@ -337,24 +343,27 @@ export class FieldRecordsService {
             : 'The record is already countersigned.',
         );
       }
-      const stored = (await this.repo.load(id, trx))!;
+      const stored = (await this.repo.load(id, tx))!;
       const signer = stored.signatures.find((s) => s.kind === 'technician');
       if (signer?.userId === user.id || row.createdBy === user.id) {
         throw forbidden(
           'Someone other than the person who made and signed the record countersigns it.',
         );
       }
-      await this.repo.addSignature(trx, {
-        recordId: id,
-        kind: 'countersign',
-        userId: user.id,
-        displayName: user.displayName,
-        initials: user.initials,
-        note,
-      });
-      await this.repo.update(trx, id, { status: 'countersigned' });
-      const rev = (await this.repo.revision(row.revisionId, trx))!;
-      await this.audit.record(trx, {
+      await this.signing.addSignature(
+        {
+          recordId: id,
+          kind: 'countersign',
+          userId: user.id,
+          displayName: user.displayName,
+          initials: user.initials,
+          note,
+        },
+        tx,
+      );
+      await this.repo.update(tx, id, { status: 'countersigned' });
+      const rev = (await this.repo.revision(row.revisionId, tx))!;
+      await this.audit.record(tx, {
         actorId: user.id,
         action: 'field-record.countersigned',
         entity: 'field-record',
@@ -368,7 +377,7 @@ export class FieldRecordsService {
 
   /** The public answer for a code printed on a field record; undefined when none carries it. */
   async verify(code: string): Promise<FieldRecordVerify | undefined> {
-    const hit = await this.repo.byVerificationCode(code);
+    const hit = await this.signing.byVerificationCode(code);
     if (!hit) return undefined;
     const r = await this.get(hit.id);
     return {

@@ -5,6 +5,7 @@ import { FieldRecordPrintController } from './field-record/field-record-print.co
 import { FieldRecordPrintService } from './field-record/field-record-print.service.js';
 import { RevisionsModule } from '../revisions/revisions.module.js';
 import { ReviewsModule } from '../reviews/reviews.module.js';
+import { SheetRowsRepository } from '../sheets/sheet-rows.repository.js';
 import { SheetsRepository } from '../sheets/sheets.repository.js';
 import { SheetsService } from '../sheets/sheets.service.js';
 import { PrintController } from './print.controller.js';
@@ -26,6 +27,7 @@ import { SafetyFileService } from './safety-file.service.js';
     SafetyFileService,
     SheetsService,
     SheetsRepository,
+    SheetRowsRepository,
     FieldRecordPrintService,
   ],
 })

@@ -2,8 +2,9 @@ import { Injectable } from '@nestjs/common';
 import type { UpdateMachineInput, UpdatePositionInput, UpdateSiteInput } from '@holdfast/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { badRequest, notFound } from '../common/errors/api-exception.js';
-import { Database } from '../database/database.js';
+import { UnitOfWork } from '../database/unit-of-work.js';
 import { AuditService } from '../audit/audit.service.js';
+import { RegisterEditsRepository } from './register-edits.repository.js';
 
 const nothing = () =>
   badRequest('Nothing to change.', [{ path: '', message: 'send at least one field' }]);
@@ -16,26 +17,17 @@ const nothing = () =>
 @Injectable()
 export class RegisterEditsService {
   constructor(
-    private readonly db: Database,
+    private readonly units: UnitOfWork,
+    private readonly repo: RegisterEditsRepository,
     private readonly audit: AuditService,
   ) {}
 
   async updateSite(user: AuthUser, id: string, input: UpdateSiteInput) {
-    return this.db.transaction().execute(async (trx) => {
-      const before = await trx
-        .selectFrom('sites')
-        .select(['id', 'code', 'name'])
-        .where('id', '=', id)
-        .forUpdate()
-        .executeTakeFirst();
+    return this.units.run(async (tx) => {
+      const before = await this.repo.siteForUpdate(id, tx);
       if (!before) throw notFound('Site not found.');
-      const after = await trx
-        .updateTable('sites')
-        .set(input)
-        .where('id', '=', id)
-        .returning(['id', 'code', 'name'])
-        .executeTakeFirstOrThrow();
-      await this.audit.record(trx, {
+      const after = await this.repo.updateSite(id, input, tx);
+      await this.audit.record(tx, {
         actorId: user.id,
         action: 'site.updated',
         entity: 'register',
@@ -49,21 +41,11 @@ export class RegisterEditsService {
 
   async updateMachine(user: AuthUser, id: string, input: UpdateMachineInput) {
     if (Object.keys(input).length === 0) throw nothing();
-    return this.db.transaction().execute(async (trx) => {
-      const before = await trx
-        .selectFrom('machines')
-        .select(['id', 'siteId', 'tag', 'name', 'kind'])
-        .where('id', '=', id)
-        .forUpdate()
-        .executeTakeFirst();
+    return this.units.run(async (tx) => {
+      const before = await this.repo.machineForUpdate(id, tx);
       if (!before) throw notFound('Machine not found.');
-      const after = await trx
-        .updateTable('machines')
-        .set(input)
-        .where('id', '=', id)
-        .returning(['id', 'siteId', 'tag', 'name', 'kind'])
-        .executeTakeFirstOrThrow();
-      await this.audit.record(trx, {
+      const after = await this.repo.updateMachine(id, input, tx);
+      await this.audit.record(tx, {
         actorId: user.id,
         action: 'machine.updated',
         entity: 'register',
@@ -77,31 +59,11 @@ export class RegisterEditsService {
 
   async updatePosition(user: AuthUser, id: string, input: UpdatePositionInput) {
     if (Object.keys(input).length === 0) throw nothing();
-    const columns = [
-      'id',
-      'machineId',
-      'tag',
-      'description',
-      'motion',
-      'brakeKind',
-      'thruster',
-      'lining',
-    ] as const;
-    return this.db.transaction().execute(async (trx) => {
-      const before = await trx
-        .selectFrom('brakePositions')
-        .select(columns)
-        .where('id', '=', id)
-        .forUpdate()
-        .executeTakeFirst();
+    return this.units.run(async (tx) => {
+      const before = await this.repo.positionForUpdate(id, tx);
       if (!before) throw notFound('Brake position not found.');
-      const after = await trx
-        .updateTable('brakePositions')
-        .set(input)
-        .where('id', '=', id)
-        .returning(columns)
-        .executeTakeFirstOrThrow();
-      await this.audit.record(trx, {
+      const after = await this.repo.updatePosition(id, input, tx);
+      await this.audit.record(tx, {
         actorId: user.id,
         action: 'position.updated',
         entity: 'register',

@@ -8,53 +8,25 @@ import type {
 } from '@holdfast/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { badRequest } from '../common/errors/api-exception.js';
-import { Database } from '../database/database.js';
+import { UnitOfWork } from '../database/unit-of-work.js';
 import { AuditService } from '../audit/audit.service.js';
+import { RegisterRepository } from './register.repository.js';
 
 @Injectable()
 export class RegisterService {
   constructor(
-    private readonly db: Database,
+    private readonly units: UnitOfWork,
+    private readonly repo: RegisterRepository,
     private readonly audit: AuditService,
   ) {}
 
   /** The whole register as a tree, with each position's approved revision in force. */
   async tree(): Promise<Register> {
     const [sites, machines, positions, approved] = await Promise.all([
-      this.db.selectFrom('sites').select(['id', 'code', 'name']).orderBy('code').execute(),
-      this.db
-        .selectFrom('machines')
-        .select(['id', 'siteId', 'tag', 'name', 'kind'])
-        .orderBy('tag')
-        .execute(),
-      this.db
-        .selectFrom('brakePositions')
-        .select([
-          'id',
-          'machineId',
-          'tag',
-          'description',
-          'motion',
-          'brakeKind',
-          'thruster',
-          'lining',
-        ])
-        .orderBy('tag')
-        .execute(),
-      this.db
-        .selectFrom('sheets as s')
-        .innerJoin('revisions as r', 'r.id', 's.approvedRevisionId')
-        .select([
-          's.positionId',
-          's.id as sheetId',
-          's.documentNumber',
-          's.sheetType',
-          'r.id as revisionId',
-          'r.label',
-          'r.approvedAt',
-        ])
-        .orderBy('r.approvedAt', 'asc')
-        .execute(),
+      this.repo.sites(),
+      this.repo.machines(),
+      this.repo.positions(),
+      this.repo.approvedSheets(),
     ]);
     const open = await this.openSheets();
     // Several sheets may cover one position over time: the most recently approved is in force.
@@ -115,13 +87,7 @@ export class RegisterService {
 
   /** Per position, the sheets whose latest revision is still a draft, in check or returned. */
   private async openSheets(): Promise<Map<string, OpenSheet[]>> {
-    const rows = await this.db
-      .selectFrom('sheets as s')
-      .innerJoin('revisions as r', 'r.sheetId', 's.id')
-      .select(['s.positionId', 's.id', 's.documentNumber', 's.sheetType', 'r.label', 'r.state'])
-      .where('r.state', 'in', ['draft', 'in_check', 'returned'])
-      .orderBy('s.documentNumber')
-      .execute();
+    const rows = await this.repo.openSheets();
     const out = new Map<string, OpenSheet[]>();
     for (const r of rows) {
       const list = out.get(r.positionId) ?? [];
@@ -138,13 +104,9 @@ export class RegisterService {
   }
 
   async createSite(user: AuthUser, input: CreateSiteInput) {
-    return this.db.transaction().execute(async (trx) => {
-      const row = await trx
-        .insertInto('sites')
-        .values(input)
-        .returning(['id', 'code', 'name'])
-        .executeTakeFirstOrThrow();
-      await this.audit.record(trx, {
+    return this.units.run(async (tx) => {
+      const row = await this.repo.insertSite(input, tx);
+      await this.audit.record(tx, {
         actorId: user.id,
         action: 'site.created',
         entity: 'register',
@@ -156,22 +118,13 @@ export class RegisterService {
   }
 
   async createMachine(user: AuthUser, input: CreateMachineInput) {
-    return this.db.transaction().execute(async (trx) => {
-      const site = await trx
-        .selectFrom('sites')
-        .select('id')
-        .where('id', '=', input.siteId)
-        .executeTakeFirst();
-      if (!site)
+    return this.units.run(async (tx) => {
+      if (!(await this.repo.siteExists(input.siteId, tx)))
         throw badRequest('Some fields are not valid.', [
           { path: 'siteId', message: 'no such site' },
         ]);
-      const row = await trx
-        .insertInto('machines')
-        .values(input)
-        .returning(['id', 'siteId', 'tag', 'name', 'kind'])
-        .executeTakeFirstOrThrow();
-      await this.audit.record(trx, {
+      const row = await this.repo.insertMachine(input, tx);
+      await this.audit.record(tx, {
         actorId: user.id,
         action: 'machine.created',
         entity: 'register',
@@ -183,31 +136,13 @@ export class RegisterService {
   }
 
   async createPosition(user: AuthUser, input: CreatePositionInput) {
-    return this.db.transaction().execute(async (trx) => {
-      const machine = await trx
-        .selectFrom('machines')
-        .select('id')
-        .where('id', '=', input.machineId)
-        .executeTakeFirst();
-      if (!machine)
+    return this.units.run(async (tx) => {
+      if (!(await this.repo.machineExists(input.machineId, tx)))
         throw badRequest('Some fields are not valid.', [
           { path: 'machineId', message: 'no such machine' },
         ]);
-      const row = await trx
-        .insertInto('brakePositions')
-        .values(input)
-        .returning([
-          'id',
-          'machineId',
-          'tag',
-          'description',
-          'motion',
-          'brakeKind',
-          'thruster',
-          'lining',
-        ])
-        .executeTakeFirstOrThrow();
-      await this.audit.record(trx, {
+      const row = await this.repo.insertPosition(input, tx);
+      await this.audit.record(tx, {
         actorId: user.id,
         action: 'position.created',
         entity: 'register',

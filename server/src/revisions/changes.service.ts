@@ -2,7 +2,7 @@ import { Injectable } from '@nestjs/common';
 import type { SheetInputs } from '@holdfast/calc';
 import type { RevisionChanges } from '@holdfast/shared';
 import type { AuthUser } from '../auth/auth-user.js';
-import { Database } from '../database/database.js';
+import { AuditRepository } from '../audit/audit.repository.js';
 import { fieldLabel } from '../calc/calc-engine.js';
 import { diffInputs } from './diff.js';
 import { RevisionsRepository } from './revisions.repository.js';
@@ -27,7 +27,7 @@ const submittedNow = (state: string) => state !== 'draft' && state !== 'returned
 @Injectable()
 export class ChangesService {
   constructor(
-    private readonly db: Database,
+    private readonly auditRepo: AuditRepository,
     private readonly repo: RevisionsRepository,
     private readonly revisions: RevisionsService,
   ) {}
@@ -56,14 +56,7 @@ export class ChangesService {
     seq: number,
     state: string,
   ): Promise<Reference | undefined> {
-    const submits = await this.db
-      .selectFrom('auditEvents')
-      .select(['at', 'before'])
-      .where('entityId', '=', id)
-      .where('action', '=', 'revision.submitted')
-      .orderBy('at', 'desc')
-      .orderBy('id', 'desc')
-      .execute();
+    const submits = await this.auditRepo.eventsFor(id, 'revision.submitted');
     const earlier = submittedNow(state) ? submits[1] : submits[0];
     const snap = earlier?.before as { inputs?: SheetInputs; changeNote?: string } | null;
     if (earlier && snap?.inputs) {
@@ -76,14 +69,7 @@ export class ChangesService {
         changeNote: snap.changeNote ?? '',
       };
     }
-    const previous = await this.db
-      .selectFrom('revisions')
-      .select(['label', 'inputs', 'changeNote', 'submittedAt', 'createdAt'])
-      .where('sheetId', '=', sheetId)
-      .where('seq', '<', seq)
-      .where('submittedAt', 'is not', null)
-      .orderBy('seq', 'desc')
-      .executeTakeFirst();
+    const previous = await this.repo.previousSubmitted(sheetId, seq);
     if (!previous) return undefined;
     return {
       kind: 'revision',

@@ -1,7 +1,8 @@
 import { Injectable } from '@nestjs/common';
-import type { Kysely } from 'kysely';
+import type { Insertable, Kysely, Updateable } from 'kysely';
 import type { DB, RevisionRow } from '@holdfast/db';
 import { Database } from '../database/database.js';
+import { on, type Tx } from '../database/unit-of-work.js';
 
 /** A revision with the sheet fields every rule needs. */
 export type RevisionWithSheet = RevisionRow & {
@@ -11,6 +12,10 @@ export type RevisionWithSheet = RevisionRow & {
   title: string;
 };
 
+export type NewRevision = Insertable<DB['revisions']>;
+export type RevisionChange = Updateable<DB['revisions']>;
+
+/** The revisions table: reads for the rules, and the writes of saving, the workflow and new issues. */
 @Injectable()
 export class RevisionsRepository {
   constructor(private readonly db: Database) {}
@@ -18,10 +23,10 @@ export class RevisionsRepository {
   /** The revision and its sheet; `lock` takes a row lock on the revision (inside a transaction). */
   async find(
     id: string,
-    db: Kysely<DB> = this.db,
+    tx?: Tx | Kysely<DB>,
     lock = false,
   ): Promise<RevisionWithSheet | undefined> {
-    let q = db
+    let q = on(this.db, tx)
       .selectFrom('revisions as r')
       .innerJoin('sheets as s', 's.id', 'r.sheetId')
       .selectAll('r')
@@ -31,8 +36,8 @@ export class RevisionsRepository {
     return q.executeTakeFirst();
   }
 
-  listForSheet(sheetId: string, db: Kysely<DB> = this.db): Promise<RevisionRow[]> {
-    return db
+  listForSheet(sheetId: string, tx?: Tx | Kysely<DB>): Promise<RevisionRow[]> {
+    return on(this.db, tx)
       .selectFrom('revisions')
       .selectAll()
       .where('sheetId', '=', sheetId)
@@ -48,5 +53,86 @@ export class RevisionsRepository {
       .where('id', '=', id)
       .executeTakeFirst();
     return row?.label;
+  }
+
+  /** The sheet's latest revision by sequence; throws when the sheet has none. */
+  latestForSheet(sheetId: string, tx?: Tx): Promise<RevisionRow> {
+    return on(this.db, tx)
+      .selectFrom('revisions')
+      .selectAll()
+      .where('sheetId', '=', sheetId)
+      .orderBy('seq', 'desc')
+      .limit(1)
+      .executeTakeFirstOrThrow();
+  }
+
+  /** The sheet's approved revision, locked until the transaction ends (one approval at a time). */
+  approvedForUpdate(sheetId: string, tx: Tx) {
+    return on(this.db, tx)
+      .selectFrom('revisions')
+      .select(['id', 'label', 'rowVersion'])
+      .where('sheetId', '=', sheetId)
+      .where('state', '=', 'approved')
+      .forUpdate()
+      .executeTakeFirst();
+  }
+
+  /** The latest revision before `seq` that was ever submitted: what a first submission is compared with. */
+  previousSubmitted(sheetId: string, seq: number, tx?: Tx) {
+    return on(this.db, tx)
+      .selectFrom('revisions')
+      .select(['label', 'inputs', 'changeNote', 'submittedAt', 'createdAt'])
+      .where('sheetId', '=', sheetId)
+      .where('seq', '<', seq)
+      .where('submittedAt', 'is not', null)
+      .orderBy('seq', 'desc')
+      .executeTakeFirst();
+  }
+
+  async insert(values: NewRevision, tx: Tx): Promise<string> {
+    const row = await on(this.db, tx)
+      .insertInto('revisions')
+      .values(values)
+      .returning('id')
+      .executeTakeFirstOrThrow();
+    return row.id;
+  }
+
+  async update(id: string, change: RevisionChange, tx: Tx): Promise<void> {
+    await on(this.db, tx).updateTable('revisions').set(change).where('id', '=', id).execute();
+  }
+
+  /** The change only when the row is still at `rowVersion` (optimistic concurrency). */
+  async updateAtVersion(
+    id: string,
+    rowVersion: number,
+    change: RevisionChange,
+    tx: Tx,
+  ): Promise<void> {
+    await on(this.db, tx)
+      .updateTable('revisions')
+      .set(change)
+      .where('id', '=', id)
+      .where('rowVersion', '=', rowVersion)
+      .execute();
+  }
+
+  /** A comment on the revision (a checker's reason for returning it); its id. */
+  async addComment(revisionId: string, authorId: string, body: string, tx: Tx): Promise<string> {
+    const row = await on(this.db, tx)
+      .insertInto('comments')
+      .values({ revisionId, authorId, body })
+      .returning('id')
+      .executeTakeFirstOrThrow();
+    return row.id;
+  }
+
+  /** The criteria set the sheet's new revisions start from (a save may choose another). */
+  async setSheetCriteriaSet(sheetId: string, criteriaSetId: string, tx: Tx): Promise<void> {
+    await on(this.db, tx)
+      .updateTable('sheets')
+      .set({ criteriaSetId })
+      .where('id', '=', sheetId)
+      .execute();
   }
 }

@@ -1,11 +1,10 @@
 import { Injectable } from '@nestjs/common';
 import type { SheetInputs } from '@holdfast/calc';
 import { canonicalJson, type Revision, type SaveRevisionInput } from '@holdfast/shared';
-import type { Kysely } from 'kysely';
-import type { DB } from '@holdfast/db';
 import type { AuthUser } from '../auth/auth-user.js';
 import { conflict, forbidden, notFound } from '../common/errors/api-exception.js';
-import { Database } from '../database/database.js';
+import { type Tx, UnitOfWork } from '../database/unit-of-work.js';
+import { passTx, type LegacyTx } from '../database/tx-bridge.js';
 import { AuditService } from '../audit/audit.service.js';
 import { CriteriaService } from '../criteria/criteria.service.js';
 import { canCheck, canEdit, canReadContent, isEditableState } from './revision-access.js';
@@ -18,7 +17,7 @@ import { UsersRepository } from '../users/users.repository.js';
 @Injectable()
 export class RevisionsService {
   constructor(
-    private readonly db: Database,
+    private readonly units: UnitOfWork,
     private readonly repo: RevisionsRepository,
     private readonly users: UsersRepository,
     private readonly criteria: CriteriaService,
@@ -29,10 +28,10 @@ export class RevisionsService {
   async load(
     user: AuthUser,
     id: string,
-    db: Kysely<DB> = this.db,
+    tx?: Tx | LegacyTx,
     lock = false,
   ): Promise<RevisionWithSheet> {
-    const rev = await this.repo.find(id, db, lock);
+    const rev = await this.repo.find(id, tx, lock);
     if (!rev) throw notFound('Revision not found.');
     if (!canReadContent(user, rev))
       throw forbidden('Only approved revisions are open to your role.');
@@ -72,20 +71,21 @@ export class RevisionsService {
 
   /** Draft save: server-side preview evaluation, optimistic concurrency, audit. */
   async save(user: AuthUser, id: string, input: SaveRevisionInput): Promise<Revision> {
-    await this.db.transaction().execute(async (trx) => {
-      const rev = await this.load(user, id, trx, true);
+    await this.units.run(async (tx) => {
+      const rev = await this.load(user, id, tx, true);
       this.assertEditable(user, rev, input.rowVersion);
       const criteriaSetId = input.criteriaSetId ?? rev.criteriaSetId;
-      const criteria = await this.criteria.load(criteriaSetId, 'latest', trx);
+      const criteria = await this.criteria.load(criteriaSetId, 'latest', passTx(tx));
       const inputs = input.inputs as SheetInputs;
       rejectUnknownInputs(rev.sheetType, inputs);
       // A draft may still lack fields or hold blanks: it is previewed when complete, and submit
       // insists on every required field.
       const evaluation = previewOrReject(rev.sheetType, inputs, criteria);
       const unconfirmed = stillUnconfirmed(rev, inputs, input.unconfirmed);
-      await trx
-        .updateTable('revisions')
-        .set({
+      await this.repo.updateAtVersion(
+        id,
+        input.rowVersion,
+        {
           inputs: JSON.stringify(input.inputs),
           unitSystem: input.unitSystem,
           changeNote: input.changeNote,
@@ -100,18 +100,12 @@ export class RevisionsService {
           // Four-eyes by person: whoever saves a change may not approve this revision.
           editorIds: withPerson(rev.editorIds, user.id),
           rowVersion: rev.rowVersion + 1,
-        })
-        .where('id', '=', id)
-        .where('rowVersion', '=', input.rowVersion)
-        .execute();
-      if (criteriaSetId !== rev.criteriaSetId) {
-        await trx
-          .updateTable('sheets')
-          .set({ criteriaSetId })
-          .where('id', '=', rev.sheetId)
-          .execute();
-      }
-      await this.audit.record(trx, {
+        },
+        tx,
+      );
+      if (criteriaSetId !== rev.criteriaSetId)
+        await this.repo.setSheetCriteriaSet(rev.sheetId, criteriaSetId, tx);
+      await this.audit.record(tx, {
         actorId: user.id,
         action: 'revision.saved',
         entity: 'revision',

@@ -6,12 +6,11 @@ import type {
   Revision,
   SubmitRevisionInput,
 } from '@holdfast/shared';
-import type { Kysely } from 'kysely';
-import type { DB } from '@holdfast/db';
 import type { AuthUser } from '../auth/auth-user.js';
 import { badRequest, conflict, forbidden } from '../common/errors/api-exception.js';
 import { AppConfig } from '../config/app-config.js';
-import { Database } from '../database/database.js';
+import { passTx } from '../database/tx-bridge.js';
+import { type Tx, UnitOfWork } from '../database/unit-of-work.js';
 import { AuditService } from '../audit/audit.service.js';
 import { CriteriaService } from '../criteria/criteria.service.js';
 import { OutboxService } from '../outbox/outbox.service.js';
@@ -39,7 +38,7 @@ import { UsersRepository } from '../users/users.repository.js';
 @Injectable()
 export class WorkflowService {
   constructor(
-    private readonly db: Database,
+    private readonly units: UnitOfWork,
     private readonly repo: RevisionsRepository,
     private readonly users: UsersRepository,
     private readonly revisions: RevisionsService,
@@ -62,8 +61,8 @@ export class WorkflowService {
 
   /** Validate and evaluate on the server, freeze, hash, and ask the checkers. */
   async submit(user: AuthUser, id: string, input: SubmitRevisionInput): Promise<Revision> {
-    await this.db.transaction().execute(async (trx) => {
-      const rev = await this.revisions.load(user, id, trx, true);
+    await this.units.run(async (tx) => {
+      const rev = await this.revisions.load(user, id, tx, true);
       this.revisions.assertEditable(user, rev, input.rowVersion);
       const unconfirmed = storedUnconfirmed(rev);
       if (unconfirmed.length > 0) {
@@ -75,7 +74,7 @@ export class WorkflowService {
           })),
         );
       }
-      const criteria = await this.criteria.load(rev.criteriaSetId, 'latest', trx);
+      const criteria = await this.criteria.load(rev.criteriaSetId, 'latest', passTx(tx));
       const inputs = rev.inputs as SheetInputs;
       // The frozen record keeps the inputs exactly as the core used them, beside its results.
       const evaluation = {
@@ -105,8 +104,8 @@ export class WorkflowService {
         submittedAt: new Date(),
         submitterIds: withPerson(rev.submitterIds, user.id),
       };
-      await trx.updateTable('revisions').set(after).where('id', '=', id).execute();
-      await this.audit.record(trx, {
+      await this.repo.update(id, after, tx);
+      await this.audit.record(tx, {
         actorId: user.id,
         action: 'revision.submitted',
         entity: 'revision',
@@ -124,9 +123,9 @@ export class WorkflowService {
           justification,
         },
       });
-      const to = await this.users.checkerEmails(rev.authorId, trx);
+      const to = await this.users.checkerEmails(rev.authorId, tx);
       await this.outbox.enqueueMail(
-        trx,
+        passTx(tx),
         submittedMail(
           this.config.settings.PUBLIC_URL,
           this.about(rev),
@@ -139,8 +138,8 @@ export class WorkflowService {
     return this.revisions.get(user, id);
   }
 
-  private async loadForCheck(user: AuthUser, id: string, rowVersion: number, trx: Kysely<DB>) {
-    const rev = await this.revisions.load(user, id, trx, true);
+  private async loadForCheck(user: AuthUser, id: string, rowVersion: number, tx: Tx) {
+    const rev = await this.revisions.load(user, id, tx, true);
     if (rev.state !== 'in_check') {
       throw conflict(`Revision ${rev.label} is ${rev.state.replace('_', ' ')}, not in check.`, {
         state: rev.state,
@@ -158,28 +157,22 @@ export class WorkflowService {
   }
 
   async approve(user: AuthUser, id: string, input: ApproveRevisionInput): Promise<Revision> {
-    await this.db.transaction().execute(async (trx) => {
-      const rev = await this.loadForCheck(user, id, input.rowVersion, trx);
+    await this.units.run(async (tx) => {
+      const rev = await this.loadForCheck(user, id, input.rowVersion, tx);
       const now = new Date();
-      const previous = await trx
-        .selectFrom('revisions')
-        .select(['id', 'label', 'rowVersion'])
-        .where('sheetId', '=', rev.sheetId)
-        .where('state', '=', 'approved')
-        .forUpdate()
-        .executeTakeFirst();
+      const previous = await this.repo.approvedForUpdate(rev.sheetId, tx);
       if (previous) {
-        await trx
-          .updateTable('revisions')
-          .set({
+        await this.repo.update(
+          previous.id,
+          {
             state: 'superseded',
             supersededAt: now,
             supersededById: id,
             rowVersion: previous.rowVersion + 1,
-          })
-          .where('id', '=', previous.id)
-          .execute();
-        await this.audit.record(trx, {
+          },
+          tx,
+        );
+        await this.audit.record(tx, {
           actorId: user.id,
           action: 'revision.superseded',
           entity: 'revision',
@@ -189,19 +182,19 @@ export class WorkflowService {
           after: { state: 'superseded', supersededBy: rev.label },
         });
       }
-      await trx
-        .updateTable('revisions')
-        .set({
+      await this.repo.update(
+        id,
+        {
           state: 'approved',
           checkerId: user.id,
           approvedAt: now,
           checkNote: input.note?.trim() || null,
           rowVersion: rev.rowVersion + 1,
-        })
-        .where('id', '=', id)
-        .execute();
-      await this.reviews.clearOnApproval(trx, user.id, rev.sheetId, id, rev.label);
-      await this.audit.record(trx, {
+        },
+        tx,
+      );
+      await this.reviews.clearOnApproval(passTx(tx), user.id, rev.sheetId, id, rev.label);
+      await this.audit.record(tx, {
         actorId: user.id,
         action: 'revision.approved',
         entity: 'revision',
@@ -215,9 +208,9 @@ export class WorkflowService {
           note: input.note ?? null,
         },
       });
-      const [to] = await this.users.activeEmails([rev.authorId], trx);
+      const [to] = await this.users.activeEmails([rev.authorId], tx);
       await this.outbox.enqueueMail(
-        trx,
+        passTx(tx),
         approvedMail(
           this.config.settings.PUBLIC_URL,
           this.about(rev),
@@ -231,24 +224,20 @@ export class WorkflowService {
 
   /** Back to the author; the reason is stored as a comment on the revision. */
   async return(user: AuthUser, id: string, input: ReturnRevisionInput): Promise<Revision> {
-    await this.db.transaction().execute(async (trx) => {
-      const rev = await this.loadForCheck(user, id, input.rowVersion, trx);
-      await trx
-        .updateTable('revisions')
-        .set({
+    await this.units.run(async (tx) => {
+      const rev = await this.loadForCheck(user, id, input.rowVersion, tx);
+      await this.repo.update(
+        id,
+        {
           state: 'returned',
           checkerId: user.id,
           returnedAt: new Date(),
           rowVersion: rev.rowVersion + 1,
-        })
-        .where('id', '=', id)
-        .execute();
-      const comment = await trx
-        .insertInto('comments')
-        .values({ revisionId: id, authorId: user.id, body: input.comment })
-        .returning('id')
-        .executeTakeFirstOrThrow();
-      await this.audit.record(trx, {
+        },
+        tx,
+      );
+      const commentId = await this.repo.addComment(id, user.id, input.comment, tx);
+      await this.audit.record(tx, {
         actorId: user.id,
         action: 'revision.returned',
         entity: 'revision',
@@ -258,13 +247,13 @@ export class WorkflowService {
         after: {
           state: 'returned',
           rowVersion: rev.rowVersion + 1,
-          commentId: comment.id,
+          commentId,
           comment: input.comment,
         },
       });
-      const [to] = await this.users.activeEmails([rev.authorId], trx);
+      const [to] = await this.users.activeEmails([rev.authorId], tx);
       await this.outbox.enqueueMail(
-        trx,
+        passTx(tx),
         returnedMail(
           this.config.settings.PUBLIC_URL,
           this.about(rev),

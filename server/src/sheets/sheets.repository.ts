@@ -1,8 +1,9 @@
 import { Injectable } from '@nestjs/common';
-import { sql, type CompiledQuery, type Kysely, type SelectQueryBuilder } from 'kysely';
+import { sql, type CompiledQuery, type SelectQueryBuilder } from 'kysely';
 import type { DB } from '@holdfast/db';
 import type { SheetListQuery } from '@holdfast/shared';
 import { Database } from '../database/database.js';
+import { on, type Tx } from '../database/unit-of-work.js';
 import { summaryColumns } from './sheet-summary.sql.js';
 
 /** A query on `sheets as s` that the list's filters can narrow. */
@@ -33,8 +34,9 @@ export class SheetsRepository {
    * join costs more to plan than to run, and each extra query costs a round trip and its
    * building in Kysely (docs/performance.md).
    */
-  async hydrate(ids: string[], db: Kysely<DB> = this.db) {
+  async hydrate(ids: string[], tx?: Tx) {
     if (ids.length === 0) return [];
+    const db = on(this.db, tx);
     const sheets = await db
       .selectFrom('sheets as s')
       .innerJoin('revisions as lr', 'lr.id', 's.latestRevisionId')
@@ -211,30 +213,8 @@ export class SheetsRepository {
     return Number((await count.executeTakeFirstOrThrow()).n);
   }
 
-  async findSummary(id: string, db: Kysely<DB> = this.db) {
-    return (await this.hydrate([id], db))[0];
-  }
-
-  /** Position with its machine and site, for creating a sheet. */
-  findPosition(positionId: string, db: Kysely<DB>) {
-    return db
-      .selectFrom('brakePositions as p')
-      .innerJoin('machines as m', 'm.id', 'p.machineId')
-      .innerJoin('sites as site', 'site.id', 'm.siteId')
-      .select(['p.id', 'p.tag', 'm.id as machineId', 'm.tag as machineTag', 'site.id as siteId'])
-      .where('p.id', '=', positionId)
-      .executeTakeFirst();
-  }
-
-  /** Next document number of a site, e.g. HF-NRW-0007; serialised by the site row lock. */
-  async nextDocumentNumber(siteId: string, db: Kysely<DB>): Promise<string> {
-    const row = await db
-      .updateTable('sites')
-      .set((eb) => ({ nextSheetNumber: eb('nextSheetNumber', '+', 1) }))
-      .where('id', '=', siteId)
-      .returning(['code', 'nextSheetNumber'])
-      .executeTakeFirstOrThrow();
-    return `HF-${row.code}-${String(row.nextSheetNumber - 1).padStart(4, '0')}`;
+  async findSummary(id: string, tx?: Tx) {
+    return (await this.hydrate([id], tx))[0];
   }
 }
 

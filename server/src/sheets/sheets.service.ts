@@ -10,11 +10,10 @@ import type {
   SheetList,
   SheetListQuery,
 } from '@holdfast/shared';
-import type { Kysely } from 'kysely';
-import type { DB } from '@holdfast/db';
 import type { AuthUser } from '../auth/auth-user.js';
 import { badRequest, conflict, forbidden, notFound } from '../common/errors/api-exception.js';
-import { Database } from '../database/database.js';
+import { passTx } from '../database/tx-bridge.js';
+import { type Tx, UnitOfWork } from '../database/unit-of-work.js';
 import { AuditService } from '../audit/audit.service.js';
 import { CriteriaService } from '../criteria/criteria.service.js';
 import {
@@ -36,6 +35,7 @@ import { RevisionsService } from '../revisions/revisions.service.js';
 import type { SheetEvaluation } from '@holdfast/calc';
 import type { JsonText } from '../http/json-text.js';
 import { toSheetSummary } from './sheet-mapper.js';
+import { SheetRowsRepository } from './sheet-rows.repository.js';
 import { SheetsRepository } from './sheets.repository.js';
 import { UsersRepository } from '../users/users.repository.js';
 
@@ -55,8 +55,9 @@ function preview(
 @Injectable()
 export class SheetsService {
   constructor(
-    private readonly db: Database,
+    private readonly units: UnitOfWork,
     private readonly repo: SheetsRepository,
+    private readonly rows: SheetRowsRepository,
     private readonly revisionsRepo: RevisionsRepository,
     private readonly users: UsersRepository,
     private readonly revisions: RevisionsService,
@@ -70,13 +71,13 @@ export class SheetsService {
     return `{"items":${items},"total":${total},"page":${query.page},"pageSize":${query.pageSize}}`;
   }
 
-  async detail(id: string, db: Kysely<DB> = this.db): Promise<SheetDetail> {
-    const row = await this.repo.findSummary(id, db);
+  async detail(id: string, tx?: Tx): Promise<SheetDetail> {
+    const row = await this.repo.findSummary(id, tx);
     if (!row) throw notFound('Sheet not found.');
-    const revs = await this.revisionsRepo.listForSheet(id, db);
+    const revs = await this.revisionsRepo.listForSheet(id, tx);
     const people = await this.users.people(
       revs.flatMap((r) => [r.authorId, r.checkerId]),
-      db,
+      tx,
     );
     return {
       ...toSheetSummary(row),
@@ -86,27 +87,21 @@ export class SheetsService {
   }
 
   async create(user: AuthUser, input: CreateSheetInput): Promise<SheetDetail> {
-    const id = await this.db.transaction().execute(async (trx) => {
-      const position = await this.repo.findPosition(input.positionId, trx);
+    const id = await this.units.run(async (tx) => {
+      const position = await this.rows.findPosition(input.positionId, tx);
       if (!position)
         throw badRequest('Some fields are not valid.', [
           { path: 'positionId', message: 'no such brake position' },
         ]);
       const criteriaSetId = input.criteriaSetId ?? defaultCriteriaSetId(input.sheetType);
-      const set = await trx
-        .selectFrom('criteriaSets')
-        .select('id')
-        .where('id', '=', criteriaSetId)
-        .executeTakeFirst();
-      if (!set)
+      if (!(await this.rows.criteriaSetExists(criteriaSetId, tx)))
         throw badRequest('Some fields are not valid.', [
           { path: 'criteriaSetId', message: 'no such criteria set' },
         ]);
-      const criteria = await this.criteria.load(criteriaSetId, 'latest', trx);
-      const documentNumber = await this.repo.nextDocumentNumber(position.siteId, trx);
-      const sheet = await trx
-        .insertInto('sheets')
-        .values({
+      const criteria = await this.criteria.load(criteriaSetId, 'latest', passTx(tx));
+      const documentNumber = await this.rows.nextDocumentNumber(position.siteId, tx);
+      const sheetId = await this.rows.insert(
+        {
           documentNumber,
           title: input.title,
           positionId: position.id,
@@ -116,16 +111,15 @@ export class SheetsService {
           sheetType: input.sheetType,
           ownerId: user.id,
           criteriaSetId,
-        })
-        .returning('id')
-        .executeTakeFirstOrThrow();
-      const { inputs, unconfirmed, copiedFrom } = await this.startOf(input, trx);
+        },
+        tx,
+      );
+      const { inputs, unconfirmed, copiedFrom } = await this.startOf(input, tx);
       const evaluation =
         blankFields(inputs).length > 0 ? null : preview(input.sheetType, inputs, criteria);
-      const rev = await trx
-        .insertInto('revisions')
-        .values({
-          sheetId: sheet.id,
+      const revisionId = await this.revisionsRepo.insert(
+        {
+          sheetId,
           seq: 1,
           label: 'A',
           inputs: JSON.stringify(inputs),
@@ -137,28 +131,28 @@ export class SheetsService {
           authorId: user.id,
           changeNote: 'First issue.',
           unconfirmed: JSON.stringify(unconfirmed),
-        })
-        .returning('id')
-        .executeTakeFirstOrThrow();
-      await this.audit.record(trx, {
+        },
+        tx,
+      );
+      await this.audit.record(tx, {
         actorId: user.id,
         action: 'sheet.created',
         entity: 'sheet',
-        entityId: sheet.id,
-        sheetId: sheet.id,
+        entityId: sheetId,
+        sheetId,
         after: {
           documentNumber,
           title: input.title,
           sheetType: input.sheetType,
           positionId: position.id,
           criteriaSetId,
-          revisionId: rev.id,
+          revisionId,
           label: 'A',
           start: input.start?.kind ?? 'example (unmarked)',
           ...(copiedFrom ? { copiedFrom } : {}),
         },
       });
-      return sheet.id;
+      return sheetId;
     });
     return this.detail(id);
   }
@@ -166,14 +160,14 @@ export class SheetsService {
   /** What the first revision of a new sheet holds, by the way the engineer chose to start it. */
   private async startOf(
     input: CreateSheetInput,
-    trx: Kysely<DB>,
+    tx: Tx,
   ): Promise<{ inputs: SheetInputs; unconfirmed: string[]; copiedFrom?: string }> {
     const start = input.start;
     // No choice made is the example duty, every value marked: nothing invented goes to check
     // unless someone confirms it, whichever client made the sheet.
     if (!start || start.kind !== 'copy')
       return startingInputs(input.sheetType, start?.kind ?? 'example');
-    const source = await this.revisionsRepo.find(start.revisionId, trx);
+    const source = await this.revisionsRepo.find(start.revisionId, tx);
     const refuse = (message: string) =>
       badRequest('Some fields are not valid.', [{ path: 'start.revisionId', message }]);
     if (!source) throw refuse('no such revision');
@@ -190,21 +184,10 @@ export class SheetsService {
 
   /** A new draft copying the latest revision's inputs; refused while a revision is open. */
   async newRevision(user: AuthUser, sheetId: string, input: NewRevisionInput): Promise<Revision> {
-    const id = await this.db.transaction().execute(async (trx) => {
-      const sheet = await trx
-        .selectFrom('sheets')
-        .selectAll()
-        .where('id', '=', sheetId)
-        .forUpdate()
-        .executeTakeFirst();
+    const id = await this.units.run(async (tx) => {
+      const sheet = await this.rows.findForUpdate(sheetId, tx);
       if (!sheet) throw notFound('Sheet not found.');
-      const latest = await trx
-        .selectFrom('revisions')
-        .selectAll()
-        .where('sheetId', '=', sheetId)
-        .orderBy('seq', 'desc')
-        .limit(1)
-        .executeTakeFirstOrThrow();
+      const latest = await this.revisionsRepo.latestForSheet(sheetId, tx);
       if (['draft', 'in_check', 'returned'].includes(latest.state)) {
         throw conflict(
           `Revision ${latest.label} is still ${latest.state.replace('_', ' ')}; finish it first.`,
@@ -213,13 +196,12 @@ export class SheetsService {
           },
         );
       }
-      const criteria = await this.criteria.load(sheet.criteriaSetId, 'latest', trx);
+      const criteria = await this.criteria.load(sheet.criteriaSetId, 'latest', passTx(tx));
       const inputs = withoutRetiredInputs(sheet.sheetType, latest.inputs as SheetInputs);
       const evaluation = preview(sheet.sheetType, inputs, criteria);
       const seq = latest.seq + 1;
-      const rev = await trx
-        .insertInto('revisions')
-        .values({
+      const revisionId = await this.revisionsRepo.insert(
+        {
           sheetId,
           seq,
           label: revisionLabel(seq),
@@ -231,14 +213,14 @@ export class SheetsService {
           coreVersion: evaluation ? coreVersion() : null,
           authorId: user.id,
           changeNote: input.changeNote,
-        })
-        .returning('id')
-        .executeTakeFirstOrThrow();
-      await this.audit.record(trx, {
+        },
+        tx,
+      );
+      await this.audit.record(tx, {
         actorId: user.id,
         action: 'revision.created',
         entity: 'revision',
-        entityId: rev.id,
+        entityId: revisionId,
         sheetId,
         before: { latest: latest.label, state: latest.state },
         after: {
@@ -248,7 +230,7 @@ export class SheetsService {
           changeNote: input.changeNote,
         },
       });
-      return rev.id;
+      return revisionId;
     });
     return this.revisions.get(user, id);
   }
@@ -282,12 +264,7 @@ export class SheetsService {
 
   /** Who did what and when; payloads follow the revision read rules (see read-rules.ts). */
   async auditTrail(user: AuthUser, sheetId: string) {
-    const exists = await this.db
-      .selectFrom('sheets')
-      .select('id')
-      .where('id', '=', sheetId)
-      .executeTakeFirst();
-    if (!exists) throw notFound('Sheet not found.');
+    if (!(await this.rows.exists(sheetId))) throw notFound('Sheet not found.');
     return { items: auditFor(user, await this.audit.forSheet(sheetId)) };
   }
 }

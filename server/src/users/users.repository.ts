@@ -1,8 +1,7 @@
 import { Injectable } from '@nestjs/common';
-import type { DB, NewUserRow, UserRow, UserRowUpdate } from '@holdfast/db';
-import type { Kysely } from 'kysely';
+import type { NewUserRow, UserRow, UserRowUpdate } from '@holdfast/db';
 import { Database } from '../database/database.js';
-import { on, type OpenTransaction } from '../database/unit-of-work.js';
+import { on, type Tx } from '../database/unit-of-work.js';
 import { SignedInUsers } from './signed-in-users.js';
 
 @Injectable()
@@ -12,7 +11,7 @@ export class UsersRepository {
     private readonly signedIn: SignedInUsers,
   ) {}
 
-  findById(id: string, tx?: OpenTransaction): Promise<UserRow | undefined> {
+  findById(id: string, tx?: Tx): Promise<UserRow | undefined> {
     return on(this.db, tx).selectFrom('users').selectAll().where('id', '=', id).executeTakeFirst();
   }
 
@@ -25,11 +24,11 @@ export class UsersRepository {
   }
 
   /** Users by id (name and initials), for person references. */
-  async people(ids: (string | null | undefined)[], db: Kysely<DB> = this.db) {
+  async people(ids: (string | null | undefined)[], tx?: Tx) {
     const wanted = [...new Set(ids.filter((x): x is string => !!x))];
     if (wanted.length === 0)
       return new Map<string, { id: string; displayName: string; initials: string }>();
-    const rows = await db
+    const rows = await on(this.db, tx)
       .selectFrom('users')
       .select(['id', 'displayName', 'initials'])
       .where('id', 'in', wanted)
@@ -38,7 +37,7 @@ export class UsersRepository {
   }
 
   /** E-mail addresses of the active users among `ids`, sorted; inactive ones get no mail. */
-  async activeEmails(ids: (string | null)[], tx?: OpenTransaction): Promise<string[]> {
+  async activeEmails(ids: (string | null)[], tx?: Tx): Promise<string[]> {
     const wanted = [...new Set(ids.filter((x): x is string => !!x))];
     if (wanted.length === 0) return [];
     const rows = await on(this.db, tx)
@@ -52,8 +51,8 @@ export class UsersRepository {
   }
 
   /** E-mail addresses of active checkers other than `exceptId`. */
-  async checkerEmails(exceptId: string, db: Kysely<DB> = this.db): Promise<string[]> {
-    const rows = await db
+  async checkerEmails(exceptId: string, tx?: Tx): Promise<string[]> {
+    const rows = await on(this.db, tx)
       .selectFrom('users')
       .select('email')
       .where('role', '=', 'checker')
@@ -91,7 +90,7 @@ export class UsersRepository {
    * Ends the user's access tokens at once: each carries the session version it was issued
    * under, and the guard refuses older ones. Refresh tokens are untouched (see revokeSessions).
    */
-  async endAccessTokens(userId: string, tx?: OpenTransaction): Promise<void> {
+  async endAccessTokens(userId: string, tx?: Tx): Promise<void> {
     this.signedIn.forget(userId);
     await on(this.db, tx)
       .updateTable('users')
@@ -101,7 +100,7 @@ export class UsersRepository {
   }
 
   /** A new password hash; ends every session (access and refresh) of the user. */
-  async setPassword(userId: string, passwordHash: string, tx?: OpenTransaction): Promise<void> {
+  async setPassword(userId: string, passwordHash: string, tx?: Tx): Promise<void> {
     this.signedIn.forget(userId);
     await on(this.db, tx)
       .updateTable('users')
@@ -113,7 +112,7 @@ export class UsersRepository {
   }
 
   /** Ends every session of a user (on deactivation). */
-  async revokeSessions(userId: string, tx?: OpenTransaction): Promise<void> {
+  async revokeSessions(userId: string, tx?: Tx): Promise<void> {
     await on(this.db, tx)
       .updateTable('refreshTokens')
       .set({ revokedAt: new Date() })
