@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import type { AttachmentRow } from '@holdfast/db';
 import { Database } from '../database/database.js';
-import { on, type OpenTransaction } from '../database/unit-of-work.js';
+import { on, type Tx } from '../database/unit-of-work.js';
 
 export interface NewAttachment {
   revisionId: string;
@@ -37,7 +37,7 @@ export class AttachmentsRepository {
    * Takes the revision's row lock inside the caller's transaction: uploads to one revision
    * then run one after another, so its quota holds under races.
    */
-  async lockRevision(revisionId: string, tx: OpenTransaction): Promise<void> {
+  async lockRevision(revisionId: string, tx: Tx): Promise<void> {
     await on(this.db, tx)
       .selectFrom('revisions')
       .select('id')
@@ -47,7 +47,7 @@ export class AttachmentsRepository {
   }
 
   /** How many files and bytes the revision holds (field-record photos included). */
-  async usage(revisionId: string, tx?: OpenTransaction): Promise<{ files: number; bytes: number }> {
+  async usage(revisionId: string, tx?: Tx): Promise<{ files: number; bytes: number }> {
     const used = await on(this.db, tx)
       .selectFrom('attachments')
       .select((eb) => [eb.fn.countAll<string>().as('files'), eb.fn.sum<string>('size').as('bytes')])
@@ -56,7 +56,7 @@ export class AttachmentsRepository {
     return { files: Number(used.files), bytes: Number(used.bytes ?? 0) };
   }
 
-  insert(row: NewAttachment, tx?: OpenTransaction): Promise<AttachmentRow> {
+  insert(row: NewAttachment, tx?: Tx): Promise<AttachmentRow> {
     return on(this.db, tx)
       .insertInto('attachments')
       .values(row)

@@ -1,6 +1,4 @@
 import { Injectable } from '@nestjs/common';
-import type { Kysely } from 'kysely';
-import type { DB } from '@holdfast/db';
 import { Database } from '../database/database.js';
 import { on, type Tx } from '../database/unit-of-work.js';
 
@@ -19,7 +17,7 @@ export interface AuditRow {
 export class AuditRepository {
   constructor(private readonly db: Database) {}
 
-  async append(row: AuditRow, tx: Tx | Kysely<DB>): Promise<void> {
+  async append(row: AuditRow, tx: Tx): Promise<void> {
     await on(this.db, tx).insertInto('auditEvents').values(row).execute();
   }
 

@@ -1,7 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import type { Kysely } from 'kysely';
 import type { AuditEvent } from '@holdfast/shared';
-import type { DB } from '@holdfast/db';
 import type { Tx } from '../database/unit-of-work.js';
 import { AuditRepository } from './audit.repository.js';
 
@@ -21,14 +19,13 @@ const json = (v: unknown) => (v === undefined || v === null ? null : JSON.string
 
 /**
  * The append-only trail (the table refuses UPDATE and DELETE). Write inside the change's
- * transaction: `record(tx, …)` with the `Tx` of `UnitOfWork.run` (a Kysely transaction is still
- * accepted from services not yet moved to repositories).
+ * transaction: `record(tx, …)` with the `Tx` of `UnitOfWork.run`.
  */
 @Injectable()
 export class AuditService {
   constructor(private readonly repo: AuditRepository) {}
 
-  async record(tx: Tx | Kysely<DB>, entry: AuditEntry): Promise<void> {
+  async record(tx: Tx, entry: AuditEntry): Promise<void> {
     await this.repo.append(
       {
         actorId: entry.actorId,

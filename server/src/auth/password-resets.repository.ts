@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import type { PasswordResetRow } from '@holdfast/db';
 import { Database } from '../database/database.js';
-import { on, type OpenTransaction } from '../database/unit-of-work.js';
+import { on, type Tx } from '../database/unit-of-work.js';
 
 /** One-time password reset links, kept by the SHA-256 of their token. */
 @Injectable()
@@ -9,7 +9,7 @@ export class PasswordResetsRepository {
   constructor(private readonly db: Database) {}
 
   /** Marks every unused link of the user used, so only the newest one works. */
-  async closeOpen(userId: string, tx?: OpenTransaction): Promise<void> {
+  async closeOpen(userId: string, tx?: Tx): Promise<void> {
     await on(this.db, tx)
       .updateTable('passwordResets')
       .set({ usedAt: new Date() })
@@ -20,7 +20,7 @@ export class PasswordResetsRepository {
 
   async insert(
     row: { userId: string; tokenHash: string; requestedBy: string; expiresAt: Date },
-    tx?: OpenTransaction,
+    tx?: Tx,
   ): Promise<void> {
     await on(this.db, tx).insertInto('passwordResets').values(row).execute();
   }
@@ -34,7 +34,7 @@ export class PasswordResetsRepository {
   }
 
   /** Uses the link; false when it was used already (a second, concurrent use loses). */
-  async markUsed(id: string, tx?: OpenTransaction): Promise<boolean> {
+  async markUsed(id: string, tx?: Tx): Promise<boolean> {
     const used = await on(this.db, tx)
       .updateTable('passwordResets')
       .set({ usedAt: new Date() })

@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import type { RefreshTokenRow } from '@holdfast/db';
 import { Database } from '../database/database.js';
-import { on, type OpenTransaction } from '../database/unit-of-work.js';
+import { on, type Tx } from '../database/unit-of-work.js';
 
 @Injectable()
 export class RefreshTokensRepository {
@@ -9,7 +9,7 @@ export class RefreshTokensRepository {
 
   async insert(
     row: { userId: string; tokenHash: string; expiresAt: Date; rotatedFrom?: string },
-    tx?: OpenTransaction,
+    tx?: Tx,
   ): Promise<void> {
     await on(this.db, tx).insertInto('refreshTokens').values(row).execute();
   }
@@ -26,7 +26,7 @@ export class RefreshTokensRepository {
    * Revokes the token if it is still live; returns false when another request got there first,
    * which makes rotation single-use even under concurrent refreshes.
    */
-  async revokeIfLive(id: string, tx?: OpenTransaction): Promise<boolean> {
+  async revokeIfLive(id: string, tx?: Tx): Promise<boolean> {
     const result = await on(this.db, tx)
       .updateTable('refreshTokens')
       .set({ revokedAt: new Date() })

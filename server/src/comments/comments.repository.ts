@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import type { CommentRow } from '@holdfast/db';
 import { Database } from '../database/database.js';
-import { on, type OpenTransaction } from '../database/unit-of-work.js';
+import { on, type Tx } from '../database/unit-of-work.js';
 
 export interface NewComment {
   revisionId: string;
@@ -29,13 +29,13 @@ export class CommentsRepository {
   }
 
   /** The comment; `lock` takes its row lock (inside the caller's transaction). */
-  find(id: string, tx?: OpenTransaction, lock = false): Promise<CommentRow | undefined> {
+  find(id: string, tx?: Tx, lock = false): Promise<CommentRow | undefined> {
     let q = on(this.db, tx).selectFrom('comments').selectAll().where('id', '=', id);
     if (lock) q = q.forUpdate();
     return q.executeTakeFirst();
   }
 
-  insert(row: NewComment, tx?: OpenTransaction): Promise<CommentRow> {
+  insert(row: NewComment, tx?: Tx): Promise<CommentRow> {
     return on(this.db, tx)
       .insertInto('comments')
       .values(row)
@@ -44,12 +44,7 @@ export class CommentsRepository {
   }
 
   /** Resolves (by `userId`) or reopens the comment; returns it as it now stands. */
-  setResolved(
-    id: string,
-    resolved: boolean,
-    userId: string,
-    tx?: OpenTransaction,
-  ): Promise<CommentRow> {
+  setResolved(id: string, resolved: boolean, userId: string, tx?: Tx): Promise<CommentRow> {
     return on(this.db, tx)
       .updateTable('comments')
       .set({

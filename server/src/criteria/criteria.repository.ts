@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import type { CriteriaSet, CriterionValue } from '@holdfast/calc';
 import { Database } from '../database/database.js';
-import { on, type OpenTransaction } from '../database/unit-of-work.js';
+import { on, type Tx } from '../database/unit-of-work.js';
 
 export interface CriteriaVersionRow {
   criteriaSetId: string;
@@ -60,7 +60,7 @@ export class CriteriaRepository {
     return this.db.selectFrom('criteriaSets').selectAll().where('id', '=', id).executeTakeFirst();
   }
 
-  async versions(id: string, tx?: OpenTransaction): Promise<CriteriaVersionRow[]> {
+  async versions(id: string, tx?: Tx): Promise<CriteriaVersionRow[]> {
     const rows = await on(this.db, tx)
       .selectFrom('criteriaSetVersions')
       .selectAll()
@@ -73,7 +73,7 @@ export class CriteriaRepository {
   async version(
     id: string,
     version: number | 'latest',
-    tx?: OpenTransaction,
+    tx?: Tx,
   ): Promise<CriteriaVersionRow | undefined> {
     let q = on(this.db, tx)
       .selectFrom('criteriaSetVersions')
@@ -88,7 +88,7 @@ export class CriteriaRepository {
   }
 
   /** Whether a set has this id. */
-  async setExists(id: string, tx?: OpenTransaction): Promise<boolean> {
+  async setExists(id: string, tx?: Tx): Promise<boolean> {
     const row = await on(this.db, tx)
       .selectFrom('criteriaSets')
       .select('id')
@@ -98,7 +98,7 @@ export class CriteriaRepository {
   }
 
   /** Takes the set's row lock (inside the caller's transaction): publishing is one at a time. */
-  async lockSet(id: string, tx: OpenTransaction): Promise<boolean> {
+  async lockSet(id: string, tx: Tx): Promise<boolean> {
     const row = await on(this.db, tx)
       .selectFrom('criteriaSets')
       .select('id')
@@ -110,7 +110,7 @@ export class CriteriaRepository {
 
   /** A new set with its first version (the caller audits it). */
   async createSet(
-    tx: OpenTransaction,
+    tx: Tx,
     set: { id: string; name: string; description: string },
     values: CriterionValue[],
     note: string,
@@ -147,7 +147,7 @@ export class CriteriaRepository {
   }
 
   async insertConfirmation(
-    tx: OpenTransaction,
+    tx: Tx,
     row: {
       criteriaSetId: string;
       version: number;
@@ -161,7 +161,7 @@ export class CriteriaRepository {
   }
 
   async insertVersion(
-    tx: OpenTransaction,
+    tx: Tx,
     row: {
       criteriaSetId: string;
       version: number;

@@ -6,7 +6,7 @@ import type {
   PublishCriteriaVersionInput,
 } from '@holdfast/shared';
 import { badRequest, notFound } from '../common/errors/api-exception.js';
-import { UnitOfWork, type OpenTransaction } from '../database/unit-of-work.js';
+import { UnitOfWork, type Tx } from '../database/unit-of-work.js';
 import { AuditService } from '../audit/audit.service.js';
 import { criterionUnit, shippedCriteriaSets } from '../calc/calc-engine.js';
 import { ReviewsService } from '../reviews/reviews.service.js';
@@ -39,7 +39,7 @@ export class CriteriaService implements OnModuleInit {
   }
 
   /** A version as calc's CriteriaSet, for evaluation. */
-  async load(id: string, version: number | 'latest', tx?: OpenTransaction): Promise<CriteriaSet> {
+  async load(id: string, version: number | 'latest', tx?: Tx): Promise<CriteriaSet> {
     const set = await this.repo.findSet(id);
     const row = set && (await this.repo.version(id, version, tx));
     if (!set || !row) throw notFound(`Criteria set ${id} version ${version} does not exist.`);

@@ -14,13 +14,6 @@ export interface Tx {
   readonly [txBrand]: 'holdfast-transaction';
 }
 
-/**
- * A `Tx`, or the Kysely transaction of a service not yet moved to repositories (issue 14): a
- * method shared by both passes it on. The union offers no query methods, so a service holding
- * one still cannot build a query with it. Narrowed to `Tx` once every service has moved.
- */
-export type OpenTransaction = Tx | Kysely<DB>;
-
 /** Begins transactions for services, which may not import Kysely or the database handle. */
 @Injectable()
 export class UnitOfWork {
@@ -36,6 +29,6 @@ export class UnitOfWork {
  * The executor a repository method runs on: the caller's transaction when it passes one, else the
  * pool. Repository methods take `tx?: Tx` as their last parameter and start with `on(this.db, tx)`.
  */
-export function on(db: Database, tx?: Tx | Kysely<DB>): Kysely<DB> {
+export function on(db: Database, tx?: Tx): Kysely<DB> {
   return (tx as Kysely<DB> | undefined) ?? db;
 }

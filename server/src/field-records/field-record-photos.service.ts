@@ -4,6 +4,7 @@ import type { FieldRecordRow } from '@holdfast/db';
 import type { Attachment } from '@holdfast/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { AuditService } from '../audit/audit.service.js';
+import { UnitOfWork } from '../database/unit-of-work.js';
 import { nameForType, sniffContentType } from '../attachments/sniff.js';
 import {
   givenFileName,
@@ -33,6 +34,7 @@ export class FieldRecordPhotosService {
     private readonly storage: ObjectStorage,
     private readonly users: UsersRepository,
     private readonly audit: AuditService,
+    private readonly units: UnitOfWork,
   ) {}
 
   async list(recordId: string): Promise<Attachment[]> {
@@ -63,7 +65,7 @@ export class FieldRecordPhotosService {
     const sha256 = sha256Of(file.buffer);
     const storageKey = `field-records/${recordId}/${randomUUID()}`;
     const row = await storeThenRecord(this.storage, storageKey, file.buffer, contentType, () =>
-      this.repo.transaction(async (trx) => {
+      this.units.run(async (trx) => {
         const rec = await this.repo.lockForUpdate(trx, recordId);
         if (!rec) throw notFound('Field record not found.');
         assertMayAddPhoto(user, rec);

@@ -42,11 +42,7 @@ export interface RecordRevision {
 export class FieldRecordsRepository {
   constructor(readonly db: Database) {}
 
-  transaction<T>(fn: (trx: Kysely<DB>) => Promise<T>): Promise<T> {
-    return this.db.transaction().execute(fn);
-  }
-
-  async revision(revisionId: string, tx?: Tx | Kysely<DB>): Promise<RecordRevision | undefined> {
+  async revision(revisionId: string, tx?: Tx): Promise<RecordRevision | undefined> {
     const db = on(this.db, tx);
     const row = await db
       .selectFrom('revisions as r')
@@ -78,7 +74,7 @@ export class FieldRecordsRepository {
     return row ? { ...row, underReview: Boolean(row.underReview) } : undefined;
   }
 
-  async positionTag(positionId: string, tx?: Tx | Kysely<DB>): Promise<string | undefined> {
+  async positionTag(positionId: string, tx?: Tx): Promise<string | undefined> {
     const db = on(this.db, tx);
     const row = await db
       .selectFrom('brakePositions')
@@ -88,7 +84,7 @@ export class FieldRecordsRepository {
     return row?.tag;
   }
 
-  async load(id: string, tx?: Tx | Kysely<DB>): Promise<StoredFieldRecord | undefined> {
+  async load(id: string, tx?: Tx): Promise<StoredFieldRecord | undefined> {
     const db = on(this.db, tx);
     const record = await db
       .selectFrom('fieldRecords')
@@ -102,7 +98,7 @@ export class FieldRecordsRepository {
   /** Records by position (oldest first) or status; parts loaded in one query each. */
   async list(
     filter: { positionId?: string; status?: string; ids?: string[] },
-    tx?: Tx | Kysely<DB>,
+    tx?: Tx,
   ): Promise<StoredFieldRecord[]> {
     const db = on(this.db, tx);
     let q = db.selectFrom('fieldRecords').selectAll();
@@ -140,7 +136,7 @@ export class FieldRecordsRepository {
 
   /** Inserts the record unless its id exists; true when this call created it. */
   async insert(
-    tx: Tx | Kysely<DB>,
+    tx: Tx,
     row: {
       id: string;
       positionId: string;
@@ -163,7 +159,7 @@ export class FieldRecordsRepository {
     return inserted !== undefined;
   }
 
-  async lockForUpdate(tx: Tx | Kysely<DB>, id: string): Promise<FieldRecordRow | undefined> {
+  async lockForUpdate(tx: Tx, id: string): Promise<FieldRecordRow | undefined> {
     const db = on(this.db, tx);
     return db
       .selectFrom('fieldRecords')
@@ -174,7 +170,7 @@ export class FieldRecordsRepository {
   }
 
   async update(
-    tx: Tx | Kysely<DB>,
+    tx: Tx,
     id: string,
     set: Partial<{
       kind: string;
@@ -191,11 +187,7 @@ export class FieldRecordsRepository {
   }
 
   /** The measurements of a draft with what each is judged against and its verdicts. */
-  async replaceMeasurements(
-    tx: Tx | Kysely<DB>,
-    id: string,
-    items: FieldMeasurement[],
-  ): Promise<void> {
+  async replaceMeasurements(tx: Tx, id: string, items: FieldMeasurement[]): Promise<void> {
     const db = on(this.db, tx);
     await db.deleteFrom('fieldRecordMeasurements').where('recordId', '=', id).execute();
     if (items.length === 0) return;
@@ -225,7 +217,7 @@ export class FieldRecordsRepository {
       .execute();
   }
 
-  async replaceChecks(tx: Tx | Kysely<DB>, id: string, items: FieldCheckInput[]): Promise<void> {
+  async replaceChecks(tx: Tx, id: string, items: FieldCheckInput[]): Promise<void> {
     const db = on(this.db, tx);
     await db.deleteFrom('fieldRecordChecks').where('recordId', '=', id).execute();
     if (items.length === 0) return;
@@ -244,7 +236,7 @@ export class FieldRecordsRepository {
       .execute();
   }
 
-  async countPhotos(tx: Tx | Kysely<DB>, recordId: string): Promise<number> {
+  async countPhotos(tx: Tx, recordId: string): Promise<number> {
     const db = on(this.db, tx);
     const row = await db
       .selectFrom('attachments')
@@ -255,7 +247,7 @@ export class FieldRecordsRepository {
   }
 
   insertPhoto(
-    tx: Tx | Kysely<DB>,
+    tx: Tx,
     row: {
       revisionId: string;
       fieldRecordId: string;

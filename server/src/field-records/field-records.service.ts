@@ -15,7 +15,6 @@ import { effectiveRoles } from '../auth/policy.js';
 import { AuditService } from '../audit/audit.service.js';
 import { badRequest, conflict, forbidden, notFound } from '../common/errors/api-exception.js';
 import { AppConfig } from '../config/app-config.js';
-import { passTx } from '../database/tx-bridge.js';
 import { type Tx, UnitOfWork } from '../database/unit-of-work.js';
 import { OutboxService } from '../outbox/outbox.service.js';
 import { UsersRepository } from '../users/users.repository.js';
@@ -310,7 +309,7 @@ export class FieldRecordsService {
           return `${m.label}: off by ${v.display.deviation.toPrecision(3)} ${v.display.label} — ${m.reason}`;
         });
         await this.outbox.enqueueMail(
-          passTx(tx),
+          tx,
           outOfToleranceMail(
             this.config.settings.PUBLIC_URL,
             {

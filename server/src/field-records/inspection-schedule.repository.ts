@@ -1,17 +1,13 @@
 import { Injectable } from '@nestjs/common';
-import { sql, type Kysely } from 'kysely';
-import type { DB } from '@holdfast/db';
+import { sql } from 'kysely';
 import type { InspectionInterval } from '@holdfast/shared';
 import { Database } from '../database/database.js';
+import { on, type Tx } from '../database/unit-of-work.js';
 
 /** Kysely of the inspection schedule: intervals, the last record per position, reminders sent. */
 @Injectable()
 export class InspectionScheduleRepository {
   constructor(private readonly db: Database) {}
-
-  transaction<T>(fn: (trx: Kysely<DB>) => Promise<T>): Promise<T> {
-    return this.db.transaction().execute(fn);
-  }
 
   positionExists(id: string) {
     return this.db
@@ -91,8 +87,8 @@ export class InspectionScheduleRepository {
   }
 
   /** Records a reminder; false when one for this due date was sent already. */
-  async claimReminder(trx: Kysely<DB>, positionId: string, dueOn: string): Promise<boolean> {
-    const row = await trx
+  async claimReminder(tx: Tx, positionId: string, dueOn: string): Promise<boolean> {
+    const row = await on(this.db, tx)
       .insertInto('inspectionReminders')
       .values({ positionId, dueOn })
       .onConflict((oc) => oc.columns(['positionId', 'dueOn']).doNothing())

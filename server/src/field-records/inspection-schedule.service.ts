@@ -9,6 +9,7 @@ import type {
 import type { AuthUser } from '../auth/auth-user.js';
 import { effectiveRoles } from '../auth/policy.js';
 import { AuditService } from '../audit/audit.service.js';
+import { UnitOfWork } from '../database/unit-of-work.js';
 import { notFound } from '../common/errors/api-exception.js';
 import { AppConfig } from '../config/app-config.js';
 import { OutboxService } from '../outbox/outbox.service.js';
@@ -40,6 +41,7 @@ export class InspectionScheduleService {
     private readonly outbox: OutboxService,
     private readonly audit: AuditService,
     private readonly config: AppConfig,
+    private readonly units: UnitOfWork,
   ) {}
 
   private async assertPosition(positionId: string) {
@@ -59,7 +61,7 @@ export class InspectionScheduleService {
   ): Promise<PositionInterval> {
     await this.assertPosition(positionId);
     await this.repo.setInterval(positionId, user.id, input);
-    await this.repo.transaction((trx) =>
+    await this.units.run((trx) =>
       this.audit.record(trx, {
         actorId: user.id,
         action: 'position.inspection-interval-set',
@@ -165,7 +167,7 @@ export class InspectionScheduleService {
       const next = nextDue(f, now);
       if (!next.date || !inReminderWindow(f, next, now)) continue;
       const dueOn = next.date.slice(0, 10);
-      const queued = await this.repo.transaction(async (trx) => {
+      const queued = await this.units.run(async (trx) => {
         if (!(await this.repo.claimReminder(trx, r.positionId, dueOn))) return false;
         await this.outbox.enqueueMail(
           trx,

@@ -4,7 +4,7 @@ import PgBoss from 'pg-boss';
 import type pg from 'pg';
 import { createPool, type DB } from '@holdfast/db';
 import { AppConfig } from '../config/app-config.js';
-import type { OpenTransaction } from '../database/unit-of-work.js';
+import type { Tx } from '../database/unit-of-work.js';
 import { loadMailSettings } from '../mail/mail-settings.js';
 
 export const MAIL_QUEUE = 'mail';
@@ -57,8 +57,8 @@ export class JobQueue implements OnModuleInit, OnModuleDestroy {
    * its own SQL, and this runs it on the transaction's connection so the job commits with the
    * change. A `Tx` is the Kysely transaction underneath (unit-of-work.ts).
    */
-  async sendIn(tx: OpenTransaction, queue: string, data: object): Promise<void> {
-    const trx = tx as Kysely<DB>;
+  async sendIn(tx: Tx, queue: string, data: object): Promise<void> {
+    const trx = tx as unknown as Kysely<DB>;
     const db = {
       executeSql: async (text: string, values: unknown[]) => {
         const result = await trx.executeQuery(CompiledQuery.raw(text, values));

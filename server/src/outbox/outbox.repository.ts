@@ -2,7 +2,7 @@ import { Injectable } from '@nestjs/common';
 import type { Selectable } from 'kysely';
 import type { DB } from '@holdfast/db';
 import { Database } from '../database/database.js';
-import { on, type OpenTransaction } from '../database/unit-of-work.js';
+import { on, type Tx } from '../database/unit-of-work.js';
 
 export type OutboxRow = Selectable<DB['outbox']>;
 
@@ -12,7 +12,7 @@ export class OutboxRepository {
   constructor(private readonly db: Database) {}
 
   /** A new mail row inside the caller's transaction; returns its id. */
-  async insertMail(payload: string, tx: OpenTransaction): Promise<string> {
+  async insertMail(payload: string, tx: Tx): Promise<string> {
     const row = await on(this.db, tx)
       .insertInto('outbox')
       .values({ kind: 'mail', payload })
@@ -61,7 +61,7 @@ export class OutboxRepository {
   }
 
   /** Gives a failed row a fresh count of attempts; false when it is not (or no longer) failed. */
-  async resetFailed(id: string, retryLimit: number, tx?: OpenTransaction): Promise<boolean> {
+  async resetFailed(id: string, retryLimit: number, tx?: Tx): Promise<boolean> {
     const reset = await on(this.db, tx)
       .updateTable('outbox')
       .set({ attempts: 0, lastError: null })

@@ -1,5 +1,5 @@
 import { Injectable, Logger, type OnApplicationBootstrap } from '@nestjs/common';
-import type { OpenTransaction } from '../database/unit-of-work.js';
+import type { Tx } from '../database/unit-of-work.js';
 import { Mailer, type MailMessage } from '../mail/mailer.js';
 import { JobQueue, MAIL_QUEUE } from './job-queue.js';
 import { OutboxRepository } from './outbox.repository.js';
@@ -38,11 +38,7 @@ export class OutboxService implements OnApplicationBootstrap {
    * mail (it carries a one-time link) has its text blanked once it is sent, so the database and
    * its backups never keep a working link longer than delivery needs.
    */
-  async enqueueMail(
-    trx: OpenTransaction,
-    message: MailMessage,
-    opts: { secret?: boolean } = {},
-  ): Promise<void> {
+  async enqueueMail(trx: Tx, message: MailMessage, opts: { secret?: boolean } = {}): Promise<void> {
     if (message.to.length === 0) return;
     const payload: StoredMail = opts.secret ? { ...message, secret: true } : message;
     const outboxId = await this.repo.insertMail(JSON.stringify(payload), trx);

@@ -3,7 +3,7 @@ import type { Kysely } from 'kysely';
 import type { CriteriaReviewRow, DB } from '@holdfast/db';
 import type { FailingCheck } from '../criteria/failing-checks.js';
 import { Database } from '../database/database.js';
-import { on, type OpenTransaction } from '../database/unit-of-work.js';
+import { on, type Tx } from '../database/unit-of-work.js';
 
 export type ReviewWithSet = CriteriaReviewRow & { criteriaSetName: string };
 export type Person = { id: string; displayName: string; initials: string };
@@ -22,7 +22,7 @@ export class ReviewsRepository {
   }
 
   /** Approved revisions that use a criteria set: what the impact check, the flag and its mail need. */
-  approvedUsing(setId: string, tx?: OpenTransaction) {
+  approvedUsing(setId: string, tx?: Tx) {
     return on(this.db, tx)
       .selectFrom('revisions as r')
       .innerJoin('sheets as s', 's.id', 'r.sheetId')
@@ -44,14 +44,14 @@ export class ReviewsRepository {
       .execute();
   }
 
-  openFor(revisionId: string, tx?: OpenTransaction): Promise<ReviewWithSet | undefined> {
+  openFor(revisionId: string, tx?: Tx): Promise<ReviewWithSet | undefined> {
     return this.withSet(on(this.db, tx))
       .where('c.revisionId', '=', revisionId)
       .where('c.clearedAt', 'is', null)
       .executeTakeFirst();
   }
 
-  clearedFor(revisionId: string, tx?: OpenTransaction): Promise<ReviewWithSet[]> {
+  clearedFor(revisionId: string, tx?: Tx): Promise<ReviewWithSet[]> {
     return this.withSet(on(this.db, tx))
       .where('c.revisionId', '=', revisionId)
       .where('c.clearedAt', 'is not', null)
@@ -64,7 +64,7 @@ export class ReviewsRepository {
    * it was first raised and now names the newest version that fails. Returns whether it is new.
    */
   async flag(
-    tx: OpenTransaction,
+    tx: Tx,
     row: {
       revisionId: string;
       sheetId: string;
@@ -104,7 +104,7 @@ export class ReviewsRepository {
   }
 
   /** Clear every open flag of the sheet's earlier revisions; returns the cleared flags. */
-  clearForSheet(tx: OpenTransaction, sheetId: string, exceptRevisionId: string) {
+  clearForSheet(tx: Tx, sheetId: string, exceptRevisionId: string) {
     return on(this.db, tx)
       .updateTable('criteriaReviews')
       .set({ clearedAt: new Date(), clearedHow: 'superseded' })
@@ -115,7 +115,7 @@ export class ReviewsRepository {
       .execute();
   }
 
-  dispose(tx: OpenTransaction, id: string, userId: string, disposition: string) {
+  dispose(tx: Tx, id: string, userId: string, disposition: string) {
     return on(this.db, tx)
       .updateTable('criteriaReviews')
       .set({ clearedAt: new Date(), clearedHow: 'disposition', clearedBy: userId, disposition })

@@ -11,7 +11,7 @@ import { effectiveRoles } from '../auth/policy.js';
 import { conflict, forbidden, notFound } from '../common/errors/api-exception.js';
 import { AppConfig } from '../config/app-config.js';
 import { failingChecks } from '../criteria/failing-checks.js';
-import { UnitOfWork, type OpenTransaction } from '../database/unit-of-work.js';
+import { UnitOfWork, type Tx } from '../database/unit-of-work.js';
 import { AuditService } from '../audit/audit.service.js';
 import { OutboxService } from '../outbox/outbox.service.js';
 import { canReadContent, ownPart } from '../revisions/revision-access.js';
@@ -39,11 +39,7 @@ export class ReviewsService {
   ) {}
 
   /** Inside the publish transaction: flag, audit and mail every approval the version fails. */
-  async flagAfterPublish(
-    trx: OpenTransaction,
-    actorId: string,
-    criteria: CriteriaSet,
-  ): Promise<number> {
+  async flagAfterPublish(trx: Tx, actorId: string, criteria: CriteriaSet): Promise<number> {
     const approved = await this.repo.approvedUsing(criteria.id, trx);
     let flagged = 0;
     for (const rev of approved) {
@@ -100,7 +96,7 @@ export class ReviewsService {
 
   /** Inside the approval transaction: a newer approval clears the sheet's open flags. */
   async clearOnApproval(
-    trx: OpenTransaction,
+    trx: Tx,
     actorId: string,
     sheetId: string,
     revisionId: string,

@@ -1,5 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import type { Insertable, Kysely, Updateable } from 'kysely';
+import type { Insertable, Updateable } from 'kysely';
 import type { DB, RevisionRow } from '@holdfast/db';
 import { Database } from '../database/database.js';
 import { on, type Tx } from '../database/unit-of-work.js';
@@ -21,11 +21,7 @@ export class RevisionsRepository {
   constructor(private readonly db: Database) {}
 
   /** The revision and its sheet; `lock` takes a row lock on the revision (inside a transaction). */
-  async find(
-    id: string,
-    tx?: Tx | Kysely<DB>,
-    lock = false,
-  ): Promise<RevisionWithSheet | undefined> {
+  async find(id: string, tx?: Tx, lock = false): Promise<RevisionWithSheet | undefined> {
     let q = on(this.db, tx)
       .selectFrom('revisions as r')
       .innerJoin('sheets as s', 's.id', 'r.sheetId')
@@ -36,7 +32,7 @@ export class RevisionsRepository {
     return q.executeTakeFirst();
   }
 
-  listForSheet(sheetId: string, tx?: Tx | Kysely<DB>): Promise<RevisionRow[]> {
+  listForSheet(sheetId: string, tx?: Tx): Promise<RevisionRow[]> {
     return on(this.db, tx)
       .selectFrom('revisions')
       .selectAll()

@@ -4,7 +4,6 @@ import { canonicalJson, type Revision, type SaveRevisionInput } from '@holdfast/
 import type { AuthUser } from '../auth/auth-user.js';
 import { conflict, forbidden, notFound } from '../common/errors/api-exception.js';
 import { type Tx, UnitOfWork } from '../database/unit-of-work.js';
-import { passTx, type LegacyTx } from '../database/tx-bridge.js';
 import { AuditService } from '../audit/audit.service.js';
 import { CriteriaService } from '../criteria/criteria.service.js';
 import { canCheck, canEdit, canReadContent, isEditableState } from './revision-access.js';
@@ -25,12 +24,7 @@ export class RevisionsService {
   ) {}
 
   /** The revision, 404 when missing, 403 when the caller may not read drafts. */
-  async load(
-    user: AuthUser,
-    id: string,
-    tx?: Tx | LegacyTx,
-    lock = false,
-  ): Promise<RevisionWithSheet> {
+  async load(user: AuthUser, id: string, tx?: Tx, lock = false): Promise<RevisionWithSheet> {
     const rev = await this.repo.find(id, tx, lock);
     if (!rev) throw notFound('Revision not found.');
     if (!canReadContent(user, rev))
@@ -75,7 +69,7 @@ export class RevisionsService {
       const rev = await this.load(user, id, tx, true);
       this.assertEditable(user, rev, input.rowVersion);
       const criteriaSetId = input.criteriaSetId ?? rev.criteriaSetId;
-      const criteria = await this.criteria.load(criteriaSetId, 'latest', passTx(tx));
+      const criteria = await this.criteria.load(criteriaSetId, 'latest', tx);
       const inputs = input.inputs as SheetInputs;
       rejectUnknownInputs(rev.sheetType, inputs);
       // A draft may still lack fields or hold blanks: it is previewed when complete, and submit

@@ -9,7 +9,6 @@ import type {
 import type { AuthUser } from '../auth/auth-user.js';
 import { badRequest, conflict, forbidden } from '../common/errors/api-exception.js';
 import { AppConfig } from '../config/app-config.js';
-import { passTx } from '../database/tx-bridge.js';
 import { type Tx, UnitOfWork } from '../database/unit-of-work.js';
 import { AuditService } from '../audit/audit.service.js';
 import { CriteriaService } from '../criteria/criteria.service.js';
@@ -74,7 +73,7 @@ export class WorkflowService {
           })),
         );
       }
-      const criteria = await this.criteria.load(rev.criteriaSetId, 'latest', passTx(tx));
+      const criteria = await this.criteria.load(rev.criteriaSetId, 'latest', tx);
       const inputs = rev.inputs as SheetInputs;
       // The frozen record keeps the inputs exactly as the core used them, beside its results.
       const evaluation = {
@@ -125,7 +124,7 @@ export class WorkflowService {
       });
       const to = await this.users.checkerEmails(rev.authorId, tx);
       await this.outbox.enqueueMail(
-        passTx(tx),
+        tx,
         submittedMail(
           this.config.settings.PUBLIC_URL,
           this.about(rev),
@@ -193,7 +192,7 @@ export class WorkflowService {
         },
         tx,
       );
-      await this.reviews.clearOnApproval(passTx(tx), user.id, rev.sheetId, id, rev.label);
+      await this.reviews.clearOnApproval(tx, user.id, rev.sheetId, id, rev.label);
       await this.audit.record(tx, {
         actorId: user.id,
         action: 'revision.approved',
@@ -210,7 +209,7 @@ export class WorkflowService {
       });
       const [to] = await this.users.activeEmails([rev.authorId], tx);
       await this.outbox.enqueueMail(
-        passTx(tx),
+        tx,
         approvedMail(
           this.config.settings.PUBLIC_URL,
           this.about(rev),
@@ -253,7 +252,7 @@ export class WorkflowService {
       });
       const [to] = await this.users.activeEmails([rev.authorId], tx);
       await this.outbox.enqueueMail(
-        passTx(tx),
+        tx,
         returnedMail(
           this.config.settings.PUBLIC_URL,
           this.about(rev),

@@ -12,7 +12,6 @@ import type {
 } from '@holdfast/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { badRequest, conflict, forbidden, notFound } from '../common/errors/api-exception.js';
-import { passTx } from '../database/tx-bridge.js';
 import { type Tx, UnitOfWork } from '../database/unit-of-work.js';
 import { AuditService } from '../audit/audit.service.js';
 import { CriteriaService } from '../criteria/criteria.service.js';
@@ -98,7 +97,7 @@ export class SheetsService {
         throw badRequest('Some fields are not valid.', [
           { path: 'criteriaSetId', message: 'no such criteria set' },
         ]);
-      const criteria = await this.criteria.load(criteriaSetId, 'latest', passTx(tx));
+      const criteria = await this.criteria.load(criteriaSetId, 'latest', tx);
       const documentNumber = await this.rows.nextDocumentNumber(position.siteId, tx);
       const sheetId = await this.rows.insert(
         {
@@ -196,7 +195,7 @@ export class SheetsService {
           },
         );
       }
-      const criteria = await this.criteria.load(sheet.criteriaSetId, 'latest', passTx(tx));
+      const criteria = await this.criteria.load(sheet.criteriaSetId, 'latest', tx);
       const inputs = withoutRetiredInputs(sheet.sheetType, latest.inputs as SheetInputs);
       const evaluation = preview(sheet.sheetType, inputs, criteria);
       const seq = latest.seq + 1;
