@@ -18,14 +18,18 @@ const zones = [
     from: ['./db', './server', './ui'],
     message: 'shared depends on calc only.',
   },
-  { target: './db', from: ['./server', './ui'], message: 'db must not import server or ui.' },
+  {
+    target: './db',
+    from: ['./calc', './shared', './server', './ui'],
+    message: 'db depends on no other workspace.',
+  },
   { target: './ui', from: ['./server', './db'], message: 'ui never imports server or db.' },
   { target: './server', from: ['./ui'], message: 'server must not import ui.' },
 ];
 const packageBans = {
   calc: ['@holdfast/shared', '@holdfast/db', '@holdfast/server', '@holdfast/ui'],
   shared: ['@holdfast/db', '@holdfast/server', '@holdfast/ui'],
-  db: ['@holdfast/server', '@holdfast/ui'],
+  db: ['@holdfast/calc', '@holdfast/shared', '@holdfast/server', '@holdfast/ui'],
   ui: ['@holdfast/server', '@holdfast/db'],
 };
 

@@ -8,10 +8,13 @@ import { dbDistDir } from './dist-dir.js';
 
 /**
  * Seed modules: every compiled `db/dist/seeds/*.js` exporting `seed(db: Kysely<DB>)`, run in
- * file-name order (timestamp prefix), so the demo users exist before the demo scenario. Each one
- * must be idempotent: `npm start` runs them on every start.
+ * file-name order (timestamp prefix). Each one must be idempotent: `npm start` runs them on every
+ * start. They need nothing but the database (the demo users); the demo scenario, which needs the
+ * server's rules, is seeded by the server afterwards (server/src/demo/).
  */
 export const seedFolder = path.join(dbDistDir, 'seeds');
+/** Where the seeds' sources are: `tsc -b` never deletes the output of a source removed since. */
+const sourceFolder = path.join(path.dirname(dbDistDir), 'seeds');
 
 interface SeedModule {
   seed: (db: Kysely<DB>) => Promise<void>;
@@ -19,7 +22,8 @@ interface SeedModule {
 
 export async function listSeeds(): Promise<string[]> {
   const files = await fs.readdir(seedFolder).catch(() => [] as string[]);
-  return files.filter((f) => f.endsWith('.js')).sort();
+  const sources = new Set(await fs.readdir(sourceFolder).catch(() => [] as string[]));
+  return files.filter((f) => f.endsWith('.js') && sources.has(`${f.slice(0, -3)}.ts`)).sort();
 }
 
 /** Demo seeds (`*_demo_*`) publish a password: they run only when the demo is asked for. */

@@ -1,10 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import pg from 'pg';
-import { createDatabase, createMigrationDatabase } from '../src/connection.js';
-import { migrateToLatest } from '../src/migrate.js';
-import { seed } from '../src/seed.js';
-import { createFreshDatabase } from './fresh-database.js';
 import { failure, provisionedDatabase, type ProvisionedDatabase } from './provisioned-database.js';
 
 /**
@@ -226,74 +222,5 @@ describe('field records in PostgreSQL, as the app role', () => {
       `select pg_get_constraintdef(oid) as def from pg_constraint where conname = 'users_role_check'`,
     );
     expect(rows[0].def).toContain('technician');
-  });
-});
-
-describe('demo field records', () => {
-  let fresh: Awaited<ReturnType<typeof createFreshDatabase>>;
-  let db: ReturnType<typeof createDatabase>;
-  beforeAll(async () => {
-    fresh = await createFreshDatabase('field_demo');
-    const plain = createMigrationDatabase(fresh.url);
-    await migrateToLatest(plain);
-    await plain.destroy();
-    db = createDatabase({ connectionString: fresh.url, max: 1 });
-    await seed(db, true);
-  }, 120000);
-  afterAll(async () => {
-    await db?.destroy();
-    await fresh?.drop();
-  });
-
-  it('hold a wear trend, an out-of-tolerance record with its reason, and an overdue interval; seeding twice adds nothing', async () => {
-    const rows = await db
-      .selectFrom('fieldRecords as f')
-      .innerJoin('brakePositions as p', 'p.id', 'f.positionId')
-      .select(['p.tag', 'f.id', 'f.status', 'f.performedAt', 'f.outOfTolerance'])
-      .orderBy('f.performedAt')
-      .execute();
-    const mh = rows.filter((r) => r.tag === 'MH-B1');
-    expect(mh.length).toBeGreaterThanOrEqual(6);
-    const span = mh.at(-1)!.performedAt.getTime() - mh[0]!.performedAt.getTime();
-    expect(span).toBeGreaterThan(90 * 86_400_000);
-    const reserve = await db
-      .selectFrom('fieldRecordMeasurements')
-      .select(['recordId', 'asFound', 'asLeft'])
-      .where('settingKey', '=', 'reserveStroke')
-      .where(
-        'recordId',
-        'in',
-        mh.map((r) => r.id),
-      )
-      .execute();
-    const series = mh.map((r) => {
-      const m = reserve.find((x) => x.recordId === r.id)!;
-      return m.asFound ?? m.asLeft!;
-    });
-    for (let i = 1; i < series.length; i++) expect(series[i]).toBeLessThan(series[i - 1]!);
-    const out = rows.filter((r) => r.outOfTolerance);
-    expect(out.map((r) => [r.tag, r.status])).toEqual([['DB-1', 'signed']]);
-    const reason = await db
-      .selectFrom('fieldRecordMeasurements')
-      .select('reason')
-      .where('recordId', '=', out[0]!.id)
-      .executeTakeFirstOrThrow();
-    expect(reason.reason).not.toBe('');
-    // Signed by the demo, so stored with the judgement they were signed with.
-    const judged = await db
-      .selectFrom('fieldRecordMeasurements')
-      .select(['recordId', 'target', 'dimension', 'asLeftVerdict'])
-      .execute();
-    expect(judged.length).toBeGreaterThan(0);
-    expect(judged.every((m) => m.target !== null && m.dimension !== null)).toBe(true);
-    const outRows = judged.filter(
-      (m) => (m.asLeftVerdict as { status: string } | null)?.status === 'out',
-    );
-    expect([...new Set(outRows.map((m) => m.recordId))]).toEqual([out[0]!.id]);
-    const tr = rows.filter((r) => r.tag === 'TR-B1');
-    expect(Date.now() - tr.at(-1)!.performedAt.getTime()).toBeGreaterThan(30 * 86_400_000);
-    await seed(db, true);
-    const again = await db.selectFrom('fieldRecords').select('id').execute();
-    expect(again).toHaveLength(rows.length);
   });
 });

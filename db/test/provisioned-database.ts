@@ -2,6 +2,7 @@ import pg from 'pg';
 import { createDatabase, createMigrationDatabase } from '../src/connection.js';
 import { migrateToLatest } from '../src/migrate.js';
 import { seed } from '../src/seed.js';
+import { insertApprovedSheet } from './approved-sheet.js';
 import { createFreshDatabase } from './fresh-database.js';
 // @ts-expect-error plain ESM helper without type declarations
 import * as roles from '../../scripts/lib/db-roles.mjs';
@@ -18,7 +19,7 @@ export interface ProvisionedDatabase {
 
 /**
  * A fresh database provisioned exactly as `npm start` does it (scripts/lib/db-roles.mjs),
- * migrated and seeded as the owner role, with a client signed in as the app role. DATABASE_URL
+ * migrated and seeded as the owner role (plus one approved sheet, approved-sheet.ts), with a client signed in as the app role. DATABASE_URL
  * is the cluster's superuser, whose password is the secret the role passwords derive from.
  */
 export async function provisionedDatabase(label: string): Promise<ProvisionedDatabase> {
@@ -43,6 +44,7 @@ export async function provisionedDatabase(label: string): Promise<ProvisionedDat
   await plain.destroy();
   const owned = createDatabase({ connectionString: ownerUrl, max: 1 });
   await seed(owned);
+  await insertApprovedSheet(owned);
   await owned.destroy();
   const app = new pg.Client({ connectionString: appUrl });
   await app.connect();

@@ -4,19 +4,23 @@ import { run } from './run.mjs';
 import { step, fail } from './log.mjs';
 
 /**
- * Migrate, install the job queues and seed, signed in as the owner role (`cluster.url(db,
+ * Migrate, install the job queues and seed (db's seeds, then the server's demo scenario, each
+ * idempotent and skipped when HOLDFAST_DEMO says no demo), signed in as the owner role (`cluster.url(db,
  * 'owner')`); the server itself then runs as the app role (see db-roles.mjs).
  */
 export async function migrateAndSeed(projectDir, databaseUrl) {
   const cli = path.join(projectDir, 'db', 'dist', 'src', 'cli.js');
   const queues = path.join(projectDir, 'server', 'dist', 'outbox', 'queue-install.js');
+  const demo = path.join(projectDir, 'server', 'dist', 'demo', 'seed-demo.cli.js');
   const env = { ...process.env, DATABASE_URL: databaseUrl };
   try {
     step('migrating the database…');
     await run('node', [cli, 'migrate'], { cwd: projectDir, env });
     await run('node', [queues], { cwd: projectDir, env });
-    step('seeding the demo scenario…');
+    step('seeding the demo users and scenario…');
     await run('node', [cli, 'seed'], { cwd: projectDir, env });
+    // The scenario is made through the server's services (server/src/demo/), after the users.
+    await run('node', [demo], { cwd: projectDir, env });
   } catch (e) {
     fail(`database set-up failed: ${e.message}`);
   }

@@ -1,7 +1,6 @@
+import { sql } from 'kysely';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Kysely } from 'kysely';
-import type { DB } from '@holdfast/db';
-import { seed as seedDemoPlant } from '../../db/dist/seeds/20261202100000_demo_plant.js';
+import { seedDemoScenario } from '../src/demo/seed-demo.js';
 import { DemoAttachments } from '../src/attachments/demo-attachments.js';
 import { CriteriaService } from '../src/criteria/criteria.service.js';
 import { evaluateSheet } from '../src/calc/calc-engine.js';
@@ -13,8 +12,8 @@ describe('demo plant seed', () => {
   beforeAll(async () => {
     ctx = await createSheetsContext();
     await ctx.resetAll();
-    await seedDemoPlant(ctx.db as unknown as Kysely<DB>);
-  });
+    expect(await seedDemoScenario(ctx.app)).toBe(true);
+  }, 120_000);
   afterAll(() => ctx?.closeAll());
 
   it('covers every state and sheet type with at least eight sheets, and runs only once', async () => {
@@ -34,11 +33,29 @@ describe('demo plant seed', () => {
     expect(new Set(revs.map((r) => r.sheetType))).toEqual(
       new Set(['hoist-shoe-brake', 'travel-shoe-brake', 'caliper-disc-brake', 'disc-spring-stack']),
     );
-    await seedDemoPlant(ctx.db as unknown as Kysely<DB>);
+    const before = await snapshot();
+    expect(await seedDemoScenario(ctx.app)).toBe(false);
     expect((await ctx.request('GET', '/api/sheets?pageSize=1', { as: 'viewer' })).body.total).toBe(
       list.body.total,
     );
+    expect(await snapshot()).toEqual(before);
   });
+
+  /** Every public table's row count and newest change: what a second run must leave alone. */
+  async function snapshot() {
+    const { rows } = await sql<{ tablename: string }>`
+      select tablename from pg_tables where schemaname = 'public' order by tablename`.execute(
+      ctx.db,
+    );
+    const out: Record<string, string> = {};
+    for (const { tablename } of rows) {
+      const r = await sql<{ n: string; h: string | null }>`
+        select count(*)::text as n, md5(string_agg(t::text, '|' order by t::text)) as h
+        from ${sql.table(tablename)} t`.execute(ctx.db);
+      out[tablename] = `${r.rows[0]!.n}:${r.rows[0]!.h ?? ''}`;
+    }
+    return out;
+  }
 
   it('stores evaluations the calc core gives for the stored inputs, with matching hashes', async () => {
     const rows = await ctx.db

@@ -3,7 +3,7 @@ import { Injectable, Logger, type OnApplicationBootstrap } from '@nestjs/common'
 import { ObjectStorage } from '../storage/object-storage.js';
 import { AttachmentsRepository } from './attachments.repository.js';
 
-/** Demo documents that carry a generated data sheet (see db/seeds/*_demo_plant.ts). */
+/** Demo documents that carry a generated data sheet (see server/src/demo/demo-plant.ts). */
 const DEMO_DOCUMENTS = ['HF-NRW-0005', 'HF-NRW-0006'];
 
 /** An invented thruster data sheet as plain text (no real maker or product). */

@@ -1,4 +1,5 @@
 import { createHash, randomBytes } from 'node:crypto';
+import { base32nopad } from '@scure/base';
 import { canonicalJson } from '@holdfast/shared';
 
 /** SHA-256 (hex) over the canonical JSON of a revision's inputs and its evaluation. */
@@ -6,23 +7,9 @@ export function contentHash(inputs: unknown, evaluation: unknown): string {
   return createHash('sha256').update(canonicalJson({ inputs, evaluation })).digest('hex');
 }
 
-const BASE32 = 'ABCDEFGHIJKLMNOPQRSTUVWXYZ234567';
-
-/** RFC 4648 base32 without padding. */
+/** RFC 4648 base32 without padding (@scure/base: audited, no dependencies). */
 export function base32(bytes: Uint8Array): string {
-  let bits = 0;
-  let value = 0;
-  let out = '';
-  for (const byte of bytes) {
-    value = (value << 8) | byte;
-    bits += 8;
-    while (bits >= 5) {
-      out += BASE32[(value >>> (bits - 5)) & 31];
-      bits -= 5;
-    }
-  }
-  if (bits > 0) out += BASE32[(value << (5 - bits)) & 31];
-  return out;
+  return base32nopad.encode(bytes);
 }
 
 /**

@@ -1,4 +1,4 @@
-import { sheetType } from './calc-access.js';
+import { sheetTypeDefinition } from '../calc/calc-engine.js';
 
 /**
  * The invented demo plant. No real company, place, person or product: "Northgate Rolling Works"
@@ -108,8 +108,8 @@ const CORE_1_0_CALIPER: DemoRevision['set'] = [
  * The lever, pin and base-bolt inputs of the shoe sheets (the first issues did not check them),
  * read from the sheet definition so the list cannot fall behind it.
  */
-const LEVER_FIELDS = (sheetType('hoist-shoe-brake')?.fields ?? [])
-  .filter((f) => f.section === 'levers')
+const LEVER_FIELDS = sheetTypeDefinition('hoist-shoe-brake')
+  .fields.filter((f) => f.section === 'levers')
   .map((f) => f.key);
 /** What the 1.1.0 re-checks enter: the calc demo values of the fields 1.1.0 asks for apart. */
 const RECHECK_1_1 = [
