@@ -110,9 +110,7 @@ export class CommentsService {
     const row = await this.units.run(async (tx) => {
       const c = await this.repo.find(id, tx, true);
       if (!c) throw notFound('Comment not found.');
-      // RevisionsService.load still takes the Kysely transaction a Tx stands for; it moves to
-      // Tx with the revisions service (issue 14), and this cast goes with it.
-      const rev = await this.revisions.load(user, c.revisionId, tx as never);
+      const rev = await this.revisions.load(user, c.revisionId, tx);
       const allowed =
         c.authorId === user.id ||
         rev.authorId === user.id ||
