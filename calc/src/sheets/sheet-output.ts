@@ -1,4 +1,10 @@
-import type { CriteriaSet, Dimension, ResultValue, SheetEvaluation } from '../core/types.js';
+import type {
+  CriteriaSet,
+  DerivationStep,
+  Dimension,
+  ResultValue,
+  SheetEvaluation,
+} from '../core/types.js';
 import type { Derivation } from '../core/step.js';
 import { CORE_VERSION } from '../version.js';
 import { DIMENSIONS } from '../units/unit-table.js';
@@ -15,20 +21,44 @@ export function newEvaluation(
   criteria: CriteriaSet,
   d: Derivation,
 ): SheetEvaluation {
-  return {
+  return withDerivation(d, {
     sheetType,
     coreVersion: CORE_VERSION,
     criteriaSetId: criteria.id,
     criteriaSetVersion: criteria.version,
     results: [],
     checks: [],
-    derivation: d.steps,
+    derivation: [],
     charts: [],
     fieldSettings: [],
     tables: [],
     warnings: [...SAFETY_CAUTIONS],
     pass: true,
-  };
+  });
+}
+
+/**
+ * Makes `out.derivation` the derivation's printed steps, built when first read (the derivation
+ * view, the printed sheet, JSON when a revision is saved) rather than on every evaluation: live
+ * results and sweeps read values and checks only. An own enumerable accessor in the place the
+ * literal gave the key, so JSON, spreading and structured clone see the steps where they were;
+ * assigning to it replaces it with a plain value.
+ */
+export function withDerivation(d: Derivation, out: SheetEvaluation): SheetEvaluation {
+  Object.defineProperty(out, 'derivation', {
+    enumerable: true,
+    configurable: true,
+    get: () => d.steps,
+    set(this: SheetEvaluation, steps: DerivationStep[]) {
+      Object.defineProperty(this, 'derivation', {
+        value: steps,
+        writable: true,
+        enumerable: true,
+        configurable: true,
+      });
+    },
+  });
+  return out;
 }
 
 /** Publishes recorded derivation steps as named results (key = step id unless renamed). */
@@ -40,16 +70,18 @@ export function publishSteps(
   for (const entry of ids) {
     const id = typeof entry === 'string' ? entry : entry[0];
     const key = typeof entry === 'string' ? entry : entry[1];
-    const s = d.find(id);
+    // The record, not the printed step: publishing a result must not build the derivation.
+    const s = d.record(id);
     if (!s) continue;
+    const dimension = s.formula.spec.dimension;
     out.results.push({
       key,
       section: s.section,
       label: s.label,
       symbol: s.symbol,
       value: s.value,
-      unit: s.unit,
-      dimension: s.dimension,
+      unit: DIMENSIONS[dimension].siUnit,
+      dimension,
     });
   }
 }
