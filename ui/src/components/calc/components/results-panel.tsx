@@ -183,7 +183,7 @@ export const ResultsPanel = memo(function ResultsPanel(props: ResultsPanelProps)
             </Tabs.Panel>
             <Tabs.Panel value="steps">
               <DerivationList
-                steps={shown.derivation}
+                evaluation={shown}
                 sections={sections}
                 unitSystem={unitSystem}
                 renderStepAside={props.renderStepAside}
