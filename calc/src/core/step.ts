@@ -3,9 +3,9 @@ import type { Dimension, DerivationStep } from './types.js';
 import { math } from '../units/math.js';
 import type { Q } from '../units/quantities.js';
 import { formatInUnit, pickPrintUnit, printUnitsOf, type PrintUnits } from '../units/format.js';
-import { DIMENSIONS } from '../units/unit-table.js';
 import { renderPieces, symbolNames, type TextPiece } from './formula-text.js';
 import { compileToClosure } from './closure-compiler.js';
+import { printedStep, StepRecord } from './step-record.js';
 
 /** A symbol of a formula: how it prints and what dimension its values have. */
 export interface SymbolSpec {
@@ -168,50 +168,36 @@ export interface StepOptions {
   reference?: string;
 }
 
-/** What a step needs to write its substituted line when it is first read. */
-interface PendingText {
-  formula: Formula<string, Dimension>;
-  values: Record<string, number>;
-  symbol: string | undefined;
-  text: string | undefined;
-}
-
-// Symbol-keyed, so JSON.stringify and structured clone leave it out.
-const PENDING = Symbol('pending substitution');
-
 /**
- * The substituted line is written when first read (the sheet view, the printed sheet, JSON), not
- * when the step is recorded: a sheet records ~120 steps per keystroke and writing every line was
- * most of an evaluation's time, while the editor shows a few at once. An own enumerable accessor,
- * so spreading, JSON.stringify and structured clone all still see the text; one shared descriptor,
- * so every step has the same shape. `values` is the caller's fresh literal, never changed after.
- */
-const SUBSTITUTED: PropertyDescriptor = {
-  enumerable: true,
-  configurable: true,
-  get(this: { [PENDING]: PendingText }): string {
-    const p = this[PENDING];
-    if (p.text !== undefined) return p.text;
-    const text = p.formula.substitute(p.values, p.symbol);
-    // A caller that deep-freezes an evaluation freezes this record too: then write it each time.
-    if (!Object.isFrozen(p)) p.text = text;
-    return text;
-  },
-};
-
-/**
- * Records derivation steps in order. `step()` computes a formula, checks the result is finite,
- * records the formula text, the substitution, the value and its SI unit, and returns the value.
+ * Records derivation steps in order. `step()` computes a formula, checks the result is finite and
+ * returns the value; the printed step (formula text, substitution, SI unit) is built from the
+ * record when `steps` or `find()` is first read, so an evaluation whose derivation nobody reads
+ * (live results, sweeps) never builds it.
  */
 export class Derivation {
-  readonly steps: DerivationStep[] = [];
-  /**
-   * The same steps by id, filled as they are recorded: it rejects duplicate ids, and lets
-   * publishSteps and value() find a step without scanning or rebuilding an index per call.
-   */
-  private readonly byId = new Map<string, DerivationStep>();
+  private readonly records: StepRecord[] = [];
+  /** Record index by id: rejects duplicate ids; value() and record() find a step without a scan. */
+  private readonly byId = new Map<string, number>();
+  /** Printed steps built so far, by record index. */
+  private readonly printed: (DerivationStep | undefined)[] = [];
+  /** The list `steps` returned, kept up to date by step() once it exists. */
+  private list: DerivationStep[] | undefined;
 
   constructor(public section = 'general') {}
+
+  /** Every recorded step, printed, in order: one array per derivation, extended by later steps. */
+  get steps(): DerivationStep[] {
+    if (this.list) return this.list;
+    const list: DerivationStep[] = [];
+    for (let k = 0; k < this.records.length; k++) list.push(this.printedAt(k));
+    this.list = list;
+    return list;
+  }
+
+  private printedAt(k: number): DerivationStep {
+    // k < records.length at every call site.
+    return (this.printed[k] ??= printedStep(this.records[k]!));
+  }
 
   // `options` has no `= {}` default: most steps pass none, and a sheet records ~100 steps per
   // evaluation, so an empty object per step is avoidable garbage.
@@ -220,46 +206,46 @@ export class Derivation {
     values: Record<S, number>,
     options?: StepOptions,
   ): Q<D> {
-    const spec = formula.spec;
-    const id = options?.id ?? spec.id;
+    const id = options?.id ?? formula.spec.id;
     const value = formula.evaluate(values);
     if (!Number.isFinite(value)) throw new CalcDomainError(id, values);
     if (this.byId.has(id)) throw new Error(`derivation: duplicate step id ${id}`);
-    const symbol = options?.symbol;
-    const names = options?.names as Partial<Record<S, string>> | undefined;
-    const formulaText = names
-      ? formula.textWith(symbol ?? spec.symbol, names)
-      : symbol
-        ? symbol + formula.text.slice(spec.symbol.length)
-        : formula.text;
-    const step = {
-      id,
-      section: options?.section ?? this.section,
-      label: options?.label ?? spec.label,
-      symbol: symbol ?? spec.symbol,
-      formula: formulaText,
-      value,
-      unit: DIMENSIONS[spec.dimension].siUnit,
-      dimension: spec.dimension,
-      reference: options?.reference ?? spec.reference,
-      [PENDING]: { formula, values, symbol, text: undefined } as PendingText,
-    } as unknown as DerivationStep;
-    Object.defineProperty(step, 'substituted', SUBSTITUTED);
-    this.steps.push(step);
-    this.byId.set(id, step);
+    const k = this.records.length;
+    this.records.push(
+      new StepRecord(
+        id,
+        options?.section ?? this.section,
+        formula as unknown as Formula<string, Dimension>,
+        values,
+        options,
+        value,
+      ),
+    );
+    this.byId.set(id, k);
+    if (this.list) this.list.push(this.printedAt(k));
     return value;
   }
 
-  /** The recorded step with this id, if any. */
+  /** The recorded step with this id, printed, if any. */
   find(id: string): DerivationStep | undefined {
-    return this.byId.get(id);
+    const k = this.byId.get(id);
+    return k === undefined ? undefined : this.printedAt(k);
+  }
+
+  /**
+   * What a sheet needs to publish a step as a result (id, section, label, symbol, value, formula's
+   * dimension), without building the printed step.
+   */
+  record(id: string): StepRecord | undefined {
+    const k = this.byId.get(id);
+    return k === undefined ? undefined : this.records[k];
   }
 
   /** Looks up a recorded step value by id (throws if absent: a programming error). */
   value(id: string): number {
-    const s = this.byId.get(id);
-    if (!s) throw new Error(`derivation: no step ${id}`);
-    return s.value;
+    const k = this.byId.get(id);
+    if (k === undefined) throw new Error(`derivation: no step ${id}`);
+    return this.records[k]!.value; // byId holds indexes of records
   }
 }
 

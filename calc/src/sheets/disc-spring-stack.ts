@@ -6,10 +6,10 @@ import type {
 } from '../core/types.js';
 import { CalcInputError, FieldErrorCollector, isCalcInputError } from '../core/errors.js';
 import { Derivation } from '../core/step.js';
+import { newEvaluation } from './sheet-output.js';
 import { deriveStackSet } from '../disc-springs/stack-derivation.js';
 import { findStandardDisc } from '../disc-springs/standard-sizes.js';
 import type { DiscStack } from '../disc-springs/stack.js';
-import { CORE_VERSION } from '../version.js';
 import {
   DISC_STACK_FIELDS,
   DISC_STACK_SECTIONS,
@@ -92,20 +92,7 @@ export function evaluateDiscSpringStack(
   if (keys.length === 0) errors.add('aEnabled', 'include at least one stack');
   errors.throwIfAny();
   const d = new Derivation('stackA');
-  const out: SheetEvaluation = {
-    sheetType: 'disc-spring-stack',
-    coreVersion: CORE_VERSION,
-    criteriaSetId: criteria.id,
-    criteriaSetVersion: criteria.version,
-    results: [],
-    checks: [],
-    derivation: d.steps,
-    charts: [],
-    fieldSettings: [],
-    tables: [],
-    warnings: [...CAUTIONS],
-    pass: true,
-  };
+  const out = newEvaluation('disc-spring-stack', criteria, d, CAUTIONS);
   const computed = keys.map((k) => {
     const stack = readStack(v, k);
     d.section = sectionOf(k);

@@ -1,4 +1,10 @@
-import type { CriteriaSet, Dimension, ResultValue, SheetEvaluation } from '../core/types.js';
+import type {
+  CriteriaSet,
+  DerivationStep,
+  Dimension,
+  ResultValue,
+  SheetEvaluation,
+} from '../core/types.js';
 import type { Derivation } from '../core/step.js';
 import { CORE_VERSION } from '../version.js';
 import { DIMENSIONS } from '../units/unit-table.js';
@@ -9,26 +15,61 @@ export const SAFETY_CAUTIONS = [
   'Never work under a suspended load: land the load or lock the drum before brake work, isolate the drive and the thruster supply, adjust one brake at a time, and release stored spring energy with the provided means.',
 ];
 
-/** An empty evaluation bound to a derivation (its steps are the sheet's derivation). */
+// Symbol-keyed, so JSON.stringify and structured clone leave it out. (A WeakMap from evaluation
+// to derivation cost more in garbage collection than it saved.)
+const DERIVATION_OF = Symbol('derivation');
+
+/**
+ * One descriptor for every evaluation: an accessor pair made per object would give each
+ * evaluation a hidden class of its own in V8, and every sheet function that touches `out` would
+ * then run on megamorphic property access.
+ */
+const DERIVATION: PropertyDescriptor = {
+  enumerable: true,
+  configurable: true,
+  get(this: { [DERIVATION_OF]: Derivation }): DerivationStep[] {
+    return this[DERIVATION_OF].steps;
+  },
+  set(this: SheetEvaluation, steps: DerivationStep[]) {
+    Object.defineProperty(this, 'derivation', {
+      value: steps,
+      writable: true,
+      enumerable: true,
+      configurable: true,
+    });
+  },
+};
+
+/**
+ * An empty evaluation bound to a derivation: `derivation` is its printed steps, built when first
+ * read (the derivation view, the printed sheet, JSON when a revision is saved) rather than on
+ * every evaluation, as live results and sweeps read values and checks only. An own enumerable
+ * accessor in the same place as before, so JSON, spreading and structured clone see the steps
+ * where they were; assigning to it replaces it with a plain value. It is added as a new property
+ * (not by redefining a literal's key, which puts the object in V8's slow dictionary mode).
+ */
 export function newEvaluation(
   sheetType: string,
   criteria: CriteriaSet,
   d: Derivation,
+  cautions: readonly string[] = SAFETY_CAUTIONS,
 ): SheetEvaluation {
-  return {
+  const out = {
     sheetType,
     coreVersion: CORE_VERSION,
     criteriaSetId: criteria.id,
     criteriaSetVersion: criteria.version,
     results: [],
     checks: [],
-    derivation: d.steps,
-    charts: [],
-    fieldSettings: [],
-    tables: [],
-    warnings: [...SAFETY_CAUTIONS],
-    pass: true,
-  };
+    [DERIVATION_OF]: d,
+  } as unknown as SheetEvaluation;
+  Object.defineProperty(out, 'derivation', DERIVATION);
+  out.charts = [];
+  out.fieldSettings = [];
+  out.tables = [];
+  out.warnings = [...cautions];
+  out.pass = true;
+  return out;
 }
 
 /** Publishes recorded derivation steps as named results (key = step id unless renamed). */
@@ -40,16 +81,18 @@ export function publishSteps(
   for (const entry of ids) {
     const id = typeof entry === 'string' ? entry : entry[0];
     const key = typeof entry === 'string' ? entry : entry[1];
-    const s = d.find(id);
+    // The record, not the printed step: publishing a result must not build the derivation.
+    const s = d.record(id);
     if (!s) continue;
+    const dimension = s.formula.spec.dimension;
     out.results.push({
       key,
       section: s.section,
       label: s.label,
       symbol: s.symbol,
       value: s.value,
-      unit: s.unit,
-      dimension: s.dimension,
+      unit: DIMENSIONS[dimension].siUnit,
+      dimension,
     });
   }
 }

@@ -76,7 +76,7 @@ export function evaluateShoeDiscSprings(
     const short = at(theta - tol);
     const past = at(theta + tol);
     const title = TITLES[p];
-    const preload = d.find(`${p}-preload`);
+    const preload = d.record(`${p}-preload`);
     if (preload) {
       out.results.push({
         key: `${p}Preload`,
@@ -84,7 +84,7 @@ export function evaluateShoeDiscSprings(
         label: `${title}: preload after back-off`,
         symbol: 'F_V',
         value: preload.value,
-        unit: preload.unit,
+        unit: 'N',
         dimension: 'force',
       });
     }

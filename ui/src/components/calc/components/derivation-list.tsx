@@ -7,7 +7,11 @@ import { sectionOrder } from './results-table';
 import { presentSI, type UnitSystem } from '../utils/units';
 
 export interface DerivationListProps {
-  steps: DerivationStep[];
+  /**
+   * The evaluation, not its steps: the core builds the printed steps when `derivation` is first
+   * read, so reading it here, only while this tab is open, keeps it out of every keystroke.
+   */
+  evaluation: { readonly derivation: DerivationStep[] };
   sections: SectionDefinition[];
   unitSystem: UnitSystem;
   renderStepAside?: (id: string) => ReactNode;
@@ -15,11 +19,12 @@ export interface DerivationListProps {
 
 /** Every derivation step by section; each opens to its formula, substitution and reference. */
 export function DerivationList({
-  steps,
+  evaluation,
   sections,
   unitSystem,
   renderStepAside,
 }: DerivationListProps) {
+  const steps = evaluation.derivation;
   const order = sectionOrder(
     sections,
     steps.map((s) => s.section),

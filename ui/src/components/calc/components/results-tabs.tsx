@@ -92,7 +92,7 @@ function ShownDerivation(props: {
   unitSystem: UnitSystem;
   renderStepAside?: (id: string) => ReactNode;
 }) {
-  return <DerivationList steps={useShown().derivation} {...props} />;
+  return <DerivationList evaluation={useShown()} {...props} />;
 }
 
 function ShownCharts({ unitSystem }: { unitSystem: UnitSystem }) {
