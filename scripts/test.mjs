@@ -71,6 +71,7 @@ await check('type tests (shared/test-types)', 'npx', [
 await check('UI type check', 'npx', ['tsc', '-p', 'ui', '--noEmit']);
 await check('verification type check', 'npx', ['tsc', '-p', 'verification', '--noEmit']);
 await check('server test type check', 'npx', ['tsc', '-p', 'server/test', '--noEmit']);
+await check('print test type check', 'npx', ['tsc', '-p', 'print/tsconfig.test.json']);
 await check('lint (eslint)', 'npx', ['eslint', '.', '--max-warnings=0']);
 await check('formatting (prettier --check)', 'npx', [
   'prettier',

@@ -6,7 +6,6 @@ import { FieldRecordPrintService } from './field-record/field-record-print.servi
 import { RevisionsModule } from '../revisions/revisions.module.js';
 import { ReviewsModule } from '../reviews/reviews.module.js';
 import { SheetsRepository } from '../sheets/sheets.repository.js';
-import { SheetsService } from '../sheets/sheets.service.js';
 import { PrintController } from './print.controller.js';
 import { PrintService } from './print.service.js';
 import { RevisionPrintable } from './revision-printable.js';
@@ -14,8 +13,8 @@ import { SafetyFileController } from './safety-file.controller.js';
 import { SafetyFileService } from './safety-file.service.js';
 
 /**
- * The printed sheet and field card. SheetsModule does not export its service, so this module
- * provides its own (stateless) SheetsService over the same repositories.
+ * The printed sheet, field card and field record: loads what is printed through the services and
+ * repositories (read rules, caching, limits) and renders it with @holdfast/print.
  */
 @Module({
   imports: [CriteriaModule, RevisionsModule, ReviewsModule, FieldRecordsModule],
@@ -24,7 +23,6 @@ import { SafetyFileService } from './safety-file.service.js';
     PrintService,
     RevisionPrintable,
     SafetyFileService,
-    SheetsService,
     SheetsRepository,
     FieldRecordPrintService,
   ],
