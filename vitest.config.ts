@@ -6,6 +6,7 @@ export default defineConfig({
     projects: [
       'calc',
       'shared',
+      'print',
       'db',
       'server',
       'ui/vitest.config.ts',

@@ -101,8 +101,8 @@ for (const sheet of calc.sheetTypes) {
   ]);
 }
 
-const render = await load('server/dist/print/render.js');
-const { hoistRevisionVariants } = await load('server/dist/print/testing/real-sheet.js');
+const render = await load('print/dist/render.js');
+const { hoistRevisionVariants } = await load('print/dist/testing/real-sheet.js');
 await render.warmUpPdfRenderer();
 // A different revision each time (load and spring force vary), so every render shapes new numbers.
 const sheets = hoistRevisionVariants(12);

@@ -61,6 +61,7 @@ const staticChecks = [
   ['UI type check', ['tsc', '-p', 'ui', '--noEmit']],
   ['verification type check', ['tsc', '-p', 'verification', '--noEmit']],
   ['server test type check', ['tsc', '-p', 'server/test', '--noEmit']],
+  ['print test type check', ['tsc', '-p', 'print/tsconfig.test.json']],
   ['lint (eslint)', ['eslint', '.', '--max-warnings=0']],
   ['formatting (prettier --check)', ['prettier', '--check', '.', '--log-level=warn']],
 ];

@@ -14,7 +14,7 @@ function newestMtime(dir) {
   return newest;
 }
 
-/** Compile calc → shared → db → server (incremental) and bundle the UI when its sources changed. */
+/** Compile calc → shared → print → db → server (incremental) and bundle the UI when its sources changed. */
 export async function buildAll(projectDir) {
   step('compiling TypeScript (tsc -b)…');
   try {

@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
 import { fieldCheckKeys } from '@holdfast/shared';
-import { ensurePoppler, inspectPdf } from '../src/print/testing/poppler.js';
+import { ensurePoppler, inspectPdf } from '@holdfast/print/testing';
 import { approve, createSheet, sheetsSuite, submit } from './sheets-fixture.js';
 
 // Words of a drum brake that have no place where a caliper's pads and release unit are meant.

@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { sql } from 'kysely';
 import { describe, expect, it } from 'vitest';
 import { fieldCheckKeys } from '@holdfast/shared';
-import { ensurePoppler, inspectPdf } from '../src/print/testing/poppler.js';
+import { ensurePoppler, inspectPdf } from '@holdfast/print/testing';
 import { approve, createSheet, sheetsSuite, submit } from './sheets-fixture.js';
 
 const MM = 1e-3;

@@ -3,7 +3,7 @@ import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { fieldCheckKeys } from '@holdfast/shared';
 import { InspectionScheduleService } from '../src/field-records/inspection-schedule.service.js';
 import { Database } from '../src/database/database.js';
-import { ensurePoppler, inspectPdf } from '../src/print/testing/poppler.js';
+import { ensurePoppler, inspectPdf } from '@holdfast/print/testing';
 import {
   approve,
   createSheet,

@@ -8,7 +8,7 @@ import {
   type Register,
   type SheetsContext,
 } from './sheets-fixture.js';
-import { ensurePoppler, inspectPdf } from '../src/print/testing/poppler.js';
+import { ensurePoppler, inspectPdf } from '@holdfast/print/testing';
 
 type Quantity = { value: number; unit: string };
 

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import type { CriterionValue } from '@holdfast/calc';
-import { ensurePoppler, inspectPdf } from '../src/print/testing/poppler.js';
+import { ensurePoppler, inspectPdf } from '@holdfast/print/testing';
 import { stricterValues } from './criteria-fixture.js';
 import {
   approve,

@@ -10,7 +10,7 @@ import { demoInputs, sheetTypes } from './registry.js';
 // the field card's groups are declared. This test reads the other workspaces' sources (tests and
 // test fixtures aside, which may spell out inputs on purpose) and fails where one is declared again.
 const repo = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../..');
-const ROOTS = ['shared/src', 'server/src', 'ui/src', 'db/src', 'db/seeds'];
+const ROOTS = ['shared/src', 'print/src', 'server/src', 'ui/src', 'db/src', 'db/seeds'];
 const isFixture = (p: string) => /\.test\.tsx?$|\/testing[/-]|\/e2e\/|\.bench\.ts$/.test(p);
 
 function sources(): { file: string; text: string }[] {
@@ -31,7 +31,7 @@ describe('sheet definitions are the single source', () => {
 
   it('reads the sources it guards', () => {
     expect(files.some((f) => f.file === 'server/src/calc/calc-engine.ts')).toBe(true);
-    expect(files.some((f) => f.file === 'server/src/print/field-card-groups.ts')).toBe(true);
+    expect(files.some((f) => f.file === 'print/src/field-card-groups.ts')).toBe(true);
     expect(fieldKeys.length).toBeGreaterThan(100);
   });
 
@@ -66,7 +66,7 @@ describe('sheet definitions are the single source', () => {
   });
 
   it('the field card groups by declared placement, never by label text', () => {
-    const card = files.find((f) => f.file === 'server/src/print/field-card-groups.ts')!.text;
+    const card = files.find((f) => f.file === 'print/src/field-card-groups.ts')!.text;
     expect(card).toMatch(/fieldCard/);
     expect(card).not.toMatch(/\/[^/\n]+\/[gimsuy]*\.test\(/);
   });

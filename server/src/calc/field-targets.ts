@@ -1,6 +1,7 @@
 import {
   evaluateTolerance,
   getSheetType,
+  rotorOf,
   settingTolerance,
   type Dimension,
   type FieldSetting,
@@ -13,7 +14,6 @@ import type {
   FieldTarget,
 } from '@holdfast/shared';
 import { fieldCheckKeys, fieldCheckKeysWithValue } from '@holdfast/shared';
-import { rotorOf } from './brake-rotor.js';
 
 const DRUM_CHECK_LABELS: Record<FieldCheckKey, string> = {
   'no-drag-shoe-a': 'No drag on shoe A when released',

@@ -5,9 +5,7 @@ import { FieldRecordPrintController } from './field-record/field-record-print.co
 import { FieldRecordPrintService } from './field-record/field-record-print.service.js';
 import { RevisionsModule } from '../revisions/revisions.module.js';
 import { ReviewsModule } from '../reviews/reviews.module.js';
-import { SheetRowsRepository } from '../sheets/sheet-rows.repository.js';
 import { SheetsRepository } from '../sheets/sheets.repository.js';
-import { SheetsService } from '../sheets/sheets.service.js';
 import { PrintController } from './print.controller.js';
 import { PrintService } from './print.service.js';
 import { RevisionPrintable } from './revision-printable.js';
@@ -15,8 +13,8 @@ import { SafetyFileController } from './safety-file.controller.js';
 import { SafetyFileService } from './safety-file.service.js';
 
 /**
- * The printed sheet and field card. SheetsModule does not export its service, so this module
- * provides its own (stateless) SheetsService over the same repositories.
+ * The printed sheet, field card and field record: loads what is printed through the services and
+ * repositories (read rules, caching, limits) and renders it with @holdfast/print.
  */
 @Module({
   imports: [CriteriaModule, RevisionsModule, ReviewsModule, FieldRecordsModule],
@@ -25,9 +23,7 @@ import { SafetyFileService } from './safety-file.service.js';
     PrintService,
     RevisionPrintable,
     SafetyFileService,
-    SheetsService,
     SheetsRepository,
-    SheetRowsRepository,
     FieldRecordPrintService,
   ],
 })

@@ -6,17 +6,16 @@ import { ApiException } from '../common/errors/api-exception.js';
 import { CriteriaService } from '../criteria/criteria.service.js';
 import { ReviewsRepository } from '../reviews/reviews.repository.js';
 import type { CriterionConfirmation } from '@holdfast/shared';
-import type { PrintCriteriaReview, PrintCriterion } from './printable-sheet.js';
 import { RevisionsService } from '../revisions/revisions.service.js';
 import { PdfCache } from './pdf-cache.js';
 import { RevisionPrintable } from './revision-printable.js';
 import { loadPrintSettings } from './print-settings.js';
-import type { PrintableSheet } from './printable-sheet.js';
-import { RenderPool, RenderQueueFullError, type PrintKind } from './render-pool.js';
+import type { PrintableSheet, PrintCriteriaReview, PrintCriterion } from '@holdfast/print';
+import { RenderPool, RenderQueueFullError, type PrintKind } from '@holdfast/print/pool';
 import { PerUserLimit } from './user-limit.js';
 import { UsersRepository } from '../users/users.repository.js';
 
-export type { PrintKind } from './render-pool.js';
+export type { PrintKind } from '@holdfast/print/pool';
 
 export interface PrintedFile {
   bytes: Buffer;
@@ -96,7 +95,7 @@ export class PrintService implements OnApplicationBootstrap, OnModuleDestroy {
     kind: PrintKind,
     query: PrintQuery,
   ): Promise<PrintedFile> {
-    const revision = await this.revisions.get(user, id);
+    const revision = await this.revisions.load(user, id);
     const frozen = revision.state === 'approved' || revision.state === 'superseded';
     const criteriaReviews = frozen ? await this.criteriaReviews(id, revision.state) : [];
     const confirmations = await this.criteria.confirmations(

@@ -1,40 +1,68 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
-import { getSheetType } from '@holdfast/calc';
-import type { PrintQuery, Revision } from '@holdfast/shared';
+import type { PrintQuery } from '@holdfast/shared';
+import { buildPrintableSheet, type PrintableSheet } from '@holdfast/print';
+import { notFound } from '../common/errors/api-exception.js';
 import { AppConfig } from '../config/app-config.js';
 import { CriteriaService } from '../criteria/criteria.service.js';
-import { SheetsService } from '../sheets/sheets.service.js';
-import { buildPrintableSheet } from './build-printable-sheet.js';
-import type { PrintableSheet } from './printable-sheet.js';
+import { sheetTypeDefinition, UnknownSheetTypeError } from '../calc/calc-engine.js';
+import type { RevisionWithSheet } from '../revisions/revisions.repository.js';
+import { RevisionsRepository } from '../revisions/revisions.repository.js';
+import { SheetsRepository } from '../sheets/sheets.repository.js';
+import { UsersRepository } from '../users/users.repository.js';
+import { revisionSource, sheetSource } from './printable-source.js';
 
 /**
- * A revision as the renderers take it: its sheet, sheet type and criteria set loaded and put
- * together. The calculation sheet, the field card and the field record all start here.
+ * A revision as the renderers take it: its sheet, history, people, sheet type and criteria set
+ * read from the repositories and put together as print's plain data. The calculation sheet, the
+ * field card and the field record all start here.
  */
 @Injectable()
 export class RevisionPrintable {
   constructor(
-    private readonly sheets: SheetsService,
+    private readonly sheets: SheetsRepository,
+    private readonly revisions: RevisionsRepository,
+    private readonly users: UsersRepository,
     private readonly criteria: CriteriaService,
     private readonly config: AppConfig,
   ) {}
 
-  /** The caller has already read `revision` through the read rules. */
-  async build(revision: Revision, paper: PrintQuery['paper']): Promise<PrintableSheet> {
-    const sheetType = getSheetType(revision.sheetType);
-    if (!sheetType)
-      throw new NotFoundException(`Sheet type ${revision.sheetType} is not known to this server.`);
-    const [sheet, criteriaSet] = await Promise.all([
-      this.sheets.detail(revision.sheetId),
+  /**
+   * The caller has already read `revision` through the read rules. `verificationCode` replaces
+   * the revision's own (a field record prints its own code; a draft record none).
+   */
+  async build(
+    revision: RevisionWithSheet,
+    paper: PrintQuery['paper'],
+    verificationCode: string | null = revision.verificationCode,
+  ): Promise<PrintableSheet> {
+    const sheetType = this.sheetType(revision.sheetType);
+    const [summary, history, criteriaSet, supersededByLabel] = await Promise.all([
+      this.sheets.findSummary(revision.sheetId),
+      this.revisions.listForSheet(revision.sheetId),
       this.criteria.load(revision.criteriaSetId, revision.criteriaSetVersion),
+      revision.supersededById ? this.revisions.label(revision.supersededById) : undefined,
     ]);
+    if (!summary) throw notFound('Sheet not found.');
+    const people = await this.users.people(
+      [revision, ...history].flatMap((r) => [r.authorId, r.checkerId]),
+    );
     return buildPrintableSheet({
-      sheet,
-      revision,
+      sheet: sheetSource(summary, history, people),
+      revision: revisionSource(revision, people, { supersededByLabel, verificationCode }),
       sheetType,
       criteriaSet,
       verifyBaseUrl: this.config.settings.PUBLIC_URL,
       paper,
     });
+  }
+
+  private sheetType(id: string) {
+    try {
+      return sheetTypeDefinition(id);
+    } catch (e) {
+      if (e instanceof UnknownSheetTypeError)
+        throw new NotFoundException(`Sheet type ${id} is not known to this server.`);
+      throw e;
+    }
   }
 }

@@ -1,11 +1,11 @@
 import { Injectable } from '@nestjs/common';
+import { renderFieldRecordPdf } from '@holdfast/print';
 import type { PrintQuery } from '@holdfast/shared';
 import type { AuthUser } from '../../auth/auth-user.js';
 import { FieldRecordsService } from '../../field-records/field-records.service.js';
 import { checkLabels } from '../../calc/field-targets.js';
 import { RevisionsService } from '../../revisions/revisions.service.js';
 import { RevisionPrintable } from '../revision-printable.js';
-import { renderFieldRecordPdf } from './render-field-record.js';
 
 /**
  * The printed field record: the revision's title block and look, with the record's own
@@ -21,16 +21,11 @@ export class FieldRecordPrintService {
 
   async print(user: AuthUser, id: string, paper: PrintQuery['paper']) {
     const record = await this.records.get(id);
-    const revision = await this.revisions.get(user, record.revisionId);
+    const revision = await this.revisions.load(user, record.revisionId);
     // The record's code, not the sheet's: a draft record carries none.
-    const printable = await this.printable.build(
-      { ...revision, verificationCode: record.verificationCode },
-      paper,
-    );
-    const bytes = await renderFieldRecordPdf(
-      record,
-      printable,
-      checkLabels(printable.sheetType.id),
+    const printable = await this.printable.build(revision, paper, record.verificationCode);
+    const bytes = Buffer.from(
+      await renderFieldRecordPdf(record, printable, checkLabels(printable.sheetType.id)),
     );
     const marking = record.status === 'draft' ? '-draft' : '';
     const fileName =

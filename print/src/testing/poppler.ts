@@ -6,7 +6,7 @@ import { fileURLToPath } from 'node:url';
 /** Where rendered PDFs and page PNGs go for a human to look at (git-ignored test-output/). */
 export const OUTPUT_DIR = path.resolve(
   path.dirname(fileURLToPath(import.meta.url)),
-  '../../../../test-output/pdf',
+  '../../../test-output/pdf',
 );
 
 const has = (cmd: string) => spawnSync('sh', ['-c', `command -v ${cmd}`]).status === 0;
@@ -37,7 +37,7 @@ export interface PdfFacts {
 }
 
 /** Saves the PDF under test-output/pdf/<name>.pdf and reads its facts with poppler. */
-export function inspectPdf(pdf: Buffer, name: string): PdfFacts {
+export function inspectPdf(pdf: Uint8Array, name: string): PdfFacts {
   mkdirSync(OUTPUT_DIR, { recursive: true });
   const file = path.join(OUTPUT_DIR, `${name}.pdf`);
   writeFileSync(file, pdf);

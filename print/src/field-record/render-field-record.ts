@@ -16,7 +16,7 @@ export async function renderFieldRecordPdf(
   record: FieldRecord,
   sheet: PrintableSheet,
   checkLabels: Record<string, string>,
-): Promise<Buffer> {
+): Promise<Uint8Array> {
   registerPdfFonts();
   rememberEmbeddedFonts();
   memoiseGlyphLayout();

@@ -7,7 +7,7 @@ import {
   type CriteriaSet,
   type SheetInputs,
 } from '@holdfast/calc';
-import { buildPrintableSheet, type RevisionLike } from '../build-printable-sheet.js';
+import { buildPrintableSheet, type PrintRevisionSource } from '../build-printable-sheet.js';
 import type {
   Paper,
   PrintableSheet,
@@ -39,9 +39,9 @@ export function realPrintable(o: {
   const inputs = o.inputs ?? demoInputs(type);
   const evaluation = type.evaluate(inputs, criteriaSet);
   const approvedLike = o.state === 'approved' || o.state === 'superseded';
-  const author = { displayName: 'Dana Demo', initials: 'DD' };
-  const checker = { displayName: 'Chris Checkwell', initials: 'CC' };
-  const revision: RevisionLike = {
+  const author = { name: 'Dana Demo', initials: 'DD' };
+  const checker = { name: 'Chris Checkwell', initials: 'CC' };
+  const revision: PrintRevisionSource = {
     label: 'A',
     state: o.state,
     author,
@@ -52,7 +52,6 @@ export function realPrintable(o: {
     approvedAt: approvedLike ? '2026-11-12T08:00:00Z' : null,
     inputs,
     unitSystem: o.unitSystem ?? 'SI',
-    criteriaSetVersion: criteriaSet.version,
     evaluation,
     coreVersion: evaluation.coreVersion,
     verificationCode: approvedLike ? 'K3M9QZ7TXA' : null,
@@ -64,7 +63,7 @@ export function realPrintable(o: {
       documentNumber: `HF-DEMO-${type.id.toUpperCase().slice(0, 6)}-001`,
       title: `${type.title} — demo`,
       site: { code: 'DEMO', name: 'Demo Works (invented)' },
-      machine: { tag: 'CR-1', name: 'Demo crane' },
+      equipment: { tag: 'CR-1', name: 'Demo crane' },
       position: { tag: 'BR-1', description: 'brake 1' },
       revisions: [revision],
     },

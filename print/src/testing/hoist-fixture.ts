@@ -1,8 +1,8 @@
 import type { FieldDefinition, SheetEvaluation } from '@holdfast/calc';
 import {
   buildPrintableSheet,
-  type RevisionLike,
-  type SheetLike,
+  type PrintRevisionSource,
+  type PrintSheetSource,
 } from '../build-printable-sheet.js';
 import type {
   Paper,
@@ -491,8 +491,8 @@ export function hoistEvaluation(opts: { failing?: boolean } = {}): SheetEvaluati
   };
 }
 
-const alice = { displayName: 'Ada Demo', initials: 'AD' };
-const bob = { displayName: 'Ben Checker', initials: 'BC' };
+const alice = { name: 'Ada Demo', initials: 'AD' };
+const bob = { name: 'Ben Checker', initials: 'BC' };
 
 export function hoistPrintable(o: {
   state: PrintRevisionState;
@@ -501,7 +501,7 @@ export function hoistPrintable(o: {
   failing?: boolean;
 }): PrintableSheet {
   const approvedLike = o.state === 'approved' || o.state === 'superseded';
-  const revision: RevisionLike = {
+  const revision: PrintRevisionSource = {
     label: 'B',
     state: o.state,
     author: alice,
@@ -524,7 +524,6 @@ export function hoistPrintable(o: {
       hotMetal: true,
     },
     unitSystem: o.unitSystem ?? 'SI',
-    criteriaSetVersion: 3,
     evaluation: hoistEvaluation({ failing: o.failing }),
     coreVersion: '0.3.0-fixture',
     verificationCode: approvedLike ? 'HF7K-2QX9' : null,
@@ -533,11 +532,11 @@ export function hoistPrintable(o: {
       : null,
     supersededBy: o.state === 'superseded' ? { label: 'C', at: '2026-11-20T10:00:00Z' } : null,
   };
-  const sheet: SheetLike = {
+  const sheet: PrintSheetSource = {
     documentNumber: 'HF-DEMO-0042',
     title: 'Ladle crane main hoist — holding brake 1',
     site: { code: 'NSW', name: 'North Shore Works (demo)' },
-    machine: { tag: 'LC-2', name: 'Ladle crane 2' },
+    equipment: { tag: 'LC-2', name: 'Ladle crane 2' },
     position: { tag: 'MH-B1', description: 'main hoist, brake 1 (high-speed shaft)' },
     revisions: [
       {

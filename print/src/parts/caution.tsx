@@ -1,10 +1,10 @@
 import { Text, View } from '@react-pdf/renderer';
-import type { BrakeRotor } from '../../calc/brake-rotor.js';
+import type { BrakeRotor } from '@holdfast/calc';
 import type { TextMeasure } from '../measure.js';
 import { colours } from '../theme.js';
 
-// The check items of a field record are worded by the same rule (calc/field-targets.ts).
-export { rotorOf, type BrakeRotor } from '../../calc/brake-rotor.js';
+// The check items of a field record are worded by the same rule (server/src/calc/field-targets.ts).
+export { rotorOf, type BrakeRotor } from '@holdfast/calc';
 
 /**
  * The usual cautions for work on a spring-applied, thruster-released brake, printed on the sheet

@@ -27,7 +27,7 @@ function textMeasure(): Promise<TextMeasure> {
 
 /** A rendered sheet and how its pages were made (see PageMode). */
 export interface SheetRender {
-  pdf: Buffer;
+  pdf: Uint8Array;
   mode: PageMode;
   /** Planned pages (1-based) whose content ran past the foot of the page, if any. */
   overflowPages: number[];
@@ -57,7 +57,7 @@ export async function renderSheet(sheet: PrintableSheet): Promise<SheetRender> {
   return { pdf: flowing, mode: 'flowing', overflowPages };
 }
 
-export async function renderSheetPdf(sheet: PrintableSheet): Promise<Buffer> {
+export async function renderSheetPdf(sheet: PrintableSheet): Promise<Uint8Array> {
   return (await renderSheet(sheet)).pdf;
 }
 
@@ -81,7 +81,7 @@ interface LaidOutPage {
 }
 
 /** Renders the one- or two-page field setting card for the same revision. */
-export async function renderFieldCardPdf(sheet: PrintableSheet): Promise<Buffer> {
+export async function renderFieldCardPdf(sheet: PrintableSheet): Promise<Uint8Array> {
   setUpRenderer();
   memoiseGlyphLayout();
   const qr = sheet.verification ? await qrDataUrl(sheet.verification.url) : null;

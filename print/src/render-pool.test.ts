@@ -5,8 +5,8 @@ import { RENDER_NICE, RenderPool } from './render-pool.js';
 import { hoistPrintable } from './testing/hoist-fixture.js';
 
 /** pdfkit stamps the creation time and a document id from the clock: the rest must match. */
-const stable = (pdf: Buffer) =>
-  pdf
+const stable = (pdf: Uint8Array) =>
+  Buffer.from(pdf)
     .toString('latin1')
     .replace(/\(D:\d{14}Z\)/g, '(D:)')
     .replace(/\/ID \[<[0-9a-f]+> <[0-9a-f]+>\]/gi, '/ID []');

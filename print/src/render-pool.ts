@@ -27,10 +27,7 @@ export class RenderQueueFullError extends Error {
 function workerFile(): string {
   const here = fileURLToPath(new URL('./render-worker.js', import.meta.url));
   if (existsSync(here)) return here;
-  const built = here.replace(
-    /([\\/])src([\\/])print([\\/])render-worker\.js$/,
-    '$1dist$2print$3render-worker.js',
-  );
+  const built = here.replace(/([\\/])src([\\/])render-worker\.js$/, '$1dist$2render-worker.js');
   if (!existsSync(built)) throw new Error(`PDF render worker not built: ${built} (run npx tsc -b)`);
   return built;
 }

@@ -17,27 +17,24 @@ import type {
 } from './printable-sheet.js';
 
 type When = string | Date;
-/** The sheets API's PersonRef (only the printed fields are read). */
-export interface PersonRefLike {
-  displayName: string;
-  initials: string;
-}
-/** A RevisionSummary of the sheets API. */
-export interface RevisionSummaryLike {
+/**
+ * One revision in the sheet's history, as the server reads it from its rows: print owns this
+ * shape, so the API's responses can change without touching the printed sheet.
+ */
+export interface PrintRevisionSummarySource {
   label: string;
   state: PrintRevisionState;
-  author: PersonRefLike;
-  checker: PersonRefLike | null;
+  author: PrintPerson;
+  checker: PrintPerson | null;
   changeNote: string | null;
   createdAt: When;
   approvedAt?: When | null;
 }
-/** The sheets API's Revision (only the printed fields are read). */
-export interface RevisionLike extends RevisionSummaryLike {
+/** The printed revision: its history entry plus what it holds and how it was signed. */
+export interface PrintRevisionSource extends PrintRevisionSummarySource {
   submittedAt: When | null;
   inputs: SheetInputs;
   unitSystem: PrintUnitSystem;
-  criteriaSetVersion: number;
   evaluation: SheetEvaluation | null;
   coreVersion: string | null;
   verificationCode: string | null;
@@ -45,19 +42,20 @@ export interface RevisionLike extends RevisionSummaryLike {
   approvalNote?: string | null;
   supersededBy: { label: string; at: When } | null;
 }
-export interface SheetLike {
+/** The sheet and where its brake sits. */
+export interface PrintSheetSource {
   documentNumber: string;
   title: string;
   purpose?: string | null;
   site: { code: string; name: string };
-  machine: { tag: string; name: string };
+  equipment: { tag: string; name: string };
   position: { tag: string; description: string };
   /** Every revision of the sheet; the history prints those up to the printed one. */
-  revisions: RevisionSummaryLike[];
+  revisions: PrintRevisionSummarySource[];
 }
 export interface BuildPrintableOptions {
-  sheet: SheetLike;
-  revision: RevisionLike;
+  sheet: PrintSheetSource;
+  revision: PrintRevisionSource;
   sheetType: Pick<SheetTypeDefinition, 'id' | 'title' | 'description' | 'sections' | 'fields'>;
   criteriaSet: CriteriaSet;
   /** Public base URL of Holdfast, e.g. 'https://holdfast.example.com'; the code is appended. */
@@ -70,7 +68,7 @@ export interface BuildPrintableOptions {
 
 const iso = (w: When): string => (w instanceof Date ? w.toISOString() : w);
 const isoOrNull = (w: When | null | undefined): string | null => (w ? iso(w) : null);
-const person = (p: PersonRefLike): PrintPerson => ({ name: p.displayName, initials: p.initials });
+const person = (p: PrintPerson): PrintPerson => ({ name: p.name, initials: p.initials });
 
 /** Orders revision labels A, B, … Z, AA, AB …: shorter first, then alphabetical. */
 export function compareLabels(a: string, b: string): number {
@@ -126,11 +124,11 @@ export function buildPrintableSheet(o: BuildPrintableOptions): PrintableSheet {
     purpose:
       sheet.purpose ??
       `To show that the ${sheetType.title.toLowerCase()} at position ${sheet.position.tag} ` +
-        `(${sheet.position.description}) of ${sheet.machine.tag} ${sheet.machine.name}, ` +
+        `(${sheet.position.description}) of ${sheet.equipment.tag} ${sheet.equipment.name}, ` +
         `${sheet.site.name}, meets the acceptance criteria of "${o.criteriaSet.name}" ` +
         `version ${o.criteriaSet.version}, and to give the field team its settings.`,
     site: sheet.site,
-    equipment: { tag: sheet.machine.tag, name: sheet.machine.name },
+    equipment: { tag: sheet.equipment.tag, name: sheet.equipment.name },
     position: sheet.position,
     sheetType: { id: sheetType.id, title: sheetType.title, description: sheetType.description },
     revision: {
