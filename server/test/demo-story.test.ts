@@ -1,20 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { fieldCheckKeys } from '@holdfast/shared';
-import { seedDemoScenario } from '../src/demo/seed-demo.js';
-import { createSheetsContext, type SheetsContext } from './sheets-fixture.js';
+import { demoSuite } from './sheets-fixture.js';
 
 /** The demo's story as made through the services: its dates, its field records, its notes. */
 describe('demo story', () => {
-  let ctx: SheetsContext;
-  beforeAll(async () => {
-    ctx = await createSheetsContext();
-    await ctx.resetAll();
-    expect(await seedDemoScenario(ctx.app)).toBe(true);
-  }, 120_000);
-  afterAll(() => ctx?.closeAll());
+  const suite = demoSuite();
 
   it('dates its story in the past, and sends no mail about it', async () => {
-    const revs = await ctx.db
+    const revs = await suite.ctx.db
       .selectFrom('revisions as r')
       .innerJoin('sheets as s', 's.id', 'r.sheetId')
       .select(['s.documentNumber', 'r.label', 'r.approvedAt', 'r.supersededAt', 'r.submittedAt'])
@@ -27,14 +20,14 @@ describe('demo story', () => {
       ['B', 30, 0],
       ['C', 0, daysAgo(null)],
     ]);
-    const audit = await ctx.db.selectFrom('auditEvents').select('at').execute();
+    const audit = await suite.ctx.db.selectFrom('auditEvents').select('at').execute();
     expect(audit.filter((e) => e.at.getTime() > Date.now())).toEqual([]);
     expect(Math.max(...audit.map((e) => daysAgo(e.at)))).toBe(200);
-    expect(await ctx.db.selectFrom('outbox').select('id').execute()).toEqual([]);
+    expect(await suite.ctx.db.selectFrom('outbox').select('id').execute()).toEqual([]);
   });
 
   it('keeps the field records of the story: a wear history, an overdue brake, one to countersign', async () => {
-    const records = await ctx.db
+    const records = await suite.ctx.db
       .selectFrom('fieldRecords as f')
       .innerJoin('brakePositions as p', 'p.id', 'f.positionId')
       .innerJoin('revisions as r', 'r.id', 'f.revisionId')
@@ -57,12 +50,12 @@ describe('demo story', () => {
       'MH-B1 A countersigned 12',
       'DB-1 B signed 3 out',
     ]);
-    const signatures = await ctx.db
+    const signatures = await suite.ctx.db
       .selectFrom('fieldRecordSignatures')
       .select('signedAt')
       .execute();
     expect(signatures.every((s) => s.signedAt.getTime() < Date.now() - 86_400_000)).toBe(true);
-    const due = await ctx.request('GET', '/api/field-records/due', { as: 'checker' });
+    const due = await suite.ctx.request('GET', '/api/field-records/due', { as: 'checker' });
     expect(due.body.overdue.map((d: { positionTag: string }) => d.positionTag)).toContain('TR-B1');
     expect(due.body.awaitingCountersign.map((r: { positionTag: string }) => r.positionTag)).toEqual(
       ['DB-1'],
@@ -70,13 +63,13 @@ describe('demo story', () => {
   });
 
   it('signs no demo field record with a check item unanswered, as the server refuses to', async () => {
-    const signed = await ctx.db
+    const signed = await suite.ctx.db
       .selectFrom('fieldRecords')
       .select('id')
       .where('status', '<>', 'draft')
       .execute();
     expect(signed.length).toBeGreaterThan(0);
-    const checks = await ctx.db
+    const checks = await suite.ctx.db
       .selectFrom('fieldRecordChecks')
       .select(['recordId', 'key'])
       .where(
@@ -92,7 +85,7 @@ describe('demo story', () => {
   });
 
   it('a demo change note says "no change on site" only where no field setting moved, "re-set" only where one did', async () => {
-    const revs = await ctx.db
+    const revs = await suite.ctx.db
       .selectFrom('revisions')
       .select(['sheetId', 'seq', 'label', 'changeNote', 'evaluation'])
       .orderBy('sheetId')
@@ -126,7 +119,7 @@ describe('demo story', () => {
   });
 
   it('field records hold a wear trend, an out-of-tolerance record with its reason, stored judgements', async () => {
-    const rows = await ctx.db
+    const rows = await suite.ctx.db
       .selectFrom('fieldRecords as f')
       .innerJoin('brakePositions as p', 'p.id', 'f.positionId')
       .select(['p.tag', 'f.id', 'f.status', 'f.performedAt', 'f.outOfTolerance'])
@@ -136,7 +129,7 @@ describe('demo story', () => {
     expect(mh.length).toBeGreaterThanOrEqual(6);
     const span = mh.at(-1)!.performedAt.getTime() - mh[0]!.performedAt.getTime();
     expect(span).toBeGreaterThan(90 * 86_400_000);
-    const reserve = await ctx.db
+    const reserve = await suite.ctx.db
       .selectFrom('fieldRecordMeasurements')
       .select(['recordId', 'asFound', 'asLeft'])
       .where('settingKey', '=', 'reserveStroke')
@@ -153,14 +146,14 @@ describe('demo story', () => {
     for (let i = 1; i < series.length; i++) expect(series[i]).toBeLessThan(series[i - 1]!);
     const out = rows.filter((r) => r.outOfTolerance);
     expect(out.map((r) => [r.tag, r.status])).toEqual([['DB-1', 'signed']]);
-    const reason = await ctx.db
+    const reason = await suite.ctx.db
       .selectFrom('fieldRecordMeasurements')
       .select('reason')
       .where('recordId', '=', out[0]!.id)
       .executeTakeFirstOrThrow();
     expect(reason.reason).not.toBe('');
     // Signed by the demo, so stored with the judgement they were signed with.
-    const judged = await ctx.db
+    const judged = await suite.ctx.db
       .selectFrom('fieldRecordMeasurements')
       .select(['recordId', 'target', 'dimension', 'asLeftVerdict'])
       .execute();

@@ -1,28 +1,22 @@
 import { sql } from 'kysely';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { seedDemoScenario } from '../src/demo/seed-demo.js';
 import { DemoAttachments } from '../src/attachments/demo-attachments.js';
 import { CriteriaService } from '../src/criteria/criteria.service.js';
 import { evaluateSheet } from '../src/calc/calc-engine.js';
 import { contentHash } from '../src/revisions/revision-codes.js';
-import { createSheetsContext, type SheetsContext } from './sheets-fixture.js';
+import { demoSuite } from './sheets-fixture.js';
 
 describe('demo plant seed', () => {
-  let ctx: SheetsContext;
-  beforeAll(async () => {
-    ctx = await createSheetsContext();
-    await ctx.resetAll();
-    expect(await seedDemoScenario(ctx.app)).toBe(true);
-  }, 120_000);
-  afterAll(() => ctx?.closeAll());
+  const suite = demoSuite();
 
   it('covers every state and sheet type with at least eight sheets, and runs only once', async () => {
-    const list = await ctx.request('GET', '/api/sheets?pageSize=50', { as: 'viewer' });
+    const list = await suite.ctx.request('GET', '/api/sheets?pageSize=50', { as: 'viewer' });
     expect(list.body.total).toBeGreaterThanOrEqual(8);
     expect(
       list.body.items.every((s: { site: { name: string } }) => s.site.name.includes('demo')),
     ).toBe(true);
-    const revs = await ctx.db
+    const revs = await suite.ctx.db
       .selectFrom('revisions as r')
       .innerJoin('sheets as s', 's.id', 'r.sheetId')
       .select(['r.state', 's.sheetType'])
@@ -34,10 +28,10 @@ describe('demo plant seed', () => {
       new Set(['hoist-shoe-brake', 'travel-shoe-brake', 'caliper-disc-brake', 'disc-spring-stack']),
     );
     const before = await snapshot();
-    expect(await seedDemoScenario(ctx.app)).toBe(false);
-    expect((await ctx.request('GET', '/api/sheets?pageSize=1', { as: 'viewer' })).body.total).toBe(
-      list.body.total,
-    );
+    expect(await seedDemoScenario(suite.ctx.app)).toBe(false);
+    expect(
+      (await suite.ctx.request('GET', '/api/sheets?pageSize=1', { as: 'viewer' })).body.total,
+    ).toBe(list.body.total);
     expect(await snapshot()).toEqual(before);
   });
 
@@ -45,20 +39,20 @@ describe('demo plant seed', () => {
   async function snapshot() {
     const { rows } = await sql<{ tablename: string }>`
       select tablename from pg_tables where schemaname = 'public' order by tablename`.execute(
-      ctx.db,
+      suite.ctx.db,
     );
     const out: Record<string, string> = {};
     for (const { tablename } of rows) {
       const r = await sql<{ n: string; h: string | null }>`
         select count(*)::text as n, md5(string_agg(t::text, '|' order by t::text)) as h
-        from ${sql.table(tablename)} t`.execute(ctx.db);
+        from ${sql.table(tablename)} t`.execute(suite.ctx.db);
       out[tablename] = `${r.rows[0]!.n}:${r.rows[0]!.h ?? ''}`;
     }
     return out;
   }
 
   it('stores evaluations the calc core gives for the stored inputs, with matching hashes', async () => {
-    const rows = await ctx.db
+    const rows = await suite.ctx.db
       .selectFrom('revisions as r')
       .innerJoin('sheets as s', 's.id', 'r.sheetId')
       .select([
@@ -71,7 +65,7 @@ describe('demo plant seed', () => {
         's.sheetType',
       ])
       .execute();
-    const criteria = ctx.app.get(CriteriaService);
+    const criteria = suite.ctx.app.get(CriteriaService);
     for (const r of rows) {
       const fresh = evaluateSheet(
         r.sheetType,
@@ -99,29 +93,33 @@ describe('demo plant seed', () => {
   });
 
   it('has an approved sheet with a superseded predecessor and a returned revision with answered comments', async () => {
-    const list = await ctx.request('GET', '/api/sheets?q=NRW-0001', { as: 'viewer' });
-    const sheet = await ctx.request('GET', `/api/sheets/${list.body.items[0].id}`, {
+    const list = await suite.ctx.request('GET', '/api/sheets?q=NRW-0001', { as: 'viewer' });
+    const sheet = await suite.ctx.request('GET', `/api/sheets/${list.body.items[0].id}`, {
       as: 'viewer',
     });
     expect(
       sheet.body.revisions.map((r: { label: string; state: string }) => `${r.label}:${r.state}`),
     ).toEqual(['A:superseded', 'B:superseded', 'C:approved']);
-    const a = await ctx.request('GET', `/api/revisions/${sheet.body.revisions[0].id}`, {
+    const a = await suite.ctx.request('GET', `/api/revisions/${sheet.body.revisions[0].id}`, {
       as: 'viewer',
     });
     expect(a.body.supersededBy.label).toBe('B');
-    const verify = await ctx.request('GET', `/api/verify/${a.body.verificationCode}`);
+    const verify = await suite.ctx.request('GET', `/api/verify/${a.body.verificationCode}`);
     expect(verify.body).toMatchObject({ current: false, newerApproved: { revisionLabel: 'C' } });
 
-    const returned = await ctx.request('GET', '/api/sheets?state=returned', { as: 'engineer' });
+    const returned = await suite.ctx.request('GET', '/api/sheets?state=returned', {
+      as: 'engineer',
+    });
     const rev = returned.body.items[0].latest.id;
-    const comments = await ctx.request('GET', `/api/revisions/${rev}/comments`, { as: 'engineer' });
+    const comments = await suite.ctx.request('GET', `/api/revisions/${rev}/comments`, {
+      as: 'engineer',
+    });
     expect(comments.body.items.length).toBeGreaterThan(0);
     for (const c of comments.body.items) {
       expect(c.resolved).toBe(true);
       expect(c.replies.length).toBe(1);
     }
-    const audit = await ctx.request('GET', `/api/sheets/${returned.body.items[0].id}/audit`, {
+    const audit = await suite.ctx.request('GET', `/api/sheets/${returned.body.items[0].id}/audit`, {
       as: 'viewer',
     });
     expect(audit.body.items.map((e: { action: string }) => e.action)).toContain(
@@ -130,13 +128,13 @@ describe('demo plant seed', () => {
   });
 
   it('attaches the generated data sheet once, through the object storage', async () => {
-    const demo = ctx.app.get(DemoAttachments);
+    const demo = suite.ctx.app.get(DemoAttachments);
     // The seed ran after the app started, so the start-up pass found nothing to attach.
     expect(await demo.ensure()).toBe(2);
     expect(await demo.ensure()).toBe(0);
-    const rows = await ctx.db.selectFrom('attachments').select(['id', 'fileName']).execute();
+    const rows = await suite.ctx.db.selectFrom('attachments').select(['id', 'fileName']).execute();
     expect(rows.length).toBeGreaterThanOrEqual(1);
-    const dl = await ctx.request('GET', `/api/attachments/${rows[0].id}/download`, {
+    const dl = await suite.ctx.request('GET', `/api/attachments/${rows[0].id}/download`, {
       as: 'engineer',
     });
     expect(dl.status).toBe(200);

@@ -2,6 +2,7 @@
 import { SMTPServer } from 'smtp-server';
 import { afterAll, beforeAll, beforeEach, expect } from 'vitest';
 import { CriteriaService } from '../src/criteria/criteria.service.js';
+import { seedDemoScenario } from '../src/demo/seed-demo.js';
 import { JobQueue, MAIL_QUEUE } from '../src/outbox/job-queue.js';
 import { createTestContext, type DemoLogin, type TestContext } from './test-context.js';
 
@@ -133,6 +134,21 @@ export function sheetsSuite(): { ctx: SheetsContext; reg: Register } {
     await suite.ctx.resetAll();
     suite.reg = await makeRegister(suite.ctx);
   });
+  afterAll(() => suite.ctx?.closeAll());
+  return suite;
+}
+
+/**
+ * A suite over the demo scenario: one app for the file, every table emptied once and the demo
+ * made through the services before the first test. Read `suite.ctx` inside the tests.
+ */
+export function demoSuite(): { ctx: SheetsContext } {
+  const suite = {} as { ctx: SheetsContext };
+  beforeAll(async () => {
+    suite.ctx = await createSheetsContext();
+    await suite.ctx.resetAll();
+    expect(await seedDemoScenario(suite.ctx.app)).toBe(true);
+  }, 120_000);
   afterAll(() => suite.ctx?.closeAll());
   return suite;
 }
