@@ -12,9 +12,7 @@ export default defineConfig({
     setupFiles: ['./src/testing/setup.ts'],
     // Mantine screens mount slowly in jsdom while other suites run beside them.
     testTimeout: 20000,
-    // The files share one jsdom and module graph instead of loading React, Mantine and jsdom
-    // again for each (107 s to 34 s for the project, measured). The setup file unmounts, restores
-    // mocks and unstubs globals after every test, so files do not see each other's state.
-    isolate: false,
+    // Isolated per file: with one shared module graph (107 s to 34 s) Mantine's notification
+    // store carried one file's toasts into the next and failed the photo-picker tests.
   },
 });
