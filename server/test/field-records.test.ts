@@ -338,7 +338,56 @@ describe('field records', () => {
       as: 'technician',
       body: {},
     });
-    expect((await send(png, 'late.png')).status).toBe(409);
+    const other = Buffer.concat([png, Buffer.from([1])]);
+    expect((await send(other, 'late.png')).status).toBe(409);
+  });
+
+  it('a photo sent again (its answer lost) is filed once, even when both sends arrive at once', async () => {
+    const b = body();
+    await suite.ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
+    const send = async (bytes: Buffer, name: string, as: DemoLogin = 'technician') => {
+      const form = new FormData();
+      form.append('file', new Blob([new Uint8Array(bytes)]), name);
+      const res = await fetch(`${suite.ctx.baseUrl}/api/field-records/${b.id}/attachments`, {
+        method: 'POST',
+        headers: { authorization: `Bearer ${await suite.ctx.token(as)}` },
+        body: form,
+      });
+      return { status: res.status, body: (await res.json()) as any };
+    };
+    const png = (n: number) =>
+      Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, n]);
+    const first = await send(png(1), 'shoe-a.png');
+    expect(first.status).toBe(201);
+    const again = await send(png(1), 'shoe-a.png');
+    expect(again.status).toBe(201);
+    expect(again.body.id).toBe(first.body.id);
+    // Two sends of another photo racing each other: one row between them.
+    const [x, y] = await Promise.all([send(png(2), 'b.png'), send(png(2), 'b.png')]);
+    expect([x.status, y.status]).toEqual([201, 201]);
+    expect(x.body.id).toBe(y.body.id);
+    // Someone else sending the same bytes is still refused.
+    expect((await send(png(1), 'x.png', 'engineer')).status).toBe(403);
+    const list = await suite.ctx.request('GET', `/api/field-records/${b.id}/attachments`, {
+      as: 'technician',
+    });
+    expect(list.body.items.map((a: { id: string }) => a.id).sort()).toEqual(
+      [first.body.id, x.body.id].sort(),
+    );
+    const audit = await suite.ctx.db
+      .selectFrom('auditEvents')
+      .select('action')
+      .where('entityId', '=', b.id)
+      .where('action', '=', 'field-record.photo-added')
+      .execute();
+    expect(audit).toHaveLength(2);
+    // Once signed, the filed photo is still answered as filed; new bytes are refused.
+    await suite.ctx.request('POST', `/api/field-records/${b.id}/sign`, {
+      as: 'technician',
+      body: {},
+    });
+    expect((await send(png(1), 'shoe-a.png')).body.id).toBe(first.body.id);
+    expect((await send(png(3), 'late.png')).status).toBe(409);
   });
 
   it('a record made against a revision since superseded is flagged', async () => {

@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { Injectable } from '@nestjs/common';
-import type { FieldRecordRow } from '@holdfast/db';
+import type { AttachmentRow, FieldRecordRow } from '@holdfast/db';
 import type { Attachment } from '@holdfast/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { AuditService } from '../audit/audit.service.js';
@@ -44,6 +44,12 @@ export class FieldRecordPhotosService {
     return rows.map((r) => toAttachment(r, people));
   }
 
+  /**
+   * Files a photo on a draft record, by its maker. The same bytes sent again for the same record
+   * are answered with the photo already filed, whatever the record's state: a fitter's device
+   * sends a photo again when the answer to the first send was lost, and that must not file it
+   * twice.
+   */
   async upload(
     user: AuthUser,
     recordId: string,
@@ -53,7 +59,7 @@ export class FieldRecordPhotosService {
     const stored = await this.repo.load(recordId);
     if (!stored) throw notFound('Field record not found.');
     // Checked here before the bytes are stored, and again under the row lock.
-    assertMayAddPhoto(user, stored.record);
+    assertMaker(user, stored.record);
     const givenName = givenFileName(file);
     const contentType = sniffContentType(file.buffer, givenName);
     if (contentType !== 'image/png' && contentType !== 'image/jpeg') {
@@ -61,52 +67,71 @@ export class FieldRecordPhotosService {
         { path: 'file', message: 'content is not a PNG or JPEG image' },
       ]);
     }
-    const fileName = nameForType(givenName, contentType);
     const sha256 = sha256Of(file.buffer);
+    const filed = await this.repo.photoWithContent(recordId, sha256);
+    if (filed) return this.answer(filed);
+    assertDraft(stored.record);
+    const fileName = nameForType(givenName, contentType);
     const storageKey = `field-records/${recordId}/${randomUUID()}`;
-    const row = await storeThenRecord(this.storage, storageKey, file.buffer, contentType, () =>
-      this.units.run(async (trx) => {
-        const rec = await this.repo.lockForUpdate(trx, recordId);
-        if (!rec) throw notFound('Field record not found.');
-        assertMayAddPhoto(user, rec);
-        if ((await this.repo.countPhotos(trx, recordId)) >= MAX_PHOTOS_PER_RECORD) {
-          throw new ApiException(
-            413,
-            'payload_too_large',
-            `A record holds at most ${MAX_PHOTOS_PER_RECORD} photos.`,
-            [{ path: 'file', message: 'the record has no room for another photo' }],
-          );
-        }
-        const created = await this.repo.insertPhoto(trx, {
-          revisionId: rec.revisionId,
-          fieldRecordId: recordId,
-          fileName,
-          contentType,
-          size: file.buffer.length,
-          sha256,
-          storageKey,
-          uploadedBy: user.id,
-        });
-        await this.audit.record(trx, {
-          actorId: user.id,
-          action: 'field-record.photo-added',
-          entity: 'field-record',
-          entityId: recordId,
-          after: { fileName, contentType, size: file.buffer.length, sha256 },
-        });
-        return created;
-      }),
+    const { row, again } = await storeThenRecord(
+      this.storage,
+      storageKey,
+      file.buffer,
+      contentType,
+      () =>
+        this.units.run(async (trx) => {
+          const rec = await this.repo.lockForUpdate(trx, recordId);
+          if (!rec) throw notFound('Field record not found.');
+          assertMaker(user, rec);
+          // Two sends of one photo at once: the second finds the first here, under the lock.
+          const first = await this.repo.photoWithContent(recordId, sha256, trx);
+          if (first) return { row: first, again: true };
+          assertDraft(rec);
+          if ((await this.repo.countPhotos(trx, recordId)) >= MAX_PHOTOS_PER_RECORD) {
+            throw new ApiException(
+              413,
+              'payload_too_large',
+              `A record holds at most ${MAX_PHOTOS_PER_RECORD} photos.`,
+              [{ path: 'file', message: 'the record has no room for another photo' }],
+            );
+          }
+          const created = await this.repo.insertPhoto(trx, {
+            revisionId: rec.revisionId,
+            fieldRecordId: recordId,
+            fileName,
+            contentType,
+            size: file.buffer.length,
+            sha256,
+            storageKey,
+            uploadedBy: user.id,
+          });
+          await this.audit.record(trx, {
+            actorId: user.id,
+            action: 'field-record.photo-added',
+            entity: 'field-record',
+            entityId: recordId,
+            after: { fileName, contentType, size: file.buffer.length, sha256 },
+          });
+          return { row: created, again: false };
+        }),
     );
-    return toAttachment(row, await this.users.people([user.id]));
+    // The bytes stored for the second send are nobody's: the first send's row points elsewhere.
+    if (again) await this.storage.delete(storageKey);
+    return this.answer(row);
+  }
+
+  private async answer(row: AttachmentRow): Promise<Attachment> {
+    return toAttachment(row, await this.users.people([row.uploadedBy]));
   }
 }
 
-/** Photos go with a draft, added by its maker. */
-function assertMayAddPhoto(
-  user: AuthUser,
-  rec: Pick<FieldRecordRow, 'createdBy' | 'status'>,
-): void {
+/** Photos are added by the maker of the record… */
+function assertMaker(user: AuthUser, rec: Pick<FieldRecordRow, 'createdBy'>): void {
   if (rec.createdBy !== user.id) throw forbidden('Only the maker of a record adds its photos.');
+}
+
+/** …while it is a draft. */
+function assertDraft(rec: Pick<FieldRecordRow, 'status'>): void {
   if (rec.status !== 'draft')
     throw conflict(`The record is ${rec.status}; photos go with a draft.`);
 }

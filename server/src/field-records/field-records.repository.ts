@@ -236,6 +236,17 @@ export class FieldRecordsRepository {
       .execute();
   }
 
+  /** The photo of this record with these bytes (by SHA-256), if it has one. */
+  photoWithContent(recordId: string, sha256: string, tx?: Tx) {
+    return on(this.db, tx)
+      .selectFrom('attachments')
+      .selectAll()
+      .where('fieldRecordId', '=', recordId)
+      .where('sha256', '=', sha256)
+      .orderBy('createdAt')
+      .executeTakeFirst();
+  }
+
   async countPhotos(tx: Tx, recordId: string): Promise<number> {
     const db = on(this.db, tx);
     const row = await db

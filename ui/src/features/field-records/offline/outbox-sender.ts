@@ -101,8 +101,9 @@ async function sendOne(
 }
 
 /**
- * Sends the photos of a record the server has, one at a time. Unlike the record, a photo sent
- * twice is stored twice, so a photo is marked sent as soon as the server answers.
+ * Sends the photos of a record the server has, one at a time, each marked sent as soon as the
+ * server answers. A photo whose answer was lost is sent again on the next round: the server knows
+ * it by its content and answers with the photo it already filed.
  */
 async function sendPhotos(
   id: string,
