@@ -224,6 +224,9 @@ export async function down(db: Kysely<any>): Promise<void> {
   await sql`drop function if exists field_record_parts_guard()`.execute(db);
   await sql`drop function if exists field_records_guard()`.execute(db);
   await sql`alter table users drop constraint users_role_check`.execute(db);
+  // The schema below this one has no technician role: technicians keep their accounts and read
+  // only (the least a role may do), rather than the step back failing on them.
+  await sql`update users set role = 'viewer' where role = 'technician'`.execute(db);
   await sql`alter table users add constraint users_role_check
     check (role in ('engineer', 'checker', 'viewer', 'admin'))`.execute(db);
 }

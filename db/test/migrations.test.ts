@@ -112,7 +112,18 @@ describe('migrations', () => {
     await db.deleteFrom('users').execute();
   });
 
-  it('go down to an empty schema, and up again', async () => {
+  it('go down to an empty schema, and up again, also with a technician signed up', async () => {
+    // The role came with the field records; stepping back below them must not fail on one.
+    await db
+      .insertInto('users')
+      .values({
+        email: 'fitter@holdfast.test',
+        display_name: 'Test Fitter',
+        initials: 'TF',
+        role: 'technician',
+        password_hash: 'x',
+      })
+      .execute();
     const down = await migrateDownToEmpty(db);
     expect(down.every((r) => r.status === 'Success' && r.direction === 'Down')).toBe(true);
     expect((await tables(db)).filter((t) => !t.startsWith('kysely_'))).toEqual([]);
