@@ -22,7 +22,14 @@ describe('demo story', () => {
     ]);
     const audit = await suite.ctx.db.selectFrom('auditEvents').select('at').execute();
     expect(audit.filter((e) => e.at.getTime() > Date.now())).toEqual([]);
-    expect(Math.max(...audit.map((e) => daysAgo(e.at)))).toBe(200);
+    // The plant was registered ten days before its oldest sheet (200 days ago) was begun.
+    expect(Math.max(...audit.map((e) => daysAgo(e.at)))).toBe(210);
+    const register = await Promise.all(
+      (['sites', 'machines', 'brakePositions'] as const).map((t) =>
+        suite.ctx.db.selectFrom(t).select('createdAt').execute(),
+      ),
+    );
+    expect(new Set(register.flat().map((r) => daysAgo(r.createdAt)))).toEqual(new Set([210]));
     expect(await suite.ctx.db.selectFrom('outbox').select('id').execute()).toEqual([]);
   });
 

@@ -34,6 +34,21 @@ export class DemoHistoryRepository {
   }
 
   /**
+   * Dates the register made since `since` (sites, machines, brake positions and their audit
+   * events) at `at`, before the first sheet of the story.
+   */
+  async dateRegister(since: Date, at: Date): Promise<void> {
+    await this.unguarded(['audit_events'], async (trx) => {
+      for (const table of ['sites', 'machines', 'brake_positions']) {
+        await sql`update ${sql.table(table)} set created_at = ${at}
+          where created_at >= ${since}`.execute(trx);
+      }
+      await sql`update audit_events set at = ${at} where at >= ${since}`.execute(trx);
+      await dropMail(trx, since);
+    });
+  }
+
+  /**
    * Dates one revision's steps (made since `since`) at `at`: the revision's own dates, the
    * superseding of its predecessor, its comments, the sheet's audit events of those steps and,
    * for the first revision, the sheet. The mail those steps queued is dropped (see dropMail).

@@ -62,6 +62,7 @@ export async function seedDemoPlant(app: INestApplicationContext): Promise<MadeR
   const history = demoHistory(app);
   if (await history.siteExists(demoSite.code)) return [];
   const person = await demoPeople(app);
+  const since = await history.mark();
   const register = app.get(RegisterService);
   const planner = person('engineer@holdfast.test');
   const site = await register.createSite(planner, createSiteSchema.parse(demoSite));
@@ -79,6 +80,9 @@ export async function seedDemoPlant(app: INestApplicationContext): Promise<MadeR
       positions.set(`${m.tag}/${p.tag}`, made.id);
     }
   }
+  // The plant was registered before its first sheet was begun.
+  const firstSheet = Math.max(...demoSheets.flatMap((s) => s.revisions.map((r) => r.daysAgo)));
+  await history.dateRegister(since, new Date(Date.now() - (firstSheet + 10) * DAY));
   const made: MadeRevision[] = [];
   for (const sheet of demoSheets) {
     const positionId = positions.get(`${sheet.machine}/${sheet.position}`);
