@@ -133,6 +133,7 @@ describe('a signed field record keeps the judgement it was signed with', () => {
     expect(text).toMatch(/± 0\.50* mm/);
     expect(text).not.toMatch(/± 0\.10* mm/);
     expect(text).not.toMatch(/\bOUT\b/);
+    expect(text).toContain('within');
   });
 
   async function settingIndex(revisionId: string, key: string): Promise<number> {

@@ -29,7 +29,7 @@ export function FieldRecordDocument(props: {
   const val = (v: number | null, dim: string) =>
     v === null ? '—' : qty(v, dim as Dimension, system);
   const verdict = (m: FieldRecord['measurements'][number]) =>
-    m.asLeftVerdict ? (m.asLeftVerdict.status === 'in' ? 'in' : 'OUT') : '—';
+    m.asLeftVerdict ? (m.asLeftVerdict.status === 'in' ? 'within' : 'OUT') : '—';
   const flags = [
     r.flags.superseded && 'The revision this brake was set to has since been superseded.',
     r.flags.underReview && 'The revision this brake was set to is under review.',
@@ -64,7 +64,8 @@ export function FieldRecordDocument(props: {
             { title: 'Tolerance', flex: 1.3 },
             { title: 'As found', flex: 1.2, align: 'right' },
             { title: 'As left', flex: 1.2, align: 'right' },
-            { title: 'In tol.', width: 34 },
+            // "within", not "in": beside lengths, "in" reads as inches.
+            { title: 'As left is', width: 38 },
           ]}
           rows={r.measurements.map((m) => [
             m.label,
