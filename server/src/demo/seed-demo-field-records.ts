@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import type { INestApplicationContext } from '@nestjs/common';
 import { createFieldRecordSchema, inspectionIntervalSchema, type User } from '@holdfast/shared';
+import { FieldRecordSigningService } from '../field-records/field-record-signing.service.js';
 import { FieldRecordsService } from '../field-records/field-records.service.js';
 import { InspectionScheduleService } from '../field-records/inspection-schedule.service.js';
 import { demoHistory } from './demo-history.repository.js';
@@ -148,6 +149,7 @@ async function addVisits(
   );
   if (!rev) throw new Error(`the demo has no ${state} ${sheetType} revision on ${tag}`);
   const records = app.get(FieldRecordsService);
+  const signatures = app.get(FieldRecordSigningService);
   const history = demoHistory(app);
   const onCard = new Set((await records.form(tech, rev.id)).targets.map((t) => t.settingKey));
   for (const v of visits) {
@@ -192,8 +194,8 @@ async function addVisits(
         checks,
       }),
     );
-    await records.sign(tech, record.id);
-    if (v.countersign) await records.countersign(engineer, record.id, '');
+    await signatures.sign(tech, record.id);
+    if (v.countersign) await signatures.countersign(engineer, record.id, '');
     const countersigned = v.countersign ? new Date(at.getTime() + DAY) : null;
     await history.dateFieldRecord(record.id, since, at, countersigned);
   }

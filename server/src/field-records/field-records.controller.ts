@@ -35,6 +35,7 @@ import { UuidParamPipe } from '../common/pipes/uuid-param.pipe.js';
 import { ZodValidationPipe } from '../common/pipes/zod-validation.pipe.js';
 import { FieldRecordPhotosService } from './field-record-photos.service.js';
 import { FieldRecordsService } from './field-records.service.js';
+import { FieldRecordSigningService } from './field-record-signing.service.js';
 import { InspectionScheduleService } from './inspection-schedule.service.js';
 
 /** Who records field work: technicians (fitters) and engineers (checkers inherit). */
@@ -46,6 +47,7 @@ const RECORDERS = ['technician', 'engineer'] as const;
 export class FieldRecordsController {
   constructor(
     private readonly records: FieldRecordsService,
+    private readonly signatures: FieldRecordSigningService,
     private readonly schedule: InspectionScheduleService,
     private readonly photos: FieldRecordPhotosService,
   ) {}
@@ -107,7 +109,7 @@ export class FieldRecordsController {
     @Param('id', UuidParamPipe) id: string,
     @Body(new ZodValidationPipe(signFieldRecordSchema)) _input: object,
   ): Promise<FieldRecord> {
-    return this.records.sign(user, id);
+    return this.signatures.sign(user, id);
   }
 
   @Post(apiRoutes.fieldRecords.countersign.path)
@@ -118,7 +120,7 @@ export class FieldRecordsController {
     @Param('id', UuidParamPipe) id: string,
     @Body(new ZodValidationPipe(countersignFieldRecordSchema)) input: { note: string },
   ): Promise<FieldRecord> {
-    return this.records.countersign(user, id, input.note);
+    return this.signatures.countersign(user, id, input.note);
   }
 
   @Get(apiRoutes.fieldRecords.attachments.path)

@@ -2,6 +2,7 @@ import { Module } from '@nestjs/common';
 import { StorageModule } from '../storage/storage.module.js';
 import { UsersModule } from '../users/users.module.js';
 import { FieldRecordSigningRepository } from './field-record-signing.repository.js';
+import { FieldRecordSigningService } from './field-record-signing.service.js';
 import { FieldRecordPhotosService } from './field-record-photos.service.js';
 import { FieldRecordsController } from './field-records.controller.js';
 import { FieldRecordsRepository } from './field-records.repository.js';
@@ -18,11 +19,12 @@ import { PositionFieldController } from './position-field.controller.js';
     FieldRecordsRepository,
     FieldRecordSigningRepository,
     FieldRecordsService,
+    FieldRecordSigningService,
     InspectionScheduleRepository,
     InspectionScheduleService,
     InspectionRemindersJob,
     FieldRecordPhotosService,
   ],
-  exports: [FieldRecordsRepository, FieldRecordsService],
+  exports: [FieldRecordsRepository, FieldRecordsService, FieldRecordSigningService],
 })
 export class FieldRecordsModule {}

@@ -3,22 +3,16 @@ import type {
   CreateFieldRecordInput,
   FieldForm,
   FieldIssue,
-  FieldRecordVerify,
   FieldMeasurementInput,
   FieldRecord,
   FieldRecordSummary,
   UpdateFieldRecordInput,
 } from '@holdfast/shared';
-import { fieldCheckKeys } from '@holdfast/shared';
 import type { AuthUser } from '../auth/auth-user.js';
-import { effectiveRoles } from '../auth/policy.js';
 import { AuditService } from '../audit/audit.service.js';
 import { badRequest, conflict, forbidden, notFound } from '../common/errors/api-exception.js';
-import { AppConfig } from '../config/app-config.js';
 import { type Tx, UnitOfWork } from '../database/unit-of-work.js';
-import { OutboxService } from '../outbox/outbox.service.js';
 import { UsersRepository } from '../users/users.repository.js';
-import { newVerificationCode } from '../revisions/revision-codes.js';
 import { canReadContent } from '../revisions/revision-access.js';
 import { toFieldRecord } from './field-record-mapper.js';
 import {
@@ -26,49 +20,27 @@ import {
   type RecordRevision,
   type StoredFieldRecord,
 } from './field-records.repository.js';
-import { FieldRecordSigningRepository } from './field-record-signing.repository.js';
-import { outOfToleranceMail } from './field-notifications.js';
 import {
-  checkLabels,
   fieldTargets,
   formChecks,
   judgeMeasurement,
   outOfToleranceAsLeft,
 } from '../calc/field-targets.js';
 
-const invalid = (fields: FieldIssue[]) => badRequest('Some fields are not valid.', fields);
+export const invalid = (fields: FieldIssue[]) => badRequest('Some fields are not valid.', fields);
 
 /**
- * A signature says every check item was looked at: each needs an answer (OK, not OK or N/A)
- * before signing, though a draft may hold only some. The form asks the same; this is the rule.
- */
-function unansweredChecks(sheetType: string, checks: FieldRecord['checks']): FieldIssue[] {
-  const answered = new Set(checks.map((c) => c.key));
-  const labels = checkLabels(sheetType);
-  return fieldCheckKeys
-    .filter((key) => !answered.has(key))
-    .map((key) => ({
-      path: `checks.${key}`,
-      message: `${labels[key]}: not answered; answer every check before signing`,
-    }));
-}
-
-/**
- * The rules of field records: made against an approved revision of the position's sheet; a
- * draft is edited by whoever made it; the maker signs, a plant engineer (engineer or checker)
- * who did not sign countersigns. An as-left value outside its tolerance needs a reason before
- * signing, and signing it tells the sheet's owner and the plant engineers.
+ * The rules of field records up to signing: made against an approved revision of the position's
+ * sheet, a draft edited only by whoever made it. Signing, countersigning and the public answer
+ * for a printed code are FieldRecordSigningService's.
  */
 @Injectable()
 export class FieldRecordsService {
   constructor(
     private readonly units: UnitOfWork,
     private readonly repo: FieldRecordsRepository,
-    private readonly signing: FieldRecordSigningRepository,
     private readonly users: UsersRepository,
     private readonly audit: AuditService,
-    private readonly outbox: OutboxService,
-    private readonly config: AppConfig,
   ) {}
 
   /** A revision a field record may be made against: one that was released (approved). */
@@ -211,19 +183,9 @@ export class FieldRecordsService {
     return { record: await this.present(s), created: false };
   }
 
-  private async editable(tx: Tx, user: AuthUser, id: string) {
-    const row = await this.repo.lockForUpdate(tx, id);
-    if (!row) throw notFound('Field record not found.');
-    if (row.createdBy !== user.id)
-      throw forbidden('Only the person who made this record may change or sign it.');
-    if (row.status !== 'draft')
-      throw conflict(`The record is ${row.status} and can no longer change.`);
-    return row;
-  }
-
   async update(user: AuthUser, id: string, input: UpdateFieldRecordInput): Promise<FieldRecord> {
     await this.units.run(async (tx) => {
-      const row = await this.editable(tx, user, id);
+      const row = await lockOwnDraft(this.repo, tx, user, id);
       const rev = (await this.repo.revision(row.revisionId, tx))!;
       const stored = (await this.repo.load(id, tx))!;
       const measurements =
@@ -256,143 +218,20 @@ export class FieldRecordsService {
     });
     return this.get(id);
   }
+}
 
-  async sign(user: AuthUser, id: string): Promise<FieldRecord> {
-    await this.units.run(async (tx) => {
-      const row = await this.editable(tx, user, id);
-      const stored = (await this.repo.load(id, tx))!;
-      const rev = (await this.repo.revision(row.revisionId, tx))!;
-      const record = toFieldRecord(stored, rev, '', new Map());
-      const out = outOfToleranceAsLeft(record.measurements);
-      const missing = out.filter((i) => record.measurements[i]!.reason.trim() === '');
-      const issues: FieldIssue[] = [
-        ...missing.map((i) => ({
-          path: `measurements.${i}.reason`,
-          message: 'as left is outside the tolerance: give the reason before signing',
-        })),
-        ...unansweredChecks(rev.sheetType, record.checks),
-      ];
-      if (issues.length > 0) throw invalid(issues);
-      // The judgement the technician signs is stored with the measurements, while the record is
-      // still a draft: from here on the database refuses to change it, and reads use it.
-      await this.repo.replaceMeasurements(tx, id, record.measurements);
-      let code = newVerificationCode(id);
-      while (await this.signing.verificationCodeTaken(code, tx)) code = newVerificationCode(id);
-      await this.repo.update(tx, id, {
-        status: 'signed',
-        verificationCode: code,
-        outOfTolerance: out.length > 0,
-      });
-      await this.signing.addSignature(
-        {
-          recordId: id,
-          kind: 'technician',
-          userId: user.id,
-          displayName: user.displayName,
-          initials: user.initials,
-        },
-        tx,
-      );
-      await this.audit.record(tx, {
-        actorId: user.id,
-        action: 'field-record.signed',
-        entity: 'field-record',
-        entityId: id,
-        sheetId: rev.sheetId,
-        after: { status: 'signed', outOfTolerance: out.length },
-      });
-      if (out.length > 0) {
-        const tag = (await this.repo.positionTag(row.positionId, tx)) ?? '';
-        const lines = out.map((i) => {
-          const m = record.measurements[i]!;
-          const v = m.asLeftVerdict!;
-          return `${m.label}: off by ${v.display.deviation.toPrecision(3)} ${v.display.label} — ${m.reason}`;
-        });
-        await this.outbox.enqueueMail(
-          tx,
-          outOfToleranceMail(
-            this.config.settings.PUBLIC_URL,
-            {
-              recordId: id,
-              positionTag: tag,
-              documentNumber: rev.documentNumber,
-              revisionLabel: rev.label,
-            },
-            await this.signing.notifyEmails(rev.ownerId, user.id, tx),
-            user.displayName,
-            lines,
-          ),
-        );
-      }
-    });
-    return this.get(id);
-  }
-
-  async countersign(user: AuthUser, id: string, note: string): Promise<FieldRecord> {
-    if (!effectiveRoles(user.role).includes('engineer')) {
-      throw forbidden('A plant engineer (engineer or checker) countersigns.');
-    }
-    await this.units.run(async (tx) => {
-      const row = await this.repo.lockForUpdate(tx, id);
-      if (!row) throw notFound('Field record not found.');
-      if (row.status !== 'signed') {
-        throw conflict(
-          row.status === 'draft'
-            ? 'The record must be signed by the technician first.'
-            : 'The record is already countersigned.',
-        );
-      }
-      const stored = (await this.repo.load(id, tx))!;
-      const signer = stored.signatures.find((s) => s.kind === 'technician');
-      if (signer?.userId === user.id || row.createdBy === user.id) {
-        throw forbidden(
-          'Someone other than the person who made and signed the record countersigns it.',
-        );
-      }
-      await this.signing.addSignature(
-        {
-          recordId: id,
-          kind: 'countersign',
-          userId: user.id,
-          displayName: user.displayName,
-          initials: user.initials,
-          note,
-        },
-        tx,
-      );
-      await this.repo.update(tx, id, { status: 'countersigned' });
-      const rev = (await this.repo.revision(row.revisionId, tx))!;
-      await this.audit.record(tx, {
-        actorId: user.id,
-        action: 'field-record.countersigned',
-        entity: 'field-record',
-        entityId: id,
-        sheetId: rev.sheetId,
-        after: { status: 'countersigned' },
-      });
-    });
-    return this.get(id);
-  }
-
-  /** The public answer for a code printed on a field record; undefined when none carries it. */
-  async verify(code: string): Promise<FieldRecordVerify | undefined> {
-    const hit = await this.signing.byVerificationCode(code);
-    if (!hit) return undefined;
-    const r = await this.get(hit.id);
-    return {
-      kind: 'field-record',
-      recordKind: r.kind,
-      positionTag: r.positionTag,
-      performedAt: r.performedAt,
-      status: r.status,
-      signedAt: r.signed?.at ?? null,
-      countersignedAt: r.countersigned?.at ?? null,
-      setTo: {
-        documentNumber: r.documentNumber,
-        revisionLabel: r.revisionLabel,
-        current: !r.flags.superseded,
-        underReview: r.flags.underReview,
-      },
-    };
-  }
+/** Locks a draft for a change or a signature by its maker; anything else is refused. */
+export async function lockOwnDraft(
+  repo: FieldRecordsRepository,
+  tx: Tx,
+  user: AuthUser,
+  id: string,
+) {
+  const row = await repo.lockForUpdate(tx, id);
+  if (!row) throw notFound('Field record not found.');
+  if (row.createdBy !== user.id)
+    throw forbidden('Only the person who made this record may change or sign it.');
+  if (row.status !== 'draft')
+    throw conflict(`The record is ${row.status} and can no longer change.`);
+  return row;
 }

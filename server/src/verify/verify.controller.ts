@@ -7,7 +7,7 @@ import {
   type FieldRecordVerify,
   type VerifyResult,
 } from '@holdfast/shared';
-import { FieldRecordsService } from '../field-records/field-records.service.js';
+import { FieldRecordSigningService } from '../field-records/field-record-signing.service.js';
 import { Public } from '../auth/policy.js';
 import { ZodValidationPipe } from '../common/pipes/zod-validation.pipe.js';
 import { VerifyThrottlerGuard, verifyLimit } from './verify-throttler.guard.js';
@@ -18,7 +18,7 @@ import { VerifyService } from './verify.service.js';
 export class VerifyController {
   constructor(
     private readonly verifier: VerifyService,
-    private readonly fieldRecords: FieldRecordsService,
+    private readonly fieldRecords: FieldRecordSigningService,
   ) {}
 
   @Get(apiRoutes.verify.byCode.path)
