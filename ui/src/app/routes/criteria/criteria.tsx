@@ -30,6 +30,7 @@ import { CriteriaValuesTable } from '../../../features/criteria/components/crite
 import { ImpactList } from '../../../features/criteria/components/impact-list';
 import { ConfirmValueDialog } from '../../../features/criteria/components/confirm-value-dialog';
 import { CreateCriteriaSetDialog } from '../../../features/criteria/components/create-criteria-set-dialog';
+import { isoDay } from '../../../lib/dates';
 
 export const handle: RouteHandle = { title: 'Criteria sets', wide: true, caution: true };
 
@@ -135,8 +136,7 @@ export function Component() {
                       {detail.data.description}
                     </Text>
                     <Text size="xs" c="dimmed" mt={4}>
-                      Version {detail.data.version}, published{' '}
-                      {new Date(detail.data.publishedAt).toLocaleDateString('en-GB')}
+                      Version {detail.data.version}, published {isoDay(detail.data.publishedAt)}
                       {detail.data.publishedBy ? ` by ${detail.data.publishedBy.displayName}` : ''}
                       {detail.data.note ? ` — ${detail.data.note}` : ''}
                     </Text>

@@ -17,6 +17,7 @@ import {
   RESERVE_KEY,
 } from '../../../features/field-records/components/wear-series';
 import { useFieldForm } from '../../../features/field-records/api/get-field-form';
+import { isoDay } from '../../../lib/dates';
 
 export const handle: RouteHandle = { title: 'Field records' };
 
@@ -27,17 +28,16 @@ function AtAGlance({ state }: { state: PositionFieldState }) {
       <Text>
         Set to:{' '}
         {state.setTo
-          ? `${state.setTo.documentNumber} rev. ${state.setTo.revisionLabel} (${state.setTo.performedAt.slice(0, 10)})${state.setTo.superseded ? ', superseded since' : ''}`
+          ? `${state.setTo.documentNumber} rev. ${state.setTo.revisionLabel} (${isoDay(state.setTo.performedAt)})${state.setTo.superseded ? ', superseded since' : ''}`
           : 'not recorded'}
       </Text>
       <Text>
-        Last inspected:{' '}
-        {state.lastInspected ? state.lastInspected.performedAt.slice(0, 10) : 'never'}
+        Last inspected: {state.lastInspected ? isoDay(state.lastInspected.performedAt) : 'never'}
       </Text>
       <Text c={due?.overdue ? 'fail.8' : undefined} fw={due?.overdue ? 700 : undefined}>
         Next due:{' '}
         {due?.date
-          ? due.date.slice(0, 10)
+          ? isoDay(due.date)
           : due?.meterHours != null
             ? `at ${Math.floor(due.meterHours)} h`
             : 'no interval set'}

@@ -4,6 +4,7 @@ import type { RevisionSummary, SheetDetail } from '@holdfast/shared';
 import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
 import { StateBadge } from '../../../features/sheets/components/state-badge';
 import type { ReactNode } from 'react';
+import { isoDay } from '../../../lib/dates';
 
 /** Number, title, where the brake sits, and the state of the revision on screen. */
 export function SheetHeader({
@@ -50,7 +51,7 @@ export function SheetHeader({
             {sheet.approved ? (
               <Text size="xs" c="dimmed">
                 In force: revision {sheet.approved.label}, approved{' '}
-                {new Date(sheet.approved.approvedAt).toLocaleDateString('en-GB')}
+                {isoDay(sheet.approved.approvedAt)}
               </Text>
             ) : (
               <Text size="xs" c="dimmed">

@@ -20,6 +20,7 @@ import { isApiRequestError, errorMessage } from '../../../lib/api-client';
 import type { RouteHandle } from '../../../lib/route-handle';
 import { useVerification } from '../../../features/verify/api/get-verification';
 import { stateLabel } from '../../../lib/state-label';
+import { isoDay } from '../../../lib/dates';
 
 export const handle: RouteHandle = { title: 'Check a printout' };
 
@@ -67,17 +68,17 @@ function Result({ code }: { code: string }) {
         <Text size="sm">{r.title}</Text>
         <Text size="sm">
           State: {stateLabel(r.state)}
-          {r.approvedAt ? `, approved ${new Date(r.approvedAt).toLocaleDateString('en-GB')}` : ''}
+          {r.approvedAt ? `, approved ${isoDay(r.approvedAt)}` : ''}
         </Text>
         {r.underReview ? (
           <Text size="sm" fw={600} data-under-review>
-            {`approved; under review since ${new Date(r.underReview.since).toLocaleDateString('en-GB')}: criteria ${r.underReview.criteriaSetName} v${r.underReview.criteriaSetVersion}`}
+            {`approved; under review since ${isoDay(r.underReview.since)}: criteria ${r.underReview.criteriaSetName} v${r.underReview.criteriaSetVersion}`}
           </Text>
         ) : null}
         {r.newerApproved ? (
           <Text size="sm" fw={600}>
             Revision {r.newerApproved.revisionLabel} replaced it on{' '}
-            {new Date(r.newerApproved.approvedAt).toLocaleDateString('en-GB')}.
+            {isoDay(r.newerApproved.approvedAt)}.
           </Text>
         ) : null}
       </Stack>

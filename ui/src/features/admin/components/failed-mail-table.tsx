@@ -31,7 +31,12 @@ export function FailedMailTable() {
           {data.items.map((mail) => (
             <Table.Tr key={mail.id}>
               <Table.Td>
-                <Text size="sm">{new Date(mail.createdAt).toLocaleString()}</Text>
+                <Text size="sm">
+                  {new Date(mail.createdAt).toLocaleString('en-GB', {
+                    dateStyle: 'medium',
+                    timeStyle: 'short',
+                  })}
+                </Text>
               </Table.Td>
               <Table.Td>
                 <Text size="sm">{mail.to.join(', ')}</Text>

@@ -20,6 +20,7 @@ import { useAttachments } from '../api/get-attachments';
 import { useDownloadAttachment } from '../api/download-attachment';
 import { useUploadAttachment } from '../api/upload-attachment';
 import { formatBytes } from '../../../lib/format-bytes';
+import { isoDay } from '../../../lib/dates';
 
 interface Upload {
   name: string;
@@ -155,7 +156,7 @@ export function AttachmentsPanel({
                 </Table.Td>
                 <Table.Td c="dimmed">{formatBytes(a.size)}</Table.Td>
                 <Table.Td c="dimmed">{a.uploadedBy.initials}</Table.Td>
-                <Table.Td c="dimmed">{new Date(a.createdAt).toLocaleDateString('en-GB')}</Table.Td>
+                <Table.Td c="dimmed">{isoDay(a.createdAt)}</Table.Td>
               </Table.Tr>
             ))}
           </Table.Tbody>

@@ -31,7 +31,7 @@ describe('UnderReviewBanner', () => {
     renderWithProviders(<UnderReviewBanner revisionId={REV} approved />);
     expect(
       await screen.findByText(
-        'Under review since 01/12/2026: criteria Crane hoist holding brake v2',
+        'Under review since 2026-12-01: criteria Crane hoist holding brake v2',
       ),
     ).toBeInTheDocument();
     expect(screen.getByText(/Lining p·v at set/)).toBeInTheDocument();

@@ -6,8 +6,7 @@ import { formatNumber } from '@holdfast/calc';
 import { ActionDialog } from '../../../components/action-dialog';
 import { useCriteriaReview } from '../api/get-criteria-review';
 import { useDisposeReview } from '../api/dispose-review';
-
-const day = (iso: string) => new Date(iso).toLocaleDateString('en-GB');
+import { isoDay } from '../../../lib/dates';
 
 /** "Under review since …": the approval fails a newer criteria version; how it can be cleared. */
 function OpenReview({
@@ -28,7 +27,7 @@ function OpenReview({
       color="fail"
       variant="light"
       icon={<IconAlertTriangle size={18} />}
-      title={`${revisionLabel ? `Approved revision ${revisionLabel}: under review` : 'Under review'} since ${day(review.flaggedAt)}: criteria ${review.criteriaSetName} v${review.criteriaSetVersion}`}
+      title={`${revisionLabel ? `Approved revision ${revisionLabel}: under review` : 'Under review'} since ${isoDay(review.flaggedAt)}: criteria ${review.criteriaSetName} v${review.criteriaSetVersion}`}
       data-under-review
       role="status"
     >
@@ -116,7 +115,7 @@ export function UnderReviewBanner({
         >
           <Text size="sm">{c.disposition}</Text>
           <Text size="xs" c="dimmed" mt={4}>
-            {c.clearedBy?.displayName ?? 'A checker'}, {c.clearedAt ? day(c.clearedAt) : ''}
+            {c.clearedBy?.displayName ?? 'A checker'}, {c.clearedAt ? isoDay(c.clearedAt) : ''}
           </Text>
         </Alert>
       ))}

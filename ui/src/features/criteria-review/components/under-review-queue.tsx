@@ -1,6 +1,7 @@
 import { Anchor, Badge, Group, Paper, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { Link } from 'react-router-dom';
 import { useUnderReviewQueue } from '../api/get-under-review-queue';
+import { isoDay } from '../../../lib/dates';
 
 /**
  * Approved sheets I own or checked that a newer criteria version makes fail. Hidden when there
@@ -36,8 +37,8 @@ export function UnderReviewQueue() {
               rev. {item.revisionLabel} {item.title}
             </Anchor>
             <Text size="xs" c="dimmed">
-              since {new Date(item.flaggedAt).toLocaleDateString('en-GB')}: criteria{' '}
-              {item.criteriaSetName} v{item.criteriaSetVersion}
+              since {isoDay(item.flaggedAt)}: criteria {item.criteriaSetName} v
+              {item.criteriaSetVersion}
             </Text>
           </li>
         ))}

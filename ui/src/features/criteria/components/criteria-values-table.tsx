@@ -3,6 +3,7 @@ import type { CriterionConfirmation, CriterionValueInput } from '@holdfast/share
 import { criterionSpec } from '@holdfast/calc';
 import { presentSI } from '../../../components/calc/utils/units';
 import { fitWidth } from '../../../lib/fit-width';
+import { isoDay } from '../../../lib/dates';
 
 /**
  * A stored criterion (SI) in the trade's units, e.g. 2 100 000 Pa·m/s → 2.100 MPa·m/s. Editing
@@ -54,8 +55,7 @@ function Standing({ v, c }: { v: CriterionValueInput; c: CriterionConfirmation |
           Confirmed
         </Badge>
         <Text size="xs" c="dimmed">
-          {c.document}, {c.clause} — {c.confirmedBy.initials},{' '}
-          {new Date(c.confirmedAt).toLocaleDateString('en-GB')}
+          {c.document}, {c.clause} — {c.confirmedBy.initials}, {isoDay(c.confirmedAt)}
         </Text>
       </Stack>
     );

@@ -69,7 +69,7 @@ export function DeviceOutboxNotice({ user }: { user: OutboxOwner }) {
           <List size="sm" mt={4}>
             {unassigned.map((e) => (
               <List.Item key={e.id}>
-                {`${fieldRecordKindLabels[e.payload.kind]}, ${new Date(e.payload.performedAt).toLocaleString()}${e.payload.findings ? `: ${e.payload.findings}` : ''}`}
+                {`${fieldRecordKindLabels[e.payload.kind]}, ${new Date(e.payload.performedAt).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' })}${e.payload.findings ? `: ${e.payload.findings}` : ''}`}
               </List.Item>
             ))}
           </List>

@@ -2,9 +2,10 @@ import { Anchor, Badge, Paper, Stack, Text, Title } from '@mantine/core';
 import { Link } from 'react-router-dom';
 import type { DueInspection } from '@holdfast/shared';
 import { useDueInspections } from '../api/get-due-inspections';
+import { isoDay } from '../../../lib/dates';
 
 function dueText(d: DueInspection): string {
-  if (d.nextDue.date) return `due ${d.nextDue.date.slice(0, 10)}`;
+  if (d.nextDue.date) return `due ${isoDay(d.nextDue.date)}`;
   if (d.nextDue.meterHours !== null) return `due at ${Math.floor(d.nextDue.meterHours)} h`;
   return 'no interval set';
 }
@@ -50,7 +51,7 @@ export function DueInspectionsPanel() {
         ))}
         {awaitingCountersign.map((r) => (
           <Text size="sm" key={r.recordId}>
-            {r.positionTag}: record of {r.performedAt.slice(0, 10)} awaits your countersignature
+            {r.positionTag}: record of {isoDay(r.performedAt)} awaits your countersignature
             {r.outOfTolerance ? ' (out of tolerance)' : ''}
           </Text>
         ))}

@@ -3,6 +3,7 @@ import { Link } from 'react-router-dom';
 import { fieldRecordKindLabels, type FieldRecordStatus } from '@holdfast/shared';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import { useFieldRecords } from '../api/get-field-records';
+import { isoDay } from '../../../lib/dates';
 
 const titles: Record<Exclude<FieldRecordStatus, 'countersigned'>, string> = {
   draft: 'Records not yet signed',
@@ -35,8 +36,8 @@ export function OpenRecords({ status }: { status: 'draft' | 'signed' }) {
               <Anchor component={Link} to={`/positions/${r.positionId}/field`} underline="always">
                 {r.positionTag}
               </Anchor>{' '}
-              {r.performedAt.slice(0, 10)} · {fieldRecordKindLabels[r.kind]} · {r.documentNumber}{' '}
-              rev. {r.revisionLabel}
+              {isoDay(r.performedAt)} · {fieldRecordKindLabels[r.kind]} · {r.documentNumber} rev.{' '}
+              {r.revisionLabel}
               {r.outOfTolerance ? (
                 <Badge ml="xs" color="fail" size="sm">
                   out of tolerance

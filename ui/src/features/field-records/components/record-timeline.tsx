@@ -2,6 +2,7 @@ import { Badge, Button, Group, Paper, Stack, Text } from '@mantine/core';
 import { fieldRecordKindLabels, type FieldRecord } from '@holdfast/shared';
 import { errorMessage } from '../../../lib/api-client';
 import { useSignFieldRecord } from '../api/sign-field-record';
+import { isoDay } from '../../../lib/dates';
 
 const statusColour = { draft: 'gray', signed: 'steel', countersigned: 'pass' } as const;
 
@@ -19,7 +20,7 @@ export function RecordTimeline(props: {
         <Paper withBorder p="sm" radius="md" component="li" key={r.id} data-record={r.id}>
           <Group justify="space-between" wrap="wrap" gap="xs">
             <Text fw={600}>
-              {r.performedAt.slice(0, 10)} · {fieldRecordKindLabels[r.kind]}
+              {isoDay(r.performedAt)} · {fieldRecordKindLabels[r.kind]}
             </Text>
             <Group gap={4}>
               <Badge color={statusColour[r.status]}>{r.status}</Badge>

@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import { Anchor, Badge, Group, Paper, Stack, Text, Title } from '@mantine/core';
 import { Link } from 'react-router-dom';
 import type { QueueItem } from '@holdfast/shared';
+import { isoDay } from '../../../lib/dates';
 
 export interface QueueSectionProps {
   id: string;
@@ -51,8 +52,7 @@ export function QueueSection({ id, title, empty, items, renderState }: QueueSect
                     rev. {item.revisionLabel}
                   </Anchor>
                   <Text size="xs" c="dimmed">
-                    {item.title} · {item.author.displayName} ·{' '}
-                    {new Date(item.updatedAt).toLocaleDateString('en-GB')}
+                    {item.title} · {item.author.displayName} · {isoDay(item.updatedAt)}
                   </Text>
                 </div>
                 {renderState(item)}

@@ -4,6 +4,7 @@ import { Link } from 'react-router-dom';
 import type { SheetSummary } from '@holdfast/shared';
 import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
 import { StateBadge } from './state-badge';
+import { isoDay } from '../../../lib/dates';
 
 export type SortKey = 'documentNumber' | 'title' | 'updatedAt' | 'state';
 
@@ -109,7 +110,7 @@ export function SheetsTable({ items, sort, order, onSort, selected, onToggle }: 
                 )}
               </Table.Td>
               <Table.Td>{s.owner.initials}</Table.Td>
-              <Table.Td c="dimmed">{new Date(s.updatedAt).toLocaleDateString('en-GB')}</Table.Td>
+              <Table.Td c="dimmed">{isoDay(s.updatedAt)}</Table.Td>
             </Table.Tr>
           ))}
         </Table.Tbody>
