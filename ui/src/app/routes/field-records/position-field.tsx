@@ -28,7 +28,7 @@ function AtAGlance({ state }: { state: PositionFieldState }) {
       <Text>
         Set to:{' '}
         {state.setTo
-          ? `${state.setTo.documentNumber} rev. ${state.setTo.revisionLabel} (${isoDay(state.setTo.performedAt)})${state.setTo.superseded ? ', superseded since' : ''}`
+          ? `${state.setTo.documentNumber} rev. ${state.setTo.revisionLabel} (${isoDay(state.setTo.performedAt)})${state.setTo.superseded ? ', since superseded' : ''}`
           : 'not recorded'}
       </Text>
       <Text>

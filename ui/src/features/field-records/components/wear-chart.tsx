@@ -1,15 +1,13 @@
 import { Paper, Text, Title } from '@mantine/core';
 import { LineChart } from '@mantine/charts';
 import { formatNumber, wearLineAt, type WearSeries } from '@holdfast/calc';
+import { isoDay } from '../../../lib/dates';
 import { dateOf, mmPerMonth } from './wear-series';
 
 const DAY_S = 86400;
 /** Whole days since 1970 of a series time in seconds: the chart's x axis. */
 const day = (s: number) => Math.round(s / DAY_S);
-const dateText = (dayNumber: number) =>
-  dateOf(dayNumber * DAY_S)
-    .toISOString()
-    .slice(0, 10);
+const dateText = (dayNumber: number) => isoDay(dateOf(dayNumber * DAY_S));
 /**
  * The wear rate to two significant figures and its standard error to one: readings are taken to
  * 0.1-0.5 mm, so further digits of either say nothing.
@@ -36,15 +34,22 @@ export function WearChart({ title, series }: { title: string; series: WearSeries
     for (const s of [first, last]) rows.push({ x: day(s), Fitted: wearLineAt(fit, s) * 1000 });
   }
   rows.sort((a, b) => a.x - b.x);
-  const referenceLines: { x?: number; y?: number; label: string; color: string }[] = [];
+  type Line = { x?: number; y?: number; label: string; color: string; at?: 'left' | 'right' };
+  const referenceLines: Line[] = [];
   if (minimum !== null)
     referenceLines.push({ y: minimum * 1000, label: 'minimum', color: 'fail.7' });
   if (crossing) {
+    // The interval's two ends, labelled outwards so the labels never sit on each other (for a
+    // vertical line recharts puts an insideTopRight label on the line's left side).
     referenceLines.push(
-      { x: day(crossing.lower), label: 'from', color: 'amber.8' },
-      { x: day(crossing.upper), label: 'to', color: 'amber.8' },
+      { x: day(crossing.lower), label: 'from', color: 'amber.8', at: 'left' },
+      { x: day(crossing.upper), label: 'to', color: 'amber.8', at: 'right' },
     );
   }
+  // The axis reaches past the end of the prediction interval, with room for its label.
+  const xFirst = rows[0]?.x ?? 0;
+  const xLast = Math.max(rows[rows.length - 1]?.x ?? 0, crossing ? day(crossing.upper) : 0);
+  const xPad = crossing ? Math.max(1, Math.round((xLast - xFirst) * 0.08)) : 0;
   return (
     <Paper p="sm" withBorder component="figure" m={0} aria-label={title}>
       <Title order={3} size="h5" mb="xs">
@@ -66,10 +71,17 @@ export function WearChart({ title, series }: { title: string; series: WearSeries
           yAxisLabel="mm"
           gridAxis="xy"
           valueFormatter={mmText}
-          xAxisProps={{ type: 'number', domain: ['dataMin', 'dataMax'], tickFormatter: dateText }}
+          xAxisProps={{
+            type: 'number',
+            domain: [xFirst, xLast + xPad],
+            tickFormatter: dateText,
+          }}
           referenceLines={referenceLines.map((l) => ({
             ...(l.x !== undefined ? { x: l.x } : { y: l.y }),
             label: l.label,
+            ...(l.at
+              ? { labelPosition: l.at === 'left' ? 'insideTopRight' : 'insideTopLeft' }
+              : {}),
             color: l.color,
             strokeDasharray: '6 4',
           }))}
@@ -79,7 +91,7 @@ export function WearChart({ title, series }: { title: string; series: WearSeries
         {fit && fit.kind === 'trend'
           ? `Wear rate ${rateText(fit.rate, fit.rateStandardError)} mm per 30 days (± one standard error, ${fit.n} readings).` +
             (crossing
-              ? ` Minimum reached about ${dateOf(crossing.at).toISOString().slice(0, 10)}, 95 % prediction interval ${dateOf(crossing.lower).toISOString().slice(0, 10)} to ${dateOf(crossing.upper).toISOString().slice(0, 10)}: plan the re-adjustment before the first date.`
+              ? ` Minimum reached about ${isoDay(dateOf(crossing.at))}, 95 % prediction interval ${isoDay(dateOf(crossing.lower))} to ${isoDay(dateOf(crossing.upper))}: plan the re-adjustment before the first date.`
               : '')
           : (series.note ?? 'No readings yet.')}
       </Text>
