@@ -5,7 +5,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { Page } from '../../../components/layouts/page';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import type { RouteHandle } from '../../../lib/route-handle';
-import { useCurrentUser } from '../../../lib/session';
+import { hasRole, useCurrentUser } from '../../../lib/session';
 import { registerQueryOptions, useRegister } from '../../../features/register/api/get-register';
 import { PositionRow } from '../../../features/register/components/position-row';
 import {
@@ -35,7 +35,8 @@ type Form = Omit<RegisterFormDialogProps, 'opened' | 'onClose'>;
 export function Component() {
   const register = useRegister();
   const user = useCurrentUser();
-  const canEdit = user.role !== 'viewer';
+  // Who the server lets change the register (register.controller.ts): not viewers, not fitters.
+  const canEdit = hasRole(user, 'engineer', 'checker', 'admin');
   const [form, setForm] = useState<Form | null>(null);
   const small = { size: 'compact-sm', variant: 'subtle' } as const;
 

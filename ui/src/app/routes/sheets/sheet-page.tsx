@@ -8,7 +8,7 @@ import type { RevisionSummary, SheetDetail, User } from '@holdfast/shared';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import { warmUpSheetType } from '../../../components/calc/utils/sheet-types';
 import type { RouteHandle } from '../../../lib/route-handle';
-import { useCurrentUser } from '../../../lib/session';
+import { hasRole, useCurrentUser } from '../../../lib/session';
 import { revisionQueryOptions } from '../../../features/revisions/api/get-revision';
 import { sheetQueryOptions, useSheet } from '../../../features/sheets/api/get-sheet';
 import { NewRevisionDialog } from '../../../features/sheets/components/new-revision-dialog';
@@ -31,12 +31,16 @@ export function clientLoader(queryClient: QueryClient) {
 
 const FROZEN = new Set(['approved', 'superseded']);
 
-/** What this user sees of the history: viewers only approved and superseded revisions. */
+/**
+ * What this user sees of the history: engineers and checkers every revision; everyone else
+ * (viewers, fitters, admins) the released ones only, as the server lets them read
+ * (canReadContent in server/src/revisions/revision-access.ts).
+ */
 export function visibleRevisions(sheet: SheetDetail, user: User): RevisionSummary[] {
-  return user.role === 'viewer'
-    ? sheet.revisions.filter((r) => FROZEN.has(r.state))
-    : sheet.revisions;
+  return readsDrafts(user) ? sheet.revisions : sheet.revisions.filter((r) => FROZEN.has(r.state));
 }
+
+const readsDrafts = (user: User) => hasRole(user, 'engineer', 'checker');
 
 export function Component() {
   const { sheetId = '', revisionId } = useParams();
@@ -62,7 +66,7 @@ export function Component() {
 
   const sheet = query.data;
   const revisions = visibleRevisions(sheet, user);
-  const selectedId = revisionId ?? (user.role === 'viewer' ? sheet.approved?.id : sheet.latest.id);
+  const selectedId = revisionId ?? (readsDrafts(user) ? sheet.latest.id : sheet.approved?.id);
   const selected = revisions.find((r) => r.id === selectedId);
   const index = revisions.findIndex((r) => r.id === selectedId);
   const previous = index > 0 ? revisions[index - 1] : undefined;
@@ -137,9 +141,9 @@ export function Component() {
           ) : (
             <Paper p="lg">
               <Text>
-                {user.role === 'viewer'
-                  ? 'This sheet has no approved revision yet. Viewers see approved revisions only.'
-                  : 'This revision is not part of this sheet.'}
+                {readsDrafts(user)
+                  ? 'This revision is not part of this sheet.'
+                  : 'This sheet has no approved revision yet. Only engineers and checkers see revisions before approval.'}
               </Text>
             </Paper>
           )}
