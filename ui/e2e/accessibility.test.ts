@@ -115,6 +115,19 @@ describe.skipIf(skipReason !== null)('accessibility of the main screens', () => 
       ready: heading('Settings measured'),
     },
     {
+      // Field errors shown: their text must read at AA like the rest. Nothing is saved, since the
+      // form refuses a negative hour meter before it sends anything.
+      name: 'field-record-form-errors',
+      who: 'technician',
+      path: () => `/field-records/new/${field.revisionId}`,
+      ready: heading('Settings measured'),
+      then: async (s) => {
+        await s.page.getByRole('textbox', { name: /^Hour meter/ }).pressSequentially('-5');
+        await s.page.getByRole('button', { name: 'Save record' }).click();
+        await s.page.getByText('Enter the hours as a number, 0 or more').waitFor();
+      },
+    },
+    {
       name: 'field-position',
       who: 'technician',
       path: () => `/positions/${field.positionId}/field`,
