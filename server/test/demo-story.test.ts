@@ -30,6 +30,20 @@ describe('demo story', () => {
       ),
     );
     expect(new Set(register.flat().map((r) => daysAgo(r.createdAt)))).toEqual(new Set([210]));
+    // Lists sort and show sheets and queue items by their last change: that is in the story too.
+    const sheets = await suite.ctx.db
+      .selectFrom('sheets as s')
+      .innerJoin('revisions as r', 'r.id', 's.latestRevisionId')
+      .select(['s.documentNumber', 's.updatedAt', 'r.updatedAt as revisionUpdatedAt'])
+      .where('s.documentNumber', 'in', ['HF-NRW-0002', 'HF-NRW-0008'])
+      .orderBy('s.documentNumber')
+      .execute();
+    expect(
+      sheets.map((x) => [x.documentNumber, daysAgo(x.updatedAt), daysAgo(x.revisionUpdatedAt)]),
+    ).toEqual([
+      ['HF-NRW-0002', 3, 3],
+      ['HF-NRW-0008', 29, 29],
+    ]);
     expect(await suite.ctx.db.selectFrom('outbox').select('id').execute()).toEqual([]);
   });
 

@@ -50,8 +50,10 @@ export class DemoHistoryRepository {
 
   /**
    * Dates one revision's steps (made since `since`) at `at`: the revision's own dates, the
-   * superseding of its predecessor, its comments, the sheet's audit events of those steps and,
-   * for the first revision, the sheet. The mail those steps queued is dropped (see dropMail).
+   * superseding of its predecessor, its comments, the sheet's audit events of those steps, the
+   * sheet's last change and, for the first revision, the sheet's creation. With the triggers off
+   * nothing stamps `updated_at`, so it is set here too. The mail those steps queued is dropped
+   * (see dropMail).
    */
   async dateRevisionSteps(
     sheetId: string,
@@ -61,19 +63,20 @@ export class DemoHistoryRepository {
     first: boolean,
   ): Promise<void> {
     // Raw SQL: the typed schema makes creation dates read-only, as they are for the app.
-    await this.unguarded(['revisions', 'audit_events'], async (trx) => {
-      await sql`update revisions set created_at = ${at},
+    await this.unguarded(['revisions', 'sheets', 'audit_events'], async (trx) => {
+      await sql`update revisions set created_at = ${at}, updated_at = ${at},
           submitted_at = case when submitted_at is null then null else ${at}::timestamptz end,
           approved_at = case when approved_at is null then null else ${at}::timestamptz end,
           returned_at = case when returned_at is null then null else ${at}::timestamptz end
         where id = ${revisionId}`.execute(trx);
-      await sql`update revisions set superseded_at = ${at}
+      await sql`update revisions set superseded_at = ${at}, updated_at = ${at}
         where superseded_by_id = ${revisionId}`.execute(trx);
       await sql`update comments set created_at = ${at},
           resolved_at = case when resolved_at is null then null else ${at}::timestamptz end
         where revision_id = ${revisionId} and created_at >= ${since}`.execute(trx);
       await sql`update audit_events set at = ${at}
         where sheet_id = ${sheetId} and at >= ${since}`.execute(trx);
+      await sql`update sheets set updated_at = ${at} where id = ${sheetId}`.execute(trx);
       if (first) await sql`update sheets set created_at = ${at} where id = ${sheetId}`.execute(trx);
       await dropMail(trx, since);
     });
