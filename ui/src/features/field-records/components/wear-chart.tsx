@@ -34,7 +34,7 @@ export function WearChart({ title, series }: { title: string; series: WearSeries
     for (const s of [first, last]) rows.push({ x: day(s), Fitted: wearLineAt(fit, s) * 1000 });
   }
   rows.sort((a, b) => a.x - b.x);
-  type Line = { x?: number; y?: number; label: string; color: string; at?: 'left' | 'right' };
+  type Line = { x?: number; y?: number; label: string; color: string; side?: 'left' | 'right' };
   const referenceLines: Line[] = [];
   if (minimum !== null)
     referenceLines.push({ y: minimum * 1000, label: 'minimum', color: 'fail.7' });
@@ -42,8 +42,8 @@ export function WearChart({ title, series }: { title: string; series: WearSeries
     // The interval's two ends, labelled outwards so the labels never sit on each other (for a
     // vertical line recharts puts an insideTopRight label on the line's left side).
     referenceLines.push(
-      { x: day(crossing.lower), label: 'from', color: 'amber.8', at: 'left' },
-      { x: day(crossing.upper), label: 'to', color: 'amber.8', at: 'right' },
+      { x: day(crossing.lower), label: 'from', color: 'amber.8', side: 'left' },
+      { x: day(crossing.upper), label: 'to', color: 'amber.8', side: 'right' },
     );
   }
   // The axis reaches past the end of the prediction interval, with room for its label.
@@ -79,8 +79,8 @@ export function WearChart({ title, series }: { title: string; series: WearSeries
           referenceLines={referenceLines.map((l) => ({
             ...(l.x !== undefined ? { x: l.x } : { y: l.y }),
             label: l.label,
-            ...(l.at
-              ? { labelPosition: l.at === 'left' ? 'insideTopRight' : 'insideTopLeft' }
+            ...(l.side
+              ? { labelPosition: l.side === 'left' ? 'insideTopRight' : 'insideTopLeft' }
               : {}),
             color: l.color,
             strokeDasharray: '6 4',
