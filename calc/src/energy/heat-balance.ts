@@ -1,4 +1,5 @@
 import type { Derivation } from '../core/step.js';
+import type { BrakeRotor } from '../sheets/brake-rotor.js';
 import * as q from '../units/quantities.js';
 import {
   averageHeat,
@@ -33,7 +34,9 @@ export interface HeatBalanceInput {
  * cyclic temperature. Each value is recorded as a derivation step in `d` (see energy/heat.ts for the
  * formulas and their sources).
  */
-export function heatBalance(input: HeatBalanceInput, d: Derivation) {
+export function heatBalance(input: HeatBalanceInput, d: Derivation, rotor: BrakeRotor = 'drum') {
+  // The formulas' own labels speak of a drum; a caliper sheet's steps name its disc.
+  const disc = rotor === 'disc';
   const z = q.frequency(input.stopsPerHour);
   const E = q.energy(input.stopEnergy);
   const m = q.mass(input.mass);
@@ -44,8 +47,22 @@ export function heatBalance(input: HeatBalanceInput, d: Derivation) {
   energyPerHour(z, E, d);
   const P = averageHeat(z, E, d);
   const dT = temperatureRise(E, m, c, d);
-  const Tss = steadyTemperature({ ambient: Tamb, averageHeat: P, coefficient: alpha, area: A }, d);
+  const Tss = steadyTemperature(
+    { ambient: Tamb, averageHeat: P, coefficient: alpha, area: A },
+    d,
+    disc ? { label: 'Mean steady disc temperature' } : undefined,
+  );
   const tau = coolingTimeConstant(m, c, alpha, A, d);
-  const Tpeak = z > 0 ? peakCycleTemperature(Tamb, dT, z, tau, d) : q.temperature(Tamb + dT);
+  const Tpeak =
+    z > 0
+      ? peakCycleTemperature(
+          Tamb,
+          dT,
+          z,
+          tau,
+          d,
+          disc ? { label: 'Peak disc temperature in steady cyclic duty' } : undefined,
+        )
+      : q.temperature(Tamb + dT);
   return { z, Tamb, dT, Tss, tau, Tpeak };
 }

@@ -1,4 +1,4 @@
-import { compute, defineFormula, Derivation } from '../core/step.js';
+import { compute, defineFormula, Derivation, type StepOptions } from '../core/step.js';
 import { REF } from '../core/references.js';
 import { requireRange } from '../units/parse.js';
 import type {
@@ -143,15 +143,19 @@ export interface CoolingInput {
  * @example steadyTemperature({ ambient: celsius(20), averageHeat: power(500),
  *   coefficient: heatTransferCoefficient(25), area: area(0.5) }) // 333.15 K (60 °C)
  */
-export function steadyTemperature(input: CoolingInput, d?: Derivation): Temperature {
+export function steadyTemperature(
+  input: CoolingInput,
+  d?: Derivation,
+  options?: StepOptions,
+): Temperature {
   requireRange(input.coefficient, 'coolingCoefficient', { min: 0, exclusiveMin: true }, 'W/(m²·K)');
   requireRange(input.area, 'coolingArea', { min: 0, exclusiveMin: true }, 'm²');
-  return compute(d, steadyTemperatureFormula, {
-    T_amb: input.ambient,
-    P: input.averageHeat,
-    alpha: input.coefficient,
-    A: input.area,
-  });
+  return compute(
+    d,
+    steadyTemperatureFormula,
+    { T_amb: input.ambient, P: input.averageHeat, alpha: input.coefficient, A: input.area },
+    options,
+  );
 }
 
 /** Cooling time constant τ = m·c/(α·A). */
@@ -178,9 +182,15 @@ export function peakCycleTemperature(
   stopsPerSecond: Frequency,
   tau: Time,
   d?: Derivation,
+  options?: StepOptions,
 ): Temperature {
   requireRange(stopsPerSecond, 'stopsPerHour', { min: 0, exclusiveMin: true }, '1/s');
-  return compute(d, peakTemperatureFormula, { T_amb: ambient, dT: rise, z: stopsPerSecond, tau });
+  return compute(
+    d,
+    peakTemperatureFormula,
+    { T_amb: ambient, dT: rise, z: stopsPerSecond, tau },
+    options,
+  );
 }
 
 /**

@@ -78,6 +78,7 @@ export function caliperStopAndHeat(
       ambient: v.ambient,
     },
     d,
+    'disc',
   );
   checks.push(
     makeCheck({
@@ -107,7 +108,15 @@ export function caliperStopAndHeat(
     }),
   );
   charts.push(
-    temperatureChart(Tamb, dT, z, tau, lining.maxTemperature, lining.maxOperatingTemperature),
+    temperatureChart(
+      Tamb,
+      dT,
+      z,
+      tau,
+      lining.maxTemperature,
+      lining.maxOperatingTemperature,
+      'disc',
+    ),
   );
   return { checks, charts, warnings: [], stop };
 }

@@ -113,6 +113,7 @@ export function caliperTorques(v: CaliperInputs, duty: CaliperDuty, d: Derivatio
     q.length(v.wear),
     q.ratio(v.wearTravelRatio),
     d,
+    { friction: 'pad' },
   );
   const wornMin = T(
     v.muMin,

@@ -87,6 +87,7 @@ export function evaluateCaliperDiscBrake(
       v.muMax,
       duty.requiredTorque,
       v.maxBrakeTorque,
+      'disc',
     ),
   );
   publishSteps(out, d, CALIPER_PUBLISHED_STEPS);

@@ -1,6 +1,7 @@
 import type { ChartData } from '../core/types.js';
 import { temperatureHistory } from '../energy/heat.js';
 import type { StoppingResult } from '../stopping/stopping.js';
+import type { BrakeRotor } from './brake-rotor.js';
 
 /**
  * Load speed against time through the set delay and the braking phase. `kv` = load speed per
@@ -35,7 +36,7 @@ export function stoppingChart(
   };
 }
 
-/** Title and axes of every torque–wear chart (caliper spring sweep, shoe-brake stroke chain). */
+/** Title and axes of the shoe brake's torque–wear chart (its stroke chain). */
 export const TORQUE_WEAR_AXES = {
   id: 'torque-wear',
   title: 'Brake torque against lining wear',
@@ -47,7 +48,14 @@ export const TORQUE_WEAR_AXES = {
   yDimension: 'torque',
 } as const satisfies Partial<ChartData>;
 
-/** Brake torque against lining wear at μ min and μ nominal, with the required torque line. */
+/** A caliper's torque–wear chart: its pads wear, not a shoe's lining. */
+const PAD_WEAR_AXES = {
+  ...TORQUE_WEAR_AXES,
+  title: 'Brake torque against pad wear',
+  xLabel: 'Pad wear per pad',
+} as const satisfies Partial<ChartData>;
+
+/** A caliper's brake torque against pad wear at μ min and μ nominal, with the required torque line. */
 export function torqueWearChart(
   torqueNewNominal: number,
   torqueNewMin: number,
@@ -72,7 +80,7 @@ export function torqueWearChart(
     min.push({ x: w, y: torqueNewMin * f });
   }
   return {
-    ...TORQUE_WEAR_AXES,
+    ...PAD_WEAR_AXES,
     series: [
       { name: 'μ nominal', points: nominal },
       { name: 'μ min', points: min },
@@ -84,7 +92,10 @@ export function torqueWearChart(
   };
 }
 
-/** Brake torque across the friction band (new and worn lining), with the required and maximum lines. */
+/**
+ * Brake torque across the friction band (new and worn lining, or pads on a caliper), with the
+ * required and maximum lines.
+ */
 export function frictionBandChart(
   torquePerMu: number,
   wornFraction: number,
@@ -93,6 +104,7 @@ export function frictionBandChart(
   muMax: number,
   required: number,
   maxTorque: number,
+  rotor: BrakeRotor = 'drum',
   points = 21,
 ): ChartData {
   const fresh: { x: number; y: number }[] = [];
@@ -112,8 +124,8 @@ export function frictionBandChart(
     yUnit: 'N m',
     yDimension: 'torque',
     series: [
-      { name: 'New lining', points: fresh },
-      { name: 'Worn lining', points: worn },
+      { name: rotor === 'disc' ? 'New pads' : 'New lining', points: fresh },
+      { name: rotor === 'disc' ? 'Worn pads' : 'Worn lining', points: worn },
     ],
     markers: [{ label: 'μ nominal', x: muNominal, y: torquePerMu * muNominal }],
     referenceLines: [
@@ -123,7 +135,10 @@ export function frictionBandChart(
   };
 }
 
-/** Drum temperature over one hour of duty (stops evenly spaced, exponential cooling between). */
+/**
+ * Temperature of the heat mass (drum, or a caliper's disc) over one hour of duty (stops evenly
+ * spaced, exponential cooling between), against the friction material's limits.
+ */
 export function temperatureChart(
   ambient: number,
   rise: number,
@@ -131,25 +146,28 @@ export function temperatureChart(
   tau: number,
   maxTemperature: number,
   maxOperating: number,
+  rotor: BrakeRotor = 'drum',
 ): ChartData {
+  const mass = rotor === 'disc' ? 'Disc' : 'Drum';
+  const friction = rotor === 'disc' ? 'Pad' : 'Lining';
   return {
     id: 'drum-temperature',
-    title: 'Drum temperature over an hour of duty',
+    title: `${mass} temperature over an hour of duty`,
     xLabel: 'Time',
     xUnit: 's',
     xDimension: 'time',
-    yLabel: 'Drum temperature',
+    yLabel: `${mass} temperature`,
     yUnit: 'K',
     yDimension: 'temperature',
     series: [
       {
-        name: 'Drum temperature',
+        name: `${mass} temperature`,
         points: temperatureHistory(ambient, rise, stopsPerSecond, tau, 3600, 240),
       },
     ],
     referenceLines: [
-      { label: 'Lining max operating temperature', axis: 'y', value: maxOperating },
-      { label: 'Lining max temperature', axis: 'y', value: maxTemperature },
+      { label: `${friction} max operating temperature`, axis: 'y', value: maxOperating },
+      { label: `${friction} max temperature`, axis: 'y', value: maxTemperature },
     ],
   };
 }

@@ -66,6 +66,8 @@ export function wornSpringForce(
     point?: { words: string; wearSymbol: string };
     /** Share of the set force lost to relaxation in service, ρ_s in [0, 1). */
     relaxation?: Ratio;
+    /** What wears, for the printed steps: a shoe brake's lining (default) or a caliper's pads. */
+    friction?: 'lining' | 'pad';
   },
 ): { extension: Length; force: Force } {
   const point = options?.point;
@@ -80,14 +82,19 @@ export function wornSpringForce(
     rho === undefined
       ? springForce
       : compute(d, relaxedSpringForceFormula, { F_s: springForce, rho });
+  const pads = options?.friction === 'pad';
   const extension = compute(
     d,
     springExtensionFormula,
     { w: wear, r_s: travelRatio },
-    point && {
-      label: `Spring extension caused by lining wear, ${point.words}`,
-      names: { w: point.wearSymbol },
-    },
+    point
+      ? {
+          label: `Spring extension caused by ${pads ? 'pad' : 'lining'} wear, ${point.words}`,
+          names: { w: point.wearSymbol },
+        }
+      : pads
+        ? { label: 'Spring extension caused by pad wear' }
+        : undefined,
   );
   const force = compute(
     d,
