@@ -10,7 +10,7 @@ import {
 import { Document, Page, Text, View } from '@react-pdf/renderer';
 import { groupFieldSettings, type DiscStackSetup } from './field-card-groups.js';
 import { qty } from './format.js';
-import { Caution, rotorOf } from './parts/caution.js';
+import { Caution, rotorOf, type BrakeRotor } from './parts/caution.js';
 import { SettingTable } from './parts/field-settings.js';
 import { Heading, Table } from './parts/table.js';
 import type { PrintableSheet, PrintUnitSystem } from './printable-sheet.js';
@@ -153,8 +153,15 @@ export const PUSH_ROD_CAUTION =
   'The thruster push rod is not a lifting point and no handle: open the brake with the hand release.';
 
 /** The field setting card: what to set, what to measure, where to record it. */
+/** What wear does to the setting, under the clearance rows: a caliper has pads and no thruster reserve. */
+const WEAR_NOTE: Record<BrakeRotor, string> = {
+  drum: 'Lining wear uses up the reserve: re-adjust before it falls below the minimum given. With the reserve stroke used up the brake can lose all holding torque.',
+  disc: 'Pad wear widens the air gap and lets the springs extend, which lowers the clamp force: re-adjust at the pad wear given. Worn further, the brake may no longer hold the required torque.',
+};
+
 export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | null }) {
   const { sheet, qr } = props;
+  const rotor = rotorOf(sheet.sheetType.id);
   const system = sheet.unitSystem;
   const ev = sheet.evaluation;
   const g = ev ? groupFieldSettings(ev) : null;
@@ -176,10 +183,7 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
           {sheet.equipment.name}, from calculation {sheet.documentNumber} rev {sheet.revision.label}
           . Check the revision is current with the verification code before you start.
         </Text>
-        <Caution
-          rotor={rotorOf(sheet.sheetType.id)}
-          extra={rotorOf(sheet.sheetType.id) === 'drum' ? [PUSH_ROD_CAUTION] : []}
-        />
+        <Caution rotor={rotor} extra={rotor === 'drum' ? [PUSH_ROD_CAUTION] : []} />
         {!g ? (
           <Text>This revision has no evaluation, so there are no settings to print.</Text>
         ) : (
@@ -209,10 +213,7 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
                   system={system}
                   tolerance={tolerance}
                 />
-                <Text style={{ fontSize: 7.5 }}>
-                  Lining wear uses up the reserve: re-adjust before it falls below the minimum
-                  given. With the reserve stroke used up the brake can lose all holding torque.
-                </Text>
+                <Text style={{ fontSize: 7.5 }}>{WEAR_NOTE[rotor]}</Text>
               </View>
             )}
             {g.discStacks.length > 0 && (

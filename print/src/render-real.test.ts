@@ -67,6 +67,16 @@ describe.each(TYPES)('%s, real evaluation', (sheetTypeId) => {
     expect(card.pages).toBeLessThanOrEqual(2);
     expect(card.text).toContain('Set by');
   });
+
+  it("speaks of the brake's own parts on the card: pads and a disc, or lining and a drum", () => {
+    const text = card.text.replace(/\s+/g, ' ');
+    if (sheetTypeId === 'caliper-disc-brake') {
+      expect(text).toContain('Pad wear widens the air gap');
+      expect(text).not.toMatch(/lining|shoe|drum(?! brake)/i);
+    } else if (sheetTypeId !== 'disc-spring-stack') {
+      expect(text).toContain('Lining wear uses up the reserve');
+    }
+  });
 });
 
 describe('hoist field card, real evaluation', () => {
