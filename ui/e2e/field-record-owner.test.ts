@@ -3,7 +3,7 @@ import { apiClientAs } from './support/api';
 import { e2eBaseUrl, e2eSkipReason, launchBrowser, type BrowserSession } from './support/browser';
 import { screenshot } from './support/screenshot';
 import { signInAs, signOut } from './support/sign-in';
-import { firstPositionInForce, type FieldFormAnswer } from './support/field-form';
+import { demoPositionInForce, type FieldFormAnswer } from './support/field-form';
 
 const skipReason = e2eSkipReason();
 if (skipReason) console.warn(`[browser] field-record owner tests skipped: ${skipReason}`);
@@ -32,7 +32,7 @@ describe.skipIf(skipReason !== null)('outbox entries belong to who saved them', 
 
   beforeAll(async () => {
     browser = await launchBrowser({ width: 1024, height: 844 });
-    ({ positionId, revisionId, form } = await firstPositionInForce(baseUrl));
+    ({ positionId, revisionId, form } = await demoPositionInForce(baseUrl));
   });
   afterEach(async () => {
     await browser?.context.setOffline(false);
