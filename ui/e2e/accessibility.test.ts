@@ -49,10 +49,11 @@ describe.skipIf(skipReason !== null)('accessibility of the main screens', () => 
     const register = await apiAs(baseUrl, 'engineer', 'GET', '/register');
     const positions = (
       register.sites as {
-        machines: { positions: { id: string; inForce: { revisionId: string }[] }[] }[];
+        machines: { positions: { id: string; tag: string; inForce: { revisionId: string }[] }[] }[];
       }[]
     ).flatMap((site) => site.machines.flatMap((m) => m.positions));
-    const set = positions.find((p) => p.inForce.length > 0)!;
+    // The demo position with a wear history: other files approve sheets on other positions.
+    const set = positions.find((p) => p.tag === 'MH-B1' && p.inForce.length > 0)!;
     field = { positionId: set.id, revisionId: set.inForce[0]!.revisionId };
   });
   afterAll(async () => {
