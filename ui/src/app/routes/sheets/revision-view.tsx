@@ -21,6 +21,7 @@ import { UnderReviewBanner } from '../../../features/criteria-review/components/
 import { ChangesPanel } from '../../../features/revisions/components/changes-panel';
 import { RevisionActions } from './revision-actions';
 import { ReviewSummary } from './review-summary';
+import { hasRole } from '../../../lib/session';
 
 /** One revision: the live workbench with review markers in place, then comments and files. */
 export function RevisionView({ revisionId, user }: { revisionId: string; user: User }) {
@@ -37,7 +38,10 @@ export function RevisionView({ revisionId, user }: { revisionId: string; user: U
   const commentsQuery = useComments(revisionId);
   const comments = useMemo(() => commentsQuery.data?.items ?? [], [commentsQuery.data]);
   const grouped = useMemo(() => groupByAnchor(comments), [comments]);
-  const canComment = user.role !== 'viewer' && !frozen;
+  // Comments, files and the changes since the last check are the review's: engineers and checkers
+  // (the server's @Roles('engineer') on comments and uploads admits checkers too).
+  const reviewer = hasRole(user, 'engineer', 'checker');
+  const canComment = reviewer && !frozen;
 
   const fieldLabel = useCallback(
     (key: string) => sheetType?.fields.find((f) => f.key === key)?.label ?? key,
@@ -157,7 +161,7 @@ export function RevisionView({ revisionId, user }: { revisionId: string; user: U
         <Tabs.Panel value="review">
           <Stack gap="md">
             <ReviewSummary revision={revision} openComments={openComments} />
-            {user.role !== 'viewer' ? <ChangesPanel revisionId={revisionId} /> : null}
+            {reviewer ? <ChangesPanel revisionId={revisionId} /> : null}
             <Grid gap="md">
               <Grid.Col span={{ base: 12, md: 7 }}>
                 <CommentsPanel
@@ -169,10 +173,7 @@ export function RevisionView({ revisionId, user }: { revisionId: string; user: U
                 />
               </Grid.Col>
               <Grid.Col span={{ base: 12, md: 5 }}>
-                <AttachmentsPanel
-                  revisionId={revisionId}
-                  canUpload={user.role !== 'viewer' && !frozen}
-                />
+                <AttachmentsPanel revisionId={revisionId} canUpload={canComment} />
               </Grid.Col>
             </Grid>
           </Stack>
