@@ -46,7 +46,8 @@ describe('wear series from field records', () => {
     const s = strokeSeries(records, 'reserveStroke', length(0.006));
     expect(s.readings.map((r) => r.value)).toEqual([0.012, 0.0112]);
     expect(s.fit).toBeNull();
-    expect(s.note).toMatch(/at least 3 readings/);
+    expect(s.note).toBe('A wear trend needs at least 3 readings (got 2).');
+    expect(strokeSeries([], 'reserveStroke', null).note).toBe('No readings yet.');
     const adjusted = [...records.slice(0, 2), rec('2025-07-20', 'after-repair', 0.008, 0.0125)];
     expect(strokeSeries(adjusted, 'reserveStroke', null).readings).toEqual([
       { at: time(Date.parse('2025-07-20T08:00:00Z') / 1000), value: 0.0125 },

@@ -85,9 +85,16 @@ function fitOrNote(
     const fit = fitWearTrend({ readings, minimum: minimum ?? undefined, field });
     return { fit, note: fit.kind === 'no-trend' ? fit.reason : null };
   } catch (e) {
-    if (isCalcInputError(e)) return { fit: null, note: e.fields[0]?.message ?? e.message };
+    if (isCalcInputError(e))
+      return { fit: null, note: noteFor(readings, e.fields[0]?.message ?? e.message) };
     throw e;
   }
+}
+
+/** Why there is no trend, as a sentence for the page: the core's message, or "No readings yet." */
+function noteFor(readings: readonly WearReading[], message: string): string {
+  if (readings.length === 0) return 'No readings yet.';
+  return message.charAt(0).toUpperCase() + message.slice(1) + (message.endsWith('.') ? '' : '.');
 }
 
 /** The fitted line's value at a time, taken about the mean time (exact with epoch-sized times). */

@@ -15,6 +15,7 @@ import {
   liningChartTitle,
   MIN_RESERVE_KEY,
   RESERVE_KEY,
+  hasStrokeSeries,
 } from '../../../features/field-records/components/wear-series';
 import { useFieldForm } from '../../../features/field-records/api/get-field-form';
 import { isoDay } from '../../../lib/dates';
@@ -60,6 +61,7 @@ export function Component() {
   const setTo = state.data?.setTo?.revisionId ?? records[records.length - 1]?.revisionId ?? '';
   const form = useFieldForm(setTo);
   const minimum = form.data?.targets.find((t) => t.settingKey === MIN_RESERVE_KEY)?.value ?? null;
+  const hasStroke = hasStrokeSeries(form.data?.targets, records);
   const canCountersign = user.role === 'engineer' || user.role === 'checker';
   return (
     <Page title={tag ? `Field records · ${tag}` : 'Field records'}>
@@ -79,14 +81,16 @@ export function Component() {
               interval set for the position and follow the brake and thruster makers&apos; data.
             </Alert>
             <SimpleGrid cols={{ base: 1, md: 2 }} spacing="md">
-              <WearChart
-                title="Reserve stroke"
-                series={strokeSeries(
-                  records,
-                  RESERVE_KEY,
-                  minimum === null ? null : length(minimum),
-                )}
-              />
+              {hasStroke && (
+                <WearChart
+                  title="Reserve stroke"
+                  series={strokeSeries(
+                    records,
+                    RESERVE_KEY,
+                    minimum === null ? null : length(minimum),
+                  )}
+                />
+              )}
               {LINING_KEYS.map((key) => (
                 <WearChart
                   key={key}

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { FieldForm } from '@holdfast/shared';
-import { LINING_KEYS, liningChartTitle } from './wear-series';
+import { hasStrokeSeries, LINING_KEYS, liningChartTitle } from './wear-series';
 
 // As the field-form API labels them per rotor (server/src/calc/field-targets.ts).
 const drum: FieldForm['checks'] = [
@@ -31,5 +31,22 @@ describe('lining chart titles', () => {
     for (const t of [...titles, ...LINING_KEYS.map((k) => liningChartTitle([], k))]) {
       expect(t).not.toMatch(/shoe|pad/);
     }
+  });
+});
+
+describe('hasStrokeSeries', () => {
+  const reading = (settingKey: string) => ({ measurements: [{ settingKey }] });
+
+  it("charts the reserve stroke where the field card has one (a shoe brake's thruster)", () => {
+    expect(
+      hasStrokeSeries([{ settingKey: 'springLength' }, { settingKey: 'reserveStroke' }], []),
+    ).toBe(true);
+  });
+
+  it("leaves it out for a caliper's card, which has none, unless a reading was recorded", () => {
+    const caliper = [{ settingKey: 'clampForce' }, { settingKey: 'airGap' }];
+    expect(hasStrokeSeries(caliper, [reading('airGap')])).toBe(false);
+    expect(hasStrokeSeries(undefined, [])).toBe(false);
+    expect(hasStrokeSeries(caliper, [reading('reserveStroke')])).toBe(true);
   });
 });

@@ -29,3 +29,18 @@ export function liningChartTitle(
   if (label) return label;
   return `Lining thickness, ${key === 'lining-thickness-shoe-a' ? 'side A' : 'side B'}`;
 }
+
+/**
+ * Whether a position has a reserve-stroke line to chart: a thruster's reserve stroke is on a shoe
+ * brake's field card; a caliper's card has none, so its page shows no empty stroke chart (unless
+ * readings of one were recorded all the same).
+ */
+export function hasStrokeSeries(
+  targets: readonly { settingKey: string }[] | undefined,
+  records: readonly { measurements: readonly { settingKey: string }[] }[],
+): boolean {
+  return (
+    (targets ?? []).some((t) => t.settingKey === RESERVE_KEY) ||
+    records.some((r) => r.measurements.some((m) => m.settingKey === RESERVE_KEY))
+  );
+}
