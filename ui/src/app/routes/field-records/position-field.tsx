@@ -78,7 +78,8 @@ export function Component() {
             </Title>
             <Alert color="gray">
               The prediction is a statistical estimate from the readings so far; inspect at the
-              interval set for the position and follow the brake and thruster makers&apos; data.
+              interval set for the position and follow the makers&apos; data for the brake and its
+              release unit.
             </Alert>
             <SimpleGrid cols={{ base: 1, md: 2 }} spacing="md">
               {hasStroke && (
