@@ -1,8 +1,9 @@
 import { randomUUID } from 'node:crypto';
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
 import { fieldCheckKeys } from '@holdfast/shared';
 import { InspectionScheduleService } from '../src/field-records/inspection-schedule.service.js';
 import { Database } from '../src/database/database.js';
+import { ObjectStorage } from '../src/storage/object-storage.js';
 import { ensurePoppler, inspectPdf } from '@holdfast/print/testing';
 import {
   approve,
@@ -302,19 +303,24 @@ describe('field records', () => {
     });
   });
 
-  it('photos go through the attachment path, owned by the record, and only onto a draft', async () => {
-    const b = body();
-    await suite.ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
-    const send = async (bytes: Buffer, name: string, as: DemoLogin = 'technician') => {
+  /** Posts a photo to a record as a fitter's device does (multipart), as `as`. */
+  const photoSender =
+    (recordId: string) =>
+    async (bytes: Buffer, name: string, as: DemoLogin = 'technician') => {
       const form = new FormData();
       form.append('file', new Blob([new Uint8Array(bytes)]), name);
-      const res = await fetch(`${suite.ctx.baseUrl}/api/field-records/${b.id}/attachments`, {
+      const res = await fetch(`${suite.ctx.baseUrl}/api/field-records/${recordId}/attachments`, {
         method: 'POST',
         headers: { authorization: `Bearer ${await suite.ctx.token(as)}` },
         body: form,
       });
       return { status: res.status, body: (await res.json()) as any };
     };
+
+  it('photos go through the attachment path, owned by the record, and only onto a draft', async () => {
+    const b = body();
+    await suite.ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
+    const send = photoSender(b.id);
     const png = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 0]);
     const ok = await send(png, 'shoe-a.png');
     expect(ok.status).toBe(201);
@@ -345,18 +351,12 @@ describe('field records', () => {
   it('a photo sent again (its answer lost) is filed once, even when both sends arrive at once', async () => {
     const b = body();
     await suite.ctx.request('POST', '/api/field-records', { as: 'technician', body: b });
-    const send = async (bytes: Buffer, name: string, as: DemoLogin = 'technician') => {
-      const form = new FormData();
-      form.append('file', new Blob([new Uint8Array(bytes)]), name);
-      const res = await fetch(`${suite.ctx.baseUrl}/api/field-records/${b.id}/attachments`, {
-        method: 'POST',
-        headers: { authorization: `Bearer ${await suite.ctx.token(as)}` },
-        body: form,
-      });
-      return { status: res.status, body: (await res.json()) as any };
-    };
+    const send = photoSender(b.id);
     const png = (n: number) =>
       Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, n]);
+    const storage = suite.ctx.app.get(ObjectStorage);
+    const put = vi.spyOn(storage, 'put');
+    const removed = vi.spyOn(storage, 'delete');
     const first = await send(png(1), 'shoe-a.png');
     expect(first.status).toBe(201);
     const again = await send(png(1), 'shoe-a.png');
@@ -381,6 +381,18 @@ describe('field records', () => {
       .where('action', '=', 'field-record.photo-added')
       .execute();
     expect(audit).toHaveLength(2);
+    // Every object stored is a filed photo's, or was removed again: no bytes left behind.
+    const kept = await suite.ctx.db
+      .selectFrom('attachments')
+      .select('storageKey')
+      .where('fieldRecordId', '=', b.id)
+      .execute();
+    const deleted = removed.mock.calls.map(([key]) => key);
+    expect(put.mock.calls.map(([key]) => key).sort()).toEqual(
+      [...kept.map((k) => k.storageKey), ...deleted].sort(),
+    );
+    put.mockRestore();
+    removed.mockRestore();
     // Once signed, the filed photo is still answered as filed; new bytes are refused.
     await suite.ctx.request('POST', `/api/field-records/${b.id}/sign`, {
       as: 'technician',
