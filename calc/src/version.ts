@@ -12,5 +12,7 @@
  * setting band; optional lever, shoe-pin and base-bolt strength at the highest spring setting;
  * lining wear prints to 0.05 mm on the card; a disc-spring stack's back-off tolerance on the card
  * is the sheet's declared one. Derivation lines and check messages are written when first read.
+ * Later in 1.2.0, with no number moved: an evaluation lists the criteria values it read
+ * (`criteriaUsed`, for the printed design basis); one stored before that has no such list.
  */
 export const CORE_VERSION = '1.2.0';

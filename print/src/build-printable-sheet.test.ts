@@ -32,6 +32,17 @@ describe('buildPrintableSheet', () => {
     );
   });
 
+  it('lists the criteria values the evaluation read, in the set order; the whole set when it did not say', () => {
+    const used = hoistPrintable({ state: 'approved', criteriaUsed: ['pMax'] });
+    expect(used.criteria.listed).toBe('used');
+    expect(used.criteria.values.map((v) => v.key)).toEqual(['pMax']);
+    const none = hoistPrintable({ state: 'approved', criteriaUsed: [] });
+    expect(none.criteria).toMatchObject({ listed: 'used', values: [] });
+    const before = hoistPrintable({ state: 'approved' });
+    expect(before.criteria.listed).toBe('whole set');
+    expect(before.criteria.values.map((v) => v.key)).toEqual(['torqueFactor', 'pMax']);
+  });
+
   it('prints the history up to the printed revision only, in label order', () => {
     const sheet = hoistPrintable({ state: 'approved' });
     expect(sheet.history.map((h) => h.label)).toEqual(['A', 'B']);

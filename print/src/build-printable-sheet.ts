@@ -75,6 +75,13 @@ export function compareLabels(a: string, b: string): number {
   return a.length - b.length || a.localeCompare(b);
 }
 
+/** The criteria values the evaluation read, in the set's order; the whole set if it did not say. */
+function criteriaToPrint(set: CriteriaSet, used: string[] | undefined): PrintableSheet['criteria'] {
+  const head = { id: set.id, version: set.version, name: set.name };
+  if (!used) return { ...head, values: set.values, listed: 'whole set' };
+  return { ...head, values: set.values.filter((v) => used.includes(v.key)), listed: 'used' };
+}
+
 /** Builds the renderers' input from a revision, its sheet, the calc sheet type and criteria set. */
 export function buildPrintableSheet(o: BuildPrintableOptions): PrintableSheet {
   const { sheet, revision: r, sheetType } = o;
@@ -147,12 +154,7 @@ export function buildPrintableSheet(o: BuildPrintableOptions): PrintableSheet {
     sections: sheetType.sections,
     inputs,
     evaluation: r.evaluation,
-    criteria: {
-      id: o.criteriaSet.id,
-      version: o.criteriaSet.version,
-      name: o.criteriaSet.name,
-      values: o.criteriaSet.values,
-    },
+    criteria: criteriaToPrint(o.criteriaSet, r.evaluation?.criteriaUsed),
     designBasis: {
       torqueReference:
         o.torqueReference ?? describeChoice(inputs, /torque.?(ref|basis)|reference/i),

@@ -99,7 +99,17 @@ export interface PrintableSheet {
   inputs: PrintableInput[];
   /** Null for a draft that was never evaluated. */
   evaluation: SheetEvaluation | null;
-  criteria: { id: string; version: number; name: string; values: PrintCriterion[] };
+  criteria: {
+    id: string;
+    version: number;
+    name: string;
+    values: PrintCriterion[];
+    /**
+     * 'used': `values` are those the evaluation read (its `criteriaUsed`); 'whole set': every
+     * value of the set, for a revision evaluated before the core kept which it read.
+     */
+    listed: 'used' | 'whole set';
+  };
   designBasis: {
     /** Which reference torque the required brake torque rests on, e.g. 'Motor rated torque'. */
     torqueReference: string;

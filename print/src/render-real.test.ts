@@ -1,7 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { renderFieldCardPdf, renderSheetPdf } from './render.js';
 import { isMinorCheck } from './parts/summary.js';
-import { realPrintable } from './testing/real-sheet.js';
+import { criteriaFor, realPrintable } from './testing/real-sheet.js';
 import { ensurePoppler, inspectPdf, type PdfFacts } from './testing/poppler.js';
 
 // The same renderers over real calc evaluations of every sheet type's default inputs.
@@ -61,6 +61,23 @@ describe.each(TYPES)('%s, real evaluation', (sheetTypeId) => {
     for (const f of sheet.evaluation!.fieldSettings) {
       expect(text, f.key).toContain(f.label.replace(/\s+/g, ' ').slice(0, 30));
     }
+  });
+
+  it('lists only the criteria values its checks read (a stack sheet reads none and says so)', () => {
+    const text = pdf.text.replace(/\s+/g, ' ');
+    const used = sheet.evaluation!.criteriaUsed!;
+    const values = criteriaFor(sheetTypeId).values;
+    // Table cells wrap, so a label is found by its start; two labels may start alike.
+    const start = (label: string) => label.slice(0, 40);
+    const usedStarts = values.filter((v) => used.includes(v.key)).map((v) => start(v.label));
+    for (const s of usedStarts) expect(text).toContain(s);
+    for (const v of values.filter((x) => !usedStarts.includes(start(x.label)))) {
+      expect(text, v.key).not.toContain(start(v.label));
+    }
+    if (sheetTypeId === 'disc-spring-stack') {
+      expect(used).toEqual([]);
+      expect(text).toContain('No check of this sheet reads a value of the criteria set');
+    } else expect(text).toContain('Criteria values this sheet uses, and their sources');
   });
 
   it('fits the field card on one or two pages', () => {

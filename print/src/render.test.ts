@@ -46,7 +46,7 @@ function expectVerdicts(pdf: PdfFacts, sheet: PrintableSheet) {
 
 describe('calculation sheet PDF', () => {
   const sheets = {
-    approved: hoistPrintable({ state: 'approved' }),
+    approved: hoistPrintable({ state: 'approved', criteriaUsed: ['torqueFactor'] }),
     draft: hoistPrintable({ state: 'draft', failing: true }),
     inCheck: hoistPrintable({ state: 'in_check' }),
     superseded: hoistPrintable({ state: 'superseded', paper: 'LETTER', unitSystem: 'US' }),
@@ -89,6 +89,10 @@ describe('calculation sheet PDF', () => {
   it('approved: design basis, inputs in both forms, derivation, charts, settings, references', () => {
     const t = squash(pdf.approved.text);
     expect(t).toContain('Demo hoist criteria (demo-hoist), version 3');
+    // Only the criteria values the evaluation read; a set's other values do not bear on it.
+    expect(t).toContain('Criteria values this sheet uses, and their sources');
+    expect(t).toContain('Torque factor k');
+    expect(t).not.toContain('Lining pressure limit');
     expect(t).toContain('Torque reference: Motor rated torque');
     expect(t).toContain('Holdfast calculation core 0.3.0-fixture');
     expect(t).toMatch(/Lining width b 7\.48 in 190\.0 mm/);
@@ -160,6 +164,9 @@ describe('calculation sheet PDF', () => {
     expect(squash(p.text)).toMatch(/Checked and approved\s+Ben Checker\s+BC/);
     expect(p.text).toContain('lbf·ft');
     expect(p.text).not.toContain('NOT FOR USE');
+    // Evaluated before the core kept which criteria it read: the whole set, said so.
+    expect(squash(p.text)).toContain('Criteria values and their sources (the whole set)');
+    expect(squash(p.text)).toContain('Lining pressure limit');
   });
 
   it('renders pages with ink on them (PNG under test-output/pdf for a look)', () => {

@@ -179,6 +179,11 @@ export interface SheetEvaluation {
   /** True when every check passes. */
   pass: boolean;
   /**
+   * Keys of the criteria-set values this evaluation read, in the set's order: the printed sheet
+   * lists these and not the set's other values. Absent on evaluations stored before it was kept.
+   */
+  criteriaUsed?: string[];
+  /**
    * The inputs the core used, as entered and in SI, in the sheet's field order. Not set by
    * `evaluate` (a live evaluation has the inputs beside it); attached to the frozen record when a
    * revision is submitted, so the record and its printout show exactly what was calculated.

@@ -1,3 +1,4 @@
+import { recordingCriteriaUsed } from '../criteria/lookup.js';
 import type {
   CriteriaSet,
   FieldError,
@@ -137,5 +138,5 @@ export const caliperDiscBrakeSheet: SheetTypeDefinition<'caliper-disc-brake'> = 
   sections: CALIPER_SECTIONS,
   fields: CALIPER_FIELDS,
   fieldCard: CALIPER_FIELD_CARD,
-  evaluate: evaluateCaliperDiscBrake,
+  evaluate: recordingCriteriaUsed(evaluateCaliperDiscBrake),
 };

@@ -1,4 +1,5 @@
 import type { CheckResult, CriteriaSet, FieldSetting, ResultValue } from '../core/types.js';
+import { criterionIfSet } from '../criteria/lookup.js';
 import { workingBandWarning } from '../disc-springs/curve.js';
 import type { StackSetResult } from '../disc-springs/stack-derivation.js';
 import type { DiscStack } from '../disc-springs/stack.js';
@@ -202,7 +203,7 @@ export function sigmaOMFlatCheck(
   criteria: CriteriaSet,
   label = 'Stress |σOM| at flat (static load)',
 ): CheckResult {
-  const crit = criteria.values.find((v) => v.key === SIGMA_OM_FLAT_DEFAULT.key);
+  const crit = criterionIfSet(criteria, SIGMA_OM_FLAT_DEFAULT.key);
   const limit = crit ? crit.value : SIGMA_OM_FLAT_DEFAULT.value;
   const om = Math.abs(sigmaOMFlat);
   return {

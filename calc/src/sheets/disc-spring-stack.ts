@@ -1,3 +1,4 @@
+import { recordingCriteriaUsed } from '../criteria/lookup.js';
 import type {
   CriteriaSet,
   SheetEvaluation,
@@ -149,5 +150,5 @@ export const discSpringStackSheet: SheetTypeDefinition<'disc-spring-stack'> = {
   sections: DISC_STACK_SECTIONS,
   fields: DISC_STACK_FIELDS,
   fieldCard: DISC_STACK_FIELD_CARD,
-  evaluate: evaluateDiscSpringStack,
+  evaluate: recordingCriteriaUsed(evaluateDiscSpringStack),
 };

@@ -7,7 +7,7 @@ import type {
 import { CalcInputError } from '../core/errors.js';
 import { compute, Derivation } from '../core/step.js';
 import { backDrivenTorqueFormula } from '../stopping/speed-at-set.js';
-import { criterion } from '../criteria/lookup.js';
+import { criterion, recordingCriteriaUsed } from '../criteria/lookup.js';
 import { motorRatedTorque } from '../duty/motor-torque.js';
 import { hoistLoadSpeed, hoistLoadTorques } from '../duty/hoist-load.js';
 import { referLinearMass, referRotatingInertia } from '../duty/referral.js';
@@ -297,5 +297,5 @@ export const hoistShoeBrakeSheet: SheetTypeDefinition<'hoist-shoe-brake'> = {
   sections: [{ id: U, title: 'Hoist duty' }, ...SHOE_SECTIONS],
   fields: FIELDS,
   fieldCard: SHOE_FIELD_CARD,
-  evaluate: evaluateHoistShoeBrake,
+  evaluate: recordingCriteriaUsed(evaluateHoistShoeBrake),
 };

@@ -7,7 +7,7 @@ import type {
 } from '../core/types.js';
 import { CalcInputError } from '../core/errors.js';
 import { Derivation } from '../core/step.js';
-import { criterion } from '../criteria/lookup.js';
+import { criterion, recordingCriteriaUsed } from '../criteria/lookup.js';
 import { motorRatedTorque } from '../duty/motor-torque.js';
 import { referLinearMass } from '../duty/referral.js';
 import { inertiaTotal } from '../duty/inertia-sum.js';
@@ -265,5 +265,5 @@ export const travelShoeBrakeSheet: SheetTypeDefinition<'travel-shoe-brake'> = {
   sections: [{ id: U, title: 'Travel duty' }, ...SHOE_SECTIONS],
   fields: FIELDS,
   fieldCard: SHOE_FIELD_CARD,
-  evaluate: evaluateTravelShoeBrake,
+  evaluate: recordingCriteriaUsed(evaluateTravelShoeBrake),
 };

@@ -3,7 +3,7 @@ import { Text, View } from '@react-pdf/renderer';
 import { day, qty } from '../format.js';
 import type { PrintableSheet, PrintCriterion, PrintUnitSystem } from '../printable-sheet.js';
 import { colours } from '../theme.js';
-import { headingBlock, tableBlocks, type BlockContext } from '../blocks.js';
+import { headingBlock, paragraphBlock, tableBlocks, type BlockContext } from '../blocks.js';
 import type { FlowBlock } from '../flow.js';
 
 /** A criteria value in the sheet's units when its unit is a known SI unit, else as stored. */
@@ -68,8 +68,20 @@ export function designBasisBlocks(ctx: BlockContext, sheet: PrintableSheet): Flo
     headingBlock(ctx, 'basis-h', 'Design basis'),
     ...rows.map(([k, v]) => keyValueBlock(ctx, k, v)),
   ];
-  if (c.values.length > 0) {
-    const title = 'Criteria values and their sources';
+  if (c.listed === 'used' && c.values.length === 0) {
+    blocks.push(
+      paragraphBlock(
+        ctx,
+        'criteria-none',
+        'No check of this sheet reads a value of the criteria set: each limit and its source are printed with its check.',
+        { fontSize: 8.5, marginTop: 3 },
+      ),
+    );
+  } else if (c.values.length > 0) {
+    const title =
+      c.listed === 'used'
+        ? 'Criteria values this sheet uses, and their sources'
+        : 'Criteria values and their sources (the whole set)';
     blocks.push(
       headingBlock(ctx, 'criteria-h', title, 2),
       ...tableBlocks(ctx, 'criteria', {

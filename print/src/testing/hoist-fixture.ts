@@ -499,6 +499,8 @@ export function hoistPrintable(o: {
   paper?: Paper;
   unitSystem?: PrintUnitSystem;
   failing?: boolean;
+  /** The evaluation's `criteriaUsed`; left out, it is absent (an evaluation from before). */
+  criteriaUsed?: string[];
 }): PrintableSheet {
   const approvedLike = o.state === 'approved' || o.state === 'superseded';
   const revision: PrintRevisionSource = {
@@ -524,7 +526,10 @@ export function hoistPrintable(o: {
       hotMetal: true,
     },
     unitSystem: o.unitSystem ?? 'SI',
-    evaluation: hoistEvaluation({ failing: o.failing }),
+    evaluation: {
+      ...hoistEvaluation({ failing: o.failing }),
+      ...(o.criteriaUsed ? { criteriaUsed: o.criteriaUsed } : {}),
+    },
     coreVersion: '0.3.0-fixture',
     verificationCode: approvedLike ? 'HF7K-2QX9' : null,
     justification: o.failing

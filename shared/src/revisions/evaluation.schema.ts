@@ -138,5 +138,6 @@ export const sheetEvaluationSchema: z.ZodType<SheetEvaluation> = z.object({
   ),
   warnings: z.array(z.string()),
   pass: z.boolean(),
+  criteriaUsed: z.array(z.string()).optional(),
   resolvedInputs: z.array(resolvedInputSchema).optional(),
 });
