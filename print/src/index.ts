@@ -6,6 +6,12 @@ export { renderSheet, renderSheetPdf, renderFieldCardPdf, warmUpPdfRenderer } fr
 export type { SheetRender } from './render.js';
 export type { PageMode } from './sheet-document.js';
 export { renderFieldRecordPdf } from './field-record/render-field-record.js';
+export type {
+  PrintableFieldRecord,
+  PrintFieldCheck,
+  PrintFieldMeasurement,
+  PrintFieldSignature,
+} from './field-record/printable-field-record.js';
 export {
   buildPrintableSheet,
   compareLabels,

@@ -1,5 +1,4 @@
 import { toleranceText, type Dimension } from '@holdfast/calc';
-import { fieldRecordKindLabels, type FieldRecord } from '@holdfast/shared';
 import { Document, Page, Text, View } from '@react-pdf/renderer';
 import { qty } from '../format.js';
 import { Caution, rotorOf } from '../parts/caution.js';
@@ -7,9 +6,10 @@ import { Heading, Table } from '../parts/table.js';
 import type { PrintableSheet } from '../printable-sheet.js';
 import { Frame } from '../sheet-document.js';
 import { colours, s } from '../theme.js';
+import type { PrintableFieldRecord, PrintFieldSignature } from './printable-field-record.js';
 import { targetText } from './target-text.js';
 
-const STATUS_TEXT: Record<FieldRecord['status'], string> = {
+const STATUS_TEXT: Record<PrintableFieldRecord['status'], string> = {
   draft: 'DRAFT — not signed',
   signed: 'Signed by the technician, waiting for countersignature',
   countersigned: 'Countersigned',
@@ -19,17 +19,15 @@ const date = (iso: string) => iso.slice(0, 16).replace('T', ' ') + ' UTC';
 
 /** The printed field record: what was found and left, against the revision it was set to. */
 export function FieldRecordDocument(props: {
-  record: FieldRecord;
+  record: PrintableFieldRecord;
   sheet: PrintableSheet;
   qr: string | null;
-  checkLabels: Record<string, string>;
 }) {
   const { record: r, sheet, qr } = props;
   const system = sheet.unitSystem;
   const val = (v: number | null, dim: string) =>
     v === null ? '—' : qty(v, dim as Dimension, system);
-  const verdict = (m: FieldRecord['measurements'][number]) =>
-    m.asLeftVerdict ? (m.asLeftVerdict.status === 'in' ? 'within' : 'OUT') : '—';
+  const verdict = (within: boolean | null) => (within === null ? '—' : within ? 'within' : 'OUT');
   const flags = [
     r.flags.superseded && 'The revision this brake was set to has since been superseded.',
     r.flags.underReview && 'The revision this brake was set to is under review.',
@@ -43,7 +41,7 @@ export function FieldRecordDocument(props: {
       <Page size={sheet.paper} style={s.page}>
         <Frame sheet={sheet} qr={qr} kind="Field record" />
         <Text style={{ fontWeight: 700, marginBottom: 2 }}>
-          {fieldRecordKindLabels[r.kind]} — {r.positionTag} {sheet.position.description}
+          {r.kindLabel} — {r.positionTag} {sheet.position.description}
         </Text>
         <Text>
           Performed {date(r.performedAt)}
@@ -73,7 +71,7 @@ export function FieldRecordDocument(props: {
             toleranceText(m.tolerance, m.dimension as Dimension, system),
             val(m.asFound, m.dimension),
             val(m.asLeft, m.dimension),
-            verdict(m),
+            verdict(m.asLeftWithin),
           ])}
         />
         {r.measurements
@@ -95,7 +93,7 @@ export function FieldRecordDocument(props: {
             { title: 'Value / note', flex: 2.4 },
           ]}
           rows={r.checks.map((c) => [
-            props.checkLabels[c.key] ?? c.key,
+            c.label,
             c.result === 'ok' ? 'OK' : c.result === 'not-ok' ? 'NOT OK' : 'n/a',
             [
               c.value !== null ? qty(c.value, 'length', system) : '',
@@ -120,10 +118,10 @@ export function FieldRecordDocument(props: {
               ['Technician', r.signed, 'not signed'],
               ['Plant engineer', r.countersigned, 'not countersigned'],
             ].map(([role, sig, none]) => {
-              const g = sig as FieldRecord['signed'];
+              const g = sig as PrintFieldSignature | null;
               return [
                 role as string,
-                g ? `${g.by.displayName} (${g.by.initials})` : '',
+                g ? `${g.name} (${g.initials})` : '',
                 g ? date(g.at) : (none as string),
               ];
             })}

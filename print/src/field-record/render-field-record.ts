@@ -1,4 +1,3 @@
-import type { FieldRecord } from '@holdfast/shared';
 import { renderToBuffer } from '@react-pdf/renderer';
 import { createElement } from 'react';
 import { rememberEmbeddedFonts } from '../font-switch-cache.js';
@@ -7,21 +6,19 @@ import { memoiseGlyphLayout } from '../glyph-layout-cache.js';
 import type { PrintableSheet } from '../printable-sheet.js';
 import { qrDataUrl } from '../qr.js';
 import { FieldRecordDocument } from './field-record-document.js';
+import type { PrintableFieldRecord } from './printable-field-record.js';
 
 /**
  * Renders a field record on the calling thread: one or two pages of tables, far lighter than a
  * calculation sheet, so it does not queue behind sheets on the render pool.
  */
 export async function renderFieldRecordPdf(
-  record: FieldRecord,
+  record: PrintableFieldRecord,
   sheet: PrintableSheet,
-  checkLabels: Record<string, string>,
 ): Promise<Uint8Array> {
   registerPdfFonts();
   rememberEmbeddedFonts();
   memoiseGlyphLayout();
   const qr = sheet.verification ? await qrDataUrl(sheet.verification.url) : null;
-  return renderToBuffer(
-    createElement(FieldRecordDocument, { record, sheet, qr, checkLabels }) as never,
-  );
+  return renderToBuffer(createElement(FieldRecordDocument, { record, sheet, qr }) as never);
 }

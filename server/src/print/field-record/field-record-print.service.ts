@@ -3,9 +3,9 @@ import { renderFieldRecordPdf } from '@holdfast/print';
 import type { PrintQuery } from '@holdfast/shared';
 import type { AuthUser } from '../../auth/auth-user.js';
 import { FieldRecordsService } from '../../field-records/field-records.service.js';
-import { checkLabels } from '../../calc/field-targets.js';
 import { RevisionsService } from '../../revisions/revisions.service.js';
 import { RevisionPrintable } from '../revision-printable.js';
+import { printableFieldRecord } from './printable-field-record.js';
 
 /**
  * The printed field record: the revision's title block and look, with the record's own
@@ -25,7 +25,7 @@ export class FieldRecordPrintService {
     // The record's code, not the sheet's: a draft record carries none.
     const printable = await this.printable.build(revision, paper, record.verificationCode);
     const bytes = Buffer.from(
-      await renderFieldRecordPdf(record, printable, checkLabels(printable.sheetType.id)),
+      await renderFieldRecordPdf(printableFieldRecord(record, printable.sheetType.id), printable),
     );
     const marking = record.status === 'draft' ? '-draft' : '';
     const fileName =
