@@ -143,6 +143,31 @@ export default tseslint.config(
     },
   })),
   ...uiFeatureBoundaries(),
+  // Print's own Text never breaks a word where its font changes (print/src/text.tsx); charts
+  // draw SVG text, and the tests render react-pdf's own Text on purpose.
+  {
+    files: ['print/src/**/*.tsx'],
+    ignores: ['print/src/text.tsx', 'print/src/parts/chart.tsx'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          paths: [
+            ...packageBans.print.map((name) => ({
+              name,
+              message: `print must not depend on ${name}.`,
+            })),
+            {
+              name: '@react-pdf/renderer',
+              importNames: ['Text'],
+              message:
+                "Import Text from print/src/text.tsx: react-pdf's own breaks words where the font changes, with a hyphen.",
+            },
+          ],
+        },
+      ],
+    },
+  },
 
   // One door into the calculation core on the server: its values (evaluation, sheet types,
   // criteria specs) come through server/src/calc.

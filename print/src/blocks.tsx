@@ -1,4 +1,5 @@
-import { Text, View } from '@react-pdf/renderer';
+import { View } from '@react-pdf/renderer';
+import { Text } from './text.js';
 import type { ReactElement, ReactNode } from 'react';
 import type { FlowBlock } from './flow.js';
 import type { TextMeasure, TextStyle } from './measure.js';

@@ -7,7 +7,8 @@ import {
   type FieldSetting,
   type FieldTolerance,
 } from '@holdfast/calc';
-import { Document, Page, Text, View } from '@react-pdf/renderer';
+import { Document, Page, View } from '@react-pdf/renderer';
+import { Text } from './text.js';
 import { groupFieldSettings, type DiscStackSetup } from './field-card-groups.js';
 import { qty } from './format.js';
 import { Caution, rotorOf, type BrakeRotor } from './parts/caution.js';

@@ -80,6 +80,13 @@ describe.each(TYPES)('%s, real evaluation', (sheetTypeId) => {
     } else expect(text).toContain('Criteria values this sheet uses, and their sources');
   });
 
+  it('never splits a word where its font changes (no hyphen a reader could take for a minus)', () => {
+    const text = pdf.text.replace(/\s+/g, ' ');
+    expect(text).not.toMatch(/\/- /);
+    // The caliper's reference-torque choice sits right-aligned in a narrow column.
+    if (sheetTypeId === 'caliper-disc-brake') expect(text).toContain('the load (M_L/η)');
+  });
+
   it('fits the field card on one or two pages', () => {
     expect(card.pages).toBeLessThanOrEqual(2);
     expect(card.text).toContain('Set by');

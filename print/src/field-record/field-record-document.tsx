@@ -1,5 +1,6 @@
 import { toleranceText, type Dimension } from '@holdfast/calc';
-import { Document, Page, Text, View } from '@react-pdf/renderer';
+import { Document, Page, View } from '@react-pdf/renderer';
+import { Text } from '../text.js';
 import { qty } from '../format.js';
 import { Caution, rotorOf } from '../parts/caution.js';
 import { Heading, Table } from '../parts/table.js';

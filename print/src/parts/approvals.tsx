@@ -1,4 +1,5 @@
-import { Text, View } from '@react-pdf/renderer';
+import { View } from '@react-pdf/renderer';
+import { Text } from '../text.js';
 import { elementBlock, headingBlock, tableBlocks, type BlockContext } from '../blocks.js';
 import type { FlowBlock } from '../flow.js';
 import { day, stateLabel } from '../format.js';

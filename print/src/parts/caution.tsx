@@ -1,4 +1,5 @@
-import { Text, View } from '@react-pdf/renderer';
+import { View } from '@react-pdf/renderer';
+import { Text } from '../text.js';
 import type { BrakeRotor } from '@holdfast/calc';
 import type { TextMeasure } from '../measure.js';
 import { colours } from '../theme.js';

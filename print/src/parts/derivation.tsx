@@ -1,5 +1,6 @@
 import { formatForDerivation, type DerivationStep } from '@holdfast/calc';
-import { Text, View } from '@react-pdf/renderer';
+import { View } from '@react-pdf/renderer';
+import { Text } from '../text.js';
 import { qty } from '../format.js';
 import { headingBlock, paragraphBlock, type BlockContext } from '../blocks.js';
 import type { FlowBlock } from '../flow.js';

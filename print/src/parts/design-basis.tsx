@@ -1,5 +1,6 @@
 import { DIMENSIONS, type Dimension } from '@holdfast/calc';
-import { Text, View } from '@react-pdf/renderer';
+import { View } from '@react-pdf/renderer';
+import { Text } from '../text.js';
 import { day, qty } from '../format.js';
 import type { PrintableSheet, PrintCriterion, PrintUnitSystem } from '../printable-sheet.js';
 import { colours } from '../theme.js';

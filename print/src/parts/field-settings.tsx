@@ -1,5 +1,6 @@
 import { settingPrecision, type SheetEvaluation } from '@holdfast/calc';
-import { Text, View } from '@react-pdf/renderer';
+import { View } from '@react-pdf/renderer';
+import { Text } from '../text.js';
 import { pct, qtyParts, qty, unitLabel } from '../format.js';
 import type { PrintableSheet, PrintUnitSystem } from '../printable-sheet.js';
 import { colours } from '../theme.js';

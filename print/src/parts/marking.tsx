@@ -1,4 +1,5 @@
-import { Text, View } from '@react-pdf/renderer';
+import { View } from '@react-pdf/renderer';
+import { Text } from '../text.js';
 import { day } from '../format.js';
 import type { PrintableSheet } from '../printable-sheet.js';
 import { colours } from '../theme.js';

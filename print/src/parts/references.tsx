@@ -1,4 +1,5 @@
-import { Text, View } from '@react-pdf/renderer';
+import { View } from '@react-pdf/renderer';
+import { Text } from '../text.js';
 import type { PrintableSheet } from '../printable-sheet.js';
 import { headingBlock, paragraphBlock, type BlockContext } from '../blocks.js';
 import type { FlowBlock } from '../flow.js';

@@ -1,5 +1,5 @@
 import { SAFETY_CAUTIONS, type CheckResult } from '@holdfast/calc';
-import { Text } from '@react-pdf/renderer';
+import { Text } from '../text.js';
 import { headingBlock, paragraphBlock, tableBlocks, type BlockContext } from '../blocks.js';
 import type { FlowBlock } from '../flow.js';
 import { pct, qty } from '../format.js';

@@ -1,4 +1,5 @@
-import { Text, View } from '@react-pdf/renderer';
+import { View } from '@react-pdf/renderer';
+import { Text } from '../text.js';
 import type { ReactNode } from 'react';
 import { colours, monoFont, ruledRow } from '../theme.js';
 

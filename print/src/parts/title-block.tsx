@@ -1,4 +1,5 @@
-import { Image, Text, View } from '@react-pdf/renderer';
+import { Image, View } from '@react-pdf/renderer';
+import { Text } from '../text.js';
 import { day, stateLabel } from '../format.js';
 import type { PrintableSheet } from '../printable-sheet.js';
 import type { TextMeasure } from '../measure.js';
