@@ -4,6 +4,7 @@ import { criterion } from '../criteria/lookup.js';
 import { maxSetDelay, overspeedChecks } from '../stopping/overspeed.js';
 import * as q from '../units/quantities.js';
 import { makeCheck, sheetCheck } from './checks.js';
+import { fasterSetHint, type Releaser } from './set-delay-fields.js';
 
 /** Speeds of a sheet with a set delay, all on the brake shaft except the motor's rating. */
 export interface OverspeedAtSetInput {
@@ -17,6 +18,8 @@ export interface OverspeedAtSetInput {
   motorMaxSpeed: number;
   /** Brake-shaft acceleration during the set delay α_d, rad/s². */
   delayAcceleration: number;
+  /** What releases the brake: named in the advice on a failed check. */
+  releaser: Releaser;
 }
 
 /**
@@ -50,13 +53,7 @@ export function overspeedAtSet(input: OverspeedAtSetInput, d: Derivation): Check
       d,
     );
   }
-  return r.checks.map((c) =>
-    sheetCheck(
-      c,
-      'stopping',
-      "Shorten the set delay (thruster at its coldest oil: maker's data) or add a faster-setting brake.",
-    ),
-  );
+  return r.checks.map((c) => sheetCheck(c, 'stopping', fasterSetHint(input.releaser)));
 }
 
 /** p·v at the speed the brake sets with against the criteria set's limit (section 'lining'). */

@@ -36,4 +36,14 @@ describe('a caliper sheet speaks of its disc and pads', () => {
     expect(words.length).toBeGreaterThan(100);
     expect(words.filter((w) => /drum|lining|shoe/i.test(w))).toEqual([]);
   });
+
+  it('its inputs name its release unit, not a thruster (the shoe sheets keep theirs)', () => {
+    const text = (id: string) =>
+      getSheetType(id)!
+        .fields.flatMap((f) => [f.label, f.help ?? ''])
+        .join('\n');
+    expect(text('caliper-disc-brake')).not.toMatch(/thruster/i);
+    expect(text('caliper-disc-brake')).toContain('Brake set delay of the release unit');
+    expect(text('hoist-shoe-brake')).toContain("Brake set delay at the thruster's coldest oil");
+  });
 });

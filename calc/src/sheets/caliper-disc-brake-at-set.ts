@@ -90,6 +90,7 @@ export function caliperAtSet(
         motorRatio: v.ratioToBrake,
         motorMaxSpeed: v.motorMaxSpeed,
         delayAcceleration: duty.driveTorque / v.inertia,
+        releaser: 'release unit',
       },
       d,
     ),

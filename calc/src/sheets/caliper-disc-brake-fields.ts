@@ -111,7 +111,7 @@ export const CALIPER_FIELDS = withBounds(
         help: 'When given, the static torque is checked against m·g·v_0/ω_b so that torque, speed and inertia describe the same hoist.',
       },
     ),
-    ...setDelayFields(2200),
+    ...setDelayFields(2200, 'release unit'),
     qty(
       U,
       'maxStoppingDistance',

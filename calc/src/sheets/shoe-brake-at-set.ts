@@ -65,6 +65,7 @@ export function shoeOverspeed(duty: ShoeDuty, stop: StoppingResult, d: Derivatio
       motorRatio: 1,
       motorMaxSpeed: duty.motorMaxSpeed,
       delayAcceleration: duty.driveTorque / duty.inertia,
+      releaser: 'thruster',
     },
     d,
   );

@@ -71,7 +71,7 @@ export interface SpeedAtSetInput {
    * the conservative value for an emergency stop (no credit for gear losses).
    */
   backDrivingEfficiency: Ratio;
-  /** Set delay t_d: power off to full brake torque (thruster set time at its coldest oil), s (≥ 0). */
+  /** Set delay t_d: power off to full brake torque (the release's slowest set time), s (≥ 0). */
   setDelay: Time;
   /** Friction radius: drum radius D/2 for a shoe brake, effective radius for a disc brake, m (> 0). */
   frictionRadius: Length;
