@@ -52,11 +52,14 @@ export function caliperDuty(v: CaliperInputs, criteria: CriteriaSet, d: Derivati
   const ML = v.staticTorque;
   const Mhoist = compute(d, hoistingTorqueFormula, { M_L: ML, eta });
   const Mhold = compute(d, holdingTorqueFormula, { M_L: ML, eta });
-  // Motor torque referred to the brake shaft without efficiency loss: the brake must hold what the motor can drive.
+  // Motor torque referred to the brake shaft without efficiency loss: the brake must hold what the
+  // motor can drive. The referral's ratio runs brake shaft ÷ motor, the inverse of the sheet's i
+  // (motor ÷ brake shaft), so the step prints it as i⁻¹ beside the input i it came from.
   const MmotB = referTorque(Mmot, q.ratio(1 / v.ratioToBrake), q.ratio(1), 'driving', d, {
     id: 'motor-torque-at-brake',
-    label: 'Motor rated torque referred to the brake shaft',
+    label: 'Motor rated torque referred to the brake shaft (no efficiency credit)',
     symbol: 'M_mot,b',
+    names: { M_out: 'M_mot', i: 'i⁻¹' },
   });
   const basis = v.referenceBasis as ReferenceBasis;
   const Mref = basis === 'motor' ? MmotB : basis === 'hoisting' ? Mhoist : Mhold;
