@@ -6,7 +6,7 @@ export type TextPiece = string | { symbol: string };
 const FUNCTION_TEXT: Record<string, string> = { sqrt: '√', log: 'ln' };
 const CONSTANTS: Record<string, string> = { pi: 'π', e: 'e' };
 const OPERATOR_TEXT: Record<string, string> = { '*': ' · ', '/': ' / ', '+': ' + ', '-': ' − ' };
-const SUPERSCRIPTS: Record<string, string> = { '2': '²', '3': '³' };
+const SUPERSCRIPTS: Record<string, string> = { '2': '²', '3': '³', '4': '⁴' };
 
 interface AnyNode {
   type: string;
@@ -19,7 +19,7 @@ interface AnyNode {
 }
 
 /**
- * Renders a parsed mathjs expression into text pieces: '·' for products, '²' for squares, '√'
+ * Renders a parsed mathjs expression into text pieces: '·' for products, '²' '³' '⁴' for powers, '√'
  * for roots, 'π' for pi, and a placeholder for every symbol of `symbols`. Parentheses are kept
  * where the expression has them, so write definitions with the grouping you want printed.
  */

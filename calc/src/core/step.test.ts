@@ -62,6 +62,20 @@ describe('defineFormula', () => {
     expect(f.substitute({ a: -0.15, b: 2 })).toBe('V = (−150.0 mm) · (−150.0 mm)² + 2');
   });
 
+  it('prints a fourth power as a superscript, around the whole quantity; other powers with ^', () => {
+    const f = defineFormula({
+      id: 'quartic',
+      label: 'quartic',
+      symbol: 'F',
+      expression: 't^4 * t^5',
+      symbols: { t: { text: 't', dimension: 'length' } },
+      dimension: 'dimensionless',
+      reference: 'x',
+    });
+    expect(f.text).toBe('F = t⁴ · t^5');
+    expect(f.substitute({ t: 0.0015 })).toBe('F = (1.50 mm)⁴ · (1.50 mm)^5');
+  });
+
   it('wraps negative substitutions in parentheses', () => {
     expect(torque.substitute({ mu: 0.35, N: -100, D: 0.4 })).toContain('(−100 N)');
   });

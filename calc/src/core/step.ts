@@ -85,7 +85,7 @@ export function defineFormula<S extends string, D extends Dimension>(
     return {
       symbol: p.symbol,
       units: printUnitsOf(symbolSpec.dimension),
-      powered: typeof next === 'string' && /^[²³^]/.test(next),
+      powered: typeof next === 'string' && /^[²³⁴^]/.test(next),
       memo: memoIndex.get(p.symbol) ?? -1,
     };
   });
