@@ -47,6 +47,22 @@ describe('sheet registry', () => {
       for (const f of s.fields) expect(s.sections.map((x) => x.id)).toContain(f.section);
     }
   });
+
+  it('gives two inputs of one section the same symbol only for the same quantity of two stacks', () => {
+    // 'holderPitch' and 'equaliserPitch' are both P, each under its stack's title.
+    const quantity = (key: string) => key.replace(/^(holder|equaliser|a|b)(?=[A-Z])/, '');
+    for (const s of sheetTypes) {
+      const seen = new Map<string, string>();
+      for (const f of s.fields) {
+        if (!f.symbol) continue;
+        const at = `${f.section} ${f.symbol}`;
+        const other = seen.get(at);
+        if (other !== undefined)
+          expect(quantity(f.key), `${s.id}: ${other} and ${f.key}`).toBe(quantity(other));
+        else seen.set(at, f.key);
+      }
+    }
+  });
 });
 
 describe.each([

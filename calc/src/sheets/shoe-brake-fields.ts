@@ -285,12 +285,12 @@ export const RELEASE_FIELDS = [
   }),
   ...(
     [
-      ['thrusterFactorLowVoltage', 'at −10 % supply voltage', 0.95],
-      ['thrusterFactorCold', 'at the lowest site temperature (coldest oil)', 0.85],
-      ['thrusterFactorHot', 'at the highest site temperature', 0.95],
+      ['thrusterFactorLowVoltage', 'at −10 % supply voltage', 'k_th,U', 0.95],
+      ['thrusterFactorCold', 'at the lowest site temperature (coldest oil)', 'k_th,cold', 0.85],
+      ['thrusterFactorHot', 'at the highest site temperature', 'k_th,hot', 0.95],
     ] as const
-  ).map(([key, when, demo]) =>
-    num(R, key, `Thruster lift force ${when} ÷ rated force (maker's data)`, 'k_th', demo, {
+  ).map(([key, when, symbol, demo]) =>
+    num(R, key, `Thruster lift force ${when} ÷ rated force (maker's data)`, symbol, demo, {
       min: 0,
       exclusiveMin: true,
       max: 1.5,
