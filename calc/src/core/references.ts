@@ -37,6 +37,8 @@ export const REF = {
   adhesion:
     'wheel–rail adhesion: needed μ = braking force / normal load on braked wheels (statics)',
   release: 'virtual work through the release linkage: F_th·s_th·η = F_s·s_s (statics)',
+  liftedSpring:
+    'linear spring (Hooke): opening the brake by the clearance ε compresses the spring by ε·r_s through the linkage travel ratio (statics)',
   stroke: 'stroke budget of the thruster (common practice; maker data governs)',
   springSetting: 'linear spring: L = L0 − F/k (Hooke)',
 } as const;

@@ -15,7 +15,7 @@ export const releasedSpringForceFormula = defineFormula({
     r_s: { text: 'r_s', dimension: 'dimensionless' },
   },
   dimension: 'force',
-  reference: REF.release,
+  reference: REF.liftedSpring,
 });
 
 export const thrusterForceFormula = defineFormula({
