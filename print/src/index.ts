@@ -10,6 +10,7 @@ export type {
   PrintableFieldRecord,
   PrintFieldCheck,
   PrintFieldMeasurement,
+  PrintFieldPhoto,
   PrintFieldSignature,
 } from './field-record/printable-field-record.js';
 export {

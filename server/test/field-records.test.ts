@@ -346,6 +346,15 @@ describe('field records', () => {
     });
     const other = Buffer.concat([png, Buffer.from([1])]);
     expect((await send(other, 'late.png')).status).toBe(409);
+    // The printed record names its photo and the start of its hash, to match the stored file.
+    ensurePoppler();
+    const pdf = await fetch(`${suite.ctx.baseUrl}/api/field-records/${b.id}/pdf`, {
+      headers: { authorization: `Bearer ${await suite.ctx.token('viewer')}` },
+    });
+    const text = inspectPdf(Buffer.from(await pdf.arrayBuffer()), 'field-record-photo').text;
+    expect(text.replace(/\s+/g, ' ')).toContain(`shoe-a.png`);
+    expect(text).toContain(ok.body.sha256.slice(0, 16));
+    expect(text).not.toContain('late.png');
   });
 
   it('a photo sent again (its answer lost) is filed once, even when both sends arrive at once', async () => {

@@ -107,6 +107,26 @@ export function FieldRecordDocument(props: {
         />
         <Heading>Findings</Heading>
         <Text>{r.findings || 'None recorded.'}</Text>
+        <Heading>Photos</Heading>
+        {r.photos.length === 0 ? (
+          <Text>None filed.</Text>
+        ) : (
+          <Table
+            columns={[
+              { title: 'File', flex: 2.4 },
+              { title: 'Filed by', flex: 2 },
+              { title: 'Size', flex: 0.8, align: 'right' },
+              // The start of the hash is enough to match a printout to the stored photo.
+              { title: 'SHA-256 (start)', flex: 1.4 },
+            ]}
+            rows={r.photos.map((p) => [
+              p.fileName,
+              `${p.by}, ${date(p.at)}`,
+              `${Math.max(1, Math.round(p.size / 1024))} KiB`,
+              p.sha256.slice(0, 16),
+            ])}
+          />
+        )}
         <View wrap={false}>
           <Heading>Signatures</Heading>
           <Table

@@ -33,6 +33,18 @@ export interface PrintFieldCheck {
   note: string;
 }
 
+/** A photo filed with a field record: the printout names it so it can be found and matched. */
+export interface PrintFieldPhoto {
+  fileName: string;
+  /** SHA-256 of the stored bytes, hex. */
+  sha256: string;
+  /** Bytes. */
+  size: number;
+  /** Who filed it, and when (ISO 8601). */
+  by: string;
+  at: string;
+}
+
 /**
  * Everything the printed field record shows of the record itself, as plain data; the sheet it was
  * set to comes beside it as a `PrintableSheet`. The server builds it from the stored record.
@@ -51,6 +63,7 @@ export interface PrintableFieldRecord {
   measurements: PrintFieldMeasurement[];
   checks: PrintFieldCheck[];
   findings: string;
+  photos: PrintFieldPhoto[];
   signed: PrintFieldSignature | null;
   countersigned: PrintFieldSignature | null;
 }

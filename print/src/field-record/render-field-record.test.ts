@@ -53,6 +53,15 @@ const record: PrintableFieldRecord = {
     },
   ],
   findings: '',
+  photos: [
+    {
+      fileName: 'br-9-spring.jpg',
+      sha256: 'a3f1c2d4e5b60718293a4b5c6d7e8f90a1b2c3d4e5f60718293a4b5c6d7e8f9',
+      size: 245_760,
+      by: 'Tomas Fitter',
+      at: '2026-11-30T09:40:00Z',
+    },
+  ],
   signed: { name: 'Tomas Fitter', initials: 'TF', at: '2026-11-30T10:00:00Z' },
   countersigned: null,
 };
@@ -76,6 +85,9 @@ describe('printed field record', () => {
     expect(t).toContain('5 cycles');
     expect(t).toMatch(/Lining thickness, shoe 1 n\/a 9\.00 mm; as found/);
     expect(t).toContain('None recorded.');
+    expect(t).toMatch(
+      /br-9-spring\.jpg Tomas Fitter, 2026-11-30 09:40 UTC 240 KiB a3f1c2d4e5b60718/,
+    );
     expect(t).toContain('Tomas Fitter (TF)');
     expect(t).toContain('not countersigned');
   }, 120_000);

@@ -25,6 +25,11 @@ import { PositionFieldController } from './position-field.controller.js';
     InspectionRemindersJob,
     FieldRecordPhotosService,
   ],
-  exports: [FieldRecordsRepository, FieldRecordsService, FieldRecordSigningService],
+  exports: [
+    FieldRecordsRepository,
+    FieldRecordsService,
+    FieldRecordSigningService,
+    FieldRecordPhotosService,
+  ],
 })
 export class FieldRecordsModule {}

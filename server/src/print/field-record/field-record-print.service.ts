@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { renderFieldRecordPdf } from '@holdfast/print';
 import type { PrintQuery } from '@holdfast/shared';
 import type { AuthUser } from '../../auth/auth-user.js';
+import { FieldRecordPhotosService } from '../../field-records/field-record-photos.service.js';
 import { FieldRecordsService } from '../../field-records/field-records.service.js';
 import { RevisionsService } from '../../revisions/revisions.service.js';
 import { RevisionPrintable } from '../revision-printable.js';
@@ -15,6 +16,7 @@ import { printableFieldRecord } from './printable-field-record.js';
 export class FieldRecordPrintService {
   constructor(
     private readonly records: FieldRecordsService,
+    private readonly photos: FieldRecordPhotosService,
     private readonly revisions: RevisionsService,
     private readonly printable: RevisionPrintable,
   ) {}
@@ -25,7 +27,10 @@ export class FieldRecordPrintService {
     // The record's code, not the sheet's: a draft record carries none.
     const printable = await this.printable.build(revision, paper, record.verificationCode);
     const bytes = Buffer.from(
-      await renderFieldRecordPdf(printableFieldRecord(record, printable.sheetType.id), printable),
+      await renderFieldRecordPdf(
+        printableFieldRecord(record, printable.sheetType.id, await this.photos.list(id)),
+        printable,
+      ),
     );
     const marking = record.status === 'draft' ? '-draft' : '';
     const fileName =

@@ -1,12 +1,16 @@
 import type { PrintableFieldRecord, PrintFieldSignature } from '@holdfast/print';
-import { fieldRecordKindLabels, type FieldRecord } from '@holdfast/shared';
+import { fieldRecordKindLabels, type Attachment, type FieldRecord } from '@holdfast/shared';
 import { checkLabels } from '../../calc/field-targets.js';
 
 const signature = (s: FieldRecord['signed']): PrintFieldSignature | null =>
   s && { name: s.by.displayName, initials: s.by.initials, at: s.at };
 
 /** The printed field record's own data, from the stored record (labels in the sheet type's words). */
-export function printableFieldRecord(r: FieldRecord, sheetType: string): PrintableFieldRecord {
+export function printableFieldRecord(
+  r: FieldRecord,
+  sheetType: string,
+  photos: Attachment[],
+): PrintableFieldRecord {
   const labels = checkLabels(sheetType);
   return {
     kindLabel: fieldRecordKindLabels[r.kind],
@@ -36,6 +40,13 @@ export function printableFieldRecord(r: FieldRecord, sheetType: string): Printab
       note: c.note,
     })),
     findings: r.findings,
+    photos: photos.map((p) => ({
+      fileName: p.fileName,
+      sha256: p.sha256,
+      size: p.size,
+      by: p.uploadedBy.displayName,
+      at: p.createdAt,
+    })),
     signed: signature(r.signed),
     countersigned: signature(r.countersigned),
   };
