@@ -3,7 +3,7 @@ import type { ComponentProps } from 'react';
 
 /**
  * Knuth–Plass "infinite" penalty: react-pdf's line breaker never breaks at a penalty this high.
- * It must stay equal to textkit's `linebreak.infinity` (library-patches.test.ts holds it there).
+ * If textkit changes that value, text.test.ts sees words split again and fails.
  */
 export const NO_BREAK_PENALTY = 10_000;
 
