@@ -18,8 +18,8 @@ export type FieldRecordKind = z.infer<typeof fieldRecordKindSchema>;
 export const fieldRecordKindLabels: Readonly<Record<FieldRecordKind, string>> = {
   commissioning: 'Commissioning (first setting)',
   'periodic-inspection': 'Periodic inspection',
-  're-adjustment': 'Re-adjustment for lining wear',
-  'lining-replacement': 'Lining replacement',
+  're-adjustment': 'Re-adjustment for lining or pad wear',
+  'lining-replacement': 'Lining or pad replacement',
   'after-repair': 'After repair',
 };
 
