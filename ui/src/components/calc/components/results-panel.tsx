@@ -13,8 +13,9 @@ import {
   Title,
 } from '@mantine/core';
 import { IconAlertTriangle, IconBolt } from '@tabler/icons-react';
-import type { CheckDriver, SectionDefinition, SheetEvaluation } from '@holdfast/calc';
+import type { CheckDriver, CriteriaSet, SectionDefinition, SheetEvaluation } from '@holdfast/calc';
 import { CheckDriversButton } from './check-drivers-button';
+import { CriteriaUsed } from './criteria-used';
 import { EvaluationShown, ResultsTabs } from './results-tabs';
 import { Verdict } from './verdict';
 import type { UnitSystem } from '../utils/units';
@@ -35,6 +36,8 @@ export interface ResultsPanelProps {
   renderStepAside?: (id: string) => ReactNode;
   /** The inputs that drive a check; failing checks then link to them. */
   findDrivers?: (checkId: string) => CheckDriver[];
+  /** The criteria set the evaluation was made against: named, with the values its checks use. */
+  criteria?: CriteriaSet;
 }
 
 /**
@@ -108,6 +111,15 @@ export const ResultsPanel = memo(function ResultsPanel(props: ResultsPanelProps)
           </Text>
         ) : null}
       </Group>
+      {shown && props.criteria ? (
+        <Box mt={-6} mb="sm">
+          <CriteriaUsed
+            criteria={props.criteria}
+            used={shown.criteriaUsed}
+            unitSystem={unitSystem}
+          />
+        </Box>
+      ) : null}
       {evaluation && failing > 0 ? (
         <Box
           component="ul"

@@ -1,20 +1,8 @@
 import { Badge, Button, Select, Stack, Table, Text, TextInput } from '@mantine/core';
 import type { CriterionConfirmation, CriterionValueInput } from '@holdfast/shared';
-import { criterionSpec } from '@holdfast/calc';
-import { presentSI } from '../../../components/calc/utils/units';
+import { criterionDisplay } from '../../../components/calc/utils/criterion-value';
 import { fitWidth } from '../../../lib/fit-width';
 import { isoDay } from '../../../lib/dates';
-
-/**
- * A stored criterion (SI) in the trade's units, e.g. 2 100 000 Pa·m/s → 2.100 MPa·m/s. Editing
- * stays in the stored SI unit, so what is typed is what is stored.
- */
-function tradeValue(v: CriterionValueInput): { number: string; unit: string } {
-  // The catalogue declares each criterion's dimension; a key it does not know prints as stored.
-  const dimension = criterionSpec(v.key)?.dimension;
-  if (!dimension || dimension === 'dimensionless') return { number: String(v.value), unit: v.unit };
-  return presentSI(v.value, dimension, 'SI');
-}
 
 const CONFIDENCE_COLOR: Record<CriterionValueInput['confidence'], string> = {
   published: 'pass',
@@ -110,10 +98,12 @@ export function CriteriaValuesTable({
                     }}
                   />
                 ) : (
-                  tradeValue(v).number
+                  criterionDisplay(v).number
                 )}
               </Table.Td>
-              <Table.Td ff="monospace">{(onEdit ? v.unit : tradeValue(v).unit) || '—'}</Table.Td>
+              <Table.Td ff="monospace">
+                {(onEdit ? v.unit : criterionDisplay(v).unit) || '—'}
+              </Table.Td>
               <Table.Td>
                 {onEdit ? (
                   <TextInput

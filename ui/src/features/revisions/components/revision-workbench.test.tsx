@@ -148,6 +148,23 @@ describe('RevisionWorkbench', () => {
     expect(screen.queryByTestId('recalc-time')).not.toBeInTheDocument();
   });
 
+  it('says a draft read by someone who cannot edit it shows what was stored at the last save', () => {
+    mockFetch({});
+    const stored = leverBrakeFixture.evaluate(makeRevision().inputs, fixtureCriteria);
+    renderBench(
+      makeRevision({
+        state: 'draft',
+        canEdit: false,
+        canSubmit: false,
+        submittedAt: null,
+        evaluation: stored,
+        coreVersion: '1.0.0',
+      }),
+    );
+    expect(screen.getByText(/Stored at the last save \(1\.0\.0\)/)).toBeInTheDocument();
+    expect(screen.queryByText(/Stored at submission/)).not.toBeInTheDocument();
+  });
+
   it('switching to US customary converts the inputs and the results', async () => {
     mockFetch({
       [PUT]: (req) => ({ body: { ...makeRevision(), ...(req.body as object), rowVersion: 4 } }),

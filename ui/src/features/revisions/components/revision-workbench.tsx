@@ -191,7 +191,8 @@ export function RevisionWorkbench(props: RevisionWorkbenchProps) {
             durationMs={stored || live.runs === 0 ? undefined : live.durationMs}
             origin={
               stored
-                ? `Stored at submission (${revision.coreVersion ?? 'core'})`
+                ? // A draft or returned revision read by someone else was stored when last saved.
+                  `Stored at ${revision.state === 'draft' || revision.state === 'returned' ? 'the last save' : 'submission'} (${revision.coreVersion ?? 'core'})`
                 : 'Recalculated live in your browser'
             }
             failure={stored ? null : live.failure}
@@ -199,6 +200,7 @@ export function RevisionWorkbench(props: RevisionWorkbenchProps) {
             renderCheckAside={props.renderCheckAside}
             renderStepAside={props.renderStepAside}
             findDrivers={criteria ? findDrivers : undefined}
+            criteria={criteria}
           />
         </Box>
       </div>
