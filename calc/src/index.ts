@@ -107,7 +107,7 @@ export { travelShoeBrakeSheet, evaluateTravelShoeBrake } from './sheets/travel-s
 export { caliperDiscBrakeSheet, evaluateCaliperDiscBrake } from './sheets/caliper-disc-brake.js';
 export { makeCheck, type CheckSpec } from './sheets/checks.js';
 export { SAFETY_CAUTIONS } from './sheets/sheet-output.js';
-export { rotorOf, type BrakeRotor } from './sheets/brake-rotor.js';
+export { rotorOf } from './sheets/brake-rotor.js';
 export * from './field/wear-trend.js';
 export * from './field/wear-series.js';
 export { studentTQuantile, studentTCdf } from './field/student-t.js';

@@ -153,13 +153,13 @@ export function afterSettingLines(sheet: PrintableSheet): string[] {
 export const PUSH_ROD_CAUTION =
   'The thruster push rod is not a lifting point and no handle: open the brake with the hand release.';
 
-/** The field setting card: what to set, what to measure, where to record it. */
 /** What wear does to the setting, under the clearance rows: a caliper has pads and no thruster reserve. */
 const WEAR_NOTE: Record<BrakeRotor, string> = {
   drum: 'Lining wear uses up the reserve: re-adjust before it falls below the minimum given. With the reserve stroke used up the brake can lose all holding torque.',
   disc: 'Pad wear widens the air gap and lets the springs extend, which lowers the clamp force: re-adjust at the pad wear given. Worn further, the brake may no longer hold the required torque.',
 };
 
+/** The field setting card: what to set, what to measure, where to record it. */
 export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | null }) {
   const { sheet, qr } = props;
   const rotor = rotorOf(sheet.sheetType.id);

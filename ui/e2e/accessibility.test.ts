@@ -4,6 +4,7 @@ import { clippedTexts, seriousViolations } from './support/axe';
 import { e2eBaseUrl, e2eSkipReason, launchBrowser, type BrowserSession } from './support/browser';
 import { screenshot } from './support/screenshot';
 import { signInAs } from './support/sign-in';
+import { demoPositionInForce } from './support/field-form';
 import type { DemoUserKey } from './support/demo-users';
 
 const skipReason = e2eSkipReason();
@@ -46,15 +47,9 @@ describe.skipIf(skipReason !== null)('accessibility of the main screens', () => 
     approved = { sheetId: a.id, revisionId: a.approved!.id };
     const d = items.find((s) => s.latest.state === 'draft')!;
     draft = { sheetId: d.id, revisionId: d.latest.id };
-    const register = await apiAs(baseUrl, 'engineer', 'GET', '/register');
-    const positions = (
-      register.sites as {
-        machines: { positions: { id: string; tag: string; inForce: { revisionId: string }[] }[] }[];
-      }[]
-    ).flatMap((site) => site.machines.flatMap((m) => m.positions));
     // The demo position with a wear history: other files approve sheets on other positions.
-    const set = positions.find((p) => p.tag === 'MH-B1' && p.inForce.length > 0)!;
-    field = { positionId: set.id, revisionId: set.inForce[0]!.revisionId };
+    const { positionId, revisionId } = await demoPositionInForce(baseUrl);
+    field = { positionId, revisionId };
   });
   afterAll(async () => {
     await browser?.close();

@@ -249,3 +249,6 @@ export interface FieldError {
   field: string;
   message: string;
 }
+
+/** What the brake acts on: a drum-brake card never speaks of discs, a caliper card of drums. */
+export type BrakeRotor = 'drum' | 'disc';

@@ -1,5 +1,5 @@
 import type { Derivation } from '../core/step.js';
-import type { BrakeRotor } from '../sheets/brake-rotor.js';
+import type { BrakeRotor } from '../core/types.js';
 import * as q from '../units/quantities.js';
 import {
   averageHeat,

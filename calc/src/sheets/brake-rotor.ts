@@ -1,5 +1,4 @@
-/** What the brake acts on: a drum-brake card never speaks of discs, a caliper card of drums. */
-export type BrakeRotor = 'drum' | 'disc';
+import type { BrakeRotor } from '../core/types.js';
 
 /** The rotor of a sheet type: only the caliper disc brake acts on a disc. */
 export function rotorOf(sheetTypeId: string): BrakeRotor {

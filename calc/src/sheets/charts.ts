@@ -1,7 +1,6 @@
-import type { ChartData } from '../core/types.js';
+import type { BrakeRotor, ChartData } from '../core/types.js';
 import { temperatureHistory } from '../energy/heat.js';
 import type { StoppingResult } from '../stopping/stopping.js';
-import type { BrakeRotor } from './brake-rotor.js';
 
 /**
  * Load speed against time through the set delay and the braking phase. `kv` = load speed per

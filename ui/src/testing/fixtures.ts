@@ -1,3 +1,4 @@
+import type { SheetEvaluation } from '@holdfast/calc';
 import type { Session, User } from '@holdfast/shared';
 
 export function makeUser(overrides: Partial<User> = {}): User {
@@ -48,4 +49,23 @@ export const testUsers = {
 
 export function makeSession(user: User = testUsers.engineer, token = 'access-token-1'): Session {
   return { accessToken: token, expiresIn: 900, user };
+}
+
+/** An empty evaluation that passes, with the parts a test gives. */
+export function makeEvaluation(parts: Partial<SheetEvaluation> = {}): SheetEvaluation {
+  return {
+    sheetType: 'test',
+    coreVersion: 'test',
+    criteriaSetId: 'test',
+    criteriaSetVersion: 1,
+    results: [],
+    checks: [],
+    derivation: [],
+    charts: [],
+    fieldSettings: [],
+    tables: [],
+    warnings: [],
+    pass: true,
+    ...parts,
+  };
 }

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { getCriteriaSet, type SheetEvaluation } from '@holdfast/calc';
+import { getCriteriaSet } from '@holdfast/calc';
+import { makeEvaluation } from '../../../testing/fixtures';
 import { renderWithProviders } from '../../../testing/render';
 import { CriteriaUsed } from './criteria-used';
 import { ResultsPanel } from './results-panel';
@@ -39,21 +40,12 @@ describe('CriteriaUsed', () => {
   });
 
   it('sits under the results heading when the panel is given the criteria set', () => {
-    const evaluation: SheetEvaluation = {
+    const evaluation = makeEvaluation({
       sheetType: 'disc-spring-stack',
-      coreVersion: 'test',
       criteriaSetId: general.id,
       criteriaSetVersion: general.version,
-      results: [],
-      checks: [],
-      derivation: [],
-      charts: [],
-      fieldSettings: [],
-      tables: [],
-      warnings: [],
-      pass: true,
       criteriaUsed: [],
-    };
+    });
     renderWithProviders(
       <ResultsPanel
         evaluation={evaluation}

@@ -1,26 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { screen, within } from '@testing-library/react';
-import { settingPrecision, toDisplay, type SheetEvaluation } from '@holdfast/calc';
+import { settingPrecision, toDisplay } from '@holdfast/calc';
+import { makeEvaluation } from '../../../testing/fixtures';
 import { renderWithProviders } from '../../../testing/render';
 import { FieldSettingsView } from './field-settings-view';
-
-function evaluation(parts: Partial<SheetEvaluation>): SheetEvaluation {
-  return {
-    sheetType: 'shoe-brake-release',
-    coreVersion: 'test',
-    criteriaSetId: 'test',
-    criteriaSetVersion: 1,
-    results: [],
-    checks: [],
-    derivation: [],
-    charts: [],
-    fieldSettings: [],
-    tables: [],
-    warnings: [],
-    pass: true,
-    ...parts,
-  };
-}
 
 const spring = {
   key: 'springLength',
@@ -38,7 +21,10 @@ function printed(value: number, key: string, system: 'SI' | 'US'): string {
 describe('FieldSettingsView', () => {
   it('shows a spring length of 0.2227 m as the card prints it: 222.5 mm, to the 0.5 mm rule step', () => {
     renderWithProviders(
-      <FieldSettingsView evaluation={evaluation({ fieldSettings: [spring] })} unitSystem="SI" />,
+      <FieldSettingsView
+        evaluation={makeEvaluation({ fieldSettings: [spring] })}
+        unitSystem="SI"
+      />,
     );
     const row = screen.getByRole('row', { name: /Main spring length as set/ });
     expect(row).toHaveTextContent('222.5 mm');
@@ -57,7 +43,7 @@ describe('FieldSettingsView', () => {
     };
     const { unmount } = renderWithProviders(
       <FieldSettingsView
-        evaluation={evaluation({ fieldSettings: [spring, clearance] })}
+        evaluation={makeEvaluation({ fieldSettings: [spring, clearance] })}
         unitSystem="SI"
       />,
     );
@@ -66,7 +52,10 @@ describe('FieldSettingsView', () => {
     );
     unmount();
     renderWithProviders(
-      <FieldSettingsView evaluation={evaluation({ fieldSettings: [spring] })} unitSystem="US" />,
+      <FieldSettingsView
+        evaluation={makeEvaluation({ fieldSettings: [spring] })}
+        unitSystem="US"
+      />,
     );
     expect(screen.getByRole('row', { name: /Main spring length as set/ })).toHaveTextContent(
       printed(0.2227, 'springLength', 'US'),
@@ -76,7 +65,7 @@ describe('FieldSettingsView', () => {
   it('prints setting-table cells to the same steps as the printed table', () => {
     renderWithProviders(
       <FieldSettingsView
-        evaluation={evaluation({
+        evaluation={makeEvaluation({
           tables: [
             {
               id: 'spring-table',
