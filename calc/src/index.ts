@@ -38,6 +38,7 @@ export {
   PRECISION,
   SETTING_PRECISION,
   settingPrecision,
+  readingPrecision,
   formatWithPrecision,
   type Precision,
 } from './units/precision.js';

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { defineFormula, Derivation } from '../core/step.js';
 import { toDisplay } from './display.js';
 import { formatForDerivation } from './format.js';
-import { PRECISION, formatWithPrecision, settingPrecision } from './precision.js';
+import { PRECISION, formatWithPrecision, readingPrecision, settingPrecision } from './precision.js';
 
 /** Significant figures of a printed number ('0.0806' → 3, '2290' → 3 at most, '65' → 2). */
 function significantFigures(text: string): number {
@@ -65,6 +65,18 @@ describe('printing precision per quantity', () => {
     const deg = toDisplay(Math.PI / 3, 'angle', 'SI', undefined, settingPrecision('x', 'angle'));
     expect(deg.text).toBe('60°');
     expect(settingPrecision('holderPreload', 'force')).toBe(PRECISION.force);
+  });
+
+  it("prints a fitter's reading to a tenth of the setting's step, never snapped to the step", () => {
+    const mm = (key: string, m: number) =>
+      toDisplay(m, 'length', 'SI', undefined, readingPrecision(key, 'length')).text;
+    // Snapped to 0.5 mm, 222.6 mm would print as the 222.5 mm target while judged against it.
+    expect(mm('springLength', 0.2226)).toBe('222.6 mm');
+    expect(mm('reserveStroke', 0.017)).toBe('17.0 mm');
+    expect(mm('shoeClearance', 0.00083)).toBe('0.83 mm');
+    // A length with no rule of its own, and other dimensions, print as any value does.
+    expect(readingPrecision('other', 'length')).toBe(PRECISION.length);
+    expect(readingPrecision('springForce', 'force')).toBe(PRECISION.force);
   });
 
   it('drops trailing zeros of pure numbers and keeps full precision when figures are asked', () => {

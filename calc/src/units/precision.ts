@@ -83,6 +83,19 @@ export function settingPrecision(key: string, dimension: Dimension): Precision {
 }
 
 /**
+ * How a fitter's reading of a setting prints (as found, as left): to a tenth of the step the
+ * setting is set by (a steel-rule length to 0.1 mm, a feeler-gauge clearance to 0.01 mm), never
+ * snapped to the step itself. A reading of 222.6 mm stays 222.6 mm, so the printed value always
+ * agrees with its within/OUT verdict, and 17 mm does not print as 17.00 mm.
+ */
+export function readingPrecision(key: string, dimension: Dimension): Precision {
+  const base = PRECISION[dimension];
+  const rule = dimension === 'length' ? SETTING_PRECISION.find((r) => r.match.test(key)) : null;
+  // The steps are 5 × 10ⁿ: a fifth of one is the tenth of its unit (0.5 mm → 0.1 mm).
+  return rule ? { ...base, finest: rule.finest / 5 } : base;
+}
+
+/**
  * Prints `value` (already in a display unit of `factor` SI units, printed as `label`) to the
  * precision given: at most `digits` significant figures, and no finer than the finest step.
  * @example formatWithPrecision(0.8, 1e-3, 'mm', PRECISION.length) // '0.80'

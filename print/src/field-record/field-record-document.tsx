@@ -1,4 +1,4 @@
-import { toleranceText, type Dimension } from '@holdfast/calc';
+import { readingPrecision, toleranceText, type Dimension } from '@holdfast/calc';
 import { Document, Page, View } from '@react-pdf/renderer';
 import { Text } from '../text.js';
 import { qty } from '../format.js';
@@ -26,8 +26,9 @@ export function FieldRecordDocument(props: {
 }) {
   const { record: r, sheet, qr } = props;
   const system = sheet.unitSystem;
-  const val = (v: number | null, dim: string) =>
-    v === null ? '—' : qty(v, dim as Dimension, system);
+  // A reading prints to the tool's resolution for that setting, as the fitter can read it.
+  const reading = (v: number | null, key: string, dim: string) =>
+    v === null ? '—' : qty(v, dim as Dimension, system, readingPrecision(key, dim as Dimension));
   const verdict = (within: boolean | null) => (within === null ? '—' : within ? 'within' : 'OUT');
   const flags = [
     r.flags.superseded && 'The revision this brake was set to has since been superseded.',
@@ -70,8 +71,8 @@ export function FieldRecordDocument(props: {
             m.label,
             targetText(m, system),
             toleranceText(m.tolerance, m.dimension as Dimension, system),
-            val(m.asFound, m.dimension),
-            val(m.asLeft, m.dimension),
+            reading(m.asFound, m.settingKey, m.dimension),
+            reading(m.asLeft, m.settingKey, m.dimension),
             verdict(m.asLeftWithin),
           ])}
         />

@@ -78,7 +78,7 @@ describe('printed field record', () => {
     expect(t).toContain('has since been superseded');
     expect(t).not.toContain('under review');
     expect(t).toMatch(/Main spring length as set 222\.5 mm ± 0\.5 mm 224\.1 mm 222\.6 mm within/);
-    expect(t).toMatch(/Reserve stroke to set \(new lining\) 20\.0 mm — — 17\.00 mm OUT/);
+    expect(t).toMatch(/Reserve stroke to set \(new lining\) 20\.0 mm — — 17\.0 mm OUT/);
     expect(t).toContain(
       'Reason, Reserve stroke to set (new lining): Rod end worn; new rod ordered.',
     );
