@@ -64,10 +64,13 @@ describe.skipIf(skipReason !== null)('record form reloaded offline', () => {
     await page.reload();
     const notice = page.getByTestId('offline-notice');
     await notice.waitFor();
+    // The count is read from the device's store after the notice shows: wait for it.
+    await expect
+      .poll(() => notice.textContent())
+      .toContain('1 field record saved on this device waits here');
     const text = await notice.textContent();
     expect(text).toContain('No connection');
     expect(text).toContain('cannot open the record form until it returns');
-    expect(text).toContain('1 field record saved on this device waits here');
     await screenshot(page, 'field-record-reload-offline-390');
 
     // Neither the access token nor anything like one is kept in the page's storage.
