@@ -11,6 +11,8 @@ export const MAIL_QUEUE = 'mail';
 /** The hourly inspection-reminder pass (server/src/field-records/inspection-reminders.job.ts). */
 export const REMINDER_QUEUE = 'inspection-reminders';
 
+const QUERY_GRACE_MS = 2_000;
+
 /**
  * pg-boss 10 on the application's database (schema `pgboss`). Jobs are inserted inside the
  * caller's transaction, so a job exists exactly when the state change that caused it committed.
@@ -21,6 +23,12 @@ export class JobQueue implements OnModuleInit, OnModuleDestroy {
   private readonly settings = loadMailSettings();
   readonly boss: PgBoss;
   private readonly pool: pg.Pool;
+  /**
+   * How long shutdown waits for a running job before pg-boss marks it failed (to run again).
+   * A mail may take nodemailer's socket timeout (mailer.ts: 10 s).
+   */
+  stopTimeoutMs = 12_000;
+  private closed = false;
 
   constructor(config: AppConfig) {
     // pg-boss runs on a pool of ours, so its connections get the same error handling as the
@@ -31,7 +39,12 @@ export class JobQueue implements OnModuleInit, OnModuleDestroy {
       onIdleError: (e) => this.logger.warn(`job queue connection lost: ${e.message}`),
     });
     const db = {
-      executeSql: (text: string, values?: unknown[]) => this.pool.query(text, values),
+      executeSql: (text: string, values?: unknown[]) =>
+        // pg-boss marks a job complete or failed without awaiting it. Should a handler outlive
+        // shutdown, that late query would reject unhandled on the ended pool; it is dropped
+        // instead (a promise that never settles holds nothing open). The job stays active,
+        // expires and runs again, and the outbox row keeps a mail from going out twice.
+        this.closed ? new Promise<never>(() => undefined) : this.pool.query(text, values),
     };
     this.boss = new PgBoss({ db, schema: 'pgboss' });
     this.boss.on('error', (e: Error) => this.logger.error(`pg-boss: ${e.message}`));
@@ -48,7 +61,16 @@ export class JobQueue implements OnModuleInit, OnModuleDestroy {
   }
 
   async onModuleDestroy(): Promise<void> {
-    await this.boss.stop({ graceful: true, wait: true, timeout: 5000 });
+    await this.boss.stop({ graceful: true, wait: true, timeout: this.stopTimeoutMs });
+    // pg-boss sends a finished job's complete/fail query and stops at once; let it land before
+    // the pool closes (a query still queued would never be served).
+    await new Promise((resolve) => setImmediate(resolve));
+    const deadline = Date.now() + QUERY_GRACE_MS;
+    while (this.pool.waitingCount + this.pool.totalCount - this.pool.idleCount > 0) {
+      if (Date.now() > deadline) break;
+      await new Promise((resolve) => setTimeout(resolve, 10));
+    }
+    this.closed = true;
     await this.pool.end();
   }
 
