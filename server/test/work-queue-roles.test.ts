@@ -23,7 +23,7 @@ describe('each role’s work queue holds only what that role acts on', () => {
   });
   afterAll(() => ctx?.closeAll());
 
-  it('a viewer gets newly approved sheets only; an admin nothing; authors their own', async () => {
+  it('a viewer and a fitter get newly approved sheets only; an admin nothing; authors their own', async () => {
     const draft = await createSheet(ctx, reg, { title: 'Still a draft' });
     const done = await createSheet(ctx, reg, { title: 'Approved one' });
     const a = done.revisions[0].id;
@@ -35,6 +35,11 @@ describe('each role’s work queue holds only what that role acts on', () => {
     expect(viewer.myDrafts).toEqual([]);
     expect(viewer.returnedToMe).toEqual([]);
     expect(viewer.awaitingMyCheck).toEqual([]);
+
+    const fitter = (await ctx.request('GET', '/api/work-queue', { as: 'technician' })).body;
+    expect(ids(fitter.recentlyApproved)).toEqual([a]);
+    expect(fitter.myDrafts).toEqual([]);
+    expect(fitter.awaitingMyCheck).toEqual([]);
 
     const admin = (await ctx.request('GET', '/api/work-queue', { as: 'admin' })).body;
     expect(admin).toEqual({

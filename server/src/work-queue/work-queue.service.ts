@@ -20,12 +20,14 @@ export class WorkQueueService {
   constructor(private readonly repo: WorkQueueRepository) {}
 
   /**
-   * What a viewer acts on is any newly approved sheet (to print into the safety file); an
-   * engineer or checker, the approvals of their own work; an administrator, none.
+   * What a viewer or a fitter acts on is any newly approved sheet (to print into the safety
+   * file, or to set the brake to); an engineer or checker, the approvals of their own work; an
+   * administrator, none. A fitter authors nothing, so "their own" would always be empty.
    */
   private recentlyApproved(user: AuthUser): Promise<QueueRow[]> {
     if (user.role === 'admin') return Promise.resolve([]);
-    return this.repo.recentlyApproved(user.role === 'viewer' ? undefined : user.id);
+    const everyone = user.role === 'viewer' || user.role === 'technician';
+    return this.repo.recentlyApproved(everyone ? undefined : user.id);
   }
 
   /** Drafts and returned revisions I author or whose sheet I own; checks waiting for me. */

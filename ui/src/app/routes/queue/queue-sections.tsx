@@ -39,10 +39,17 @@ const approvedToFile: QueueSectionSpec = {
   empty: 'No sheet approved lately.',
   list: 'recentlyApproved',
 };
+const approvedToSet: QueueSectionSpec = {
+  id: 'approved',
+  title: 'Newly approved: brakes to set',
+  empty: 'No sheet approved lately.',
+  list: 'recentlyApproved',
+};
 
 /**
  * The sections each role acts on, most urgent first. A viewer neither authors nor checks, so
- * shows only approvals to file; an administrator manages people and criteria, not sheets.
+ * shows only approvals to file, and a fitter the approvals to set brakes to (every approval, as
+ * the server sends them); an administrator manages people and criteria, not sheets.
  */
 export function queueSections(role: Role): QueueSectionSpec[] {
   switch (role) {
@@ -51,8 +58,9 @@ export function queueSections(role: Role): QueueSectionSpec[] {
     case 'engineer':
       return [returned, drafts, approvedMine];
     case 'viewer':
-    case 'technician':
       return [approvedToFile];
+    case 'technician':
+      return [approvedToSet];
     case 'admin':
       return [];
   }

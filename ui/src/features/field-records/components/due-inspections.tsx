@@ -34,7 +34,7 @@ export function DueInspectionsPanel() {
   const { overdue, due: soon, awaitingCountersign } = due.data;
   return (
     <Paper withBorder p="md" component="section" aria-labelledby="field-due-title">
-      <Title order={2} size="h4" id="field-due-title" mb="xs">
+      <Title order={2} size="h5" id="field-due-title" mb="sm">
         Field inspections
       </Title>
       <Stack gap={4}>

@@ -17,7 +17,7 @@ export interface QueueSectionProps {
 export function QueueSection({ id, title, empty, items, renderState }: QueueSectionProps) {
   return (
     <Paper p="md" component="section" aria-labelledby={id} data-queue={id}>
-      <Group justify="space-between" mb="sm">
+      <Group justify="space-between" mb="sm" wrap="nowrap" align="flex-start">
         <Title order={2} size="h5" id={id}>
           {title}
         </Title>
