@@ -21,19 +21,14 @@ import {
 import type { QueryClient } from '@tanstack/react-query';
 import { lazyRoute, type RouteModule } from '../lib/lazy-route';
 import type { NavItem } from '../lib/nav-item';
+import { FIELD_RECORDERS } from '../lib/field-work';
 
 /** Links in the frame's "Workbench" navigation group, in order. */
 export const workbenchNav: NavItem[] = [
   { label: 'Work queue', to: '/', icon: IconListCheck, end: true },
   { label: 'Sheets', to: '/sheets', icon: IconFileDescription },
   { label: 'Equipment', to: '/equipment', icon: IconBuildingFactory2 },
-  // Those who may record field work (the server's RECORDERS; checkers inherit engineer).
-  {
-    label: 'Field work',
-    to: '/field',
-    icon: IconClipboardCheck,
-    roles: ['technician', 'engineer', 'checker'],
-  },
+  { label: 'Field work', to: '/field', icon: IconClipboardCheck, roles: FIELD_RECORDERS },
   { label: 'Criteria sets', to: '/criteria', icon: IconScale },
 ];
 

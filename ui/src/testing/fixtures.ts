@@ -1,5 +1,5 @@
 import type { SheetEvaluation } from '@holdfast/calc';
-import type { Session, User } from '@holdfast/shared';
+import type { Position, Register, Session, User } from '@holdfast/shared';
 
 export function makeUser(overrides: Partial<User> = {}): User {
   return {
@@ -67,5 +67,56 @@ export function makeEvaluation(parts: Partial<SheetEvaluation> = {}): SheetEvalu
     warnings: [],
     pass: true,
     ...parts,
+  };
+}
+
+export type InForce = Position['inForce'][number];
+export const registerPositionId = '0b1c2d3e-4f50-4617-8293-a4b5c6d7e8f9';
+
+/** An approved revision in force at a position. */
+export const inForceSheet = (
+  revisionId: string,
+  documentNumber: string,
+  sheetType: string,
+): InForce => ({
+  sheetId: '5e6f7081-92a3-4ebf-8031-4c5d6e7f8091',
+  documentNumber,
+  revisionId,
+  revisionLabel: 'B',
+  sheetType,
+});
+
+/** A register of one site, one crane and one brake position (registerPositionId, MH-B1). */
+export function makeRegister(inForce: InForce[]): Register {
+  return {
+    sites: [
+      {
+        id: '3c4d5e6f-7081-4c9d-8e1f-2a3b4c5d6e7f',
+        code: 'XS',
+        name: 'Example site',
+        machines: [
+          {
+            id: '4d5e6f70-8192-4dae-9f20-3b4c5d6e7f80',
+            tag: 'C-1',
+            name: 'Crane 1',
+            kind: 'crane',
+            positions: [
+              {
+                id: registerPositionId,
+                tag: 'MH-B1',
+                description: 'Main hoist brake',
+                motion: 'hoist',
+                brakeKind: '',
+                thruster: '',
+                lining: '',
+                currentApproved: null,
+                inForce,
+                openSheets: [],
+              },
+            ],
+          },
+        ],
+      },
+    ],
   };
 }

@@ -1,14 +1,15 @@
 import { describe, expect, it } from 'vitest';
 import { cleanup, screen } from '@testing-library/react';
 import type { Register, User } from '@holdfast/shared';
-import { testUsers } from '../../../testing/fixtures';
+import { inForceSheet, makeRegister, testUsers } from '../../../testing/fixtures';
 import { mockFetch } from '../../../testing/mock-fetch';
 import { renderRoutes } from '../../../testing/render';
 import { Component as EquipmentPage } from './equipment';
 
-const register: Register = { sites: [] };
+const empty: Register = { sites: [] };
+const revisionId = '1a2b3c4d-5e6f-4a7b-8c9d-0e1f2a3b4c5d';
 
-function renderAs(user: User) {
+function renderAs(user: User, register = empty) {
   mockFetch({ 'GET /api/register': { body: register } });
   renderRoutes([{ path: '/equipment', Component: EquipmentPage }], {
     user,
@@ -30,6 +31,25 @@ describe('equipment page', () => {
       renderAs(user);
       expect(await screen.findByRole('heading', { name: 'Equipment' })).toBeInTheDocument();
       expect(screen.queryByRole('button', { name: 'Add site' })).toBeNull();
+      cleanup();
+    }
+  });
+
+  it('offers "Record field work" to those who may record it, and to nobody else', async () => {
+    const register = makeRegister([inForceSheet(revisionId, 'XS-0001', 'hoist-shoe-brake')]);
+    const name = 'Record field work on MH-B1 against XS-0001 rev. B';
+    for (const user of [testUsers.technician, testUsers.engineer, testUsers.checker]) {
+      renderAs(user, register);
+      expect(await screen.findByRole('link', { name })).toHaveAttribute(
+        'href',
+        `/field-records/new/${revisionId}`,
+      );
+      cleanup();
+    }
+    for (const user of [testUsers.viewer, testUsers.admin]) {
+      renderAs(user, register);
+      expect(await screen.findByText('MH-B1')).toBeInTheDocument();
+      expect(screen.queryByRole('link', { name })).toBeNull();
       cleanup();
     }
   });

@@ -6,6 +6,7 @@ import { Page } from '../../../components/layouts/page';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import type { RouteHandle } from '../../../lib/route-handle';
 import { hasRole, useCurrentUser } from '../../../lib/session';
+import { canRecordFieldWork } from '../../../lib/field-work';
 import { registerQueryOptions, useRegister } from '../../../features/register/api/get-register';
 import { PositionRow } from '../../../features/register/components/position-row';
 import {
@@ -37,6 +38,7 @@ export function Component() {
   const user = useCurrentUser();
   // Who the server lets change the register (register.controller.ts): not viewers, not fitters.
   const canEdit = hasRole(user, 'engineer', 'checker', 'admin');
+  const canRecord = canRecordFieldWork(user.role);
   const [form, setForm] = useState<Form | null>(null);
   const small = { size: 'compact-sm', variant: 'subtle' } as const;
 
@@ -202,6 +204,7 @@ export function Component() {
                             <PositionRow
                               key={p.id}
                               position={p}
+                              canRecord={canRecord}
                               onEdit={
                                 canEdit
                                   ? () =>

@@ -12,7 +12,7 @@ export function Component() {
   return (
     <Page
       title="Field work"
-      description="Brake inspections due and the field records still open. To record work on a brake, open its position in Equipment."
+      description="Brake inspections due and the field records still open. To record work on a brake, open its position (from the list below or in Equipment)."
     >
       <SimpleGrid cols={{ base: 1, md: 2 }} spacing="md">
         <DueInspectionsPanel />

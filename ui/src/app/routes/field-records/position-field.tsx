@@ -1,7 +1,8 @@
-import { useParams } from 'react-router-dom';
-import { Alert, SimpleGrid, Skeleton, Stack, Text, Title } from '@mantine/core';
+import { Link, useParams } from 'react-router-dom';
+import { Alert, Button, Group, SimpleGrid, Skeleton, Stack, Text, Title } from '@mantine/core';
+import { IconClipboardPlus } from '@tabler/icons-react';
 import { length, liningSeries, strokeSeries } from '@holdfast/calc';
-import type { PositionFieldState } from '@holdfast/shared';
+import type { Position, PositionFieldState } from '@holdfast/shared';
 import { Page } from '../../../components/layouts/page';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import type { RouteHandle } from '../../../lib/route-handle';
@@ -19,6 +20,9 @@ import {
 } from '../../../features/field-records/components/wear-series';
 import { useFieldForm } from '../../../features/field-records/api/get-field-form';
 import { isoDay } from '../../../lib/dates';
+import { canRecordFieldWork, newFieldRecordPath } from '../../../lib/field-work';
+import { findPosition, useRegister } from '../../../features/register/api/get-register';
+import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
 
 export const handle: RouteHandle = { title: 'Field records' };
 
@@ -49,13 +53,46 @@ function AtAGlance({ state }: { state: PositionFieldState }) {
   );
 }
 
+/** Start a record against each approved sheet in force at the position (brake, disc springs). */
+function RecordWork({ position }: { position: Position | undefined }) {
+  if (!position) return null;
+  if (position.inForce.length === 0)
+    return (
+      <Text size="sm" c="dimmed">
+        No approved sheet is in force here, so there is nothing to set the brake to yet.
+      </Text>
+    );
+  return (
+    <Group gap="sm">
+      {position.inForce.map((f) => (
+        <Button
+          key={f.revisionId}
+          component={Link}
+          to={newFieldRecordPath(f.revisionId)}
+          leftSection={<IconClipboardPlus size={18} aria-hidden />}
+          // Two lines on a phone rather than a label cut off at the screen's edge.
+          h="auto"
+          py={6}
+          styles={{ label: { whiteSpace: 'normal', textAlign: 'left', lineHeight: 1.3 } }}
+          aria-label={`Record field work on ${position.tag} against ${f.documentNumber} rev. ${f.revisionLabel}`}
+        >
+          Record field work: {f.documentNumber} rev. {f.revisionLabel}
+          {position.inForce.length > 1 ? ` (${sheetTypeTitle(f.sheetType).toLowerCase()})` : ''}
+        </Button>
+      ))}
+    </Group>
+  );
+}
+
 export function Component() {
   const { positionId = '' } = useParams();
   const user = useCurrentUser();
   const history = usePositionHistory(positionId);
   const state = usePositionState(positionId);
+  const register = useRegister();
+  const position = register.data ? findPosition(register.data, positionId) : undefined;
   const records = history.data?.items ?? [];
-  const tag = records[0]?.positionTag;
+  const tag = position?.tag ?? records[0]?.positionTag;
   // The minimum reserve stroke is a printed target of the revision the brake was last set to
   // (the server's setTo; an inspection may have been recorded against another revision since).
   const setTo = state.data?.setTo?.revisionId ?? records[records.length - 1]?.revisionId ?? '';
@@ -69,6 +106,7 @@ export function Component() {
         {state.isPending && <Skeleton h={60} />}
         {state.isError && <ErrorPanel error={state.error} />}
         {state.data && <AtAGlance state={state.data} />}
+        {canRecordFieldWork(user.role) && <RecordWork position={position} />}
         {history.isPending && <Skeleton h={240} />}
         {history.isError && <ErrorPanel error={history.error} />}
         {history.data && (

@@ -16,7 +16,7 @@ export function OpenRecords({ status }: { status: 'draft' | 'signed' }) {
   const titleId = `field-records-${status}-title`;
   return (
     <Paper withBorder p="md" component="section" aria-labelledby={titleId}>
-      <Title order={2} size="h4" id={titleId} mb="xs">
+      <Title order={2} size="h5" id={titleId} mb="sm">
         {titles[status]}
       </Title>
       {records.isError ? (

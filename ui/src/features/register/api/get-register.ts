@@ -1,6 +1,6 @@
 import { apiPath, apiRoutes } from '@holdfast/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { registerSchema, type Register } from '@holdfast/shared';
+import { registerSchema, type Position, type Register } from '@holdfast/shared';
 import { api } from '../../../lib/api-client';
 import { registerKeys } from '../../../lib/query-keys';
 
@@ -14,4 +14,11 @@ export function registerQueryOptions() {
 
 export function useRegister() {
   return useQuery(registerQueryOptions());
+}
+
+/** A brake position of the register by id, or undefined. */
+export function findPosition(register: Register, positionId: string): Position | undefined {
+  return register.sites
+    .flatMap((s) => s.machines.flatMap((m) => m.positions))
+    .find((p) => p.id === positionId);
 }

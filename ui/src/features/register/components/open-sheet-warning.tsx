@@ -3,7 +3,7 @@ import { IconAlertTriangle } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
 import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
 import { stateLabel } from '../../../lib/state-label';
-import { useRegister } from '../api/get-register';
+import { findPosition, useRegister } from '../api/get-register';
 
 /**
  * Said before a second open sheet is started for a brake position: two drafts of the same brake
@@ -19,9 +19,7 @@ export function OpenSheetWarning({
 }) {
   const register = useRegister();
   if (!positionId || !register.data) return null;
-  const position = register.data.sites
-    .flatMap((s) => s.machines.flatMap((m) => m.positions))
-    .find((p) => p.id === positionId);
+  const position = findPosition(register.data, positionId);
   const open = position?.openSheets ?? [];
   if (open.length === 0) return null;
   const sameType = open.filter((o) => o.sheetType === sheetType);

@@ -3,15 +3,18 @@ import { Link } from 'react-router-dom';
 import type { Position } from '@holdfast/shared';
 import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
 import { stateLabel } from '../../../lib/state-label';
+import { newFieldRecordPath } from '../../../lib/field-work';
 
 export interface PositionRowProps {
   position: Position;
   /** Shown to those who may edit the register. */
   onEdit?: () => void;
+  /** Offer "Record field work" (to those the server lets record it). */
+  canRecord?: boolean;
 }
 
 /** One brake position: what it is in the plant's words, its sheet in force per sheet type. */
-export function PositionRow({ position: p, onEdit }: PositionRowProps) {
+export function PositionRow({ position: p, onEdit, canRecord = false }: PositionRowProps) {
   const described = [p.brakeKind, p.thruster, p.lining].filter((x) => x.trim());
   return (
     <Table.Tr data-position={p.tag}>
@@ -56,11 +59,11 @@ export function PositionRow({ position: p, onEdit }: PositionRowProps) {
             <Anchor component={Link} to={`/positions/${p.id}/field`} size="sm">
               Field records
             </Anchor>
-            {p.inForce.map((f) => (
+            {(canRecord ? p.inForce : []).map((f) => (
               <Anchor
                 key={f.revisionId}
                 component={Link}
-                to={`/field-records/new/${f.revisionId}`}
+                to={newFieldRecordPath(f.revisionId)}
                 size="sm"
                 aria-label={`Record field work on ${p.tag} against ${f.documentNumber} rev. ${f.revisionLabel}`}
               >
