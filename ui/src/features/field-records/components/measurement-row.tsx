@@ -2,6 +2,7 @@ import { Badge, Group, Paper, Stack, Text, Textarea } from '@mantine/core';
 import type { FieldTarget } from '@holdfast/shared';
 import {
   formatWithPrecision,
+  readingPrecision,
   settingPrecision,
   toDisplay,
   toleranceText,
@@ -21,14 +22,16 @@ function settingText(target: FieldTarget, valueSI: number): string {
 }
 
 /**
- * How far a value lies from its target, to the same measurable step. A deviation is a difference,
- * so it is read from the verdict's offset-free display deviation (°C and K differ by an offset).
+ * How far a reading lies from its target, to a tenth of the step the setting is set by (as the
+ * reading itself prints): to the setting's own step, 0.3 mm off a 0.5 mm step would read +0.5 mm.
+ * A deviation is a difference, so it is read from the verdict's offset-free display deviation
+ * (°C and K differ by an offset).
  */
 function deviationText(target: FieldTarget, verdict: ToleranceVerdict): string {
   const dim = target.dimension as Dimension;
   const { deviation, label } = verdict.display;
   const perSI = toDisplay(1, dim, 'SI').value - toDisplay(0, dim, 'SI').value;
-  const p = settingPrecision(target.settingKey, dim);
+  const p = readingPrecision(target.settingKey, dim);
   const sign = deviation > 0 ? '+' : deviation < 0 ? '−' : '±';
   return withUnit(`${sign}${formatWithPrecision(Math.abs(deviation), 1 / perSI, label, p)}`, label);
 }
