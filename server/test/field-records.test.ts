@@ -173,7 +173,11 @@ describe('field records', () => {
       suite.ctx.smtp.mails.find((m) => m.raw.includes('out of tolerance')),
     );
     expect(mail.to).toEqual(
-      expect.arrayContaining(['engineer@holdfast.test', 'checker@holdfast.test']),
+      expect.arrayContaining([
+        'engineer@holdfast.test',
+        'checker@holdfast.test',
+        'viewer@holdfast.test',
+      ]),
     );
     const due = await suite.ctx.request('GET', '/api/field-records/due', { as: 'checker' });
     expect(due.body.awaitingCountersign).toEqual([
@@ -207,7 +211,7 @@ describe('field records', () => {
     expect(
       (
         await suite.ctx.request('POST', `/api/field-records/${b.id}/countersign`, {
-          as: 'viewer',
+          as: 'admin',
           body: {},
         })
       ).status,
@@ -264,6 +268,16 @@ describe('field records', () => {
     expect(await post('engineer', `/api/field-records/${own.id}/sign`)).toBe(200);
     expect(await post('engineer', `/api/field-records/${own.id}/countersign`)).toBe(403);
     expect(await post('checker', `/api/field-records/${own.id}/countersign`)).toBe(200);
+    // The plant engineer (the viewer role) countersigns a fitter's record; a fitter or an
+    // administrator does not.
+    expect(await post('technician', `/api/field-records/${fitter.id}/sign`)).toBe(200);
+    expect(await post('admin', `/api/field-records/${fitter.id}/countersign`)).toBe(403);
+    expect(await post('technician', `/api/field-records/${fitter.id}/countersign`)).toBe(403);
+    const due = await suite.ctx.request('GET', '/api/field-records/due', { as: 'viewer' });
+    expect(due.body.awaitingCountersign).toEqual([
+      expect.objectContaining({ recordId: fitter.id, positionId: suite.reg.positionId }),
+    ]);
+    expect(await post('viewer', `/api/field-records/${fitter.id}/countersign`)).toBe(200);
   });
 
   it('prints the record with targets, tolerances, signatures and a code /verify answers for', async () => {
@@ -500,7 +514,7 @@ describe('field-record routes × roles', () => {
     [
       'POST',
       `/api/field-records/${NIL}/countersign`,
-      { anonymous: 401, engineer: 404, checker: 404, viewer: 403, admin: 403, technician: 403 },
+      { anonymous: 401, engineer: 404, checker: 404, viewer: 404, admin: 403, technician: 403 },
       {},
     ],
     [

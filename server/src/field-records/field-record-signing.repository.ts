@@ -26,7 +26,7 @@ export class FieldRecordSigningRepository {
     await db.insertInto('fieldRecordSignatures').values(row).execute();
   }
 
-  /** E-mail addresses of the sheet's owner and the plant engineers (active engineers, checkers). */
+  /** E-mail addresses of the sheet's owner and those who countersign (plant engineers, engineers). */
   async notifyEmails(ownerId: string, exceptId: string, tx?: Tx) {
     const db = on(this.db, tx);
     const rows = await db
@@ -34,7 +34,9 @@ export class FieldRecordSigningRepository {
       .select('email')
       .where('active', '=', true)
       .where('id', '<>', exceptId)
-      .where((eb) => eb.or([eb('id', '=', ownerId), eb('role', 'in', ['engineer', 'checker'])]))
+      .where((eb) =>
+        eb.or([eb('id', '=', ownerId), eb('role', 'in', ['viewer', 'engineer', 'checker'])]),
+      )
       .orderBy('email')
       .execute();
     return rows.map((r) => r.email);

@@ -1,8 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import type { FieldIssue, FieldRecord, FieldRecordVerify } from '@holdfast/shared';
-import { fieldCheckKeys } from '@holdfast/shared';
+import { fieldCheckKeys, mayCountersign } from '@holdfast/shared';
 import type { AuthUser } from '../auth/auth-user.js';
-import { effectiveRoles } from '../auth/policy.js';
 import { AuditService } from '../audit/audit.service.js';
 import { conflict, forbidden, notFound } from '../common/errors/api-exception.js';
 import { AppConfig } from '../config/app-config.js';
@@ -121,8 +120,8 @@ export class FieldRecordSigningService {
   }
 
   async countersign(user: AuthUser, id: string, note: string): Promise<FieldRecord> {
-    if (!effectiveRoles(user.role).includes('engineer')) {
-      throw forbidden('A plant engineer (engineer or checker) countersigns.');
+    if (!mayCountersign(user.role)) {
+      throw forbidden('The plant engineer, an engineer or a checker countersigns.');
     }
     await this.units.run(async (tx) => {
       const row = await this.repo.lockForUpdate(tx, id);

@@ -26,6 +26,7 @@ import {
   type Attachment,
   type AttachmentList,
   apiRoutes,
+  fieldRecordCountersigners,
 } from '@holdfast/shared';
 import { FileUpload } from '../attachments/stored-file.js';
 import { CurrentUser, type AuthUser } from '../auth/auth-user.js';
@@ -114,7 +115,7 @@ export class FieldRecordsController {
 
   @Post(apiRoutes.fieldRecords.countersign.path)
   @HttpCode(200)
-  @Roles('engineer')
+  @Roles(...fieldRecordCountersigners)
   countersign(
     @CurrentUser() user: AuthUser,
     @Param('id', UuidParamPipe) id: string,

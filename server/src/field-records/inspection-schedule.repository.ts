@@ -97,13 +97,13 @@ export class InspectionScheduleRepository {
     return row !== undefined;
   }
 
-  /** Addresses reminders go to: active technicians and the plant engineers. */
+  /** Addresses reminders go to: active technicians, the plant engineers and the engineers. */
   async reminderEmails(): Promise<string[]> {
     const rows = await this.db
       .selectFrom('users')
       .select('email')
       .where('active', '=', true)
-      .where('role', 'in', ['technician', 'engineer', 'checker'])
+      .where('role', 'in', ['technician', 'viewer', 'engineer', 'checker'])
       .orderBy('email')
       .execute();
     return rows.map((r) => r.email);
@@ -117,7 +117,13 @@ export class InspectionScheduleRepository {
       .innerJoin('fieldRecordSignatures as g', (j) =>
         j.onRef('g.recordId', '=', 'f.id').on('g.kind', '=', 'technician'),
       )
-      .select(['f.id as recordId', 'p.tag as positionTag', 'f.performedAt', 'f.outOfTolerance'])
+      .select([
+        'f.id as recordId',
+        'f.positionId',
+        'p.tag as positionTag',
+        'f.performedAt',
+        'f.outOfTolerance',
+      ])
       .where('f.status', '=', 'signed')
       .where('g.userId', '<>', userId)
       .orderBy('f.performedAt')

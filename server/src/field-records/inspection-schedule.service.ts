@@ -6,8 +6,8 @@ import type {
   PositionFieldState,
   PositionInterval,
 } from '@holdfast/shared';
+import { mayCountersign } from '@holdfast/shared';
 import type { AuthUser } from '../auth/auth-user.js';
-import { effectiveRoles } from '../auth/policy.js';
 import { AuditService } from '../audit/audit.service.js';
 import { UnitOfWork } from '../database/unit-of-work.js';
 import { notFound } from '../common/errors/api-exception.js';
@@ -91,7 +91,7 @@ export class InspectionScheduleService {
       if (next.overdue) overdue.push(item);
       else if (inReminderWindow(f, next, now)) due.push(item);
     }
-    const countersigns = effectiveRoles(user.role).includes('engineer')
+    const countersigns = mayCountersign(user.role)
       ? await this.repo.awaitingCountersign(user.id)
       : [];
     return {
@@ -99,6 +99,7 @@ export class InspectionScheduleService {
       overdue,
       awaitingCountersign: countersigns.map((c) => ({
         recordId: c.recordId,
+        positionId: c.positionId,
         positionTag: c.positionTag,
         performedAt: c.performedAt.toISOString(),
         outOfTolerance: c.outOfTolerance,

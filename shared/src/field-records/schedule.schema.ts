@@ -97,10 +97,11 @@ export type DueInspection = z.infer<typeof dueInspectionSchema>;
 export const dueInspectionsSchema = z.object({
   due: z.array(dueInspectionSchema),
   overdue: z.array(dueInspectionSchema),
-  /** Signed records waiting for the signed-in engineer's countersignature. */
+  /** Signed records waiting for the signed-in plant engineer's (or engineer's) countersignature. */
   awaitingCountersign: z.array(
     z.object({
       recordId: z.string().uuid(),
+      positionId: z.string().uuid(),
       positionTag: z.string(),
       performedAt: isoDateSchema,
       outOfTolerance: z.boolean(),

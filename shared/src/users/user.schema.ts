@@ -9,6 +9,19 @@ export const roles = ['engineer', 'checker', 'viewer', 'admin', 'technician'] as
 export const roleSchema = z.enum(roles);
 export type Role = z.infer<typeof roleSchema>;
 
+/**
+ * Who countersigns a field record: the plant engineer (the viewer role) or an engineer (checkers
+ * are engineers too), never the person who made or signed it. The server enforces it.
+ */
+export const fieldRecordCountersigners = [
+  'viewer',
+  'engineer',
+  'checker',
+] as const satisfies Role[];
+
+export const mayCountersign = (role: Role): boolean =>
+  (fieldRecordCountersigners as readonly Role[]).includes(role);
+
 export const userSchema = z.object({
   id: z.string().uuid(),
   email: z.string().email(),

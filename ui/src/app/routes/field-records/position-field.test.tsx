@@ -1,6 +1,6 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { cleanup, screen } from '@testing-library/react';
-import type { PositionFieldState, User } from '@holdfast/shared';
+import type { FieldRecord, PositionFieldState, User } from '@holdfast/shared';
 import {
   inForceSheet as sheet,
   makeRegister,
@@ -24,10 +24,59 @@ const state: PositionFieldState = {
   openFindings: [],
 };
 
-function renderAs(user: User, inForce: InForce[]) {
+const fitter = { id: testUsers.technician.id, displayName: 'Teo Marsh', initials: 'TM' };
+const signedRecord: FieldRecord = {
+  id: '6f708192-a3b4-4cd5-8e6f-708192a3b4c5',
+  positionId,
+  positionTag: 'MH-B1',
+  revisionId: brakeRev,
+  sheetId: '5e6f7081-92a3-4ebf-8031-4c5d6e7f8091',
+  documentNumber: 'XS-0001',
+  revisionLabel: 'B',
+  kind: 'periodic-inspection',
+  status: 'signed',
+  performedAt: '2026-11-30T09:00:00.000Z',
+  meterHours: null,
+  measurements: [
+    {
+      settingKey: 'springLength',
+      asFound: 0.1243,
+      asLeft: 0.124,
+      reason: '',
+      label: 'Main spring length as set',
+      target: 0.124,
+      unit: 'mm',
+      dimension: 'length',
+      tolerance: null,
+      asFoundVerdict: null,
+      asLeftVerdict: {
+        status: 'in',
+        deviationSI: 0,
+        lowerSI: 0.1235,
+        upperSI: 0.1245,
+        display: { unit: 'mm', label: 'mm', deviation: 0, lower: 123.5, upper: 124.5 },
+      },
+    },
+  ],
+  checks: [],
+  findings: '',
+  outOfTolerance: false,
+  flags: { superseded: false, underReview: false },
+  createdBy: fitter,
+  createdAt: '2026-11-30T09:00:00.000Z',
+  updatedAt: '2026-11-30T09:30:00.000Z',
+  signed: { by: fitter, at: '2026-11-30T09:30:00.000Z' },
+  countersigned: null,
+  verificationCode: 'ABCDEFGH23',
+};
+
+function renderAs(user: User, inForce: InForce[], records: FieldRecord[] = []) {
   mockFetch({
     'GET /api/register': { body: makeRegister(inForce) },
-    [`GET /api/register/positions/${positionId}/field-records`]: { body: { items: [] } },
+    [`GET /api/register/positions/${positionId}/field-records`]: {
+      body: { positionId, items: records },
+    },
+    [`GET /api/revisions/${brakeRev}/field-form`]: { status: 404 },
     [`GET /api/register/positions/${positionId}/field-state`]: { body: state },
   });
   renderRoutes([{ path: '/positions/:positionId/field', Component: PositionField }], {
@@ -48,11 +97,11 @@ describe('a position’s field page', () => {
       sheet(springsRev, 'XS-0002', 'disc-spring-stack'),
     ]);
     const brake = await screen.findByRole('link', {
-      name: 'Record field work on MH-B1 against XS-0001 rev. B',
+      name: 'Record field work: XS-0001 rev. B (shoe brake on a hoist)',
     });
     expect(brake).toHaveAttribute('href', `/field-records/new/${brakeRev}`);
     expect(
-      screen.getByRole('link', { name: 'Record field work on MH-B1 against XS-0002 rev. B' }),
+      screen.getByRole('link', { name: /^Record field work: XS-0002 rev\. B/ }),
     ).toHaveAttribute('href', `/field-records/new/${springsRev}`);
   });
 
@@ -65,5 +114,21 @@ describe('a position’s field page', () => {
     renderAs(testUsers.viewer, [sheet(brakeRev, 'XS-0001', 'hoist-shoe-brake')]);
     expect(await screen.findByText(/Open findings/)).toBeInTheDocument();
     expect(screen.queryByRole('link', { name: /Record field work/ })).toBeNull();
+  });
+
+  it('lets the plant engineer countersign a fitter’s signed record, its values shown', async () => {
+    renderAs(testUsers.viewer, [sheet(brakeRev, 'XS-0001', 'hoist-shoe-brake')], [signedRecord]);
+    expect(await screen.findByRole('button', { name: 'Countersign' })).toBeInTheDocument();
+    const values = screen.getByRole('table', { name: 'Values measured' });
+    expect(values).toHaveTextContent('Main spring length as set');
+    expect(values).toHaveTextContent('124.3 mm');
+    expect(values).toHaveTextContent('within');
+    expect(screen.getByRole('button', { name: /Print the record of 2026-11-30/ })).toBeEnabled();
+  });
+
+  it('offers no countersignature to the fitter who made and signed the record', async () => {
+    renderAs(testUsers.technician, [], [signedRecord]);
+    expect(await screen.findByText(/signed by Teo Marsh/)).toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: 'Countersign' })).toBeNull();
   });
 });

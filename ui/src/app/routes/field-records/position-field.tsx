@@ -2,7 +2,7 @@ import { Link, useParams } from 'react-router-dom';
 import { Alert, Button, Group, SimpleGrid, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { IconClipboardPlus } from '@tabler/icons-react';
 import { length, liningSeries, strokeSeries } from '@holdfast/calc';
-import type { Position, PositionFieldState } from '@holdfast/shared';
+import { mayCountersign, type Position, type PositionFieldState } from '@holdfast/shared';
 import { Page } from '../../../components/layouts/page';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import type { RouteHandle } from '../../../lib/route-handle';
@@ -74,7 +74,6 @@ function RecordWork({ position }: { position: Position | undefined }) {
           h="auto"
           py={6}
           styles={{ label: { whiteSpace: 'normal', textAlign: 'left', lineHeight: 1.3 } }}
-          aria-label={`Record field work on ${position.tag} against ${f.documentNumber} rev. ${f.revisionLabel}`}
         >
           Record field work: {f.documentNumber} rev. {f.revisionLabel}
           {position.inForce.length > 1 ? ` (${sheetTypeTitle(f.sheetType).toLowerCase()})` : ''}
@@ -99,7 +98,7 @@ export function Component() {
   const form = useFieldForm(setTo);
   const minimum = form.data?.targets.find((t) => t.settingKey === MIN_RESERVE_KEY)?.value ?? null;
   const hasStroke = hasStrokeSeries(form.data?.targets, records);
-  const canCountersign = user.role === 'engineer' || user.role === 'checker';
+  const canCountersign = mayCountersign(user.role);
   return (
     <Page title={tag ? `Field records · ${tag}` : 'Field records'}>
       <Stack gap="lg">
@@ -141,7 +140,7 @@ export function Component() {
             <Title order={2} size="h3">
               Timeline
             </Title>
-            <RecordTimeline records={records} canCountersign={canCountersign} />
+            <RecordTimeline records={records} canCountersign={canCountersign} userId={user.id} />
           </>
         )}
       </Stack>

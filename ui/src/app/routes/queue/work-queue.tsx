@@ -40,7 +40,7 @@ export function Component() {
       ) : (
         <SimpleGrid cols={{ base: 1, md: 2 }} spacing="md">
           <UnderReviewQueue />
-          {user.role !== 'admin' && user.role !== 'viewer' ? <DueInspectionsPanel /> : null}
+          {user.role !== 'admin' ? <DueInspectionsPanel /> : null}
           {queueSections(user.role).map((section) => (
             <QueueSection
               key={section.id}

@@ -51,7 +51,10 @@ export function DueInspectionsPanel() {
         ))}
         {awaitingCountersign.map((r) => (
           <Text size="sm" key={r.recordId}>
-            {r.positionTag}: record of {isoDay(r.performedAt)} awaits your countersignature
+            <Anchor component={Link} to={`/positions/${r.positionId}/field`} underline="always">
+              {r.positionTag}
+            </Anchor>
+            : record of {isoDay(r.performedAt)} awaits your countersignature
             {r.outOfTolerance ? ' (out of tolerance)' : ''}
           </Text>
         ))}

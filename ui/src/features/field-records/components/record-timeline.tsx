@@ -1,17 +1,26 @@
-import { Badge, Button, Group, Paper, Stack, Text } from '@mantine/core';
+import { Badge, Button, Group, Paper, Spoiler, Stack, Text } from '@mantine/core';
+import { IconPrinter } from '@tabler/icons-react';
 import { fieldRecordKindLabels, type FieldRecord } from '@holdfast/shared';
 import { errorMessage } from '../../../lib/api-client';
 import { useSignFieldRecord } from '../api/sign-field-record';
+import { usePrintFieldRecord } from '../api/print-field-record';
 import { isoDay } from '../../../lib/dates';
+import { RecordValues } from './record-values';
 
 const statusColour = { draft: 'gray', signed: 'steel', countersigned: 'pass' } as const;
 
-/** The records of a position, newest first; plant engineers countersign signed ones here. */
+/**
+ * The records of a position, newest first, each with its values and its printout; a plant
+ * engineer countersigns signed ones here (not one they made or signed: the server refuses it).
+ */
 export function RecordTimeline(props: {
   records: readonly FieldRecord[];
   canCountersign: boolean;
+  /** The signed-in user, to offer no countersignature of their own record. */
+  userId: string;
 }) {
   const sign = useSignFieldRecord();
+  const print = usePrintFieldRecord();
   const newest = [...props.records].sort((a, b) => b.performedAt.localeCompare(a.performedAt));
   if (newest.length === 0) return <Text c="dimmed">No field records yet.</Text>;
   return (
@@ -35,15 +44,44 @@ export function RecordTimeline(props: {
             {r.countersigned ? ` · countersigned by ${r.countersigned.by.displayName}` : ''}
           </Text>
           {r.findings && <Text size="sm">Findings: {r.findings}</Text>}
-          {props.canCountersign && r.status === 'signed' && (
+          <Spoiler
+            maxHeight={0}
+            showLabel="Show the values"
+            hideLabel="Hide the values"
+            mt={4}
+            // A record to countersign opens with its values shown: nobody signs unseen numbers.
+            defaultExpanded={props.canCountersign && r.status === 'signed'}
+          >
+            <RecordValues measurements={r.measurements} />
+          </Spoiler>
+          <Group gap="xs" mt="xs">
+            {props.canCountersign &&
+              r.status === 'signed' &&
+              r.createdBy.id !== props.userId &&
+              r.signed?.by.id !== props.userId && (
+                <Button
+                  size="md"
+                  loading={sign.isPending && sign.variables?.id === r.id}
+                  onClick={() => sign.mutate({ id: r.id, counter: true })}
+                >
+                  Countersign
+                </Button>
+              )}
             <Button
-              mt="xs"
+              variant="default"
               size="md"
-              loading={sign.isPending && sign.variables?.id === r.id}
-              onClick={() => sign.mutate({ id: r.id, counter: true })}
+              leftSection={<IconPrinter size={18} aria-hidden />}
+              loading={print.isPending && print.variables === r.id}
+              onClick={() => print.mutate(r.id)}
+              aria-label={`Print the record of ${isoDay(r.performedAt)}`}
             >
-              Countersign
+              Print
             </Button>
+          </Group>
+          {print.isError && print.variables === r.id && (
+            <Text c="fail.8" size="sm">
+              Could not print: {errorMessage(print.error)}
+            </Text>
           )}
           {sign.isError && sign.variables?.id === r.id && (
             <Text c="fail.8" size="sm">
