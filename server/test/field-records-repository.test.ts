@@ -137,13 +137,15 @@ describe('FieldRecordsRepository with a Tx', () => {
     expect(all).toContain(demoEmail('engineer'));
     expect(all).toContain(demoEmail('checker'));
     expect(all).not.toContain(demoEmail('technician'));
-    expect(all).not.toContain(demoEmail('viewer'));
+    // The plant engineer (viewer role) countersigns, so hears of it too; an admin does not.
+    expect(all).toContain(demoEmail('viewer'));
+    expect(all).not.toContain(demoEmail('admin'));
     expect([...all].sort()).toEqual(all);
     await s.ctx.app.get(UsersRepository).update(checker, { active: false });
     expect(await signing.notifyEmails(owner, technician)).not.toContain(demoEmail('checker'));
-    // A viewer owning the sheet still hears; a checker signing does not hear of their own.
+    // Whoever signs does not hear of their own signature.
     const viewer = await s.ctx.userId('viewer');
-    expect(await signing.notifyEmails(viewer, owner)).toContain(demoEmail('viewer'));
+    expect(await signing.notifyEmails(owner, viewer)).not.toContain(demoEmail('viewer'));
     expect(await signing.notifyEmails(viewer, owner)).not.toContain(demoEmail('engineer'));
   });
 });
