@@ -88,4 +88,23 @@ describe.skipIf(skipReason !== null)('printing and export', () => {
     expect(regRows[0]).toMatch(/^Site code,Site,Machine tag,/);
     expect(regRows.length).toBeGreaterThan(3);
   });
+
+  it('prints a field record from its position page, under its position and date', async () => {
+    const { page } = browser;
+    await page.goto(`${baseUrl}/equipment`);
+    await page.getByRole('link', { name: 'Field records' }).first().click();
+    await page.getByRole('heading', { name: 'Timeline' }).waitFor();
+    const [record] = await Promise.all([
+      page.waitForEvent('download', { timeout: 60000 }),
+      page
+        .getByRole('button', { name: /^Print the record of / })
+        .first()
+        .click(),
+    ]);
+    expect(record.suggestedFilename()).toMatch(
+      /^[\w-]+-field-record-\d{4}-\d{2}-\d{2}(-draft)?\.pdf$/,
+    );
+    const head = (await readFile((await record.path())!)).subarray(0, 5).toString();
+    expect(head).toBe('%PDF-');
+  });
 });
