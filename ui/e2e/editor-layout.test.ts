@@ -75,6 +75,13 @@ describe.skipIf(skipReason !== null)('results stay in view and lead to their inp
     const bar = await page.getByTestId('check-summary-bar').boundingBox();
     expect(bar!.y).toBeGreaterThanOrEqual(0);
     expect(bar!.y).toBeLessThan(200);
+    // The caution band is fixed at the bottom: all of its words inside it, none clipped.
+    const caution = page.getByRole('note', { name: 'Safety caution' });
+    const [band, words] = await Promise.all([
+      caution.boundingBox(),
+      caution.locator('p:visible').boundingBox(),
+    ]);
+    expect(words!.y + words!.height).toBeLessThanOrEqual(band!.y + band!.height + 1);
     await screenshot(page, 'editor-390');
   });
 });

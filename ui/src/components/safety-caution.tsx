@@ -8,6 +8,14 @@ export const safetyCautionText =
   "The governing standard, the brake maker's data, local codes and licensed practice decide. " +
   'Never work under a suspended load: land the load or lock the drum, and lock out the drive.';
 
+/**
+ * The same caution in fewer words, for the footer band on a phone: the whole text runs to six
+ * lines there and would be cut off at the band's height.
+ */
+export const shortSafetyCautionText =
+  "Supports, never replaces, a competent engineer's judgement; the standard, the maker's data " +
+  'and local codes decide. Never work under a suspended load; lock out the drive.';
+
 export interface SafetyCautionProps {
   /** `footer`: one compact band for the frame footer; `block`: a boxed note inside a page. */
   variant?: 'footer' | 'block';
@@ -31,9 +39,20 @@ export function SafetyCaution({ variant = 'block' }: SafetyCautionProps) {
       >
         <IconAlertTriangle size={variant === 'footer' ? 16 : 20} stroke={2} aria-hidden />
       </ThemeIcon>
-      <Text size={variant === 'footer' ? 'xs' : 'sm'} className={classes.text}>
-        <strong>Caution.</strong> {safetyCautionText}
-      </Text>
+      {variant === 'footer' ? (
+        <>
+          <Text size="xs" className={classes.text} visibleFrom="md">
+            <strong>Caution.</strong> {safetyCautionText}
+          </Text>
+          <Text size="xs" className={classes.text} hiddenFrom="md">
+            <strong>Caution.</strong> {shortSafetyCautionText}
+          </Text>
+        </>
+      ) : (
+        <Text size="sm" className={classes.text}>
+          <strong>Caution.</strong> {safetyCautionText}
+        </Text>
+      )}
     </Group>
   );
 }
