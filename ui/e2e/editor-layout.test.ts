@@ -66,6 +66,13 @@ describe.skipIf(skipReason !== null)('results stay in view and lead to their inp
     await page.setViewportSize({ width: 1024, height: 800 });
     await page.goto(baseUrl + sheet.path);
     await page.locator('[data-check]').first().waitFor();
+    // A unit picker's chevron sits after the unit's name, not over it.
+    const picker = page.getByRole('combobox', { name: /unit$/ }).first();
+    const gap = await picker.evaluate((select) => {
+      const chevron = select.parentElement!.querySelector('[data-position="right"]')!;
+      return chevron.getBoundingClientRect().left - select.getBoundingClientRect().right;
+    });
+    expect(gap).toBeGreaterThanOrEqual(-30); // its own 18 px section, not the 96 px picker
     await screenshot(page, 'editor-1024');
     await page.setViewportSize({ width: 390, height: 844 });
     await page.goto(baseUrl + sheet.path);

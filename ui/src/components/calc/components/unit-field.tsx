@@ -117,6 +117,9 @@ export const UnitField = memo(function UnitField(props: UnitFieldProps) {
       onChange={(e) => handleUnit(e.currentTarget.value)}
       variant="unstyled"
       size="xs"
+      // Its own chevron section, sized here: otherwise it inherits the text input's right-section
+      // width (the whole picker) and centres the chevron over the unit's name.
+      rightSectionWidth={18}
       styles={{
         input: { fontWeight: 500, paddingInlineStart: 6, paddingInlineEnd: 18, textAlign: 'right' },
       }}
