@@ -191,6 +191,12 @@ describe.skipIf(skipReason !== null)('the workbench in a real browser', () => {
     await page.getByRole('table', { name: 'Inputs changed' }).waitFor();
     await expect(page.locator('[data-changed-input="hookBlock"]').count()).resolves.toBe(1);
     await screenshot(page, 'workbench-compare');
+    // Opened bare (a bookmark, the address bar): the latest two revisions, compared at once.
+    await page.goto(`${baseUrl}${sheetUrl.replace(/\/revisions\/.*$/, '')}/compare`);
+    await page.getByRole('table', { name: 'Inputs changed' }).waitFor();
+    await expect(page.getByRole('combobox', { name: 'From' }).inputValue()).resolves.toBe(
+      'Revision A',
+    );
     await page.getByRole('link', { name: 'Equipment' }).click();
     await page.getByRole('heading', { name: 'Equipment' }).waitFor();
     await screenshot(page, 'workbench-equipment');

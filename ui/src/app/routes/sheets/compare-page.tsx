@@ -19,14 +19,18 @@ export function Component() {
   const [search, setSearch] = useSearchParams();
   const user = useCurrentUser();
   const sheet = useSheet(sheetId);
-  const from = search.get('from') ?? '';
-  const to = search.get('to') ?? '';
-  const cmp = useComparison(sheetId, from, to);
   const revisions = sheet.data ? visibleRevisions(sheet.data, user) : [];
+  // Opened without a choice (from the address bar or a bookmark): the latest two revisions.
+  const from = search.get('from') ?? revisions.at(-2)?.id ?? '';
+  const to = search.get('to') ?? revisions.at(-1)?.id ?? '';
+  const cmp = useComparison(sheetId, from, to);
   const options = revisions.map((r) => ({ value: r.id, label: `Revision ${r.label}` }));
   const pick = (key: 'from' | 'to', v: string | null) =>
     setSearch((prev) => {
       const next = new URLSearchParams(prev);
+      // Keep the other side as shown, default or chosen.
+      if (from && !next.has('from')) next.set('from', from);
+      if (to && !next.has('to')) next.set('to', to);
       if (v) next.set(key, v);
       return next;
     });
