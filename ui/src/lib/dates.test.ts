@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { isoDay } from './dates';
+import { isoDay, isoDayTime } from './dates';
 
 describe('isoDay', () => {
   it('gives the UTC day of a timestamp as ISO 8601, as the printouts do', () => {
@@ -10,5 +10,15 @@ describe('isoDay', () => {
 
   it('gives nothing for a timestamp it cannot read', () => {
     expect(isoDay('not a date')).toBe('');
+  });
+});
+
+describe('isoDayTime', () => {
+  it('gives a moment in the reader’s clock, day first in ISO order', () => {
+    const local = new Date(2026, 2, 12, 7, 5, 9);
+    expect(isoDayTime(local)).toBe('2026-03-12 07:05');
+    expect(isoDayTime(local, true)).toBe('2026-03-12 07:05:09');
+    expect(isoDayTime(local.toISOString())).toBe('2026-03-12 07:05');
+    expect(isoDayTime('not a date')).toBe('');
   });
 });

@@ -8,13 +8,13 @@ import { useSheet } from '../../../features/sheets/api/get-sheet';
 import { sheetEyebrow, sheetSubpageLoader } from './sheet-subpage';
 import { useSheetAudit } from '../../../features/sheets/api/get-sheet-audit';
 import { auditActionWords, auditDetail } from '../../../features/sheets/utils/audit-words';
+import { isoDayTime } from '../../../lib/dates';
 
 export const handle: RouteHandle = { wide: true, title: 'Audit trail' };
 
 export const clientLoader = sheetSubpageLoader;
 
-const when = (iso: string) =>
-  new Date(iso).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'medium' });
+const when = (iso: string) => isoDayTime(iso, true);
 
 /**
  * Who did what to a sheet, and when, from the append-only trail. The server decides what each

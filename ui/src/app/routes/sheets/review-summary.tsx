@@ -4,8 +4,7 @@ import { Link } from 'react-router-dom';
 import type { Revision } from '@holdfast/shared';
 import { AuthorNote } from '../../../features/review/components/author-note';
 import { CheckActions } from './check-actions';
-
-const day = (iso: string) => new Date(iso).toLocaleDateString('en-GB', { dateStyle: 'medium' });
+import { isoDay } from '../../../lib/dates';
 
 /**
  * The head of the review tab: the notes that travel with the revision (the author's note to the
@@ -27,9 +26,9 @@ export function ReviewSummary({
           </Title>
           <Text size="sm">
             Prepared by {revision.author.displayName}
-            {revision.submittedAt ? `, sent for check ${day(revision.submittedAt)}` : ''}
+            {revision.submittedAt ? `, sent for check ${isoDay(revision.submittedAt)}` : ''}
             {revision.checker && revision.approvedAt
-              ? `; approved by ${revision.checker.displayName} ${day(revision.approvedAt)}`
+              ? `; approved by ${revision.checker.displayName} ${isoDay(revision.approvedAt)}`
               : ''}
             .
           </Text>

@@ -2,6 +2,7 @@ import { Button, Stack, Table, Text } from '@mantine/core';
 import { notifications } from '@mantine/notifications';
 import { errorMessage } from '../../../lib/api-error';
 import { useFailedMail, useResendMail } from '../api/failed-mail';
+import { isoDayTime } from '../../../lib/dates';
 
 /** Mail that used up its retries, newest first, each with a resend. */
 export function FailedMailTable() {
@@ -31,12 +32,7 @@ export function FailedMailTable() {
           {data.items.map((mail) => (
             <Table.Tr key={mail.id}>
               <Table.Td>
-                <Text size="sm">
-                  {new Date(mail.createdAt).toLocaleString('en-GB', {
-                    dateStyle: 'medium',
-                    timeStyle: 'short',
-                  })}
-                </Text>
+                <Text size="sm">{isoDayTime(mail.createdAt)}</Text>
               </Table.Td>
               <Table.Td>
                 <Text size="sm">{mail.to.join(', ')}</Text>

@@ -5,6 +5,7 @@ import { fieldRecordKindLabels } from '@holdfast/shared';
 import type { OutboxOwner } from '../offline/outbox-store';
 import { ownerName, waitingText } from '../offline/outbox-summary';
 import { useDeviceOutbox } from '../offline/use-device-outbox';
+import { isoDayTime } from '../../../lib/dates';
 
 /**
  * Shown in the signed-in frame. Sends the signed-in user's own entries (through the hook) and
@@ -69,7 +70,7 @@ export function DeviceOutboxNotice({ user }: { user: OutboxOwner }) {
           <List size="sm" mt={4}>
             {unassigned.map((e) => (
               <List.Item key={e.id}>
-                {`${fieldRecordKindLabels[e.payload.kind]}, ${new Date(e.payload.performedAt).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' })}${e.payload.findings ? `: ${e.payload.findings}` : ''}`}
+                {`${fieldRecordKindLabels[e.payload.kind]}, ${isoDayTime(e.payload.performedAt)}${e.payload.findings ? `: ${e.payload.findings}` : ''}`}
               </List.Item>
             ))}
           </List>

@@ -5,6 +5,7 @@ import type { Comment } from '@holdfast/shared';
 import { errorMessage } from '../../../lib/api-client';
 import { useResolveComment } from '../api/resolve-comment';
 import { CommentComposer } from './comment-composer';
+import { isoDayTime } from '../../../lib/dates';
 
 export interface CommentThreadProps {
   revisionId: string;
@@ -14,8 +15,7 @@ export interface CommentThreadProps {
   canComment?: boolean;
 }
 
-const when = (iso: string) =>
-  new Date(iso).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
+const when = (iso: string) => isoDayTime(iso);
 
 function Byline({ c }: { c: Comment }) {
   return (

@@ -3,9 +3,9 @@ import { IconArrowRight } from '@tabler/icons-react';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import { showStoredValue } from '../../../components/calc/utils/stored-value';
 import { useRevisionChanges } from '../api/get-revision-changes';
+import { isoDayTime } from '../../../lib/dates';
 
-const day = (iso: string) =>
-  new Date(iso).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
+const day = (iso: string) => isoDayTime(iso);
 
 /** "Changed since last submission": the inputs the checker has not seen yet. */
 export function ChangesPanel({ revisionId }: { revisionId: string }) {

@@ -1,6 +1,7 @@
 import { Alert, Button, Group, Text } from '@mantine/core';
 import { IconDeviceFloppy } from '@tabler/icons-react';
 import type { LocalOffer } from '../hooks/use-revision-draft';
+import { isoDayTime } from '../../../lib/dates';
 
 /** Offers back edits kept on this device that the server never received. */
 export function LocalDraftOffer({
@@ -12,7 +13,7 @@ export function LocalDraftOffer({
   onRestore: () => void;
   onDiscard: () => void;
 }) {
-  const when = new Date(offer.draft.savedAt).toLocaleString('en-GB');
+  const when = isoDayTime(offer.draft.savedAt, true);
   const n = offer.changed.length;
   return (
     <Alert

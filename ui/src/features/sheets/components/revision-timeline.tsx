@@ -2,9 +2,9 @@ import { Anchor, Group, Text, Timeline } from '@mantine/core';
 import { Link } from 'react-router-dom';
 import type { RevisionSummary } from '@holdfast/shared';
 import { StateBadge } from './state-badge';
+import { isoDayTime } from '../../../lib/dates';
 
-const when = (iso: string | null) =>
-  iso ? new Date(iso).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' }) : null;
+const when = (iso: string | null) => (iso ? isoDayTime(iso) : null);
 
 /** A sheet's revisions, newest first, with who did what and when. */
 export function RevisionTimeline({
