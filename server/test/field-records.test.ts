@@ -172,6 +172,8 @@ describe('field records', () => {
     const mail = await waitFor(() =>
       suite.ctx.smtp.mails.find((m) => m.raw.includes('out of tolerance')),
     );
+    // The link opens the position's records screen (the UI's route), not a page that is not there.
+    expect(mail.raw).toContain(`/positions/${suite.reg.positionId}/field`);
     expect(mail.to).toEqual(
       expect.arrayContaining([
         'engineer@holdfast.test',
@@ -465,7 +467,10 @@ describe('field records', () => {
     const schedule = suite.ctx.app.get(InspectionScheduleService);
     expect(await schedule.sendReminders()).toBe(1);
     expect(await schedule.sendReminders()).toBe(0);
-    await waitFor(() => suite.ctx.smtp.mails.find((m) => m.raw.includes('inspection due')));
+    const reminder = await waitFor(() =>
+      suite.ctx.smtp.mails.find((m) => m.raw.includes('inspection due')),
+    );
+    expect(reminder.raw).toContain(`/positions/${suite.reg.positionId}/field`);
     await new Promise((r) => setTimeout(r, 1500));
     expect(suite.ctx.smtp.mails.filter((m) => m.raw.includes('inspection due'))).toHaveLength(1);
     const later = await schedule.due(

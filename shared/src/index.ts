@@ -22,3 +22,4 @@ export * from './field-records/tolerance.schema.js';
 export * from './field-records/field-record.schema.js';
 export * from './field-records/schedule.schema.js';
 export * from './field-records/verify-record.schema.js';
+export * from './app/screen-paths.js';

@@ -1,7 +1,9 @@
+import { positionFieldPath, screenUrl } from '@holdfast/shared';
 import type { MailMessage } from '../mail/mailer.js';
 
 export interface RecordAbout {
   recordId: string;
+  positionId: string;
   positionTag: string;
   documentNumber: string;
   revisionLabel: string;
@@ -24,7 +26,7 @@ export function outOfToleranceMail(
       ...lines.map((l) => `- ${l}`),
       '',
       'The record waits for a plant engineer to countersign it.',
-      `Open it: ${base.replace(/\/$/, '')}/field-records/${a.recordId}`,
+      `Open the position's records: ${screenUrl(base, positionFieldPath(a.positionId))}`,
     ].join('\n'),
   };
 }
@@ -41,7 +43,7 @@ export function inspectionDueMail(
     text: [
       `The next inspection of brake position ${a.positionTag} is due on ${a.dueOn}.`,
       '',
-      `Open the position: ${base.replace(/\/$/, '')}/register/positions/${a.positionId}`,
+      `Open the position: ${screenUrl(base, positionFieldPath(a.positionId))}`,
     ].join('\n'),
   };
 }

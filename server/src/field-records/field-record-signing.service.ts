@@ -105,6 +105,7 @@ export class FieldRecordSigningService {
             this.config.settings.PUBLIC_URL,
             {
               recordId: id,
+              positionId: row.positionId,
               positionTag: tag,
               documentNumber: rev.documentNumber,
               revisionLabel: rev.label,

@@ -1,3 +1,4 @@
+import { revisionPath, screenUrl } from '@holdfast/shared';
 import type { MailMessage } from '../mail/mailer.js';
 
 interface Flagged {
@@ -27,7 +28,7 @@ export function underReviewMail(
       '',
       'The approval stays on record and /verify now says the sheet is under review. Approve a new revision, or, as a checker, record why the approved revision stands.',
       '',
-      `Open it: ${base.replace(/\/$/, '')}/sheets/${a.sheetId}/revisions/${a.revisionId}`,
+      `Open it: ${screenUrl(base, revisionPath(a.sheetId, a.revisionId))}`,
     ].join('\n'),
   };
 }

@@ -1,3 +1,4 @@
+import { revisionPath, screenUrl } from '@holdfast/shared';
 import type { MailMessage } from '../mail/mailer.js';
 
 interface About {
@@ -8,8 +9,7 @@ interface About {
   label: string;
 }
 
-const link = (base: string, a: About) =>
-  `${base.replace(/\/$/, '')}/sheets/${a.sheetId}/revisions/${a.revisionId}`;
+const link = (base: string, a: About) => screenUrl(base, revisionPath(a.sheetId, a.revisionId));
 const name = (a: About) => `${a.documentNumber} rev. ${a.label}`;
 
 export function submittedMail(

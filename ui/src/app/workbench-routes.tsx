@@ -20,6 +20,7 @@ import {
 } from '@tabler/icons-react';
 import type { QueryClient } from '@tanstack/react-query';
 import { lazyRoute, type RouteModule } from '../lib/lazy-route';
+import { screenRoutes } from '@holdfast/shared';
 import type { NavItem } from '../lib/nav-item';
 import { FIELD_RECORDERS } from '../lib/field-work';
 
@@ -40,7 +41,7 @@ export function workbenchRoutes(queryClient: QueryClient): RouteObject[] {
     { path: 'sheets', lazy: lazy(() => import('./routes/sheets/sheet-list')) },
     { path: 'sheets/:sheetId', lazy: lazy(() => import('./routes/sheets/sheet-page')) },
     {
-      path: 'sheets/:sheetId/revisions/:revisionId',
+      path: screenRoutes.revision,
       lazy: lazy(() => import('./routes/sheets/sheet-page')),
     },
     { path: 'sheets/:sheetId/compare', lazy: lazy(() => import('./routes/sheets/compare-page')) },
@@ -53,7 +54,7 @@ export function workbenchRoutes(queryClient: QueryClient): RouteObject[] {
       lazy: lazy(() => import('./routes/field-records/record-form')),
     },
     {
-      path: 'positions/:positionId/field',
+      path: screenRoutes.positionField,
       lazy: lazy(() => import('./routes/field-records/position-field')),
     },
   ];

@@ -1,5 +1,6 @@
 import { Anchor, Badge, Paper, Stack, Text, Title } from '@mantine/core';
 import { Link } from 'react-router-dom';
+import { positionFieldPath } from '@holdfast/shared';
 import type { DueInspection } from '@holdfast/shared';
 import { useDueInspections } from '../api/get-due-inspections';
 import { isoDay } from '../../../lib/dates';
@@ -14,7 +15,7 @@ function Line({ d }: { d: DueInspection }) {
   // A div, not a paragraph: the overdue badge is a block element.
   return (
     <Text size="sm" component="div">
-      <Anchor component={Link} to={`/positions/${d.positionId}/field`} underline="always">
+      <Anchor component={Link} to={positionFieldPath(d.positionId)} underline="always">
         {d.siteCode} · {d.machineTag} · {d.positionTag}
       </Anchor>{' '}
       {dueText(d)}
@@ -51,7 +52,7 @@ export function DueInspectionsPanel() {
         ))}
         {awaitingCountersign.map((r) => (
           <Text size="sm" key={r.recordId}>
-            <Anchor component={Link} to={`/positions/${r.positionId}/field`} underline="always">
+            <Anchor component={Link} to={positionFieldPath(r.positionId)} underline="always">
               {r.positionTag}
             </Anchor>
             : record of {isoDay(r.performedAt)} awaits your countersignature

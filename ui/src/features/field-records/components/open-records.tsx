@@ -1,6 +1,6 @@
 import { Anchor, Badge, Paper, Stack, Text, Title } from '@mantine/core';
 import { Link } from 'react-router-dom';
-import { fieldRecordKindLabels, type FieldRecordStatus } from '@holdfast/shared';
+import { positionFieldPath, fieldRecordKindLabels, type FieldRecordStatus } from '@holdfast/shared';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import { useFieldRecords } from '../api/get-field-records';
 import { isoDay } from '../../../lib/dates';
@@ -33,7 +33,7 @@ export function OpenRecords({ status }: { status: 'draft' | 'signed' }) {
         <Stack gap={4} component="ul" p={0} m={0} style={{ listStyle: 'none' }}>
           {records.data.items.map((r) => (
             <Text size="sm" component="li" key={r.id}>
-              <Anchor component={Link} to={`/positions/${r.positionId}/field`} underline="always">
+              <Anchor component={Link} to={positionFieldPath(r.positionId)} underline="always">
                 {r.positionTag}
               </Anchor>{' '}
               {isoDay(r.performedAt)} · {fieldRecordKindLabels[r.kind]} · {r.documentNumber} rev.{' '}

@@ -1,5 +1,6 @@
 import { Anchor, Button, Group, Stack, Table, Text } from '@mantine/core';
 import { Link } from 'react-router-dom';
+import { positionFieldPath } from '@holdfast/shared';
 import type { Position } from '@holdfast/shared';
 import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
 import { stateLabel } from '../../../lib/state-label';
@@ -56,7 +57,7 @@ export function PositionRow({ position: p, onEdit, canRecord = false }: Position
         )}
         {p.inForce.length > 0 ? (
           <Group gap="xs" mt={4}>
-            <Anchor component={Link} to={`/positions/${p.id}/field`} size="sm">
+            <Anchor component={Link} to={positionFieldPath(p.id)} size="sm">
               Field records
             </Anchor>
             {(canRecord ? p.inForce : []).map((f) => (
