@@ -9,12 +9,13 @@ const roleColour: Record<Role, string> = {
   technician: 'grape',
 };
 
+/** The role names, with the trade's word where the role's own is not it (as in the README). */
 export const roleLabel: Record<Role, string> = {
   engineer: 'Engineer',
   checker: 'Checker',
-  viewer: 'Viewer',
+  viewer: 'Viewer (plant engineer)',
   admin: 'Admin',
-  technician: 'Technician',
+  technician: 'Technician (fitter)',
 };
 
 export function RoleBadge({ role, ...rest }: { role: Role } & Omit<BadgeProps, 'color'>) {

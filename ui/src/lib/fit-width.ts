@@ -7,3 +7,12 @@ export function fitWidth(labels: readonly string[], min = 0): string {
   const longest = labels.reduce((n, l) => Math.max(n, l.length), 0);
   return `min(100%, max(${min}px, calc(${longest}ch + 3.5rem)))`;
 }
+
+/**
+ * The same width as a floor for a table cell that holds such a box: in a table, "100 %" is the
+ * column's share, which can be narrower than the box needs, so the cell must ask for the room.
+ */
+export function fitCellWidth(labels: readonly string[], min = 0): string {
+  const longest = labels.reduce((n, l) => Math.max(n, l.length), 0);
+  return `max(${min}px, calc(${longest}ch + 3.5rem))`;
+}

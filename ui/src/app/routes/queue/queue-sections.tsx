@@ -69,7 +69,7 @@ export function queueSections(role: Role): QueueSectionSpec[] {
 export const roleLine: Record<Role, string> = {
   checker: 'Checks by others come first, then your own work.',
   engineer: 'Your sheets that need you.',
-  viewer: 'Approved sheets to read, print and file.',
+  viewer: 'Approved sheets to read, print and file, and field records to countersign.',
   admin: 'People and acceptance criteria are yours to keep.',
   technician: 'Approved sheets and their field cards for the brakes you set.',
 };

@@ -7,7 +7,7 @@ import { useUpdateUser, type UpdateUserVariables } from '../api/update-user';
 import { ResetPasswordButton } from './reset-password-button';
 import { roleOptions } from './role-options';
 import classes from './users-table.module.css';
-import { fitWidth } from '../../../lib/fit-width';
+import { fitCellWidth, fitWidth } from '../../../lib/fit-width';
 
 function StatusBadge({ active }: { active: boolean }) {
   return active ? (
@@ -79,7 +79,12 @@ export function UsersTable({ users, currentUserId }: { users: User[]; currentUse
                 <Table.Td>
                   <Text size="sm">{user.email}</Text>
                 </Table.Td>
-                <Table.Td>
+                <Table.Td
+                  miw={fitCellWidth(
+                    roleOptions.map((o) => o.label),
+                    120,
+                  )}
+                >
                   <Tooltip label="You cannot change your own role" disabled={!self}>
                     <Select
                       size="xs"
