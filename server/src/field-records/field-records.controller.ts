@@ -27,6 +27,7 @@ import {
   type AttachmentList,
   apiRoutes,
   fieldRecordCountersigners,
+  fieldRecorders,
 } from '@holdfast/shared';
 import { FileUpload } from '../attachments/stored-file.js';
 import { CurrentUser, type AuthUser } from '../auth/auth-user.js';
@@ -40,7 +41,7 @@ import { FieldRecordSigningService } from './field-record-signing.service.js';
 import { InspectionScheduleService } from './inspection-schedule.service.js';
 
 /** Who records field work: technicians (fitters) and engineers (checkers inherit). */
-const RECORDERS = ['technician', 'engineer'] as const;
+const RECORDERS = fieldRecorders;
 
 @ApiTags('field-records')
 @ApiBearerAuth()

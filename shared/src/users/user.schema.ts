@@ -22,6 +22,12 @@ export const fieldRecordCountersigners = [
 export const mayCountersign = (role: Role): boolean =>
   (fieldRecordCountersigners as readonly Role[]).includes(role);
 
+/** Who makes (and signs their own) field records: fitters and engineers (checkers too). */
+export const fieldRecorders = ['technician', 'engineer', 'checker'] as const satisfies Role[];
+
+export const mayRecordFieldWork = (role: Role | undefined): boolean =>
+  !!role && (fieldRecorders as readonly Role[]).includes(role);
+
 export const userSchema = z.object({
   id: z.string().uuid(),
   email: z.string().email(),

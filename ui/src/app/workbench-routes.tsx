@@ -20,16 +20,15 @@ import {
 } from '@tabler/icons-react';
 import type { QueryClient } from '@tanstack/react-query';
 import { lazyRoute, type RouteModule } from '../lib/lazy-route';
-import { screenRoutes } from '@holdfast/shared';
+import { fieldRecorders, screenRoutes } from '@holdfast/shared';
 import type { NavItem } from '../lib/nav-item';
-import { FIELD_RECORDERS } from '../lib/field-work';
 
 /** Links in the frame's "Workbench" navigation group, in order. */
 export const workbenchNav: NavItem[] = [
   { label: 'Work queue', to: '/', icon: IconListCheck, end: true },
   { label: 'Sheets', to: '/sheets', icon: IconFileDescription },
   { label: 'Equipment', to: '/equipment', icon: IconBuildingFactory2 },
-  { label: 'Field work', to: '/field', icon: IconClipboardCheck, roles: FIELD_RECORDERS },
+  { label: 'Field work', to: '/field', icon: IconClipboardCheck, roles: fieldRecorders },
   { label: 'Criteria sets', to: '/criteria', icon: IconScale },
 ];
 

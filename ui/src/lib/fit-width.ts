@@ -4,8 +4,7 @@
  * box's padding and its chevron or clear button. Never below `min` px, never wider than its row.
  */
 export function fitWidth(labels: readonly string[], min = 0): string {
-  const longest = labels.reduce((n, l) => Math.max(n, l.length), 0);
-  return `min(100%, max(${min}px, calc(${longest}ch + 3.5rem)))`;
+  return `min(100%, ${fitCellWidth(labels, min)})`;
 }
 
 /**

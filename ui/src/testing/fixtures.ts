@@ -1,5 +1,5 @@
 import type { SheetEvaluation } from '@holdfast/calc';
-import type { Position, Register, Session, User } from '@holdfast/shared';
+import type { FieldTarget, Position, Register, Session, User } from '@holdfast/shared';
 
 export function makeUser(overrides: Partial<User> = {}): User {
   return {
@@ -118,5 +118,22 @@ export function makeRegister(inForce: InForce[]): Register {
         ],
       },
     ],
+  };
+}
+
+/** A main-spring length on the field card: ± 0.5 mm, common practice (calc's tolerance table). */
+export function springTarget(value: number, label = 'Spring length'): FieldTarget {
+  return {
+    settingKey: 'springLength',
+    label,
+    value,
+    unit: 'm',
+    dimension: 'length',
+    group: 'spring',
+    tolerance: {
+      band: { kind: 'absolute', minus: 0.0005, plus: 0.0005 },
+      source: 'common practice',
+      confidence: 'common practice',
+    },
   };
 }

@@ -1,3 +1,4 @@
+import { mayRecordFieldWork } from '@holdfast/shared';
 import { useState } from 'react';
 import { Badge, Button, Group, Paper, Skeleton, Stack, Table, Text, Title } from '@mantine/core';
 import { IconPencil, IconPlus } from '@tabler/icons-react';
@@ -6,7 +7,6 @@ import { Page } from '../../../components/layouts/page';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import type { RouteHandle } from '../../../lib/route-handle';
 import { hasRole, useCurrentUser } from '../../../lib/session';
-import { canRecordFieldWork } from '../../../lib/field-work';
 import { registerQueryOptions, useRegister } from '../../../features/register/api/get-register';
 import { PositionRow } from '../../../features/register/components/position-row';
 import {
@@ -38,7 +38,7 @@ export function Component() {
   const user = useCurrentUser();
   // Who the server lets change the register (register.controller.ts): not viewers, not fitters.
   const canEdit = hasRole(user, 'engineer', 'checker', 'admin');
-  const canRecord = canRecordFieldWork(user.role);
+  const canRecord = mayRecordFieldWork(user.role);
   const [form, setForm] = useState<Form | null>(null);
   const small = { size: 'compact-sm', variant: 'subtle' } as const;
 

@@ -2,7 +2,12 @@ import { Link, useParams } from 'react-router-dom';
 import { Alert, Button, Group, SimpleGrid, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { IconClipboardPlus } from '@tabler/icons-react';
 import { length, liningSeries, strokeSeries } from '@holdfast/calc';
-import { mayCountersign, type Position, type PositionFieldState } from '@holdfast/shared';
+import {
+  mayCountersign,
+  mayRecordFieldWork,
+  type Position,
+  type PositionFieldState,
+} from '@holdfast/shared';
 import { Page } from '../../../components/layouts/page';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import type { RouteHandle } from '../../../lib/route-handle';
@@ -20,7 +25,7 @@ import {
 } from '../../../features/field-records/components/wear-series';
 import { useFieldForm } from '../../../features/field-records/api/get-field-form';
 import { isoDay } from '../../../lib/dates';
-import { canRecordFieldWork, newFieldRecordPath } from '../../../lib/field-work';
+import { newFieldRecordPath } from '../../../lib/field-work';
 import { findPosition, useRegister } from '../../../features/register/api/get-register';
 import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
 
@@ -105,7 +110,7 @@ export function Component() {
         {state.isPending && <Skeleton h={60} />}
         {state.isError && <ErrorPanel error={state.error} />}
         {state.data && <AtAGlance state={state.data} />}
-        {canRecordFieldWork(user.role) && <RecordWork position={position} />}
+        {mayRecordFieldWork(user.role) && <RecordWork position={position} />}
         {history.isPending && <Skeleton h={240} />}
         {history.isError && <ErrorPanel error={history.error} />}
         {history.data && (

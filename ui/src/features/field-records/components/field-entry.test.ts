@@ -1,22 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { LINING_CHANGE_KIND, STROKE_SETTING_KINDS } from '@holdfast/calc';
-import { fieldRecordKinds, type CreateFieldRecordInput, type FieldTarget } from '@holdfast/shared';
+import { fieldRecordKinds, type CreateFieldRecordInput } from '@holdfast/shared';
+import { springTarget } from '../../../testing/fixtures';
 import { buildMeasurements } from './measurement-entry';
 import { refusedFieldErrors } from './refused-fields';
 
-const target: FieldTarget = {
-  settingKey: 'springLength',
-  label: 'Spring length',
-  value: 0.2,
-  unit: 'm',
-  dimension: 'length',
-  group: 'spring',
-  tolerance: {
-    band: { kind: 'absolute', minus: 0.0005, plus: 0.0005 },
-    source: 'common practice',
-    confidence: 'common practice',
-  },
-};
+const target = springTarget(0.2);
 
 describe('record form measurements', () => {
   it('converts typed values to SI and asks for a reason when as-left is out', () => {

@@ -1,23 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { screen } from '@testing-library/react';
-import type { FieldTarget } from '@holdfast/shared';
+import { springTarget } from '../../../testing/fixtures';
 import { renderWithProviders } from '../../../testing/render';
 import { MeasurementRow } from './measurement-row';
 
 // A steel-rule length set to 0.5 mm steps, read to 0.1 mm (calc's precision table).
-const spring: FieldTarget = {
-  settingKey: 'springLength',
-  label: 'Main spring length as set',
-  value: 0.124,
-  unit: 'm',
-  dimension: 'length',
-  group: 'spring',
-  tolerance: {
-    band: { kind: 'absolute', minus: 0.0005, plus: 0.0005 },
-    source: 'common practice',
-    confidence: 'common practice',
-  },
-};
+const spring = springTarget(0.124, 'Main spring length as set');
 
 describe('a measured value on the record form', () => {
   it('gives its deviation to a tenth of the setting step, as the reading prints', () => {
