@@ -1,6 +1,7 @@
 import { apiPath, apiRoutes, sessionSchema, type ApiPath } from '@holdfast/shared';
 import { env } from '../config/env';
 import { ApiRequestError } from './api-error';
+import { noteServerAnswer } from './server-reach';
 import { sessionStore } from './session';
 
 /** Anything with a zod-like `parse`, so responses can be checked against shared schemas. */
@@ -38,10 +39,13 @@ export function refreshSession(): Promise<boolean> {
         credentials: 'same-origin',
         headers: { Accept: 'application/json' },
       });
+      noteServerAnswer(true);
       if (!res.ok) return false;
       sessionStore.start(sessionSchema.parse(await res.json()));
       return true;
-    } catch {
+    } catch (error) {
+      // No answer (a TypeError from fetch), as opposed to an answer that could not be read.
+      if (error instanceof TypeError) noteServerAnswer(false);
       return false;
     } finally {
       refreshing = null;
@@ -90,9 +94,12 @@ export async function withAuthRetry<R extends { status: number }>(
 
 export async function sendFetch(url: string, init: RequestInit): Promise<Response> {
   try {
-    return await fetch(url, init);
+    const res = await fetch(url, init);
+    noteServerAnswer(true);
+    return res;
   } catch (error) {
     if (init.signal?.aborted) throw error;
+    noteServerAnswer(false);
     throw ApiRequestError.network(error);
   }
 }

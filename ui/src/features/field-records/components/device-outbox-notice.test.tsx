@@ -4,6 +4,7 @@ import { openDB } from 'idb';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { screen, waitFor } from '@testing-library/react';
 import type { CreateFieldRecordInput } from '@holdfast/shared';
+import { noteServerAnswer, serverUnreachable } from '../../../lib/server-reach';
 import { testUsers } from '../../../testing/fixtures';
 import { mockFetch } from '../../../testing/mock-fetch';
 import { renderWithProviders } from '../../../testing/render';
@@ -30,6 +31,7 @@ beforeEach(() => {
   globalThis.indexedDB = new IDBFactory();
   resetOutboxConnection();
   vi.spyOn(navigator, 'onLine', 'get').mockReturnValue(true);
+  noteServerAnswer(true);
 });
 afterEach(() => vi.restoreAllMocks());
 
@@ -80,5 +82,26 @@ describe('the device outbox as another user sees it', () => {
     await waitFor(() => expect(mock.callsTo('POST /api/field-records')).toHaveLength(1));
     const [entry] = await listOutbox();
     expect(entry!.owner?.id).toBe(engineer.id);
+  });
+
+  it('sends their own waiting record when the server answers again, with no online event', async () => {
+    await saveToOutbox(record(R1, 'kept while the server was away'), technician);
+    let reachable = false;
+    const mock = mockFetch({
+      'POST /api/field-records': (req) => {
+        if (!reachable) throw new TypeError('Failed to fetch');
+        return { status: 201, body: req.body };
+      },
+    });
+    renderWithProviders(<DeviceOutboxNotice user={technician} />, { user: technician });
+    await waitFor(() => expect(mock.callsTo('POST /api/field-records')).toHaveLength(1));
+    await waitFor(() => expect(serverUnreachable()).toBe(true));
+    expect((await listOutbox())[0]!.state).not.toBe('sent');
+
+    // Any other call answered (a list refreshed, say) tells the outbox the server is back.
+    reachable = true;
+    noteServerAnswer(true);
+    await waitFor(() => expect(mock.callsTo('POST /api/field-records')).toHaveLength(2));
+    expect(mock.callsTo('POST /api/field-records')[1]!.body).toMatchObject({ id: R1 });
   });
 });

@@ -5,6 +5,8 @@ import { act, screen } from '@testing-library/react';
 import type { CreateFieldRecordInput } from '@holdfast/shared';
 import { Component as SignInPage } from '../../../app/routes/auth/sign-in';
 import { makeSession, testUsers } from '../../../testing/fixtures';
+import { refreshSession } from '../../../lib/api-client';
+import { noteServerAnswer, SERVER_RETRY_MS } from '../../../lib/server-reach';
 import { mockFetch } from '../../../testing/mock-fetch';
 import { renderRoutes } from '../../../testing/render';
 import { resetOutboxConnection, saveToOutbox } from '../offline/outbox-store';
@@ -40,8 +42,12 @@ function renderSignIn() {
 beforeEach(() => {
   globalThis.indexedDB = new IDBFactory();
   resetOutboxConnection();
+  noteServerAnswer(true);
 });
-afterEach(() => vi.restoreAllMocks());
+afterEach(() => {
+  vi.useRealTimers();
+  vi.restoreAllMocks();
+});
 
 describe('sign-in page after a reload without a connection', () => {
   it('says plainly that saved work waits on the device, and signs back in when online', async () => {
@@ -77,6 +83,35 @@ describe('sign-in page after a reload without a connection', () => {
     // The session cookie is tried at once and the fitter is back on the record form.
     expect(await screen.findByRole('heading', { name: 'Record form' })).toBeInTheDocument();
     expect(mock.callsTo('POST /api/auth/refresh')).toHaveLength(1);
+  });
+
+  it('counts an unanswered server as no connection although the browser says online, and asks it again', async () => {
+    await saveToOutbox(record, owner);
+    setOnline(true);
+    let reachable = false;
+    const mock = mockFetch({
+      'POST /api/auth/refresh': () => {
+        if (!reachable) throw new TypeError('Failed to fetch');
+        return { body: makeSession(testUsers.technician) };
+      },
+    });
+    // As on a reload: the app tried the session cookie first and got no answer.
+    expect(await refreshSession()).toBe(false);
+    vi.useFakeTimers({ shouldAdvanceTime: true });
+    renderSignIn();
+    const notice = await screen.findByTestId('offline-notice');
+    expect(notice).toHaveTextContent('cannot open the record form until it returns');
+
+    // Still out of reach at the next try: the notice stays.
+    await act(() => vi.advanceTimersByTimeAsync(SERVER_RETRY_MS));
+    expect(mock.callsTo('POST /api/auth/refresh')).toHaveLength(2);
+    expect(screen.getByTestId('offline-notice')).toBeInTheDocument();
+
+    // The server answers again, with no 'online' event from the browser: back on the form.
+    reachable = true;
+    await act(() => vi.advanceTimersByTimeAsync(SERVER_RETRY_MS));
+    expect(await screen.findByRole('heading', { name: 'Record form' })).toBeInTheDocument();
+    expect(mock.callsTo('POST /api/auth/refresh')).toHaveLength(3);
   });
 
   it('online, tells the user that records kept on the device go once they sign in', async () => {

@@ -2,6 +2,7 @@ import { useEffect, useState } from 'react';
 import { Alert, Text } from '@mantine/core';
 import { IconCloudOff, IconInfoCircle } from '@tabler/icons-react';
 import { refreshSession } from '../../../lib/api-client';
+import { SERVER_RETRY_MS } from '../../../lib/server-reach';
 import { listOutbox, subscribeOutbox } from '../offline/outbox-store';
 import {
   ownerName,
@@ -68,6 +69,14 @@ export function OutboxSignInNotice({ returnsTo }: { returnsTo: string }) {
     window.addEventListener('online', back);
     return () => window.removeEventListener('online', back);
   }, []);
+
+  // The browser may never say the connection is back (its link never went, only the server
+  // did): while the server is out of reach, ask it again every few seconds.
+  useEffect(() => {
+    if (online) return;
+    const timer = window.setInterval(() => void refreshSession(), SERVER_RETRY_MS);
+    return () => window.clearInterval(timer);
+  }, [online]);
 
   const total = [...summary.others, summary.unassignedWaiting].reduce(
     (w, o) => ({ records: w.records + o.records, photos: w.photos + o.photos }),

@@ -1,6 +1,7 @@
 import { useCallback, useEffect, useState } from 'react';
 import { createFieldRecord } from '../api/create-field-record';
 import { uploadFieldPhoto } from '../api/upload-field-photo';
+import { SERVER_RETRY_MS, subscribeServerBack } from '../../../lib/server-reach';
 import { flushOutbox, type SendPhoto, type SendRecord } from './outbox-sender';
 import {
   claimOutboxEntries,
@@ -10,6 +11,9 @@ import {
   type OutboxOwner,
 } from './outbox-store';
 import { summariseOutbox, type OutboxSummary } from './outbox-summary';
+
+/** Retries of waiting work: a few times a minute, not a load on the server. */
+const RETRY_EVERY_MS = 6 * SERVER_RETRY_MS;
 
 /** Everything the device holds; nothing when it has no IndexedDB (a private window, a test). */
 async function listAll(): Promise<OutboxEntry[]> {
@@ -51,9 +55,26 @@ export function useDeviceOutbox(
   useEffect(() => {
     const flush = () => void flushOutbox(userId, send, sendPhoto).catch(() => undefined);
     window.addEventListener('online', flush);
+    // The browser's 'online' event misses a server that was out of reach on a live link.
+    const unsubscribe = subscribeServerBack(flush);
     if (navigator.onLine) flush();
-    return () => window.removeEventListener('online', flush);
+    return () => {
+      window.removeEventListener('online', flush);
+      unsubscribe();
+    };
   }, [userId, send, sendPhoto]);
+
+  // While some of this user's work waits, try again now and then: nothing else may call the
+  // server (and so notice it is back) while they stay on one screen.
+  const waits = summary.mine.records + summary.mine.photos > 0;
+  useEffect(() => {
+    if (!waits) return;
+    const timer = window.setInterval(
+      () => void flushOutbox(userId, send, sendPhoto).catch(() => undefined),
+      RETRY_EVERY_MS,
+    );
+    return () => window.clearInterval(timer);
+  }, [waits, userId, send, sendPhoto]);
 
   const claimUnassigned = useCallback(
     async (ids: readonly string[]) => {

@@ -1,4 +1,5 @@
 import { useSyncExternalStore } from 'react';
+import { useServerUnreachable } from '../../../lib/server-reach';
 
 function subscribe(onChange: () => void): () => void {
   window.addEventListener('online', onChange);
@@ -9,11 +10,16 @@ function subscribe(onChange: () => void): () => void {
   };
 }
 
-/** Whether the browser says it has a connection, kept current. */
+/**
+ * Whether the server can be reached, kept current: the browser says it has a connection and the
+ * last call to the server was answered (lib/server-reach says why both are needed).
+ */
 export function useOnline(): boolean {
-  return useSyncExternalStore(
+  const linked = useSyncExternalStore(
     subscribe,
     () => navigator.onLine,
     () => true,
   );
+  const unreachable = useServerUnreachable();
+  return linked && !unreachable;
 }
