@@ -5,6 +5,7 @@ import {
   inForceSheet as sheet,
   makeRegister,
   registerPositionId as positionId,
+  springTarget,
   testUsers,
   type InForce,
 } from '../../../testing/fixtures';
@@ -47,7 +48,7 @@ const signedRecord: FieldRecord = {
       target: 0.124,
       unit: 'mm',
       dimension: 'length',
-      tolerance: null,
+      tolerance: springTarget(0.124).tolerance,
       asFoundVerdict: null,
       asLeftVerdict: {
         status: 'in',
@@ -122,6 +123,8 @@ describe('a position’s field page', () => {
     const values = screen.getByRole('table', { name: 'Values measured' });
     expect(values).toHaveTextContent('Main spring length as set');
     expect(values).toHaveTextContent('124.3 mm');
+    // The band it is judged by, beside the target.
+    expect(values).toHaveTextContent('± 0.5 mm');
     expect(values).toHaveTextContent('within');
     expect(screen.getByRole('button', { name: /Print the record of 2026-11-30/ })).toBeEnabled();
   });

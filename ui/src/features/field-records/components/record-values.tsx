@@ -1,5 +1,11 @@
 import { Table, Text } from '@mantine/core';
-import { readingPrecision, settingPrecision, toDisplay, type Dimension } from '@holdfast/calc';
+import {
+  readingPrecision,
+  settingPrecision,
+  toDisplay,
+  toleranceText,
+  type Dimension,
+} from '@holdfast/calc';
 import type { FieldMeasurement } from '@holdfast/shared';
 
 /**
@@ -18,12 +24,13 @@ export function RecordValues({ measurements }: { measurements: readonly FieldMea
   const measured = measurements.filter((m) => m.asFound !== null || m.asLeft !== null);
   if (measured.length === 0) return <Text size="sm">No value measured.</Text>;
   return (
-    <Table.ScrollContainer minWidth={420}>
+    <Table.ScrollContainer minWidth={500}>
       <Table fz="sm" verticalSpacing={2} withRowBorders={false} aria-label="Values measured">
         <Table.Thead>
           <Table.Tr>
             <Table.Th>Value</Table.Th>
             <Table.Th ta="right">Target</Table.Th>
+            <Table.Th>Tolerance</Table.Th>
             <Table.Th ta="right" style={{ whiteSpace: 'nowrap' }}>
               As found
             </Table.Th>
@@ -37,6 +44,9 @@ export function RecordValues({ measurements }: { measurements: readonly FieldMea
               <Table.Td>{m.label}</Table.Td>
               <Table.Td ta="right" style={{ whiteSpace: 'nowrap' }}>
                 {shown(m, m.target, 'target')}
+              </Table.Td>
+              <Table.Td style={{ whiteSpace: 'nowrap' }}>
+                {m.tolerance ? toleranceText(m.tolerance, m.dimension as Dimension) : '—'}
               </Table.Td>
               <Table.Td ta="right" style={{ whiteSpace: 'nowrap' }}>
                 {shown(m, m.asFound, 'reading')}
