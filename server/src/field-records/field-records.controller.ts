@@ -40,9 +40,6 @@ import { FieldRecordsService } from './field-records.service.js';
 import { FieldRecordSigningService } from './field-record-signing.service.js';
 import { InspectionScheduleService } from './inspection-schedule.service.js';
 
-/** Who records field work: technicians (fitters) and engineers (checkers inherit). */
-const RECORDERS = fieldRecorders;
-
 @ApiTags('field-records')
 @ApiBearerAuth()
 @Controller()
@@ -74,7 +71,7 @@ export class FieldRecordsController {
   }
 
   @Post(apiRoutes.fieldRecords.create.path)
-  @Roles(...RECORDERS)
+  @Roles(...fieldRecorders)
   @ApiBodySchema(createFieldRecordSchema)
   async create(
     @CurrentUser() user: AuthUser,
@@ -93,7 +90,7 @@ export class FieldRecordsController {
   }
 
   @Patch(apiRoutes.fieldRecords.update.path)
-  @Roles(...RECORDERS)
+  @Roles(...fieldRecorders)
   @ApiBodySchema(updateFieldRecordSchema)
   update(
     @CurrentUser() user: AuthUser,
@@ -105,7 +102,7 @@ export class FieldRecordsController {
 
   @Post(apiRoutes.fieldRecords.sign.path)
   @HttpCode(200)
-  @Roles(...RECORDERS)
+  @Roles(...fieldRecorders)
   sign(
     @CurrentUser() user: AuthUser,
     @Param('id', UuidParamPipe) id: string,
@@ -133,7 +130,7 @@ export class FieldRecordsController {
 
   @Post(apiRoutes.fieldRecords.upload.path)
   @HttpCode(201)
-  @Roles(...RECORDERS)
+  @Roles(...fieldRecorders)
   @FileUpload()
   uploadPhoto(
     @CurrentUser() user: AuthUser,

@@ -2,6 +2,7 @@ import { useCallback, useEffect, useState } from 'react';
 import type { CreateFieldRecordInput } from '@holdfast/shared';
 import { createFieldRecord } from '../api/create-field-record';
 import { uploadFieldPhoto } from '../api/upload-field-photo';
+import { useOnline } from './use-online';
 import { flushOutbox, type SendPhoto, type SendRecord } from './outbox-sender';
 import {
   addOutboxPhotos,
@@ -17,7 +18,8 @@ import {
 /**
  * The records `user` kept on this device and what has become of them, kept current. Sends what
  * is theirs when the page opens, when the browser says the connection is back, and after each
- * save; other people's entries are neither listed nor sent here.
+ * save; other people's entries are neither listed nor sent here. `online` is `useOnline`: a
+ * server that did not answer counts as no connection, though the browser's link is up.
  */
 export function useOutbox(
   user: OutboxOwner,
@@ -26,7 +28,7 @@ export function useOutbox(
 ) {
   const { id: userId, displayName, initials } = user;
   const [entries, setEntries] = useState<OutboxEntry[]>([]);
-  const [online, setOnline] = useState(() => navigator.onLine);
+  const online = useOnline();
 
   useEffect(() => {
     let live = true;
@@ -44,18 +46,10 @@ export function useOutbox(
   }, [userId]);
 
   useEffect(() => {
-    const goOnline = () => {
-      setOnline(true);
-      void flushOutbox(userId, send, sendPhoto);
-    };
-    const goOffline = () => setOnline(false);
+    const goOnline = () => void flushOutbox(userId, send, sendPhoto);
     window.addEventListener('online', goOnline);
-    window.addEventListener('offline', goOffline);
-    if (navigator.onLine) void flushOutbox(userId, send, sendPhoto);
-    return () => {
-      window.removeEventListener('online', goOnline);
-      window.removeEventListener('offline', goOffline);
-    };
+    if (navigator.onLine) goOnline();
+    return () => window.removeEventListener('online', goOnline);
   }, [userId, send, sendPhoto]);
 
   const save = useCallback(
