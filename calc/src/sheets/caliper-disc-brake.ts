@@ -134,7 +134,7 @@ export const caliperDiscBrakeSheet: SheetTypeDefinition<'caliper-disc-brake'> = 
   id: 'caliper-disc-brake',
   title: 'Caliper disc brake',
   description:
-    'Spring-applied caliper disc brake (demo: on a hoist rope drum): clamp force, effective radius (uniform wear), faces and calipers, torque over the friction band and at worn pads, pad duty, stop, heat, release and setting table.',
+    'Spring-applied caliper disc brake (as on a hoist rope drum or a drive shaft): clamp force, effective radius (uniform wear), faces and calipers, torque over the friction band and at worn pads, pad duty, stop, heat, release and setting table.',
   sections: CALIPER_SECTIONS,
   fields: CALIPER_FIELDS,
   fieldCard: CALIPER_FIELD_CARD,

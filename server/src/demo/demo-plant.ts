@@ -15,6 +15,7 @@ export const demoMachines = [
       { tag: 'MH-B1', description: 'Main hoist, brake 1 (high-speed shaft)', motion: 'hoist' },
       { tag: 'MH-B2', description: 'Main hoist, brake 2 (high-speed shaft)', motion: 'hoist' },
       { tag: 'AH-B1', description: 'Auxiliary hoist brake', motion: 'auxiliary-hoist' },
+      { tag: 'MH-DB', description: 'Main hoist rope drum, emergency disc brake', motion: 'hoist' },
     ],
   },
   {
@@ -27,16 +28,22 @@ export const demoMachines = [
     ],
   },
   {
+    tag: 'LC-2',
+    name: 'Ladle crane 2, melt shop',
+    kind: 'crane',
+    positions: [
+      {
+        tag: 'DB-1',
+        description: 'Main hoist rope drum, emergency disc brake',
+        motion: 'hoist',
+      },
+    ],
+  },
+  {
     tag: 'CC-4',
     name: 'Coil conveyor 4',
     kind: 'conveyor',
     positions: [{ tag: 'DR-B1', description: 'Drive station brake', motion: 'conveyor' }],
-  },
-  {
-    tag: 'RT-3',
-    name: 'Run-out roller table 3',
-    kind: 'mill-auxiliary',
-    positions: [{ tag: 'DB-1', description: 'Table drive disc brake', motion: 'other' }],
   },
 ] as const;
 
@@ -247,23 +254,23 @@ export const demoSheets: DemoSheet[] = [
     ],
   },
   {
-    title: 'Coil conveyor 4 drive station brake',
-    machine: 'CC-4',
-    position: 'DR-B1',
+    title: 'Ladle crane 1 main hoist rope-drum emergency brake',
+    machine: 'LC-1',
+    position: 'MH-DB',
     sheetType: 'caliper-disc-brake',
     owner: E,
     revisions: [
       {
         state: 'draft',
         author: E,
-        changeNote: 'First issue; thruster data sheet attached.',
+        changeNote: 'First issue.',
         daysAgo: 2,
       },
     ],
   },
   {
-    title: 'Run-out roller table 3 drive disc brake',
-    machine: 'RT-3',
+    title: 'Ladle crane 2 main hoist rope-drum emergency brake',
+    machine: 'LC-2',
     position: 'DB-1',
     sheetType: 'caliper-disc-brake',
     owner: E2,
