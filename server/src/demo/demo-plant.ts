@@ -246,8 +246,10 @@ export const demoSheets: DemoSheet[] = [
           {
             by: C2,
             body: 'Please attach the thruster data sheet you used.',
-            reply: { by: E, body: 'Attached to the revision.' },
-            resolved: true,
+            reply: {
+              by: E,
+              body: 'It goes with the next submission, with the corrected wheel load.',
+            },
           },
         ],
       },
