@@ -174,6 +174,10 @@ describe('field records', () => {
     );
     // The link opens the position's records screen (the UI's route), not a page that is not there.
     expect(mail.raw).toContain(`/positions/${suite.reg.positionId}/field`);
+    // MH-B1 is on every crane: the subject names the machine and the site too.
+    expect(mail.raw).toContain(
+      'Subject: [Holdfast] MH-B1 on CR-01 (TST): value left out of tolerance',
+    );
     expect(mail.to).toEqual(
       expect.arrayContaining([
         'engineer@holdfast.test',
@@ -277,7 +281,13 @@ describe('field records', () => {
     expect(await post('technician', `/api/field-records/${fitter.id}/countersign`)).toBe(403);
     const due = await suite.ctx.request('GET', '/api/field-records/due', { as: 'viewer' });
     expect(due.body.awaitingCountersign).toEqual([
-      expect.objectContaining({ recordId: fitter.id, positionId: suite.reg.positionId }),
+      expect.objectContaining({
+        recordId: fitter.id,
+        positionId: suite.reg.positionId,
+        positionTag: 'MH-B1',
+        machineTag: 'CR-01',
+        siteCode: 'TST',
+      }),
     ]);
     expect(await post('viewer', `/api/field-records/${fitter.id}/countersign`)).toBe(200);
   });
@@ -441,6 +451,15 @@ describe('field records', () => {
     await approve(suite.ctx, next.body.id);
     const got = await suite.ctx.request('GET', `/api/field-records/${b.id}`, { as: 'technician' });
     expect(got.body.flags).toEqual({ superseded: true, underReview: false });
+    expect(got.body).toMatchObject({ positionTag: 'MH-B1', machineTag: 'CR-01', siteCode: 'TST' });
+    const listed = await suite.ctx.request(
+      'GET',
+      `/api/field-records?positionId=${suite.reg.positionId}`,
+      { as: 'technician' },
+    );
+    expect(listed.body.items).toContainEqual(
+      expect.objectContaining({ id: b.id, machineTag: 'CR-01', siteCode: 'TST' }),
+    );
   });
 
   it('due and overdue lists, and a reminder sent once ahead of the due date', async () => {
@@ -471,6 +490,7 @@ describe('field records', () => {
       suite.ctx.smtp.mails.find((m) => m.raw.includes('inspection due')),
     );
     expect(reminder.raw).toContain(`/positions/${suite.reg.positionId}/field`);
+    expect(reminder.raw).toContain('Subject: [Holdfast] MH-B1 on CR-01 (TST): inspection due');
     await new Promise((r) => setTimeout(r, 1500));
     expect(suite.ctx.smtp.mails.filter((m) => m.raw.includes('inspection due'))).toHaveLength(1);
     const later = await schedule.due(

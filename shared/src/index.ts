@@ -23,3 +23,4 @@ export * from './field-records/field-record.schema.js';
 export * from './field-records/schedule.schema.js';
 export * from './field-records/verify-record.schema.js';
 export * from './app/screen-paths.js';
+export * from './field-records/position-place.js';

@@ -1,12 +1,20 @@
-import { positionFieldPath, screenUrl } from '@holdfast/shared';
+import { positionFieldPath, screenUrl, type PositionPlace } from '@holdfast/shared';
 import type { MailMessage } from '../mail/mailer.js';
 
 export interface RecordAbout {
   recordId: string;
   positionId: string;
-  positionTag: string;
+  place: PositionPlace;
   documentNumber: string;
   revisionLabel: string;
+}
+
+/**
+ * A position named in a mail, e.g. "DB-1 on LC-2 (NRW)": the mail goes to everyone on the site and
+ * tags repeat across machines. Plain ASCII words, so the subject line needs no encoding.
+ */
+function placeWords(p: PositionPlace): string {
+  return `${p.positionTag} on ${p.machineTag} (${p.siteCode})`;
 }
 
 /** To the sheet's owner and the plant engineers: a value was left outside its tolerance. */
@@ -19,9 +27,9 @@ export function outOfToleranceMail(
 ): MailMessage {
   return {
     to,
-    subject: `[Holdfast] ${a.positionTag}: value left out of tolerance`,
+    subject: `[Holdfast] ${placeWords(a.place)}: value left out of tolerance`,
     text: [
-      `${signer} signed a field record on ${a.positionTag} (set to ${a.documentNumber} rev. ${a.revisionLabel}) with values left outside their tolerance:`,
+      `${signer} signed a field record on ${placeWords(a.place)} (set to ${a.documentNumber} rev. ${a.revisionLabel}) with values left outside their tolerance:`,
       '',
       ...lines.map((l) => `- ${l}`),
       '',
@@ -34,14 +42,14 @@ export function outOfToleranceMail(
 /** Ahead of a due inspection. */
 export function inspectionDueMail(
   base: string,
-  a: { positionId: string; positionTag: string; dueOn: string },
+  a: { positionId: string; place: PositionPlace; dueOn: string },
   to: string[],
 ): MailMessage {
   return {
     to,
-    subject: `[Holdfast] ${a.positionTag}: inspection due ${a.dueOn}`,
+    subject: `[Holdfast] ${placeWords(a.place)}: inspection due ${a.dueOn}`,
     text: [
-      `The next inspection of brake position ${a.positionTag} is due on ${a.dueOn}.`,
+      `The next inspection of brake position ${placeWords(a.place)} is due on ${a.dueOn}.`,
       '',
       `Open the position: ${screenUrl(base, positionFieldPath(a.positionId))}`,
     ].join('\n'),

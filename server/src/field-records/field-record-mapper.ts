@@ -7,6 +7,7 @@ import type {
   FieldTarget,
   PersonRef,
 } from '@holdfast/shared';
+import type { PositionPlace } from '@holdfast/shared';
 import type { FieldRecordMeasurementRow } from '@holdfast/db';
 import type { RecordRevision, StoredFieldRecord } from './field-records.repository.js';
 import { fieldTargets, judgeMeasurement } from '../calc/field-targets.js';
@@ -55,10 +56,13 @@ function measurementOf(
   };
 }
 
+/** What a record shows for its place if its position row were gone (the schema forbids it). */
+export const NO_PLACE: PositionPlace = { siteCode: '', machineTag: '', positionTag: '' };
+
 export function toFieldRecord(
   s: StoredFieldRecord,
   rev: RecordRevision,
-  positionTag: string,
+  place: PositionPlace,
   people: People,
 ): FieldRecord {
   const r = s.record;
@@ -77,7 +81,9 @@ export function toFieldRecord(
   return {
     id: r.id,
     positionId: r.positionId,
-    positionTag,
+    positionTag: place.positionTag,
+    machineTag: place.machineTag,
+    siteCode: place.siteCode,
     revisionId: r.revisionId,
     sheetId: rev.sheetId,
     documentNumber: rev.documentNumber,

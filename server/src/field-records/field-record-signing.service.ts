@@ -9,7 +9,7 @@ import { UnitOfWork } from '../database/unit-of-work.js';
 import { OutboxService } from '../outbox/outbox.service.js';
 import { newVerificationCode } from '../revisions/revision-codes.js';
 import { checkLabels, outOfToleranceAsLeft } from '../calc/field-targets.js';
-import { toFieldRecord } from './field-record-mapper.js';
+import { NO_PLACE, toFieldRecord } from './field-record-mapper.js';
 import { FieldRecordsRepository } from './field-records.repository.js';
 import { FieldRecordSigningRepository } from './field-record-signing.repository.js';
 import { FieldRecordsService, invalid, lockOwnDraft } from './field-records.service.js';
@@ -53,7 +53,7 @@ export class FieldRecordSigningService {
       const row = await lockOwnDraft(this.repo, tx, user, id);
       const stored = (await this.repo.load(id, tx))!;
       const rev = (await this.repo.revision(row.revisionId, tx))!;
-      const record = toFieldRecord(stored, rev, '', new Map());
+      const record = toFieldRecord(stored, rev, NO_PLACE, new Map());
       const out = outOfToleranceAsLeft(record.measurements);
       const missing = out.filter((i) => record.measurements[i]!.reason.trim() === '');
       const issues: FieldIssue[] = [
@@ -93,7 +93,7 @@ export class FieldRecordSigningService {
         after: { status: 'signed', outOfTolerance: out.length },
       });
       if (out.length > 0) {
-        const tag = (await this.repo.positionTag(row.positionId, tx)) ?? '';
+        const place = (await this.repo.positionPlace(row.positionId, tx)) ?? NO_PLACE;
         const lines = out.map((i) => {
           const m = record.measurements[i]!;
           const v = m.asLeftVerdict!;
@@ -106,7 +106,7 @@ export class FieldRecordSigningService {
             {
               recordId: id,
               positionId: row.positionId,
-              positionTag: tag,
+              place,
               documentNumber: rev.documentNumber,
               revisionLabel: rev.label,
             },

@@ -7,7 +7,7 @@ import type {
   FieldRecordRow,
   FieldRecordSignatureRow,
 } from '@holdfast/db';
-import type { FieldCheckInput, FieldMeasurement } from '@holdfast/shared';
+import type { FieldCheckInput, FieldMeasurement, PositionPlace } from '@holdfast/shared';
 import { Database } from '../database/database.js';
 import { on, type Tx } from '../database/unit-of-work.js';
 
@@ -74,14 +74,16 @@ export class FieldRecordsRepository {
     return row ? { ...row, underReview: Boolean(row.underReview) } : undefined;
   }
 
-  async positionTag(positionId: string, tx?: Tx): Promise<string | undefined> {
+  /** The position's tag with its machine's and site's: tags repeat across machines. */
+  async positionPlace(positionId: string, tx?: Tx): Promise<PositionPlace | undefined> {
     const db = on(this.db, tx);
-    const row = await db
-      .selectFrom('brakePositions')
-      .select('tag')
-      .where('id', '=', positionId)
+    return db
+      .selectFrom('brakePositions as p')
+      .innerJoin('machines as m', 'm.id', 'p.machineId')
+      .innerJoin('sites as s', 's.id', 'm.siteId')
+      .select(['p.tag as positionTag', 'm.tag as machineTag', 's.code as siteCode'])
+      .where('p.id', '=', positionId)
       .executeTakeFirst();
-    return row?.tag;
   }
 
   async load(id: string, tx?: Tx): Promise<StoredFieldRecord | undefined> {

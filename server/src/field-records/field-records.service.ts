@@ -14,7 +14,7 @@ import { badRequest, conflict, forbidden, notFound } from '../common/errors/api-
 import { type Tx, UnitOfWork } from '../database/unit-of-work.js';
 import { UsersRepository } from '../users/users.repository.js';
 import { canReadContent } from '../revisions/revision-access.js';
-import { toFieldRecord } from './field-record-mapper.js';
+import { NO_PLACE, toFieldRecord } from './field-record-mapper.js';
 import {
   FieldRecordsRepository,
   type RecordRevision,
@@ -75,9 +75,9 @@ export class FieldRecordsService {
 
   private async present(s: StoredFieldRecord, tx?: Tx): Promise<FieldRecord> {
     const rev = (await this.repo.revision(s.record.revisionId, tx))!;
-    const tag = (await this.repo.positionTag(s.record.positionId, tx)) ?? '';
+    const place = await this.repo.positionPlace(s.record.positionId, tx);
     const people = await this.users.people([s.record.createdBy], tx);
-    return toFieldRecord(s, rev, tag, people);
+    return toFieldRecord(s, rev, place ?? NO_PLACE, people);
   }
 
   async get(id: string): Promise<FieldRecord> {
@@ -92,6 +92,8 @@ export class FieldRecordsService {
       id: r.id,
       positionId: r.positionId,
       positionTag: r.positionTag,
+      machineTag: r.machineTag,
+      siteCode: r.siteCode,
       revisionId: r.revisionId,
       documentNumber: r.documentNumber,
       revisionLabel: r.revisionLabel,

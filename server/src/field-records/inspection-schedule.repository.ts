@@ -114,6 +114,8 @@ export class InspectionScheduleRepository {
     return this.db
       .selectFrom('fieldRecords as f')
       .innerJoin('brakePositions as p', 'p.id', 'f.positionId')
+      .innerJoin('machines as m', 'm.id', 'p.machineId')
+      .innerJoin('sites as s', 's.id', 'm.siteId')
       .innerJoin('fieldRecordSignatures as g', (j) =>
         j.onRef('g.recordId', '=', 'f.id').on('g.kind', '=', 'technician'),
       )
@@ -121,6 +123,8 @@ export class InspectionScheduleRepository {
         'f.id as recordId',
         'f.positionId',
         'p.tag as positionTag',
+        'm.tag as machineTag',
+        's.code as siteCode',
         'f.performedAt',
         'f.outOfTolerance',
       ])

@@ -101,6 +101,8 @@ export class InspectionScheduleService {
         recordId: c.recordId,
         positionId: c.positionId,
         positionTag: c.positionTag,
+        machineTag: c.machineTag,
+        siteCode: c.siteCode,
         performedAt: c.performedAt.toISOString(),
         outOfTolerance: c.outOfTolerance,
       })),
@@ -174,7 +176,11 @@ export class InspectionScheduleService {
           trx,
           inspectionDueMail(
             this.config.settings.PUBLIC_URL,
-            { positionId: r.positionId, positionTag: r.positionTag, dueOn },
+            {
+              positionId: r.positionId,
+              place: { siteCode: r.siteCode, machineTag: r.machineTag, positionTag: r.positionTag },
+              dueOn,
+            },
             to,
           ),
         );

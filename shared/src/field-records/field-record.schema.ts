@@ -186,6 +186,9 @@ export const fieldRecordSchema = z.object({
   id: z.string().uuid(),
   positionId: z.string().uuid(),
   positionTag: z.string(),
+  /** The machine and site of the position: tags repeat across machines. */
+  machineTag: z.string(),
+  siteCode: z.string(),
   revisionId: z.string().uuid(),
   sheetId: z.string().uuid(),
   documentNumber: z.string(),
@@ -220,6 +223,8 @@ export const fieldRecordSummarySchema = fieldRecordSchema.pick({
   id: true,
   positionId: true,
   positionTag: true,
+  machineTag: true,
+  siteCode: true,
   revisionId: true,
   documentNumber: true,
   revisionLabel: true,

@@ -103,6 +103,8 @@ export const dueInspectionsSchema = z.object({
       recordId: z.string().uuid(),
       positionId: z.string().uuid(),
       positionTag: z.string(),
+      machineTag: z.string(),
+      siteCode: z.string(),
       performedAt: isoDateSchema,
       outOfTolerance: z.boolean(),
     }),

@@ -60,6 +60,8 @@ describe('Field work in the side navigation', () => {
       id: '1c2d3e4f-5a6b-4c7d-8e9f-0a1b2c3d4e5f',
       positionId,
       positionTag: 'HB-2',
+      machineTag: 'CR-07',
+      siteCode: 'NW',
       revisionId: '2d3e4f5a-6b7c-4d8e-9f0a-1b2c3d4e5f60',
       documentNumber: 'BRK-0007',
       revisionLabel: 'B',
@@ -86,7 +88,17 @@ describe('Field work in the side navigation', () => {
               nextDue: { date: '2026-11-01T00:00:00.000Z', meterHours: null, overdue: true },
             },
           ],
-          awaitingCountersign: [],
+          awaitingCountersign: [
+            {
+              recordId: '3e4f5a6b-7c8d-4e9f-8a1b-2c3d4e5f6071',
+              positionId,
+              positionTag: 'HB-1',
+              machineTag: 'CR-05',
+              siteCode: 'NW',
+              performedAt: '2026-11-28T10:00:00.000Z',
+              outOfTolerance: false,
+            },
+          ],
         },
       },
       'GET /api/field-records': (req) => ({
@@ -103,8 +115,14 @@ describe('Field work in the side navigation', () => {
       `/positions/${positionId}/field`,
     );
     expect(due).toHaveTextContent('overdue');
+    // Tags like HB-1 repeat on every crane: each line names the machine and site as well.
+    expect(due).toHaveTextContent(
+      'NW · CR-05 · HB-1: record of 2026-11-28 awaits your countersignature',
+    );
     const drafts = screen.getByRole('region', { name: 'Records not yet signed' });
-    expect(await within(drafts).findByRole('link', { name: 'HB-2' })).toBeInTheDocument();
+    expect(
+      await within(drafts).findByRole('link', { name: 'NW · CR-07 · HB-2' }),
+    ).toBeInTheDocument();
     expect(drafts).toHaveTextContent('Periodic inspection · BRK-0007 rev. B');
     expect(drafts).toHaveTextContent('out of tolerance');
     const signed = screen.getByRole('region', { name: 'Signed, awaiting countersignature' });

@@ -30,6 +30,8 @@ const signedRecord: FieldRecord = {
   id: '6f708192-a3b4-4cd5-8e6f-708192a3b4c5',
   positionId,
   positionTag: 'MH-B1',
+  machineTag: 'CR-02',
+  siteCode: 'XS',
   revisionId: brakeRev,
   sheetId: '5e6f7081-92a3-4ebf-8031-4c5d6e7f8091',
   documentNumber: 'XS-0001',

@@ -1,6 +1,6 @@
 import { Anchor, Badge, Paper, Stack, Text, Title } from '@mantine/core';
 import { Link } from 'react-router-dom';
-import { positionFieldPath } from '@holdfast/shared';
+import { positionFieldPath, positionPlaceText } from '@holdfast/shared';
 import type { DueInspection } from '@holdfast/shared';
 import { useDueInspections } from '../api/get-due-inspections';
 import { isoDay } from '../../../lib/dates';
@@ -16,7 +16,7 @@ function Line({ d }: { d: DueInspection }) {
   return (
     <Text size="sm" component="div">
       <Anchor component={Link} to={positionFieldPath(d.positionId)} underline="always">
-        {d.siteCode} · {d.machineTag} · {d.positionTag}
+        {positionPlaceText(d)}
       </Anchor>{' '}
       {dueText(d)}
       {d.nextDue.overdue ? (
@@ -53,7 +53,7 @@ export function DueInspectionsPanel() {
         {awaitingCountersign.map((r) => (
           <Text size="sm" key={r.recordId}>
             <Anchor component={Link} to={positionFieldPath(r.positionId)} underline="always">
-              {r.positionTag}
+              {positionPlaceText(r)}
             </Anchor>
             : record of {isoDay(r.performedAt)} awaits your countersignature
             {r.outOfTolerance ? ' (out of tolerance)' : ''}

@@ -1,6 +1,11 @@
 import { Anchor, Badge, Paper, Stack, Text, Title } from '@mantine/core';
 import { Link } from 'react-router-dom';
-import { positionFieldPath, fieldRecordKindLabels, type FieldRecordStatus } from '@holdfast/shared';
+import {
+  positionFieldPath,
+  positionPlaceText,
+  fieldRecordKindLabels,
+  type FieldRecordStatus,
+} from '@holdfast/shared';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import { useFieldRecords } from '../api/get-field-records';
 import { isoDay } from '../../../lib/dates';
@@ -34,7 +39,7 @@ export function OpenRecords({ status }: { status: 'draft' | 'signed' }) {
           {records.data.items.map((r) => (
             <Text size="sm" component="li" key={r.id}>
               <Anchor component={Link} to={positionFieldPath(r.positionId)} underline="always">
-                {r.positionTag}
+                {positionPlaceText(r)}
               </Anchor>{' '}
               {isoDay(r.performedAt)} · {fieldRecordKindLabels[r.kind]} · {r.documentNumber} rev.{' '}
               {r.revisionLabel}
