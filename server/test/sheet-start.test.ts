@@ -147,4 +147,29 @@ describe('starting a sheet honestly', () => {
     expect(refused.status).toBe(400);
     expect(refused.body.error.fields.length).toBe(rev.unconfirmed.length);
   });
+
+  it('takes the criteria set of the drive the brake is on, unless the engineer names one', async () => {
+    const conveyor = await ctx.request('POST', '/api/register/positions', {
+      as: 'engineer',
+      body: { machineId: reg.machineId, tag: 'CV-B1', description: 'Conveyor', motion: 'conveyor' },
+    });
+    expect(conveyor.status, conveyor.text).toBe(201);
+    const setOf = async (positionId: string, sheetType: string, criteriaSetId?: string) => {
+      const res = await ctx.request('POST', '/api/sheets', {
+        as: 'engineer',
+        body: { title: 'Drive brake', positionId, sheetType, criteriaSetId },
+      });
+      expect(res.status, res.text).toBe(201);
+      return res.body.criteriaSetId as string;
+    };
+    // A caliper fits any drive: on a hoist (the register's MH-B1) the hoist set, on a conveyor
+    // the general one. A shoe-brake type says its drive itself, wherever it is placed.
+    expect(await setOf(reg.positionId, 'caliper-disc-brake')).toBe('crane-hoist');
+    expect(await setOf(conveyor.body.id, 'caliper-disc-brake')).toBe('general-industry');
+    expect(await setOf(conveyor.body.id, 'hoist-shoe-brake')).toBe('crane-hoist');
+    expect(await setOf(reg.positionId, 'travel-shoe-brake')).toBe('travel-drive');
+    expect(await setOf(reg.positionId, 'caliper-disc-brake', 'general-industry')).toBe(
+      'general-industry',
+    );
+  });
 });

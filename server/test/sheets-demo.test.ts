@@ -35,6 +35,23 @@ describe('demo plant seed', () => {
     expect(await snapshot()).toEqual(before);
   });
 
+  it('holds each brake to the criteria of its drive: the rope-drum calipers to the hoist set', async () => {
+    const rows = await suite.ctx.db
+      .selectFrom('sheets as s')
+      .innerJoin('brakePositions as p', 'p.id', 's.positionId')
+      .select(['s.sheetType', 'p.motion', 's.criteriaSetId'])
+      .execute();
+    const seen = new Set(rows.map((r) => `${r.sheetType} on ${r.motion}: ${r.criteriaSetId}`));
+    expect([...seen].sort()).toEqual([
+      'caliper-disc-brake on hoist: crane-hoist',
+      'disc-spring-stack on hoist: crane-hoist',
+      'hoist-shoe-brake on auxiliary-hoist: crane-hoist',
+      'hoist-shoe-brake on hoist: crane-hoist',
+      'travel-shoe-brake on bridge: travel-drive',
+      'travel-shoe-brake on trolley: travel-drive',
+    ]);
+  });
+
   /** Every public table's row count and newest change: what a second run must leave alone. */
   async function snapshot() {
     const { rows } = await sql<{ tablename: string }>`

@@ -46,18 +46,28 @@ export function shippedCriteriaSets(): CriteriaSet[] {
   return [...CRITERIA_SETS];
 }
 
+/** Motions whose brakes the crane sets govern when the sheet type does not say (a caliper). */
+const MOTION_SET: Readonly<Record<string, 'hoist' | 'travel'>> = {
+  hoist: 'hoist',
+  'auxiliary-hoist': 'hoist',
+  trolley: 'travel',
+  bridge: 'travel',
+};
+
 /**
- * The criteria set a new sheet of this type uses unless the engineer picks another: hoist brakes
- * the hoist set, travel brakes the travel-drive set, the rest the general one.
+ * The criteria set a new sheet uses unless the engineer picks another: a shoe brake on a hoist the
+ * hoist set, on a travel drive the travel-drive set; a sheet type that fits any drive (a caliper
+ * disc brake, a disc-spring stack) follows the motion of its brake position, so a caliper on a
+ * hoist rope drum is held to the hoist set; the rest take the general one.
  */
-export function defaultCriteriaSetId(sheetType: string): string {
+export function defaultCriteriaSetId(sheetType: string, motion?: string): string {
   const sets = shippedCriteriaSets();
   if (sets.length === 0) throw new Error('the calculation core ships no criteria sets');
   const prefer = sheetType.startsWith('hoist')
     ? 'hoist'
     : sheetType.startsWith('travel')
       ? 'travel'
-      : 'general';
+      : ((motion === undefined ? undefined : MOTION_SET[motion]) ?? 'general');
   return (sets.find((s) => s.id.includes(prefer)) ?? sets[0]).id;
 }
 

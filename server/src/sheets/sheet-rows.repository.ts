@@ -20,7 +20,14 @@ export class SheetRowsRepository {
       .selectFrom('brakePositions as p')
       .innerJoin('machines as m', 'm.id', 'p.machineId')
       .innerJoin('sites as site', 'site.id', 'm.siteId')
-      .select(['p.id', 'p.tag', 'm.id as machineId', 'm.tag as machineTag', 'site.id as siteId'])
+      .select([
+        'p.id',
+        'p.tag',
+        'p.motion',
+        'm.id as machineId',
+        'm.tag as machineTag',
+        'site.id as siteId',
+      ])
       .where('p.id', '=', positionId)
       .executeTakeFirst();
   }

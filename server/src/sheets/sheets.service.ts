@@ -92,7 +92,8 @@ export class SheetsService {
         throw badRequest('Some fields are not valid.', [
           { path: 'positionId', message: 'no such brake position' },
         ]);
-      const criteriaSetId = input.criteriaSetId ?? defaultCriteriaSetId(input.sheetType);
+      const criteriaSetId =
+        input.criteriaSetId ?? defaultCriteriaSetId(input.sheetType, position.motion);
       if (!(await this.rows.criteriaSetExists(criteriaSetId, tx)))
         throw badRequest('Some fields are not valid.', [
           { path: 'criteriaSetId', message: 'no such criteria set' },
