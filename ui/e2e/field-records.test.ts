@@ -43,6 +43,9 @@ describe.skipIf(skipReason !== null)('field records in the browser', () => {
     await page.setViewportSize({ width: 390, height: 844 });
     await page.goto(`${baseUrl}/field-records/new/${revisionId}`);
     await page.getByRole('heading', { name: 'Settings measured' }).waitFor();
+    // The fitter at the brake sees which one the form is for, not only the sheet's number.
+    await page.getByRole('heading', { level: 1, name: 'Field record · MH-B1' }).waitFor();
+    await page.getByText('Main hoist, brake 1 (high-speed shaft)').waitFor();
 
     await context.setOffline(true);
     await page.getByLabel('Work done').selectOption('periodic-inspection');

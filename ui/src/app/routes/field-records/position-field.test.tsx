@@ -103,6 +103,10 @@ describe('a position’s field page', () => {
       name: 'Record field work: XS-0001 rev. B (shoe brake on a hoist)',
     });
     expect(brake).toHaveAttribute('href', `/field-records/new/${brakeRev}`);
+    // The tag alone does not say which crane: the header names the site, machine and position.
+    expect(screen.getByRole('heading', { level: 1, name: 'Field records · MH-B1' })).toBeVisible();
+    expect(screen.getByText('XS · C-1 Crane 1')).toBeVisible();
+    expect(screen.getByText('Main hoist brake')).toBeVisible();
     expect(
       screen.getByRole('link', { name: /^Record field work: XS-0002 rev\. B/ }),
     ).toHaveAttribute('href', `/field-records/new/${springsRev}`);

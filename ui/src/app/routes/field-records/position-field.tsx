@@ -26,7 +26,7 @@ import {
 import { useFieldForm } from '../../../features/field-records/api/get-field-form';
 import { isoDay } from '../../../lib/dates';
 import { newFieldRecordPath } from '../../../lib/field-work';
-import { findPosition, useRegister } from '../../../features/register/api/get-register';
+import { findPositionPlace, useRegister } from '../../../features/register/api/get-register';
 import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
 
 export const handle: RouteHandle = { title: 'Field records' };
@@ -94,7 +94,8 @@ export function Component() {
   const history = usePositionHistory(positionId);
   const state = usePositionState(positionId);
   const register = useRegister();
-  const position = register.data ? findPosition(register.data, positionId) : undefined;
+  const place = register.data ? findPositionPlace(register.data, positionId) : undefined;
+  const position = place?.position;
   const records = history.data?.items ?? [];
   const tag = position?.tag ?? records[0]?.positionTag;
   // The minimum reserve stroke is a printed target of the revision the brake was last set to
@@ -105,7 +106,12 @@ export function Component() {
   const hasStroke = hasStrokeSeries(form.data?.targets, records);
   const canCountersign = mayCountersign(user.role);
   return (
-    <Page title={tag ? `Field records · ${tag}` : 'Field records'}>
+    <Page
+      title={tag ? `Field records · ${tag}` : 'Field records'}
+      // The tag alone is not enough on site: every crane has its MH-B1.
+      eyebrow={place && `${place.site.code} · ${place.machine.tag} ${place.machine.name}`}
+      description={place?.position.description}
+    >
       <Stack gap="lg">
         {state.isPending && <Skeleton h={60} />}
         {state.isError && <ErrorPanel error={state.error} />}

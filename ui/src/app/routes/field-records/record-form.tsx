@@ -19,6 +19,7 @@ import {
 } from '@holdfast/shared';
 import type { InputValue } from '@holdfast/calc';
 import { Page } from '../../../components/layouts/page';
+import { findPositionPlace, useRegister } from '../../../features/register/api/get-register';
 import { NumberField } from '../../../components/calc/components/unit-field';
 import type { RouteHandle } from '../../../lib/route-handle';
 import { useFieldForm } from '../../../features/field-records/api/get-field-form';
@@ -238,8 +239,17 @@ function RecordForm({ form }: { form: FieldForm }) {
 export function Component() {
   const { revisionId = '' } = useParams();
   const query = useFieldForm(revisionId);
+  const register = useRegister();
+  const positionId = query.data?.positionId;
+  const place =
+    register.data && positionId ? findPositionPlace(register.data, positionId) : undefined;
   return (
-    <Page title="Field record">
+    <Page
+      title={place ? `Field record · ${place.position.tag}` : 'Field record'}
+      // The fitter at the brake confirms it is this one: every crane has its MH-B1.
+      eyebrow={place && `${place.site.code} · ${place.machine.tag} ${place.machine.name}`}
+      description={place?.position.description}
+    >
       {query.isPending && <Skeleton h={320} />}
       {query.isError && <FormUnavailable error={query.error} />}
       {query.data && <RecordForm form={query.data} />}
