@@ -12,10 +12,11 @@ describe('SheetRowsRepository', () => {
   const rows = () => s.ctx.app.get(SheetRowsRepository);
   const units = () => s.ctx.app.get(UnitOfWork);
 
-  it('finds a position with its machine and site; nothing for an unknown one', async () => {
+  it('finds a position with its motion, machine and site; nothing for an unknown one', async () => {
     expect(await rows().findPosition(s.reg.positionId)).toEqual({
       id: s.reg.positionId,
       tag: 'MH-B1',
+      motion: 'hoist',
       machineId: s.reg.machineId,
       machineTag: 'CR-01',
       siteId: s.reg.siteId,
