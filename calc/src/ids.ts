@@ -8,6 +8,7 @@
 export const SHEET_TYPE_IDS = [
   'hoist-shoe-brake',
   'travel-shoe-brake',
+  'drive-shoe-brake',
   'caliper-disc-brake',
   'disc-spring-stack',
 ] as const;

@@ -105,6 +105,7 @@ export {
 export type { InputsOf } from './sheets/field-builders.js';
 export { hoistShoeBrakeSheet, evaluateHoistShoeBrake } from './sheets/hoist-shoe-brake.js';
 export { travelShoeBrakeSheet, evaluateTravelShoeBrake } from './sheets/travel-shoe-brake.js';
+export { driveShoeBrakeSheet, evaluateDriveShoeBrake } from './sheets/drive-shoe-brake.js';
 export { caliperDiscBrakeSheet, evaluateCaliperDiscBrake } from './sheets/caliper-disc-brake.js';
 export { makeCheck, type CheckSpec } from './sheets/checks.js';
 export { SAFETY_CAUTIONS } from './sheets/sheet-output.js';

@@ -25,7 +25,13 @@ describe('demo plant seed', () => {
       new Set(['draft', 'in_check', 'returned', 'approved', 'superseded']),
     );
     expect(new Set(revs.map((r) => r.sheetType))).toEqual(
-      new Set(['hoist-shoe-brake', 'travel-shoe-brake', 'caliper-disc-brake', 'disc-spring-stack']),
+      new Set([
+        'hoist-shoe-brake',
+        'travel-shoe-brake',
+        'drive-shoe-brake',
+        'caliper-disc-brake',
+        'disc-spring-stack',
+      ]),
     );
     const before = await snapshot();
     expect(await seedDemoScenario(suite.ctx.app)).toBe(false);
@@ -45,6 +51,7 @@ describe('demo plant seed', () => {
     expect([...seen].sort()).toEqual([
       'caliper-disc-brake on hoist: crane-hoist',
       'disc-spring-stack on hoist: crane-hoist',
+      'drive-shoe-brake on conveyor: general-industry',
       'hoist-shoe-brake on auxiliary-hoist: crane-hoist',
       'hoist-shoe-brake on hoist: crane-hoist',
       'travel-shoe-brake on bridge: travel-drive',

@@ -1,5 +1,5 @@
 import type { CheckResult, CriteriaSet } from '../core/types.js';
-import { compute, type Derivation } from '../core/step.js';
+import { compute, type Derivation, type StepOptions } from '../core/step.js';
 import { criterion } from '../criteria/lookup.js';
 import type { LiningMaterial } from '../criteria/linings.js';
 import { motorRatedTorque } from '../duty/motor-torque.js';
@@ -43,15 +43,42 @@ export interface CaliperTorques {
   pv: number;
 }
 
+/** The inputs of a duty stated at the brake shaft (the caliper sheet's, the drive shoe brake's). */
+export type ShaftDutyInputs = Pick<
+  CaliperInputs,
+  | 'motorPower'
+  | 'motorSpeed'
+  | 'ratioToBrake'
+  | 'staticTorque'
+  | 'efficiency'
+  | 'referenceBasis'
+  | 'brakeArrangement'
+  | 'backDrivingEfficiency'
+>;
+
+/**
+ * How the load-torque steps are printed when the load is not hoisted (a conveyor's drive torque,
+ * not a "hoisting torque"); the caliper sheet keeps the formulas' own words.
+ */
+export interface ShaftDutyWords {
+  loadToDrive?: StepOptions;
+  loadHeld?: StepOptions;
+}
+
 /** Motor torque, load torques and the required brake torque at the brake shaft. */
-export function caliperDuty(v: CaliperInputs, criteria: CriteriaSet, d: Derivation): CaliperDuty {
+export function caliperDuty(
+  v: ShaftDutyInputs,
+  criteria: CriteriaSet,
+  d: Derivation,
+  words: ShaftDutyWords = {},
+): CaliperDuty {
   const omegaMot = q.angularSpeed(v.motorSpeed);
   const omega = q.angularSpeed(omegaMot / v.ratioToBrake);
   const Mmot = motorRatedTorque(q.power(v.motorPower), omegaMot, d);
   const eta = v.efficiency;
   const ML = v.staticTorque;
-  const Mhoist = compute(d, hoistingTorqueFormula, { M_L: ML, eta });
-  const Mhold = compute(d, holdingTorqueFormula, { M_L: ML, eta });
+  const Mhoist = compute(d, hoistingTorqueFormula, { M_L: ML, eta }, words.loadToDrive);
+  const Mhold = compute(d, holdingTorqueFormula, { M_L: ML, eta }, words.loadHeld);
   // Motor torque referred to the brake shaft without efficiency loss: the brake must hold what the
   // motor can drive. The referral's ratio runs brake shaft ÷ motor, the inverse of the sheet's i
   // (motor ÷ brake shaft), so the step prints it as i⁻¹ beside the input i it came from.

@@ -9,11 +9,13 @@ import { caliperDiscBrakeSheet } from './caliper-disc-brake.js';
 import { discSpringStackSheet } from './disc-spring-stack.js';
 import { hoistShoeBrakeSheet } from './hoist-shoe-brake.js';
 import { travelShoeBrakeSheet } from './travel-shoe-brake.js';
+import { driveShoeBrakeSheet } from './drive-shoe-brake.js';
 
 /** Every sheet type of this core version, in the order a UI lists them. */
 export const sheetTypes = [
   hoistShoeBrakeSheet,
   travelShoeBrakeSheet,
+  driveShoeBrakeSheet,
   caliperDiscBrakeSheet,
   discSpringStackSheet,
 ] as const satisfies readonly SheetTypeDefinition[];

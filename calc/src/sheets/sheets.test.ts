@@ -34,10 +34,11 @@ function fieldsOf(fn: () => unknown): string[] {
 }
 
 describe('sheet registry', () => {
-  it('registers the four sheet types with unique field keys and defaults in range', () => {
+  it('registers the five sheet types with unique field keys and defaults in range', () => {
     expect(sheetTypes.map((s) => s.id)).toEqual([
       'hoist-shoe-brake',
       'travel-shoe-brake',
+      'drive-shoe-brake',
       'caliper-disc-brake',
       'disc-spring-stack',
     ]);

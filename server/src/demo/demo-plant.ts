@@ -80,7 +80,12 @@ export interface DemoSheet {
   title: string;
   machine: string;
   position: string;
-  sheetType: 'hoist-shoe-brake' | 'travel-shoe-brake' | 'caliper-disc-brake' | 'disc-spring-stack';
+  sheetType:
+    | 'hoist-shoe-brake'
+    | 'travel-shoe-brake'
+    | 'drive-shoe-brake'
+    | 'caliper-disc-brake'
+    | 'disc-spring-stack';
   owner: string;
   revisions: DemoRevision[];
 }
@@ -339,6 +344,21 @@ export const demoSheets: DemoSheet[] = [
             anchor: { kind: 'check', key: 'first-check' },
           },
         ],
+      },
+    ],
+  },
+  {
+    title: 'Coil conveyor 4 drive station brake',
+    machine: 'CC-4',
+    position: 'DR-B1',
+    sheetType: 'drive-shoe-brake',
+    owner: E2,
+    revisions: [
+      {
+        state: 'draft',
+        author: E2,
+        changeNote: 'First issue: the new coil conveyor, brake on the motor shaft.',
+        daysAgo: 1,
       },
     ],
   },
