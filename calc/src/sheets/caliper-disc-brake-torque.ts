@@ -1,4 +1,4 @@
-import type { CheckResult, CriteriaSet } from '../core/types.js';
+import type { CheckResult, CriteriaSet, FieldError } from '../core/types.js';
 import { compute, type Derivation, type StepOptions } from '../core/step.js';
 import { criterion } from '../criteria/lookup.js';
 import type { LiningMaterial } from '../criteria/linings.js';
@@ -63,6 +63,19 @@ export type ShaftDutyInputs = Pick<
 export interface ShaftDutyWords {
   loadToDrive?: StepOptions;
   loadHeld?: StepOptions;
+}
+
+/** A load-torque reference needs a load torque: the cross-field rule of a duty at the shaft. */
+export function shaftDutyErrors(v: ShaftDutyInputs): FieldError[] {
+  // 1 mN·m is far below any real duty; smaller values only underflow once efficiency is applied.
+  return v.referenceBasis !== 'motor' && !(v.staticTorque >= 1e-3)
+    ? [
+        {
+          field: 'staticTorque',
+          message: 'must be at least 0.001 N·m when the reference is the load torque',
+        },
+      ]
+    : [];
 }
 
 /** Motor torque, load torques and the required brake torque at the brake shaft. */

@@ -20,7 +20,12 @@ import {
 } from './caliper-disc-brake-fields.js';
 import { caliperAtSet, caliperConsistency } from './caliper-disc-brake-at-set.js';
 import { caliperReleaseAndSetting, caliperStopAndHeat } from './caliper-disc-brake-stop.js';
-import { caliperDuty, caliperTorqueChecks, caliperTorques } from './caliper-disc-brake-torque.js';
+import {
+  caliperDuty,
+  caliperTorqueChecks,
+  caliperTorques,
+  shaftDutyErrors,
+} from './caliper-disc-brake-torque.js';
 
 function validate(v: CaliperInputs): FieldError[] {
   const e: FieldError[] = [];
@@ -30,12 +35,7 @@ function validate(v: CaliperInputs): FieldError[] {
     e.push({ field: 'muMin', message: 'μ min must not exceed μ nominal' });
   if (!(v.muNominal <= v.muMax))
     e.push({ field: 'muMax', message: 'μ max must not be below μ nominal' });
-  // 1 mN·m is far below any real duty; smaller values only underflow once efficiency is applied.
-  if (v.referenceBasis !== 'motor' && !(v.staticTorque >= 1e-3))
-    e.push({
-      field: 'staticTorque',
-      message: 'must be at least 0.001 N·m when the reference is the load torque',
-    });
+  e.push(...shaftDutyErrors(v));
   if (!(v.clampForceMax > v.clampForceMin))
     e.push({ field: 'clampForceMax', message: 'must exceed the lowest setting' });
   if (!(v.clampForce - v.springRate * v.wear * v.wearTravelRatio > 0))

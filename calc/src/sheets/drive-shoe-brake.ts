@@ -8,7 +8,7 @@ import type {
 import { CalcInputError } from '../core/errors.js';
 import { Derivation } from '../core/step.js';
 import { recordingCriteriaUsed } from '../criteria/lookup.js';
-import { caliperDuty } from './caliper-disc-brake-torque.js';
+import { caliperDuty, shaftDutyErrors } from './caliper-disc-brake-torque.js';
 import { choice, num, qty, withBounds, type InputsOf } from './field-builders.js';
 import { DRIVE_BOUNDS } from './field-bounds.js';
 import { SHOE_FIELD_CARD } from './field-card-layouts.js';
@@ -115,14 +115,7 @@ const FIELDS = withBounds([...DRIVE_DUTY_FIELDS, ...SHOE_BRAKE_FIELDS] as const,
 type DriveInputs = InputsOf<typeof FIELDS>;
 
 function validate(v: DriveInputs): FieldError[] {
-  const e = validateShoeInputs(v);
-  // 1 mN·m is far below any real duty; smaller values only underflow once efficiency is applied.
-  if (v.referenceBasis !== 'motor' && !(v.staticTorque >= 1e-3))
-    e.push({
-      field: 'staticTorque',
-      message: 'must be at least 0.001 N·m when the reference is the load torque',
-    });
-  return e;
+  return [...validateShoeInputs(v), ...shaftDutyErrors(v)];
 }
 
 /**

@@ -113,8 +113,8 @@ export const TRAVEL_BOUNDS: Record<string, [number, number]> = {
   motorMaxSpeed: [10, 20000],
 };
 
-export const DRIVE_BOUNDS: Record<string, [number, number]> = {
-  ...SHOE_BOUNDS,
+/** A duty stated at the brake shaft: the caliper sheet's and the drive shoe brake's. */
+const SHAFT_DUTY_BOUNDS: Record<string, [number, number]> = {
   motorPower: [0.1, 5000],
   motorSpeed: [10, 6000],
   ratioToBrake: [0.001, 5000],
@@ -128,18 +128,13 @@ export const DRIVE_BOUNDS: Record<string, [number, number]> = {
   motorMaxSpeed: [10, 20000],
 };
 
+export const DRIVE_BOUNDS: Record<string, [number, number]> = {
+  ...SHOE_BOUNDS,
+  ...SHAFT_DUTY_BOUNDS,
+};
+
 export const CALIPER_BOUNDS: Record<string, [number, number]> = {
-  motorPower: [0.1, 5000],
-  motorSpeed: [10, 6000],
-  ratioToBrake: [0.001, 5000],
-  staticTorque: [0, 1e8],
-  efficiency: [0.3, 1],
-  inertia: [1e-4, 1e7],
-  loadSpeed: [0.001, 100],
-  setDelay: [0, 10],
-  maxStoppingDistance: [1, 1e6],
-  backDrivingEfficiency: [0.3, 1],
-  motorMaxSpeed: [10, 20000],
+  ...SHAFT_DUTY_BOUNDS,
   loadMass: [1, 1e7],
   padOuterRadius: [10, 5000],
   padInnerRadius: [5, 5000],
