@@ -26,31 +26,44 @@ const cluster = await startCluster({
   durable: false,
 });
 await cluster.ensureDatabase('holdfast_test', { fresh: true });
-await cluster.ensureDatabase('holdfast_e2e', { fresh: true });
+// Two apps under test, each on its own seeded database: the browser files run two at a time,
+// one per app (ui/e2e/support/browser.ts picks by vitest's worker number), so neither sees the
+// other's clicks. One lane leaves a core idle while the page waits on the server.
+const E2E_LANES = ['holdfast_e2e', 'holdfast_e2e_b'];
+for (const db of E2E_LANES) await cluster.ensureDatabase(db, { fresh: true });
 await buildAll(projectDir);
 // As in `npm start`: migrate and seed as the owner role, serve as the app role. The suites get
 // the superuser (DATABASE_URL), since they create a database per worker and reset tables.
-await migrateAndSeed(projectDir, cluster.url('holdfast_e2e', 'owner'));
+for (const db of E2E_LANES) await migrateAndSeed(projectDir, cluster.url(db, 'owner'));
 
-const e2ePort = await freePortFrom(3900);
-const app = await startAppServer(
-  projectDir,
-  {
-    DATABASE_URL: cluster.url('holdfast_e2e', 'app'),
-    PORT: String(e2ePort),
-    HOST: '127.0.0.1',
-    PUBLIC_URL: `http://127.0.0.1:${e2ePort}`,
-    S3_EMBEDDED: '1',
-    S3_PORT: String(await freePortFrom(4600)),
-    MAIL_EMBEDDED: '0',
-    LOGIN_THROTTLE_LIMIT: '1000',
-    // Every browser test signs in from 127.0.0.1: the per-address limit would stop the suite.
-    LOGIN_THROTTLE_IP_LIMIT: '10000',
-    NODE_ENV: 'test',
-  },
-  { inherit: false },
-);
-step(`app under test on ${app.url}`);
+const apps = [];
+let nextPort = 3900;
+let nextS3Port = 4600;
+for (const db of E2E_LANES) {
+  const port = await freePortFrom(nextPort);
+  const s3Port = await freePortFrom(nextS3Port);
+  nextPort = port + 1;
+  nextS3Port = s3Port + 1;
+  const app = await startAppServer(
+    projectDir,
+    {
+      DATABASE_URL: cluster.url(db, 'app'),
+      PORT: String(port),
+      HOST: '127.0.0.1',
+      PUBLIC_URL: `http://127.0.0.1:${port}`,
+      S3_EMBEDDED: '1',
+      S3_PORT: String(s3Port),
+      MAIL_EMBEDDED: '0',
+      LOGIN_THROTTLE_LIMIT: '1000',
+      // Every browser test signs in from 127.0.0.1: the per-address limit would stop the suite.
+      LOGIN_THROTTLE_IP_LIMIT: '10000',
+      NODE_ENV: 'test',
+    },
+    { inherit: false },
+  );
+  step(`app under test on ${app.url} (${db})`);
+  apps.push(app);
+}
 
 // The static checks run one after another beside the suites: vitest leaves one of two cores idle
 // for much of the run (browser tests wait on the page), and the checks are CPU-bound. Their
@@ -97,7 +110,8 @@ const vitestCode = await new Promise((resolve) => {
       env: {
         ...process.env,
         DATABASE_URL: cluster.url('holdfast_test'),
-        HOLDFAST_E2E_URL: app.url,
+        HOLDFAST_E2E_URL: apps[0].url,
+        HOLDFAST_E2E_URLS: apps.map((a) => a.url).join(' '),
         HOLDFAST_TEST_OUTPUT: outDir,
         NODE_ENV: 'test',
       },
@@ -107,7 +121,7 @@ const vitestCode = await new Promise((resolve) => {
 });
 await staticDone;
 
-await stopChild(app.child);
+for (const a of apps) await stopChild(a.child);
 await cluster.stop();
 
 let passed = 0;

@@ -17,9 +17,18 @@ const chromiumArgs = [
   '--disable-sync',
 ];
 
-/** The app under test, set by the test runner (built server on a fresh seeded database). */
+/**
+ * The app under test, set by the test runner (built server on a fresh seeded database). `npm test`
+ * serves one app per vitest worker (HOLDFAST_E2E_URLS, space-separated): a file takes its worker's
+ * app, so two files running at once never share a database. By hand, HOLDFAST_E2E_URL names one.
+ */
 export function e2eBaseUrl(): string | null {
-  const url = process.env.HOLDFAST_E2E_URL?.trim();
+  const lanes = (process.env.HOLDFAST_E2E_URLS ?? '').split(/\s+/).filter(Boolean);
+  const worker = Number(process.env.VITEST_POOL_ID ?? '1');
+  const url =
+    lanes.length > 0
+      ? lanes[(Number.isInteger(worker) && worker > 0 ? worker - 1 : 0) % lanes.length]
+      : process.env.HOLDFAST_E2E_URL?.trim();
   return url ? url.replace(/\/+$/, '') : null;
 }
 
