@@ -1,6 +1,6 @@
 // `npm run bench:ui`: keystroke to updated results on screen in the sheet editor, measured inside
 // the page. Needs a running, seeded Holdfast (HOLDFAST_E2E_URL, e.g. http://127.0.0.1:3000 after
-// `npm start`) and Debian's chromium. Prints the median and the 95th percentile.
+// `npm start`) and Debian's chromium headless shell (installed here if missing). Prints the median and the 95th percentile.
 //
 // Each sample: the `input` event's timeStamp (when the key reached the page) to the first DOM
 // change inside the results column, seen by a MutationObserver (it runs right after the commit,
@@ -10,6 +10,7 @@ import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium } from 'playwright-core';
+import { chromiumPath, ensureChromium } from '../../scripts/lib/apt.mjs';
 
 const base = (process.env.HOLDFAST_E2E_URL ?? '').replace(/\/+$/, '');
 if (!base) {
@@ -43,9 +44,10 @@ const sheet = await api(accessToken, 'POST', '/sheets', {
   start: { kind: 'example' },
 });
 
+if (!process.env.HOLDFAST_CHROMIUM) await ensureChromium();
 const profile = await mkdtemp(join(tmpdir(), 'holdfast-bench-'));
 const context = await chromium.launchPersistentContext(profile, {
-  executablePath: process.env.HOLDFAST_CHROMIUM ?? '/usr/bin/chromium',
+  executablePath: process.env.HOLDFAST_CHROMIUM ?? chromiumPath,
   headless: true,
   args: ['--headless', '--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-sync'],
   viewport: { width: WIDTH, height: 900 },

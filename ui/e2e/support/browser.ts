@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 
-export const chromiumPath = process.env.HOLDFAST_CHROMIUM ?? '/usr/bin/chromium';
+export const chromiumPath = process.env.HOLDFAST_CHROMIUM ?? '/usr/bin/chromium-headless-shell';
 
 const chromiumArgs = [
   '--headless',
@@ -45,7 +45,9 @@ export function e2eSkipReason(): string | null {
 /** Thrown at launch when chromium is missing, so the run fails with the fix in the message. */
 function assertChromium(): void {
   if (!existsSync(chromiumPath))
-    throw new Error(`No chromium at ${chromiumPath}: install it with apt-get install -y chromium.`);
+    throw new Error(
+      `No chromium at ${chromiumPath}: install it with apt-get install -y chromium-headless-shell.`,
+    );
 }
 
 export interface BrowserSession {
