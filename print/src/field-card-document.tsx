@@ -184,7 +184,10 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
           {sheet.equipment.name}, from calculation {sheet.documentNumber} rev {sheet.revision.label}
           . Check the revision is current with the verification code before you start.
         </Text>
-        <Caution rotor={rotor} extra={rotor === 'drum' ? [PUSH_ROD_CAUTION] : []} />
+        <Caution
+          sheetTypeId={sheet.sheetType.id}
+          extra={rotor === 'drum' ? [PUSH_ROD_CAUTION] : []}
+        />
         {!g ? (
           <Text>This revision has no evaluation, so there are no settings to print.</Text>
         ) : (

@@ -4,7 +4,7 @@ import { headingBlock } from './blocks.js';
 import { paginate, type FlowBlock } from './flow.js';
 import type { TextMeasure } from './measure.js';
 import { approvalsBlock, revisionHistoryBlocks } from './parts/approvals.js';
-import { Caution, cautionHeight, rotorOf } from './parts/caution.js';
+import { Caution, cautionHeight } from './parts/caution.js';
 import { chartBlock } from './parts/chart.js';
 import { criteriaReviewBlocks } from './parts/criteria-reviews.js';
 import { designBasisBlocks } from './parts/design-basis.js';
@@ -55,8 +55,8 @@ function sheetBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlock[] {
     ...purposeBlocks(ctx, sheet),
     {
       key: 'caution',
-      height: cautionHeight(ctx.m, ctx.width, [], rotorOf(sheet.sheetType.id)),
-      element: <Caution key="caution" rotor={rotorOf(sheet.sheetType.id)} />,
+      height: cautionHeight(ctx.m, ctx.width, sheet.sheetType.id),
+      element: <Caution key="caution" sheetTypeId={sheet.sheetType.id} />,
     },
     ...summaryBlocks(ctx, sheet),
     approvalsBlock(ctx, sheet),

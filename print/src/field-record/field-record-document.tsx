@@ -2,7 +2,7 @@ import { readingPrecision, toleranceText, type Dimension } from '@holdfast/calc'
 import { Document, Page, View } from '@react-pdf/renderer';
 import { Text } from '../text.js';
 import { qty } from '../format.js';
-import { Caution, rotorOf } from '../parts/caution.js';
+import { Caution } from '../parts/caution.js';
 import { Heading, Table } from '../parts/table.js';
 import type { PrintableSheet } from '../printable-sheet.js';
 import { Frame } from '../sheet-document.js';
@@ -55,7 +55,7 @@ export function FieldRecordDocument(props: {
             {f}
           </Text>
         ))}
-        <Caution rotor={rotorOf(sheet.sheetType.id)} />
+        <Caution sheetTypeId={sheet.sheetType.id} />
         <Heading>Measurements</Heading>
         <Table
           columns={[

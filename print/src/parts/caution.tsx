@@ -5,20 +5,40 @@ import type { TextMeasure } from '../measure.js';
 import { colours } from '../theme.js';
 
 // The check items of a field record are worded by the same rule (server/src/calc/field-targets.ts).
+import { rotorOf } from '@holdfast/calc';
 export { rotorOf, type BrakeRotor } from '@holdfast/calc';
+
+/**
+ * What holds the load still while the brake is open, by sheet type: a hoist's load hangs, a travel
+ * drive can be pushed by the wind or roll on a slope, an inclined conveyor runs back under load.
+ * The caliper and disc-spring sheets serve any of these, so they name them all.
+ */
+function securingLine(sheetTypeId: string, rotor: BrakeRotor): string {
+  switch (sheetTypeId) {
+    case 'hoist-shoe-brake':
+      return `Never work under a suspended load. Before brake work land the load or lock the ${rotor}: nothing on the hook (no ladle, no load).`;
+    case 'travel-shoe-brake':
+      return 'Before brake work secure the crane or trolley against moving: rail clamps or wedges set, storm pins in. Wind or a slope moves a crane whose brakes are open.';
+    case 'drive-shoe-brake':
+      return `Before brake work make the drive unable to turn: an inclined conveyor under load runs back when its brake opens. Unload or block the belt, or lock the ${rotor}.`;
+    default:
+      return `Never work under a suspended load or on a drive that can run back. Before brake work land the load, secure the machine against moving or lock the ${rotor}.`;
+  }
+}
 
 /**
  * The usual cautions for work on a spring-applied, thruster-released brake, printed on the sheet
  * and on the field card (common practice for work on crane and conveyor brakes, no published
  * source; the governing standard and the maker's instructions decide).
  */
-export function cautionLines(rotor: BrakeRotor = 'drum'): string[] {
+export function cautionLines(sheetTypeId: string): string[] {
+  const rotor = rotorOf(sheetTypeId);
   // A caliper is opened by a thruster or a hydraulic unit; a drum brake here by a thruster.
   const opener = rotor === 'disc' ? 'release unit' : 'thruster';
   return [
     'These results support, and never replace, the judgement of a competent engineer.',
     "The governing standard, the brake maker's data, local codes and licensed practice decide where they differ from this sheet.",
-    `Never work under a suspended load. Before brake work land the load or lock the ${rotor}: nothing on the hook (no ladle, no load).`,
+    securingLine(sheetTypeId, rotor),
     `Isolate and lock out the drive and, separately, the ${opener} supply: an energised ${opener} opens the brake.`,
     `Keep hands clear of the arms and levers while the ${opener} can be energised. Adjust one brake at a time.`,
     `The ${rotor} and the ${opener === 'thruster' ? 'thruster' : 'hydraulic'} oil can be hot after running: stop the drive and let them cool.`,
@@ -27,7 +47,7 @@ export function cautionLines(rotor: BrakeRotor = 'drum'): string[] {
 }
 
 /** The safety caution block (first page of the sheet, top of the field card). */
-export function Caution(props: { extra?: string[]; rotor?: BrakeRotor }) {
+export function Caution(props: { sheetTypeId: string; extra?: string[] }) {
   return (
     <View
       wrap={false}
@@ -41,7 +61,7 @@ export function Caution(props: { extra?: string[]; rotor?: BrakeRotor }) {
       }}
     >
       <Text style={{ fontWeight: 700, color: colours.caution, marginBottom: 2 }}>Caution</Text>
-      {[...cautionLines(props.rotor), ...(props.extra ?? [])].map((line) => (
+      {[...cautionLines(props.sheetTypeId), ...(props.extra ?? [])].map((line) => (
         <Text key={line} style={{ marginBottom: 1 }}>
           • {line}
         </Text>
@@ -54,13 +74,13 @@ export function Caution(props: { extra?: string[]; rotor?: BrakeRotor }) {
 export function cautionHeight(
   m: TextMeasure,
   width: number,
+  sheetTypeId: string,
   extra: string[] = [],
-  rotor: BrakeRotor = 'drum',
 ): number {
   // Left rule 3, padding 2 × 6.
   const inner = width - 3 - 12;
   const body = { fontSize: 8.5 };
-  const lines = [...cautionLines(rotor), ...extra].reduce(
+  const lines = [...cautionLines(sheetTypeId), ...extra].reduce(
     (sum, line) => sum + m.height(`• ${line}`, inner, body) + 1,
     0,
   );
