@@ -88,13 +88,31 @@ describe.skipIf(skipReason !== null)('the register managed in the app', () => {
       await page.getByRole('option', { name: `${tag} — Main hoist brake` }).click();
       return dialog;
     };
-    let dialog = await openNewSheet();
+    // The first sheet starts from the position's row: position and sheet type already chosen.
+    await page.goto(`${baseUrl}/equipment`);
+    await page.getByRole('link', { name: `Start a sheet for ${tag}` }).click();
+    let dialog = page.getByRole('dialog', { name: 'New calculation sheet' });
+    await expect(dialog.getByPlaceholder('Choose a position').inputValue()).resolves.toBe(
+      `${tag} — Main hoist brake`,
+    );
+    await expect(dialog.getByLabel(/^Sheet type/).inputValue()).resolves.toBe(
+      'Shoe brake on a hoist',
+    );
     await expect(dialog.getByTestId('open-sheet-warning').count()).resolves.toBe(0);
     await dialog
       .getByRole('textbox', { name: /^Title/ })
       .pressSequentially('Pouring crane hoist brake');
     await dialog.getByRole('button', { name: 'Create sheet' }).click();
     await page.getByRole('heading', { name: 'Pouring crane hoist brake' }).waitFor();
+    // With a sheet open on it, the row offers no second start.
+    await page.goto(`${baseUrl}/equipment`);
+    await page
+      .locator(`[data-position="${tag}"]`)
+      .getByText(/^Open: /)
+      .waitFor();
+    await expect(
+      page.getByRole('link', { name: `Start a sheet for ${tag}` }).count(),
+    ).resolves.toBe(0);
 
     dialog = await openNewSheet();
     await dialog.getByTestId('open-sheet-warning').waitFor();

@@ -1,7 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { cleanup, screen } from '@testing-library/react';
 import type { Register, User } from '@holdfast/shared';
-import { inForceSheet, makeRegister, testUsers } from '../../../testing/fixtures';
+import {
+  inForceSheet,
+  makeRegister,
+  registerPositionId,
+  testUsers,
+} from '../../../testing/fixtures';
 import { mockFetch } from '../../../testing/mock-fetch';
 import { renderRoutes } from '../../../testing/render';
 import { Component as EquipmentPage } from './equipment';
@@ -52,5 +57,30 @@ describe('equipment page', () => {
       expect(screen.queryByRole('link', { name })).toBeNull();
       cleanup();
     }
+  });
+
+  it('offers "Start a sheet" on a position with no sheet to those who may author one', async () => {
+    const name = 'Start a sheet for MH-B1';
+    for (const user of [testUsers.engineer, testUsers.checker]) {
+      renderAs(user, makeRegister([]));
+      expect(await screen.findByRole('link', { name })).toHaveAttribute(
+        'href',
+        `/sheets?new=${registerPositionId}`,
+      );
+      cleanup();
+    }
+    for (const user of [testUsers.viewer, testUsers.technician, testUsers.admin]) {
+      renderAs(user, makeRegister([]));
+      expect(await screen.findByText('None approved')).toBeInTheDocument();
+      expect(screen.queryByRole('link', { name })).toBeNull();
+      cleanup();
+    }
+    // A sheet in force, or one already open, is where work goes on: no second start offered.
+    renderAs(
+      testUsers.engineer,
+      makeRegister([inForceSheet(revisionId, 'XS-0001', 'hoist-shoe-brake')]),
+    );
+    expect(await screen.findByText('MH-B1')).toBeInTheDocument();
+    expect(screen.queryByRole('link', { name })).toBeNull();
   });
 });

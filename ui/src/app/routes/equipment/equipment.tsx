@@ -39,6 +39,8 @@ export function Component() {
   // Who the server lets change the register (register.controller.ts): not viewers, not fitters.
   const canEdit = hasRole(user, 'engineer', 'checker', 'admin');
   const canRecord = mayRecordFieldWork(user.role);
+  // Who may author a sheet (sheets.controller.ts): engineers and checkers.
+  const canStart = hasRole(user, 'engineer', 'checker');
   const [form, setForm] = useState<Form | null>(null);
   const small = { size: 'compact-sm', variant: 'subtle' } as const;
 
@@ -205,6 +207,7 @@ export function Component() {
                               key={p.id}
                               position={p}
                               canRecord={canRecord}
+                              canStart={canStart}
                               onEdit={
                                 canEdit
                                   ? () =>

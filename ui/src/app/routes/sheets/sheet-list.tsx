@@ -34,6 +34,7 @@ import { SheetsTable, type SortKey } from '../../../features/sheets/components/s
 import { stateLabel } from '../../../lib/state-label';
 import { fitWidth } from '../../../lib/fit-width';
 import { positionGroups } from './position-groups';
+import { suggestedSheetType } from '../../../features/sheets/utils/suggested-sheet-type';
 import { useListOutputs } from './use-list-outputs';
 
 export const handle: RouteHandle = { title: 'Sheets', wide: true };
@@ -77,6 +78,8 @@ export function Component() {
   const register = useRegister();
   const [text, setText] = useState(params.q ?? '');
   const [debounced] = useDebouncedValue(text, 300);
+  // `?new=<position id>` (from "Start a sheet" on the equipment page) opens the dialog on it.
+  const startOn = search.get('new');
   const [createOpen, setCreateOpen] = useState(false);
   const { picked, toggle, printPicked, exportCsv, printing } = useListOutputs(params);
 
@@ -109,6 +112,15 @@ export function Component() {
     [sites],
   );
   const canCreate = user.role === 'engineer' || user.role === 'checker';
+  const positionsById = useMemo(
+    () =>
+      new Map(sites.flatMap((s) => s.machines.flatMap((m) => m.positions.map((p) => [p.id, p])))),
+    [sites],
+  );
+  const closeCreate = () => {
+    setCreateOpen(false);
+    if (startOn) set({ new: undefined });
+  };
   const onSort = (key: SortKey) =>
     set({ sort: key, order: params.sort === key && params.order === 'asc' ? 'desc' : 'asc' });
 
@@ -269,9 +281,14 @@ export function Component() {
         </Group>
       ) : null}
       <CreateSheetDialog
-        opened={createOpen}
-        onClose={() => setCreateOpen(false)}
+        opened={createOpen || (canCreate && startOn !== null && positionsById.has(startOn))}
+        onClose={closeCreate}
         positions={positionGroups(sites)}
+        initialPositionId={startOn}
+        sheetTypeFor={(id) => {
+          const p = positionsById.get(id);
+          return p ? suggestedSheetType(p) : null;
+        }}
         onCreated={(sheet) => {
           setCreateOpen(false);
           navigate(`/sheets/${sheet.id}`);

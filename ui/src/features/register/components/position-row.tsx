@@ -12,10 +12,17 @@ export interface PositionRowProps {
   onEdit?: () => void;
   /** Offer "Record field work" (to those the server lets record it). */
   canRecord?: boolean;
+  /** Offer "Start a sheet" on a position with no sheet yet (to those who may author sheets). */
+  canStart?: boolean;
 }
 
 /** One brake position: what it is in the plant's words, its sheet in force per sheet type. */
-export function PositionRow({ position: p, onEdit, canRecord = false }: PositionRowProps) {
+export function PositionRow({
+  position: p,
+  onEdit,
+  canRecord = false,
+  canStart = false,
+}: PositionRowProps) {
   const described = [p.brakeKind, p.thruster, p.lining].filter((x) => x.trim());
   return (
     <Table.Tr data-position={p.tag}>
@@ -31,9 +38,21 @@ export function PositionRow({ position: p, onEdit, canRecord = false }: Position
       <Table.Td>{p.motion.replace('-', ' ')}</Table.Td>
       <Table.Td>
         {p.inForce.length === 0 ? (
-          <Text span size="sm" c="fail.8">
-            None approved
-          </Text>
+          <Group gap="xs">
+            <Text span size="sm" c="fail.8">
+              None approved
+            </Text>
+            {canStart && p.openSheets.length === 0 ? (
+              <Anchor
+                component={Link}
+                to={`/sheets?new=${encodeURIComponent(p.id)}`}
+                size="sm"
+                aria-label={`Start a sheet for ${p.tag}`}
+              >
+                Start a sheet
+              </Anchor>
+            ) : null}
+          </Group>
         ) : (
           <Stack gap={2}>
             {p.inForce.map((f) => (

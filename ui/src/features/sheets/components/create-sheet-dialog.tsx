@@ -1,7 +1,13 @@
 import { useEffect, useState } from 'react';
 import { Modal, Select, Stack, TextInput } from '@mantine/core';
 import { DialogActions } from '../../../components/dialog-actions';
-import { createSheetSchema, sheetTypeIds, toFieldIssues, type SheetDetail } from '@holdfast/shared';
+import {
+  createSheetSchema,
+  sheetTypeIds,
+  toFieldIssues,
+  type SheetDetail,
+  type SheetTypeId,
+} from '@holdfast/shared';
 import { errorMessage, isApiRequestError } from '../../../lib/api-client';
 import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
 import { OpenSheetWarning } from '../../register/components/open-sheet-warning';
@@ -18,6 +24,10 @@ export interface CreateSheetDialogProps {
   onClose: () => void;
   positions: PositionGroup[];
   onCreated: (sheet: SheetDetail) => void;
+  /** The position to start on (from "Start a sheet" on the equipment page). */
+  initialPositionId?: string | null;
+  /** The sheet type a position most likely needs; picked for the engineer until they choose one. */
+  sheetTypeFor?: (positionId: string) => SheetTypeId | null;
 }
 
 /** A new sheet for one brake position: revision A starts as a draft, blank, copied or the example. */
@@ -26,18 +36,31 @@ export function CreateSheetDialog({
   onClose,
   positions,
   onCreated,
+  initialPositionId = null,
+  sheetTypeFor,
 }: CreateSheetDialogProps) {
   const [positionId, setPositionId] = useState<string | null>(null);
   const [sheetType, setSheetType] = useState<string | null>('hoist-shoe-brake');
+  // Once the engineer picks a sheet type, a change of position no longer overrides it.
+  const [typeChosen, setTypeChosen] = useState(false);
   const [title, setTitle] = useState('');
   const [startKind, setStartKind] = useState<StartKind>('empty');
   const [copyFrom, setCopyFrom] = useState<string | null>(null);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const create = useCreateSheet();
 
+  const pickPosition = (id: string | null) => {
+    setPositionId(id);
+    const suggested = id && !typeChosen ? sheetTypeFor?.(id) : null;
+    if (suggested) setSheetType(suggested);
+  };
+
   useEffect(() => {
-    if (opened) setErrors({});
-  }, [opened]);
+    if (!opened) return;
+    setErrors({});
+    if (initialPositionId) pickPosition(initialPositionId);
+    // Only opening the dialog (with or without a position to start on) resets it.
+  }, [opened, initialPositionId]); // eslint-disable-line react-hooks/exhaustive-deps
 
   const submit = () => {
     if (startKind === 'copy' && !copyFrom) {
@@ -79,7 +102,7 @@ export function CreateSheetDialog({
           placeholder="Choose a position"
           data={positions}
           value={positionId}
-          onChange={setPositionId}
+          onChange={pickPosition}
           searchable
           required
           error={errors.positionId}
@@ -90,7 +113,10 @@ export function CreateSheetDialog({
           label="Sheet type"
           data={sheetTypeIds.map((id) => ({ value: id, label: sheetTypeTitle(id) }))}
           value={sheetType}
-          onChange={setSheetType}
+          onChange={(v) => {
+            setSheetType(v);
+            setTypeChosen(true);
+          }}
           allowDeselect={false}
           required
           error={errors.sheetType}

@@ -1,0 +1,38 @@
+import { describe, expect, it } from 'vitest';
+import { screen, within } from '@testing-library/react';
+import type { Register, User } from '@holdfast/shared';
+import { makeRegister, registerPositionId, testUsers } from '../../../testing/fixtures';
+import { mockFetch } from '../../../testing/mock-fetch';
+import { renderRoutes } from '../../../testing/render';
+import { Component as SheetList } from './sheet-list';
+
+function renderAt(route: string, register: Register, user: User = testUsers.engineer) {
+  mockFetch({
+    'GET /api/register': { body: register },
+    'GET /api/sheets': { body: { items: [], total: 0, page: 1, pageSize: 25 } },
+  });
+  renderRoutes([{ path: '/sheets', Component: SheetList }], { user, route });
+}
+
+describe('sheet list: starting a sheet from the equipment page', () => {
+  it('opens the new-sheet dialog on the position, with the sheet type its motion suggests', async () => {
+    renderAt(`/sheets?new=${registerPositionId}`, makeRegister([]));
+    const dialog = await screen.findByRole('dialog', { name: 'New calculation sheet' });
+    expect(await within(dialog).findByDisplayValue('MH-B1 — Main hoist brake')).toBeVisible();
+    expect(within(dialog).getByDisplayValue('Shoe brake on a hoist')).toBeVisible();
+  });
+
+  it('suggests the travel sheet for a trolley position', async () => {
+    const register = makeRegister([]);
+    register.sites[0]!.machines[0]!.positions[0]!.motion = 'trolley';
+    renderAt(`/sheets?new=${registerPositionId}`, register);
+    const dialog = await screen.findByRole('dialog', { name: 'New calculation sheet' });
+    expect(await within(dialog).findByDisplayValue('Shoe brake on a travel drive')).toBeVisible();
+  });
+
+  it('opens nothing for a viewer or an unknown position', async () => {
+    renderAt(`/sheets?new=${registerPositionId}`, makeRegister([]), testUsers.viewer);
+    expect(await screen.findByRole('heading', { name: 'Sheets' })).toBeInTheDocument();
+    expect(screen.queryByRole('dialog')).toBeNull();
+  });
+});
