@@ -1,4 +1,4 @@
-import { memo, useMemo, type ReactNode } from 'react';
+import { memo, useMemo, useState, type ReactNode } from 'react';
 import {
   Alert,
   Badge,
@@ -203,6 +203,7 @@ const FailingRow = memo(function FailingRow(props: {
 /** The core's notes on the inputs; a new evaluation with the same notes does not render them again. */
 const CalculationNotes = memo(
   function CalculationNotes({ warnings }: { warnings: readonly string[] }) {
+    const [open, setOpen] = useState(false);
     if (warnings.length === 0) return null;
     return (
       <Alert
@@ -212,8 +213,24 @@ const CalculationNotes = memo(
         p="xs"
         title={`Notes from the calculation (${warnings.length})`}
       >
-        <Spoiler maxHeight={44} showLabel="Show all" hideLabel="Show less" fz="sm">
-          <List size="xs" spacing={2}>
+        <Spoiler
+          maxHeight={44}
+          showLabel="Show all"
+          hideLabel="Show less"
+          fz="sm"
+          expanded={open}
+          onExpandedChange={setOpen}
+        >
+          {/* Collapsed, the last visible line fades out instead of ending cut through. */}
+          <List
+            size="xs"
+            spacing={2}
+            style={
+              open
+                ? undefined
+                : { maskImage: 'linear-gradient(to bottom, #000 22px, transparent 44px)' }
+            }
+          >
             {warnings.map((w) => (
               <List.Item key={w}>{w}</List.Item>
             ))}

@@ -110,7 +110,9 @@ export function SheetsTable({ items, sort, order, onSort, selected, onToggle }: 
                 )}
               </Table.Td>
               <Table.Td>{s.owner.initials}</Table.Td>
-              <Table.Td c="dimmed">{isoDay(s.updatedAt)}</Table.Td>
+              <Table.Td c="dimmed" style={{ whiteSpace: 'nowrap' }}>
+                {isoDay(s.updatedAt)}
+              </Table.Td>
             </Table.Tr>
           ))}
         </Table.Tbody>
