@@ -1,11 +1,12 @@
 import { beforeAll, describe, expect, it } from 'vitest';
+import { sheetTypes } from '@holdfast/calc';
 import { PAPER_SIZE } from './paper.js';
 import { renderSheet, type SheetRender } from './render.js';
 import { realPrintable } from './testing/real-sheet.js';
 import { ensurePoppler, inspectPdf } from './testing/poppler.js';
 
 const SLOW = 300_000;
-const TYPES = ['hoist-shoe-brake', 'travel-shoe-brake', 'caliper-disc-brake', 'disc-spring-stack'];
+const TYPES = sheetTypes.map((s) => s.id);
 
 describe('page planning', () => {
   beforeAll(() => ensurePoppler());
