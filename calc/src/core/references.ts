@@ -6,7 +6,7 @@ export const REF = {
     'energy/power balance through the gear train (textbook identity; e.g. Shigley MED, ch. 16 energy considerations)',
   hoistLoad: 'statics of the rope drive: load × g × drum radius ÷ (reeving ratio × gear ratio)',
   efficiency:
-    'efficiency treatment: torque to hoist = M/η, torque held while lowering = M·η (common practice)',
+    'efficiency treatment: torque to drive the load (hoisting) = M/η, torque held with the load overhauling (lowering) = M·η (common practice)',
   requiredTorque: 'required torque = factor × reference torque; factor from the criteria set',
   shoeForce: 'lever statics with linkage efficiency (common practice)',
   shortShoe:
