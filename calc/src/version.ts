@@ -13,6 +13,8 @@
  * lining wear prints to 0.05 mm on the card; a disc-spring stack's back-off tolerance on the card
  * is the sheet's declared one. Derivation lines and check messages are written when first read.
  * Later in 1.2.0, with no number moved: an evaluation lists the criteria values it read
- * (`criteriaUsed`, for the printed design basis); one stored before that has no such list.
+ * (`criteriaUsed`, for the printed design basis); one stored before that has no such list. The
+ * efficiency reference now reads for any drive (torque to drive the load, torque held with it
+ * overhauling) where it read "to hoist" and "while lowering"; stored evaluations keep their text.
  */
 export const CORE_VERSION = '1.2.0';
