@@ -15,6 +15,8 @@
  * Later in 1.2.0, with no number moved: an evaluation lists the criteria values it read
  * (`criteriaUsed`, for the printed design basis); one stored before that has no such list. The
  * efficiency reference now reads for any drive (torque to drive the load, torque held with it
- * overhauling) where it read "to hoist" and "while lowering"; stored evaluations keep their text.
+ * overhauling) where it read "to hoist" and "while lowering", and the travel, drive and caliper
+ * sheets carry cautions of their own where they carried the hoist's; stored evaluations keep
+ * their text.
  */
 export const CORE_VERSION = '1.2.0';

@@ -12,7 +12,7 @@ import { getLining } from '../criteria/linings.js';
 import { frictionBandChart, torqueWearChart } from './charts.js';
 import { readInputs } from './sheet-inputs.js';
 import { CALIPER_FIELD_CARD } from './field-card-layouts.js';
-import { finish, newEvaluation, publishSteps } from './sheet-output.js';
+import { finish, newEvaluation, publishSteps, SHEET_CAUTIONS } from './sheet-output.js';
 import {
   CALIPER_FIELDS,
   CALIPER_SECTIONS,
@@ -56,7 +56,7 @@ export function evaluateCaliperDiscBrake(
   if (errors.length) throw new CalcInputError(errors);
   const lining = getLining(v.liningMaterial)!;
   const d = new Derivation('duty');
-  const out = newEvaluation('caliper-disc-brake', criteria, d);
+  const out = newEvaluation('caliper-disc-brake', criteria, d, SHEET_CAUTIONS.caliper);
 
   const duty = caliperDuty(v, criteria, d);
   const t = caliperTorques(v, duty, d);

@@ -14,7 +14,7 @@ import { DRIVE_BOUNDS } from './field-bounds.js';
 import { SHOE_FIELD_CARD } from './field-card-layouts.js';
 import { setDelayFields } from './set-delay-fields.js';
 import { readInputs } from './sheet-inputs.js';
-import { finish, newEvaluation, publishSteps } from './sheet-output.js';
+import { finish, newEvaluation, publishSteps, SHEET_CAUTIONS } from './sheet-output.js';
 import { SHOE_BRAKE_FIELDS, SHOE_SECTIONS } from './shoe-brake-fields.js';
 import { evaluateShoeBrake, validateShoeInputs } from './shoe-brake-evaluate.js';
 
@@ -131,7 +131,7 @@ export function evaluateDriveShoeBrake(
   const errors = validate(v);
   if (errors.length) throw new CalcInputError(errors);
   const d = new Derivation(U);
-  const out = newEvaluation('drive-shoe-brake', criteria, d);
+  const out = newEvaluation('drive-shoe-brake', criteria, d, SHEET_CAUTIONS.drive);
   const duty = caliperDuty(v, criteria, d, {
     loadToDrive: {
       label: 'Load torque to drive the load, at the brake (M_L/η)',

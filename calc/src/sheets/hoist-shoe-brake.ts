@@ -23,7 +23,7 @@ import { HOIST_BOUNDS } from './field-bounds.js';
 import { setDelayFields } from './set-delay-fields.js';
 import { readInputs } from './sheet-inputs.js';
 import { SHOE_FIELD_CARD } from './field-card-layouts.js';
-import { finish, newEvaluation, publishSteps } from './sheet-output.js';
+import { finish, newEvaluation, publishSteps, SHEET_CAUTIONS } from './sheet-output.js';
 import { SHOE_BRAKE_FIELDS, SHOE_SECTIONS } from './shoe-brake-fields.js';
 import { evaluateShoeBrake, validateShoeInputs } from './shoe-brake-evaluate.js';
 import {
@@ -177,7 +177,7 @@ export function evaluateHoistShoeBrake(
   const cross = validateShoeInputs(v);
   if (cross.length) throw new CalcInputError(cross);
   const d = new Derivation(U);
-  const out = newEvaluation('hoist-shoe-brake', criteria, d);
+  const out = newEvaluation('hoist-shoe-brake', criteria, d, SHEET_CAUTIONS.hoist);
   const omega = q.angularSpeed(v.motorSpeed);
   const Mmot = motorRatedTorque(q.power(v.motorPower), omega, d);
   const load = hoistLoadTorques(

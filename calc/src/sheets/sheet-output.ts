@@ -9,11 +9,46 @@ import type { Derivation } from '../core/step.js';
 import { CORE_VERSION } from '../version.js';
 import { DIMENSIONS } from '../units/unit-table.js';
 
-/** The usual cautions printed on every brake sheet. */
-export const SAFETY_CAUTIONS = [
-  "These results support, and never replace, the judgement of a competent engineer; the governing standard, the brake maker's data, local codes and licensed practice decide.",
-  'Never work under a suspended load: land the load or lock the drum before brake work, isolate the drive and the thruster supply, adjust one brake at a time, and release stored spring energy with the provided means.',
-];
+const JUDGEMENT =
+  "These results support, and never replace, the judgement of a competent engineer; the governing standard, the brake maker's data, local codes and licensed practice decide.";
+const WORK =
+  'adjust one brake at a time, and release stored spring energy with the provided means.';
+
+/**
+ * The usual cautions each brake sheet carries, by what holds the load while the brake is open: a
+ * hoist's load hangs, a travel drive can be moved by wind or a slope, a loaded incline runs back;
+ * the caliper sheet serves any of them (common practice for brake work, no published source).
+ */
+export const SHEET_CAUTIONS = {
+  hoist: [
+    JUDGEMENT,
+    `Never work under a suspended load: land the load or lock the drum before brake work, isolate the drive and the thruster supply, ${WORK}`,
+  ],
+  travel: [
+    JUDGEMENT,
+    `Before brake work secure the crane or trolley against moving (rail clamps or wedges, storm pins: wind or a slope moves it with its brakes open), isolate the drive and the thruster supply, ${WORK}`,
+  ],
+  drive: [
+    JUDGEMENT,
+    `Before brake work make the drive unable to turn (an inclined conveyor under load runs back when its brake opens), isolate the drive and the thruster supply, ${WORK}`,
+  ],
+  caliper: [
+    JUDGEMENT,
+    `Never work under a suspended load or on a drive that can run back: land the load, secure the machine or lock the disc before brake work, isolate the drive and the release unit supply, ${WORK}`,
+  ],
+} as const satisfies Record<string, readonly string[]>;
+
+// Every caution an evaluation has carried, stored ones included (before each sheet had its own,
+// all carried the hoist's).
+const ALL_CAUTIONS = new Set<string>(Object.values(SHEET_CAUTIONS).flat());
+
+/**
+ * Whether a warning is one of the usual cautions: the printed sheet gives those once, in its
+ * caution block, and lists only the other warnings as notes from the calculation.
+ */
+export function isSafetyCaution(warning: string): boolean {
+  return ALL_CAUTIONS.has(warning);
+}
 
 // Symbol-keyed, so JSON.stringify and structured clone leave it out. (A WeakMap from evaluation
 // to derivation cost more in garbage collection than it saved.)
@@ -52,7 +87,7 @@ export function newEvaluation(
   sheetType: string,
   criteria: CriteriaSet,
   d: Derivation,
-  cautions: readonly string[] = SAFETY_CAUTIONS,
+  cautions: readonly string[],
 ): SheetEvaluation {
   const out = {
     sheetType,

@@ -20,7 +20,7 @@ import { num, qty, withBounds } from './field-builders.js';
 import { TRAVEL_BOUNDS } from './field-bounds.js';
 import { readInputs } from './sheet-inputs.js';
 import { SHOE_FIELD_CARD } from './field-card-layouts.js';
-import { finish, newEvaluation, publishSteps } from './sheet-output.js';
+import { finish, newEvaluation, publishSteps, SHEET_CAUTIONS } from './sheet-output.js';
 import { SHOE_BRAKE_FIELDS, SHOE_SECTIONS } from './shoe-brake-fields.js';
 import { evaluateShoeBrake, validateShoeInputs } from './shoe-brake-evaluate.js';
 import { setDelayFields } from './set-delay-fields.js';
@@ -167,7 +167,7 @@ export function evaluateTravelShoeBrake(
     cross.push({ field: 'brakedWheels', message: 'cannot exceed the number of wheels' });
   if (cross.length) throw new CalcInputError(cross);
   const d = new Derivation(U);
-  const out = newEvaluation('travel-shoe-brake', criteria, d);
+  const out = newEvaluation('travel-shoe-brake', criteria, d, SHEET_CAUTIONS.travel);
   const omega = q.angularSpeed(v.motorSpeed);
   const vT = q.speed(v.travelSpeed);
   const Mmot = motorRatedTorque(q.power(v.motorPower), omega, d);

@@ -1,4 +1,4 @@
-import { SAFETY_CAUTIONS, type CheckResult } from '@holdfast/calc';
+import { isSafetyCaution, type CheckResult } from '@holdfast/calc';
 import { Text } from '../text.js';
 import { headingBlock, paragraphBlock, tableBlocks, type BlockContext } from '../blocks.js';
 import type { FlowBlock } from '../flow.js';
@@ -131,7 +131,7 @@ export function summaryBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlo
     }),
   ];
   // The cautions every evaluation carries are printed once, in the caution block above.
-  const notes = ev.warnings.filter((w) => !SAFETY_CAUTIONS.includes(w));
+  const notes = ev.warnings.filter((w) => !isSafetyCaution(w));
   if (notes.length > 0) {
     blocks.push(
       paragraphBlock(ctx, 'notes-h', 'Notes from the calculation', { fontSize: 8.5, weight: 700 }),
