@@ -60,7 +60,7 @@ export function realPrintable(o: {
   };
   return buildPrintableSheet({
     sheet: {
-      documentNumber: `HF-DEMO-${type.id.toUpperCase().slice(0, 6)}-001`,
+      documentNumber: `HF-DEMO-${type.id.split('-')[0]!.toUpperCase()}-001`,
       title: `${type.title} — demo`,
       site: { code: 'DEMO', name: 'Demo Works (invented)' },
       equipment: { tag: 'CR-1', name: 'Demo crane' },
