@@ -107,6 +107,9 @@ describe.skipIf(skipReason !== null)('sign-in in a real browser', () => {
     await page.goto(`${baseUrl}/sheets`);
     await page.getByRole('heading', { name: 'Sign in' }).waitFor();
     expect(new URL(page.url()).searchParams.get('next')).toBe('/sheets');
+    // Signed out by choice, then a deep link: nothing expired, so the page does not say so.
+    await page.waitForLoadState('networkidle');
+    await expect(page.getByText(/session has ended/).count()).resolves.toBe(0);
     await screenshot(page, 'sign-in');
   });
 });

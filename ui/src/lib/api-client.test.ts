@@ -71,6 +71,19 @@ describe('api client', () => {
     expect(sessionStore.getAccessToken()).toBeNull();
   });
 
+  it('does not call a first visit without a session an expired one', async () => {
+    sessionStore.reset({ status: 'restoring' }, null);
+    mockFetch({
+      'GET /api/sheets': jsonError(401, 'unauthenticated', 'no token'),
+      'POST /api/auth/refresh': jsonError(401, 'unauthenticated', 'no refresh token'),
+    });
+    await api.get(testPath('/sheets')).catch(() => undefined);
+    expect(sessionStore.getState()).toMatchObject({
+      status: 'signed-out',
+      endReason: 'signed-out',
+    });
+  });
+
   it('turns the error envelope into a typed error with field paths', async () => {
     mockFetch({
       'POST /api/users': jsonError(400, 'validation_failed', 'The request has errors', [

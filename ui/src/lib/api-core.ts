@@ -84,7 +84,9 @@ export async function withAuthRetry<R extends { status: number }>(
   const current = sessionStore.getAccessToken();
   const renewed = (current !== null && current !== tokenUsed) || (await refreshSession());
   if (!renewed) {
-    sessionStore.end('expired');
+    // Only a refused token means a session ended; a call sent with none (a first visit straight to
+    // a deep link) found no session to end, and the sign-in page should not say one expired.
+    sessionStore.end(tokenUsed === null ? 'signed-out' : 'expired');
     return first;
   }
   const second = await send(authHeaders(auth));
