@@ -115,6 +115,9 @@ describe('Field work in the side navigation', () => {
       `/positions/${positionId}/field`,
     );
     expect(due).toHaveTextContent('overdue');
+    // Counted like the queue's other cards; the count says when something is overdue.
+    expect(within(due).getByLabelText('2 items, 1 overdue')).toHaveTextContent('2');
+    expect(within(due).getAllByRole('listitem')).toHaveLength(2);
     // Tags like HB-1 repeat on every crane: each line names the machine and site as well.
     expect(due).toHaveTextContent(
       'NW · CR-05 · HB-1: record of 2026-11-28 awaits your countersignature',

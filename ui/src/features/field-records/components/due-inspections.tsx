@@ -1,9 +1,10 @@
-import { Anchor, Badge, Paper, Stack, Text, Title } from '@mantine/core';
+import { Anchor, Badge, Paper, Stack, Text } from '@mantine/core';
 import { Link } from 'react-router-dom';
 import { positionFieldPath, positionPlaceText } from '@holdfast/shared';
 import type { DueInspection } from '@holdfast/shared';
 import { useDueInspections } from '../api/get-due-inspections';
 import { isoDay } from '../../../lib/dates';
+import { CountedTitle } from '../../../components/counted-title';
 
 function dueText(d: DueInspection): string {
   if (d.nextDue.date) return `due ${isoDay(d.nextDue.date)}`;
@@ -33,33 +34,40 @@ export function DueInspectionsPanel() {
   const due = useDueInspections();
   if (!due.data) return null;
   const { overdue, due: soon, awaitingCountersign } = due.data;
+  const count = overdue.length + soon.length + awaitingCountersign.length;
+  // Laid out as the work queue's other cards: title and count, then one line per item.
   return (
-    <Paper withBorder p="md" component="section" aria-labelledby="field-due-title">
-      <Title order={2} size="h5" id="field-due-title" mb="sm">
-        Field inspections
-      </Title>
-      <Stack gap={4}>
-        {overdue.length + soon.length + awaitingCountersign.length === 0 && (
-          <Text size="sm" c="dimmed">
-            Nothing due.
-          </Text>
-        )}
-        {overdue.map((d) => (
-          <Line key={d.positionId} d={d} />
-        ))}
-        {soon.map((d) => (
-          <Line key={d.positionId} d={d} />
-        ))}
-        {awaitingCountersign.map((r) => (
-          <Text size="sm" key={r.recordId}>
-            <Anchor component={Link} to={positionFieldPath(r.positionId)} underline="always">
-              {positionPlaceText(r)}
-            </Anchor>
-            : record of {isoDay(r.performedAt)} awaits your countersignature
-            {r.outOfTolerance ? ' (out of tolerance)' : ''}
-          </Text>
-        ))}
-      </Stack>
+    <Paper p="md" component="section" aria-labelledby="field-due-title">
+      <CountedTitle
+        id="field-due-title"
+        title="Field inspections"
+        count={count}
+        overdue={overdue.length}
+      />
+      {count === 0 ? (
+        <Text size="sm" c="dimmed">
+          Nothing due.
+        </Text>
+      ) : (
+        <Stack gap={6} component="ul" p={0} m={0} style={{ listStyle: 'none' }}>
+          {[...overdue, ...soon].map((d) => (
+            <li key={d.positionId}>
+              <Line d={d} />
+            </li>
+          ))}
+          {awaitingCountersign.map((r) => (
+            <li key={r.recordId}>
+              <Text size="sm">
+                <Anchor component={Link} to={positionFieldPath(r.positionId)} underline="always">
+                  {positionPlaceText(r)}
+                </Anchor>
+                : record of {isoDay(r.performedAt)} awaits your countersignature
+                {r.outOfTolerance ? ' (out of tolerance)' : ''}
+              </Text>
+            </li>
+          ))}
+        </Stack>
+      )}
     </Paper>
   );
 }

@@ -1,4 +1,4 @@
-import { Anchor, Badge, Paper, Stack, Text, Title } from '@mantine/core';
+import { Anchor, Badge, Paper, Stack, Text } from '@mantine/core';
 import { Link } from 'react-router-dom';
 import {
   positionFieldPath,
@@ -9,6 +9,7 @@ import {
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import { useFieldRecords } from '../api/get-field-records';
 import { isoDay } from '../../../lib/dates';
+import { CountedTitle } from '../../../components/counted-title';
 
 const titles: Record<Exclude<FieldRecordStatus, 'countersigned'>, string> = {
   draft: 'Records not yet signed',
@@ -20,10 +21,12 @@ export function OpenRecords({ status }: { status: 'draft' | 'signed' }) {
   const records = useFieldRecords(status);
   const titleId = `field-records-${status}-title`;
   return (
-    <Paper withBorder p="md" component="section" aria-labelledby={titleId}>
-      <Title order={2} size="h5" id={titleId} mb="sm">
-        {titles[status]}
-      </Title>
+    <Paper p="md" component="section" aria-labelledby={titleId}>
+      <CountedTitle
+        id={titleId}
+        title={titles[status]}
+        count={records.data?.items.length ?? null}
+      />
       {records.isError ? (
         <ErrorPanel error={records.error} onRetry={() => void records.refetch()} />
       ) : !records.data ? (

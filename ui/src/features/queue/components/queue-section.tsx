@@ -1,8 +1,9 @@
 import type { ReactNode } from 'react';
-import { Anchor, Badge, Group, Paper, Stack, Text, Title } from '@mantine/core';
+import { Anchor, Group, Paper, Stack, Text } from '@mantine/core';
 import { Link } from 'react-router-dom';
 import type { QueueItem } from '@holdfast/shared';
 import { isoDay } from '../../../lib/dates';
+import { CountedTitle } from '../../../components/counted-title';
 
 export interface QueueSectionProps {
   id: string;
@@ -17,19 +18,7 @@ export interface QueueSectionProps {
 export function QueueSection({ id, title, empty, items, renderState }: QueueSectionProps) {
   return (
     <Paper p="md" component="section" aria-labelledby={id} data-queue={id}>
-      <Group justify="space-between" mb="sm" wrap="nowrap" align="flex-start">
-        <Title order={2} size="h5" id={id}>
-          {title}
-        </Title>
-        <Badge
-          variant="light"
-          color={items.length ? 'steel' : 'gray'}
-          size="lg"
-          aria-label={`${items.length} items`}
-        >
-          {items.length}
-        </Badge>
-      </Group>
+      <CountedTitle id={id} title={title} count={items.length} />
       {items.length === 0 ? (
         <Text size="sm" c="dimmed">
           {empty}
