@@ -82,7 +82,11 @@ const checks = [];
 async function check(name, args) {
   const t0 = Date.now();
   const { code, output } = await new Promise((resolve) => {
-    const child = spawn('npx', args, { cwd: projectDir, stdio: ['ignore', 'pipe', 'pipe'] });
+    // Niced: the suites (browser lanes first) get the cores first, the checks take what is left.
+    const child = spawn('nice', ['-n', '10', 'npx', ...args], {
+      cwd: projectDir,
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
     let output = '';
     child.stdout.on('data', (d) => (output += d));
     child.stderr.on('data', (d) => (output += d));
