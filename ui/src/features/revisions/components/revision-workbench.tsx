@@ -44,8 +44,8 @@ export interface RevisionWorkbenchProps {
 
 const READ_ONLY_REASON: Record<string, string> = {
   in_check: 'This revision is with a checker. It cannot be edited until it is returned.',
-  approved:
-    'This revision is approved and can never change. Start a new revision to make a change.',
+  // Read by viewers and fitters too, who cannot start one: say what a change is, not who makes it.
+  approved: 'This revision is approved and can never change: a change is a new revision.',
   superseded: 'This revision has been superseded by a later approval. It is kept as it was.',
 };
 
