@@ -16,6 +16,7 @@ import { IconAlertTriangle, IconBolt } from '@tabler/icons-react';
 import type { CheckDriver, CriteriaSet, SectionDefinition, SheetEvaluation } from '@holdfast/calc';
 import { CheckDriversButton } from './check-drivers-button';
 import { CriteriaUsed } from './criteria-used';
+import { notesFirst } from '../utils/notes-order';
 import { EvaluationShown, ResultsTabs } from './results-tabs';
 import { Verdict } from './verdict';
 import type { UnitSystem } from '../utils/units';
@@ -204,6 +205,7 @@ const FailingRow = memo(function FailingRow(props: {
 const CalculationNotes = memo(
   function CalculationNotes({ warnings }: { warnings: readonly string[] }) {
     const [open, setOpen] = useState(false);
+    const ordered = useMemo(() => notesFirst(warnings), [warnings]);
     if (warnings.length === 0) return null;
     return (
       <Alert
@@ -231,7 +233,7 @@ const CalculationNotes = memo(
                 : { maskImage: 'linear-gradient(to bottom, #000 22px, transparent 44px)' }
             }
           >
-            {warnings.map((w) => (
+            {ordered.map((w) => (
               <List.Item key={w}>{w}</List.Item>
             ))}
           </List>
