@@ -33,7 +33,7 @@ export {
   type UnitSystem,
   type DisplayValue,
 } from './units/display.js';
-export { formatNumber, formatForDerivation } from './units/format.js';
+export { formatNumber, formatForDerivation, powerOfTen } from './units/format.js';
 export {
   PRECISION,
   SETTING_PRECISION,

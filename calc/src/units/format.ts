@@ -28,6 +28,25 @@ export function decimalExponent(abs: number): number {
   return e;
 }
 
+const SUPERSCRIPT: Record<string, string> = {
+  '0': '⁰',
+  '1': '¹',
+  '2': '²',
+  '3': '³',
+  '4': '⁴',
+  '5': '⁵',
+  '6': '⁶',
+  '7': '⁷',
+  '8': '⁸',
+  '9': '⁹',
+  '-': '⁻',
+};
+
+/** Ten to an integer power as engineers write it: 10⁻⁴, 10⁹ (not 10^-4, which reads as code). */
+export function powerOfTen(exponent: number): string {
+  return `10${String(exponent).replace(/[-\d]/g, (c) => SUPERSCRIPT[c]!)}`;
+}
+
 export function formatNumber(value: number, digits = 4): string {
   if (value === 0) return '0';
   if (!Number.isFinite(value)) return String(value);
@@ -36,7 +55,7 @@ export function formatNumber(value: number, digits = 4): string {
   if (abs < 1e-3 || abs >= 1e9 || digits < 1 || digits > 15) {
     const [mantissa, exponent] = value.toExponential(Math.max(0, digits - 1)).split('e');
     // toExponential of a finite number always has a mantissa.
-    return `${mantissa!.replace('-', '−')}·10^${Number(exponent)}`;
+    return `${mantissa!.replace('-', '−')}×${powerOfTen(Number(exponent))}`;
   }
   // Beyond 12 digits the few ulps by which log10 may miss show in the last digit: keep it there.
   const e = digits <= 12 ? decimalExponent(abs) : Math.floor(Math.log10(abs));

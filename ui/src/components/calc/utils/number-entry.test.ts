@@ -87,6 +87,6 @@ describe('writing numbers back', () => {
     expect(messageNumber(-0.0016666666666666668)).toBe('−0.001667');
     expect(messageNumber(12345.678)).toBe('12350');
     expect(messageNumber(0.5, 'comma')).toBe('0,5');
-    expect(messageNumber(2.5e-5)).toBe('2.5×10^−5');
+    expect(messageNumber(2.5e-5)).toBe('2.5×10⁻⁵');
   });
 });

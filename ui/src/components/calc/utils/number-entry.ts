@@ -4,6 +4,7 @@
  * A decimal comma is read only when the user's number format says so; otherwise a comma gets a
  * plain message instead of being taken for the start of a unit.
  */
+import { powerOfTen } from '@holdfast/calc';
 
 export type NumberFormat = 'point' | 'comma';
 
@@ -92,7 +93,7 @@ export function messageNumber(value: number, format: NumberFormat = 'point'): st
       string,
       string,
     ];
-    text = `${mantissa}×10^${Number(exponent)}`;
+    text = `${mantissa}×${powerOfTen(Number(exponent))}`;
   } else {
     text = String(Number(value.toPrecision(4)));
   }
