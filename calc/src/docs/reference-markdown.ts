@@ -19,8 +19,8 @@ function unitLabel(unit: string | undefined, f: FieldDefinition): string {
 /** A bound as written in a table: up to 6 significant figures, no trailing zeros (0.1 kg, 3600). */
 function boundNumber(v: number): string {
   return formatNumber(v, 6)
-    .replace(/(\.\d*?)0+(?=$|·)/, '$1')
-    .replace(/\.(?=$|·)/, '');
+    .replace(/(\.\d*?)0+(?=$|×)/, '$1')
+    .replace(/\.(?=$|×)/, '');
 }
 
 function bound(f: FieldDefinition, v: number | undefined): string {
