@@ -41,7 +41,8 @@ export function QueueSection({ id, title, empty, items, renderState }: QueueSect
                     rev. {item.revisionLabel}
                   </Anchor>
                   <Text size="xs" c="dimmed">
-                    {item.title} · {item.author.displayName} · {isoDay(item.updatedAt)}
+                    {item.title} · {item.author.displayName} ·{' '}
+                    <span style={{ whiteSpace: 'nowrap' }}>{isoDay(item.updatedAt)}</span>
                   </Text>
                 </div>
                 {renderState(item)}
