@@ -2,10 +2,12 @@ import { useEffect, useState } from 'react';
 import {
   Alert,
   Button,
+  Flex,
   Group,
   NavLink,
   Paper,
   Select,
+  SimpleGrid,
   Skeleton,
   Stack,
   Text,
@@ -102,23 +104,31 @@ export function Component() {
       ) : sets.isError ? (
         <ErrorPanel error={sets.error} onRetry={() => void sets.refetch()} />
       ) : (
-        <Group align="flex-start" gap="md" wrap="nowrap">
+        // Side by side only where the values table (760 px and more) fits beside the list; on
+        // narrower screens the list goes on top, so the sources are never scrolled out of view.
+        <Flex
+          direction={{ base: 'column', xl: 'row' }}
+          align={{ base: 'stretch', xl: 'flex-start' }}
+          gap="md"
+        >
           <Paper
             p="xs"
-            w={240}
+            w={{ base: '100%', xl: 240 }}
             component="nav"
             aria-label="Criteria sets"
             style={{ flexShrink: 0 }}
           >
-            {sets.data.items.map((s) => (
-              <NavLink
-                key={s.id}
-                active={s.id === selected}
-                label={s.name}
-                description={`version ${s.version}`}
-                onClick={() => go({ set: s.id, version: undefined })}
-              />
-            ))}
+            <SimpleGrid cols={{ base: 1, sm: 3, xl: 1 }} spacing={4} verticalSpacing={4}>
+              {sets.data.items.map((s) => (
+                <NavLink
+                  key={s.id}
+                  active={s.id === selected}
+                  label={s.name}
+                  description={`version ${s.version}`}
+                  onClick={() => go({ set: s.id, version: undefined })}
+                />
+              ))}
+            </SimpleGrid>
           </Paper>
           <Stack style={{ flex: 1, minWidth: 0 }} gap="md">
             {detail.isPending ? (
@@ -244,7 +254,7 @@ export function Component() {
               </Group>
             ) : null}
           </Stack>
-        </Group>
+        </Flex>
       )}
     </Page>
   );
