@@ -56,9 +56,9 @@ export function Component() {
             <Table fz="sm" striped aria-label="Audit trail">
               <Table.Thead>
                 <Table.Tr>
-                  <Table.Th w={190}>When</Table.Th>
-                  <Table.Th w={160}>Who</Table.Th>
-                  <Table.Th w={190}>What</Table.Th>
+                  <Table.Th w={170}>When</Table.Th>
+                  <Table.Th w={130}>Who</Table.Th>
+                  <Table.Th w={200}>What</Table.Th>
                   <Table.Th>Detail</Table.Th>
                 </Table.Tr>
               </Table.Thead>

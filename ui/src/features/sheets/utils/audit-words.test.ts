@@ -24,6 +24,14 @@ describe('audit trail in words', () => {
     }
   });
 
+  it("names the field-record events a sheet's trail shows, never their codes", () => {
+    expect(auditActionWords('field-record.created')).toBe('Field record started');
+    expect(auditActionWords('field-record.signed')).toBe('Field record signed');
+    expect(auditActionWords('field-record.countersigned')).toBe('Field record countersigned');
+    for (const action of ['field-record.updated', 'field-record.photo-added'])
+      expect(auditActionWords(action)).not.toBe(action);
+  });
+
   it('says which criteria flagged a revision and why a disposition lets it stand', () => {
     const flagged = event('revision.under-review', {
       criteriaSet: 'crane-hoist@2',

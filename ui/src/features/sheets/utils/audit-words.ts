@@ -16,6 +16,12 @@ const ACTIONS: Record<string, string> = {
   'comment.resolved': 'Comment resolved',
   'comment.reopened': 'Comment reopened',
   'attachment.uploaded': 'File attached',
+  // Field work on the sheet's position shows in its trail too.
+  'field-record.created': 'Field record started',
+  'field-record.updated': 'Field record saved',
+  'field-record.photo-added': 'Field record photo added',
+  'field-record.signed': 'Field record signed',
+  'field-record.countersigned': 'Field record countersigned',
 };
 
 /** The audit action in words; an unknown action reads as its code. */
