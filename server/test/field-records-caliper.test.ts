@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
 import { fieldCheckKeys } from '@holdfast/shared';
+import { demoInputs, getSheetType, parseQuantity } from '@holdfast/calc';
 import { ensurePoppler, inspectPdf } from '@holdfast/print/testing';
 import { approve, createSheet, sheetsSuite, submit } from './sheets-fixture.js';
 
@@ -21,7 +22,10 @@ describe('field records of a caliper disc brake speak of pads, not shoes', () =>
       as: 'technician',
     });
     expect(res.status, res.text).toBe(200);
-    return res.body as { checks: { key: string; label: string }[]; targets: { label: string }[] };
+    return res.body as {
+      checks: { key: string; label: string; minimum?: number | null }[];
+      targets: { label: string }[];
+    };
   };
 
   it('the record form labels each check item for the brake the sheet is of', async () => {
@@ -40,6 +44,18 @@ describe('field records of a caliper disc brake speak of pads, not shoes', () =>
         'Thruster condition (oil, seals, stroke free)',
       ]),
     );
+  });
+
+  it("the lining checks carry the sheet's minimum thickness, for the wear trend to run to", async () => {
+    const hoist = await form(await approved('hoist-shoe-brake'));
+    const sheet = getSheetType('hoist-shoe-brake')!;
+    const expected = parseQuantity(demoInputs(sheet).liningMinThickness, 'length');
+    for (const key of ['lining-thickness-shoe-a', 'lining-thickness-shoe-b'])
+      expect(hoist.checks.find((c) => c.key === key)?.minimum).toBeCloseTo(expected, 12);
+    expect(hoist.checks.find((c) => c.key === 'no-drag-shoe-a')?.minimum).toBeNull();
+    // The caliper sheet declares no pad minimum: no line is drawn rather than a guessed one.
+    const caliper = await form(await approved('caliper-disc-brake'));
+    for (const c of caliper.checks) expect(c.minimum).toBeNull();
   });
 
   it('the printed record of a caliper brake has pad and caliper wording and a disc caution', async () => {

@@ -36,6 +36,24 @@ describe('wear series from field records', () => {
     expect(liningSeries(records, 'lining-a').readings).toHaveLength(4);
   });
 
+  it("runs a lining's trend to the sheet's minimum thickness when it is given, and only then", () => {
+    const records = [
+      rec('2025-01-01', 'commissioning', null, 0.012, 0.008),
+      rec('2025-04-11', 'periodic-inspection', 0.011, 0.011, 0.0078),
+      rec('2025-07-20', 'periodic-inspection', 0.0104, 0.0104, 0.0075),
+      rec('2025-10-28', 'periodic-inspection', 0.0092, 0.0092, 0.0074),
+    ];
+    const none = liningSeries(records, 'lining-a');
+    expect(none.minimum).toBeNull();
+    expect(none.fit?.kind === 'trend' && none.fit.crossing).toBeFalsy();
+    const s = liningSeries(records, 'lining-a', length(0.003));
+    expect(s.minimum).toBe(0.003);
+    if (s.fit?.kind !== 'trend' || !s.fit.crossing) throw new Error('expected a crossing');
+    expect(wearLineAt(s.fit, s.fit.crossing.at)).toBeCloseTo(0.003, 9);
+    // About 0.2 mm per 100 days from 8 mm: 3 mm is years away, after the last reading.
+    expect(s.fit.crossing.at).toBeGreaterThan(Date.parse('2027-01-01T00:00:00Z') / 1000);
+  });
+
   it('a re-adjustment or an adjusted as-left starts a new line; too few readings is said', () => {
     const records = [
       rec('2025-01-01', 'commissioning', null, 0.012),

@@ -64,8 +64,15 @@ export function strokeSeries(
   return { readings, minimum, ...fitOrNote(readings, minimum, settingKey) };
 }
 
-/** The values of one check (a lining thickness) since the linings were last changed. */
-export function liningSeries(records: readonly WearRecord[], checkKey: string): WearSeries {
+/**
+ * The values of one check (a lining thickness) since the linings were last changed, with the
+ * trend to `minimum` (the sheet's minimum lining thickness) when it is known.
+ */
+export function liningSeries(
+  records: readonly WearRecord[],
+  checkKey: string,
+  minimum: Length | null = null,
+): WearSeries {
   let readings: WearReading[] = [];
   for (const r of byDate(records)) {
     const c = r.checks.find((x) => x.key === checkKey);
@@ -73,7 +80,7 @@ export function liningSeries(records: readonly WearRecord[], checkKey: string): 
     if (r.kind === LINING_CHANGE_KIND) readings = [];
     readings.push({ at: seconds(r.performedAt), value: c.value as Length });
   }
-  return { readings, minimum: null, ...fitOrNote(readings, null, checkKey) };
+  return { readings, minimum, ...fitOrNote(readings, minimum, checkKey) };
 }
 
 function fitOrNote(

@@ -1,10 +1,12 @@
 import {
   evaluateTolerance,
   getSheetType,
+  parseQuantity,
   rotorOf,
   settingTolerance,
   type Dimension,
   type FieldSetting,
+  type InputValue,
   type SheetEvaluation,
 } from '@holdfast/calc';
 import type {
@@ -45,13 +47,36 @@ export function checkLabels(sheetType: string): Readonly<Record<FieldCheckKey, s
   return rotorOf(sheetType) === 'disc' ? DISC_CHECK_LABELS : DRUM_CHECK_LABELS;
 }
 
-/** The check items of the record form of a sheet type. */
-export function formChecks(sheetType: string) {
+/** The input that holds the minimum of each measured check, where a sheet type declares one. */
+const CHECK_MINIMUM_INPUT: Partial<Record<FieldCheckKey, string>> = {
+  'lining-thickness-shoe-a': 'liningMinThickness',
+  'lining-thickness-shoe-b': 'liningMinThickness',
+};
+
+/** A revision's minimum for a check in SI (m), or null when its sheet type has no such input. */
+function checkMinimum(sheetType: string, inputs: unknown, key: FieldCheckKey): number | null {
+  const field = CHECK_MINIMUM_INPUT[key];
+  const def = getSheetType(sheetType)?.fields.find((f) => f.key === field);
+  const value = (inputs as Record<string, InputValue> | null)?.[field ?? ''];
+  if (!def || def.kind !== 'quantity' || !def.dimension || value === undefined) return null;
+  try {
+    return parseQuantity(value, def.dimension, def.key);
+  } catch {
+    return null; // an approved revision's inputs parse; an old one that does not shows no minimum
+  }
+}
+
+/**
+ * The check items of the record form of a revision: their labels, whether they take a value, and
+ * the sheet's minimum for it (the wear trend on the position's page runs to it).
+ */
+export function formChecks(sheetType: string, inputs: unknown = null) {
   const labels = checkLabels(sheetType);
   return fieldCheckKeys.map((key) => ({
     key,
     label: labels[key],
     hasValue: fieldCheckKeysWithValue.includes(key),
+    minimum: checkMinimum(sheetType, inputs, key),
   }));
 }
 

@@ -27,6 +27,8 @@ export interface RecordRevision {
   label: string;
   state: string;
   evaluation: unknown;
+  /** The revision's inputs as typed (the field form reads the sheet's minimums from them). */
+  inputs: unknown;
   sheetId: string;
   documentNumber: string;
   title: string;
@@ -52,6 +54,7 @@ export class FieldRecordsRepository {
         'r.label',
         'r.state',
         'r.evaluation',
+        'r.inputs',
         's.id as sheetId',
         's.documentNumber',
         's.title',

@@ -69,7 +69,7 @@ export class FieldRecordsService {
       sheetType: rev.sheetType,
       positionId: rev.positionId,
       targets: fieldTargets(rev.sheetType, rev.evaluation),
-      checks: formChecks(rev.sheetType),
+      checks: formChecks(rev.sheetType, rev.inputs),
     };
   }
 

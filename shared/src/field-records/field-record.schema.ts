@@ -163,7 +163,15 @@ export const fieldFormSchema = z.object({
   sheetType: z.string(),
   positionId: z.string().uuid().nullable(),
   targets: z.array(fieldTargetSchema),
-  checks: z.array(z.object({ key: fieldCheckKeySchema, label: z.string(), hasValue: z.boolean() })),
+  checks: z.array(
+    z.object({
+      key: fieldCheckKeySchema,
+      label: z.string(),
+      hasValue: z.boolean(),
+      /** The sheet's minimum for this value (lining thickness, m), null when it sets none. */
+      minimum: z.number().positive().nullable().optional(),
+    }),
+  ),
 });
 export type FieldForm = z.infer<typeof fieldFormSchema>;
 

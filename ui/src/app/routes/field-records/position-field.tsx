@@ -140,13 +140,18 @@ export function Component() {
                   )}
                 />
               )}
-              {LINING_KEYS.map((key) => (
-                <WearChart
-                  key={key}
-                  title={liningChartTitle(form.data?.checks, key)}
-                  series={liningSeries(records, key)}
-                />
-              ))}
+              {LINING_KEYS.map((key) => {
+                // The sheet's minimum lining thickness, so the trend says when it is reached.
+                const min = form.data?.checks.find((c) => c.key === key)?.minimum ?? null;
+                return (
+                  <WearChart
+                    key={key}
+                    title={liningChartTitle(form.data?.checks, key)}
+                    series={liningSeries(records, key, min === null ? null : length(min))}
+                    work="lining change"
+                  />
+                );
+              })}
             </SimpleGrid>
             <Title order={2} size="h3">
               Timeline

@@ -21,7 +21,16 @@ const mmText = (v: number) => String(Number(v.toFixed(2)));
  * Readings of one length over time with the fitted line, the minimum, and the predicted date the
  * line reaches it with its 95 % prediction interval (calc's fitWearTrend).
  */
-export function WearChart({ title, series }: { title: string; series: WearSeries }) {
+export function WearChart({
+  title,
+  series,
+  work = 're-adjustment',
+}: {
+  title: string;
+  series: WearSeries;
+  /** What reaching the minimum calls for: 're-adjustment' (reserve stroke), 'lining change'. */
+  work?: string;
+}) {
   const { readings, fit, minimum } = series;
   const crossing = fit?.kind === 'trend' ? fit.crossing : undefined;
   const rows: { x: number; Measured?: number; Fitted?: number }[] = readings.map((r) => ({
@@ -91,7 +100,7 @@ export function WearChart({ title, series }: { title: string; series: WearSeries
         {fit && fit.kind === 'trend'
           ? `Wear rate ${rateText(fit.rate, fit.rateStandardError)} mm per 30 days (± one standard error, ${fit.n} readings).` +
             (crossing
-              ? ` Minimum reached about ${isoDay(dateOf(crossing.at))}, 95 % prediction interval ${isoDay(dateOf(crossing.lower))} to ${isoDay(dateOf(crossing.upper))}: plan the re-adjustment before the first date.`
+              ? ` Minimum reached about ${isoDay(dateOf(crossing.at))}, 95 % prediction interval ${isoDay(dateOf(crossing.lower))} to ${isoDay(dateOf(crossing.upper))}: plan the ${work} before the first date.`
               : '')
           : (series.note ?? 'No readings yet.')}
       </Text>
