@@ -28,7 +28,8 @@ const cluster = await startCluster({
 await cluster.ensureDatabase('holdfast_test', { fresh: true });
 // Two apps under test, each on its own seeded database: the browser files run two at a time,
 // one per app (ui/e2e/support/browser.ts picks by vitest's worker number), so neither sees the
-// other's clicks. One lane leaves a core idle while the page waits on the server.
+// other's clicks. The browser files are CPU-bound (chromium), so two lanes barely shorten them;
+// what they gain is that the other suites no longer queue behind one long lane.
 const E2E_LANES = ['holdfast_e2e', 'holdfast_e2e_b'];
 for (const db of E2E_LANES) await cluster.ensureDatabase(db, { fresh: true });
 await buildAll(projectDir);
@@ -65,9 +66,9 @@ for (const db of E2E_LANES) {
   apps.push(app);
 }
 
-// The static checks run one after another beside the suites: vitest leaves one of two cores idle
-// for much of the run (browser tests wait on the page), and the checks are CPU-bound. Their
-// output is held and printed when each ends, so it does not interleave with the suites' output.
+// The static checks run one after another beside the suites, niced, in the CPU the suites leave
+// (the db and scripts projects run alone at the end, on one core). Their output is held and
+// printed when each ends, so it does not interleave with the suites' output.
 const staticChecks = [
   ['type tests (calc/test-types)', ['tsc', '-p', 'calc/test-types', '--noEmit']],
   ['type tests (shared/test-types)', ['tsc', '-p', 'shared/test-types', '--noEmit']],

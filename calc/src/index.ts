@@ -108,7 +108,7 @@ export { travelShoeBrakeSheet, evaluateTravelShoeBrake } from './sheets/travel-s
 export { driveShoeBrakeSheet, evaluateDriveShoeBrake } from './sheets/drive-shoe-brake.js';
 export { caliperDiscBrakeSheet, evaluateCaliperDiscBrake } from './sheets/caliper-disc-brake.js';
 export { makeCheck, type CheckSpec } from './sheets/checks.js';
-export { isSafetyCaution } from './sheets/sheet-output.js';
+export { isSafetyCaution, securingCaution } from './sheets/sheet-output.js';
 export { rotorOf } from './sheets/brake-rotor.js';
 export * from './field/wear-trend.js';
 export * from './field/wear-series.js';

@@ -218,7 +218,9 @@ describe('field setting card PDF', () => {
   it('prints the cautions for brake work and the reworded lines', () => {
     const t = squash(card.text);
     expect(t).toContain('Never work under a suspended load');
-    expect(t).toContain('land the load or lock the drum: nothing on the hook (no ladle, no load)');
+    expect(t).toContain(
+      'land the load or lock the drum before brake work; nothing on the hook (no ladle, no load)',
+    );
     expect(t).toContain('Adjust one brake at a time');
     expect(t).toContain('separately, the thruster supply');
     expect(t).toContain(

@@ -14,29 +14,45 @@ const JUDGEMENT =
 const WORK =
   'adjust one brake at a time, and release stored spring energy with the provided means.';
 
+/** What holds the load while the brake is open, the one thing the cautions of sheets differ in. */
+type LoadHeld = 'hoist' | 'travel' | 'drive' | 'any';
+
 /**
- * The usual cautions each brake sheet carries, by what holds the load while the brake is open: a
- * hoist's load hangs, a travel drive can be moved by wind or a slope, a loaded incline runs back;
- * the caliper sheet serves any of them (common practice for brake work, no published source).
+ * How the load is secured before brake work: a hoist's load hangs, a travel drive can be moved by
+ * wind or a slope, a loaded incline runs back; the caliper and disc-spring sheets serve any of
+ * them (common practice for brake work, no published source). The printed caution block and the
+ * evaluation's cautions both start from these words.
  */
+const SECURING: Record<LoadHeld, string> = {
+  hoist: 'Never work under a suspended load: land the load or lock the drum before brake work',
+  travel:
+    'Before brake work secure the crane or trolley against moving (rail clamps or wedges, storm pins: wind or a slope moves it with its brakes open)',
+  drive:
+    'Before brake work make the drive unable to turn (an inclined conveyor under load runs back when its brake opens)',
+  any: 'Never work under a suspended load or on a drive that can run back: land the load, secure the machine or lock the disc before brake work',
+};
+
+const LOAD_HELD: Record<string, LoadHeld> = {
+  'hoist-shoe-brake': 'hoist',
+  'travel-shoe-brake': 'travel',
+  'drive-shoe-brake': 'drive',
+};
+
+/** How a sheet type's load is secured before brake work, as one clause (no final stop). */
+export function securingCaution(sheetTypeId: string): string {
+  return SECURING[LOAD_HELD[sheetTypeId] ?? 'any'];
+}
+
+const cautions = (held: LoadHeld, opener: string) =>
+  [JUDGEMENT, `${SECURING[held]}, isolate the drive and the ${opener} supply, ${WORK}`] as const;
+
+/** The usual cautions each brake sheet's evaluation carries. */
 export const SHEET_CAUTIONS = {
-  hoist: [
-    JUDGEMENT,
-    `Never work under a suspended load: land the load or lock the drum before brake work, isolate the drive and the thruster supply, ${WORK}`,
-  ],
-  travel: [
-    JUDGEMENT,
-    `Before brake work secure the crane or trolley against moving (rail clamps or wedges, storm pins: wind or a slope moves it with its brakes open), isolate the drive and the thruster supply, ${WORK}`,
-  ],
-  drive: [
-    JUDGEMENT,
-    `Before brake work make the drive unable to turn (an inclined conveyor under load runs back when its brake opens), isolate the drive and the thruster supply, ${WORK}`,
-  ],
-  caliper: [
-    JUDGEMENT,
-    `Never work under a suspended load or on a drive that can run back: land the load, secure the machine or lock the disc before brake work, isolate the drive and the release unit supply, ${WORK}`,
-  ],
-} as const satisfies Record<string, readonly string[]>;
+  hoist: cautions('hoist', 'thruster'),
+  travel: cautions('travel', 'thruster'),
+  drive: cautions('drive', 'thruster'),
+  caliper: cautions('any', 'release unit'),
+};
 
 // Every caution an evaluation has carried, stored ones included (before each sheet had its own,
 // all carried the hoist's).

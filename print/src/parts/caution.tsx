@@ -1,29 +1,17 @@
 import { View } from '@react-pdf/renderer';
+import { rotorOf, securingCaution } from '@holdfast/calc';
 import { Text } from '../text.js';
-import type { BrakeRotor } from '@holdfast/calc';
 import type { TextMeasure } from '../measure.js';
 import { colours } from '../theme.js';
 
 // The check items of a field record are worded by the same rule (server/src/calc/field-targets.ts).
-import { rotorOf } from '@holdfast/calc';
 export { rotorOf, type BrakeRotor } from '@holdfast/calc';
 
-/**
- * What holds the load still while the brake is open, by sheet type: a hoist's load hangs, a travel
- * drive can be pushed by the wind or roll on a slope, an inclined conveyor runs back under load.
- * The caliper and disc-spring sheets serve any of these, so they name them all.
- */
-function securingLine(sheetTypeId: string, rotor: BrakeRotor): string {
-  switch (sheetTypeId) {
-    case 'hoist-shoe-brake':
-      return `Never work under a suspended load. Before brake work land the load or lock the ${rotor}: nothing on the hook (no ladle, no load).`;
-    case 'travel-shoe-brake':
-      return 'Before brake work secure the crane or trolley against moving: rail clamps or wedges set, storm pins in. Wind or a slope moves a crane whose brakes are open.';
-    case 'drive-shoe-brake':
-      return `Before brake work make the drive unable to turn: an inclined conveyor under load runs back when its brake opens. Unload or block the belt, or lock the ${rotor}.`;
-    default:
-      return `Never work under a suspended load or on a drive that can run back. Before brake work land the load, secure the machine against moving or lock the ${rotor}.`;
-  }
+/** How the load is secured, in calc's words; on a hoist also that nothing may hang from the hook. */
+function securingLine(sheetTypeId: string): string {
+  const hook =
+    sheetTypeId === 'hoist-shoe-brake' ? '; nothing on the hook (no ladle, no load)' : '';
+  return `${securingCaution(sheetTypeId)}${hook}.`;
 }
 
 /**
@@ -38,7 +26,7 @@ export function cautionLines(sheetTypeId: string): string[] {
   return [
     'These results support, and never replace, the judgement of a competent engineer.',
     "The governing standard, the brake maker's data, local codes and licensed practice decide where they differ from this sheet.",
-    securingLine(sheetTypeId, rotor),
+    securingLine(sheetTypeId),
     `Isolate and lock out the drive and, separately, the ${opener} supply: an energised ${opener} opens the brake.`,
     `Keep hands clear of the arms and levers while the ${opener} can be energised. Adjust one brake at a time.`,
     `The ${rotor} and the ${opener === 'thruster' ? 'thruster' : 'hydraulic'} oil can be hot after running: stop the drive and let them cool.`,

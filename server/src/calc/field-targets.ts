@@ -56,8 +56,9 @@ const CHECK_MINIMUM_INPUT: Partial<Record<FieldCheckKey, string>> = {
 /** A revision's minimum for a check in SI (m), or null when its sheet type has no such input. */
 function checkMinimum(sheetType: string, inputs: unknown, key: FieldCheckKey): number | null {
   const field = CHECK_MINIMUM_INPUT[key];
+  if (!field) return null;
   const def = getSheetType(sheetType)?.fields.find((f) => f.key === field);
-  const value = (inputs as Record<string, InputValue> | null)?.[field ?? ''];
+  const value = (inputs as Record<string, InputValue> | null)?.[field];
   if (!def || def.kind !== 'quantity' || !def.dimension || value === undefined) return null;
   try {
     return parseQuantity(value, def.dimension, def.key);

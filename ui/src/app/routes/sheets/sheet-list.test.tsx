@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { screen, within } from '@testing-library/react';
+import { act, cleanup, screen, waitFor, within } from '@testing-library/react';
 import type { Register, User } from '@holdfast/shared';
 import { makeRegister, registerPositionId, testUsers } from '../../../testing/fixtures';
 import { mockFetch } from '../../../testing/mock-fetch';
@@ -7,11 +7,16 @@ import { renderRoutes } from '../../../testing/render';
 import { Component as SheetList } from './sheet-list';
 
 function renderAt(route: string, register: Register, user: User = testUsers.engineer) {
-  mockFetch({
+  const mock = mockFetch({
     'GET /api/register': { body: register },
     'GET /api/sheets': { body: { items: [], total: 0, page: 1, pageSize: 25 } },
   });
   renderRoutes([{ path: '/sheets', Component: SheetList }], { user, route });
+  // Until the register has arrived no dialog can open: wait for it, then let the page render.
+  return async () => {
+    await waitFor(() => expect(mock.callsTo('GET /api/register')).toHaveLength(1));
+    await act(() => new Promise((r) => setTimeout(r, 50)));
+  };
 }
 
 describe('sheet list: starting a sheet from the equipment page', () => {
@@ -30,9 +35,19 @@ describe('sheet list: starting a sheet from the equipment page', () => {
     expect(await within(dialog).findByDisplayValue('Shoe brake on a travel drive')).toBeVisible();
   });
 
-  it('opens nothing for a viewer or an unknown position', async () => {
-    renderAt(`/sheets?new=${registerPositionId}`, makeRegister([]), testUsers.viewer);
-    expect(await screen.findByRole('heading', { name: 'Sheets' })).toBeInTheDocument();
+  it('opens nothing for a viewer or for an unknown position, once the register is there', async () => {
+    // The same wait shows the dialog to an engineer, so the wait is long enough to see one.
+    let settle = renderAt(`/sheets?new=${registerPositionId}`, makeRegister([]));
+    await settle();
+    expect(screen.getByRole('dialog', { name: 'New calculation sheet' })).toBeVisible();
+    cleanup();
+    settle = renderAt(`/sheets?new=${registerPositionId}`, makeRegister([]), testUsers.viewer);
+    await settle();
+    expect(screen.getByRole('heading', { name: 'Sheets' })).toBeInTheDocument();
+    expect(screen.queryByRole('dialog')).toBeNull();
+    cleanup();
+    settle = renderAt('/sheets?new=00000000-0000-4000-8000-000000000000', makeRegister([]));
+    await settle();
     expect(screen.queryByRole('dialog')).toBeNull();
   });
 });

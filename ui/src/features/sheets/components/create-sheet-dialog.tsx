@@ -49,16 +49,18 @@ export function CreateSheetDialog({
   const [errors, setErrors] = useState<Record<string, string>>({});
   const create = useCreateSheet();
 
-  const pickPosition = (id: string | null) => {
+  const pickPosition = (id: string | null, keepType = typeChosen) => {
     setPositionId(id);
-    const suggested = id && !typeChosen ? sheetTypeFor?.(id) : null;
+    const suggested = id && !keepType ? sheetTypeFor?.(id) : null;
     if (suggested) setSheetType(suggested);
   };
 
   useEffect(() => {
     if (!opened) return;
     setErrors({});
-    if (initialPositionId) pickPosition(initialPositionId);
+    // Each opening suggests afresh: a type picked for an earlier sheet says nothing of this one.
+    setTypeChosen(false);
+    if (initialPositionId) pickPosition(initialPositionId, false);
     // Only opening the dialog (with or without a position to start on) resets it.
   }, [opened, initialPositionId]); // eslint-disable-line react-hooks/exhaustive-deps
 
@@ -102,7 +104,7 @@ export function CreateSheetDialog({
           placeholder="Choose a position"
           data={positions}
           value={positionId}
-          onChange={pickPosition}
+          onChange={(id) => pickPosition(id)}
           searchable
           required
           error={errors.positionId}
