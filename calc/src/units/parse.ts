@@ -65,6 +65,10 @@ export function parseQuantity<D extends Dimension>(
   }
   const c = resolveUnit(unit, dimension, field);
   const si = value * c.factor + c.offset;
+  // 1e308 t is a finite number but not a finite mass in kg: say so rather than quote Infinity.
+  if (!Number.isFinite(si)) {
+    throw new CalcInputError([{ field, message: `${value} ${unit} is too large to work with` }]);
+  }
   if (dimension === 'temperature' && si < 0) {
     throw new CalcInputError([{ field, message: 'temperature is below absolute zero' }]);
   }

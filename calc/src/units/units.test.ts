@@ -57,6 +57,15 @@ describe('parseQuantity', () => {
     }
   });
 
+  it('refuses a finite value that overflows in SI, quoting what was typed', () => {
+    expect(() => parseQuantity({ value: 1e308, unit: 't' }, 'mass', 'load')).toThrow(
+      expect.objectContaining({
+        fields: [{ field: 'load', message: '1e+308 t is too large to work with' }],
+      }),
+    );
+    expect(parseQuantity({ value: 1e300, unit: 't' }, 'mass', 'load')).toBeCloseTo(1e303, -290);
+  });
+
   it('splits number and unit text', () => {
     expect(parseQuantityText('11.8in')).toEqual({ value: 11.8, unit: 'in' });
     expect(parseQuantityText(' -2.5e3  N ')).toEqual({ value: -2500, unit: 'N' });

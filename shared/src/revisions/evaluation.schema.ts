@@ -16,15 +16,35 @@ export type RevisionState = z.infer<typeof revisionStateSchema>;
 export const unitSystemSchema = z.enum(['SI', 'US']);
 
 export const quantitySchema = z
-  .object({ value: z.number().finite(), unit: z.string().min(1) })
+  .object({ value: z.number().finite(), unit: z.string().min(1, 'must name a unit') })
   .strict();
 
-export const inputValueSchema = z.union([
-  quantitySchema,
-  z.number().finite(),
-  z.string(),
-  z.boolean(),
-]);
+/**
+ * Why a typed input has none of the accepted shapes, in words a client can act on: a union's
+ * default ("Invalid input") does not say which part of `{ value, unit }` was wrong.
+ */
+export function inputShapeProblem(input: unknown): string {
+  const example = 'e.g. { "value": 9000, "unit": "kg" }';
+  if (typeof input === 'number') return 'must be a finite number';
+  if (input === null || typeof input !== 'object' || Array.isArray(input)) {
+    return `must be a number, a choice, yes/no, or a value with its unit (${example})`;
+  }
+  const o = input as Record<string, unknown>;
+  const extra = Object.keys(o).filter((k) => k !== 'value' && k !== 'unit');
+  if (extra.length > 0) {
+    const names = extra.map((k) => `"${k}"`).join(', ');
+    return `a value with its unit has only "value" and "unit", not ${names}`;
+  }
+  if (typeof o.value !== 'number' || !Number.isFinite(o.value)) {
+    return `"value" must be a finite number (${example})`;
+  }
+  return `"unit" must name a unit (${example})`;
+}
+
+export const inputValueSchema = z.union(
+  [quantitySchema, z.number().finite(), z.string(), z.boolean()],
+  { error: (issue) => inputShapeProblem(issue.input) },
+);
 
 /**
  * A sheet's inputs exactly as typed. The shape per field is checked by the calc core on submit
