@@ -1,3 +1,4 @@
+import './validation/messages.js';
 export * from './api-error.js';
 export * from './text/plain-text.js';
 export * from './users/user.schema.js';
