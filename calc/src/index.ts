@@ -92,6 +92,8 @@ export {
   type CriterionSpec,
 } from './criteria/catalogue.js';
 export { sheetTypes, getSheetType, demoInputs, fieldStart } from './sheets/registry.js';
+export { settingBands } from './sheets/setting-band.js';
+export { bandOf, bandSentence, rowVerdict } from './sheets/setting-band-words.js';
 export { SHEET_TYPE_IDS, DIMENSION_IDS, type SheetTypeId } from './ids.js';
 export {
   closestKey,

@@ -1,4 +1,5 @@
 import {
+  bandOf,
   getSheetType,
   settingTolerance,
   settingPrecision,
@@ -13,6 +14,7 @@ import { groupFieldSettings, type DiscStackSetup } from './field-card-groups.js'
 import { qty } from './format.js';
 import { Caution, rotorOf, type BrakeRotor } from './parts/caution.js';
 import { SettingTable } from './parts/field-settings.js';
+
 import { Heading, Table } from './parts/table.js';
 import type { PrintableSheet, PrintUnitSystem } from './printable-sheet.js';
 import { Frame } from './sheet-document.js';
@@ -201,7 +203,12 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
                 </Heading>
                 <SettingsWithBoxes items={g.spring} system={system} tolerance={tolerance} />
                 {g.springTables.map((t) => (
-                  <SettingTable key={t.id} table={t} system={system} />
+                  <SettingTable
+                    key={t.id}
+                    table={t}
+                    system={system}
+                    band={bandOf(sheet.evaluation ?? {}, t.id)}
+                  />
                 ))}
               </View>
             )}
@@ -239,7 +246,12 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
               </View>
             )}
             {g.otherTables.map((t) => (
-              <SettingTable key={t.id} table={t} system={system} />
+              <SettingTable
+                key={t.id}
+                table={t}
+                system={system}
+                band={bandOf(sheet.evaluation ?? {}, t.id)}
+              />
             ))}
           </>
         )}

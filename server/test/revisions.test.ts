@@ -108,6 +108,13 @@ describe('revisions: server-side evaluation, validation, justification, audit', 
       );
     }
     expect(submitted.evaluation.pass).toBe(expected.pass);
+    // The setting table goes to the record checked row by row, with the band around the set value.
+    expect(submitted.evaluation.settingBands).toEqual(expected.settingBands);
+    const [band] = submitted.evaluation.settingBands;
+    const table = submitted.evaluation.tables.find((t: { id: string }) => t.id === band.tableId);
+    expect(band.failing).toHaveLength(table.rows.length);
+    expect(band.low).toBeLessThanOrEqual(band.set);
+    expect(band.high).toBeGreaterThanOrEqual(band.set);
   });
 
   it('answers bad input with 400 naming inputs.<field> and keeps the stored draft', async () => {

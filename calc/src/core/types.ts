@@ -179,6 +179,12 @@ export interface SheetEvaluation {
   /** True when every check passes. */
   pass: boolean;
   /**
+   * Each setting table checked row by row against the whole sheet (see sheets/setting-band.ts).
+   * Not set by `evaluate` (it evaluates the sheet once per row); attached by the server to the
+   * evaluation it stores. Absent on evaluations stored before it was kept.
+   */
+  settingBands?: SettingBand[];
+  /**
    * Keys of the criteria-set values this evaluation read, in the set's order: the printed sheet
    * lists these and not the set's other values. Absent on evaluations stored before it was kept.
    */
@@ -189,6 +195,25 @@ export interface SheetEvaluation {
    * revision is submitted, so the record and its printout show exactly what was calculated.
    */
   resolvedInputs?: ResolvedInput[];
+}
+
+/** A setting table's rows checked against every check of the sheet. */
+export interface SettingBand {
+  /** The table, e.g. 'spring-setting'. */
+  tableId: string;
+  /** The setting the sheet is worked out for (SI, as the table's first column). */
+  set: number;
+  /** Per row of the table, in order: labels of the checks that fail with the sheet set to that row. */
+  failing: string[][];
+  /**
+   * Around the set value, the lowest and highest setting at which no check fails that passes at
+   * the set value (found to within 0.1 % of it), and the checks that end the band there; null
+   * where the band runs to the end of the table (the torque and adjustable-range limits).
+   */
+  low: number;
+  high: number;
+  lowLimitedBy: string[] | null;
+  highLimitedBy: string[] | null;
 }
 
 /** One value of an acceptance-criteria set, with where it comes from. */

@@ -1,4 +1,11 @@
-import { settingPrecision, type SheetEvaluation } from '@holdfast/calc';
+import {
+  bandOf,
+  bandSentence,
+  rowVerdict,
+  settingPrecision,
+  type SettingBand,
+  type SheetEvaluation,
+} from '@holdfast/calc';
 import { View } from '@react-pdf/renderer';
 import { Text } from '../text.js';
 import { pct, qtyParts, qty, unitLabel } from '../format.js';
@@ -16,26 +23,33 @@ export function SettingTable(props: {
   table: EvalTable;
   system: PrintUnitSystem;
   extra?: Column[];
+  /** The rows checked against the whole sheet, when the record carries it. */
+  band?: SettingBand;
 }) {
-  const { table, system } = props;
+  const { table, system, band } = props;
   const columns = settingColumns(table, system);
   const extra = props.extra ?? [];
   return (
     <View>
       <Heading level={2}>{table.title}</Heading>
+      {band && <Text style={{ fontSize: 7.5, marginBottom: 3 }}>{bandSentence(band, system)}</Text>}
       <Table
-        columns={[...columns, ...extra]}
-        rows={table.rows.map((row) => [
+        columns={[...columns, ...(band ? [VERDICT_COLUMN] : []), ...extra]}
+        rows={table.rows.map((row, k) => [
           ...table.columns.map(
             (c) =>
               qtyParts(row[c.key], c.dimension, system, settingPrecision(c.key, c.dimension)).text,
           ),
+          ...(band ? [rowVerdict(band.failing[k])] : []),
           ...extra.map(() => ''),
         ])}
       />
     </View>
   );
 }
+
+/** The column saying, per row, whether every check of the sheet passes at that setting. */
+const VERDICT_COLUMN: Column = { title: 'Other checks at this setting', flex: 2.2 };
 
 function settingColumns(table: EvalTable, system: PrintUnitSystem): Column[] {
   return table.columns.map((c) => {
@@ -74,17 +88,27 @@ export function fieldSettingsBlocks(ctx: BlockContext, sheet: PrintableSheet): F
     );
   }
   ev.tables.forEach((t) => {
+    const band = bandOf(ev, t.id);
     blocks.push(
       headingBlock(ctx, `${t.id}-h`, t.title, 2),
+      ...(band
+        ? [
+            paragraphBlock(ctx, `${t.id}-band`, bandSentence(band, system), {
+              fontSize: 7.5,
+              marginBottom: 3,
+            }),
+          ]
+        : []),
       ...tableBlocks(ctx, t.id, {
         continuedTitle: t.title,
-        columns: settingColumns(t, system),
-        rows: t.rows.map((row) =>
-          t.columns.map(
+        columns: [...settingColumns(t, system), ...(band ? [VERDICT_COLUMN] : [])],
+        rows: t.rows.map((row, k) => [
+          ...t.columns.map(
             (c) =>
               qtyParts(row[c.key], c.dimension, system, settingPrecision(c.key, c.dimension)).text,
           ),
-        ),
+          ...(band ? [rowVerdict(band.failing[k])] : []),
+        ]),
       }),
     );
   });

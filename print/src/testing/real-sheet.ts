@@ -4,6 +4,7 @@ import {
   TRAVEL_DRIVE,
   demoInputs,
   getSheetType,
+  settingBands,
   type CriteriaSet,
   type SheetInputs,
 } from '@holdfast/calc';
@@ -38,6 +39,8 @@ export function realPrintable(o: {
   const criteriaSet = criteriaFor(type.id);
   const inputs = o.inputs ?? demoInputs(type);
   const evaluation = type.evaluate(inputs, criteriaSet);
+  // As the server stores it: the setting tables checked row by row against the whole sheet.
+  evaluation.settingBands = settingBands(type, inputs, criteriaSet, evaluation);
   const approvedLike = o.state === 'approved' || o.state === 'superseded';
   const author = { name: 'Dana Demo', initials: 'DD' };
   const checker = { name: 'Chris Checkwell', initials: 'CC' };

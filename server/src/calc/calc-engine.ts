@@ -5,6 +5,7 @@ import {
   fieldStart,
   missingInputs,
   resolveInputs,
+  settingBands,
   unknownInputKeys,
   type ResolvedInput,
   getSheetType,
@@ -117,7 +118,12 @@ export function evaluateSheet(
   inputs: SheetInputs,
   criteria: CriteriaSet,
 ): SheetEvaluation {
-  return sheetTypeDefinition(sheetType).evaluate(structuredClone(inputs), criteria);
+  const def = sheetTypeDefinition(sheetType);
+  const evaluation = def.evaluate(structuredClone(inputs), criteria);
+  // Stored with the evaluation (and hashed with it): the printed setting table and the field card
+  // say which of its rows pass every check, and the band around the set value where all do.
+  evaluation.settingBands = settingBands(def, structuredClone(inputs), criteria, evaluation);
+  return evaluation;
 }
 
 /** Keys in the inputs that the sheet type does not declare, with a suggestion where close. */

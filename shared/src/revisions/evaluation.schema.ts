@@ -160,4 +160,17 @@ export const sheetEvaluationSchema: z.ZodType<SheetEvaluation> = z.object({
   pass: z.boolean(),
   criteriaUsed: z.array(z.string()).optional(),
   resolvedInputs: z.array(resolvedInputSchema).optional(),
+  settingBands: z
+    .array(
+      z.object({
+        tableId: z.string(),
+        set: z.number(),
+        failing: z.array(z.array(z.string())),
+        low: z.number(),
+        high: z.number(),
+        lowLimitedBy: z.array(z.string()).nullable(),
+        highLimitedBy: z.array(z.string()).nullable(),
+      }),
+    )
+    .optional(),
 });

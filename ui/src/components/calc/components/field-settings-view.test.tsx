@@ -85,4 +85,70 @@ describe('FieldSettingsView', () => {
     const cells = within(table).getAllByRole('cell');
     expect(cells.map((c) => c.textContent)).toEqual(['222.5', '218.5']);
   });
+
+  it('says where every check passes and marks each row that fails one', () => {
+    const table = {
+      id: 'spring-setting',
+      title: 'Spring setting table (new lining)',
+      columns: [
+        { key: 'springForce', label: 'Spring force', unit: 'N', dimension: 'force' as const },
+      ],
+      rows: [{ springForce: 1000 }, { springForce: 1150 }, { springForce: 1300 }],
+    };
+    const band = {
+      tableId: 'spring-setting',
+      set: 1150,
+      failing: [
+        ['Stopping distance at the load ≤ allowed'],
+        [],
+        ['p·v when the brake sets ≤ limit'],
+      ],
+      low: 1113.7,
+      high: 1176.4,
+      lowLimitedBy: ['Stopping distance at the load ≤ allowed'],
+      highLimitedBy: ['p·v when the brake sets ≤ limit'],
+    };
+    renderWithProviders(
+      <FieldSettingsView
+        evaluation={makeEvaluation({ tables: [table] })}
+        bands={[band]}
+        unitSystem="SI"
+      />,
+    );
+    expect(screen.getByTestId('setting-band')).toHaveTextContent(
+      'Every check of this sheet passes with the spring force from 1114 N to 1176 N',
+    );
+    const grid = screen.getByRole('table', { name: table.title });
+    expect(
+      within(grid).getByRole('columnheader', { name: 'Other checks at this setting' }),
+    ).toBeTruthy();
+    const rows = within(grid).getAllByRole('row').slice(1);
+    expect(rows.map((r) => r.lastElementChild?.textContent)).toEqual([
+      'fails: Stopping distance at the load ≤ allowed',
+      'every check passes',
+      'fails: p·v when the brake sets ≤ limit',
+    ]);
+  });
+
+  it('shows no verdict column for a record stored before bands were kept', () => {
+    renderWithProviders(
+      <FieldSettingsView
+        evaluation={makeEvaluation({
+          tables: [
+            {
+              id: 'spring-setting',
+              title: 'Old table',
+              columns: [
+                { key: 'springForce', label: 'Spring force', unit: 'N', dimension: 'force' },
+              ],
+              rows: [{ springForce: 1000 }],
+            },
+          ],
+        })}
+        unitSystem="SI"
+      />,
+    );
+    expect(screen.queryByTestId('setting-band')).toBeNull();
+    expect(screen.queryByRole('columnheader', { name: 'Other checks at this setting' })).toBeNull();
+  });
 });

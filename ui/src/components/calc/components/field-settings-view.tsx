@@ -1,5 +1,12 @@
 import { Stack, Table, Text, Title } from '@mantine/core';
-import type { Dimension, SheetEvaluation } from '@holdfast/calc';
+import {
+  bandOf,
+  bandSentence,
+  rowVerdict,
+  type Dimension,
+  type SettingBand,
+  type SheetEvaluation,
+} from '@holdfast/calc';
 import { presentSetting, presentSI, type UnitSystem } from '../utils/units';
 
 /**
@@ -8,9 +15,12 @@ import { presentSetting, presentSI, type UnitSystem } from '../utils/units';
  */
 export function FieldSettingsView({
   evaluation,
+  bands,
   unitSystem,
 }: {
   evaluation: SheetEvaluation;
+  /** The setting tables checked row by row against the whole sheet, when known. */
+  bands?: SettingBand[];
   unitSystem: UnitSystem;
 }) {
   const { fieldSettings, tables } = evaluation;
@@ -45,11 +55,17 @@ export function FieldSettingsView({
           const unit = presentSI(1, c.dimension as Dimension, unitSystem).unit;
           return { ...c, unitLabel: unit };
         });
+        const band = bandOf({ settingBands: bands }, table.id);
         return (
           <div key={table.id}>
             <Title order={4} size="h6" mb={4}>
               {table.title}
             </Title>
+            {band ? (
+              <Text size="sm" mb={6} data-testid="setting-band">
+                {bandSentence(band, unitSystem)}
+              </Text>
+            ) : null}
             <Table withTableBorder striped fz="sm" aria-label={table.title}>
               <Table.Thead>
                 <Table.Tr>
@@ -59,6 +75,7 @@ export function FieldSettingsView({
                       {c.unitLabel ? ` (${c.unitLabel})` : ''}
                     </Table.Th>
                   ))}
+                  {band ? <Table.Th>Other checks at this setting</Table.Th> : null}
                 </Table.Tr>
               </Table.Thead>
               <Table.Tbody>
@@ -76,6 +93,14 @@ export function FieldSettingsView({
                         }
                       </Table.Td>
                     ))}
+                    {band ? (
+                      <Table.Td
+                        fz="xs"
+                        c={band.failing[i]?.length ? 'var(--mantine-color-red-8)' : undefined}
+                      >
+                        {rowVerdict(band.failing[i])}
+                      </Table.Td>
+                    ) : null}
                   </Table.Tr>
                 ))}
               </Table.Tbody>

@@ -1,6 +1,6 @@
-import { createContext, lazy, Suspense, useContext, type ReactNode } from 'react';
+import { createContext, lazy, Suspense, useContext, useMemo, type ReactNode } from 'react';
 import { Skeleton, Tabs } from '@mantine/core';
-import type { CheckDriver, SectionDefinition, SheetEvaluation } from '@holdfast/calc';
+import type { CheckDriver, SectionDefinition, SettingBand, SheetEvaluation } from '@holdfast/calc';
 import { CheckList, type CheckListProps } from './check-list';
 import { DerivationList } from './derivation-list';
 import { FieldSettingsView } from './field-settings-view';
@@ -11,6 +11,14 @@ const EvaluationCharts = lazy(() => import('./evaluation-charts'));
 
 /** The evaluation the open tab shows (the current one, or the last valid one dimmed). */
 export const EvaluationShown = createContext<SheetEvaluation | null>(null);
+
+/**
+ * Works out the setting bands of a live evaluation (the server stores them with a saved one). It
+ * evaluates the sheet once per table row, so it runs only while the field settings tab is open.
+ */
+export const LiveSettingBands = createContext<
+  ((evaluation: SheetEvaluation) => SettingBand[] | undefined) | null
+>(null);
 
 function useShown(): SheetEvaluation {
   const shown = useContext(EvaluationShown);
@@ -105,5 +113,8 @@ function ShownCharts({ unitSystem }: { unitSystem: UnitSystem }) {
 }
 
 function ShownFieldSettings({ unitSystem }: { unitSystem: UnitSystem }) {
-  return <FieldSettingsView evaluation={useShown()} unitSystem={unitSystem} />;
+  const shown = useShown();
+  const live = useContext(LiveSettingBands);
+  const bands = useMemo(() => shown.settingBands ?? live?.(shown), [shown, live]);
+  return <FieldSettingsView evaluation={shown} bands={bands} unitSystem={unitSystem} />;
 }

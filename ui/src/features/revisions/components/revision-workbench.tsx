@@ -3,6 +3,7 @@ import { Alert, Box, Stack } from '@mantine/core';
 import { IconLock } from '@tabler/icons-react';
 import {
   checkDrivers,
+  settingBands,
   type CriteriaSet,
   type SheetEvaluation,
   type SheetTypeDefinition,
@@ -10,6 +11,7 @@ import {
 import type { Revision } from '@holdfast/shared';
 import { InputSections } from '../../../components/calc/components/input-sections';
 import { ResultsPanel } from '../../../components/calc/components/results-panel';
+import { LiveSettingBands } from '../../../components/calc/components/results-tabs';
 import { useLiveEvaluation } from '../../../components/calc/hooks/use-live-evaluation';
 import { useNumberFormat } from '../../../components/calc/hooks/use-number-format';
 import { checkField, fieldMessages } from '../../../components/calc/utils/field-check';
@@ -65,6 +67,19 @@ export function RevisionWorkbench(props: RevisionWorkbenchProps) {
   const stored = !editable && revision.evaluation ? revision.evaluation : null;
   const evaluation = stored ?? live.evaluation;
   const { serverErrors } = autosave;
+  const liveEvaluation = live.evaluation;
+  const bandsOfLive = useCallback(
+    (shown: SheetEvaluation) => {
+      // Only the evaluation of the inputs as they stand (not the dimmed last good one).
+      if (!criteria || shown !== liveEvaluation) return undefined;
+      try {
+        return settingBands(sheetType, content.inputs, criteria, shown);
+      } catch {
+        return undefined; // a fault in the core shows where the evaluation itself is shown
+      }
+    },
+    [sheetType, content.inputs, criteria, liveEvaluation],
+  );
   const coreErrors = live.fieldErrors;
   const errors = useMemo(
     () =>
@@ -183,25 +198,27 @@ export function RevisionWorkbench(props: RevisionWorkbenchProps) {
           />
         </Stack>
         <Box className={classes.results} tabIndex={-1} data-testid="workbench-results">
-          <ResultsPanel
-            evaluation={evaluation}
-            stale={stored ? null : live.lastGood}
-            sections={sheetType.sections}
-            unitSystem={unitSystem}
-            durationMs={stored || live.runs === 0 ? undefined : live.durationMs}
-            origin={
-              stored
-                ? // A draft or returned revision read by someone else was stored when last saved.
-                  `Stored at ${revision.state === 'draft' || revision.state === 'returned' ? 'the last save' : 'submission'} (${revision.coreVersion ?? 'core'})`
-                : 'Recalculated live in your browser'
-            }
-            failure={stored ? null : live.failure}
-            invalidCount={stored ? 0 : invalidCount}
-            renderCheckAside={props.renderCheckAside}
-            renderStepAside={props.renderStepAside}
-            findDrivers={criteria ? findDrivers : undefined}
-            criteria={criteria}
-          />
+          <LiveSettingBands.Provider value={bandsOfLive}>
+            <ResultsPanel
+              evaluation={evaluation}
+              stale={stored ? null : live.lastGood}
+              sections={sheetType.sections}
+              unitSystem={unitSystem}
+              durationMs={stored || live.runs === 0 ? undefined : live.durationMs}
+              origin={
+                stored
+                  ? // A draft or returned revision read by someone else was stored when last saved.
+                    `Stored at ${revision.state === 'draft' || revision.state === 'returned' ? 'the last save' : 'submission'} (${revision.coreVersion ?? 'core'})`
+                  : 'Recalculated live in your browser'
+              }
+              failure={stored ? null : live.failure}
+              invalidCount={stored ? 0 : invalidCount}
+              renderCheckAside={props.renderCheckAside}
+              renderStepAside={props.renderStepAside}
+              findDrivers={criteria ? findDrivers : undefined}
+              criteria={criteria}
+            />
+          </LiveSettingBands.Provider>
         </Box>
       </div>
       <ConflictDialog

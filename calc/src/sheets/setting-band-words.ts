@@ -1,0 +1,55 @@
+import type { SettingBand, SheetEvaluation } from '../core/types.js';
+import { toDisplay, type UnitSystem } from '../units/display.js';
+
+/** The band stored with a setting table, if the evaluation carries one (newer records do). */
+export function bandOf(
+  ev: Pick<SheetEvaluation, 'settingBands'>,
+  tableId: string,
+): SettingBand | undefined {
+  return ev.settingBands?.find((b) => b.tableId === tableId);
+}
+
+/**
+ * A band end to four figures in the unit system, rounded into the band (the low end up, the high
+ * end down), so the printed figure itself still passes every check.
+ */
+function bandEnd(v: number, end: 'low' | 'high', system: UnitSystem): string {
+  const d = toDisplay(v, 'force', system);
+  const x = d.value;
+  if (!(x > 0)) return d.text;
+  const digits = Math.floor(Math.log10(x)) - 3;
+  const step = 10 ** digits;
+  const inward = (end === 'low' ? Math.ceil(x / step - 1e-9) : Math.floor(x / step + 1e-9)) * step;
+  return `${inward.toFixed(Math.max(0, -digits))} ${d.label}`;
+}
+
+/**
+ * Where every check of the sheet holds, in one paragraph: a setting table's rows come from the
+ * torque limits alone, so a row inside them can still fail another check (p·v, the thruster, the
+ * stop). Printed above the table on the sheet and the field card, and shown in the app.
+ */
+export function bandSentence(band: SettingBand, system: UnitSystem): string {
+  const what = band.tableId === 'clamp-setting' ? 'clamp force' : 'spring force';
+  const below = band.lowLimitedBy
+    ? ` Below it fails: ${band.lowLimitedBy.join('; ')}.`
+    : ' Below it the table ends.';
+  const above = band.highLimitedBy
+    ? ` Above it fails: ${band.highLimitedBy.join('; ')}.`
+    : ' Above it the table ends.';
+  return (
+    `Every check of this sheet passes with the ${what} from ${bandEnd(band.low, 'low', system)} ` +
+    `to ${bandEnd(band.high, 'high', system)} (worked out at ${toDisplay(band.set, 'force', system).text}).` +
+    below +
+    above
+  );
+}
+
+/** A row's verdict, short enough for a table cell ('' when the record carries none). */
+export function rowVerdict(failing: readonly string[] | undefined): string {
+  if (!failing) return '';
+  if (failing.length === 0) return 'every check passes';
+  const shown = failing.slice(0, 2).join('; ');
+  return failing.length > 2
+    ? `fails: ${shown} (and ${failing.length - 2} more)`
+    : `fails: ${shown}`;
+}
