@@ -94,6 +94,7 @@ export {
 export { sheetTypes, getSheetType, demoInputs, fieldStart } from './sheets/registry.js';
 export { settingBands } from './sheets/setting-band.js';
 export { bandOf, bandSentence, rowVerdict } from './sheets/setting-band-words.js';
+export { failAdvice } from './sheets/checks.js';
 export { SHEET_TYPE_IDS, DIMENSION_IDS, type SheetTypeId } from './ids.js';
 export {
   closestKey,

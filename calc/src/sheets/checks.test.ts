@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { makeCheck } from './checks.js';
+import { failAdvice, makeCheck } from './checks.js';
 
 const spec = {
   id: 'stop-distance',
@@ -33,5 +33,15 @@ describe('makeCheck', () => {
   it('prints more figures when value and limit would read the same', () => {
     const c = makeCheck({ ...spec, value: 0.25001 });
     expect(c.message).toMatch(/250\.010 mm is not ≤ 250\.000 mm/);
+  });
+});
+
+describe('failAdvice', () => {
+  it('keeps only what a failed message adds to its label and numbers', () => {
+    const failed = makeCheck({ ...spec, value: 0.26, failHint: 'Set the brake sooner.' });
+    expect(failAdvice(failed.message)).toBe('Set the brake sooner.');
+    expect(failAdvice(makeCheck({ ...spec, value: 0.26 }).message)).toBeNull();
+    expect(failAdvice(makeCheck(spec).message)).toBeNull();
+    expect(failAdvice(undefined)).toBeNull();
   });
 });

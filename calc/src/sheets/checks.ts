@@ -86,6 +86,15 @@ function checkMessage(spec: CheckSpec, utilisation: number, pass: boolean): stri
     : `${spec.label}: ${v} is not ${rel} ${l} — FAIL.${spec.failHint ? ` ${spec.failHint}` : ''}`;
 }
 
+/**
+ * What a failed check's message adds to its label, value and limit: the advice written after
+ * "— FAIL." (null when there is none, or the check passed).
+ */
+export function failAdvice(message: string | undefined): string | null {
+  const advice = message?.split(' — FAIL.')[1]?.trim();
+  return advice ? advice : null;
+}
+
 /** A check from a formula function (LimitCheck) placed in a sheet section, with optional advice. */
 export function sheetCheck(lc: LimitCheck, section: string, failHint?: string): CheckResult {
   return makeCheck({

@@ -1,5 +1,6 @@
 import {
   bandOf,
+  failAdvice,
   bandSentence,
   rowVerdict,
   settingPrecision,
@@ -129,7 +130,8 @@ export function justificationBlocks(ctx: BlockContext, sheet: PrintableSheet): F
   ];
   failed.forEach((c, i) => {
     const head = `FAIL — ${c.label}: ${qty(c.value, c.dimension, sheet.unitSystem)} against ${limitText(c, sheet)} (${pct(c.utilisation)})`;
-    const detail = c.message && c.message !== c.label ? c.message : null;
+    // The head already gives the label, value and limit; of the message only its advice is new.
+    const detail = failAdvice(c.message);
     const height =
       m.height(head, width, { ...body, weight: 700 }) +
       (detail ? m.height(detail, width, body) : 0) +
