@@ -18,5 +18,9 @@
  * overhauling) where it read "to hoist" and "while lowering", and the travel, drive and caliper
  * sheets carry cautions of their own where they carried the hoist's; stored evaluations keep
  * their text.
+ * 1.3.0: travel wheel adhesion is worked out from the force the braked wheels carry to the rail,
+ * F_rail = m·a_L + n_br·M_d·ω/v (the deceleration force plus the force still driving the motion,
+ * slope or wind), where it took m·a_L alone and so fell as the slope steepened; with no driving
+ * torque the value is unchanged, and the derivation prints F_rail as a step of its own.
  */
-export const CORE_VERSION = '1.2.0';
+export const CORE_VERSION = '1.3.0';

@@ -36,6 +36,8 @@ export const REF = {
     '29 CFR 1910.179 (bridge/trolley brakes): stop within a distance in ft = 10 % of full-load speed in ft/min; SI form derived',
   adhesion:
     'wheel–rail adhesion: needed μ = braking force / normal load on braked wheels (statics)',
+  railForce:
+    'force balance on the travelling mass (textbook identity): the braked wheels carry m·a_L plus the force that drives the motion, F_ext = n_br·M_d·ω/v from the driving torque at each brake shaft, with no gear-efficiency credit (η = 1)',
   release: 'virtual work through the release linkage: F_th·s_th·η = F_s·s_s (statics)',
   liftedSpring:
     'linear spring (Hooke): opening the brake by the clearance ε compresses the spring by ε·r_s through the linkage travel ratio (statics)',

@@ -223,11 +223,18 @@ export function evaluateTravelShoeBrake(
     'hard-',
   );
   if (hard.stops) {
+    // The wheels carry the deceleration force and the force still driving the motion.
     const mu = adhesionNeeded(
-      q.mass(v.travelMass),
-      hard.loadDeceleration,
-      v.brakedWheels,
-      v.wheels,
+      {
+        mass: q.mass(v.travelMass),
+        loadDeceleration: hard.loadDeceleration,
+        driveTorque: q.torque(v.driveTorque),
+        brakeCount: v.brakeCount,
+        shaftSpeed: omega,
+        loadSpeed: vT,
+        brakedWheels: v.brakedWheels,
+        wheels: v.wheels,
+      },
       d,
     );
     const lim = criterion(criteria, 'adhesionLimit');

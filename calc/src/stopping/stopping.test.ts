@@ -1,17 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { stopping } from './stopping.js';
-import { adhesionNeeded, tenPercentStoppingDistance } from './limits.js';
+import { tenPercentStoppingDistance } from './limits.js';
 import { Derivation } from '../core/step.js';
 import { nearlyEqual } from '../testing/expect-close.js';
-import {
-  acceleration,
-  angularSpeed,
-  inertia,
-  mass,
-  speed,
-  time,
-  torque,
-} from '../units/quantities.js';
+import { angularSpeed, inertia, speed, time, torque } from '../units/quantities.js';
 
 const close = (a: number, b: number, rel: number) =>
   expect(nearlyEqual(a, b, rel), `${a} vs ${b}`).toBe(true);
@@ -67,9 +59,5 @@ describe('travel limits', () => {
     const v = speed((100 * 0.3048) / 60);
     close(tenPercentStoppingDistance(v) / 0.3048, 10, 1e-12);
     close(tenPercentStoppingDistance(speed(1)), 6, 1e-12);
-  });
-  it('adhesion needed at the braked wheels', () => {
-    close(adhesionNeeded(mass(50_000), acceleration(0.5), 2, 4), 0.5 / (9.80665 * 0.5), 1e-12);
-    expect(() => adhesionNeeded(mass(1), acceleration(1), 5, 4)).toThrow(/brakedWheels/);
   });
 });
