@@ -68,6 +68,12 @@ export function Chart(props: {
     ...r,
     v: r.axis === 'x' ? cx(r.value) : cy(r.value),
   }));
+  // Labels of vertical lines stand at the top, one line lower for each vertical line to their
+  // left, so two lines close together (re-adjust, reserve used up) never print over each other.
+  const xOrder = refs
+    .filter((r) => r.axis === 'x')
+    .sort((a, b) => a.v - b.v)
+    .map((r) => r.label);
   const xs = [
     ...series.flat().map((p) => p.x),
     ...markers.map((m) => m.x),
@@ -172,7 +178,7 @@ export function Chart(props: {
                 {...font}
                 fill={colours.fail}
                 x={sx(r.v) > M.left + pw * 0.7 ? sx(r.v) - 3 : sx(r.v) + 3}
-                y={M.top + 7}
+                y={M.top + 7 + 8 * xOrder.indexOf(r.label)}
                 textAnchor={sx(r.v) > M.left + pw * 0.7 ? 'end' : 'start'}
               >
                 {r.label}

@@ -35,13 +35,14 @@ export function SettingTable(props: {
       <Heading level={2}>{table.title}</Heading>
       {band && <Text style={{ fontSize: 7.5, marginBottom: 3 }}>{bandSentence(band, system)}</Text>}
       <Table
-        columns={[...columns, ...(band ? [VERDICT_COLUMN] : []), ...extra]}
+        columns={[...columns, ...(band ? [CARD_VERDICT_COLUMN] : []), ...extra]}
         rows={table.rows.map((row, k) => [
           ...table.columns.map(
             (c) =>
               qtyParts(row[c.key], c.dimension, system, settingPrecision(c.key, c.dimension)).text,
           ),
-          ...(band ? [rowVerdict(band.failing[k])] : []),
+          // The card keeps one line a row: the sentence above names the checks.
+          ...(band ? [band.failing[k]?.length ? 'no' : 'yes'] : []),
           ...extra.map(() => ''),
         ])}
       />
@@ -51,6 +52,7 @@ export function SettingTable(props: {
 
 /** The column saying, per row, whether every check of the sheet passes at that setting. */
 const VERDICT_COLUMN: Column = { title: 'Other checks at this setting', flex: 2.2 };
+const CARD_VERDICT_COLUMN: Column = { title: 'Every check passes', flex: 0.8, align: 'center' };
 
 function settingColumns(table: EvalTable, system: PrintUnitSystem): Column[] {
   return table.columns.map((c) => {
