@@ -21,6 +21,10 @@
  * 1.3.0: travel wheel adhesion is worked out from the force the braked wheels carry to the rail,
  * F_rail = m·a_L + n_br·M_d·ω/v (the deceleration force plus the force still driving the motion,
  * slope or wind), where it took m·a_L alone and so fell as the slope steepened; with no driving
- * torque the value is unchanged, and the derivation prints F_rail as a step of its own.
+ * torque the value is unchanged, and the derivation prints F_rail as a step of its own. With no
+ * number moved: the spring setting table's title speaks of the torque limits ("torque limits met
+ * from … to … N") where it said "permitted band", since other checks can fail inside it (the band
+ * where all pass is worked out apart, see sheets/setting-band.ts); the friction power at set says
+ * it is worked with the stop's own torque.
  */
 export const CORE_VERSION = '1.3.0';

@@ -95,7 +95,7 @@ describe('stroke–wear–setting chain on the shoe sheets', () => {
   });
 });
 
-describe('spring setting table: only the permitted band', () => {
+describe('spring setting table: only the torque band', () => {
   it.each([
     ['hoist', hoist, crane],
     ['travel', trav, travel],
@@ -253,7 +253,7 @@ describe('spring relaxation in service', () => {
     );
   });
 
-  it('raises the low end of the permitted band by 1/(1 − ρ_s)', () => {
+  it('raises the low end of the torque band by 1/(1 − ρ_s)', () => {
     const low = (e: typeof demo) => Number(/band (\d+)/.exec(e.tables[0]!.title)![1]);
     expect(low(demo)).toBeGreaterThan(low(without));
   });

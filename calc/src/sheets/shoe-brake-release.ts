@@ -156,7 +156,7 @@ export function shoeSettings(
     ],
     table: {
       id: 'spring-setting',
-      title: `Spring setting table: permitted band ${fmtN(lim.low)}–${fmtN(lim.high)} N (new lining)`,
+      title: `Spring setting table (new lining): torque limits met from ${fmtN(lim.low)} to ${fmtN(lim.high)} N`,
       columns: [
         { key: 'springForce', label: 'Spring force', unit: 'N', dimension: 'force' },
         { key: 'springLength', label: 'Spring length', unit: 'm', dimension: 'length' },
@@ -214,9 +214,10 @@ export function shoeSettings(
 const fmtN = (n: number) => String(Math.round(n));
 
 /**
- * The permitted band of spring forces: from the force that still gives the required torque at
- * μ min at the re-adjustment point on the drum at its wear limit, to the lower of the adjustable
- * range's top and the force at which all brakes on the train at μ max reach its rating.
+ * The torque band of spring forces (the setting table's rows): from the force that still gives
+ * the required torque at μ min at the re-adjustment point on the drum at its wear limit, to the
+ * lower of the adjustable range's top and the force at which all brakes on the train at μ max
+ * reach its rating. The other checks are not in it: see setting-band.ts.
  */
 export function permittedBand(
   v: ShoeInputs,

@@ -47,7 +47,8 @@ export const setSpeedRatioFormula = defineFormula({
 
 export const frictionPowerAtSetFormula = defineFormula({
   id: 'friction-power-at-set',
-  label: 'Friction power at the start of braking (highest heat input of the stop)',
+  label:
+    'Friction power at the start of braking, with the torque this stop is worked with (its highest heat input)',
   symbol: 'P_set',
   expression: 'M_b * omega_set',
   symbols: {
