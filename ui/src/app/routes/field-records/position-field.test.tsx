@@ -140,4 +140,39 @@ describe('a position’s field page', () => {
     expect(await screen.findByText(/signed by Teo Marsh/)).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Countersign' })).toBeNull();
   });
+
+  it('lets the fitter sign a record saved earlier and left unsigned, its values shown', async () => {
+    const draft: FieldRecord = {
+      ...signedRecord,
+      status: 'draft',
+      signed: null,
+      verificationCode: null,
+    };
+    renderAs(testUsers.technician, [], [draft]);
+    const signButton = await screen.findByRole('button', { name: 'Sign the record' });
+    expect(screen.getByRole('table', { name: 'Values measured' })).toHaveTextContent('124.3 mm');
+    mockFetch({
+      [`POST /api/field-records/${draft.id}/sign`]: { body: signedRecord },
+      [`GET /api/register/positions/${positionId}/field-records`]: {
+        body: { positionId, items: [signedRecord] },
+      },
+      [`GET /api/register/positions/${positionId}/field-state`]: { body: state },
+      'GET /api/register': { body: makeRegister([]) },
+    });
+    signButton.click();
+    expect(await screen.findByText(/signed by Teo Marsh/)).toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: 'Sign the record' })).toBeNull();
+  });
+
+  it('offers nobody else the maker’s signature', async () => {
+    const draft: FieldRecord = {
+      ...signedRecord,
+      status: 'draft',
+      signed: null,
+      verificationCode: null,
+    };
+    renderAs(testUsers.viewer, [], [draft]);
+    expect(await screen.findByText(/Set to XS-0001 rev\. B/)).toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: 'Sign the record' })).toBeNull();
+  });
 });

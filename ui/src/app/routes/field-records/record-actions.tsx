@@ -1,4 +1,4 @@
-import { Button, Group, Text } from '@mantine/core';
+import { Button, SimpleGrid, Text } from '@mantine/core';
 import { errorMessage } from '../../../lib/api-client';
 import type { useSignFieldRecord } from '../../../features/field-records/api/sign-field-record';
 import { OutboxStatus } from '../../../features/field-records/components/outbox-status';
@@ -21,7 +21,8 @@ export function RecordActions(props: {
   return (
     <>
       {entry && <OutboxStatus entry={entry} online={online} />}
-      <Group grow>
+      {/* One button a row on a phone, so neither label is cut off. */}
+      <SimpleGrid cols={{ base: 1, sm: sent ? 2 : 1 }} spacing="xs">
         {!sent && (
           <Button size="lg" onClick={props.onSave}>
             Save record
@@ -42,7 +43,7 @@ export function RecordActions(props: {
             Start another record
           </Button>
         )}
-      </Group>
+      </SimpleGrid>
       {sent && photosWaiting > 0 && !sign.isSuccess && (
         <Text size="sm">
           {photosWaiting === 1 ? '1 photo is' : `${photosWaiting} photos are`} still to be sent:

@@ -49,12 +49,25 @@ export function RecordTimeline(props: {
             showLabel="Show the values"
             hideLabel="Hide the values"
             mt={4}
-            // A record to countersign opens with its values shown: nobody signs unseen numbers.
-            defaultExpanded={props.canCountersign && r.status === 'signed'}
+            // A record to sign or countersign opens with its values shown: nobody signs unseen
+            // numbers.
+            defaultExpanded={
+              (props.canCountersign && r.status === 'signed') || mayStillSign(r, props.userId)
+            }
           >
             <RecordValues measurements={r.measurements} />
           </Spoiler>
           <Group gap="xs" mt="xs">
+            {mayStillSign(r, props.userId) && (
+              // A record saved and left unsigned (the form closed, the signal lost) is signed here.
+              <Button
+                size="md"
+                loading={sign.isPending && sign.variables?.id === r.id}
+                onClick={() => sign.mutate({ id: r.id })}
+              >
+                Sign the record
+              </Button>
+            )}
             {props.canCountersign &&
               r.status === 'signed' &&
               r.createdBy.id !== props.userId &&
@@ -92,4 +105,9 @@ export function RecordTimeline(props: {
       ))}
     </Stack>
   );
+}
+
+/** The maker of a saved, unsigned record signs it (the server holds the same rule). */
+function mayStillSign(r: FieldRecord, userId: string): boolean {
+  return r.status === 'draft' && r.createdBy.id === userId;
 }
