@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { e2eBaseUrl, e2eSkipReason, launchBrowser, type BrowserSession } from './support/browser';
+import { apiAs } from './support/api';
 import { screenshot } from './support/screenshot';
 import { signInAs } from './support/sign-in';
 
@@ -50,4 +51,29 @@ describe.skipIf(skipReason !== null)('work queue by role', () => {
       await screenshot(browser.page, `queue-${who}`);
     });
   }
+
+  it('sends a fitter who follows a link to an unapproved revision on to the one in force', async () => {
+    // A demo sheet with an approved revision and a newer one not yet approved.
+    const list = await apiAs<{
+      items: {
+        id: string;
+        latest: { id: string; state: string };
+        approved: { label: string } | null;
+      }[];
+    }>(baseUrl, 'engineer', 'GET', '/sheets?pageSize=100');
+    const sheet = list.items.find((s) => s.approved && s.latest.state !== 'approved');
+    expect(sheet, 'the demo has a sheet with a revision after its approved one').toBeTruthy();
+    await browser.context.clearCookies();
+    await signInAs(browser.page, baseUrl, 'technician');
+    await browser.page.goto(`${baseUrl}/sheets/${sheet!.id}/revisions/${sheet!.latest.id}`);
+    const inForce = browser.page.getByRole('link', {
+      name: `Open revision ${sheet!.approved!.label}, the one in force`,
+    });
+    await inForce.click();
+    await browser.page
+      .getByText(/Approved/)
+      .first()
+      .waitFor();
+    expect(browser.page.url()).not.toContain(sheet!.latest.id);
+  });
 });

@@ -1,5 +1,5 @@
 import { useEffect, useState } from 'react';
-import { Button, Drawer, Grid, Paper, Skeleton, Stack, Text, Title } from '@mantine/core';
+import { Anchor, Button, Drawer, Grid, Paper, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { useMediaQuery } from '@mantine/hooks';
 import { IconArrowsDiff, IconCopyPlus, IconHistory } from '@tabler/icons-react';
 import type { QueryClient } from '@tanstack/react-query';
@@ -141,9 +141,23 @@ export function Component() {
           ) : (
             <Paper p="lg">
               <Text>
-                {readsDrafts(user)
-                  ? 'This revision is not part of this sheet.'
-                  : 'This sheet has no approved revision yet. Only engineers and checkers see revisions before approval.'}
+                {readsDrafts(user) ? (
+                  'This revision is not part of this sheet.'
+                ) : sheet.approved ? (
+                  // A link to a revision not yet approved (or not this sheet's): offer the one in force.
+                  <>
+                    Only engineers and checkers see a revision before it is approved.{' '}
+                    <Anchor
+                      component={Link}
+                      to={`/sheets/${sheet.id}/revisions/${sheet.approved.id}`}
+                    >
+                      Open revision {sheet.approved.label}, the one in force
+                    </Anchor>
+                    .
+                  </>
+                ) : (
+                  'This sheet has no approved revision yet. Only engineers and checkers see revisions before approval.'
+                )}
               </Text>
             </Paper>
           )}
