@@ -21,4 +21,18 @@ describe('a measured value on the record form', () => {
     // To the setting's own 0.5 mm step this read "+0.5 mm", at the edge of the band.
     expect(screen.getByText(/In tolerance/)).toHaveTextContent('In tolerance (+0.3 mm)');
   });
+
+  it('reads ±0 for a deviation too small to print, never −0', () => {
+    renderWithProviders(
+      <MeasurementRow
+        target={spring}
+        // 123.99 mm against 124 mm: −0.01 mm, under the 0.1 mm the reading prints to.
+        draft={{ asLeft: { value: 123.99, unit: 'mm' }, reason: '' }}
+        withAsFound={false}
+        errors={{}}
+        onChange={() => undefined}
+      />,
+    );
+    expect(screen.getByText(/In tolerance/)).toHaveTextContent('In tolerance (±0 mm)');
+  });
 });

@@ -32,8 +32,11 @@ function deviationText(target: FieldTarget, verdict: ToleranceVerdict): string {
   const { deviation, label } = verdict.display;
   const perSI = toDisplay(1, dim, 'SI').value - toDisplay(0, dim, 'SI').value;
   const p = readingPrecision(target.settingKey, dim);
-  const sign = deviation > 0 ? '+' : deviation < 0 ? '−' : '±';
-  return withUnit(`${sign}${formatWithPrecision(Math.abs(deviation), 1 / perSI, label, p)}`, label);
+  const size = formatWithPrecision(Math.abs(deviation), 1 / perSI, label, p);
+  // A deviation too small to print reads ±0, never −0.
+  const shownZero = !/[1-9]/.test(size);
+  const sign = shownZero ? '±' : deviation > 0 ? '+' : '−';
+  return withUnit(`${sign}${size}`, label);
 }
 
 function VerdictBadge({ target, value }: { target: FieldTarget; value: InputValue | undefined }) {
