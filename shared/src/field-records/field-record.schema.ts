@@ -56,6 +56,8 @@ export const fieldCheckResultSchema = z.enum(['ok', 'not-ok', 'not-applicable'])
 export type FieldCheckResult = z.infer<typeof fieldCheckResultSchema>;
 
 const finiteNumber = z.number().finite();
+/** A reading in SI (m, N, rad, K): a length, force, angle or absolute temperature is never below 0. */
+const reading = finiteNumber.min(0, 'a reading cannot be negative');
 const reasonText = multiLineText({ max: 2000 });
 
 /** One check item as entered. */
@@ -80,8 +82,8 @@ export type FieldCheckInput = z.infer<typeof fieldCheckInputSchema>;
 export const fieldMeasurementInputSchema = z
   .object({
     settingKey: z.string().min(1).max(80),
-    asFound: finiteNumber.nullable().default(null),
-    asLeft: finiteNumber.nullable().default(null),
+    asFound: reading.nullable().default(null),
+    asLeft: reading.nullable().default(null),
     reason: reasonText.default(''),
   })
   .strict();

@@ -28,6 +28,18 @@ describe('record form measurements', () => {
     const bad = buildMeasurements([target], { springLength: { asLeft: '20o', reason: '' } });
     expect(bad.errors).toEqual({ 'springLength.asLeft': 'Enter a number' });
   });
+
+  it('refuses a negative reading and says how to write a decimal comma', () => {
+    const negative = buildMeasurements([target], {
+      springLength: { asLeft: { value: -520, unit: 'mm' }, reason: '' },
+    });
+    expect(negative.errors).toEqual({ 'springLength.asLeft': 'A reading cannot be negative' });
+    expect(negative.measurements).toEqual([
+      { settingKey: 'springLength', asFound: null, asLeft: null, reason: '' },
+    ]);
+    const comma = buildMeasurements([target], { springLength: { asLeft: '1,2', reason: '' } });
+    expect(comma.errors['springLength.asLeft']).toMatch(/^Use a point for decimals, e\.g\. 1\.2\./);
+  });
 });
 
 describe('wear series keys and kinds', () => {

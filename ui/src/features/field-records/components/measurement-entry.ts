@@ -8,6 +8,7 @@ import {
 } from '@holdfast/calc';
 import type { FieldMeasurementInput, FieldTarget } from '@holdfast/shared';
 import { isQuantity } from '../../../components/calc/utils/units';
+import { readNumber } from '../../../components/calc/utils/number-entry';
 
 /** What the fitter typed for one target: as found, as left (each a quantity or raw text), why. */
 export interface MeasurementDraft {
@@ -16,16 +17,25 @@ export interface MeasurementDraft {
   reason: string;
 }
 
-export type ReadValue = { kind: 'empty' } | { kind: 'value'; si: number } | { kind: 'invalid' };
+export type ReadValue =
+  { kind: 'empty' } | { kind: 'value'; si: number } | { kind: 'invalid'; message: string };
 
 /** A typed value in SI, or why it is not one yet. */
 export function readSI(value: InputValue | undefined, dimension: string): ReadValue {
   if (value === undefined || value === '') return { kind: 'empty' };
-  if (!isQuantity(value) || !Number.isFinite(value.value)) return { kind: 'invalid' };
+  if (!isQuantity(value) || !Number.isFinite(value.value)) {
+    // Text the field could not read ("1,2" without the comma format): say why, as the editor does.
+    const entry = typeof value === 'string' ? readNumber(value, 'point') : null;
+    const why = entry && (entry.kind === 'invalid' || entry.kind === 'incomplete');
+    return { kind: 'invalid', message: why ? entry.message : 'Enter a number' };
+  }
   try {
-    return { kind: 'value', si: toSI(value.value, value.unit, dimension as Dimension) };
+    const si = toSI(value.value, value.unit, dimension as Dimension);
+    // Lengths, forces, angles and absolute temperatures are never below zero.
+    if (si < 0) return { kind: 'invalid', message: 'A reading cannot be negative' };
+    return { kind: 'value', si };
   } catch {
-    return { kind: 'invalid' };
+    return { kind: 'invalid', message: 'Enter a number' };
   }
 }
 
@@ -55,8 +65,8 @@ export function buildMeasurements(
     if (!d) continue;
     const found = readSI(d.asFound, t.dimension);
     const left = readSI(d.asLeft, t.dimension);
-    if (found.kind === 'invalid') errors[`${t.settingKey}.asFound`] = 'Enter a number';
-    if (left.kind === 'invalid') errors[`${t.settingKey}.asLeft`] = 'Enter a number';
+    if (found.kind === 'invalid') errors[`${t.settingKey}.asFound`] = found.message;
+    if (left.kind === 'invalid') errors[`${t.settingKey}.asLeft`] = left.message;
     if (found.kind === 'empty' && left.kind === 'empty') continue;
     if (verdictFor(t, left)?.status === 'out' && d.reason.trim() === '') {
       errors[`${t.settingKey}.reason`] = 'Out of tolerance as left: say why';
