@@ -25,6 +25,8 @@
  * number moved: the spring setting table's title speaks of the torque limits ("torque limits met
  * from … to … N") where it said "permitted band", since other checks can fail inside it (the band
  * where all pass is worked out apart, see sheets/setting-band.ts); the friction power at set says
- * it is worked with the stop's own torque.
+ * it is worked with the stop's own torque. The disc-spring sheet's angle for the required preload
+ * reads as the limit it is ("back off no further than"), and the main spring force as set says
+ * the fitter sets the length, not the force.
  */
 export const CORE_VERSION = '1.3.0';

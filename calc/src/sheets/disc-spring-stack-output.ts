@@ -87,7 +87,7 @@ export function stackOutputs(x: StackOutputInput, criteria: CriteriaSet) {
     results.push(
       res(
         'angleForRequired',
-        'Back-off angle for the required preload',
+        'Largest back-off that still gives the required preload',
         'θ_req',
         r.angleForRequired,
         'rad',
@@ -149,10 +149,12 @@ export function stackOutputs(x: StackOutputInput, criteria: CriteriaSet) {
   if (r.angleForRequired !== undefined) {
     fieldSettings.push({
       key: `${key}.angleForRequired`,
-      label: `${x.title}: back-off angle for the required preload`,
+      label: `${x.title}: back off no further than`,
       value: r.angleForRequired,
       unit: 'rad',
       dimension: 'angle',
+      // A fitter reads a card row as a value to set: this one is a limit on the back-off above.
+      note: 'A limit, not the setting: backing off further leaves less than the required preload.',
     });
   }
 

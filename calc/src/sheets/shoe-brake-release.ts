@@ -182,6 +182,7 @@ export function shoeSettings(
         value: Fs,
         unit: 'N',
         dimension: 'force',
+        note: 'Follows from the spring length: set the length, not the force.',
       },
       m(
         'shoeClearance',
