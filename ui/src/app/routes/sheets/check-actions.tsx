@@ -1,11 +1,12 @@
 import { useState } from 'react';
-import { Button } from '@mantine/core';
+import { Button, Text } from '@mantine/core';
 import { IconArrowBackUp, IconCircleCheck } from '@tabler/icons-react';
 import type { Revision } from '@holdfast/shared';
 import { useApproveRevision } from '../../../features/revisions/api/approve-revision';
 import { useReturnRevision } from '../../../features/revisions/api/return-revision';
 import { ApproveDialog } from '../../../features/review/components/approve-dialog';
 import { ReturnDialog } from '../../../features/review/components/return-dialog';
+import { hasRole, useCurrentUser } from '../../../lib/session';
 
 export interface CheckActionsProps {
   revision: Revision;
@@ -20,7 +21,15 @@ export function CheckActions({ revision, openComments }: CheckActionsProps) {
   const [dialog, setDialog] = useState<'approve' | 'return' | null>(null);
   const approve = useApproveRevision(revision.id);
   const ret = useReturnRevision(revision.id);
-  if (!revision.canCheck) return null;
+  const user = useCurrentUser();
+  if (!revision.canCheck) {
+    // A checker looking for Approve on a revision in check is told why it is not there.
+    return revision.state === 'in_check' && hasRole(user, 'checker') ? (
+      <Text size="sm" c="dimmed" data-testid="no-check-reason">
+        You wrote, edited or submitted this revision: another checker approves or returns it.
+      </Text>
+    ) : null;
+  }
   const close = () => setDialog(null);
   return (
     <>

@@ -28,12 +28,14 @@ export function ApproveDialog({
       intro={
         <>
           <Text size="sm">
-            Approving signs this revision as checked. It can never change afterwards; the previously
-            approved revision of this sheet becomes superseded.
+            Approving signs this revision as checked. It can never change afterwards; a revision of
+            this sheet approved before it, if there is one, becomes superseded.
           </Text>
           {openComments > 0 ? (
             <Text size="sm" c="amber.9" fw={500}>
-              {openComments === 1 ? 'One comment is' : `${openComments} comments are`} still open.
+              {openComments === 1 ? 'One comment is' : `${openComments} comments are`} still open,
+              and {openComments === 1 ? 'stays' : 'stay'} open on the approved revision for good:
+              answer {openComments === 1 ? 'it' : 'them'} first, or say why in the note.
             </Text>
           ) : null}
           <AuthorNote justification={justification} />

@@ -104,7 +104,11 @@ describe('ApproveDialog', () => {
         onApprove={onApprove}
       />,
     );
-    expect(await screen.findByText('2 comments are still open.')).toBeInTheDocument();
+    expect(
+      await screen.findByText(
+        /^2 comments are still open, and stay open on the approved revision for good/,
+      ),
+    ).toBeInTheDocument();
     expect(screen.getByRole('dialog', { name: 'Approve revision B' })).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Approve' }));
     expect(onApprove).toHaveBeenCalledWith(undefined);
