@@ -220,7 +220,7 @@ describe.skipIf(skipReason !== null)('the workbench in a real browser', () => {
     await screenshot(page, 'workbench-viewer');
     await page.getByRole('button', { name: 'Print' }).click();
     const [download] = await Promise.all([
-      page.waitForEvent('download', { timeout: 30000 }),
+      page.waitForEvent('download', { timeout: 60000 }),
       page.getByRole('menuitem', { name: 'Calculation sheet (PDF)' }).click(),
     ]);
     expect(download.suggestedFilename()).toMatch(

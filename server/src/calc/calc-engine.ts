@@ -118,12 +118,27 @@ export function evaluateSheet(
   inputs: SheetInputs,
   criteria: CriteriaSet,
 ): SheetEvaluation {
-  const def = sheetTypeDefinition(sheetType);
-  const evaluation = def.evaluate(structuredClone(inputs), criteria);
-  // Stored with the evaluation (and hashed with it): the printed setting table and the field card
-  // say which of its rows pass every check, and the band around the set value where all do.
-  evaluation.settingBands = settingBands(def, structuredClone(inputs), criteria, evaluation);
-  return evaluation;
+  return sheetTypeDefinition(sheetType).evaluate(structuredClone(inputs), criteria);
+}
+
+/**
+ * The setting tables of an evaluation checked row by row against the whole sheet, for the record
+ * a submission freezes (the printed table and the field card say which rows pass every check).
+ * It evaluates the sheet some thirty times, so a draft's save does without it: the editor works
+ * the bands out in the browser while its field settings are open.
+ */
+export function settingBandsOf(
+  sheetType: string,
+  inputs: SheetInputs,
+  criteria: CriteriaSet,
+  evaluation: SheetEvaluation,
+): SheetEvaluation['settingBands'] {
+  return settingBands(
+    sheetTypeDefinition(sheetType),
+    structuredClone(inputs),
+    criteria,
+    evaluation,
+  );
 }
 
 /** Keys in the inputs that the sheet type does not declare, with a suggestion where close. */

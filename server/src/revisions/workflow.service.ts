@@ -14,7 +14,7 @@ import { AuditService } from '../audit/audit.service.js';
 import { CriteriaService } from '../criteria/criteria.service.js';
 import { OutboxService } from '../outbox/outbox.service.js';
 import { ReviewsService } from '../reviews/reviews.service.js';
-import { coreVersion, fieldLabel, resolveInputsOf } from '../calc/calc-engine.js';
+import { coreVersion, fieldLabel, resolveInputsOf, settingBandsOf } from '../calc/calc-engine.js';
 import { evaluateCompleteOrReject } from '../calc/evaluate.js';
 import { approvedMail, returnedMail, submittedMail } from './notifications.js';
 import { canCheck, ownPart } from './revision-access.js';
@@ -76,9 +76,11 @@ export class WorkflowService {
       const criteria = await this.criteria.load(rev.criteriaSetId, 'latest', tx);
       const inputs = rev.inputs as SheetInputs;
       // The frozen record keeps the inputs exactly as the core used them, beside its results.
+      const evaluated = evaluateCompleteOrReject(rev.sheetType, inputs, criteria);
       const evaluation = {
-        ...evaluateCompleteOrReject(rev.sheetType, inputs, criteria),
+        ...evaluated,
         resolvedInputs: resolveInputsOf(rev.sheetType, inputs),
+        settingBands: settingBandsOf(rev.sheetType, inputs, criteria, evaluated),
       };
       const failing = evaluation.checks.filter((c) => !c.pass);
       const justification = input.justification?.trim() || null;
