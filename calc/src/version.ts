@@ -27,6 +27,6 @@
  * where all pass is worked out apart, see sheets/setting-band.ts); the friction power at set says
  * it is worked with the stop's own torque. The disc-spring sheet's angle for the required preload
  * reads as the limit it is ("back off no further than"), and the main spring force as set says
- * the fitter sets the length, not the force.
+ * the fitter sets the length, not the force. Two brakes on one drive train read "Both brakes".
  */
 export const CORE_VERSION = '1.3.0';

@@ -6,6 +6,7 @@ import { markingText } from './parts/marking.js';
 import { collectReferences } from './parts/references.js';
 import { niceTicks, tickLabel } from './parts/ticks.js';
 import { hoistPrintable } from './testing/hoist-fixture.js';
+import { realPrintable } from './testing/real-sheet.js';
 
 describe('buildPrintableSheet', () => {
   it('keeps inputs as typed and converts them to the sheet unit system', () => {
@@ -73,6 +74,15 @@ describe('buildPrintableSheet', () => {
     const sheet = hoistPrintable({ state: 'approved' });
     expect(sheet.designBasis.torqueReference).toBe('Torque reference: Motor rated torque');
     expect(sheet.designBasis.efficiencyTreatment).toContain('η_g = 0.94');
+  });
+
+  it('names the fixed reference of a sheet type that offers no choice of it', () => {
+    const travel = realPrintable({ sheetTypeId: 'travel-shoe-brake', state: 'approved' });
+    expect(travel.designBasis.torqueReference).toBe(
+      'Motor rated (full-load) torque (fixed for this sheet type)',
+    );
+    const stack = realPrintable({ sheetTypeId: 'disc-spring-stack', state: 'approved' });
+    expect(stack.designBasis.torqueReference).toBe('Not applicable to this sheet type');
   });
 });
 

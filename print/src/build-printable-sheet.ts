@@ -157,7 +157,10 @@ export function buildPrintableSheet(o: BuildPrintableOptions): PrintableSheet {
     criteria: criteriaToPrint(o.criteriaSet, r.evaluation?.criteriaUsed),
     designBasis: {
       torqueReference:
-        o.torqueReference ?? describeChoice(inputs, /torque.?(ref|basis)|reference/i),
+        o.torqueReference ??
+        describeChoice(inputs, /torque.?(ref|basis)|reference/i) ??
+        fixedReference(r.evaluation) ??
+        'Not applicable to this sheet type',
       efficiencyTreatment: o.efficiencyTreatment ?? describeEfficiencies(inputs),
     },
     coreVersion: r.coreVersion ?? r.evaluation?.coreVersion ?? null,
@@ -173,9 +176,19 @@ export function buildPrintableSheet(o: BuildPrintableOptions): PrintableSheet {
   };
 }
 
-function describeChoice(inputs: PrintableInput[], key: RegExp): string {
+function describeChoice(inputs: PrintableInput[], key: RegExp): string | undefined {
   const hit = inputs.find((i) => key.test(i.field.key) && i.field.kind === 'choice');
-  return hit ? `${hit.field.label}: ${hit.entered}` : 'Not applicable to this sheet type';
+  return hit ? `${hit.field.label}: ${hit.entered}` : undefined;
+}
+
+/**
+ * A sheet type with no choice of reference (travel, drive) names the one its required torque is
+ * worked from, as the result's label says it ("Required brake torque (reference: …)").
+ */
+function fixedReference(ev: SheetEvaluation | null | undefined): string | undefined {
+  const label = ev?.results.find((x) => x.key === 'required-torque')?.label;
+  const ref = label ? /\(reference: (.+)\)$/.exec(label)?.[1] : undefined;
+  return ref ? `${ref[0]!.toUpperCase()}${ref.slice(1)} (fixed for this sheet type)` : undefined;
 }
 
 function describeEfficiencies(inputs: PrintableInput[]): string {

@@ -108,7 +108,7 @@ export function driveTrainOverload(
     id: 'drive-train-overload',
     label:
       input.brakesOnTrain > 1
-        ? `All ${input.brakesOnTrain} brakes at μ max, spring at the top of its range ≤ drive-train rating`
+        ? `${input.brakesOnTrain === 2 ? 'Both brakes' : `All ${input.brakesOnTrain} brakes`} at μ max, spring at the top of its range ≤ drive-train rating`
         : 'Brake torque at μ max, spring at the top of its range ≤ drive-train rating',
     value: trainTorque,
     limit: input.driveTrainRating,

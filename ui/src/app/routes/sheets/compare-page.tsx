@@ -9,6 +9,7 @@ import { CompareView } from '../../../features/compare/components/compare-view';
 import { useSheet } from '../../../features/sheets/api/get-sheet';
 import { sheetEyebrow, sheetSubpageLoader } from './sheet-subpage';
 import { visibleRevisions } from './sheet-page';
+import { findSheetType } from '../../../components/calc/utils/sheet-types';
 
 export const handle: RouteHandle = { caution: true, wide: true, title: 'Compare revisions' };
 
@@ -71,7 +72,7 @@ export function Component() {
       ) : cmp.isError ? (
         <ErrorPanel error={cmp.error} onRetry={() => void cmp.refetch()} />
       ) : (
-        <CompareView data={cmp.data} />
+        <CompareView data={cmp.data} fields={findSheetType(sheet.data?.sheetType ?? '')?.fields} />
       )}
     </Page>
   );

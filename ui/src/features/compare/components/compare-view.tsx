@@ -1,11 +1,12 @@
 import { Badge, Group, Paper, Table, Text, Title } from '@mantine/core';
 import { IconArrowRight } from '@tabler/icons-react';
 import type { Compare } from '@holdfast/shared';
-import { formatNumber } from '@holdfast/calc';
+import { formatNumber, type FieldDefinition } from '@holdfast/calc';
 import { useCurrentUser } from '../../../lib/session';
 import { formatChange, formatSI } from '../../../components/calc/utils/format-si';
 import type { UnitSystem } from '../../../components/calc/utils/units';
 import { showStoredValue as show } from '../../../components/calc/utils/stored-value';
+import { isQuantity, unitLabel } from '../../../components/calc/utils/units';
 
 type MovedResult = Compare['results'][number];
 
@@ -35,9 +36,34 @@ function verdict(pass: boolean | undefined) {
   );
 }
 
+/** A stored input as the form shows it: a choice by its label, a quantity with its unit's label. */
+function showInput(field: FieldDefinition | undefined, v: unknown): string {
+  if (field?.kind === 'choice' && typeof v === 'string') {
+    return field.choices?.find((c) => c.value === v)?.label ?? v;
+  }
+  if (field?.dimension && isQuantity(v as never)) {
+    const q = v as { value: number; unit: string };
+    return `${String(q.value)} ${unitLabel(field.dimension, q.unit)}`;
+  }
+  return show(v);
+}
+
 /** What changed between two revisions: inputs, results that moved, and checks whose verdict or use changed. */
-export function CompareView({ data }: { data: Compare }) {
+export function CompareView({
+  data,
+  fields = [],
+}: {
+  data: Compare;
+  /** The sheet type's fields: the changed inputs read as the form shows them, in its order. */
+  fields?: readonly FieldDefinition[];
+}) {
   const system = useCurrentUser().unitSystem;
+  const byKey = new Map(fields.map((f, k) => [f.key, { field: f, order: k }] as const));
+  const inputs = [...data.inputs].sort(
+    (a, b) =>
+      (byKey.get(a.key)?.order ?? Number.MAX_SAFE_INTEGER) -
+      (byKey.get(b.key)?.order ?? Number.MAX_SAFE_INTEGER),
+  );
   const from = data.from.label;
   const to = data.to.label;
   return (
@@ -61,17 +87,17 @@ export function CompareView({ data }: { data: Compare }) {
               </Table.Tr>
             </Table.Thead>
             <Table.Tbody>
-              {data.inputs.map((i) => (
+              {inputs.map((i) => (
                 <Table.Tr key={i.key} data-changed-input={i.key}>
                   <Table.Td>{i.label}</Table.Td>
                   <Table.Td ff="monospace" c="dimmed" td="line-through">
-                    {show(i.from)}
+                    {showInput(byKey.get(i.key)?.field, i.from)}
                   </Table.Td>
                   <Table.Td>
                     <IconArrowRight size={14} aria-label="changed to" />
                   </Table.Td>
                   <Table.Td ff="monospace" fw={600} bg="amber.0">
-                    {show(i.to)}
+                    {showInput(byKey.get(i.key)?.field, i.to)}
                   </Table.Td>
                 </Table.Tr>
               ))}
