@@ -28,5 +28,8 @@
  * it is worked with the stop's own torque. The disc-spring sheet's angle for the required preload
  * reads as the limit it is ("back off no further than"), and the main spring force as set says
  * the fitter sets the length, not the force. Two brakes on one drive train read "Both brakes".
+ * Also in 1.3.0: the travel sheet takes the travelling mass without the load (optional) and checks
+ * the wheels of the empty crane or trolley, which skid first under the same brake torque; left
+ * empty, it warns that the laden case alone is checked.
  */
 export const CORE_VERSION = '1.3.0';

@@ -1,4 +1,4 @@
-import { compute, defineFormula, Derivation } from '../core/step.js';
+import { compute, defineFormula, Derivation, type StepOptions } from '../core/step.js';
 import { REF } from '../core/references.js';
 import type { Inertia } from '../units/quantities.js';
 
@@ -25,12 +25,18 @@ export const inertiaSumFormula = defineFormula({
 export function inertiaTotal(
   parts: { motor: Inertia; brakeDrum: Inertia; gear: Inertia; output: Inertia; load: Inertia },
   d?: Derivation,
+  options?: StepOptions,
 ): Inertia {
-  return compute(d, inertiaSumFormula, {
-    J_m: parts.motor,
-    J_bd: parts.brakeDrum,
-    J_g: parts.gear,
-    J_o: parts.output,
-    J_L: parts.load,
-  });
+  return compute(
+    d,
+    inertiaSumFormula,
+    {
+      J_m: parts.motor,
+      J_bd: parts.brakeDrum,
+      J_g: parts.gear,
+      J_o: parts.output,
+      J_L: parts.load,
+    },
+    options,
+  );
 }

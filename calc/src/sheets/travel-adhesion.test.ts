@@ -57,3 +57,47 @@ describe('travel shoe brake: wheel adhesion with a force driving the motion', ()
     expect(nearlyEqual(extra, (2 * 40 * omega) / v, 1e-9)).toBe(true);
   });
 });
+
+describe('travel shoe brake: the unladen crane skids first', () => {
+  const check = (inputs: ReturnType<typeof demoInputs>, id: string) =>
+    trav.evaluate(inputs, travel).checks.find((c) => c.id === id);
+
+  it('checks the empty crane at the same torque, and needs more adhesion than laden', () => {
+    const laden = check(demoInputs(trav), 'wheel-adhesion')!;
+    const empty = check(demoInputs(trav), 'wheel-adhesion-unladen')!;
+    expect(empty.value).toBeGreaterThan(laden.value);
+    expect(empty.limit).toBe(laden.limit);
+    expect(empty.source).toMatch(/unladen case: common practice$/);
+  });
+
+  it('equals the laden check when the empty mass is the laden one', () => {
+    const same = { ...demoInputs(trav), unladenMass: { value: 60, unit: 't' } };
+    expect(check(same, 'wheel-adhesion-unladen')!.value).toBe(check(same, 'wheel-adhesion')!.value);
+  });
+
+  it('fails a brake that holds the laden crane but skids the empty one', () => {
+    // 40 t empty: μ_req ≈ 0.17 against 0.15, with the laden check still passing.
+    const light = { ...demoInputs(trav), unladenMass: { value: 40, unit: 't' } };
+    expect(check(light, 'wheel-adhesion')!.pass).toBe(true);
+    const empty = check(light, 'wheel-adhesion-unladen')!;
+    expect(empty.pass).toBe(false);
+    expect(empty.value).toBeGreaterThan(0.16);
+  });
+
+  it('says the laden case alone is checked when the empty mass is left out', () => {
+    const { unladenMass: _left, ...without } = demoInputs(trav);
+    const e = trav.evaluate(without, travel);
+    expect(e.checks.find((c) => c.id === 'wheel-adhesion-unladen')).toBeUndefined();
+    expect(e.warnings.some((w) => /covers the laden crane only/.test(w))).toBe(true);
+  });
+
+  it('refuses an empty mass above the laden one on its field', () => {
+    expect(() =>
+      trav.evaluate({ ...demoInputs(trav), unladenMass: { value: 61, unit: 't' } }, travel),
+    ).toThrow(
+      expect.objectContaining({
+        fields: [expect.objectContaining({ field: 'unladenMass' })],
+      }),
+    );
+  });
+});

@@ -54,6 +54,22 @@ export const TRAVEL_DUTY_FIELDS = [
     'lb',
     { min: 0, exclusiveMin: true },
   ),
+  qty(
+    U,
+    'unladenMass',
+    'Travelling mass without the load (empty crane or trolley)',
+    'm_0',
+    'mass',
+    52_000,
+    'kg',
+    'lb',
+    {
+      min: 0,
+      exclusiveMin: true,
+      required: false,
+      help: 'The same brake stops the empty crane or trolley harder, so its wheels are the likelier to skid. Left empty, the sheet checks the laden case only and says so.',
+    },
+  ),
   qty(U, 'travelSpeed', 'Full-load travel speed', 'v', 'speed', 40, 'm/min', 'ft/min', {
     min: 0,
     exclusiveMin: true,
@@ -165,6 +181,11 @@ export function evaluateTravelShoeBrake(
   const cross = validateShoeInputs(v);
   if (!(v.brakedWheels <= v.wheels))
     cross.push({ field: 'brakedWheels', message: 'cannot exceed the number of wheels' });
+  if (v.unladenMass !== undefined && !(v.unladenMass <= v.travelMass))
+    cross.push({
+      field: 'unladenMass',
+      message: 'cannot exceed the travelling mass with rated load',
+    });
   if (cross.length) throw new CalcInputError(cross);
   const d = new Derivation(U);
   const out = newEvaluation('travel-shoe-brake', criteria, d, SHEET_CAUTIONS.travel);
@@ -253,6 +274,7 @@ export function evaluateTravelShoeBrake(
       }),
     );
   }
+  unladenAdhesion(v, omega, vT, outcome.torqueMaxNew, criteria, d, out);
   publishSteps(out, d, [
     'motor-torque',
     'inertia-total',
@@ -260,8 +282,94 @@ export function evaluateTravelShoeBrake(
     'ten-percent-distance',
     'hard-load-deceleration',
     'adhesion-needed',
+    'empty-adhesion-needed',
   ]);
   return finish(out);
+}
+
+/**
+ * The empty crane or trolley: the same brake torque decelerates less mass, so the braked wheels
+ * need more adhesion than when laden (common practice: skid is checked unladen). Its stop and
+ * adhesion are recorded as steps of their own ('empty-…').
+ */
+function unladenAdhesion(
+  v: ReturnType<typeof readInputs<typeof FIELDS>>,
+  omega: q.AngularSpeed,
+  vT: q.Speed,
+  torqueMaxNew: number,
+  criteria: CriteriaSet,
+  d: Derivation,
+  out: SheetEvaluation,
+): void {
+  if (v.unladenMass === undefined) {
+    out.warnings.push(
+      'Travelling mass without the load not entered: the wheel-skid check covers the laden crane only, though the empty one skids first.',
+    );
+    return;
+  }
+  d.section = 'stopping';
+  const Jload = referLinearMass(q.mass(v.unladenMass / v.brakeCount), vT, omega, d, {
+    id: 'empty-load-inertia',
+    label: 'Empty travelling mass per brake referred to the brake shaft',
+    symbol: 'J_0,b',
+  });
+  const J = inertiaTotal(
+    {
+      motor: q.inertia(v.motorInertia),
+      brakeDrum: q.inertia(v.brakeDrumInertia),
+      gear: q.inertia(v.gearInertia),
+      output: q.inertia(0),
+      load: Jload,
+    },
+    d,
+    {
+      id: 'empty-inertia-total',
+      label: 'Total inertia referred to the brake shaft, unladen',
+      symbol: 'J_eq,0',
+    },
+  );
+  const stop = stopping(
+    {
+      inertia: J,
+      speed: omega,
+      loadSpeed: vT,
+      brakeTorque: q.torque(torqueMaxNew),
+      driveTorque: q.torque(v.driveTorque),
+      setDelay: q.time(v.setDelay),
+    },
+    d,
+    'empty-',
+  );
+  if (!stop.stops) return;
+  const mu = adhesionNeeded(
+    {
+      mass: q.mass(v.unladenMass),
+      loadDeceleration: stop.loadDeceleration,
+      driveTorque: q.torque(v.driveTorque),
+      brakeCount: v.brakeCount,
+      shaftSpeed: omega,
+      loadSpeed: vT,
+      brakedWheels: v.brakedWheels,
+      wheels: v.wheels,
+    },
+    d,
+    'empty-',
+  );
+  const lim = criterion(criteria, 'adhesionLimit');
+  out.checks.push(
+    makeCheck({
+      id: 'wheel-adhesion-unladen',
+      section: 'stopping',
+      label: 'Adhesion needed at μ max, unladen ≤ allowed (no wheel skid)',
+      value: mu,
+      limit: lim.value,
+      kind: 'max',
+      dimension: 'dimensionless',
+      source: `${lim.source}; unladen case: common practice`,
+      failHint:
+        'The empty crane or trolley may skid: lower the torque, lengthen the set time, or brake more wheels.',
+    }),
+  );
 }
 
 export const travelShoeBrakeSheet: SheetTypeDefinition<'travel-shoe-brake'> = {

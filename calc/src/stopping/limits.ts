@@ -1,4 +1,4 @@
-import { compute, defineFormula, Derivation } from '../core/step.js';
+import { compute, defineFormula, Derivation, type StepOptions } from '../core/step.js';
 import { REF } from '../core/references.js';
 import { requireRange } from '../units/parse.js';
 import type {
@@ -109,21 +109,30 @@ export interface AdhesionInput {
  *   driveTorque: torque(5), brakeCount: 2, shaftSpeed: angularSpeed(100), loadSpeed: speed(0.5),
  *   brakedWheels: 2, wheels: 4 }) // 30 000 N + 2 000 N = 32 000 N
  */
-export function railBrakingForce(input: AdhesionInput, d?: Derivation): Force {
+export function railBrakingForce(
+  input: AdhesionInput,
+  d?: Derivation,
+  options?: StepOptions,
+): Force {
   requireRange(input.mass, 'travelMass', { min: 0, exclusiveMin: true }, 'kg');
   requireRange(input.loadDeceleration, 'loadDeceleration', { min: 0 }, 'm/s²');
   requireRange(input.driveTorque, 'driveTorque', { min: 0 }, 'N·m');
   requireRange(input.brakeCount, 'brakeCount', { min: 1 });
   requireRange(input.shaftSpeed, 'speed', { min: 0, exclusiveMin: true }, 'rad/s');
   requireRange(input.loadSpeed, 'loadSpeed', { min: 0, exclusiveMin: true }, 'm/s');
-  return compute(d, railBrakingForceFormula, {
-    m: input.mass,
-    a: input.loadDeceleration,
-    n_br: input.brakeCount,
-    M_d: input.driveTorque,
-    omega: input.shaftSpeed,
-    v: input.loadSpeed,
-  });
+  return compute(
+    d,
+    railBrakingForceFormula,
+    {
+      m: input.mass,
+      a: input.loadDeceleration,
+      n_br: input.brakeCount,
+      M_d: input.driveTorque,
+      omega: input.shaftSpeed,
+      v: input.loadSpeed,
+    },
+    options,
+  );
 }
 
 /**
@@ -134,15 +143,23 @@ export function railBrakingForce(input: AdhesionInput, d?: Derivation): Force {
  *   driveTorque: torque(5), brakeCount: 2, shaftSpeed: angularSpeed(100), loadSpeed: speed(0.5),
  *   brakedWheels: 2, wheels: 4 }) // 32 000 N / 294 199.5 N ≈ 0.1088
  */
-export function adhesionNeeded(input: AdhesionInput, d?: Derivation): Ratio {
+export function adhesionNeeded(
+  input: AdhesionInput,
+  d?: Derivation,
+  /** A second case on the same sheet (the unladen one) records its steps under this prefix. */
+  stepPrefix = '',
+): Ratio {
   requireRange(input.wheels, 'wheels', { min: 1 });
   requireRange(input.brakedWheels, 'brakedWheels', { min: 1, max: input.wheels });
-  const F = railBrakingForce(input, d);
-  return compute(d, adhesionNeededFormula, {
-    F,
-    m: input.mass,
-    g: 9.80665,
-    n_b: input.brakedWheels,
-    n_w: input.wheels,
-  });
+  const F = railBrakingForce(
+    input,
+    d,
+    stepPrefix ? { id: `${stepPrefix}${railBrakingForceFormula.spec.id}` } : undefined,
+  );
+  return compute(
+    d,
+    adhesionNeededFormula,
+    { F, m: input.mass, g: 9.80665, n_b: input.brakedWheels, n_w: input.wheels },
+    stepPrefix ? { id: `${stepPrefix}${adhesionNeededFormula.spec.id}` } : undefined,
+  );
 }
