@@ -30,6 +30,7 @@
  * the fitter sets the length, not the force. Two brakes on one drive train read "Both brakes".
  * Also in 1.3.0: the travel sheet takes the travelling mass without the load (optional) and checks
  * the wheels of the empty crane or trolley, which skid first under the same brake torque; left
- * empty, it warns that the laden case alone is checked.
+ * empty, it warns that the laden case alone is checked. The steps of the travel sheet's second and
+ * third stops (hardest laden, unladen) carry their case in the label.
  */
 export const CORE_VERSION = '1.3.0';

@@ -242,6 +242,7 @@ export function evaluateTravelShoeBrake(
     },
     d,
     'hard-',
+    'hardest stop: μ max, new lining, laden',
   );
   if (hard.stops) {
     // The wheels carry the deceleration force and the force still driving the motion.
@@ -339,6 +340,7 @@ function unladenAdhesion(
     },
     d,
     'empty-',
+    'hardest stop, unladen',
   );
   if (!stop.stops) return;
   const mu = adhesionNeeded(
@@ -354,6 +356,7 @@ function unladenAdhesion(
     },
     d,
     'empty-',
+    'unladen',
   );
   const lim = criterion(criteria, 'adhesionLimit');
   out.checks.push(

@@ -148,18 +148,23 @@ export function adhesionNeeded(
   d?: Derivation,
   /** A second case on the same sheet (the unladen one) records its steps under this prefix. */
   stepPrefix = '',
+  /** Words for that case, added to its steps' labels. */
+  caseWords?: string,
 ): Ratio {
+  const o = (f: { spec: { id: string; label: string } }) =>
+    stepPrefix
+      ? {
+          id: `${stepPrefix}${f.spec.id}`,
+          ...(caseWords ? { label: `${f.spec.label} — ${caseWords}` } : {}),
+        }
+      : undefined;
   requireRange(input.wheels, 'wheels', { min: 1 });
   requireRange(input.brakedWheels, 'brakedWheels', { min: 1, max: input.wheels });
-  const F = railBrakingForce(
-    input,
-    d,
-    stepPrefix ? { id: `${stepPrefix}${railBrakingForceFormula.spec.id}` } : undefined,
-  );
+  const F = railBrakingForce(input, d, o(railBrakingForceFormula));
   return compute(
     d,
     adhesionNeededFormula,
     { F, m: input.mass, g: 9.80665, n_b: input.brakedWheels, n_w: input.wheels },
-    stepPrefix ? { id: `${stepPrefix}${adhesionNeededFormula.spec.id}` } : undefined,
+    o(adhesionNeededFormula),
   );
 }

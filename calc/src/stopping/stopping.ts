@@ -188,8 +188,17 @@ export type StoppingResult =
  *   brakeTorque: torque(700), driveTorque: torque(300), setDelay: time(0.2) })
  *   // ω1 = 180 rad/s, α_b = 200 rad/s², t_b = 0.9 s
  */
-export function stopping(input: StoppingInput, d?: Derivation, prefix = ''): StoppingResult {
-  const o = (f: { spec: { id: string } }) => ({ id: prefix + f.spec.id });
+export function stopping(
+  input: StoppingInput,
+  d?: Derivation,
+  prefix = '',
+  /** Words for a second stop on the same sheet, added to each step's label ('unladen, μ max'). */
+  caseWords?: string,
+): StoppingResult {
+  const o = (f: { spec: { id: string; label: string } }) =>
+    caseWords
+      ? { id: prefix + f.spec.id, label: `${f.spec.label} — ${caseWords}` }
+      : { id: prefix + f.spec.id };
   requireRange(input.inertia, 'inertia', { min: 0, exclusiveMin: true }, 'kg·m²');
   requireRange(input.speed, 'speed', { min: 0, exclusiveMin: true }, 'rad/s');
   requireRange(input.loadSpeed, 'loadSpeed', { min: 0, exclusiveMin: true }, 'm/s');
