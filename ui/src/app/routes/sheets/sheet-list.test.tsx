@@ -51,3 +51,29 @@ describe('sheet list: starting a sheet from the equipment page', () => {
     expect(screen.queryByRole('dialog')).toBeNull();
   });
 });
+
+describe('sheet list: equipment filter', () => {
+  it('names the site of each machine while no site is chosen, and not once one is', async () => {
+    const register = makeRegister([]);
+    const first = register.sites[0]!;
+    register.sites.push({
+      ...first,
+      id: '7a8b9c0d-1e2f-4a3b-8c4d-5e6f7a8b9c0d',
+      code: 'YS',
+      machines: first.machines.map((m) => ({ ...m, id: '8b9c0d1e-2f3a-4b4c-9d5e-6f7a8b9c0d1e' })),
+    });
+    const settle = renderAt('/sheets', register);
+    await settle();
+    const tag = `${first.machines[0]!.tag} — ${first.machines[0]!.name}`;
+    screen.getByRole('combobox', { name: 'Equipment' }).click();
+    expect(
+      await screen.findByRole('option', { name: `${first.code} · ${tag}` }),
+    ).toBeInTheDocument();
+    expect(screen.getByRole('option', { name: `YS · ${tag}` })).toBeInTheDocument();
+    cleanup();
+    const one = renderAt(`/sheets?siteId=${first.id}`, register);
+    await one();
+    screen.getByRole('combobox', { name: 'Equipment' }).click();
+    expect(await screen.findByRole('option', { name: tag })).toBeInTheDocument();
+  });
+});

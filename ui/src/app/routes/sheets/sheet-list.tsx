@@ -100,13 +100,18 @@ export function Component() {
   }, [debounced]); // eslint-disable-line react-hooks/exhaustive-deps
 
   const sites = useMemo(() => register.data?.sites ?? [], [register.data]);
-  const machines = useMemo(
-    () =>
-      sites
-        .filter((s) => !params.siteId || s.id === params.siteId)
-        .flatMap((s) => s.machines.map((m) => ({ value: m.id, label: `${m.tag} — ${m.name}` }))),
-    [sites, params.siteId],
-  );
+  const machines = useMemo(() => {
+    // Two sites may each have a CR-9: with no site chosen, each machine says which site it is on.
+    const qualify = !params.siteId && sites.length > 1;
+    return sites
+      .filter((s) => !params.siteId || s.id === params.siteId)
+      .flatMap((s) =>
+        s.machines.map((m) => ({
+          value: m.id,
+          label: `${qualify ? `${s.code} · ` : ''}${m.tag} — ${m.name}`,
+        })),
+      );
+  }, [sites, params.siteId]);
   const siteOptions = useMemo(
     () => sites.map((s) => ({ value: s.id, label: `${s.code} — ${s.name}` })),
     [sites],
