@@ -264,3 +264,18 @@ export function compute<S extends string, D extends Dimension>(
   if (!Number.isFinite(value)) throw new CalcDomainError(options?.id ?? formula.spec.id, values);
   return value;
 }
+
+/**
+ * Step options for one case of a calculation run more than once on a sheet (a second stop): its
+ * ids take `prefix` and its labels end with the case's words, so the printed steps tell the
+ * cases apart.
+ */
+export function caseStep(
+  formula: { spec: { id: string; label: string } },
+  prefix: string,
+  caseWords?: string,
+): StepOptions {
+  return caseWords
+    ? { id: prefix + formula.spec.id, label: `${formula.spec.label} — ${caseWords}` }
+    : { id: prefix + formula.spec.id };
+}

@@ -10,14 +10,15 @@ export function bandOf(
 }
 
 /**
- * A band end to four figures in the unit system, rounded into the band (the low end up, the high
- * end down), so the printed figure itself still passes every check.
+ * A band end to three figures in the unit system, as the setting table prints its forces (a
+ * spring force is set through the length, not read to finer), rounded into the band (the low end
+ * up, the high end down), so the printed figure itself still passes every check.
  */
 function bandEnd(v: number, end: 'low' | 'high', system: UnitSystem): string {
   const d = toDisplay(v, 'force', system);
   const x = d.value;
   if (!(x > 0)) return d.text;
-  const digits = Math.floor(Math.log10(x)) - 3;
+  const digits = Math.floor(Math.log10(x)) - 2;
   const step = 10 ** digits;
   const inward = (end === 'low' ? Math.ceil(x / step - 1e-9) : Math.floor(x / step + 1e-9)) * step;
   return `${inward.toFixed(Math.max(0, -digits))} ${d.label}`;

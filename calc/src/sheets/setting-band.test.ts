@@ -93,11 +93,11 @@ describe('setting band in words', () => {
 
   it('rounds each end into the band, so the printed figure still passes', () => {
     const s = bandSentence(band, 'SI');
-    expect(s).toContain('from 1114 N to 1176 N (worked out at 1150 N)');
+    expect(s).toContain('from 1120 N to 1170 N (worked out at 1150 N)');
     expect(s).toContain('Below it fails: Stopping distance at the load ≤ allowed.');
     expect(s).toContain('Above it the table ends.');
-    // 1113.71 N = 250.37 lbf and 1176.42 N = 264.47 lbf: up and down at four figures.
-    expect(bandSentence(band, 'US')).toContain('from 250.4 lbf to 264.4 lbf');
+    // 1113.71 N = 250.37 lbf and 1176.42 N = 264.47 lbf: up and down at three figures.
+    expect(bandSentence(band, 'US')).toContain('from 251 lbf to 264 lbf');
   });
 
   it('gives each row a short verdict', () => {

@@ -6,7 +6,7 @@ import type {
   SheetTypeDefinition,
 } from '../core/types.js';
 import { CalcInputError } from '../core/errors.js';
-import { Derivation } from '../core/step.js';
+import { Derivation, type StepOptions } from '../core/step.js';
 import { criterion, recordingCriteriaUsed } from '../criteria/lookup.js';
 import { motorRatedTorque } from '../duty/motor-torque.js';
 import { referLinearMass } from '../duty/referral.js';
@@ -197,16 +197,7 @@ export function evaluateTravelShoeBrake(
     label: 'Travelling mass per brake referred to the brake shaft',
     symbol: 'J_load,b',
   });
-  const J = inertiaTotal(
-    {
-      motor: q.inertia(v.motorInertia),
-      brakeDrum: q.inertia(v.brakeDrumInertia),
-      gear: q.inertia(v.gearInertia),
-      output: q.inertia(0),
-      load: Jload,
-    },
-    d,
-  );
+  const J = travelInertia(v, Jload, d);
   const Mreq = requiredBrakeTorque(q.ratio(v.torqueFactor), Mmot, d, 'motor');
   const frac = criterion(criteria, 'travelStopFraction');
   d.section = 'stopping';
@@ -230,52 +221,15 @@ export function evaluateTravelShoeBrake(
     out,
   );
   // Wheel adhesion: the hardest stop is at μ max with new lining.
-  d.section = 'stopping';
-  const hard = stopping(
-    {
-      inertia: J,
-      speed: omega,
-      loadSpeed: vT,
-      brakeTorque: q.torque(outcome.torqueMaxNew),
-      driveTorque: q.torque(v.driveTorque),
-      setDelay: q.time(v.setDelay),
-    },
-    d,
-    'hard-',
-    'hardest stop: μ max, new lining, laden',
-  );
-  if (hard.stops) {
-    // The wheels carry the deceleration force and the force still driving the motion.
-    const mu = adhesionNeeded(
-      {
-        mass: q.mass(v.travelMass),
-        loadDeceleration: hard.loadDeceleration,
-        driveTorque: q.torque(v.driveTorque),
-        brakeCount: v.brakeCount,
-        shaftSpeed: omega,
-        loadSpeed: vT,
-        brakedWheels: v.brakedWheels,
-        wheels: v.wheels,
-      },
-      d,
-    );
-    const lim = criterion(criteria, 'adhesionLimit');
-    out.checks.push(
-      makeCheck({
-        id: 'wheel-adhesion',
-        section: 'stopping',
-        label: 'Adhesion needed at μ max ≤ allowed (no wheel skid)',
-        value: mu,
-        limit: lim.value,
-        kind: 'max',
-        dimension: 'dimensionless',
-        source: lim.source,
-        failHint:
-          'The wheels may skid: lower the torque, lengthen the set time, or brake more wheels.',
-      }),
-    );
-  }
-  unladenAdhesion(v, omega, vT, outcome.torqueMaxNew, criteria, d, out);
+  const skid = { v, omega, vT, torque: outcome.torqueMaxNew, criteria, d, out };
+  skidCheck(skid, J, v.travelMass, {
+    stepPrefix: 'hard-',
+    stopWords: 'hardest stop: μ max, new lining, laden',
+    checkId: 'wheel-adhesion',
+    label: 'Adhesion needed at μ max ≤ allowed (no wheel skid)',
+    failHint: 'The wheels may skid: lower the torque, lengthen the set time, or brake more wheels.',
+  });
+  unladenAdhesion(skid);
   publishSteps(out, d, [
     'motor-torque',
     'inertia-total',
@@ -288,64 +242,78 @@ export function evaluateTravelShoeBrake(
   return finish(out);
 }
 
-/**
- * The empty crane or trolley: the same brake torque decelerates less mass, so the braked wheels
- * need more adhesion than when laden (common practice: skid is checked unladen). Its stop and
- * adhesion are recorded as steps of their own ('empty-…').
- */
-function unladenAdhesion(
-  v: ReturnType<typeof readInputs<typeof FIELDS>>,
-  omega: q.AngularSpeed,
-  vT: q.Speed,
-  torqueMaxNew: number,
-  criteria: CriteriaSet,
+type TravelInputs = ReturnType<typeof readInputs<typeof FIELDS>>;
+
+/** Rotating parts at the brake shaft plus the travelling mass referred to it. */
+function travelInertia(
+  v: TravelInputs,
+  load: q.Inertia,
   d: Derivation,
-  out: SheetEvaluation,
-): void {
-  if (v.unladenMass === undefined) {
-    out.warnings.push(
-      'Travelling mass without the load not entered: the wheel-skid check covers the laden crane only, though the empty one skids first.',
-    );
-    return;
-  }
-  d.section = 'stopping';
-  const Jload = referLinearMass(q.mass(v.unladenMass / v.brakeCount), vT, omega, d, {
-    id: 'empty-load-inertia',
-    label: 'Empty travelling mass per brake referred to the brake shaft',
-    symbol: 'J_0,b',
-  });
-  const J = inertiaTotal(
+  options?: StepOptions,
+): q.Inertia {
+  return inertiaTotal(
     {
       motor: q.inertia(v.motorInertia),
       brakeDrum: q.inertia(v.brakeDrumInertia),
       gear: q.inertia(v.gearInertia),
       output: q.inertia(0),
-      load: Jload,
+      load,
     },
     d,
-    {
-      id: 'empty-inertia-total',
-      label: 'Total inertia referred to the brake shaft, unladen',
-      symbol: 'J_eq,0',
-    },
+    options,
   );
+}
+
+/** What every skid case of the sheet shares: the drive, the hardest torque, where to record. */
+interface SkidContext {
+  v: TravelInputs;
+  omega: q.AngularSpeed;
+  vT: q.Speed;
+  /** Brake torque at μ max with new lining (the hardest stop). */
+  torque: number;
+  criteria: CriteriaSet;
+  d: Derivation;
+  out: SheetEvaluation;
+}
+
+/**
+ * The hardest stop of a travelling mass and the wheel–rail adhesion it needs, as a check: the
+ * wheels carry the deceleration force and the force still driving the motion.
+ */
+function skidCheck(
+  c: SkidContext,
+  J: q.Inertia,
+  mass: number,
+  k: {
+    stepPrefix: string;
+    stopWords: string;
+    /** Words for the adhesion steps of a case after the first (their ids take the prefix). */
+    adhesionWords?: string;
+    checkId: string;
+    label: string;
+    failHint: string;
+    sourceNote?: string;
+  },
+): void {
+  const { v, omega, vT, d } = c;
+  d.section = 'stopping';
   const stop = stopping(
     {
       inertia: J,
       speed: omega,
       loadSpeed: vT,
-      brakeTorque: q.torque(torqueMaxNew),
+      brakeTorque: q.torque(c.torque),
       driveTorque: q.torque(v.driveTorque),
       setDelay: q.time(v.setDelay),
     },
     d,
-    'empty-',
-    'hardest stop, unladen',
+    k.stepPrefix,
+    k.stopWords,
   );
   if (!stop.stops) return;
   const mu = adhesionNeeded(
     {
-      mass: q.mass(v.unladenMass),
+      mass: q.mass(mass),
       loadDeceleration: stop.loadDeceleration,
       driveTorque: q.torque(v.driveTorque),
       brakeCount: v.brakeCount,
@@ -355,24 +323,59 @@ function unladenAdhesion(
       wheels: v.wheels,
     },
     d,
-    'empty-',
-    'unladen',
+    k.adhesionWords === undefined ? '' : k.stepPrefix,
+    k.adhesionWords,
   );
-  const lim = criterion(criteria, 'adhesionLimit');
-  out.checks.push(
+  const lim = criterion(c.criteria, 'adhesionLimit');
+  c.out.checks.push(
     makeCheck({
-      id: 'wheel-adhesion-unladen',
+      id: k.checkId,
       section: 'stopping',
-      label: 'Adhesion needed at μ max, unladen ≤ allowed (no wheel skid)',
+      label: k.label,
       value: mu,
       limit: lim.value,
       kind: 'max',
       dimension: 'dimensionless',
-      source: `${lim.source}; unladen case: common practice`,
-      failHint:
-        'The empty crane or trolley may skid: lower the torque, lengthen the set time, or brake more wheels.',
+      source: k.sourceNote ? `${lim.source}; ${k.sourceNote}` : lim.source,
+      failHint: k.failHint,
     }),
   );
+}
+
+/**
+ * The empty crane or trolley: the same brake torque decelerates less mass, so the braked wheels
+ * need more adhesion than when laden (common practice: skid is checked unladen). Its stop and
+ * adhesion are recorded as steps of their own ('empty-…').
+ */
+function unladenAdhesion(c: SkidContext): void {
+  const { v, d } = c;
+  if (v.unladenMass === undefined) {
+    c.out.warnings.push(
+      'Travelling mass without the load not entered: the wheel-skid check covers the laden crane only, though the empty one skids first.',
+    );
+    return;
+  }
+  d.section = 'stopping';
+  const Jload = referLinearMass(q.mass(v.unladenMass / v.brakeCount), c.vT, c.omega, d, {
+    id: 'empty-load-inertia',
+    label: 'Empty travelling mass per brake referred to the brake shaft',
+    symbol: 'J_0,b',
+  });
+  const J = travelInertia(v, Jload, d, {
+    id: 'empty-inertia-total',
+    label: 'Total inertia referred to the brake shaft, unladen',
+    symbol: 'J_eq,0',
+  });
+  skidCheck(c, J, v.unladenMass, {
+    stepPrefix: 'empty-',
+    stopWords: 'hardest stop, unladen',
+    adhesionWords: 'unladen',
+    checkId: 'wheel-adhesion-unladen',
+    label: 'Adhesion needed at μ max, unladen ≤ allowed (no wheel skid)',
+    failHint:
+      'The empty crane or trolley may skid: lower the torque, lengthen the set time, or brake more wheels.',
+    sourceNote: 'unladen case: common practice',
+  });
 }
 
 export const travelShoeBrakeSheet: SheetTypeDefinition<'travel-shoe-brake'> = {

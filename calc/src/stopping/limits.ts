@@ -1,4 +1,4 @@
-import { compute, defineFormula, Derivation, type StepOptions } from '../core/step.js';
+import { caseStep, compute, defineFormula, Derivation, type StepOptions } from '../core/step.js';
 import { REF } from '../core/references.js';
 import { requireRange } from '../units/parse.js';
 import type {
@@ -152,12 +152,7 @@ export function adhesionNeeded(
   caseWords?: string,
 ): Ratio {
   const o = (f: { spec: { id: string; label: string } }) =>
-    stepPrefix
-      ? {
-          id: `${stepPrefix}${f.spec.id}`,
-          ...(caseWords ? { label: `${f.spec.label} — ${caseWords}` } : {}),
-        }
-      : undefined;
+    stepPrefix ? caseStep(f, stepPrefix, caseWords) : undefined;
   requireRange(input.wheels, 'wheels', { min: 1 });
   requireRange(input.brakedWheels, 'brakedWheels', { min: 1, max: input.wheels });
   const F = railBrakingForce(input, d, o(railBrakingForceFormula));

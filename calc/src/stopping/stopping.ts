@@ -1,4 +1,4 @@
-import { compute, defineFormula, Derivation } from '../core/step.js';
+import { caseStep, compute, defineFormula, Derivation } from '../core/step.js';
 import { REF } from '../core/references.js';
 import { requireRange } from '../units/parse.js';
 import type {
@@ -195,10 +195,7 @@ export function stopping(
   /** Words for a second stop on the same sheet, added to each step's label ('unladen, μ max'). */
   caseWords?: string,
 ): StoppingResult {
-  const o = (f: { spec: { id: string; label: string } }) =>
-    caseWords
-      ? { id: prefix + f.spec.id, label: `${f.spec.label} — ${caseWords}` }
-      : { id: prefix + f.spec.id };
+  const o = (f: { spec: { id: string; label: string } }) => caseStep(f, prefix, caseWords);
   requireRange(input.inertia, 'inertia', { min: 0, exclusiveMin: true }, 'kg·m²');
   requireRange(input.speed, 'speed', { min: 0, exclusiveMin: true }, 'rad/s');
   requireRange(input.loadSpeed, 'loadSpeed', { min: 0, exclusiveMin: true }, 'm/s');

@@ -116,7 +116,7 @@ describe('FieldSettingsView', () => {
       />,
     );
     expect(screen.getByTestId('setting-band')).toHaveTextContent(
-      'Every check of this sheet passes with the spring force from 1114 N to 1176 N',
+      'Every check of this sheet passes with the spring force from 1120 N to 1170 N',
     );
     const grid = screen.getByRole('table', { name: table.title });
     expect(
