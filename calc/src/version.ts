@@ -32,5 +32,13 @@
  * the wheels of the empty crane or trolley, which skid first under the same brake torque; left
  * empty, it warns that the laden case alone is checked. The steps of the travel sheet's second and
  * third stops (hardest laden, unladen) carry their case in the label.
+ * 1.4.0: the shoe sheets' drive-train check at μ max, top of range, credits no linkage losses
+ * (M_b,max,η=1 = M_b,max / η_L, a step of its own): pin friction may be far lower than η_L allows,
+ * so the bound takes η_L = 1, and the spring setting table's top row keeps within the rating by
+ * the same figure (the higher shoe model, which the table had not used). The lever, pin and
+ * base-bolt checks at the highest setting take the same torque. The shoe sheets' default drive-
+ * train rating is 1600 N·m (was 1500: the demo hoist's two brakes reach 1528 N·m without the
+ * linkage credit). With no number moved: the travel stopping rule cites its paragraph, 29 CFR
+ * 1910.179(f)(4)(vii).
  */
-export const CORE_VERSION = '1.3.0';
+export const CORE_VERSION = '1.4.0';

@@ -218,9 +218,9 @@ export function plainHoist(x: PlainHoistInputs): PlainHoistResults {
   const phi = ((w + w1) / 2) * x.setDelay + (w1 * tB) / 2;
   const sStop = (phi * vL) / w;
   const Estop = (Mlow * w1 * tB) / 2;
-  // Highest torque the drive train sees.
+  // Highest torque the drive train sees (long-shoe model, no linkage losses).
   const a = (4 * r * Math.sin(th2)) / shape;
-  const MmaxAdj = 2 * a * x.muMax * N * (x.springForceMax / x.springForce);
+  const MmaxAdj = (2 * a * x.muMax * N * (x.springForceMax / x.springForce)) / x.linkageEfficiency;
   const Mtrain = 2 * MmaxAdj;
   const travelDev = x.springTravelRatio / (2 * x.leverRatio) - 1;
   // At the moment the brake sets.
@@ -380,7 +380,7 @@ export const PLAIN_DEMO_HOIST: PlainHoistInputs = {
   springRelaxation: 0.02,
   leverRatio: 2.5,
   linkageEfficiency: 0.95,
-  maxBrakeTorque: 1500,
+  maxBrakeTorque: 1600,
   springWireDiameter: 0.01,
   springMeanDiameter: 0.0525,
   springActiveCoils: 17,

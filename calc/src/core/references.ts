@@ -33,7 +33,7 @@ export const REF = {
   stopping:
     'rigid-body dynamics at constant brake torque: α = (M_b − M_drive)/J_eq (textbook identity)',
   tenPercent:
-    '29 CFR 1910.179 (bridge/trolley brakes): stop within a distance in ft = 10 % of full-load speed in ft/min; SI form derived',
+    '29 CFR 1910.179(f)(4)(vii) (brakes for trolleys and bridges): stop within a distance in ft = 10 % of full-load speed in ft/min; SI form derived',
   adhesion:
     'wheel–rail adhesion: needed μ = braking force / normal load on braked wheels (statics)',
   railForce:

@@ -41,7 +41,7 @@ const COMMON: CriterionValue[] = [
     value: 0.1,
     unit: 'min',
     source:
-      'published: 29 CFR 1910.179 (bridge and trolley brakes: stop within a distance in ft equal to 10 % of full-load speed in ft/min)',
+      'published: 29 CFR 1910.179(f)(4)(vii) (brakes for trolleys and bridges: stop within a distance in ft equal to 10 % of full-load speed in ft/min)',
     confidence: 'published',
   },
 ];
@@ -129,7 +129,7 @@ export const TRAVEL_DRIVE: CriteriaSet = {
   version: 1,
   name: 'Crane travel drive (bridge, trolley)',
   description:
-    'Stop within a distance in ft equal to 10 % of the full-load speed in ft/min (29 CFR 1910.179; the same numbers in m and m/min). The travel brake torque factor is set on the sheet: published percentages vary with the governing standard and indoor/outdoor service — check the governing standard. ' +
+    'Stop within a distance in ft equal to 10 % of the full-load speed in ft/min (29 CFR 1910.179(f)(4)(vii); the same numbers in m and m/min). The travel brake torque factor is set on the sheet: published percentages vary with the governing standard and indoor/outdoor service — check the governing standard. ' +
     GOVERNS,
   values: withCommon([
     {

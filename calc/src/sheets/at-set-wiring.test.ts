@@ -91,11 +91,48 @@ describe('overspeed', () => {
 });
 
 describe('drive-train overload at μ max with the spring at the top of its range', () => {
-  it('hoist demo: 499 N·m at the set force becomes 726 N·m at 1600 N', () => {
-    // One brake on the train (the demo hoist has two; see the next case).
+  it('hoist demo: 522 N·m at the set force becomes 764 N·m at 1600 N with no linkage losses', () => {
+    // One brake on the train (the demo hoist has two; see the next case). Long shoe at μ max,
+    // 1150 N: 521.8 N·m with η_L = 0.95, 549.3 N·m without; × 1600/1150 = 764.3 N·m.
     const c = check(run(hoist, { brakeArrangement: 'single' }), 'torque-max-friction');
-    expect(c.value).toBeCloseTo(726.1, 0);
+    expect(c.value).toBeCloseTo(764.3, 1);
     expect(c.pass).toBe(true);
+  });
+
+  it('credits no linkage losses: the bound is the same whatever η_L is entered', () => {
+    const at = (eta: number) =>
+      check(
+        run(hoist, { brakeArrangement: 'single', linkageEfficiency: eta }),
+        'torque-max-friction',
+      );
+    expect(at(0.8).value).toBeCloseTo(at(1).value, 9);
+    expect(at(0.95).value).toBeCloseTo(at(1).value, 9);
+    // The set brake's own torque does fall with η_L: only the upper bound ignores it.
+    const e = run(hoist, { linkageEfficiency: 0.8 });
+    expect(step(e, 'torque-max')).toBeLessThan(
+      step(run(hoist, { linkageEfficiency: 1 }), 'torque-max'),
+    );
+  });
+
+  it('the demo hoist fails a 1500 N·m drive train once linkage losses are not credited', () => {
+    // 2 × 764.3 = 1528.5 N·m: with η_L = 0.95 credited it read 1452 N·m and passed.
+    const c = check(
+      run(hoist, { maxBrakeTorque: { value: 1500, unit: 'N m' } }),
+      'torque-max-friction',
+    );
+    expect(c.value).toBeCloseTo(1528.5, 1);
+    expect(c.pass).toBe(false);
+  });
+
+  it('the setting table stops where the drive-train check does', () => {
+    const e = run(hoist, { maxBrakeTorque: { value: 1400, unit: 'N m' } });
+    const rows = e.tables.find((t) => t.id === 'spring-setting')!.rows;
+    const top = rows[rows.length - 1]!.springForce as number;
+    const atTop = run(hoist, {
+      maxBrakeTorque: { value: 1400, unit: 'N m' },
+      springForceMax: { value: top, unit: 'N' },
+    });
+    expect(check(atTop, 'torque-max-friction').value).toBeCloseTo(1400, 6);
   });
 
   it('a rating above the set-force torque but below the top-of-range torque fails', () => {

@@ -1,5 +1,5 @@
 import type { CheckResult, CriteriaSet } from '../core/types.js';
-import type { Derivation } from '../core/step.js';
+import { compute, defineFormula, type Derivation } from '../core/step.js';
 import { driveTrainOverload } from '../duty/drive-train-overload.js';
 import { pivotDistance, pivotedShoeTorque } from '../shoe-brake/pivoted-shoe.js';
 import { shortShoeTorque } from '../shoe-brake/short-shoe.js';
@@ -72,17 +72,46 @@ export function shoeOverspeed(duty: ShoeDuty, stop: StoppingResult, d: Derivatio
 }
 
 /**
+ * The torque at μ max with the linkage losses taken out: pin friction varies with wear and
+ * lubrication and may be far less than η_L allows, so the bound on what the drive train can see
+ * credits none of it (η_L = 1).
+ */
+export const torqueNoLinkageLossFormula = defineFormula({
+  id: 'torque-max-no-linkage-loss',
+  label: 'Brake torque at μ max with no linkage losses (drive-train bound)',
+  symbol: 'M_b,max,η=1',
+  expression: 'M / eta',
+  symbols: {
+    M: { text: 'M_b,max', dimension: 'torque' },
+    eta: { text: 'η_L', dimension: 'dimensionless' },
+  },
+  dimension: 'torque',
+  reference:
+    'N = F_s·i·η_L (statics); the upper bound takes no pin-friction loss (η_L = 1): common practice',
+});
+
+/** The drive-train check and the torque per newton of spring force it is made with. */
+export interface ShoeDriveTrain {
+  check: CheckResult;
+  /**
+   * Brake torque at μ max per newton of spring force: the higher of the two shoe models, with no
+   * linkage losses. The setting table's top row keeps within the rating with the same figure.
+   */
+  torquePerNewton: number;
+}
+
+/**
  * Drive-train overload (section 'brake') with the worst settings a fitter can reach: μ max and
  * the spring at the top of the adjustable range the setting table offers. The reference torque is
- * the higher of the long-shoe and short-shoe models (the long shoe gives more): for this check the
- * larger torque is the conservative one.
+ * the higher of the long-shoe and short-shoe models (the long shoe gives more) with no linkage
+ * losses: for this check the larger torque is the conservative one.
  */
 export function shoeDriveTrain(
   v: ShoeInputs,
   duty: ShoeDuty,
   b: ShoeTorques,
   d: Derivation,
-): CheckResult {
+): ShoeDriveTrain {
   d.section = 'brake';
   const r = q.length(v.drumDiameter / 2);
   const other =
@@ -104,9 +133,18 @@ export function shoeDriveTrain(
             symbol: 'M_b,max,l',
           },
         );
+  const higher = Math.max(b.max, other);
+  const reference = compute(
+    d,
+    torqueNoLinkageLossFormula,
+    { M: higher, eta: v.linkageEfficiency },
+    other > b.max
+      ? { names: { M: v.torqueModel === 'pivoted' ? 'M_b,max,s' : 'M_b,max,l' } }
+      : undefined,
+  );
   const res = driveTrainOverload(
     {
-      torqueAtReference: q.torque(Math.max(b.max, other)),
+      torqueAtReference: reference,
       muAtReference: q.ratio(b.muMax),
       springForceAtReference: b.springForce,
       muMax: q.ratio(b.muMax),
@@ -116,11 +154,14 @@ export function shoeDriveTrain(
     },
     d,
   );
-  return sheetCheck(
-    { ...res.check, id: 'torque-max-friction' },
-    'brake',
-    'At μ max with the spring at the top of its range the brake could overload shaft, coupling or gearbox: lower the top of the adjustable range or choose a stronger drive train.',
-  );
+  return {
+    check: sheetCheck(
+      { ...res.check, id: 'torque-max-friction' },
+      'brake',
+      'At μ max with the spring at the top of its range the brake could overload shaft, coupling or gearbox: lower the top of the adjustable range or choose a stronger drive train.',
+    ),
+    torquePerNewton: reference / b.springForce,
+  };
 }
 
 /** The spring travel ratio against the lever ratio of the same linkage (section 'lining'). */

@@ -101,10 +101,11 @@ export function evaluateShoeBrake(
   // point, drum at its wear limit), the same torque the required-torque check holds to.
   const stop = shoeStop(duty, limits.lowestTorque, d);
   const stops = shoeStopsCheck(duty, limits.lowestTorque, stop);
+  const train = shoeDriveTrain(v, duty, b, d);
   out.checks.push(
     ...shoeTorqueChecks(v, duty, b, l, lining),
     ...limits.checks,
-    shoeDriveTrain(v, duty, b, d),
+    train.check,
     ...shoeTravelRatio(v, d),
     ...shoeDutyAtSet(v, duty, l, stop, criteria, d),
     stops.check,
@@ -135,7 +136,11 @@ export function evaluateShoeBrake(
     b,
     rel.release,
     chain,
-    { required: duty.requiredTorque, brakesOnTrain: duty.brakesOnTrain ?? 1 },
+    {
+      required: duty.requiredTorque,
+      brakesOnTrain: duty.brakesOnTrain ?? 1,
+      trainTorquePerNewton: train.torquePerNewton,
+    },
     d,
   );
   out.checks.push(...setting.checks);
@@ -166,7 +171,7 @@ export function evaluateShoeBrake(
     wornFraction,
     torqueMaxNew: b.max,
     torqueMinWorn: limits.lowestTorque,
-    torqueMaxTopOfRange: (b.max * v.springForceMax) / b.springForce,
+    torqueMaxTopOfRange: train.torquePerNewton * v.springForceMax,
     stopMinWorn: stop,
   };
 }

@@ -108,13 +108,13 @@ export const BRAKE_FIELDS = [
     'Torque rating of the drive train at the brake shaft',
     'M_max',
     'torque',
-    1500,
+    1600,
     'N m',
     'lbf ft',
     {
       min: 0,
       exclusiveMin: true,
-      help: 'Shaft, coupling and gearbox rating (equipment data): the brake at μ max must not exceed it.',
+      help: 'Shaft, coupling and gearbox rating (equipment data): the brake at μ max, spring at the top of its range and no linkage losses credited, must not exceed it.',
     },
   ),
 ] as const;

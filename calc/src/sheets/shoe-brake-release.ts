@@ -97,7 +97,7 @@ export function shoeSettings(
   b: ShoeTorques,
   rel: ReleaseResult,
   chain: ShoeChain,
-  band: { required: number; brakesOnTrain: number },
+  band: SettingBandLimits,
   d: Derivation,
 ): {
   checks: CheckResult[];
@@ -214,17 +214,27 @@ export function shoeSettings(
 
 const fmtN = (n: number) => String(Math.round(n));
 
+/** What bounds the setting table besides the adjustable range. */
+export interface SettingBandLimits {
+  /** Torque the duty requires, N·m. */
+  required: number;
+  brakesOnTrain: number;
+  /** Brake torque the drive train can see per newton of spring force (see shoeDriveTrain). */
+  trainTorquePerNewton: number;
+}
+
 /**
  * The torque band of spring forces (the setting table's rows): from the force that still gives
  * the required torque at μ min at the re-adjustment point on the drum at its wear limit, to the
  * lower of the adjustable range's top and the force at which all brakes on the train at μ max
- * reach its rating. The other checks are not in it: see setting-band.ts.
+ * reach its rating, worked out as the drive-train check works it (higher shoe model, no linkage
+ * losses). The other checks are not in it: see setting-band.ts.
  */
 export function permittedBand(
   v: ShoeInputs,
   b: ShoeTorques,
   chain: ShoeChain,
-  band: { required: number; brakesOnTrain: number },
+  band: SettingBandLimits,
 ): { low: number; high: number } {
   const Fs = b.springForce;
   const loss = v.springRate * v.springTravelRatio * chain.wearAtReadjust;
@@ -236,7 +246,7 @@ export function permittedBand(
   );
   const high = Math.min(
     v.springForceMax,
-    v.maxBrakeTorque / ((b.max / Fs) * Math.max(1, band.brakesOnTrain)),
+    v.maxBrakeTorque / (band.trainTorquePerNewton * Math.max(1, band.brakesOnTrain)),
   );
   return { low, high };
 }

@@ -6,7 +6,7 @@ export const verificationCase = defineCase({
   family: 'stopping',
   title: 'Bridge/trolley brake: allowed stopping distance at 100 and 250 ft/min',
   source:
-    '29 CFR 1910.179 (bridge and trolley brakes): stop within a distance in feet equal to 10 % of full-load speed in feet per minute (reference-values.md §3)',
+    '29 CFR 1910.179(f)(4)(vii) (brakes for trolleys and bridges): stop within a distance in feet equal to 10 % of full-load speed in feet per minute (reference-values.md §3)',
   confidence: 'published',
   inputs: { 'full-load speed': '100 ft/min and 250 ft/min' },
   expected: [
