@@ -40,5 +40,12 @@
  * train rating is 1600 N·m (was 1500: the demo hoist's two brakes reach 1528 N·m without the
  * linkage credit). With no number moved: the travel stopping rule cites its paragraph, 29 CFR
  * 1910.179(f)(4)(vii).
+ * Also in 1.4.0: the disc-spring stack sheet checks the set deflection against the working band
+ * 0.15–0.75·h0 (from memory of DIN 2093, now DIN EN 16983) at the set angle and at both ends of a
+ * declared back-off tolerance (new input per stack, default 15°: θ − Δθ as the margin for reading
+ * the angle, θ + Δθ where a fitter backs on to the next slot), and the required preload also at
+ * θ + Δθ; the words and sources are the shoe sheets', from one builder. Its working-band warning,
+ * which repeated a failing check, is gone; the field card's back-off band is the declared
+ * tolerance. No number of the demo moves; the preload check's label names its stack.
  */
 export const CORE_VERSION = '1.4.0';

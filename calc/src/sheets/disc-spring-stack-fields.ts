@@ -1,5 +1,6 @@
 import type { FieldDefinition, SectionDefinition } from '../core/types.js';
 import { STANDARD_DISC_SIZES } from '../disc-springs/standard-sizes.js';
+import { BACK_OFF_ANGLE } from '../field/tolerances.js';
 
 /** Stack prefixes: 'a' is the first stack (demo: shoe holder), 'b' the second (demo: equaliser). */
 export type StackKey = 'a' | 'b';
@@ -13,6 +14,18 @@ export const DISC_STACK_SECTIONS: SectionDefinition[] = [
 export const sectionOf = (k: StackKey) => (k === 'a' ? 'stackA' : 'stackB');
 
 const mm = (value: number) => ({ value, unit: 'mm' });
+
+/**
+ * The field cards' back-off band (one-sided, loosening only) as this sheet's default tolerance,
+ * in whole degrees: rad → deg leaves a rounding tail a form would print.
+ */
+const BACK_OFF_TOLERANCE_DEG = (() => {
+  const b = BACK_OFF_ANGLE.band;
+  // Only an absolute band is an angle; a silent default of another kind would be a wrong one.
+  if (b.kind !== 'absolute') throw new Error('BACK_OFF_ANGLE is expected as an absolute band');
+  return Math.round((b.plus * 180) / Math.PI);
+})();
+
 const len = (
   key: string,
   section: string,
@@ -206,6 +219,21 @@ function stackFieldList(k: StackKey): FieldDefinition[] {
       min: 0,
       max: 6 * Math.PI,
       help: 'Tighten until every disc is flat (nut torque rises sharply), then back off this angle and lock.',
+    },
+    {
+      key: `${k}BackOffTolerance`,
+      section: s,
+      label: 'Back-off tolerance (further only)',
+      symbol: 'Δθ',
+      kind: 'quantity',
+      dimension: 'angle',
+      unitSI: 'deg',
+      unitUS: 'deg',
+      demo: { value: BACK_OFF_TOLERANCE_DEG, unit: 'deg' },
+      required: true,
+      min: 0,
+      max: 2 * Math.PI,
+      help: 'Common practice: how far past the back-off angle the fitter may turn to line up a slot or lock plate. The nut never turns back: tightening raises the preload.',
     },
     {
       key: `${k}RequiredPreload`,

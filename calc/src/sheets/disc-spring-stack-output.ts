@@ -1,9 +1,10 @@
 import type { CheckResult, CriteriaSet, FieldSetting, ResultValue } from '../core/types.js';
 import { criterionIfSet } from '../criteria/lookup.js';
-import { workingBandWarning } from '../disc-springs/curve.js';
 import type { StackSetResult } from '../disc-springs/stack-derivation.js';
+import { BACK_OFF_ANGLE } from '../field/tolerances.js';
 import type { DiscStack } from '../disc-springs/stack.js';
 import { backOffTable, loadDeflectionChart } from './disc-spring-stack-chart.js';
+import { fmtDeg } from './disc-stack-band-checks.js';
 
 /** Default static-load limit for |σOM| at flat when the criteria set has none. */
 export const SIGMA_OM_FLAT_DEFAULT = {
@@ -20,12 +21,14 @@ export interface StackOutputInput {
   stack: DiscStack;
   lead: number;
   angle: number;
+  /** Back-off tolerance, rad, one-sided: the fitter turns further to lock, never back. */
+  tolerance: number;
   required: number;
   r: StackSetResult;
 }
 
-/** Results, checks, chart, field settings, table and warnings of one stack. */
-export function stackOutputs(x: StackOutputInput, criteria: CriteriaSet) {
+/** Results, chart, field settings, table and warnings of one stack (its checks: stackChecks). */
+export function stackOutputs(x: StackOutputInput) {
   const { key, section, r, stack } = x;
   const res = (
     k: string,
@@ -96,29 +99,6 @@ export function stackOutputs(x: StackOutputInput, criteria: CriteriaSet) {
     );
   }
 
-  const checks: CheckResult[] = [];
-  checks.push(sigmaOMFlatCheck(key, section, r.sigmaOMFlat, criteria));
-  if (x.required > 0) {
-    const v = r.stackUnloading;
-    const ok = v >= x.required;
-    checks.push({
-      id: `${key}-preload`,
-      section,
-      label: 'Preload after back-off ≥ required',
-      value: v,
-      limit: x.required,
-      unit: 'N',
-      dimension: 'force',
-      kind: 'min',
-      utilisation: v > 0 ? x.required / v : Number.MAX_VALUE,
-      pass: ok,
-      source: 'sheet input (required preload)',
-      message: ok
-        ? 'preload reaches the required value'
-        : 'preload below the required value: back off less, or use stiffer discs',
-    });
-  }
-
   const chart = loadDeflectionChart(x);
 
   const fieldSettings: FieldSetting[] = [
@@ -128,7 +108,13 @@ export function stackOutputs(x: StackOutputInput, criteria: CriteriaSet) {
       value: x.angle,
       unit: 'rad',
       dimension: 'angle',
-      note: 'Tighten until every disc is flat, back off this angle, then lock (split pin or lock plate).',
+      note: `Tighten until every disc is flat, back off this angle, then lock (split pin or lock plate). To line up a slot, back off up to ${fmtDeg(x.tolerance)}° further — never tighten.`,
+      // The card's band is the sheet's declared tolerance, one-sided as the sheet checks it.
+      tolerance: {
+        ...BACK_OFF_ANGLE,
+        band: { kind: 'absolute', minus: 0, plus: x.tolerance },
+        source: 'declared input (sheet): back-off tolerance; one-sided: common practice',
+      },
     },
     {
       key: `${key}.preload`,
@@ -162,14 +148,11 @@ export function stackOutputs(x: StackOutputInput, criteria: CriteriaSet) {
 
   const warnings: string[] = [];
   const prefix = `${x.title}: `;
+  // Outside the working band the set-deflection checks fail and say so; slack says more.
   if (r.slack)
     warnings.push(
       prefix + 'the back-off exceeds the travel to flat; the stack is loose and gives no preload.',
     );
-  else {
-    const w = workingBandWarning(r.setRatio);
-    if (w) warnings.push(prefix + w);
-  }
   const ht = (r.constants.K4 * r.h0) / r.constants.tCalc;
   if (ht > Math.SQRT2)
     warnings.push(
@@ -191,7 +174,7 @@ export function stackOutputs(x: StackOutputInput, criteria: CriteriaSet) {
       prefix +
         'more than three discs in parallel: friction makes the force uncertain (maker guidance, from memory).',
     );
-  return { results, checks, chart, fieldSettings, table, warnings };
+  return { results, chart, fieldSettings, table, warnings };
 }
 
 /**

@@ -43,12 +43,17 @@ describe('disc-spring-stack sheet', () => {
     expect(e.fieldSettings.map((f) => f.key)).toContain('b.backOffAngle');
     expect(e.tables[0].rows[0].preload).toBeGreaterThan(e.tables[0].rows[2].preload);
     expect(e.derivation.some((s) => s.id === 'b-preload' && s.section === 'stackB')).toBe(true);
-    expect(e.checks.map((c) => c.id)).toEqual([
-      'a-sigma-om-flat',
-      'a-preload',
-      'b-sigma-om-flat',
-      'b-preload',
-    ]);
+    const perStack = (k: string) =>
+      [
+        'sigma-om-flat',
+        'set-deflection-min',
+        'set-deflection-max',
+        'band-short',
+        'band-past',
+        'preload',
+        'preload-past',
+      ].map((id) => `${k}-${id}`);
+    expect(e.checks.map((c) => c.id)).toEqual([...perStack('a'), ...perStack('b')]);
     expect(e.pass).toBe(e.checks.every((c) => c.pass));
     for (const r of e.results) expect(Number.isFinite(r.value)).toBe(true);
   });
@@ -101,17 +106,20 @@ describe('disc-spring-stack sheet', () => {
     expect(c?.source).toBe('test source');
   });
 
-  it('warns outside the working band and when backed off past flat travel', () => {
+  it('fails the band check outside the working band, without repeating it as a warning, and warns when backed off past flat travel', () => {
     const near = sheet.evaluate(
       { ...demoInputs(sheet), bEnabled: false, aBackOff: '10 deg' },
       criteria,
     );
-    expect(near.warnings.join(' ')).toMatch(/above the usual 75 %/);
+    expect(near.checks.find((c) => c.id === 'a-set-deflection-max')?.pass).toBe(false);
+    expect(near.warnings.join(' ')).not.toMatch(/h0|75 %/);
     const loose = sheet.evaluate(
       { ...demoInputs(sheet), bEnabled: false, aBackOff: '180 deg', aRequiredPreload: '0 N' },
       criteria,
     );
     expect(loose.warnings.join(' ')).toMatch(/loose/);
+    expect(loose.warnings.join(' ')).not.toMatch(/below the usual/);
+    expect(loose.checks.find((c) => c.id === 'a-set-deflection-min')?.pass).toBe(false);
     expect(result(loose, 'a.preload')).toBe(0);
   });
 

@@ -19,6 +19,7 @@ import {
 } from './disc-spring-stack-fields.js';
 import { readInputs } from './sheet-inputs.js';
 import { stackOutputs } from './disc-spring-stack-output.js';
+import { stackChecks } from './disc-spring-stack-checks.js';
 import { DISC_STACK_FIELD_CARD, DISC_STACK_TITLES } from './field-card-layouts.js';
 
 const TITLES: Record<StackKey, string> = DISC_STACK_TITLES;
@@ -99,6 +100,7 @@ export function evaluateDiscSpringStack(
     d.section = sectionOf(k);
     const lead = v[`${k}Pitch`] as number;
     const angle = v[`${k}BackOff`] as number;
+    const tolerance = v[`${k}BackOffTolerance`] as number;
     const required = v[`${k}RequiredPreload`] as number;
     const r = errors.capture(() => {
       try {
@@ -107,26 +109,41 @@ export function evaluateDiscSpringStack(
         return renameFields(e, k);
       }
     }, undefined);
-    return { k, stack, lead, angle, required, r };
+    // The ends of the tolerance, off the printed derivation, as the shoe sheets take them: past
+    // (θ + Δθ, a fitter backing on to the next slot) leaves the least preload; short (θ − Δθ) is
+    // the margin for reading the angle, where the stack sits deepest.
+    const past = r && deriveStackSet({ stack, lead, angle: angle + tolerance }, undefined);
+    const short =
+      r && deriveStackSet({ stack, lead, angle: Math.max(0, angle - tolerance) }, undefined);
+    return { k, stack, lead, angle, tolerance, required, r, past, short };
   });
   errors.throwIfAny();
   for (const c of computed) {
-    if (!c.r) continue;
-    const o = stackOutputs(
-      {
-        key: c.k,
-        section: sectionOf(c.k),
-        title: TITLES[c.k],
-        stack: c.stack,
-        lead: c.lead,
-        angle: c.angle,
-        required: c.required,
-        r: c.r,
-      },
-      criteria,
-    );
+    if (!c.r || !c.past || !c.short) continue;
+    const at = { key: c.k, section: sectionOf(c.k), title: TITLES[c.k] };
+    const o = stackOutputs({
+      ...at,
+      stack: c.stack,
+      lead: c.lead,
+      angle: c.angle,
+      tolerance: c.tolerance,
+      required: c.required,
+      r: c.r,
+    });
     out.results.push(...o.results);
-    out.checks.push(...o.checks);
+    out.checks.push(
+      ...stackChecks(
+        {
+          ...at,
+          required: c.required,
+          tolerance: c.tolerance,
+          r: c.r,
+          past: c.past,
+          short: c.short,
+        },
+        criteria,
+      ),
+    );
     out.charts.push(o.chart);
     out.fieldSettings.push(...o.fieldSettings);
     out.tables.push(o.table);

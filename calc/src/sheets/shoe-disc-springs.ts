@@ -2,10 +2,11 @@ import type { CriteriaSet, SheetEvaluation } from '../core/types.js';
 import { CalcInputError, isCalcInputError } from '../core/errors.js';
 import type { Derivation } from '../core/step.js';
 import { deriveStackSet } from '../disc-springs/stack-derivation.js';
-import { WORKING_BAND, workingBandWarning } from '../disc-springs/curve.js';
+import { workingBandWarning } from '../disc-springs/curve.js';
 import type { DiscStack } from '../disc-springs/stack.js';
 import { BACK_OFF_ANGLE } from '../field/tolerances.js';
 import { makeCheck } from './checks.js';
+import { fmtDeg, workingBandChecks } from './disc-stack-band-checks.js';
 import { sigmaOMFlatCheck } from './disc-spring-stack-output.js';
 import { SHOE_STACK_TITLES } from './field-card-layouts.js';
 import type { ShoeInputs } from './shoe-brake-fields.js';
@@ -120,46 +121,14 @@ export function evaluateShoeDiscSprings(
       },
     );
     out.checks.push(
-      makeCheck({
-        id: `${p}-set-deflection-min`,
+      ...workingBandChecks({
+        prefix: p,
         section: SECTION,
-        label: `${title}: set deflection ÷ h0, at least`,
-        value: r.setRatio,
-        limit: WORKING_BAND.min,
-        kind: 'min',
-        dimension: 'dimensionless',
-        source:
-          'from memory of DIN 2093 (now DIN EN 16983): minimum initial deflection about 0.15–0.20·h0 — check the governing standard',
-        failHint: 'Back off less: the stack is nearly free and preload is uncertain.',
+        title,
+        set: r.setRatio,
+        short: { ratio: short.setRatio, end: `when backed off short (−${fmtDeg(tol)}°)` },
+        past: { ratio: past.setRatio, end: `when backed off past (+${fmtDeg(tol)}°)` },
       }),
-      makeCheck({
-        id: `${p}-set-deflection-max`,
-        section: SECTION,
-        label: `${title}: set deflection ÷ h0, at most`,
-        value: r.setRatio,
-        limit: WORKING_BAND.max,
-        kind: 'max',
-        dimension: 'dimensionless',
-        source:
-          'from memory of DIN 2093: working deflection usually ≤ 0.75·h0 — check the governing standard',
-        failHint: 'Back off more: little travel is left before the stack goes solid.',
-      }),
-    );
-    const band = (end: 'min' | 'max', value: number, what: string) =>
-      makeCheck({
-        id: `${p}-band-${end === 'max' ? 'short' : 'past'}`,
-        section: SECTION,
-        label: `${title}: set deflection ÷ h0 ${what} (${end === 'max' ? '−' : '+'}${fmtDeg(tol)}°), ${end === 'max' ? 'at most' : 'at least'}`,
-        value,
-        limit: WORKING_BAND[end],
-        kind: end,
-        dimension: 'dimensionless',
-        source: `band: from memory of DIN 2093 (now DIN EN 16983); tolerance: common practice (declared input)`,
-        failHint: 'Change the back-off angle so both ends of its tolerance stay in the band.',
-      });
-    out.checks.push(
-      band('max', short.setRatio, 'when backed off short'),
-      band('min', past.setRatio, 'when backed off past'),
       sigmaOMFlatCheck(
         p,
         SECTION,
@@ -191,8 +160,6 @@ export function evaluateShoeDiscSprings(
       );
   }
 }
-
-const fmtDeg = (rad: number) => String(Math.round((rad * 180) / Math.PI));
 
 /** Runs a disc-spring core call and names its field errors as the sheet declares them. */
 function inSheetFields<T>(p: 'holder' | 'equaliser', f: () => T): T {
