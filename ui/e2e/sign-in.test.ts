@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { e2eBaseUrl, e2eSkipReason, launchBrowser, type BrowserSession } from './support/browser';
 import { demoUsers, type DemoUserKey } from './support/demo-users';
 import { screenshot } from './support/screenshot';
-import { signInAs, signOut } from './support/sign-in';
+import { signInAs, signInWithForm, signOut } from './support/sign-in';
 
 const skipReason = e2eSkipReason();
 if (skipReason) console.warn(`[browser] sign-in tests skipped: ${skipReason}`);
@@ -36,7 +36,7 @@ describe.skipIf(skipReason !== null)('sign-in in a real browser', () => {
     it(`signs in as ${who} and sees their name`, async () => {
       const { page } = browser;
       const user = demoUsers[who];
-      await signInAs(page, baseUrl, who);
+      await signInWithForm(page, baseUrl, who);
       await expect(page.getByTestId('current-user-name').textContent()).resolves.toBe(
         user.displayName,
       );

@@ -191,7 +191,8 @@ const FailingRow = memo(function FailingRow(props: {
 }) {
   return (
     <Group component="li" gap={6} wrap="nowrap" justify="space-between" data-failing={props.id}>
-      <Text size="sm" c="fail.8" fw={600} truncate="end" style={{ flex: 1, minWidth: 0 }}>
+      {/* A failing check is read in full: the row wraps rather than cutting its words off. */}
+      <Text size="sm" c="fail.8" fw={600} style={{ flex: 1, minWidth: 0 }}>
         ✕ {props.label} ({props.percent} % of limit)
       </Text>
       {props.findDrivers ? (
