@@ -51,6 +51,7 @@ export const verificationCase = defineCase({
         al0: '0.124016 in',
         aPitch: '2.5 mm',
         aBackOff: '32.4 deg',
+        aBackOffTolerance: '15 deg',
         aFrictionCone: 0,
         aFrictionEdge: 0,
         aRequiredPreload: '0 N',
