@@ -223,7 +223,7 @@ function stackFieldList(k: StackKey): FieldDefinition[] {
     {
       key: `${k}BackOffTolerance`,
       section: s,
-      label: 'Back-off tolerance (further only)',
+      label: 'Back-off angle tolerance',
       symbol: 'Δθ',
       kind: 'quantity',
       dimension: 'angle',
@@ -233,7 +233,7 @@ function stackFieldList(k: StackKey): FieldDefinition[] {
       required: true,
       min: 0,
       max: 2 * Math.PI,
-      help: 'Common practice: how far past the back-off angle the fitter may turn to line up a slot or lock plate. The nut never turns back: tightening raises the preload.',
+      help: 'Common practice: the sheet checks the stack at θ − Δθ (a margin for reading the angle) and at θ + Δθ (the fitter backs off on to the next slot or lock-plate hole). On the field card the band is one-sided: back off further, never tighten back.',
     },
     {
       key: `${k}RequiredPreload`,

@@ -378,7 +378,7 @@ function stackFields<P extends 'holder' | 'equaliser'>(
     qty(
       S,
       `${prefix}BackOffTolerance`,
-      `${title}: back-off angle tolerance (±)`,
+      `${title}: back-off angle tolerance`,
       'Δθ',
       'angle',
       tolerance,
@@ -387,7 +387,7 @@ function stackFields<P extends 'holder' | 'equaliser'>(
       {
         min: 0,
         max: 360,
-        help: 'Common practice: how far the fitter may stop short of or run past the back-off angle (slot alignment, feel of "flat").',
+        help: 'Common practice: the sheet checks the stack at θ − Δθ (a margin for reading the angle) and at θ + Δθ (the fitter backs off on to the next slot or lock-plate hole). On the field card the band is one-sided: back off further, never tighten back.',
       },
     ),
   ] as const;
