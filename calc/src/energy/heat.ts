@@ -100,6 +100,19 @@ export const peakTemperatureFormula = defineFormula({
   reference: `${REF.cooling}; periodic solution for equal stops every 1/z`,
 });
 
+export const temperatureAfterStopFormula = defineFormula({
+  id: 'temperature-after-stop',
+  label: 'Bulk temperature of the heat mass after one stop from a known temperature',
+  symbol: 'T_1',
+  expression: 'T_0 + dT',
+  symbols: {
+    T_0: { text: 'T_0', dimension: 'temperature' },
+    dT: { text: 'ΔT', dimension: 'temperatureDifference' },
+  },
+  dimension: 'temperature',
+  reference: `${REF.heat}; the stop's heat stays in the heat mass (no cooling during the stop)`,
+});
+
 /** Energy per hour E_h = z·E_stop·1 h (z in stops per second inside the core). */
 export function energyPerHour(
   stopsPerSecond: Frequency,

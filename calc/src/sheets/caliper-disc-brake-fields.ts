@@ -71,6 +71,28 @@ export const CALIPER_FIELDS = withBounds(
       'lb ft^2',
       { min: 0, exclusiveMin: true },
     ),
+    {
+      ...qty(
+        U,
+        'brokenTrainInertia',
+        'Inertia left on the brake side if the drive train breaks, referred to the brake shaft',
+        'J_dr',
+        'inertia',
+        0,
+        'kg m^2',
+        'lb ft^2',
+        {
+          min: 0,
+          exclusiveMin: true,
+          required: false,
+          help: "Drum, disc, ropes and hoisted load (and any gear wheel fixed to the drum) referred to the brake shaft: what still turns with the disc when a shaft, coupling or gearbox between motor and drum fails. At least the load's own inertia, at most the total inertia. It checks the stop of the overhauling load with the motor side gone; the set delay is counted from the break, as if the break were detected at once: the detection time of the overspeed or speed-mismatch switch (maker's or system data) lengthens the stop and is not included. Leave empty and the drive-train-broken stop is not checked.",
+        },
+      ),
+      // No demo value: with the demo's 0.3 s set delay and 300 mm allowed distance, a plausible
+      // drum-side inertia (≈ 100–150 kg·m²) fails this case, and a value that passes would not
+      // describe the demo hoist. Left empty, the demo shows the "not checked" warning instead.
+      demo: '',
+    },
     qty(
       U,
       'loadSpeed',

@@ -25,7 +25,14 @@ export function caliperStopAndHeat(
   t: CaliperTorques,
   lining: LiningMaterial,
   d: Derivation,
-): { checks: CheckResult[]; charts: ChartData[]; warnings: string[]; stop: StoppingResult } {
+): {
+  checks: CheckResult[];
+  charts: ChartData[];
+  warnings: string[];
+  stop: StoppingResult;
+  /** Peak bulk disc temperature of normal duty, K; absent when the load is never stopped. */
+  peakTemperature?: number;
+} {
   const Mhold = duty.driveTorque;
   const omega = duty.brakeSpeed;
   d.section = 'stopping';
@@ -118,7 +125,7 @@ export function caliperStopAndHeat(
       'disc',
     ),
   );
-  return { checks, charts, warnings: [], stop };
+  return { checks, charts, warnings: [], stop, peakTemperature: Tpeak };
 }
 
 /** Release force, the clamp-force range, the setting table and the field settings. */

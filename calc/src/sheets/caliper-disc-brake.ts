@@ -20,6 +20,7 @@ import {
 } from './caliper-disc-brake-fields.js';
 import { caliperAtSet, caliperConsistency } from './caliper-disc-brake-at-set.js';
 import { caliperReleaseAndSetting, caliperStopAndHeat } from './caliper-disc-brake-stop.js';
+import { brokenTrainErrors, caliperBrokenTrain } from './caliper-disc-brake-broken-train.js';
 import {
   caliperDuty,
   caliperTorqueChecks,
@@ -35,7 +36,7 @@ function validate(v: CaliperInputs): FieldError[] {
     e.push({ field: 'muMin', message: 'μ min must not exceed μ nominal' });
   if (!(v.muNominal <= v.muMax))
     e.push({ field: 'muMax', message: 'μ max must not be below μ nominal' });
-  e.push(...shaftDutyErrors(v));
+  e.push(...shaftDutyErrors(v), ...brokenTrainErrors(v));
   if (!(v.clampForceMax > v.clampForceMin))
     e.push({ field: 'clampForceMax', message: 'must exceed the lowest setting' });
   if (!(v.clampForce - v.springRate * v.wear * v.wearTravelRatio > 0))
@@ -65,6 +66,9 @@ export function evaluateCaliperDiscBrake(
   out.checks.push(...caliperAtSet(v, duty, t, stop.stop, criteria, d), ...stop.checks);
   out.charts.push(...stop.charts);
   out.warnings.push(...stop.warnings);
+  const broken = caliperBrokenTrain(v, duty, t, lining, stop.peakTemperature, d);
+  out.checks.push(...broken.checks);
+  out.warnings.push(...broken.warnings);
   const setting = caliperReleaseAndSetting(v, t, criteria, d);
   out.checks.push(...setting.checks);
   out.tables.push(setting.table);
@@ -126,6 +130,15 @@ const CALIPER_PUBLISHED_STEPS = [
   'temperature-rise',
   'steady-temperature',
   'peak-temperature',
+  'broken-set-drive-torque',
+  'broken-speed-after-delay',
+  'broken-rubbing-speed-outer-at-set',
+  'broken-braking-time',
+  'broken-stopping-time',
+  'broken-stopping-distance',
+  'broken-brake-work',
+  'broken-temperature-rise',
+  'broken-temperature-after-stop',
   'released-spring-force',
   'thruster-force-ratio',
 ];

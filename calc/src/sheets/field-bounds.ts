@@ -136,6 +136,7 @@ export const DRIVE_BOUNDS: Record<string, [number, number]> = {
 export const CALIPER_BOUNDS: Record<string, [number, number]> = {
   ...SHAFT_DUTY_BOUNDS,
   loadMass: [1, 1e7],
+  brokenTrainInertia: [1e-4, 1e7],
   padOuterRadius: [10, 5000],
   padInnerRadius: [5, 5000],
   clampForce: [0.01, 1e4],

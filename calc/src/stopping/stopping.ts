@@ -194,8 +194,14 @@ export function stopping(
   prefix = '',
   /** Words for a second stop on the same sheet, added to each step's label ('unladen, μ max'). */
   caseWords?: string,
+  /**
+   * Symbols printed by another name in every step of this stop: a case with only part of the
+   * inertia prints J_dr where the formulas say J_eq, so its steps do not claim the whole train.
+   */
+  names?: Readonly<Record<string, string>>,
 ): StoppingResult {
-  const o = (f: { spec: { id: string; label: string } }) => caseStep(f, prefix, caseWords);
+  const o = (f: { spec: { id: string; label: string } }) =>
+    names ? { ...caseStep(f, prefix, caseWords), names } : caseStep(f, prefix, caseWords);
   requireRange(input.inertia, 'inertia', { min: 0, exclusiveMin: true }, 'kg·m²');
   requireRange(input.speed, 'speed', { min: 0, exclusiveMin: true }, 'rad/s');
   requireRange(input.loadSpeed, 'loadSpeed', { min: 0, exclusiveMin: true }, 'm/s');
