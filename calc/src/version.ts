@@ -47,5 +47,13 @@
  * θ + Δθ; the words and sources are the shoe sheets', from one builder. Its working-band warning,
  * which repeated a failing check, is gone; the field card's back-off band is the declared
  * tolerance. No number of the demo moves; the preload check's label names its stack.
+ * Also in 1.4.0: the caliper sheet checks the stop with the drive train broken. With the optional
+ * inertia left on the brake side (J_dr, between the load's own inertia and the total), the
+ * overhauling load (η_bd = 1) speeds up the drum during the set delay and the brake at μ min, worn,
+ * stops it: that it stops, the stopping distance, the disc speed when the brake sets and the disc
+ * temperature after the stop are checked (common practice; defer to the governing standard), with
+ * steps from the sheet's own stopping functions, labelled "drive train broken". Empty, with the
+ * brake off the motor shaft, the sheet warns that the case is not checked. The caliper demo enters
+ * J_dr = 120 kg·m² and a 0.2 s release unit (was 0.3 s), so its normal stop shortens too.
  */
 export const CORE_VERSION = '1.4.0';

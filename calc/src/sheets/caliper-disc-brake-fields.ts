@@ -88,10 +88,10 @@ export const CALIPER_FIELDS = withBounds(
           help: "Drum, disc, ropes and hoisted load (and any gear wheel fixed to the drum) referred to the brake shaft: what still turns with the disc when a shaft, coupling or gearbox between motor and drum fails. At least the load's own inertia, at most the total inertia. It checks the stop of the overhauling load with the motor side gone; the set delay is counted from the break, as if the break were detected at once: the detection time of the overspeed or speed-mismatch switch (maker's or system data) lengthens the stop and is not included. Leave empty and the drive-train-broken stop is not checked.",
         },
       ),
-      // No demo value: with the demo's 0.3 s set delay and 300 mm allowed distance, a plausible
-      // drum-side inertia (≈ 100–150 kg·m²) fails this case, and a value that passes would not
-      // describe the demo hoist. Left empty, the demo shows the "not checked" warning instead.
-      demo: '',
+      // Demo: drum Ø 0.5 m ≈ 27, disc ≈ 25, load's own ≈ 40, ropes and drum gear ≈ 28 kg·m². With
+      // it the drum speeds up about sevenfold in the set delay, which is why the demo's release
+      // unit is a quick-drop one (0.2 s): at 0.3 s this stop runs 479 mm against the 300 mm allowed.
+      demo: { value: 120, unit: 'kg m^2' },
     },
     qty(
       U,
@@ -133,7 +133,7 @@ export const CALIPER_FIELDS = withBounds(
         help: 'When given, the static torque is checked against m·g·v_0/ω_b so that torque, speed and inertia describe the same hoist.',
       },
     ),
-    ...setDelayFields(2200, 'release unit'),
+    ...setDelayFields(2200, 'release unit', 0.2),
     qty(
       U,
       'maxStoppingDistance',

@@ -25,11 +25,15 @@ export function fasterSetHint(releaser: Releaser): string {
 /**
  * The two duty fields every sheet with a set delay shares (hoist, travel, caliper): the set delay
  * and the motor's maximum permissible speed the shaft may reach during it. Declared once here;
- * only the demo motor's rating differs between the sheets.
+ * only the demo values differ between the sheets.
  */
-export const setDelayFields = (motorMaxSpeedDemo: number, releaser: Releaser = 'thruster') =>
+export const setDelayFields = (
+  motorMaxSpeedDemo: number,
+  releaser: Releaser = 'thruster',
+  setDelayDemo = 0.3,
+) =>
   [
-    qty('duty', 'setDelay', SET_DELAY[releaser].label, 't_d', 'time', 0.3, 's', 's', {
+    qty('duty', 'setDelay', SET_DELAY[releaser].label, 't_d', 'time', setDelayDemo, 's', 's', {
       min: 0,
       max: 10,
       help: SET_DELAY[releaser].help,
