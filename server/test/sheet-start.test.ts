@@ -102,6 +102,18 @@ describe('starting a sheet honestly', () => {
     expect(confirmed.body.unconfirmed).toEqual([]);
     const sent = await trySubmit(confirmed.body);
     expect(sent.status, sent.text).toBe(200);
+
+    // The trail keeps the confirmation as its own entry, by whom and how many; the changed value
+    // was an entry, not a confirmation, and a save that confirms nothing adds none.
+    const trail = await ctx.request('GET', `/api/sheets/${rev.sheetId}/audit`, { as: 'checker' });
+    expect(trail.status, trail.text).toBe(200);
+    const confirmations = trail.body.items.filter(
+      (e: { action: string }) => e.action === 'revision.values-confirmed',
+    );
+    expect(confirmations).toHaveLength(1);
+    expect(confirmations[0].after.count).toBe(rev.unconfirmed.length - 1);
+    expect(confirmations[0].after.confirmed).not.toContain('drumDiameter');
+    expect(confirmations[0].actor.id).toBe(await ctx.userId('engineer'));
   });
 
   it('copies an approved revision of the same type, every value marked; refuses drafts', async () => {

@@ -116,6 +116,18 @@ export class RevisionsService {
           ...(unconfirmed.length !== storedUnconfirmed(rev).length ? { unconfirmed } : {}),
         },
       });
+      // Confirming example values without changing them is a judgement, not an edit: it gets an
+      // entry of its own, shown in the trail by default (draft saves are folded away).
+      const confirmed = confirmedUnchanged(rev, inputs, unconfirmed);
+      if (confirmed.length > 0)
+        await this.audit.record(tx, {
+          actorId: user.id,
+          action: 'revision.values-confirmed',
+          entity: 'revision',
+          entityId: id,
+          sheetId: rev.sheetId,
+          after: { label: rev.label, confirmed, count: confirmed.length },
+        });
     });
     return this.get(user, id);
   }
@@ -157,6 +169,22 @@ export function stillUnconfirmed(
   return before.filter(
     // Canonical text: jsonb hands back object keys in its own order.
     (k) => (!keep || keep.has(k)) && canonicalJson(old[k]) === canonicalJson(inputs[k]),
+  );
+}
+
+/**
+ * The fields the author confirmed as they were in this save: unconfirmed before, no longer after,
+ * and with the same value (a changed value is an entry, not a confirmation).
+ */
+export function confirmedUnchanged(
+  rev: { unconfirmed: unknown; inputs: unknown },
+  inputs: SheetInputs,
+  after: readonly string[],
+): string[] {
+  const old = (rev.inputs ?? {}) as SheetInputs;
+  const still = new Set(after);
+  return storedUnconfirmed(rev).filter(
+    (k) => !still.has(k) && canonicalJson(old[k]) === canonicalJson(inputs[k]),
   );
 }
 

@@ -32,6 +32,18 @@ describe('audit trail in words', () => {
       expect(auditActionWords(action)).not.toBe(action);
   });
 
+  it('says how many values that came with the sheet were confirmed unchanged', () => {
+    expect(auditActionWords('revision.values-confirmed')).toBe('Values confirmed unchanged');
+    const many = event('revision.values-confirmed', { label: 'A', count: 104, confirmed: [] });
+    expect(auditDetail(many)).toBe(
+      'rev. A · 104 values that came with the sheet confirmed as right for this brake',
+    );
+    const one = event('revision.values-confirmed', { label: 'B', count: 1, confirmed: ['load'] });
+    expect(auditDetail(one)).toBe(
+      'rev. B · 1 value that came with the sheet confirmed as right for this brake',
+    );
+  });
+
   it('says which criteria flagged a revision and why a disposition lets it stand', () => {
     const flagged = event('revision.under-review', {
       criteriaSet: 'crane-hoist@2',

@@ -4,6 +4,7 @@ const ACTIONS: Record<string, string> = {
   'sheet.created': 'Sheet created',
   'revision.created': 'Revision started',
   'revision.saved': 'Draft saved',
+  'revision.values-confirmed': 'Values confirmed unchanged',
   'revision.submitted': 'Sent for check',
   'revision.approved': 'Approved',
   'revision.returned': 'Returned to the author',
@@ -72,6 +73,12 @@ export function auditDetail(
     text(after.fileName);
   if (note) parts.push(note);
   if (e.action === 'revision.submitted' && after.pass === false) parts.push('with failing checks');
+  if (e.action === 'revision.values-confirmed' && typeof after.count === 'number') {
+    const n = after.count;
+    parts.push(
+      `${n} value${n === 1 ? '' : 's'} that came with the sheet confirmed as right for this brake`,
+    );
+  }
   if (e.action === 'revision.under-review') {
     const set = text(after.criteriaSet);
     const failing = Array.isArray(after.failing) ? after.failing.length : 0;
