@@ -183,8 +183,13 @@ export function confirmedUnchanged(
 ): string[] {
   const old = (rev.inputs ?? {}) as SheetInputs;
   const still = new Set(after);
+  // A field left out or emptied is a change too (and canonical JSON has no undefined).
   return storedUnconfirmed(rev).filter(
-    (k) => !still.has(k) && canonicalJson(old[k]) === canonicalJson(inputs[k]),
+    (k) =>
+      !still.has(k) &&
+      old[k] !== undefined &&
+      inputs[k] !== undefined &&
+      canonicalJson(old[k]) === canonicalJson(inputs[k]),
   );
 }
 
