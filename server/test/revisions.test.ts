@@ -173,7 +173,8 @@ describe('revisions: server-side evaluation, validation, justification, audit', 
   });
 
   it('records an audit event for every save and state change, with who and before/after', async () => {
-    // The one save below also confirms the example values, so the trail has one save.
+    // The one save below also confirms the example values, so the trail has one save and one
+    // confirmation entry right after it.
     const sheet = await createSheet(ctx, reg, { confirm: false });
     const id = sheet.revisions[0].id;
     const rev = await getRevision(ctx, id);
@@ -202,7 +203,8 @@ describe('revisions: server-side evaluation, validation, justification, audit', 
     const viewerItems = forViewer.body.items as { before: any; after: any }[];
     expect(viewerItems[1].after.inputs).toBeUndefined();
     expect(viewerItems[1].after.unitSystem).toBeUndefined();
-    expect(viewerItems[5].after.state).toBe('approved');
+    expect(viewerItems[6].after.state).toBe('approved');
+    expect(viewerItems[2].after.confirmed).toBeUndefined();
     const items = audit.body.items as {
       action: string;
       actor: { displayName: string };
@@ -212,6 +214,7 @@ describe('revisions: server-side evaluation, validation, justification, audit', 
     expect(items.map((i) => i.action)).toEqual([
       'sheet.created',
       'revision.saved',
+      'revision.values-confirmed',
       'revision.submitted',
       'revision.returned',
       'revision.submitted',
@@ -221,14 +224,16 @@ describe('revisions: server-side evaluation, validation, justification, audit', 
       'Erin Vale',
       'Erin Vale',
       'Erin Vale',
+      'Erin Vale',
       'Mara Lind',
       'Erin Vale',
       'Idris Okafor',
     ]);
     expect(items[1].before.unitSystem).toBe('SI');
     expect(items[1].after.unitSystem).toBe('US');
-    expect(items[5].before.state).toBe('in_check');
-    expect(items[5].after.state).toBe('approved');
+    expect(items[2].after.count).toBe(Object.keys(rev.inputs).length);
+    expect(items[6].before.state).toBe('in_check');
+    expect(items[6].after.state).toBe('approved');
   });
 
   it('compares two revisions: changed inputs with units, moved results and checks', async () => {
