@@ -46,7 +46,8 @@
  * the angle, θ + Δθ where a fitter backs on to the next slot), and the required preload also at
  * θ + Δθ; the words and sources are the shoe sheets', from one builder. Its working-band warning,
  * which repeated a failing check, is gone; the field card's back-off band is the declared
- * tolerance. No number of the demo moves; the preload check's label names its stack.
+ * tolerance. No number of the demo moves; the preload and σOM checks' labels name their stack,
+ * and the σOM check's message reads as every other check's (value, limit, utilisation).
  * Also in 1.4.0: the caliper sheet checks the stop with the drive train broken. With the optional
  * inertia left on the brake side (J_dr, between the load's own inertia and the total), the
  * overhauling load (η_bd = 1) speeds up the drum during the set delay and the brake at μ min, worn,

@@ -25,7 +25,13 @@ export function stackChecks(x: StackCheckInput, criteria: CriteriaSet): CheckRes
   const { key, section, title, r, past } = x;
   const plus = `+${fmtDeg(x.tolerance)}°`;
   const checks = [
-    sigmaOMFlatCheck(key, section, r.sigmaOMFlat, criteria),
+    sigmaOMFlatCheck(
+      key,
+      section,
+      r.sigmaOMFlat,
+      criteria,
+      `${title}: stress |σOM| at flat (static load; DIN EN 16983/16984)`,
+    ),
     ...workingBandChecks({
       prefix: key,
       section,

@@ -1,4 +1,5 @@
 import type { CheckResult, CriteriaSet, FieldSetting, ResultValue } from '../core/types.js';
+import { makeCheck } from './checks.js';
 import { criterionIfSet } from '../criteria/lookup.js';
 import type { StackSetResult } from '../disc-springs/stack-derivation.js';
 import { BACK_OFF_ANGLE } from '../field/tolerances.js';
@@ -189,23 +190,15 @@ export function sigmaOMFlatCheck(
   label = 'Stress |σOM| at flat (static load)',
 ): CheckResult {
   const crit = criterionIfSet(criteria, SIGMA_OM_FLAT_DEFAULT.key);
-  const limit = crit ? crit.value : SIGMA_OM_FLAT_DEFAULT.value;
-  const om = Math.abs(sigmaOMFlat);
-  return {
+  return makeCheck({
     id: `${key}-sigma-om-flat`,
     section,
     label,
-    value: om,
-    limit,
-    unit: 'Pa',
+    value: Math.abs(sigmaOMFlat),
+    limit: crit ? crit.value : SIGMA_OM_FLAT_DEFAULT.value,
     dimension: 'pressure',
     kind: 'max',
-    utilisation: om / limit,
-    pass: om <= limit,
     source: crit ? crit.source : SIGMA_OM_FLAT_DEFAULT.source,
-    message:
-      om <= limit
-        ? 'within the static-load limit'
-        : 'the disc is overstressed when pressed flat: choose a thicker or larger disc',
-  };
+    failHint: 'The disc is overstressed when pressed flat: choose a thicker or larger disc.',
+  });
 }
