@@ -85,7 +85,7 @@ export const CALIPER_FIELDS = withBounds(
           min: 0,
           exclusiveMin: true,
           required: false,
-          help: "Drum, disc, ropes and hoisted load (and any gear wheel fixed to the drum) referred to the brake shaft: what still turns with the disc when a shaft, coupling or gearbox between motor and drum fails. At least the load's own inertia, at most the total inertia. It checks the stop of the overhauling load with the motor side gone; the set delay is counted from the break, as if the break were detected at once: the detection time of the overspeed or speed-mismatch switch (maker's or system data) lengthens the stop and is not included. Leave empty and the drive-train-broken stop is not checked.",
+          help: "Drum, disc, ropes and hoisted load (and any gear wheel fixed to the drum): what still turns with the disc if a shaft, coupling or gearbox between motor and drum fails. Between the load's own inertia and the total. The set delay counts from the break; the overspeed switch's detection time is not included. Empty: this stop is not checked.",
         },
       ),
       // Demo: drum Ø 0.5 m ≈ 27, disc ≈ 25, load's own ≈ 40, ropes and drum gear ≈ 28 kg·m². With
