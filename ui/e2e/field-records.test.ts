@@ -83,6 +83,18 @@ describe.skipIf(skipReason !== null)('field records in the browser', () => {
     const added = after.items.find((r) => !before.items.some((b) => b.id === r.id))!;
     expect(added.meterHours).toBe(12406.5);
 
+    // A change after the server has it is saved before signing: what is signed is what it stores.
+    const signButton = page.getByRole('button', { name: 'Sign the record' });
+    await expect(signButton.isEnabled()).resolves.toBe(true);
+    await page.getByRole('textbox', { name: 'Findings' }).pressSequentially('; lever pin greased');
+    await page.getByTestId('unsaved-changes').waitFor();
+    await expect(signButton.isDisabled()).resolves.toBe(true);
+    await page.getByRole('button', { name: 'Save changes' }).click();
+    await page.getByTestId('unsaved-changes').waitFor({ state: 'detached' });
+    await expect(signButton.isEnabled()).resolves.toBe(true);
+    const stored = await call<{ findings: string }>('GET', `/field-records/${added.id}`);
+    expect(stored.findings).toBe('Checked offline; lever pin greased');
+
     // Coming back again (a second 'online') sends nothing twice.
     await context.setOffline(true);
     await context.setOffline(false);

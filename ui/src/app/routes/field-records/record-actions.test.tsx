@@ -29,7 +29,13 @@ const entry = (state: OutboxEntry['state'], message?: string): OutboxEntry => ({
 });
 
 /** The record form's status line and buttons, fed the same `online` the form reads. */
-function Actions({ item }: { item: OutboxEntry }) {
+function Actions({
+  item,
+  changes,
+}: {
+  item: OutboxEntry;
+  changes?: Parameters<typeof RecordActions>[0]['changes'];
+}) {
   const online = useOnline();
   const sign = useSignFieldRecord();
   return (
@@ -39,6 +45,7 @@ function Actions({ item }: { item: OutboxEntry }) {
       sign={sign}
       onSave={() => {}}
       onStartAnother={() => {}}
+      changes={changes}
     />
   );
 }
@@ -81,5 +88,38 @@ describe('the record form while the server does not answer (link up)', () => {
 
     act(() => noteServerAnswer(true));
     expect(signButton()).toBeEnabled();
+  });
+});
+
+describe('the record form changed after the server has the record', () => {
+  it('offers Save changes and keeps Sign disabled until they are saved', () => {
+    const onSave = vi.fn();
+    const changes = { pending: true, saving: false, error: null, onSave };
+    const view = renderWithProviders(<Actions item={entry('sent')} changes={changes} />, {
+      user: testUsers.technician,
+    });
+    expect(screen.getByRole('button', { name: 'Sign the record' })).toBeDisabled();
+    expect(screen.getByTestId('unsaved-changes')).toHaveTextContent(
+      /save the changes before signing/,
+    );
+    act(() => screen.getByRole('button', { name: 'Save changes' }).click());
+    expect(onSave).toHaveBeenCalledTimes(1);
+
+    view.unmount();
+    renderWithProviders(<Actions item={entry('sent')} changes={{ ...changes, pending: false }} />, {
+      user: testUsers.technician,
+    });
+    expect(screen.queryByRole('button', { name: 'Save changes' })).toBeNull();
+    expect(screen.getByRole('button', { name: 'Sign the record' })).toBeEnabled();
+  });
+
+  it('says to connect when the changes cannot be saved now', () => {
+    const changes = { pending: true, saving: false, error: null, onSave: () => {} };
+    renderWithProviders(<Actions item={entry('sent')} changes={changes} />, {
+      user: testUsers.technician,
+    });
+    act(() => noteServerAnswer(false));
+    expect(screen.getByRole('button', { name: 'Save changes' })).toBeDisabled();
+    expect(screen.getByTestId('unsaved-changes')).toHaveTextContent(/connect to save the changes/);
   });
 });

@@ -14,10 +14,13 @@ export function RecordActions(props: {
   sign: ReturnType<typeof useSignFieldRecord>;
   onSave: () => void;
   onStartAnother: () => void;
+  /** Changes made on the form after the server had the record (it signs what it stores). */
+  changes?: { pending: boolean; saving: boolean; error: unknown; onSave: () => void };
 }) {
-  const { entry, online, sign } = props;
+  const { entry, online, sign, changes } = props;
   const sent = entry?.state === 'sent';
   const photosWaiting = waitingPhotos(entry).length;
+  const unsaved = sent && !sign.isSuccess && (changes?.pending ?? false);
   return (
     <>
       {entry && <OutboxStatus entry={entry} online={online} />}
@@ -28,11 +31,16 @@ export function RecordActions(props: {
             Save record
           </Button>
         )}
+        {unsaved && (
+          <Button size="lg" loading={changes?.saving} disabled={!online} onClick={changes?.onSave}>
+            Save changes
+          </Button>
+        )}
         {sent && (
           <Button
             size="lg"
             loading={sign.isPending}
-            disabled={!online || sign.isSuccess || photosWaiting > 0}
+            disabled={!online || sign.isSuccess || photosWaiting > 0 || unsaved}
             onClick={() => sign.mutate({ id: entry.id })}
           >
             {sign.isSuccess ? 'Signed' : 'Sign the record'}
@@ -50,6 +58,14 @@ export function RecordActions(props: {
           sign once they are on the server, as a signed record takes no more photos.
         </Text>
       )}
+      {unsaved && (
+        <Text size="sm" data-testid="unsaved-changes">
+          {online
+            ? 'Changed since it was saved: save the changes before signing, as the record is signed as stored.'
+            : 'Changed since it was saved: connect to save the changes; the record is signed as stored.'}
+        </Text>
+      )}
+      {changes?.error ? <Text c="fail.8">{errorMessage(changes.error)}</Text> : null}
       {sign.isError && <Text c="fail.8">{errorMessage(sign.error)}</Text>}
     </>
   );

@@ -24,6 +24,7 @@ import { NumberField } from '../../../components/calc/components/unit-field';
 import type { RouteHandle } from '../../../lib/route-handle';
 import { useFieldForm } from '../../../features/field-records/api/get-field-form';
 import { useSignFieldRecord } from '../../../features/field-records/api/sign-field-record';
+import { useUpdateFieldRecord } from '../../../features/field-records/api/update-field-record';
 import { useOutbox } from '../../../features/field-records/offline/use-outbox';
 import { MeasurementRow } from '../../../features/field-records/components/measurement-row';
 import {
@@ -61,6 +62,7 @@ function RecordForm({ form }: { form: FieldForm }) {
   const user = useCurrentUser();
   const outbox = useOutbox(user);
   const sign = useSignFieldRecord();
+  const update = useUpdateFieldRecord();
   // What was typed here before a reload or a lost session, kept on this device.
   const [kept] = useState(() => loadFormDraft(user.id, form.revisionId));
   const [id, setId] = useState(() => kept?.id ?? crypto.randomUUID());
@@ -108,7 +110,8 @@ function RecordForm({ form }: { form: FieldForm }) {
   ]);
   const withAsFound = kind !== 'commissioning';
 
-  async function save() {
+  /** The record as the form now reads, or the entries that keep it from being one. */
+  function entered(): { payload?: CreateFieldRecordInput; errors: Record<string, string> } {
     const m = buildMeasurements(measured, drafts);
     const c = buildChecks(form, checks);
     const all = { ...m.errors, ...c.errors };
@@ -116,8 +119,7 @@ function RecordForm({ form }: { form: FieldForm }) {
     if (Number.isNaN(when.getTime())) all.performedAt = 'Enter the date and time of the work';
     const hours = readHours(meterHours);
     if (hours === undefined) all.meterHours = 'Enter the hours as a number, 0 or more';
-    setErrors(all);
-    if (Object.keys(all).length > 0 || !form.positionId) return;
+    if (Object.keys(all).length > 0 || !form.positionId) return { errors: all };
     const payload: CreateFieldRecordInput = {
       id,
       positionId: form.positionId,
@@ -129,8 +131,28 @@ function RecordForm({ form }: { form: FieldForm }) {
       checks: c.checks,
       findings: findings.trim(),
     };
+    return { payload, errors: all };
+  }
+
+  async function save() {
+    const { payload, errors: all } = entered();
+    setErrors(all);
+    if (!payload) return;
     await outbox.save(payload, photos);
     setPhotos([]);
+  }
+
+  // Once the server has the record, what is signed is what it stores: a change made on the form
+  // afterwards must be saved (PATCH) before the record can be signed.
+  const now = entry?.state === 'sent' && !signed ? entered().payload : undefined;
+  const changed = entry?.state === 'sent' && !signed && (!now || !sameRecord(now, entry.payload));
+
+  async function saveChanges() {
+    const { payload, errors: all } = entered();
+    setErrors(all);
+    if (!payload) return;
+    const { id: _id, positionId: _p, revisionId: _r, ...body } = payload;
+    await update.mutateAsync({ id, body }).catch(() => undefined);
   }
 
   function addPhotos(picked: OutboxPhoto[]) {
@@ -147,6 +169,7 @@ function RecordForm({ form }: { form: FieldForm }) {
     setErrors({});
     setPhotos([]);
     sign.reset();
+    update.reset();
   }
 
   return (
@@ -231,6 +254,12 @@ function RecordForm({ form }: { form: FieldForm }) {
         sign={sign}
         onSave={() => void save()}
         onStartAnother={startAnother}
+        changes={{
+          pending: changed,
+          saving: update.isPending,
+          error: update.isError ? update.error : null,
+          onSave: () => void saveChanges(),
+        }}
       />
     </Stack>
   );
@@ -255,4 +284,11 @@ export function Component() {
       {query.data && <RecordForm form={query.data} />}
     </Page>
   );
+}
+
+/** The same record: what a later save would send equals what the server stores. */
+function sameRecord(a: CreateFieldRecordInput, b: CreateFieldRecordInput): boolean {
+  const pick = (r: CreateFieldRecordInput) =>
+    JSON.stringify([r.kind, r.performedAt, r.meterHours, r.measurements, r.checks, r.findings]);
+  return pick(a) === pick(b);
 }

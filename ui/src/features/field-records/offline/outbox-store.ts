@@ -187,6 +187,18 @@ export async function updateOutboxEntry(
   return next;
 }
 
+/** The device's copy of a record takes the changes the server accepted after it was sent. */
+export async function replaceOutboxPayload(
+  id: string,
+  changes: Partial<Omit<CreateFieldRecordInput, 'id' | 'positionId' | 'revisionId'>>,
+): Promise<void> {
+  const tx = (await db()).transaction('outbox', 'readwrite');
+  const entry = await tx.store.get(id);
+  if (entry) await tx.store.put({ ...entry, payload: { ...entry.payload, ...changes } });
+  await tx.done;
+  changed();
+}
+
 /**
  * Adds photos to a record `userId` kept on the device (also after it was sent); never to another
  * person's record, whose photos would then go under their name.
