@@ -56,5 +56,7 @@
  * steps from the sheet's own stopping functions, labelled "drive train broken". Empty, with the
  * brake off the motor shaft, the sheet warns that the case is not checked. The caliper demo enters
  * J_dr = 120 kg·m² and a 0.2 s release unit (was 0.3 s), so its normal stop shortens too.
+ * With no number moved, powers print to four figures (23.76 kW, not 23.8 kW), so a checker can
+ * work the motor torque again from the printed line.
  */
 export const CORE_VERSION = '1.4.0';

@@ -18,13 +18,14 @@ export interface Precision {
 
 /**
  * The printing precision of every dimension: the one table derivations, sheets and cards print
- * by. Pressures 3 s.f. (0.0806 MPa); temperatures to 1 °C; forces 3 s.f.; lengths to 0.01 mm.
+ * by. Pressures 3 s.f. (0.0806 MPa); temperatures to 1 °C; forces 3 s.f.; lengths to 0.01 mm;
+ * powers 4 s.f., as motor data gives them (23.76 kW).
  */
 export const PRECISION: Readonly<Record<Dimension, Precision>> = {
   length: { digits: 4, finest: 1e-5 },
   force: { digits: 3 },
   torque: { digits: 4 },
-  power: { digits: 3 },
+  power: { digits: 4 },
   speed: { digits: 3 },
   angularSpeed: { digits: 4 },
   angularAcceleration: { digits: 3 },
