@@ -82,12 +82,21 @@ describe.skipIf(skipReason !== null)('the editor never loses an edit', () => {
     const { page, context } = browser;
     await page.goto(baseUrl + sheet.path);
     await page.getByRole('textbox', { name: WIDTH }).waitFor();
-    // The session ends: every API call is refused and the refresh cookie is gone.
+    // The session ends: every API call is refused and the refresh cookie is gone. The refusals
+    // are held until the last key is typed: on a loaded machine a pause between two keys can pass
+    // the autosave delay, and the sign-in page would then take the remaining keys.
     await context.clearCookies();
-    await page.route('**/api/revisions/**', (route) =>
-      route.fulfill({ status: 401, body: '{"error":{"code":"unauthenticated","message":"x"}}' }),
-    );
+    let typed = () => {};
+    const typing = new Promise<void>((resolve) => (typed = resolve));
+    await page.route('**/api/revisions/**', async (route) => {
+      await typing;
+      await route.fulfill({
+        status: 401,
+        body: '{"error":{"code":"unauthenticated","message":"x"}}',
+      });
+    });
     await typeInto(page, WIDTH, '165');
+    typed();
     await page.getByRole('button', { name: 'Sign in' }).waitFor({ timeout: 15000 });
     await page.unroute('**/api/revisions/**');
     expect((await saved()).shoeWidth).toEqual({ value: 155, unit: 'mm' });
