@@ -32,7 +32,6 @@ function bound(f: FieldDefinition, v: number | undefined): string {
 function demoText(f: FieldDefinition): string {
   const d = f.demo;
   if (typeof d === 'object' && d !== null) return `${d.value} ${unitLabel(d.unit, f)}`;
-  if (d === '') return '(empty)';
   return String(d);
 }
 

@@ -59,8 +59,6 @@ export function fieldValueArb(f: FieldDefinition): fc.Arbitrary<InputValue> {
  */
 export function nearDefaultArb(f: FieldDefinition): fc.Arbitrary<InputValue> {
   if (f.kind === 'boolean' || f.kind === 'choice') return fieldValueArb(f);
-  // An optional field the demo leaves empty has no default to be near: it stays empty.
-  if (f.demo === '') return fc.constant(f.demo);
   const def = defaultSI(f);
   const [lo, hi] = bounds(f);
   const clip = (x: number) => Math.min(hi, Math.max(lo, x));
@@ -86,7 +84,7 @@ export function sheetInputsArb(
 export function defaultsInUS(sheet: SheetTypeDefinition): SheetInputs {
   const out: SheetInputs = {};
   for (const f of sheet.fields) {
-    if (f.kind === 'quantity' && f.unitUS && f.dimension && f.demo !== '') {
+    if (f.kind === 'quantity' && f.unitUS && f.dimension) {
       out[f.key] = { value: fromSI(defaultSI(f), f.unitUS, f.dimension), unit: f.unitUS };
     } else out[f.key] = f.demo;
   }

@@ -71,28 +71,25 @@ export const CALIPER_FIELDS = withBounds(
       'lb ft^2',
       { min: 0, exclusiveMin: true },
     ),
-    {
-      ...qty(
-        U,
-        'brokenTrainInertia',
-        'Inertia left on the brake side if the drive train breaks, referred to the brake shaft',
-        'J_dr',
-        'inertia',
-        0,
-        'kg m^2',
-        'lb ft^2',
-        {
-          min: 0,
-          exclusiveMin: true,
-          required: false,
-          help: "Drum, disc, ropes and hoisted load (and any gear wheel fixed to the drum): what still turns with the disc if a shaft, coupling or gearbox between motor and drum fails. Between the load's own inertia and the total. The set delay counts from the break; the overspeed switch's detection time is not included. Empty: this stop is not checked.",
-        },
-      ),
-      // Demo: drum Ø 0.5 m ≈ 27, disc ≈ 25, load's own ≈ 40, ropes and drum gear ≈ 28 kg·m². With
-      // it the drum speeds up about sevenfold in the set delay, which is why the demo's release
-      // unit is a quick-drop one (0.2 s): at 0.3 s this stop runs 479 mm against the 300 mm allowed.
-      demo: { value: 120, unit: 'kg m^2' },
-    },
+    // Demo: drum Ø 0.5 m ≈ 27, disc ≈ 25, load's own ≈ 40, ropes and drum gear ≈ 28 kg·m². With
+    // it the drum speeds up about sevenfold in the set delay, which is why the demo's release
+    // unit is a quick-drop one (0.2 s): at 0.3 s this stop runs 479 mm against the 300 mm allowed.
+    qty(
+      U,
+      'brokenTrainInertia',
+      'Inertia left on the brake side if the drive train breaks, referred to the brake shaft',
+      'J_dr',
+      'inertia',
+      120,
+      'kg m^2',
+      'lb ft^2',
+      {
+        min: 0,
+        exclusiveMin: true,
+        required: false,
+        help: "Drum, disc, ropes and hoisted load (and any gear wheel fixed to the drum): what still turns with the disc if a shaft, coupling or gearbox between motor and drum fails. Between the load's own inertia and the total. The set delay counts from the break; the overspeed switch's detection time is not included. Empty: this stop is not checked.",
+      },
+    ),
     qty(
       U,
       'loadSpeed',

@@ -36,9 +36,10 @@ export function stackChecks(x: StackCheckInput, criteria: CriteriaSet): CheckRes
       prefix: key,
       section,
       title,
+      tolerance: x.tolerance,
       set: r.setRatio,
-      short: { ratio: x.short.setRatio, end: `when backed off short (−${fmtDeg(x.tolerance)}°)` },
-      past: { ratio: past.setRatio, end: `when backed off past (${plus})` },
+      short: x.short.setRatio,
+      past: past.setRatio,
     }),
   ];
   if (x.required > 0) {

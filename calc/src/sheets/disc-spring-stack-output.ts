@@ -2,10 +2,9 @@ import type { CheckResult, CriteriaSet, FieldSetting, ResultValue } from '../cor
 import { makeCheck } from './checks.js';
 import { criterionIfSet } from '../criteria/lookup.js';
 import type { StackSetResult } from '../disc-springs/stack-derivation.js';
-import { BACK_OFF_ANGLE } from '../field/tolerances.js';
 import type { DiscStack } from '../disc-springs/stack.js';
 import { backOffTable, loadDeflectionChart } from './disc-spring-stack-chart.js';
-import { fmtDeg } from './disc-stack-band-checks.js';
+import { declaredBackOffTolerance, slotNote } from './disc-stack-band-checks.js';
 
 /** Default static-load limit for |σOM| at flat when the criteria set has none. */
 export const SIGMA_OM_FLAT_DEFAULT = {
@@ -109,13 +108,8 @@ export function stackOutputs(x: StackOutputInput) {
       value: x.angle,
       unit: 'rad',
       dimension: 'angle',
-      note: `Tighten until every disc is flat, back off this angle, then lock (split pin or lock plate). To line up a slot, back off up to ${fmtDeg(x.tolerance)}° further — never tighten.`,
-      // The card's band is the sheet's declared tolerance, one-sided as the sheet checks it.
-      tolerance: {
-        ...BACK_OFF_ANGLE,
-        band: { kind: 'absolute', minus: 0, plus: x.tolerance },
-        source: 'declared input (sheet): back-off tolerance; one-sided: common practice',
-      },
+      note: `Tighten until every disc is flat, back off this angle, then lock (split pin or lock plate). ${slotNote(x.tolerance)}`,
+      tolerance: declaredBackOffTolerance(x.tolerance),
     },
     {
       key: `${key}.preload`,

@@ -1,22 +1,41 @@
 import type { CheckResult } from '../core/types.js';
+import type { FieldTolerance } from '../field/tolerance-types.js';
 import { WORKING_BAND } from '../disc-springs/curve.js';
+import { BACK_OFF_ANGLE } from '../field/tolerances.js';
 import { makeCheck } from './checks.js';
 
 /** Whole degrees of an angle in rad, as the band checks' labels print a tolerance. */
 export const fmtDeg = (rad: number) => String(Math.round((rad * 180) / Math.PI));
+
+/** The field card's back-off band: the sheet's declared tolerance, one-sided (loosen only). */
+export function declaredBackOffTolerance(tolerance: number): FieldTolerance {
+  return {
+    ...BACK_OFF_ANGLE,
+    band: { kind: 'absolute', minus: 0, plus: tolerance },
+    source: 'declared input (sheet): back-off tolerance; one-sided: common practice',
+  };
+}
+
+/** What the card tells the fitter about the tolerance, after the back-off instruction. */
+export const slotNote = (tolerance: number) =>
+  `To line up a slot, back off up to ${fmtDeg(tolerance)}° further — never tighten.`;
 
 export interface WorkingBandInput {
   /** Check id prefix: the stack's key on its sheet ('holder', 'a', …). */
   prefix: string;
   section: string;
   title: string;
-  /** s/h0 at the set angle. */
+  /** Back-off tolerance Δθ, rad. */
+  tolerance: number;
+  /** s/h0 at the set angle θ. */
   set: number;
-  /** s/h0 at the end of the tolerance nearest flat, and the words naming that end. */
-  short: { ratio: number; end: string };
-  /** s/h0 at the end furthest from flat (least preload), and the words naming it. */
-  past: { ratio: number; end: string };
+  /** s/h0 at θ − Δθ, nearest flat (the margin for reading the angle). */
+  short: number;
+  /** s/h0 at θ + Δθ, furthest from flat (a fitter backing on to the next slot). */
+  past: number;
 }
+
+const BAND = 'from memory of DIN 2093 (now DIN EN 16983)';
 
 /**
  * s/h0 against the working band at the set angle and at both ends of the back-off tolerance.
@@ -25,45 +44,46 @@ export interface WorkingBandInput {
  * can fail at the short end and only the lower at the past end.
  */
 export function workingBandChecks(x: WorkingBandInput): CheckResult[] {
-  const { prefix, section, title } = x;
-  const band = (end: 'min' | 'max', value: number, what: string) =>
+  const tol = fmtDeg(x.tolerance);
+  const check = (
+    id: string,
+    where: string,
+    value: number,
+    end: 'min' | 'max',
+    source: string,
+    failHint: string,
+  ) =>
     makeCheck({
-      id: `${prefix}-band-${end === 'max' ? 'short' : 'past'}`,
-      section,
-      label: `${title}: set deflection ÷ h0 ${what}, ${end === 'max' ? 'at most' : 'at least'}`,
+      id: `${x.prefix}-${id}`,
+      section: x.section,
+      label: `${x.title}: set deflection ÷ h0${where}, ${end === 'max' ? 'at most' : 'at least'}`,
       value,
       limit: WORKING_BAND[end],
       kind: end,
       dimension: 'dimensionless',
-      source: `band: from memory of DIN 2093 (now DIN EN 16983); tolerance: common practice (declared input)`,
-      failHint: 'Change the back-off angle so both ends of its tolerance stay in the band.',
+      source,
+      failHint,
     });
+  const ends = `band: ${BAND}; tolerance: common practice (declared input)`;
+  const bothEnds = 'Change the back-off angle so both ends of its tolerance stay in the band.';
   return [
-    makeCheck({
-      id: `${prefix}-set-deflection-min`,
-      section,
-      label: `${title}: set deflection ÷ h0, at least`,
-      value: x.set,
-      limit: WORKING_BAND.min,
-      kind: 'min',
-      dimension: 'dimensionless',
-      source:
-        'from memory of DIN 2093 (now DIN EN 16983): minimum initial deflection about 0.15–0.20·h0 — check the governing standard',
-      failHint: 'Back off less: the stack is nearly free and preload is uncertain.',
-    }),
-    makeCheck({
-      id: `${prefix}-set-deflection-max`,
-      section,
-      label: `${title}: set deflection ÷ h0, at most`,
-      value: x.set,
-      limit: WORKING_BAND.max,
-      kind: 'max',
-      dimension: 'dimensionless',
-      source:
-        'from memory of DIN 2093: working deflection usually ≤ 0.75·h0 — check the governing standard',
-      failHint: 'Back off more: little travel is left before the stack goes solid.',
-    }),
-    band('max', x.short.ratio, x.short.end),
-    band('min', x.past.ratio, x.past.end),
+    check(
+      'set-deflection-min',
+      '',
+      x.set,
+      'min',
+      `${BAND}: minimum initial deflection about 0.15–0.20·h0 — check the governing standard`,
+      'Back off less: the stack is nearly free and preload is uncertain.',
+    ),
+    check(
+      'set-deflection-max',
+      '',
+      x.set,
+      'max',
+      'from memory of DIN 2093: working deflection usually ≤ 0.75·h0 — check the governing standard',
+      'Back off more: little travel is left before the stack goes solid.',
+    ),
+    check('band-short', ` when backed off short (−${tol}°)`, x.short, 'max', ends, bothEnds),
+    check('band-past', ` when backed off past (+${tol}°)`, x.past, 'min', ends, bothEnds),
   ];
 }

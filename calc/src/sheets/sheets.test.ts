@@ -121,8 +121,7 @@ describe.each([
     const us = Object.fromEntries(
       sheet.fields.map((f) => {
         const d = f.demo as { value: number; unit: string };
-        if (f.kind !== 'quantity' || !f.unitUS || f.unitUS === f.unitSI || f.demo === '')
-          return [f.key, f.demo];
+        if (f.kind !== 'quantity' || !f.unitUS || f.unitUS === f.unitSI) return [f.key, f.demo];
         return [f.key, `${convert(d.value, d.unit, f.unitUS, f.dimension!)} ${f.unitUS}`];
       }),
     );

@@ -4,9 +4,13 @@ import type { Derivation } from '../core/step.js';
 import { deriveStackSet } from '../disc-springs/stack-derivation.js';
 import { workingBandWarning } from '../disc-springs/curve.js';
 import type { DiscStack } from '../disc-springs/stack.js';
-import { BACK_OFF_ANGLE } from '../field/tolerances.js';
 import { makeCheck } from './checks.js';
-import { fmtDeg, workingBandChecks } from './disc-stack-band-checks.js';
+import {
+  declaredBackOffTolerance,
+  fmtDeg,
+  slotNote,
+  workingBandChecks,
+} from './disc-stack-band-checks.js';
 import { sigmaOMFlatCheck } from './disc-spring-stack-output.js';
 import { SHOE_STACK_TITLES } from './field-card-layouts.js';
 import type { ShoeInputs } from './shoe-brake-fields.js';
@@ -96,14 +100,10 @@ export function evaluateShoeDiscSprings(
         value: v[`${p}BackOff`],
         unit: 'rad',
         dimension: 'angle',
-        note: `${PRACTICE[p]}. To line up a slot, back off up to ${fmtDeg(tol)}° further — never tighten.`,
-        // The card's band is the sheet's declared tolerance, one-sided: the nut only turns back.
-        // The sheet also checks the stack at −tolerance, as margin for reading the angle.
-        tolerance: {
-          ...BACK_OFF_ANGLE,
-          band: { kind: 'absolute', minus: 0, plus: tol },
-          source: 'declared input (sheet): back-off tolerance; one-sided: common practice',
-        },
+        note: `${PRACTICE[p]}. ${slotNote(tol)}`,
+        // The card's band is one-sided: the nut only turns back. The sheet also checks the stack
+        // at −tolerance, as margin for reading the angle.
+        tolerance: declaredBackOffTolerance(tol),
       },
       {
         key: `${p}Preload`,
@@ -125,9 +125,10 @@ export function evaluateShoeDiscSprings(
         prefix: p,
         section: SECTION,
         title,
+        tolerance: tol,
         set: r.setRatio,
-        short: { ratio: short.setRatio, end: `when backed off short (−${fmtDeg(tol)}°)` },
-        past: { ratio: past.setRatio, end: `when backed off past (+${fmtDeg(tol)}°)` },
+        short: short.setRatio,
+        past: past.setRatio,
       }),
       sigmaOMFlatCheck(
         p,
