@@ -24,8 +24,8 @@ describe.skipIf(skipReason !== null)('sign-in in a real browser', () => {
     await page.getByRole('button', { name: 'Sign in' }).click();
     await expect(page.getByText('not a valid e-mail address').isVisible()).resolves.toBe(true);
 
-    await page.getByRole('textbox', { name: 'E-mail' }).fill(demoUsers.engineer.email);
-    await page.getByRole('textbox', { name: 'Password' }).fill('not-the-password');
+    await page.getByRole('textbox', { name: 'E-mail' }).pressSequentially(demoUsers.engineer.email);
+    await page.getByRole('textbox', { name: 'Password' }).pressSequentially('not-the-password');
     await page.getByRole('button', { name: 'Sign in' }).click();
     const alert = page.getByRole('alert').filter({ hasText: /sign|password|credential/i });
     await alert.first().waitFor();
@@ -61,20 +61,20 @@ describe.skipIf(skipReason !== null)('sign-in in a real browser', () => {
     await page.getByRole('link', { name: 'Users' }).click();
     await page.getByRole('button', { name: 'New user' }).click();
     const dialog = page.getByRole('dialog');
-    await dialog.getByRole('textbox', { name: 'E-mail' }).fill(email);
-    await dialog.getByRole('textbox', { name: 'Display name' }).fill('Noor Haddad');
+    await dialog.getByRole('textbox', { name: 'E-mail' }).pressSequentially(email);
+    await dialog.getByRole('textbox', { name: 'Display name' }).pressSequentially('Noor Haddad');
     await dialog.getByRole('textbox', { name: 'Display name' }).blur();
     await expect(dialog.getByRole('textbox', { name: 'Initials' }).inputValue()).resolves.toBe(
       'NH',
     );
-    await dialog.getByRole('textbox', { name: 'First password' }).fill(password);
+    await dialog.getByRole('textbox', { name: 'First password' }).pressSequentially(password);
     await screenshot(page, 'admin-new-user');
     await dialog.getByRole('button', { name: 'Create user' }).click();
     await page.getByRole('cell', { name: email }).waitFor();
     await signOut(page);
 
-    await page.getByRole('textbox', { name: 'E-mail' }).fill(email);
-    await page.getByRole('textbox', { name: 'Password' }).fill(password);
+    await page.getByRole('textbox', { name: 'E-mail' }).pressSequentially(email);
+    await page.getByRole('textbox', { name: 'Password' }).pressSequentially(password);
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.getByTestId('current-user-name').filter({ hasText: 'Noor Haddad' }).waitFor();
     await signOut(page);
@@ -85,8 +85,8 @@ describe.skipIf(skipReason !== null)('sign-in in a real browser', () => {
     await page.getByRole('button', { name: 'Reactivate Noor Haddad' }).waitFor();
     await signOut(page);
 
-    await page.getByRole('textbox', { name: 'E-mail' }).fill(email);
-    await page.getByRole('textbox', { name: 'Password' }).fill(password);
+    await page.getByRole('textbox', { name: 'E-mail' }).pressSequentially(email);
+    await page.getByRole('textbox', { name: 'Password' }).pressSequentially(password);
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page
       .getByRole('alert')

@@ -41,6 +41,7 @@ import {
 } from '../../../features/field-records/offline/form-draft';
 import { useCurrentUser } from '../../../lib/session';
 import { refusedFieldErrors } from '../../../features/field-records/components/refused-fields';
+import { isApiRequestError } from '../../../lib/api-client';
 import {
   buildMeasurements,
   type MeasurementDraft,
@@ -152,7 +153,13 @@ function RecordForm({ form }: { form: FieldForm }) {
     setErrors(all);
     if (!payload) return;
     const { id: _id, positionId: _p, revisionId: _r, ...body } = payload;
-    await update.mutateAsync({ id, body }).catch(() => undefined);
+    try {
+      await update.mutateAsync({ id, body });
+    } catch (error) {
+      // The server's reasons go under the boxes they are about, as for a refused first save.
+      if (isApiRequestError(error) && error.fields.length > 0)
+        setErrors({ ...refusedFieldErrors(payload, error.fields), ...all });
+    }
   }
 
   function addPhotos(picked: OutboxPhoto[]) {
