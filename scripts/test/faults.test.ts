@@ -18,6 +18,8 @@ import {
 import { startSmtpCapture, type SmtpCapture } from './support/smtp-capture.js';
 import { emptyAcks, halfRecordQueries, workflowWorker } from './support/workflow-load.js';
 import {
+  correctedLength,
+  correctionOf,
   emptyFieldRecordAcks,
   fieldRecordHalfQueries,
   fieldRecordWorker,
@@ -292,7 +294,7 @@ describe('faults on a running server', () => {
     return recoveries;
   };
 
-  it(`keeps every acknowledged field record and signature through ${FIELD_ROUNDS} crashes, each once and none in part`, async () => {
+  it(`keeps every acknowledged field record, correction and signature through ${FIELD_ROUNDS} crashes, each once and none in part`, async () => {
     // A released revision of the position's sheet, as the fitters work against.
     const { revisionId } = await submitted('Field records under crashes');
     const checker = (await signIn(srv.url, 'checker')).token;
@@ -330,7 +332,7 @@ describe('faults on a running server', () => {
     running = false;
     await Promise.all(workers);
     console.log(
-      `PostgreSQL crash under field records: ${acks.created.length} created, ${acks.signed.length} signed ` +
+      `PostgreSQL crash under field records: ${acks.created.length} created, ${acks.corrected.length} corrected, ${acks.signed.length} signed ` +
         `(${acks.inDoubt.length} found signed after a failed answer); ${acks.failures.length} refused; ` +
         `first write after restart: ${recoveries.map((r) => `${r} ms`).join(', ')}`,
     );
@@ -348,6 +350,20 @@ describe('faults on a running server', () => {
     expect(rows).toHaveLength(acks.created.length);
     const status = new Map(rows.map((r) => [r.id, r.status]));
     for (const id of [...acks.signed, ...acks.inDoubt]) expect(status.get(id), id).toBe('signed');
+    // An acknowledged correction is what the record holds, signed or not: the findings and the
+    // as-left value it sent, and the creation's values nowhere.
+    expect(acks.corrected.length).toBeGreaterThan(0);
+    const corrected = await fc.query<{ id: string; findings: string; as_left: number }>(
+      `select f.id, f.findings, m.as_left from field_records f
+       join field_record_measurements m on m.record_id = f.id where f.id = any($1)`,
+      [acks.corrected],
+    );
+    expect(corrected).toHaveLength(acks.corrected.length);
+    const record = { springLength };
+    for (const row of corrected) {
+      expect(row.findings, row.id).toBe(correctionOf(row.id, record).findings);
+      expect(row.as_left, row.id).toBeCloseTo(correctedLength(record), 12);
+    }
     for (const [what, q] of Object.entries(fieldRecordHalfQueries))
       expect(await fc.query(q), what).toEqual([]);
   }, 150000);

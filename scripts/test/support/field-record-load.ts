@@ -1,12 +1,15 @@
 // Fitters sending field records while PostgreSQL crashes, as the device's queue does: each
 // record is created under the id the device gave it, again and again until acknowledged (a
-// retried create returns the stored record), then signed until acknowledged.
+// retried create returns the stored record), then corrected (the fitter's findings and the
+// as-left value, as "Save changes" sends them) until acknowledged, then signed until acknowledged.
 import { randomUUID } from 'node:crypto';
 import { fieldCheckKeys } from '@holdfast/shared';
 import { call } from './fault-cluster.js';
 
 export interface FieldRecordAcks {
   created: string[];
+  /** Corrected after creation and acknowledged: the stored record must hold the correction. */
+  corrected: string[];
   signed: string[];
   /** A sign whose answer was a failure though it had committed: the record was found signed. */
   inDoubt: string[];
@@ -15,7 +18,7 @@ export interface FieldRecordAcks {
 }
 
 export function emptyFieldRecordAcks(): FieldRecordAcks {
-  return { created: [], signed: [], inDoubt: [], failures: [], okAt: [] };
+  return { created: [], corrected: [], signed: [], inDoubt: [], failures: [], okAt: [] };
 }
 
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
@@ -28,9 +31,15 @@ export async function fieldRecordWorker(
   acks: FieldRecordAcks,
 ): Promise<void> {
   /** `settled`: a status that ends the retries without being a failure (a sign already done). */
-  const send = async (p: string, body: unknown, ok: number[], settled?: number) => {
+  const send = async (
+    p: string,
+    body: unknown,
+    ok: number[],
+    settled?: number,
+    method: 'POST' | 'PATCH' = 'POST',
+  ) => {
     try {
-      const res = await call(base, 'POST', p, { token, body, timeoutMs: 10000 });
+      const res = await call(base, method, p, { token, body, timeoutMs: 10000 });
       if (ok.includes(res.status)) {
         acks.okAt.push(Date.now());
         return res;
@@ -68,6 +77,21 @@ export async function fieldRecordWorker(
     }
     if (!created) return;
     acks.created.push(id);
+    // A PATCH is idempotent: sent again after a failed answer it leaves the same record.
+    let corrected = false;
+    while (running() && !corrected) {
+      const res = await send(
+        `/api/field-records/${id}`,
+        correctionOf(id, record),
+        [200],
+        undefined,
+        'PATCH',
+      );
+      corrected = res?.status === 200;
+      if (!corrected) await sleep(25);
+    }
+    if (!corrected) return;
+    acks.corrected.push(id);
     while (running()) {
       const res = await send(`/api/field-records/${id}/sign`, {}, [200], 409);
       if (res?.status === 200) {
@@ -83,6 +107,17 @@ export async function fieldRecordWorker(
     }
   }
 }
+
+/** The correction each record gets after creation: its as-left value and findings name it. */
+export function correctionOf(id: string, record: { springLength: number }) {
+  return {
+    measurements: [{ settingKey: 'springLength', asFound: null, asLeft: correctedLength(record) }],
+    findings: `Corrected after sending (${id})`,
+  };
+}
+
+/** The corrected as-left spring length: 0.2 mm longer than the target, within any tolerance. */
+export const correctedLength = (record: { springLength: number }) => record.springLength + 0.0002;
 
 /** Queries that must come back empty: each names a field record written only in part. */
 export const fieldRecordHalfQueries: Record<string, string> = {
