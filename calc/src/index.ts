@@ -33,6 +33,7 @@ export {
   type UnitSystem,
   type DisplayValue,
 } from './units/display.js';
+export { checkFigures } from './units/check-figures.js';
 export { formatNumber, formatForDerivation, powerOfTen } from './units/format.js';
 export {
   PRECISION,

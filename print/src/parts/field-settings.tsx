@@ -1,5 +1,6 @@
 import {
   bandOf,
+  checkFigures,
   failAdvice,
   bandSentence,
   rowVerdict,
@@ -131,7 +132,7 @@ export function justificationBlocks(ctx: BlockContext, sheet: PrintableSheet): F
     headingBlock(ctx, 'justification-h', 'Justification for failed checks'),
   ];
   failed.forEach((c, i) => {
-    const head = `FAIL — ${c.label}: ${qty(c.value, c.dimension, sheet.unitSystem)} against ${limitText(c, sheet)} (${pct(c.utilisation)})`;
+    const head = `FAIL — ${c.label}: ${checkFigures(c, sheet.unitSystem).value} against ${limitText(c, sheet)} (${pct(c.utilisation)})`;
     // The head already gives the label, value and limit; of the message only its advice is new.
     const detail = failAdvice(c.message);
     const height =

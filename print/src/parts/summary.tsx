@@ -1,25 +1,16 @@
-import { isSafetyCaution, type CheckResult } from '@holdfast/calc';
+import { checkFigures, isSafetyCaution, type CheckResult } from '@holdfast/calc';
 import { Text } from '../text.js';
 import { headingBlock, paragraphBlock, tableBlocks, type BlockContext } from '../blocks.js';
 import type { FlowBlock } from '../flow.js';
-import { pct, qty } from '../format.js';
+import { pct } from '../format.js';
 import type { PrintableSheet } from '../printable-sheet.js';
 import { colours } from '../theme.js';
 import { Verdict, type Column } from './table.js';
 
-/**
- * Value and limit as printed: to the dimension's precision, with more figures when the two
- * would print alike but differ (the verdict must be readable from the row).
- */
+/** Value and limit as printed (calc's checkFigures, the same the screen shows). */
 function valueAndLimit(c: CheckResult, sheet: PrintableSheet): [string, string] {
-  let v = qty(c.value, c.dimension, sheet.unitSystem);
-  let l = qty(c.limit, c.dimension, sheet.unitSystem);
-  if (v === l && c.value !== c.limit) {
-    const fine = { digits: 6 };
-    v = qty(c.value, c.dimension, sheet.unitSystem, fine);
-    l = qty(c.limit, c.dimension, sheet.unitSystem, fine);
-  }
-  return [v, l];
+  const f = checkFigures(c, sheet.unitSystem);
+  return [f.value, f.limit];
 }
 
 /** 'Limit' column text: ≤ for maxima, ≥ for minima, in the sheet's units. */

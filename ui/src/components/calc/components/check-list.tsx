@@ -1,11 +1,11 @@
 import { memo, type ReactNode } from 'react';
 import { Stack, Text } from '@mantine/core';
-import type { CheckDriver, CheckResult, Dimension } from '@holdfast/calc';
+import { checkFigures, type CheckDriver, type CheckResult, type Dimension } from '@holdfast/calc';
 import { Aside } from './aside';
 import { CheckDriversButton } from './check-drivers-button';
 import { Verdict } from './verdict';
 import { UtilisationBar } from './utilisation-bar';
-import { presentSI, type UnitSystem } from '../utils/units';
+import type { UnitSystem } from '../utils/units';
 import classes from './check-list.module.css';
 
 export interface CheckListProps {
@@ -47,9 +47,11 @@ const CheckRow = memo(function CheckRow({
   renderAside,
   findDrivers,
 }: CheckRowProps) {
-  const dim = check.dimension as Dimension;
-  const value = presentSI(check.value, dim, unitSystem);
-  const limit = presentSI(check.limit, dim, unitSystem);
+  // The figures the printed sheet shows for this check, so screen and paper agree.
+  const figures = checkFigures(
+    { value: check.value, limit: check.limit, dimension: check.dimension as Dimension },
+    unitSystem,
+  );
   const relation = check.kind === 'max' ? '≤' : '≥';
   return (
     <li
@@ -62,9 +64,9 @@ const CheckRow = memo(function CheckRow({
         <div className={classes.text}>
           <p className={classes.label}>{check.label}</p>
           <p className={classes.figures}>
-            {value.text}{' '}
+            {figures.value}{' '}
             <span className={classes.dimmed}>
-              {relation} {limit.text} {check.kind === 'max' ? 'allowed' : 'required'}
+              {relation} {figures.limit} {check.kind === 'max' ? 'allowed' : 'required'}
             </span>
           </p>
         </div>

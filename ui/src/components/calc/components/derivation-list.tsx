@@ -1,10 +1,15 @@
 import { useState, type ReactNode } from 'react';
 import { Box, Code, Collapse, Group, Stack, Text, Title, UnstyledButton } from '@mantine/core';
 import { IconChevronRight } from '@tabler/icons-react';
-import type { DerivationStep, Dimension, SectionDefinition } from '@holdfast/calc';
+import {
+  formatForDerivation,
+  type DerivationStep,
+  type Dimension,
+  type SectionDefinition,
+} from '@holdfast/calc';
 import { Aside } from './aside';
 import { sectionOrder } from './results-table';
-import { presentSI, type UnitSystem } from '../utils/units';
+import { presentPrinted, type UnitSystem } from '../utils/units';
 
 export interface DerivationListProps {
   /**
@@ -68,7 +73,11 @@ function StepRow({
   aside?: ReactNode;
 }) {
   const [open, setOpen] = useState(false);
-  const result = presentSI(step.value, step.dimension as Dimension, unitSystem);
+  // As the printed derivation writes the result: in the units of its substitution in SI.
+  const result =
+    unitSystem === 'SI'
+      ? { text: formatForDerivation(step.value, step.dimension as Dimension) }
+      : presentPrinted(step.value, step.dimension as Dimension, unitSystem);
   const bodyId = `step-body-${step.id}`;
   return (
     <Box data-step={step.id} style={{ borderBottom: '1px solid var(--mantine-color-gray-2)' }}>

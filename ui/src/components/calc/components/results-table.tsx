@@ -1,7 +1,7 @@
 import { Table, Text, Title } from '@mantine/core';
 import type { Dimension, ResultValue, SectionDefinition } from '@holdfast/calc';
 import { SymbolText } from './symbol-text';
-import { presentSI, type UnitSystem } from '../utils/units';
+import { presentPrinted, type UnitSystem } from '../utils/units';
 
 export interface ResultsTableProps {
   results: ResultValue[];
@@ -28,7 +28,7 @@ export function ResultsTable({ results, sections, unitSystem }: ResultsTableProp
             <Table striped highlightOnHover withRowBorders={false} verticalSpacing={4} fz="sm">
               <Table.Tbody>
                 {rows.map((r) => {
-                  const d = presentSI(r.value, r.dimension as Dimension, unitSystem);
+                  const d = presentPrinted(r.value, r.dimension as Dimension, unitSystem);
                   return (
                     <Table.Tr key={r.key} data-result={r.key}>
                       <Table.Td>{r.label}</Table.Td>

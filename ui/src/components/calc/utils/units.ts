@@ -76,6 +76,21 @@ export function presentSI(
 }
 
 /**
+ * An SI value as the printed sheet shows it: to the dimension's printing precision (calc's
+ * PRECISION table), so a result or a step on screen reads as it does on paper (2730 N, 0.0794 MPa).
+ */
+export function presentPrinted(
+  valueSI: number,
+  dimension: Dimension,
+  system: UnitSystem,
+): { number: string; unit: string; text: string } {
+  if (!Number.isFinite(valueSI)) return { number: '—', unit: '', text: '—' };
+  const d = toDisplay(valueSI, dimension, system);
+  const number = d.label ? d.text.slice(0, d.text.length - d.label.length).trim() : d.text;
+  return { number, unit: d.label, text: d.text };
+}
+
+/**
  * A field setting as the printed field card shows it: in the unit system, to the step a fitter
  * sets it by (calc's `settingPrecision`, the same function the card prints with), so the screen
  * and the card never disagree (a spring length of 0.2227 m reads 222.5 mm on both).

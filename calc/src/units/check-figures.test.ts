@@ -1,0 +1,32 @@
+import { describe, expect, it } from 'vitest';
+import { checkFigures } from './check-figures.js';
+
+describe('checkFigures', () => {
+  it('prints value and limit to the dimension’s precision (a count of brakes as 2, not 2.000)', () => {
+    expect(checkFigures({ value: 2, limit: 2, dimension: 'dimensionless' }, 'SI')).toEqual({
+      value: '2',
+      limit: '2',
+    });
+    expect(checkFigures({ value: 0.0794e6, limit: 0.7e6, dimension: 'pressure' }, 'SI')).toEqual({
+      value: '0.0794 MPa',
+      limit: '0.700 MPa',
+    });
+  });
+
+  it('gives more figures when value and limit would print alike but differ', () => {
+    const f = checkFigures({ value: 2.098e6, limit: 2.1e6, dimension: 'pv' }, 'SI');
+    expect(f.value).not.toBe(f.limit);
+    expect(f).toEqual({ value: '2.09800 MPa·m/s', limit: '2.10000 MPa·m/s' });
+  });
+
+  it('converts to US customary units', () => {
+    expect(checkFigures({ value: 1355.82, limit: 1694.8, dimension: 'torque' }, 'US')).toEqual({
+      value: '1000 lbf·ft',
+      limit: '1250 lbf·ft',
+    });
+  });
+
+  it('prints a value that is not finite as a dash', () => {
+    expect(checkFigures({ value: Number.NaN, limit: 1, dimension: 'force' }, 'SI').value).toBe('—');
+  });
+});
