@@ -95,6 +95,12 @@ export {
 export { sheetTypes, getSheetType, demoInputs, fieldStart } from './sheets/registry.js';
 export { settingBands } from './sheets/setting-band.js';
 export { bandOf, bandSentence, rowVerdict } from './sheets/setting-band-words.js';
+export {
+  settingTableRows,
+  marksText,
+  type SettingTableRow,
+  type BandMark,
+} from './sheets/setting-band-rows.js';
 export { failAdvice } from './sheets/checks.js';
 export { SHEET_TYPE_IDS, DIMENSION_IDS, type SheetTypeId } from './ids.js';
 export {

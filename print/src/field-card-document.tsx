@@ -13,7 +13,7 @@ import { Text } from './text.js';
 import { groupFieldSettings, type DiscStackSetup } from './field-card-groups.js';
 import { qty } from './format.js';
 import { Caution, rotorOf, type BrakeRotor } from './parts/caution.js';
-import { SettingTable } from './parts/field-settings.js';
+import { failingLabels, SettingTable } from './parts/field-settings.js';
 
 import { Heading, Table } from './parts/table.js';
 import type { PrintableSheet, PrintUnitSystem } from './printable-sheet.js';
@@ -208,6 +208,7 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
                     table={t}
                     system={system}
                     band={bandOf(sheet.evaluation ?? {}, t.id)}
+                    failingAtSet={failingLabels(sheet.evaluation)}
                   />
                 ))}
               </View>
@@ -251,6 +252,7 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
                 table={t}
                 system={system}
                 band={bandOf(sheet.evaluation ?? {}, t.id)}
+                failingAtSet={failingLabels(sheet.evaluation)}
               />
             ))}
           </>

@@ -15,13 +15,24 @@ export function bandOf(
  * up, the high end down), so the printed figure itself still passes every check.
  */
 function bandEnd(v: number, end: 'low' | 'high', system: UnitSystem): string {
+  const r = roundedInward(v, end, system);
+  return r ? `${r.text} ${r.label}` : toDisplay(v, 'force', system).text;
+}
+
+/** The band end `bandEnd` prints, as an SI value (the setting a table row can be worked out at). */
+export function bandEndValue(v: number, end: 'low' | 'high', system: UnitSystem): number {
+  const r = roundedInward(v, end, system);
+  return r ? r.si : v;
+}
+
+function roundedInward(v: number, end: 'low' | 'high', system: UnitSystem) {
   const d = toDisplay(v, 'force', system);
   const x = d.value;
-  if (!(x > 0)) return d.text;
+  if (!(x > 0)) return undefined;
   const digits = Math.floor(Math.log10(x)) - 2;
   const step = 10 ** digits;
   const inward = (end === 'low' ? Math.ceil(x / step - 1e-9) : Math.floor(x / step + 1e-9)) * step;
-  return `${inward.toFixed(Math.max(0, -digits))} ${d.label}`;
+  return { text: inward.toFixed(Math.max(0, -digits)), label: d.label, si: (inward / x) * v };
 }
 
 /**

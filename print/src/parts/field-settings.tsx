@@ -1,6 +1,8 @@
 import {
   bandOf,
   checkFigures,
+  marksText,
+  settingTableRows,
   failAdvice,
   bandSentence,
   rowVerdict,
@@ -27,8 +29,11 @@ export function SettingTable(props: {
   extra?: Column[];
   /** The rows checked against the whole sheet, when the record carries it. */
   band?: SettingBand;
+  /** Labels of the checks failing at the set value (no band rows are added then). */
+  failingAtSet: readonly string[];
 }) {
   const { table, system, band } = props;
+  const rows = settingTableRows(table, band, system, props.failingAtSet);
   const columns = settingColumns(table, system);
   const extra = props.extra ?? [];
   return (
@@ -37,13 +42,23 @@ export function SettingTable(props: {
       {band && <Text style={{ fontSize: 7.5, marginBottom: 3 }}>{bandSentence(band, system)}</Text>}
       <Table
         columns={[...columns, ...(band ? [CARD_VERDICT_COLUMN] : []), ...extra]}
-        rows={table.rows.map((row, k) => [
+        rows={rows.map((row) => [
           ...table.columns.map(
             (c) =>
-              qtyParts(row[c.key], c.dimension, system, settingPrecision(c.key, c.dimension)).text,
+              qtyParts(
+                row.values[c.key]!,
+                c.dimension,
+                system,
+                settingPrecision(c.key, c.dimension),
+              ).text,
           ),
-          // The card keeps one line a row: the sentence above names the checks.
-          ...(band ? [band.failing[k]?.length ? 'no' : 'yes'] : []),
+          // The card keeps a row short: the sentence above names the checks.
+          ...(band
+            ? [
+                (row.failing?.length ? 'no' : 'yes') +
+                  (row.marks.length ? `, ${marksText(row.marks)}` : ''),
+              ]
+            : []),
           ...extra.map(() => ''),
         ])}
       />
@@ -51,9 +66,14 @@ export function SettingTable(props: {
   );
 }
 
+/** Labels of the checks an evaluation fails at its set values. */
+export function failingLabels(ev: SheetEvaluation | null | undefined): string[] {
+  return ev?.checks.filter((c) => !c.pass).map((c) => c.label) ?? [];
+}
+
 /** The column saying, per row, whether every check of the sheet passes at that setting. */
 const VERDICT_COLUMN: Column = { title: 'Other checks at this setting', flex: 2.2 };
-const CARD_VERDICT_COLUMN: Column = { title: 'Every check passes', flex: 0.8, align: 'center' };
+const CARD_VERDICT_COLUMN: Column = { title: 'Every check passes', flex: 1.1, align: 'center' };
 
 function settingColumns(table: EvalTable, system: PrintUnitSystem): Column[] {
   return table.columns.map((c) => {
@@ -91,8 +111,10 @@ export function fieldSettingsBlocks(ctx: BlockContext, sheet: PrintableSheet): F
       }),
     );
   }
+  const failingAtSet = failingLabels(ev);
   ev.tables.forEach((t) => {
     const band = bandOf(ev, t.id);
+    const rows = settingTableRows(t, band, system, failingAtSet);
     blocks.push(
       headingBlock(ctx, `${t.id}-h`, t.title, 2),
       ...(band
@@ -106,12 +128,19 @@ export function fieldSettingsBlocks(ctx: BlockContext, sheet: PrintableSheet): F
       ...tableBlocks(ctx, t.id, {
         continuedTitle: t.title,
         columns: [...settingColumns(t, system), ...(band ? [VERDICT_COLUMN] : [])],
-        rows: t.rows.map((row, k) => [
+        rows: rows.map((row) => [
           ...t.columns.map(
             (c) =>
-              qtyParts(row[c.key], c.dimension, system, settingPrecision(c.key, c.dimension)).text,
+              qtyParts(
+                row.values[c.key]!,
+                c.dimension,
+                system,
+                settingPrecision(c.key, c.dimension),
+              ).text,
           ),
-          ...(band ? [rowVerdict(band.failing[k])] : []),
+          ...(band
+            ? [rowVerdict(row.failing) + (row.marks.length ? ` (${marksText(row.marks)})` : '')]
+            : []),
         ]),
       }),
     );

@@ -123,10 +123,15 @@ describe('FieldSettingsView', () => {
       within(grid).getByRole('columnheader', { name: 'Other checks at this setting' }),
     ).toBeTruthy();
     const rows = within(grid).getAllByRole('row').slice(1);
-    expect(rows.map((r) => r.lastElementChild?.textContent)).toEqual([
-      'fails: Stopping distance at the load ≤ allowed',
-      'every check passes',
-      'fails: p·v when the brake sets ≤ limit',
+    // The band's ends (as the sentence prints them) and the set value are rows of their own.
+    expect(
+      rows.map((r) => [r.firstElementChild?.textContent, r.lastElementChild?.textContent]),
+    ).toEqual([
+      ['1000', 'fails: Stopping distance at the load ≤ allowed'],
+      ['1120', 'every check passes (low end of the band)'],
+      ['1150', 'every check passes (as set)'],
+      ['1170', 'every check passes (high end of the band)'],
+      ['1300', 'fails: p·v when the brake sets ≤ limit'],
     ]);
   });
 

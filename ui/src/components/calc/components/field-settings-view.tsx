@@ -2,7 +2,9 @@ import { Stack, Table, Text, Title } from '@mantine/core';
 import {
   bandOf,
   bandSentence,
+  marksText,
   rowVerdict,
+  settingTableRows,
   type Dimension,
   type SettingBand,
   type SheetEvaluation,
@@ -24,6 +26,7 @@ export function FieldSettingsView({
   unitSystem: UnitSystem;
 }) {
   const { fieldSettings, tables } = evaluation;
+  const failingAtSet = evaluation.checks.filter((c) => !c.pass).map((c) => c.label);
   if (fieldSettings.length === 0 && tables.length === 0) {
     return <Text c="dimmed">No field settings for this sheet type.</Text>;
   }
@@ -56,6 +59,7 @@ export function FieldSettingsView({
           return { ...c, unitLabel: unit };
         });
         const band = bandOf({ settingBands: bands }, table.id);
+        const rows = settingTableRows(table, band, unitSystem, failingAtSet);
         return (
           <div key={table.id}>
             <Title order={4} size="h6" mb={4}>
@@ -79,13 +83,17 @@ export function FieldSettingsView({
                 </Table.Tr>
               </Table.Thead>
               <Table.Tbody>
-                {table.rows.map((row, i) => (
-                  <Table.Tr key={i}>
+                {rows.map((row, i) => (
+                  <Table.Tr
+                    key={i}
+                    data-band-mark={row.marks.length ? row.marks.join(',') : undefined}
+                    fw={row.marks.length ? 600 : undefined}
+                  >
                     {heads.map((c) => (
                       <Table.Td key={c.key} ff="monospace" ta="right">
                         {
                           presentSetting(
-                            row[c.key] ?? Number.NaN,
+                            row.values[c.key] ?? Number.NaN,
                             c.key,
                             c.dimension as Dimension,
                             unitSystem,
@@ -96,9 +104,10 @@ export function FieldSettingsView({
                     {band ? (
                       <Table.Td
                         fz="xs"
-                        c={band.failing[i]?.length ? 'var(--mantine-color-red-8)' : undefined}
+                        c={row.failing?.length ? 'var(--mantine-color-red-8)' : undefined}
                       >
-                        {rowVerdict(band.failing[i])}
+                        {rowVerdict(row.failing)}
+                        {row.marks.length ? ` (${marksText(row.marks)})` : ''}
                       </Table.Td>
                     ) : null}
                   </Table.Tr>
