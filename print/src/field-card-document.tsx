@@ -13,7 +13,7 @@ import { Text } from './text.js';
 import { groupFieldSettings, type DiscStackSetup } from './field-card-groups.js';
 import { qty } from './format.js';
 import { Caution, rotorOf, type BrakeRotor } from './parts/caution.js';
-import { failingLabels, SettingTable } from './parts/field-settings.js';
+import { beyondBand, failingLabels, SettingTable } from './parts/field-settings.js';
 
 import { Heading, Table } from './parts/table.js';
 import type { PrintableSheet, PrintUnitSystem } from './printable-sheet.js';
@@ -209,6 +209,7 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
                     system={system}
                     band={bandOf(sheet.evaluation ?? {}, t.id)}
                     failingAtSet={failingLabels(sheet.evaluation)}
+                    beyond={beyondBand(sheet, t, card)}
                   />
                 ))}
               </View>
@@ -253,6 +254,7 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
                 system={system}
                 band={bandOf(sheet.evaluation ?? {}, t.id)}
                 failingAtSet={failingLabels(sheet.evaluation)}
+                beyond={beyondBand(sheet, t, card)}
               />
             ))}
           </>

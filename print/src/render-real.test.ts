@@ -3,6 +3,7 @@ import { renderFieldCardPdf, renderSheetPdf } from './render.js';
 import { isMinorCheck } from './parts/summary.js';
 import { criteriaFor, realPrintable } from './testing/real-sheet.js';
 import { ensurePoppler, inspectPdf, type PdfFacts } from './testing/poppler.js';
+import { bandOf, getSheetType, toleranceBeyondBand } from '@holdfast/calc';
 
 // The same renderers over real calc evaluations of every sheet type's default inputs.
 const SLOW = 300_000;
@@ -90,6 +91,22 @@ describe.each(TYPES)('%s, real evaluation', (sheetTypeId) => {
   it('fits the field card on one or two pages', () => {
     expect(card.pages).toBeLessThanOrEqual(2);
     expect(card.text).toContain('Set by');
+  });
+
+  it('prints every field tolerance that reaches past the band, on the card and the sheet', () => {
+    const ev = sheet.evaluation!;
+    const layout = getSheetType(sheetTypeId)!.fieldCard;
+    const lines = ev.tables.flatMap((t) => {
+      const band = bandOf(ev, t.id);
+      return band ? toleranceBeyondBand(ev, t, band, layout, sheet.unitSystem) : [];
+    });
+    // The demo hoist's ±5 % on the spring force reaches past its narrow band.
+    if (sheetTypeId === 'hoist-shoe-brake') expect(lines).toHaveLength(1);
+    const flat = (t: string) => t.replace(/\s+/g, ' ');
+    for (const line of lines) {
+      expect(flat(card.text)).toContain(flat(`Tolerance too wide: ${line}`));
+      expect(flat(pdf.text)).toContain(flat(`Tolerance too wide: ${line}`));
+    }
   });
 
   it("speaks of the brake's own parts on the card: pads and a disc, or lining and a drum", () => {

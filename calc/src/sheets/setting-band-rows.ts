@@ -69,7 +69,7 @@ export function settingTableRows(
  * Each column as a straight line in the setting column `key` through the first and last rows,
  * if every row lies on it and the setting rises row by row; otherwise undefined.
  */
-function straightLines(table: Table, key: string) {
+export function straightLines(table: Table, key: string) {
   const first = table.rows[0]!;
   const last = table.rows[table.rows.length - 1]!;
   const x0 = first[key]!;
@@ -100,7 +100,10 @@ const MARK_WORDS: Record<BandMark, string> = {
   'high end': 'high end of the band',
 };
 
-/** What an added or marked row stands for, in words ('' for a plain row of the table). */
-export function marksText(marks: readonly BandMark[]): string {
-  return marks.map((m) => MARK_WORDS[m]).join(', ');
+/**
+ * What an added or marked row stands for, in words ('' for a plain row of the table); `short`
+ * for a narrow column whose heading already speaks of the band ('low end', 'as set').
+ */
+export function marksText(marks: readonly BandMark[], short = false): string {
+  return marks.map((m) => (short ? m : MARK_WORDS[m])).join(', ');
 }

@@ -56,16 +56,19 @@ export function TableRow(props: {
   row: Cell[];
   fontSize?: number;
   last?: boolean;
+  /** Half the usual padding above and below: long numeric tables on a one-page card. */
+  dense?: boolean;
 }) {
   const { columns } = props;
   const fontSize = props.fontSize ?? 7.8;
+  const paddingVertical = props.dense ? 1 : 2;
   return (
     <View wrap={false} style={{ ...ruledRow, ...(props.last ? { marginBottom: 6 } : {}) }}>
       {props.row.map((cell, i) => {
         const c = columns[i];
         const style = {
           ...box(c),
-          paddingVertical: 2,
+          paddingVertical,
           paddingHorizontal: 3,
           fontSize,
           textAlign: c.align ?? 'left',
@@ -90,13 +93,18 @@ export function TableRow(props: {
  * the first rows, so a page never ends on a lone header. (The calculation sheet cuts its tables
  * into blocks instead: see tableBlocks.)
  */
-export function Table(props: { columns: Column[]; rows: Cell[][]; fontSize?: number }) {
-  const { columns, rows, fontSize } = props;
+export function Table(props: {
+  columns: Column[];
+  rows: Cell[][];
+  fontSize?: number;
+  dense?: boolean;
+}) {
+  const { columns, rows, fontSize, dense } = props;
   return (
     <View style={{ borderTopWidth: 1, borderColor: colours.ink, marginBottom: 6 }}>
       <TableHeader columns={columns} fontSize={fontSize} />
       {rows.map((row, r) => (
-        <TableRow key={r} columns={columns} row={row} fontSize={fontSize} />
+        <TableRow key={r} columns={columns} row={row} fontSize={fontSize} dense={dense} />
       ))}
     </View>
   );

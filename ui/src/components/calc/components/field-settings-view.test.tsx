@@ -156,4 +156,49 @@ describe('FieldSettingsView', () => {
     expect(screen.queryByTestId('setting-band')).toBeNull();
     expect(screen.queryByRole('columnheader', { name: 'Other checks at this setting' })).toBeNull();
   });
+
+  it('says in red when a setting’s tolerance reaches settings where a check fails', () => {
+    const table = {
+      id: 'spring-setting',
+      title: 'Spring setting table (new lining)',
+      columns: [
+        { key: 'springForce', label: 'Spring force', unit: 'N', dimension: 'force' as const },
+      ],
+      rows: [{ springForce: 1000 }, { springForce: 1300 }],
+    };
+    const band = {
+      tableId: 'spring-setting',
+      set: 1150,
+      failing: [['Stopping distance at the load ≤ allowed'], ['p·v when the brake sets ≤ limit']],
+      low: 1113.7,
+      high: 1176.4,
+      lowLimitedBy: ['Stopping distance at the load ≤ allowed'],
+      highLimitedBy: ['p·v when the brake sets ≤ limit'],
+    };
+    const force = {
+      key: 'springForce',
+      label: 'Main spring force as set',
+      value: 1150,
+      unit: 'N',
+      dimension: 'force' as const,
+      tolerance: {
+        band: { kind: 'relative' as const, minus: 0.05, plus: 0.05 },
+        source: 'common practice',
+        confidence: 'common practice' as const,
+      },
+    };
+    renderWithProviders(
+      <FieldSettingsView
+        evaluation={makeEvaluation({ tables: [table], fieldSettings: [force] })}
+        bands={[band]}
+        unitSystem="SI"
+      />,
+    );
+    expect(screen.getByTestId('tolerance-beyond-band')).toHaveTextContent(
+      'Tolerance too wide: Main spring force as set ± 5 % reaches 1090 N … 1210 N, past the band',
+    );
+    expect(screen.getByTestId('tolerance-beyond-band')).toHaveTextContent(
+      'keep it between 1120 N and 1170 N',
+    );
+  });
 });

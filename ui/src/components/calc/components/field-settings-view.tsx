@@ -2,9 +2,11 @@ import { Stack, Table, Text, Title } from '@mantine/core';
 import {
   bandOf,
   bandSentence,
+  getSheetType,
   marksText,
   rowVerdict,
   settingTableRows,
+  toleranceBeyondBand,
   type Dimension,
   type SettingBand,
   type SheetEvaluation,
@@ -27,6 +29,7 @@ export function FieldSettingsView({
 }) {
   const { fieldSettings, tables } = evaluation;
   const failingAtSet = evaluation.checks.filter((c) => !c.pass).map((c) => c.label);
+  const fieldCard = getSheetType(evaluation.sheetType)?.fieldCard;
   if (fieldSettings.length === 0 && tables.length === 0) {
     return <Text c="dimmed">No field settings for this sheet type.</Text>;
   }
@@ -60,6 +63,9 @@ export function FieldSettingsView({
         });
         const band = bandOf({ settingBands: bands }, table.id);
         const rows = settingTableRows(table, band, unitSystem, failingAtSet);
+        const beyond = band
+          ? toleranceBeyondBand(evaluation, table, band, fieldCard, unitSystem)
+          : [];
         return (
           <div key={table.id}>
             <Title order={4} size="h6" mb={4}>
@@ -70,6 +76,18 @@ export function FieldSettingsView({
                 {bandSentence(band, unitSystem)}
               </Text>
             ) : null}
+            {beyond.map((line) => (
+              <Text
+                key={line}
+                size="sm"
+                mb={6}
+                fw={700}
+                c="red.8"
+                data-testid="tolerance-beyond-band"
+              >
+                Tolerance too wide: {line}
+              </Text>
+            ))}
             <Table withTableBorder striped fz="sm" aria-label={table.title}>
               <Table.Thead>
                 <Table.Tr>

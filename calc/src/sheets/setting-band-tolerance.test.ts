@@ -1,0 +1,104 @@
+import { describe, expect, it } from 'vitest';
+import { getCriteriaSet } from '../criteria/lookup.js';
+import type { SettingBand, SheetEvaluation } from '../core/types.js';
+import { SPRING_LENGTH } from '../field/tolerances.js';
+import { demoInputs, getSheetType } from './registry.js';
+import { settingBands } from './setting-band.js';
+import { toleranceBeyondBand } from './setting-band-tolerance.js';
+
+function demo(id: string, set: string) {
+  const criteria = getCriteriaSet(set)!;
+  const sheet = getSheetType(id)!;
+  const inputs = demoInputs(sheet);
+  const ev = sheet.evaluate(inputs, criteria);
+  const band = settingBands(sheet, inputs, criteria, ev)[0]!;
+  const table = ev.tables.find((t) => t.id === band.tableId)!;
+  const failingAt = (force: number) =>
+    sheet
+      .evaluate({ ...inputs, springForce: { value: force, unit: 'N' } }, criteria)
+      .checks.filter((c) => !c.pass)
+      .map((c) => c.label);
+  return { sheet, ev, band, table, failingAt };
+}
+
+describe('field tolerances against the band where every check passes', () => {
+  it('demo hoist: ±5 % on the spring force reaches settings that fail, ±0.5 mm on the length does not', () => {
+    const { sheet, ev, band, table, failingAt } = demo('hoist-shoe-brake', 'crane-hoist');
+    const said = toleranceBeyondBand(ev, table, band, sheet.fieldCard, 'SI');
+    expect(said).toHaveLength(1);
+    expect(said[0]).toBe(
+      'Main spring force as set ± 5 % reaches 1090 N … 1210 N, past the band: keep it between ' +
+        '1120 N and 1170 N.',
+    );
+    // What it says is so: the sheet worked out at the tolerance's ends fails the checks the band
+    // sentence beside it names.
+    const set = ev.fieldSettings.find((f) => f.key === 'springForce')!.value;
+    expect(failingAt(set * 0.95)).toEqual(band.lowLimitedBy);
+    expect(failingAt(set * 1.05)).toEqual(band.highLimitedBy);
+    // And the length's tolerance is safe: its ends stay inside the band.
+    const length = ev.fieldSettings.find((f) => f.key === 'springLength')!.value;
+    const rate = 40_000; // N/m, the demo spring
+    expect(failingAt(set + rate * 0.0005)).toEqual([]);
+    expect(failingAt(set - rate * 0.0005)).toEqual([]);
+    expect(length).toBeGreaterThan(0);
+  });
+
+  it('drive sheet demo: every tolerance inside the band, nothing said', () => {
+    const { sheet, ev, band, table, failingAt } = demo('drive-shoe-brake', 'general-industry');
+    expect(toleranceBeyondBand(ev, table, band, sheet.fieldCard, 'SI')).toEqual([]);
+    const set = ev.fieldSettings.find((f) => f.key === 'springForce')!.value;
+    expect(failingAt(set * 0.95)).toEqual([]);
+    expect(failingAt(set * 1.05)).toEqual([]);
+  });
+
+  const table: SheetEvaluation['tables'][number] = {
+    id: 'spring-setting',
+    title: 't',
+    columns: [
+      { key: 'springForce', label: 'F', unit: 'N', dimension: 'force' },
+      { key: 'springLength', label: 'L', unit: 'm', dimension: 'length' },
+    ],
+    // k = 40 N/mm, free length 250 mm.
+    rows: [
+      { springForce: 1000, springLength: 0.225 },
+      { springForce: 1400, springLength: 0.215 },
+    ],
+  };
+  const band: SettingBand = {
+    tableId: 'spring-setting',
+    set: 1200,
+    failing: [['stop'], ['p·v']],
+    low: 1195,
+    high: 1230,
+    lowLimitedBy: ['Stopping distance at the load ≤ allowed'],
+    highLimitedBy: null,
+  };
+  const ev = {
+    checks: [],
+    fieldSettings: [
+      {
+        key: 'springLength',
+        label: 'Main spring length as set',
+        value: 0.22,
+        unit: 'm',
+        dimension: 'length' as const,
+        tolerance: SPRING_LENGTH,
+      },
+    ],
+  };
+
+  it('reads a length through the table: ±0.5 mm is ±20 N on a 40 N/mm spring', () => {
+    const said = toleranceBeyondBand(ev, table, band, undefined, 'SI');
+    expect(said).toEqual([
+      'Main spring length as set ± 0.5 mm reaches a spring force down to 1180 N, past the band: ' +
+        'keep it between 219.3 mm and 220.0 mm.',
+    ]);
+  });
+
+  it('says nothing where checks already fail at the set value, or the tolerance stays inside', () => {
+    const failing = { ...ev, checks: [{ pass: false } as SheetEvaluation['checks'][number]] };
+    expect(toleranceBeyondBand(failing, table, band, undefined, 'SI')).toEqual([]);
+    const wide = { ...band, low: 1150, high: 1250 };
+    expect(toleranceBeyondBand(ev, table, wide, undefined, 'SI')).toEqual([]);
+  });
+});
