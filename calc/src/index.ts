@@ -84,6 +84,7 @@ export * from './helical-spring/compression-spring.js';
 export { LININGS, getLining, type LiningMaterial } from './criteria/linings.js';
 export { CRITERIA_SETS, GENERAL_INDUSTRY, CRANE_HOIST, TRAVEL_DRIVE } from './criteria/sets.js';
 export { getCriteriaSet, criterion, criterionIfSet } from './criteria/lookup.js';
+export { criterionText } from './criteria/criterion-text.js';
 export {
   CRITERION_SPECS,
   REQUIRED_CRITERIA,

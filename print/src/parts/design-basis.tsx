@@ -1,21 +1,11 @@
-import { DIMENSIONS, type Dimension } from '@holdfast/calc';
+import { criterionText } from '@holdfast/calc';
 import { View } from '@react-pdf/renderer';
 import { Text } from '../text.js';
-import { day, qty } from '../format.js';
-import type { PrintableSheet, PrintCriterion, PrintUnitSystem } from '../printable-sheet.js';
+import { day } from '../format.js';
+import type { PrintableSheet, PrintCriterion } from '../printable-sheet.js';
 import { colours } from '../theme.js';
 import { headingBlock, paragraphBlock, tableBlocks, type BlockContext } from '../blocks.js';
 import type { FlowBlock } from '../flow.js';
-
-/** A criteria value in the sheet's units when its unit is a known SI unit, else as stored. */
-function criterionText(value: number, unit: string, system: PrintUnitSystem): string {
-  if (!unit) return String(value);
-  const dims = (Object.keys(DIMENSIONS) as Dimension[]).filter(
-    (d) => d !== 'dimensionless' && DIMENSIONS[d].siUnit === unit,
-  );
-  // 'K' is both a temperature and a temperature difference: ambiguous units print as stored.
-  return dims.length === 1 ? qty(value, dims[0], system) : `${value} ${unit}`;
-}
 
 /** Printed beside a value still recalled from memory, in the value cell itself. */
 export const FROM_MEMORY_MARK = '[from memory]';
@@ -96,8 +86,8 @@ export function designBasisBlocks(ctx: BlockContext, sheet: PrintableSheet): Flo
         rows: c.values.map((v) => [
           v.label,
           fromMemory(v)
-            ? `${criterionText(v.value, v.unit, sheet.unitSystem)} ${FROM_MEMORY_MARK}`
-            : criterionText(v.value, v.unit, sheet.unitSystem),
+            ? `${criterionText(v.value, v.unit, sheet.unitSystem).text} ${FROM_MEMORY_MARK}`
+            : criterionText(v.value, v.unit, sheet.unitSystem).text,
           v.source,
           standing(v),
         ]),
