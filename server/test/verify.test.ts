@@ -57,6 +57,12 @@ describe('printout verification', () => {
       newerApproved: { revisionLabel: 'B' },
     });
 
+    // Typed as a reader might: digits for the look-alike letters, split with a hyphen.
+    const typed = a.verificationCode.replace(/O/g, '0').replace(/I/g, '1').replace(/B/g, '8');
+    res = await ctx.request('GET', `/api/verify/${typed.slice(0, 5)}-${typed.slice(5)}`);
+    expect(res.status).toBe(200);
+    expect(res.body).toMatchObject({ revisionLabel: 'A' });
+
     expect((await ctx.request('GET', '/api/verify/AAAAAAAAAA')).status).toBe(404);
     const malformed = await ctx.request('GET', '/api/verify/not-a-code');
     expect(malformed.status).toBe(400);

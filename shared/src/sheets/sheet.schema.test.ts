@@ -58,6 +58,11 @@ describe('sheets API schemas', () => {
     );
     expect(createSheetSchema.safeParse({ ...sheet, sheetType: 'band-brake' }).success).toBe(false);
     expect(verificationCodeSchema.parse(' abcdefgh23 ')).toBe('ABCDEFGH23');
-    expect(verificationCodeSchema.safeParse('ABCDEFGH18').success).toBe(false);
+    // A 0, 1 or 8 is not in the alphabet: typed for O, I or B, it is taken as that letter.
+    expect(verificationCodeSchema.parse('4p07jzd46a')).toBe('4PO7JZD46A');
+    expect(verificationCodeSchema.parse('ABCDE-FGH18')).toBe('ABCDEFGHIB');
+    expect(verificationCodeSchema.parse('4PO7 JZD4 6A')).toBe('4PO7JZD46A');
+    expect(verificationCodeSchema.safeParse('ABCDEFGH19').success).toBe(false);
+    expect(verificationCodeSchema.safeParse('ABCDEFGH2').success).toBe(false);
   });
 });

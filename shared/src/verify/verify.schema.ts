@@ -2,12 +2,32 @@ import { z } from 'zod';
 import { revisionStateSchema } from '../revisions/evaluation.schema.js';
 import { isoDateSchema } from '../sheets/person-ref.schema.js';
 
-/** Shape of a printed verification code: 10 characters of RFC 4648 base32. */
+/**
+ * Digits a reader types for the letter they see: the code's alphabet (RFC 4648 base32) has no 0,
+ * 1 or 8, so these can only mean O, I and B.
+ */
+const LOOK_ALIKES: Readonly<Record<string, string>> = { '0': 'O', '1': 'I', '8': 'B' };
+
+/**
+ * Shape of a printed verification code: 10 characters of RFC 4648 base32. What a reader types is
+ * taken as meant: any case, spaces and hyphens ignored, a 0, 1 or 8 read as O, I or B.
+ */
 export const verificationCodeSchema = z
   .string()
-  .trim()
-  .toUpperCase()
-  .regex(/^[A-Z2-7]{10}$/, 'a verification code is 10 letters and digits');
+  .transform((s) =>
+    s
+      .toUpperCase()
+      .replace(/[\s-]+/g, '')
+      .replace(/[018]/g, (c) => LOOK_ALIKES[c]!),
+  )
+  .pipe(
+    z
+      .string()
+      .regex(
+        /^[A-Z2-7]{10}$/,
+        'a verification code is 10 characters: the letters A to Z and the digits 2 to 7',
+      ),
+  );
 
 /** GET /api/verify/:code (public): only these fields, nothing else about the sheet. */
 export const verifyResultSchema = z.object({
