@@ -102,7 +102,7 @@ export {
   type SettingTableRow,
   type BandMark,
 } from './sheets/setting-band-rows.js';
-export { toleranceBeyondBand } from './sheets/setting-band-tolerance.js';
+export { bandedTolerance, toleranceBeyondBand } from './sheets/setting-band-tolerance.js';
 export { failAdvice } from './sheets/checks.js';
 export { SHEET_TYPE_IDS, DIMENSION_IDS, type SheetTypeId } from './ids.js';
 export {

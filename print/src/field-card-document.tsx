@@ -1,7 +1,7 @@
 import {
   bandOf,
   getSheetType,
-  settingTolerance,
+  bandedTolerance,
   settingPrecision,
   toSI,
   toleranceText,
@@ -13,7 +13,7 @@ import { Text } from './text.js';
 import { groupFieldSettings, type DiscStackSetup } from './field-card-groups.js';
 import { qty } from './format.js';
 import { Caution, rotorOf, type BrakeRotor } from './parts/caution.js';
-import { beyondBand, failingLabels, SettingTable } from './parts/field-settings.js';
+import { failingLabels, SettingTable } from './parts/field-settings.js';
 
 import { Heading, Table } from './parts/table.js';
 import type { PrintableSheet, PrintUnitSystem } from './printable-sheet.js';
@@ -171,7 +171,8 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
   const card = getSheetType(sheet.sheetType.id)?.fieldCard;
   const tolerance: Tolerances = (key) => {
     const s = ev?.fieldSettings.find((f) => f.key === key);
-    return (s ? settingTolerance(s, card) : card?.settings[key]?.tolerance) ?? undefined;
+    // Held inside the band where every check passes, as the records are judged.
+    return (s && ev ? bandedTolerance(s, card, ev) : card?.settings[key]?.tolerance) ?? undefined;
   };
   return (
     <Document
@@ -209,7 +210,6 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
                     system={system}
                     band={bandOf(sheet.evaluation ?? {}, t.id)}
                     failingAtSet={failingLabels(sheet.evaluation)}
-                    beyond={beyondBand(sheet, t, card)}
                   />
                 ))}
               </View>
@@ -254,7 +254,6 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
                 system={system}
                 band={bandOf(sheet.evaluation ?? {}, t.id)}
                 failingAtSet={failingLabels(sheet.evaluation)}
-                beyond={beyondBand(sheet, t, card)}
               />
             ))}
           </>

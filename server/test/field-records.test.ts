@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
 import { fieldCheckKeys } from '@holdfast/shared';
+import { bandedTolerance, getSheetType } from '@holdfast/calc';
 import { InspectionScheduleService } from '../src/field-records/inspection-schedule.service.js';
 import { Database } from '../src/database/database.js';
 import { ObjectStorage } from '../src/storage/object-storage.js';
@@ -55,6 +56,26 @@ describe('field records', () => {
     expect(targets.find((t) => t.settingKey === 'holderBackOff')?.tolerance).toMatchObject({
       direction: 'loosen',
     });
+  });
+
+  it('a card tolerance that reaches past the band where every check passes is held inside it', async () => {
+    const rev = await suite.ctx.request('GET', `/api/revisions/${revisionId}`, { as: 'engineer' });
+    const ev = rev.body.evaluation;
+    const force = targets.find((t) => t.settingKey === 'springForce')!;
+    const setting = ev.fieldSettings.find((f: { key: string }) => f.key === 'springForce');
+    const held = bandedTolerance(setting, getSheetType('hoist-shoe-brake')!.fieldCard, ev);
+    expect(force.tolerance).toEqual(held);
+    // The default hoist passes every check only close to its set force: ±5 % is cut back.
+    expect(held?.source).toMatch(/narrowed to the band where every check of this sheet passes/);
+    // 4 % low lies inside the card's ±5 % but outside the band: judged out.
+    const created = await suite.ctx.request('POST', '/api/field-records', {
+      as: 'technician',
+      body: body({
+        measurements: [{ settingKey: 'springForce', asFound: null, asLeft: force.value * 0.96 }],
+      }),
+    });
+    expect(created.status, created.text).toBe(201);
+    expect(created.body.measurements[0].asLeftVerdict.status).toBe('out');
   });
 
   it('a technician never sees a draft revision, nor makes a record against one', async () => {

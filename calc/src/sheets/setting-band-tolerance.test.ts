@@ -4,7 +4,8 @@ import type { SettingBand, SheetEvaluation } from '../core/types.js';
 import { SPRING_LENGTH } from '../field/tolerances.js';
 import { demoInputs, getSheetType } from './registry.js';
 import { settingBands } from './setting-band.js';
-import { toleranceBeyondBand } from './setting-band-tolerance.js';
+import { bandedTolerance, toleranceBeyondBand } from './setting-band-tolerance.js';
+import { toleranceBounds } from '../field/evaluate-tolerance.js';
 
 function demo(id: string, set: string) {
   const criteria = getCriteriaSet(set)!;
@@ -12,6 +13,7 @@ function demo(id: string, set: string) {
   const inputs = demoInputs(sheet);
   const ev = sheet.evaluate(inputs, criteria);
   const band = settingBands(sheet, inputs, criteria, ev)[0]!;
+  ev.settingBands = [band];
   const table = ev.tables.find((t) => t.id === band.tableId)!;
   const failingAt = (force: number) =>
     sheet
@@ -24,11 +26,21 @@ function demo(id: string, set: string) {
 describe('field tolerances against the band where every check passes', () => {
   it('demo hoist: ±5 % on the spring force reaches settings that fail, ±0.5 mm on the length does not', () => {
     const { sheet, ev, band, table, failingAt } = demo('hoist-shoe-brake', 'crane-hoist');
-    const said = toleranceBeyondBand(ev, table, band, sheet.fieldCard, 'SI');
-    expect(said).toHaveLength(1);
-    expect(said[0]).toBe(
-      'Main spring force as set ± 5 % reaches 1090 N … 1210 N, past the band: keep it between ' +
-        '1120 N and 1170 N.',
+    const said = toleranceBeyondBand(ev, table, sheet.fieldCard, 'SI');
+    expect(said).toEqual([
+      'Main spring force as set ± 5 % would reach 1090 N … 1210 N, past the band: the field card ' +
+        'and the records hold it to −2.61 % / +1.74 % (1120 N to 1170 N).',
+    ]);
+    // The card and the records use the narrowed tolerance; the length's stays as declared.
+    const force = ev.fieldSettings.find((f) => f.key === 'springForce')!;
+    const held = bandedTolerance(force, sheet.fieldCard, ev)!;
+    expect(held.source).toMatch(/narrowed to the band where every check of this sheet passes$/);
+    const { lower, upper } = toleranceBounds(force.value, held);
+    expect(failingAt(lower!)).toEqual([]);
+    expect(failingAt(upper!)).toEqual([]);
+    const lengthSetting = ev.fieldSettings.find((f) => f.key === 'springLength')!;
+    expect(bandedTolerance(lengthSetting, sheet.fieldCard, ev)).toBe(
+      sheet.fieldCard.settings.springLength!.tolerance,
     );
     // What it says is so: the sheet worked out at the tolerance's ends fails the checks the band
     // sentence beside it names.
@@ -44,8 +56,10 @@ describe('field tolerances against the band where every check passes', () => {
   });
 
   it('drive sheet demo: every tolerance inside the band, nothing said', () => {
-    const { sheet, ev, band, table, failingAt } = demo('drive-shoe-brake', 'general-industry');
-    expect(toleranceBeyondBand(ev, table, band, sheet.fieldCard, 'SI')).toEqual([]);
+    const { sheet, ev, table, failingAt } = demo('drive-shoe-brake', 'general-industry');
+    expect(toleranceBeyondBand(ev, table, sheet.fieldCard, 'SI')).toEqual([]);
+    for (const f of ev.fieldSettings)
+      expect(bandedTolerance(f, sheet.fieldCard, ev)?.source ?? '').not.toMatch(/narrowed/);
     const set = ev.fieldSettings.find((f) => f.key === 'springForce')!.value;
     expect(failingAt(set * 0.95)).toEqual([]);
     expect(failingAt(set * 1.05)).toEqual([]);
@@ -75,6 +89,8 @@ describe('field tolerances against the band where every check passes', () => {
   };
   const ev = {
     checks: [],
+    tables: [table],
+    settingBands: [band],
     fieldSettings: [
       {
         key: 'springLength',
@@ -88,17 +104,19 @@ describe('field tolerances against the band where every check passes', () => {
   };
 
   it('reads a length through the table: ±0.5 mm is ±20 N on a 40 N/mm spring', () => {
-    const said = toleranceBeyondBand(ev, table, band, undefined, 'SI');
+    const said = toleranceBeyondBand(ev, table, undefined, 'SI');
     expect(said).toEqual([
-      'Main spring length as set ± 0.5 mm reaches a spring force down to 1180 N, past the band: ' +
-        'keep it between 219.3 mm and 220.0 mm.',
+      'Main spring length as set ± 0.5 mm would reach a spring force down to 1180 N, past the ' +
+        'band: the field card and the records hold it to −0.5 mm / +0 mm (219.5 mm to 220.0 mm).',
     ]);
   });
 
   it('says nothing where checks already fail at the set value, or the tolerance stays inside', () => {
     const failing = { ...ev, checks: [{ pass: false } as SheetEvaluation['checks'][number]] };
-    expect(toleranceBeyondBand(failing, table, band, undefined, 'SI')).toEqual([]);
-    const wide = { ...band, low: 1150, high: 1250 };
-    expect(toleranceBeyondBand(ev, table, wide, undefined, 'SI')).toEqual([]);
+    expect(toleranceBeyondBand(failing, table, undefined, 'SI')).toEqual([]);
+    expect(bandedTolerance(failing.fieldSettings[0]!, undefined, failing)).toBe(SPRING_LENGTH);
+    const wide = { ...ev, settingBands: [{ ...band, low: 1150, high: 1250 }] };
+    expect(toleranceBeyondBand(wide, table, undefined, 'SI')).toEqual([]);
+    expect(bandedTolerance(wide.fieldSettings[0]!, undefined, wide)).toBe(SPRING_LENGTH);
   });
 });

@@ -9,7 +9,6 @@ import {
   bandSentence,
   rowVerdict,
   settingPrecision,
-  type FieldCardLayout,
   type SettingBand,
   type SheetEvaluation,
 } from '@holdfast/calc';
@@ -34,8 +33,6 @@ export function SettingTable(props: {
   band?: SettingBand;
   /** Labels of the checks failing at the set value (no band rows are added then). */
   failingAtSet: readonly string[];
-  /** Field tolerances that reach past the band (calc's toleranceBeyondBand). */
-  beyond?: readonly string[];
 }) {
   const { table, system, band } = props;
   const rows = settingTableRows(table, band, system, props.failingAtSet);
@@ -45,19 +42,6 @@ export function SettingTable(props: {
     <View>
       <Heading level={2}>{table.title}</Heading>
       {band && <Text style={{ fontSize: 7.5, marginBottom: 3 }}>{bandSentence(band, system)}</Text>}
-      {(props.beyond ?? []).map((line, i) => (
-        <Text
-          key={i}
-          style={{
-            fontSize: BEYOND_STYLE.fontSize,
-            fontWeight: BEYOND_STYLE.weight,
-            color: BEYOND_STYLE.color,
-            marginBottom: BEYOND_STYLE.marginBottom,
-          }}
-        >
-          {`Tolerance too wide: ${line}`}
-        </Text>
-      ))}
       <Table
         dense
         columns={[...columns, ...(band ? [CARD_VERDICT_COLUMN] : []), ...extra]}
@@ -85,19 +69,13 @@ export function SettingTable(props: {
   );
 }
 
-/** A field tolerance that reaches past the band: bold, in the fail colour, never missed. */
-const BEYOND_STYLE = { fontSize: 7.5, weight: 700, color: colours.fail, marginBottom: 3 } as const;
-
-/** The tolerances of a sheet's field card that reach past a setting table's band. */
-export function beyondBand(
-  sheet: PrintableSheet,
-  table: EvalTable,
-  card: FieldCardLayout | undefined,
-): string[] {
-  const ev = sheet.evaluation;
-  const band = ev ? bandOf(ev, table.id) : undefined;
-  return ev && band ? toleranceBeyondBand(ev, table, band, card, sheet.unitSystem) : [];
-}
+/** A card tolerance the band narrowed: bold, in the caution colour, for the engineer to see. */
+const NARROWED_STYLE = {
+  fontSize: 7.5,
+  weight: 700,
+  color: colours.caution,
+  marginBottom: 3,
+} as const;
 
 /** Labels of the checks an evaluation fails at its set values. */
 export function failingLabels(ev: SheetEvaluation | null | undefined): string[] {
@@ -149,7 +127,7 @@ export function fieldSettingsBlocks(ctx: BlockContext, sheet: PrintableSheet): F
   ev.tables.forEach((t) => {
     const band = bandOf(ev, t.id);
     const rows = settingTableRows(t, band, system, failingAtSet);
-    const beyond = band ? toleranceBeyondBand(ev, t, band, card, system) : [];
+    const narrowed = toleranceBeyondBand(ev, t, card, system);
     blocks.push(
       headingBlock(ctx, `${t.id}-h`, t.title, 2),
       ...(band
@@ -160,8 +138,8 @@ export function fieldSettingsBlocks(ctx: BlockContext, sheet: PrintableSheet): F
             }),
           ]
         : []),
-      ...beyond.map((line, i) =>
-        paragraphBlock(ctx, `${t.id}-beyond-${i}`, `Tolerance too wide: ${line}`, BEYOND_STYLE),
+      ...narrowed.map((line, i) =>
+        paragraphBlock(ctx, `${t.id}-narrowed-${i}`, `Tolerance narrowed: ${line}`, NARROWED_STYLE),
       ),
       ...tableBlocks(ctx, t.id, {
         continuedTitle: t.title,

@@ -3,7 +3,7 @@ import {
   getSheetType,
   parseQuantity,
   rotorOf,
-  settingTolerance,
+  bandedTolerance,
   type Dimension,
   type FieldSetting,
   type InputValue,
@@ -84,6 +84,13 @@ export function formChecks(sheetType: string, inputs: unknown = null) {
 /** The field card's targets of a frozen evaluation, each with the tolerance its sheet declares. */
 export function fieldTargets(sheetType: string, evaluation: unknown): FieldTarget[] {
   const settings = (evaluation as Partial<SheetEvaluation> | null)?.fieldSettings ?? [];
+  const e = (evaluation ?? {}) as Partial<SheetEvaluation>;
+  const frozen = {
+    fieldSettings: settings,
+    checks: e.checks ?? [],
+    tables: e.tables ?? [],
+    ...(e.settingBands ? { settingBands: e.settingBands } : {}),
+  };
   const card = getSheetType(sheetType)?.fieldCard;
   return settings.map((s: FieldSetting) => {
     const p = card?.settings[s.key];
@@ -97,7 +104,8 @@ export function fieldTargets(sheetType: string, evaluation: unknown): FieldTarge
       ...(p?.stack ? { stack: p.stack } : {}),
       ...(p?.role ? { role: p.role } : {}),
       ...(s.note ? { note: s.note } : {}),
-      tolerance: settingTolerance(s, card),
+      // Held inside the band where every check of the sheet passes (calc's bandedTolerance).
+      tolerance: bandedTolerance(s, card, frozen),
     };
   });
 }

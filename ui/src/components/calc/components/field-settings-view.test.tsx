@@ -157,7 +157,7 @@ describe('FieldSettingsView', () => {
     expect(screen.queryByRole('columnheader', { name: 'Other checks at this setting' })).toBeNull();
   });
 
-  it('says in red when a setting’s tolerance reaches settings where a check fails', () => {
+  it('says when a setting’s tolerance reaches settings where a check fails, and what holds it', () => {
     const table = {
       id: 'spring-setting',
       title: 'Spring setting table (new lining)',
@@ -194,11 +194,11 @@ describe('FieldSettingsView', () => {
         unitSystem="SI"
       />,
     );
-    expect(screen.getByTestId('tolerance-beyond-band')).toHaveTextContent(
-      'Tolerance too wide: Main spring force as set ± 5 % reaches 1090 N … 1210 N, past the band',
+    expect(screen.getByTestId('tolerance-narrowed')).toHaveTextContent(
+      'Tolerance narrowed: Main spring force as set ± 5 % would reach 1090 N … 1210 N, past the band',
     );
-    expect(screen.getByTestId('tolerance-beyond-band')).toHaveTextContent(
-      'keep it between 1120 N and 1170 N',
+    expect(screen.getByTestId('tolerance-narrowed')).toHaveTextContent(
+      'the field card and the records hold it to −2.61 % / +1.74 % (1120 N to 1170 N)',
     );
   });
 });

@@ -63,8 +63,13 @@ export function FieldSettingsView({
         });
         const band = bandOf({ settingBands: bands }, table.id);
         const rows = settingTableRows(table, band, unitSystem, failingAtSet);
-        const beyond = band
-          ? toleranceBeyondBand(evaluation, table, band, fieldCard, unitSystem)
+        const narrowed = band
+          ? toleranceBeyondBand(
+              { ...evaluation, settingBands: bands },
+              table,
+              fieldCard,
+              unitSystem,
+            )
           : [];
         return (
           <div key={table.id}>
@@ -76,16 +81,16 @@ export function FieldSettingsView({
                 {bandSentence(band, unitSystem)}
               </Text>
             ) : null}
-            {beyond.map((line) => (
+            {narrowed.map((line) => (
               <Text
                 key={line}
                 size="sm"
                 mb={6}
                 fw={700}
-                c="red.8"
-                data-testid="tolerance-beyond-band"
+                c="orange.9"
+                data-testid="tolerance-narrowed"
               >
-                Tolerance too wide: {line}
+                Tolerance narrowed: {line}
               </Text>
             ))}
             <Table withTableBorder striped fz="sm" aria-label={table.title}>
