@@ -31,7 +31,6 @@ interface SettingInBand {
 }
 
 function settingInBand(
-  ev: BandedEvaluation,
   f: FieldSetting,
   table: Table,
   band: SettingBand,
@@ -61,7 +60,7 @@ function* settingsInBands(ev: BandedEvaluation, system: UnitSystem) {
     const band = bandOf(ev, table.id);
     if (!band) continue;
     for (const f of ev.fieldSettings) {
-      const s = settingInBand(ev, f, table, band, system);
+      const s = settingInBand(f, table, band, system);
       if (s) yield { f, s };
     }
   }
