@@ -172,6 +172,34 @@ describe('revisions: server-side evaluation, validation, justification, audit', 
     expect(withIt.body.evaluation.pass).toBe(false);
   });
 
+  it('approves with a comment open only when the checker says why; a resolved comment asks nothing', async () => {
+    const sheet = await createSheet(ctx, reg);
+    const id = sheet.revisions[0].id;
+    await submit(ctx, id);
+    const posted = await ctx.request('POST', `/api/revisions/${id}/comments`, {
+      as: 'checker',
+      body: { body: 'Where does the lining width come from?' },
+    });
+    expect(posted.status, posted.text).toBe(201);
+    const rev = await getRevision(ctx, id, 'checker');
+    const bare = await ctx.request('POST', `/api/revisions/${id}/approve`, {
+      as: 'checker',
+      body: { rowVersion: rev.rowVersion },
+    });
+    expect(bare.status, bare.text).toBe(400);
+    expect(bare.body.error.fields[0]).toMatchObject({ path: 'note' });
+    expect(bare.body.error.fields[0].message).toMatch(/one comment is still open/);
+    expect((await getRevision(ctx, id, 'checker')).state).toBe('in_check');
+    // Resolved, the comment asks for nothing more.
+    const resolved = await ctx.request('PATCH', `/api/comments/${posted.body.id}`, {
+      as: 'checker',
+      body: { resolved: true },
+    });
+    expect(resolved.status, resolved.text).toBe(200);
+    const approved = await approve(ctx, id);
+    expect(approved.state).toBe('approved');
+  });
+
   it('records an audit event for every save and state change, with who and before/after', async () => {
     // The one save below also confirms the example values, so the trail has one save and one
     // confirmation entry right after it.
@@ -195,7 +223,8 @@ describe('revisions: server-side evaluation, validation, justification, audit', 
       body: { rowVersion: checking.rowVersion, comment: 'Fix.' },
     });
     await submit(ctx, id);
-    await approve(ctx, id, 'checker2');
+    // The return's reason is still an open comment: the approval says why it stands.
+    await approve(ctx, id, 'checker2', 'Fixed as asked in the return.');
     const audit = await ctx.request('GET', `/api/sheets/${sheet.id}/audit`, { as: 'engineer' });
     expect(audit.status).toBe(200);
     const forViewer = await ctx.request('GET', `/api/sheets/${sheet.id}/audit`, { as: 'viewer' });

@@ -245,11 +245,16 @@ export async function submit(ctx: TestContext, id: string, as: DemoLogin = 'engi
   return res.body;
 }
 
-export async function approve(ctx: TestContext, id: string, as: DemoLogin = 'checker') {
+export async function approve(
+  ctx: TestContext,
+  id: string,
+  as: DemoLogin = 'checker',
+  note?: string,
+) {
   const rev = await getRevision(ctx, id, as);
   const res = await ctx.request('POST', `/api/revisions/${id}/approve`, {
     as,
-    body: { rowVersion: rev.rowVersion },
+    body: { rowVersion: rev.rowVersion, ...(note ? { note } : {}) },
   });
   expect(res.status, res.text).toBe(200);
   return res.body;

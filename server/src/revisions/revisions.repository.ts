@@ -73,6 +73,18 @@ export class RevisionsRepository {
       .executeTakeFirst();
   }
 
+  /** Comment threads on a revision still open (a reply is part of its thread, not one of its own). */
+  async openCommentCount(revisionId: string, tx: Tx): Promise<number> {
+    const row = await on(this.db, tx)
+      .selectFrom('comments')
+      .select((eb) => eb.fn.countAll<string>().as('n'))
+      .where('revisionId', '=', revisionId)
+      .where('parentId', 'is', null)
+      .where('resolved', '=', false)
+      .executeTakeFirstOrThrow();
+    return Number(row.n);
+  }
+
   /** The latest revision before `seq` that was ever submitted: what a first submission is compared with. */
   previousSubmitted(sheetId: string, seq: number, tx?: Tx) {
     return on(this.db, tx)

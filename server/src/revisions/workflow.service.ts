@@ -160,6 +160,17 @@ export class WorkflowService {
   async approve(user: AuthUser, id: string, input: ApproveRevisionInput): Promise<Revision> {
     await this.units.run(async (tx) => {
       const rev = await this.loadForCheck(user, id, input.rowVersion, tx);
+      // An open comment stays open on the approved record for good: answered first, or the
+      // checker says in the approval note why the revision is approved with it open.
+      const open = await this.repo.openCommentCount(id, tx);
+      if (open > 0 && !input.note?.trim()) {
+        throw badRequest('Comments are still open: resolve them, or say why you approve.', [
+          {
+            path: 'note',
+            message: `required because ${open === 1 ? 'one comment is' : `${open} comments are`} still open: resolve ${open === 1 ? 'it' : 'them'} first, or say why this revision is approved with ${open === 1 ? 'it' : 'them'} open`,
+          },
+        ]);
+      }
       const now = new Date();
       const previous = await this.repo.approvedForUpdate(rev.sheetId, tx);
       if (previous) {

@@ -41,10 +41,14 @@ export function ApproveDialog({
           <AuthorNote justification={justification} />
         </>
       }
-      textLabel="Approval note (optional)"
+      textLabel={
+        openComments > 0
+          ? 'Approval note (required while comments are open)'
+          : 'Approval note (optional)'
+      }
       textField="note"
-      textRequired={false}
-      requiredMessage=""
+      textRequired={openComments > 0}
+      requiredMessage={`${openComments === 1 ? 'One comment is' : `${openComments} comments are`} still open: resolve ${openComments === 1 ? 'it' : 'them'} first, or say here why you approve.`}
       confirmLabel="Approve"
       confirmColor="pass.8"
       onConfirm={(text) => onApprove(text || undefined)}

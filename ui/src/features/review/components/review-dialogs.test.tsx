@@ -93,7 +93,7 @@ describe('SubmitDialog', () => {
 });
 
 describe('ApproveDialog', () => {
-  it('warns about open comments and passes the optional note on', async () => {
+  it('with comments open, asks why before approving and passes the note on', async () => {
     const onApprove = vi.fn().mockResolvedValue(undefined);
     const { user } = renderWithProviders(
       <ApproveDialog
@@ -111,6 +111,32 @@ describe('ApproveDialog', () => {
     ).toBeInTheDocument();
     expect(screen.getByRole('dialog', { name: 'Approve revision B' })).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Approve' }));
+    expect(
+      await screen.findByText(
+        '2 comments are still open: resolve them first, or say here why you approve.',
+      ),
+    ).toBeInTheDocument();
+    expect(onApprove).not.toHaveBeenCalled();
+    await user.type(
+      screen.getByRole('textbox', { name: /Approval note \(required while comments are open\)/ }),
+      'Both answered in the replies; nothing left to change.',
+    );
+    await user.click(screen.getByRole('button', { name: 'Approve' }));
+    expect(onApprove).toHaveBeenCalledWith('Both answered in the replies; nothing left to change.');
+  });
+
+  it('with no comment open, the note is optional', async () => {
+    const onApprove = vi.fn().mockResolvedValue(undefined);
+    const { user } = renderWithProviders(
+      <ApproveDialog
+        opened
+        onClose={() => undefined}
+        revisionLabel="C"
+        openComments={0}
+        onApprove={onApprove}
+      />,
+    );
+    await user.click(await screen.findByRole('button', { name: 'Approve' }));
     expect(onApprove).toHaveBeenCalledWith(undefined);
   });
 
