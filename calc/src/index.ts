@@ -95,7 +95,12 @@ export {
 } from './criteria/catalogue.js';
 export { sheetTypes, getSheetType, demoInputs, fieldStart } from './sheets/registry.js';
 export { settingBands } from './sheets/setting-band.js';
-export { bandOf, bandSentence, rowVerdict } from './sheets/setting-band-words.js';
+export {
+  bandOf,
+  bandSentence,
+  rowVerdict,
+  settingTableTitle,
+} from './sheets/setting-band-words.js';
 export {
   settingTableRows,
   marksText,

@@ -99,6 +99,16 @@ describe.each(TYPES)('%s, real evaluation', (sheetTypeId) => {
     expect(card.text).toContain('Set by');
   });
 
+  it(
+    'fits the field card on one or two US Letter pages too (a shorter page than A4)',
+    async () => {
+      const letter = realPrintable({ sheetTypeId, state: 'approved', paper: 'LETTER' });
+      const facts = inspectPdf(await renderFieldCardPdf(letter), `real-${sheetTypeId}-card-letter`);
+      expect(facts.pages).toBeLessThanOrEqual(2);
+    },
+    SLOW,
+  );
+
   it('holds card tolerances inside the band: the sheet says so, the card prints the held one', () => {
     const ev = sheet.evaluation!;
     const layout = getSheetType(sheetTypeId)!.fieldCard;

@@ -65,3 +65,18 @@ export function rowVerdict(failing: readonly string[] | undefined): string {
     ? `fails: ${shown} (and ${failing.length - 2} more)`
     : `fails: ${shown}`;
 }
+
+/**
+ * A setting table's title in the unit system: the shoe sheets title their table with its force
+ * range in newtons ("… torque limits met from 771 to 1600 N"), which a US card prints in lbf like
+ * its rows. Any other title is returned as it is.
+ */
+export function settingTableTitle(title: string, system: UnitSystem): string {
+  if (system === 'SI') return title;
+  const m = /^(.* from )(\d+(?:\.\d+)?) to (\d+(?:\.\d+)?) N$/.exec(title);
+  if (!m) return title;
+  const a = toDisplay(Number(m[2]), 'force', system);
+  const b = toDisplay(Number(m[3]), 'force', system);
+  const number = (d: typeof a) => d.text.slice(0, d.text.length - d.label.length).trim();
+  return `${m[1]}${number(a)} to ${number(b)} ${b.label}`;
+}

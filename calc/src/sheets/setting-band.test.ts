@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { getCriteriaSet } from '../criteria/lookup.js';
 import { demoInputs, getSheetType } from './registry.js';
 import { settingBands } from './setting-band.js';
-import { bandOf, bandSentence, rowVerdict } from './setting-band-words.js';
+import { bandOf, bandSentence, rowVerdict, settingTableTitle } from './setting-band-words.js';
 
 const criteria = getCriteriaSet('general-industry')!;
 const SHEETS = ['hoist-shoe-brake', 'travel-shoe-brake', 'drive-shoe-brake', 'caliper-disc-brake'];
@@ -108,5 +108,18 @@ describe('setting band in words', () => {
     expect(rowVerdict(undefined)).toBe('');
     expect(bandOf({ settingBands: [band] }, 'spring-setting')).toBe(band);
     expect(bandOf({}, 'spring-setting')).toBeUndefined();
+  });
+});
+
+describe('setting table titles in the unit system', () => {
+  it('gives the shoe table’s force range in lbf on a US sheet, as its rows', () => {
+    const t = 'Spring setting table (new lining): torque limits met from 771 to 1600 N';
+    expect(settingTableTitle(t, 'SI')).toBe(t);
+    expect(settingTableTitle(t, 'US')).toBe(
+      'Spring setting table (new lining): torque limits met from 173 to 360 lbf',
+    );
+    expect(settingTableTitle('Clamp force setting table (new pads)', 'US')).toBe(
+      'Clamp force setting table (new pads)',
+    );
   });
 });

@@ -4,6 +4,7 @@ import {
   getSheetType,
   marksText,
   settingTableRows,
+  settingTableTitle,
   toleranceBeyondBand,
   failAdvice,
   bandSentence,
@@ -40,7 +41,7 @@ export function SettingTable(props: {
   const extra = props.extra ?? [];
   return (
     <View>
-      <Heading level={2}>{table.title}</Heading>
+      <Heading level={2}>{settingTableTitle(table.title, system)}</Heading>
       {band && <Text style={{ fontSize: 7.5, marginBottom: 3 }}>{bandSentence(band, system)}</Text>}
       <Table
         dense
@@ -129,7 +130,7 @@ export function fieldSettingsBlocks(ctx: BlockContext, sheet: PrintableSheet): F
     const rows = settingTableRows(t, band, system, failingAtSet);
     const narrowed = toleranceBeyondBand(ev, t, card, system);
     blocks.push(
-      headingBlock(ctx, `${t.id}-h`, t.title, 2),
+      headingBlock(ctx, `${t.id}-h`, settingTableTitle(t.title, system), 2),
       ...(band
         ? [
             paragraphBlock(ctx, `${t.id}-band`, bandSentence(band, system), {
@@ -142,7 +143,7 @@ export function fieldSettingsBlocks(ctx: BlockContext, sheet: PrintableSheet): F
         paragraphBlock(ctx, `${t.id}-narrowed-${i}`, `Tolerance narrowed: ${line}`, NARROWED_STYLE),
       ),
       ...tableBlocks(ctx, t.id, {
-        continuedTitle: t.title,
+        continuedTitle: settingTableTitle(t.title, system),
         columns: [...settingColumns(t, system), ...(band ? [VERDICT_COLUMN] : [])],
         rows: rows.map((row) => [
           ...t.columns.map(

@@ -61,7 +61,7 @@ export function TableRow(props: {
 }) {
   const { columns } = props;
   const fontSize = props.fontSize ?? 7.8;
-  const paddingVertical = props.dense ? 1 : 2;
+  const paddingVertical = props.dense ? 0.5 : 2;
   return (
     <View wrap={false} style={{ ...ruledRow, ...(props.last ? { marginBottom: 6 } : {}) }}>
       {props.row.map((cell, i) => {

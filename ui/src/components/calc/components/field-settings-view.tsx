@@ -6,6 +6,7 @@ import {
   marksText,
   rowVerdict,
   settingTableRows,
+  settingTableTitle,
   toleranceBeyondBand,
   type Dimension,
   type SettingBand,
@@ -74,7 +75,7 @@ export function FieldSettingsView({
         return (
           <div key={table.id}>
             <Title order={4} size="h6" mb={4}>
-              {table.title}
+              {settingTableTitle(table.title, unitSystem)}
             </Title>
             {band ? (
               <Text size="sm" mb={6} data-testid="setting-band">
@@ -93,7 +94,12 @@ export function FieldSettingsView({
                 Tolerance narrowed: {line}
               </Text>
             ))}
-            <Table withTableBorder striped fz="sm" aria-label={table.title}>
+            <Table
+              withTableBorder
+              striped
+              fz="sm"
+              aria-label={settingTableTitle(table.title, unitSystem)}
+            >
               <Table.Thead>
                 <Table.Tr>
                   {heads.map((c) => (
