@@ -83,6 +83,17 @@ describe.skipIf(skipReason !== null)('accessibility of the main screens', () => 
       },
     },
     {
+      // The setting table with its band rows and, for the demo hoist, the narrowed tolerance.
+      name: 'sheet-approved-field-settings',
+      who: 'engineer',
+      path: () => `/sheets/${approved.sheetId}/revisions/${approved.revisionId}`,
+      ready: (s) => s.page.getByTestId('document-number').waitFor(),
+      then: async (s) => {
+        await s.page.getByRole('tab', { name: 'Field settings' }).click();
+        await s.page.getByTestId('setting-band').first().waitFor();
+      },
+    },
+    {
       name: 'sheet-draft',
       who: 'engineer',
       path: () => `/sheets/${draft.sheetId}/revisions/${draft.revisionId}`,

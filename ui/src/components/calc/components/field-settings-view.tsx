@@ -88,7 +88,7 @@ export function FieldSettingsView({
                 size="sm"
                 mb={6}
                 fw={700}
-                c="orange.9"
+                c="amber.9"
                 data-testid="tolerance-narrowed"
               >
                 Tolerance narrowed: {line}
@@ -133,7 +133,7 @@ export function FieldSettingsView({
                     {band ? (
                       <Table.Td
                         fz="xs"
-                        c={row.failing?.length ? 'var(--mantine-color-red-8)' : undefined}
+                        c={row.failing?.length ? 'var(--mantine-color-fail-8)' : undefined}
                       >
                         {rowVerdict(row.failing)}
                         {row.marks.length ? ` (${marksText(row.marks)})` : ''}
