@@ -93,6 +93,17 @@ describe.skipIf(skipReason !== null)('accessibility of the main screens', () => 
         await s.page.getByTestId('setting-band').first().waitFor();
       },
     },
+    ...(['Results', 'Derivation', 'Charts'] as const).map((tab) => ({
+      name: `sheet-approved-${tab.toLowerCase()}`,
+      who: 'engineer' as const,
+      path: () => `/sheets/${approved.sheetId}/revisions/${approved.revisionId}`,
+      ready: (s: BrowserSession) => s.page.getByTestId('document-number').waitFor(),
+      then: async (s: BrowserSession) => {
+        await s.page.getByRole('tab', { name: tab }).click();
+        await s.page.getByRole('tabpanel', { name: tab }).waitFor();
+        await s.page.waitForTimeout(300);
+      },
+    })),
     {
       name: 'sheet-draft',
       who: 'engineer',

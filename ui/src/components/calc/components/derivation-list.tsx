@@ -99,7 +99,7 @@ function StepRow({
                 flexShrink: 0,
               }}
             />
-            <Text size="sm" style={{ flex: 1, minWidth: 0 }} truncate>
+            <Text size="sm" style={{ flex: 1, minWidth: 0 }}>
               {step.label}
             </Text>
             <Text size="sm" ff="monospace" style={{ whiteSpace: 'nowrap' }}>
