@@ -116,6 +116,12 @@ describe.skipIf(skipReason !== null)('accessibility of the main screens', () => 
       path: () => `/sheets/${approved.sheetId}/audit`,
       ready: (s) => s.page.getByRole('table', { name: 'Audit trail' }).waitFor(),
     },
+    {
+      name: 'compare',
+      who: 'engineer',
+      path: () => `/sheets/${approved.sheetId}/compare`,
+      ready: heading('Compare revisions'),
+    },
     { name: 'equipment', who: 'engineer', path: () => '/equipment', ready: heading('Equipment') },
     { name: 'criteria', who: 'engineer', path: () => '/criteria', ready: heading(/Criteria/) },
     { name: 'users', who: 'admin', path: () => '/admin/users', ready: heading('Users') },
