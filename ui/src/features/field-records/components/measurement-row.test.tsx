@@ -35,4 +35,45 @@ describe('a measured value on the record form', () => {
     );
     expect(screen.getByText(/In tolerance/)).toHaveTextContent('In tolerance (±0 mm)');
   });
+
+  it('says which values the tolerance accepts, as a fitter reads them', () => {
+    const force = {
+      ...spring,
+      settingKey: 'springForce',
+      label: 'Main spring force as set',
+      value: 1150,
+      unit: 'N',
+      dimension: 'force' as const,
+      tolerance: {
+        band: { kind: 'relative' as const, minus: 30 / 1150, plus: 20 / 1150 },
+        source: 'common practice; narrowed to the band where every check of this sheet passes',
+        confidence: 'common practice' as const,
+      },
+    };
+    renderWithProviders(
+      <MeasurementRow
+        target={force}
+        draft={{ asLeft: undefined, reason: '' }}
+        withAsFound={false}
+        errors={{}}
+        onChange={() => undefined}
+      />,
+    );
+    expect(screen.getByText(/^Target 1150 N/)).toHaveTextContent(
+      'Target 1150 N, tolerance −2.61 % / +1.74 % (common practice; narrowed to the band where every check of this sheet passes); accepted 1120 N to 1170 N',
+    );
+  });
+
+  it('gives the accepted lengths to the reading precision', () => {
+    renderWithProviders(
+      <MeasurementRow
+        target={spring}
+        draft={{ asLeft: undefined, reason: '' }}
+        withAsFound={false}
+        errors={{}}
+        onChange={() => undefined}
+      />,
+    );
+    expect(screen.getByText(/^Target/)).toHaveTextContent('accepted 123.5 mm to 124.5 mm');
+  });
 });

@@ -5,6 +5,7 @@ import {
   readingPrecision,
   settingPrecision,
   toDisplay,
+  toleranceBounds,
   toleranceText,
   withUnit,
   type Dimension,
@@ -19,6 +20,20 @@ import { readSI, verdictFor, type MeasurementDraft } from './measurement-entry';
 function settingText(target: FieldTarget, valueSI: number): string {
   const dim = target.dimension as Dimension;
   return toDisplay(valueSI, dim, 'SI', undefined, settingPrecision(target.settingKey, dim)).text;
+}
+
+/**
+ * The values the tolerance accepts, where it has two sides: a fitter reads "1120 N to 1170 N"
+ * more surely than "−2.61 % / +1.74 %". To the reading's precision, a tenth of the setting step.
+ */
+function acceptedText(target: FieldTarget): string {
+  if (!target.tolerance) return '';
+  const { lower, upper } = toleranceBounds(target.value, target.tolerance);
+  if (lower === null || upper === null) return '';
+  const dim = target.dimension as Dimension;
+  const p = readingPrecision(target.settingKey, dim);
+  const show = (v: number) => toDisplay(v, dim, 'SI', undefined, p).text;
+  return `; accepted ${show(lower)} to ${show(upper)}`;
 }
 
 /**
@@ -80,7 +95,7 @@ export function MeasurementRow({
           <Text size="sm" c="dimmed">
             Target {settingText(target, target.value)}, tolerance{' '}
             {target.tolerance
-              ? `${toleranceText(target.tolerance, dim)} (${target.tolerance.source})`
+              ? `${toleranceText(target.tolerance, dim)} (${target.tolerance.source})${acceptedText(target)}`
               : 'none declared'}
           </Text>
           {target.tolerance?.rule && <Text size="sm">{target.tolerance.rule}</Text>}
