@@ -31,8 +31,7 @@ export function qtyParts(
   precision?: Precision,
 ): { value: number; text: string; label: string } {
   const d = toDisplay(valueSI, dimension, system, undefined, precision);
-  const text = d.label ? d.text.slice(0, d.text.length - d.label.length).trim() : d.text;
-  return { value: d.value, text, label: d.label };
+  return { value: d.value, text: d.number, label: d.label };
 }
 
 /** Printed unit label of a dimension in a unit system ('' for dimensionless). */

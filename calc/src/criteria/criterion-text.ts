@@ -19,6 +19,5 @@ export function criterionText(
   );
   if (dims.length !== 1) return { number: String(value), unit, text: `${value} ${unit}` };
   const d = toDisplay(value, dims[0]!, system);
-  const number = d.label ? d.text.slice(0, d.text.length - d.label.length).trim() : d.text;
-  return { number, unit: d.label, text: d.text };
+  return { number: d.number, unit: d.label, text: d.text };
 }

@@ -14,6 +14,8 @@ export interface DisplayValue {
   label: string;
   /** Value and label, e.g. '1475 lbf·ft', printed to the dimension's precision (PRECISION). */
   text: string;
+  /** The printed number alone, e.g. '1475' (table cells print the unit in the column head). */
+  number: string;
 }
 
 /**
@@ -38,7 +40,7 @@ export function toDisplay(
       ? formatNumber(value, precision)
       : formatWithPrecision(value, c.factor, c.label, precision);
   const text = withUnit(number, c.label);
-  return { value, unit: c.unit, label: c.label, text };
+  return { value, unit: c.unit, label: c.label, text, number };
 }
 
 /** Default display unit (parser text) of a dimension in a unit system. */

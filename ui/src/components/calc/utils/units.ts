@@ -86,8 +86,7 @@ export function presentPrinted(
 ): { number: string; unit: string; text: string } {
   if (!Number.isFinite(valueSI)) return { number: '—', unit: '', text: '—' };
   const d = toDisplay(valueSI, dimension, system);
-  const number = d.label ? d.text.slice(0, d.text.length - d.label.length).trim() : d.text;
-  return { number, unit: d.label, text: d.text };
+  return { number: d.number, unit: d.label, text: d.text };
 }
 
 /**
@@ -104,8 +103,7 @@ export function presentSetting(
   if (!Number.isFinite(valueSI)) return { number: '—', unit: '', text: '—' };
   try {
     const d = toDisplay(valueSI, dimension, system, undefined, settingPrecision(key, dimension));
-    const number = d.label ? d.text.slice(0, d.text.length - d.label.length).trim() : d.text;
-    return { number, unit: d.label, text: d.text };
+    return { number: d.number, unit: d.label, text: d.text };
   } catch {
     return presentSI(valueSI, dimension, system);
   }
