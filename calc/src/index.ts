@@ -104,6 +104,7 @@ export {
 export {
   settingTableRows,
   marksText,
+  rowVerdictText,
   type SettingTableRow,
   type BandMark,
 } from './sheets/setting-band-rows.js';

@@ -1,5 +1,4 @@
 import {
-  bandOf,
   getSheetType,
   bandedTolerance,
   settingPrecision,
@@ -13,7 +12,7 @@ import { Text } from './text.js';
 import { groupFieldSettings, type DiscStackSetup } from './field-card-groups.js';
 import { qty } from './format.js';
 import { Caution, rotorOf, type BrakeRotor } from './parts/caution.js';
-import { failingLabels, SettingTable } from './parts/field-settings.js';
+import { SettingTable } from './parts/field-settings.js';
 
 import { Heading, Table } from './parts/table.js';
 import type { PrintableSheet, PrintUnitSystem } from './printable-sheet.js';
@@ -204,13 +203,7 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
                 </Heading>
                 <SettingsWithBoxes items={g.spring} system={system} tolerance={tolerance} />
                 {g.springTables.map((t) => (
-                  <SettingTable
-                    key={t.id}
-                    table={t}
-                    system={system}
-                    band={bandOf(sheet.evaluation ?? {}, t.id)}
-                    failingAtSet={failingLabels(sheet.evaluation)}
-                  />
+                  <SettingTable key={t.id} table={t} system={system} ev={ev!} />
                 ))}
               </View>
             )}
@@ -248,13 +241,7 @@ export function FieldCardDocument(props: { sheet: PrintableSheet; qr: string | n
               </View>
             )}
             {g.otherTables.map((t) => (
-              <SettingTable
-                key={t.id}
-                table={t}
-                system={system}
-                band={bandOf(sheet.evaluation ?? {}, t.id)}
-                failingAtSet={failingLabels(sheet.evaluation)}
-              />
+              <SettingTable key={t.id} table={t} system={system} ev={ev!} />
             ))}
           </>
         )}

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { getCriteriaSet } from '../criteria/lookup.js';
 import { demoInputs, getSheetType } from './registry.js';
 import { settingBands } from './setting-band.js';
-import { settingTableRows } from './setting-band-rows.js';
+import { rowVerdictText, settingTableRows } from './setting-band-rows.js';
 import type { SettingBand, SheetEvaluation } from '../core/types.js';
 
 const SHEETS: [string, string][] = [
@@ -11,6 +11,12 @@ const SHEETS: [string, string][] = [
   ['drive-shoe-brake', 'general-industry'],
   ['caliper-disc-brake', 'general-industry'],
 ];
+/** The rows of `table` on a record that carries `band`, with a check failing at set or none. */
+function rowsOf(table: SheetEvaluation['tables'][number], band?: SettingBand, failsAtSet = false) {
+  const checks = failsAtSet ? [{ pass: false } as SheetEvaluation['checks'][number]] : [];
+  return settingTableRows({ checks, ...(band ? { settingBands: [band] } : {}) }, table, 'SI');
+}
+
 const INPUT: Record<string, string> = {
   'spring-setting': 'springForce',
   'clamp-setting': 'clampForce',
@@ -27,7 +33,7 @@ describe('setting table rows with the band put in', () => {
       const table = ev.tables.find((t) => t.id === band.tableId)!;
       const input = INPUT[band.tableId]!;
       const key = table.columns[0]!.key;
-      const rows = settingTableRows(table, band, 'SI', []);
+      const rows = rowsOf(table, band);
       const marked = rows.filter((r) => r.marks.length > 0);
       const passingRows = band.failing.filter((f) => f.length === 0).length;
       if (passingRows >= 2) {
@@ -50,14 +56,9 @@ describe('setting table rows with the band put in', () => {
         expect(r.failing).toEqual([]);
         // Each column as the sheet's own table gives it at this setting (the table's lines do not
         // move with the set value).
-        const own = settingTableRows(
-          at.tables.find((t) => t.id === table.id)!,
-          undefined,
-          'SI',
-          [],
-        );
+        const own = at.tables.find((t) => t.id === table.id)!.rows;
         const line = (k: string) => {
-          const [a, b] = [own[0]!.values, own[own.length - 1]!.values];
+          const [a, b] = [own[0]!, own[own.length - 1]!];
           return a[k]! + ((b[k]! - a[k]!) * (x - a[key]!)) / (b[key]! - a[key]!);
         };
         for (const c of table.columns) expect(r.values[c.key]).toBeCloseTo(line(c.key), 6);
@@ -94,7 +95,7 @@ describe('setting table rows with the band put in', () => {
   };
 
   it('puts the ends in rounded inward as the band sentence prints them, read off the straight line', () => {
-    const rows = settingTableRows(table, band, 'SI', []);
+    const rows = rowsOf(table, band);
     expect(rows.map((r) => [r.values.springForce, r.values.torque, r.marks])).toEqual([
       [1000, 300, []],
       [1130, 339, ['low end']],
@@ -104,6 +105,14 @@ describe('setting table rows with the band put in', () => {
       [2000, 600, []],
     ]);
     expect(rows.map((r) => r.failing)).toEqual([['p·v'], [], [], [], [], ['stop']]);
+    expect(rows.map(rowVerdictText)).toEqual([
+      'fails: p·v',
+      'every check passes (low end of the band)',
+      'every check passes (as set)',
+      'every check passes',
+      'every check passes (high end of the band)',
+      'fails: stop',
+    ]);
   });
 
   it('the demo hoist: the band falls between two steps of the table, so its rows are added', () => {
@@ -113,35 +122,31 @@ describe('setting table rows with the band put in', () => {
     const ev = sheet.evaluate(inputs, criteria);
     const band = settingBands(sheet, inputs, criteria, ev)[0]!;
     expect(band.failing.every((f) => f.length > 0)).toBe(true);
-    const rows = settingTableRows(
+    const rows = rowsOf(
       ev.tables.find((t) => t.id === band.tableId)!,
       band,
-      'SI',
-      [],
     );
     expect(rows.filter((r) => r.failing?.length === 0)).toHaveLength(3);
   });
 
   it('adds nothing where two rows of the table already pass', () => {
     const wide = { ...band, failing: [[], [], ['stop']] };
-    expect(settingTableRows(table, wide, 'SI', [])).toHaveLength(3);
+    expect(rowsOf(table, wide)).toHaveLength(3);
   });
 
   it('marks a row of the table that is a point of the band instead of adding one', () => {
-    const rows = settingTableRows(table, { ...band, set: 1500 }, 'SI', []);
+    const rows = rowsOf(table, { ...band, set: 1500 });
     expect(rows).toHaveLength(5);
     expect(rows[2]!.marks).toEqual(['as set']);
   });
 
   it('adds nothing without a band, with checks failing at the set value, or when a column is not straight', () => {
-    expect(settingTableRows(table, undefined, 'SI', []).every((r) => r.marks.length === 0)).toBe(
-      true,
-    );
-    expect(settingTableRows(table, band, 'SI', ['p·v'])).toHaveLength(3);
+    expect(rowsOf(table).every((r) => r.marks.length === 0 && r.failing === undefined)).toBe(true);
+    expect(rowsOf(table, band, true)).toHaveLength(3);
     const bent = {
       ...table,
       rows: [...table.rows.slice(0, 2), { springForce: 2000, torque: 650 }],
     };
-    expect(settingTableRows(bent, band, 'SI', [])).toHaveLength(3);
+    expect(rowsOf(bent, band)).toHaveLength(3);
   });
 });

@@ -1,6 +1,6 @@
-import type { SettingBand, SheetEvaluation } from '../core/types.js';
+import type { SheetEvaluation } from '../core/types.js';
 import type { UnitSystem } from '../units/display.js';
-import { bandEndValue } from './setting-band-words.js';
+import { bandEndValue, bandOf, rowVerdict } from './setting-band-words.js';
 
 type Table = SheetEvaluation['tables'][number];
 
@@ -22,27 +22,29 @@ const MIN_PASSING_ROWS = 2;
 const LINEAR_TOLERANCE = 1e-9;
 
 /**
- * A setting table's rows with the band put in where the table's equal steps miss it (fewer than
- * two of its rows pass every check): the band's low end and high end (as the band sentence prints
- * them, rounded inward) and the set value, each as a row of its own marked for what it is, so a
- * fitter never reads a table of settings that all fail beside a set value that passes. The rows are read off the table's straight lines (every column of a setting
- * table is linear in the setting: torque and length in spring force). Nothing is added where a
- * column is not linear, where the setting passes only with checks failing at the set value, or
- * where a point lies outside the table.
+ * A setting table's rows, each with the checks that fail at its setting when the record carries
+ * the table's band, and the band put in where the table's equal steps miss it (fewer than two of
+ * its rows pass every check): the band's low end and high end (as the band sentence prints them,
+ * rounded inward) and the set value, each as a row of its own marked for what it is, so a fitter
+ * never reads a table of settings that all fail beside a set value that passes. The rows are read
+ * off the table's straight lines (every column of a setting table is linear in the setting: torque
+ * and length in spring force). Nothing is added where a column is not linear, where a check
+ * already fails at the set value, or where a point lies outside the table.
  */
 export function settingTableRows(
+  ev: Pick<SheetEvaluation, 'checks' | 'settingBands'>,
   table: Table,
-  band: SettingBand | undefined,
   system: UnitSystem,
-  failingAtSet: readonly string[],
 ): SettingTableRow[] {
+  const band = bandOf(ev, table.id);
   const rows: SettingTableRow[] = table.rows.map((values, k) => ({
     values,
     failing: band?.failing[k],
     marks: [],
   }));
   const key = table.columns[0]?.key;
-  if (!band || failingAtSet.length > 0 || rows.length < 2 || key === undefined) return rows;
+  const failsAtSet = ev.checks.some((c) => !c.pass);
+  if (!band || failsAtSet || rows.length < 2 || key === undefined) return rows;
   if (rows.filter((r) => r.failing?.length === 0).length >= MIN_PASSING_ROWS) return rows;
   const line = straightLines(table, key);
   if (!line) return rows;
@@ -106,4 +108,12 @@ const MARK_WORDS: Record<BandMark, string> = {
  */
 export function marksText(marks: readonly BandMark[], short = false): string {
   return marks.map((m) => (short ? m : MARK_WORDS[m])).join(', ');
+}
+
+/**
+ * A row's verdict with what it stands for, as the sheet and the editor print it: "every check
+ * passes (low end of the band)", "fails: p·v when the brake sets ≤ limit".
+ */
+export function rowVerdictText(row: SettingTableRow): string {
+  return rowVerdict(row.failing) + (row.marks.length ? ` (${marksText(row.marks)})` : '');
 }

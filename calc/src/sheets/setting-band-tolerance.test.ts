@@ -28,8 +28,8 @@ describe('field tolerances against the band where every check passes', () => {
     const { sheet, ev, band, table, failingAt } = demo('hoist-shoe-brake', 'crane-hoist');
     const said = toleranceBeyondBand(ev, table, sheet.fieldCard, 'SI');
     expect(said).toEqual([
-      'Main spring force as set ± 5 % would reach 1090 N … 1210 N, past the band: the field card ' +
-        'and the records hold it to −2.61 % / +1.74 % (1120 N to 1170 N).',
+      'Main spring force as set ± 5 % would span 1090 N … 1210 N, past the band: the field card ' +
+        'and the records hold it to −30 N / +20 N (1120 N … 1170 N).',
     ]);
     // The card and the records use the narrowed tolerance; the length's stays as declared.
     const force = ev.fieldSettings.find((f) => f.key === 'springForce')!;
@@ -106,8 +106,8 @@ describe('field tolerances against the band where every check passes', () => {
   it('reads a length through the table: ±0.5 mm is ±20 N on a 40 N/mm spring', () => {
     const said = toleranceBeyondBand(ev, table, undefined, 'SI');
     expect(said).toEqual([
-      'Main spring length as set ± 0.5 mm would reach a spring force down to 1180 N, past the ' +
-        'band: the field card and the records hold it to −0.5 mm / +0 mm (219.5 mm to 220.0 mm).',
+      'Main spring length as set ± 0.5 mm would span a spring force of 1180 N … 1220 N, past ' +
+        'the band: the field card and the records hold it to −0.5 mm / +0 mm (219.5 mm … 220.0 mm).',
     ]);
   });
 

@@ -1,9 +1,14 @@
-import type { FieldCardLayout, FieldSetting, SettingBand, SheetEvaluation } from '../core/types.js';
+import type {
+  Dimension,
+  FieldCardLayout,
+  FieldSetting,
+  SettingBand,
+  SheetEvaluation,
+} from '../core/types.js';
 import { settingTolerance, toleranceBounds } from '../field/evaluate-tolerance.js';
 import { toleranceText } from '../field/tolerance-text.js';
 import type { FieldTolerance } from '../field/tolerance-types.js';
 import { toDisplay, type UnitSystem } from '../units/display.js';
-import { settingPrecision } from '../units/precision.js';
 import { straightLines } from './setting-band-rows.js';
 import { bandEndValue, bandOf } from './setting-band-words.js';
 
@@ -23,7 +28,6 @@ const NARROWED = 'narrowed to the band where every check of this sheet passes';
  */
 interface SettingInBand {
   table: Table;
-  band: SettingBand;
   toInput: (s: number) => number;
   /** The band's ends in the setting's terms, lower first. */
   lower: number;
@@ -34,7 +38,6 @@ function settingInBand(
   f: FieldSetting,
   table: Table,
   band: SettingBand,
-  system: UnitSystem,
 ): SettingInBand | undefined {
   const key = table.columns[0]?.key;
   if (key === undefined || table.rows.length < 2) return undefined;
@@ -46,21 +49,23 @@ function settingInBand(
   if (!(Number.isFinite(slope) && slope !== 0)) return undefined;
   const toInput = (s: number) => (along ? first[key]! + (s - first[f.key]!) / slope : s);
   const fromInput = (x: number) => (along ? first[f.key]! + (x - first[key]!) * slope : x);
+  // The ends as the SI band sentence prints them, so the held tolerance does not hang on the
+  // unit system a card is printed in.
   const ends = [
-    fromInput(bandEndValue(band.low, 'low', system)),
-    fromInput(bandEndValue(band.high, 'high', system)),
+    fromInput(bandEndValue(band.low, 'low', 'SI')),
+    fromInput(bandEndValue(band.high, 'high', 'SI')),
   ].sort((p, q) => p - q);
-  return { table, band, toInput, lower: ends[0]!, upper: ends[1]! };
+  return { table, toInput, lower: ends[0]!, upper: ends[1]! };
 }
 
 /** Each table with a band, and the settings read through it (checks failing at set: none). */
-function* settingsInBands(ev: BandedEvaluation, system: UnitSystem) {
+function* settingsInBands(ev: BandedEvaluation) {
   if (ev.checks.some((c) => !c.pass)) return;
   for (const table of ev.tables) {
     const band = bandOf(ev, table.id);
     if (!band) continue;
     for (const f of ev.fieldSettings) {
-      const s = settingInBand(f, table, band, system);
+      const s = settingInBand(f, table, band);
       if (s) yield { f, s };
     }
   }
@@ -81,7 +86,7 @@ export function bandedTolerance(
 ): FieldTolerance | null {
   const base = settingTolerance(setting, card);
   if (!base || (base.band.kind !== 'absolute' && base.band.kind !== 'relative')) return base;
-  for (const { f, s } of settingsInBands(ev, 'SI')) {
+  for (const { f, s } of settingsInBands(ev)) {
     if (f.key !== setting.key) continue;
     const t = setting.value;
     const { lower, upper } = toleranceBounds(t, base);
@@ -89,10 +94,11 @@ export function bandedTolerance(
     const hi = Math.min(upper!, s.upper);
     if (lo === lower && hi === upper) return base;
     if (!(lo <= t && t <= hi)) return base;
-    const scale = base.band.kind === 'relative' ? Math.abs(t) : 1;
+    // In the setting's own unit: the band's ends are round figures (1120 N, 1170 N), a share of
+    // the target is not (−2.61 %), and a fitter reads newtons or millimetres.
     return {
       ...base,
-      band: { kind: base.band.kind, minus: (t - lo) / scale, plus: (hi - t) / scale },
+      band: { kind: 'absolute', minus: t - lo, plus: hi - t },
       source: `${base.source}; ${NARROWED}`,
     };
   }
@@ -100,11 +106,9 @@ export function bandedTolerance(
 }
 
 /**
- * The field settings whose card tolerance reaches past the band where every check passes, in
- * words for the engineer: the sheet and the editor print them beside the band, and the card and
- * the records use the narrowed tolerance (`bandedTolerance`). The fitter works from the figure the
- * card prints (a length to the 0.5 mm step), the record from the value itself, so the tolerance
- * around either counts. Empty when every tolerance lies inside the band.
+ * The field settings whose card tolerance `bandedTolerance` held inside the band, in words for the
+ * engineer: the sheet and the editor print them beside the band, the card and the records use the
+ * held tolerance. Empty when every tolerance lies inside the band.
  */
 export function toleranceBeyondBand(
   ev: BandedEvaluation,
@@ -113,53 +117,26 @@ export function toleranceBeyondBand(
   system: UnitSystem,
 ): string[] {
   const out: string[] = [];
-  for (const { f, s } of settingsInBands(ev, system)) {
+  for (const { f, s } of settingsInBands(ev)) {
     if (s.table !== table) continue;
-    const tolerance = settingTolerance(f, card);
-    if (!tolerance) continue;
-    const ends = [f.value, printedValue(f, system)]
-      .flatMap((t) => {
-        const { lower, upper } = toleranceBounds(t, tolerance);
-        return [lower, upper];
-      })
-      .filter((v): v is number => v !== null)
-      .map(s.toInput);
-    const slack = 1e-9 * Math.abs(s.band.set);
-    const below = ends.filter((x) => x < s.band.low - slack);
-    const above = ends.filter((x) => x > s.band.high + slack);
-    if (below.length === 0 && above.length === 0) continue;
-    const force = (x: number) => toDisplay(x, 'force', system).text;
-    const own = (v: number) => toDisplay(v, f.dimension, system).text;
-    const lo = below.length > 0 ? force(Math.min(...below)) : undefined;
-    const hi = above.length > 0 ? force(Math.max(...above)) : undefined;
-    const reach = lo && hi ? `${lo} … ${hi}` : lo ? `down to ${lo}` : `up to ${hi}`;
-    const of = f.key === table.columns[0]?.key ? '' : `a ${what(table)} `;
+    const declared = settingTolerance(f, card);
     const held = bandedTolerance(f, card, ev);
-    const range = held ? toleranceBounds(f.value, held) : { lower: null, upper: null };
-    const span =
-      range.lower !== null && range.upper !== null
-        ? ` (${own(range.lower)} to ${own(range.upper)})`
-        : '';
+    if (!declared || !held || held === declared) continue;
+    // Lower end first: a longer spring length is a lower spring force.
+    const span = (t: FieldTolerance, map: (v: number) => number, dimension: Dimension) => {
+      const { lower, upper } = toleranceBounds(f.value, t);
+      const [a, b] = [map(lower!), map(upper!)].sort((p, q) => p - q);
+      const show = (v: number) => toDisplay(v, dimension, system).text;
+      return `${show(a!)} … ${show(b!)}`;
+    };
+    const of = f.key === table.columns[0]?.key ? '' : `a ${what(table)} of `;
     out.push(
-      `${f.label} ${toleranceText(tolerance, f.dimension, system)} would reach ${of}${reach}, ` +
-        `past the band: the field card and the records hold it to ` +
-        `${toleranceText(held, f.dimension, system)}${span}.`,
+      `${f.label} ${toleranceText(declared, f.dimension, system)} would span ${of}` +
+        `${span(declared, s.toInput, 'force')}, past the band: the field card and the records hold it to ` +
+        `${toleranceText(held, f.dimension, system)} (${span(held, (v) => v, f.dimension)}).`,
     );
   }
   return out;
-}
-
-/** The setting as the card prints it (to the step a fitter sets it by), back in SI. */
-function printedValue(f: FieldSetting, system: UnitSystem): number {
-  const d = toDisplay(
-    f.value,
-    f.dimension,
-    system,
-    undefined,
-    settingPrecision(f.key, f.dimension),
-  );
-  const shown = Number.parseFloat(d.text);
-  return d.value !== 0 && Number.isFinite(shown) ? (shown / d.value) * f.value : f.value;
 }
 
 function what(table: Table): string {

@@ -77,6 +77,5 @@ export function settingTableTitle(title: string, system: UnitSystem): string {
   if (!m) return title;
   const a = toDisplay(Number(m[2]), 'force', system);
   const b = toDisplay(Number(m[3]), 'force', system);
-  const number = (d: typeof a) => d.text.slice(0, d.text.length - d.label.length).trim();
-  return `${m[1]}${number(a)} to ${number(b)} ${b.label}`;
+  return `${m[1]}${a.number} to ${b.number} ${b.label}`;
 }

@@ -8,9 +8,9 @@ import {
   toleranceBeyondBand,
   failAdvice,
   bandSentence,
-  rowVerdict,
+  rowVerdictText,
   settingPrecision,
-  type SettingBand,
+  type SettingTableRow,
   type SheetEvaluation,
 } from '@holdfast/calc';
 import { View } from '@react-pdf/renderer';
@@ -30,13 +30,12 @@ export function SettingTable(props: {
   table: EvalTable;
   system: PrintUnitSystem;
   extra?: Column[];
-  /** The rows checked against the whole sheet, when the record carries it. */
-  band?: SettingBand;
-  /** Labels of the checks failing at the set value (no band rows are added then). */
-  failingAtSet: readonly string[];
+  /** The evaluation the table is from: its band, when the record carries one, and its checks. */
+  ev: SheetEvaluation;
 }) {
-  const { table, system, band } = props;
-  const rows = settingTableRows(table, band, system, props.failingAtSet);
+  const { table, system, ev } = props;
+  const band = bandOf(ev, table.id);
+  const rows = settingTableRows(ev, table, system);
   const columns = settingColumns(table, system);
   const extra = props.extra ?? [];
   return (
@@ -47,15 +46,7 @@ export function SettingTable(props: {
         dense
         columns={[...columns, ...(band ? [CARD_VERDICT_COLUMN] : []), ...extra]}
         rows={rows.map((row) => [
-          ...table.columns.map(
-            (c) =>
-              qtyParts(
-                row.values[c.key]!,
-                c.dimension,
-                system,
-                settingPrecision(c.key, c.dimension),
-              ).text,
-          ),
+          ...settingCells(table, row, system),
           // The card keeps a row short: the sentence above names the checks.
           ...(band
             ? [
@@ -78,9 +69,12 @@ const NARROWED_STYLE = {
   marginBottom: 3,
 } as const;
 
-/** Labels of the checks an evaluation fails at its set values. */
-export function failingLabels(ev: SheetEvaluation | null | undefined): string[] {
-  return ev?.checks.filter((c) => !c.pass).map((c) => c.label) ?? [];
+/** A setting table row's figures, each to the step a fitter sets it by. */
+function settingCells(table: EvalTable, row: SettingTableRow, system: PrintUnitSystem): string[] {
+  return table.columns.map(
+    (c) =>
+      qtyParts(row.values[c.key]!, c.dimension, system, settingPrecision(c.key, c.dimension)).text,
+  );
 }
 
 /** The column saying, per row, whether every check of the sheet passes at that setting. */
@@ -123,11 +117,10 @@ export function fieldSettingsBlocks(ctx: BlockContext, sheet: PrintableSheet): F
       }),
     );
   }
-  const failingAtSet = failingLabels(ev);
   const card = getSheetType(sheet.sheetType.id)?.fieldCard;
   ev.tables.forEach((t) => {
     const band = bandOf(ev, t.id);
-    const rows = settingTableRows(t, band, system, failingAtSet);
+    const rows = settingTableRows(ev, t, system);
     const narrowed = toleranceBeyondBand(ev, t, card, system);
     blocks.push(
       headingBlock(ctx, `${t.id}-h`, settingTableTitle(t.title, system), 2),
@@ -146,18 +139,8 @@ export function fieldSettingsBlocks(ctx: BlockContext, sheet: PrintableSheet): F
         continuedTitle: settingTableTitle(t.title, system),
         columns: [...settingColumns(t, system), ...(band ? [VERDICT_COLUMN] : [])],
         rows: rows.map((row) => [
-          ...t.columns.map(
-            (c) =>
-              qtyParts(
-                row.values[c.key]!,
-                c.dimension,
-                system,
-                settingPrecision(c.key, c.dimension),
-              ).text,
-          ),
-          ...(band
-            ? [rowVerdict(row.failing) + (row.marks.length ? ` (${marksText(row.marks)})` : '')]
-            : []),
+          ...settingCells(t, row, system),
+          ...(band ? [rowVerdictText(row)] : []),
         ]),
       }),
     );

@@ -83,8 +83,9 @@ export function formChecks(sheetType: string, inputs: unknown = null) {
 
 /** The field card's targets of a frozen evaluation, each with the tolerance its sheet declares. */
 export function fieldTargets(sheetType: string, evaluation: unknown): FieldTarget[] {
-  const settings = (evaluation as Partial<SheetEvaluation> | null)?.fieldSettings ?? [];
   const e = (evaluation ?? {}) as Partial<SheetEvaluation>;
+  const settings = e.fieldSettings ?? [];
+  // What bandedTolerance reads of the frozen record; a record stored before bands were kept has none.
   const frozen = {
     fieldSettings: settings,
     checks: e.checks ?? [],

@@ -195,10 +195,10 @@ describe('FieldSettingsView', () => {
       />,
     );
     expect(screen.getByTestId('tolerance-narrowed')).toHaveTextContent(
-      'Tolerance narrowed: Main spring force as set ± 5 % would reach 1090 N … 1210 N, past the band',
+      'Tolerance narrowed: Main spring force as set ± 5 % would span 1090 N … 1210 N, past the band',
     );
     expect(screen.getByTestId('tolerance-narrowed')).toHaveTextContent(
-      'the field card and the records hold it to −2.61 % / +1.74 % (1120 N to 1170 N)',
+      'the field card and the records hold it to −30 N / +20 N (1120 N … 1170 N)',
     );
   });
 });

@@ -3,8 +3,7 @@ import {
   bandOf,
   bandSentence,
   getSheetType,
-  marksText,
-  rowVerdict,
+  rowVerdictText,
   settingTableRows,
   settingTableTitle,
   toleranceBeyondBand,
@@ -29,8 +28,9 @@ export function FieldSettingsView({
   unitSystem: UnitSystem;
 }) {
   const { fieldSettings, tables } = evaluation;
-  const failingAtSet = evaluation.checks.filter((c) => !c.pass).map((c) => c.label);
   const fieldCard = getSheetType(evaluation.sheetType)?.fieldCard;
+  // The bands given (worked out live, or stored with the record) stand for the evaluation's own.
+  const banded = { ...evaluation, ...(bands ? { settingBands: bands } : {}) };
   if (fieldSettings.length === 0 && tables.length === 0) {
     return <Text c="dimmed">No field settings for this sheet type.</Text>;
   }
@@ -62,16 +62,9 @@ export function FieldSettingsView({
           const unit = presentSI(1, c.dimension as Dimension, unitSystem).unit;
           return { ...c, unitLabel: unit };
         });
-        const band = bandOf({ settingBands: bands }, table.id);
-        const rows = settingTableRows(table, band, unitSystem, failingAtSet);
-        const narrowed = band
-          ? toleranceBeyondBand(
-              { ...evaluation, settingBands: bands },
-              table,
-              fieldCard,
-              unitSystem,
-            )
-          : [];
+        const band = bandOf(banded, table.id);
+        const rows = settingTableRows(banded, table, unitSystem);
+        const narrowed = band ? toleranceBeyondBand(banded, table, fieldCard, unitSystem) : [];
         return (
           <div key={table.id}>
             <Title order={4} size="h6" mb={4}>
@@ -135,8 +128,7 @@ export function FieldSettingsView({
                         fz="xs"
                         c={row.failing?.length ? 'var(--mantine-color-fail-8)' : undefined}
                       >
-                        {rowVerdict(row.failing)}
-                        {row.marks.length ? ` (${marksText(row.marks)})` : ''}
+                        {rowVerdictText(row)}
                       </Table.Td>
                     ) : null}
                   </Table.Tr>
