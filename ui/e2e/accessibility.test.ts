@@ -100,8 +100,12 @@ describe.skipIf(skipReason !== null)('accessibility of the main screens', () => 
       ready: (s: BrowserSession) => s.page.getByTestId('document-number').waitFor(),
       then: async (s: BrowserSession) => {
         await s.page.getByRole('tab', { name: tab }).click();
-        await s.page.getByRole('tabpanel', { name: tab }).waitFor();
-        await s.page.waitForTimeout(300);
+        // Its content, not only the panel: a results table, a derivation step, a chart.
+        await s.page
+          .getByRole('tabpanel', { name: tab })
+          .locator('table, [data-step], svg')
+          .first()
+          .waitFor();
       },
     })),
     {

@@ -2,37 +2,36 @@ import { describe, expect, it } from 'vitest';
 import { screen } from '@testing-library/react';
 import { springTarget } from '../../../testing/fixtures';
 import { renderWithProviders } from '../../../testing/render';
+import type { FieldTarget } from '@holdfast/shared';
 import { MeasurementRow } from './measurement-row';
+import type { MeasurementDraft } from './measurement-entry';
 
 // A steel-rule length set to 0.5 mm steps, read to 0.1 mm (calc's precision table).
 const spring = springTarget(0.124, 'Main spring length as set');
 
+/** The row of `target` with an as-left value (or none) typed in. */
+function renderRow(target: FieldTarget, asLeft: MeasurementDraft['asLeft']) {
+  return renderWithProviders(
+    <MeasurementRow
+      target={target}
+      draft={{ asLeft, reason: '' }}
+      withAsFound={false}
+      errors={{}}
+      onChange={() => undefined}
+    />,
+  );
+}
+
 describe('a measured value on the record form', () => {
   it('gives its deviation to a tenth of the setting step, as the reading prints', () => {
-    renderWithProviders(
-      <MeasurementRow
-        target={spring}
-        draft={{ asLeft: { value: 124.3, unit: 'mm' }, reason: '' }}
-        withAsFound={false}
-        errors={{}}
-        onChange={() => undefined}
-      />,
-    );
+    renderRow(spring, { value: 124.3, unit: 'mm' });
     // To the setting's own 0.5 mm step this read "+0.5 mm", at the edge of the band.
     expect(screen.getByText(/In tolerance/)).toHaveTextContent('In tolerance (+0.3 mm)');
   });
 
   it('reads ±0 for a deviation too small to print, never −0', () => {
-    renderWithProviders(
-      <MeasurementRow
-        target={spring}
-        // 123.99 mm against 124 mm: −0.01 mm, under the 0.1 mm the reading prints to.
-        draft={{ asLeft: { value: 123.99, unit: 'mm' }, reason: '' }}
-        withAsFound={false}
-        errors={{}}
-        onChange={() => undefined}
-      />,
-    );
+    // 123.99 mm against 124 mm: −0.01 mm, under the 0.1 mm the reading prints to.
+    renderRow(spring, { value: 123.99, unit: 'mm' });
     expect(screen.getByText(/In tolerance/)).toHaveTextContent('In tolerance (±0 mm)');
   });
 
@@ -50,30 +49,14 @@ describe('a measured value on the record form', () => {
         confidence: 'common practice' as const,
       },
     };
-    renderWithProviders(
-      <MeasurementRow
-        target={force}
-        draft={{ asLeft: undefined, reason: '' }}
-        withAsFound={false}
-        errors={{}}
-        onChange={() => undefined}
-      />,
-    );
+    renderRow(force, undefined);
     expect(screen.getByText(/^Target 1150 N/)).toHaveTextContent(
       'Target 1150 N, tolerance −2.61 % / +1.74 % (common practice; narrowed to the band where every check of this sheet passes); accepted 1120 N to 1170 N',
     );
   });
 
   it('gives the accepted lengths to the reading precision', () => {
-    renderWithProviders(
-      <MeasurementRow
-        target={spring}
-        draft={{ asLeft: undefined, reason: '' }}
-        withAsFound={false}
-        errors={{}}
-        onChange={() => undefined}
-      />,
-    );
+    renderRow(spring, undefined);
     expect(screen.getByText(/^Target/)).toHaveTextContent('accepted 123.5 mm to 124.5 mm');
   });
 });

@@ -24,7 +24,7 @@ function settingText(target: FieldTarget, valueSI: number): string {
 
 /**
  * The values the tolerance accepts, where it has two sides: a fitter reads "1120 N to 1170 N"
- * more surely than "−2.61 % / +1.74 %". To the reading's precision, a tenth of the setting step.
+ * more surely than "± 5 %" of a target. To the reading's precision, a tenth of the setting step.
  */
 function acceptedText(target: FieldTarget): string {
   if (!target.tolerance) return '';
