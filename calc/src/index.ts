@@ -139,4 +139,5 @@ export {
   type ToleratedSetting,
 } from './field/evaluate-tolerance.js';
 export { toleranceText } from './field/tolerance-text.js';
+export { acceptedRange, type AcceptedRange } from './field/accepted-range.js';
 export * as fieldTolerances from './field/tolerances.js';

@@ -1,4 +1,5 @@
 import {
+  acceptedRange,
   getSheetType,
   bandedTolerance,
   settingPrecision,
@@ -32,6 +33,27 @@ const Box = (props: { h?: number }) => (
   />
 );
 
+/**
+ * The tolerance and, below it, the values it accepts, rounded inward to the reading: the target is
+ * printed to the step a fitter sets by (221.5 mm for 221.25 mm), so "± 0.5 mm" read around the
+ * printed figure would accept 222.0 mm, which the record judges out.
+ */
+function toleranceCell(
+  f: FieldSetting,
+  tolerance: FieldTolerance | undefined,
+  system: PrintUnitSystem,
+): string {
+  const text = toleranceText(tolerance, f.dimension, system);
+  const range = acceptedRange(f.value, tolerance, f.key, f.dimension, system);
+  return range ? `${text} (${range.text})` : text;
+}
+
+/** ' (60° to 75°)': the values a back-off tolerance accepts, or nothing for a one-sided one. */
+function acceptedEnds(f: FieldSetting, tolerance: FieldTolerance, system: PrintUnitSystem) {
+  const range = acceptedRange(f.value, tolerance, f.key, f.dimension, system);
+  return range ? ` (${range.text})` : '';
+}
+
 /** Target values with empty boxes for what was measured and the setter's initials. */
 function SettingsWithBoxes(props: {
   items: FieldSetting[];
@@ -51,15 +73,15 @@ function SettingsWithBoxes(props: {
     <Table
       columns={[
         { title: 'Setting', flex: 3 },
-        { title: 'Target', flex: 1.3, align: 'right' },
-        { title: 'Tolerance', flex: 1.3 },
-        { title: 'Measured', flex: 1.3 },
+        { title: 'Target', flex: 1, align: 'right' },
+        { title: 'Tolerance (accepted)', flex: 2 },
+        { title: 'Measured', flex: 0.9 },
         { title: 'Initials', width: 44 },
       ]}
       rows={props.items.map((f) => [
         label(f),
         qty(f.value, f.dimension, props.system, settingPrecision(f.key, f.dimension)),
-        toleranceText(props.tolerance(f.key), f.dimension, props.system),
+        toleranceCell(f, props.tolerance(f.key), props.system),
         <Box key="m" />,
         <Box key="i" />,
       ])}
@@ -89,6 +111,7 @@ function DiscStack(props: {
       {backOffTol && stack.backOff && (
         <Text>
           Tolerance {toleranceText(backOffTol, stack.backOff.dimension, system)}
+          {acceptedEnds(stack.backOff, backOffTol, system)}
           {backOffTol.rule ? `. ${backOffTol.rule}` : ''} ({backOffTol.source})
         </Text>
       )}

@@ -4,6 +4,7 @@ import { isMinorCheck } from './parts/summary.js';
 import { criteriaFor, realPrintable } from './testing/real-sheet.js';
 import { ensurePoppler, inspectPdf, type PdfFacts } from './testing/poppler.js';
 import {
+  acceptedRange,
   bandedTolerance,
   getSheetType,
   settingTolerance,
@@ -122,6 +123,24 @@ describe.each(TYPES)('%s, real evaluation', (sheetTypeId) => {
       if (held && held !== settingTolerance(f, layout))
         expect(flat(card.text)).toContain(toleranceText(held, f.dimension, sheet.unitSystem));
     }
+  });
+
+  it('prints the values each two-sided tolerance accepts, as the record form gives them', () => {
+    const ev = sheet.evaluation!;
+    const layout = getSheetType(sheetTypeId)!.fieldCard;
+    const flat = card.text.replace(/\s+/g, ' ');
+    let ranges = 0;
+    // A stack's preload follows from its back-off: the card gives it as "about", with no range.
+    for (const f of ev.fieldSettings.filter((x) => !/preload$/i.test(x.key))) {
+      const held = bandedTolerance(f, layout, ev);
+      const range = acceptedRange(f.value, held, f.key, f.dimension, sheet.unitSystem);
+      if (!range) continue;
+      ranges += 1;
+      expect(flat).toContain(`(${range.text})`);
+    }
+    expect(ranges).toBeGreaterThan(0);
+    // Demo hoist: 221.25 mm ± 0.5 mm, so not "221.0 to 222.0" around the printed 221.5 mm.
+    if (sheetTypeId === 'hoist-shoe-brake') expect(flat).toContain('(220.8 to 221.7 mm)');
   });
 
   it("speaks of the brake's own parts on the card: pads and a disc, or lining and a drum", () => {

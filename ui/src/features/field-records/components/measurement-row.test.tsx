@@ -51,12 +51,18 @@ describe('a measured value on the record form', () => {
     };
     renderRow(force, undefined);
     expect(screen.getByText(/^Target 1150 N/)).toHaveTextContent(
-      'Target 1150 N, tolerance −2.61 % / +1.74 % (common practice; narrowed to the band where every check of this sheet passes); accepted 1120 N to 1170 N',
+      'Target 1150 N, tolerance −2.61 % / +1.74 % (common practice; narrowed to the band where every check of this sheet passes); accepted 1120 to 1170 N',
     );
   });
 
   it('gives the accepted lengths to the reading precision', () => {
     renderRow(spring, undefined);
-    expect(screen.getByText(/^Target/)).toHaveTextContent('accepted 123.5 mm to 124.5 mm');
+    expect(screen.getByText(/^Target/)).toHaveTextContent('accepted 123.5 to 124.5 mm');
+  });
+
+  it('rounds the accepted ends inward: 221.25 mm ± 0.5 mm is 220.8 to 221.7 mm', () => {
+    // To the nearest tenth the top end would read 221.8 mm, which the record judges out.
+    renderRow({ ...spring, value: 0.22125 }, undefined);
+    expect(screen.getByText(/^Target/)).toHaveTextContent('accepted 220.8 to 221.7 mm');
   });
 });

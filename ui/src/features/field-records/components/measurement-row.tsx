@@ -1,11 +1,11 @@
 import { Badge, Group, Paper, Stack, Text, Textarea } from '@mantine/core';
 import type { FieldTarget } from '@holdfast/shared';
 import {
+  acceptedRange,
   formatWithPrecision,
   readingPrecision,
   settingPrecision,
   toDisplay,
-  toleranceBounds,
   toleranceText,
   withUnit,
   type Dimension,
@@ -23,17 +23,14 @@ function settingText(target: FieldTarget, valueSI: number): string {
 }
 
 /**
- * The values the tolerance accepts, where it has two sides: a fitter reads "1120 N to 1170 N"
- * more surely than "± 5 %" of a target. To the reading's precision, a tenth of the setting step.
+ * The values the tolerance accepts, where it has two sides: a fitter reads "1120 to 1170 N" more
+ * surely than "± 5 %" of a target. Rounded inward to the reading's precision, as the card prints
+ * them, so every value between the printed ends is judged in.
  */
 function acceptedText(target: FieldTarget): string {
-  if (!target.tolerance) return '';
-  const { lower, upper } = toleranceBounds(target.value, target.tolerance);
-  if (lower === null || upper === null) return '';
   const dim = target.dimension as Dimension;
-  const p = readingPrecision(target.settingKey, dim);
-  const show = (v: number) => toDisplay(v, dim, 'SI', undefined, p).text;
-  return `; accepted ${show(lower)} to ${show(upper)}`;
+  const range = acceptedRange(target.value, target.tolerance, target.settingKey, dim);
+  return range ? `; accepted ${range.text}` : '';
 }
 
 /**
