@@ -38,22 +38,31 @@ function roundedInward(v: number, end: 'low' | 'high', system: UnitSystem) {
 /**
  * Where every check of the sheet holds, in one paragraph: a setting table's rows come from the
  * torque limits alone, so a row inside them can still fail another check (p·v, the thruster, the
- * stop). Printed above the table on the sheet and the field card, and shown in the app.
+ * stop). Printed above the table on the sheet and the field card, and shown in the app. A sheet
+ * approved with checks failing at its set value (each justified) says so first: its band is where
+ * every other check passes, and "every check passes" would not be true of any setting.
  */
-export function bandSentence(band: SettingBand, system: UnitSystem): string {
+export function bandSentence(
+  band: SettingBand,
+  system: UnitSystem,
+  ev: Pick<SheetEvaluation, 'checks'>,
+): string {
   const what = band.tableId === 'clamp-setting' ? 'clamp force' : 'spring force';
+  const set = toDisplay(band.set, 'force', system).text;
+  const failingAtSet = ev.checks.filter((c) => !c.pass).map((c) => c.label);
   const below = band.lowLimitedBy
     ? ` Below it fails: ${band.lowLimitedBy.join('; ')}.`
     : ' Below it the table ends.';
   const above = band.highLimitedBy
     ? ` Above it fails: ${band.highLimitedBy.join('; ')}.`
     : ' Above it the table ends.';
-  return (
-    `Every check of this sheet passes with the ${what} from ${bandEnd(band.low, 'low', system)} ` +
-    `to ${bandEnd(band.high, 'high', system)} (worked out at ${toDisplay(band.set, 'force', system).text}).` +
-    below +
-    above
-  );
+  const range = `from ${bandEnd(band.low, 'low', system)} to ${bandEnd(band.high, 'high', system)}`;
+  const opening =
+    failingAtSet.length === 0
+      ? `Every check of this sheet passes with the ${what} ${range} (worked out at ${set}).`
+      : `At the set ${what} of ${set} ${failingAtSet.length === 1 ? 'this check fails' : 'these checks fail'}: ` +
+        `${failingAtSet.join('; ')}. Every other check passes with the ${what} ${range}.`;
+  return opening + below + above;
 }
 
 /** A row's verdict, short enough for a table cell ('' when the record carries none). */

@@ -92,12 +92,24 @@ describe('setting band in words', () => {
   };
 
   it('rounds each end into the band, so the printed figure still passes', () => {
-    const s = bandSentence(band, 'SI');
+    const s = bandSentence(band, 'SI', { checks: [] });
     expect(s).toContain('from 1120 N to 1170 N (worked out at 1150 N)');
     expect(s).toContain('Below it fails: Stopping distance at the load ≤ allowed.');
     expect(s).toContain('Above it the table ends.');
     // 1113.71 N = 250.37 lbf and 1176.42 N = 264.47 lbf: up and down at three figures.
-    expect(bandSentence(band, 'US')).toContain('from 251 lbf to 264 lbf');
+    expect(bandSentence(band, 'US', { checks: [] })).toContain('from 251 lbf to 264 lbf');
+  });
+
+  it('names the checks that fail at the set value, and the band then holds every other check', () => {
+    const failing = [
+      { label: 'Stopping distance at the load ≤ allowed', pass: false },
+      { label: 'Lining pressure ≤ limit', pass: true },
+    ];
+    const s = bandSentence(band, 'SI', { checks: failing as never });
+    expect(s).toMatch(
+      /^At the set spring force of 1150 N this check fails: Stopping distance at the load ≤ allowed\. Every other check passes with the spring force from 1120 N to 1170 N\./,
+    );
+    expect(s).not.toContain('Every check of this sheet passes');
   });
 
   it('gives each row a short verdict', () => {

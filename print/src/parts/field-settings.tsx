@@ -41,7 +41,9 @@ export function SettingTable(props: {
   return (
     <View>
       <Heading level={2}>{settingTableTitle(table.title, system)}</Heading>
-      {band && <Text style={{ fontSize: 7.5, marginBottom: 3 }}>{bandSentence(band, system)}</Text>}
+      {band && (
+        <Text style={{ fontSize: 7.5, marginBottom: 3 }}>{bandSentence(band, system, ev)}</Text>
+      )}
       <Table
         dense
         columns={[...columns, ...(band ? [CARD_VERDICT_COLUMN] : []), ...extra]}
@@ -126,7 +128,7 @@ export function fieldSettingsBlocks(ctx: BlockContext, sheet: PrintableSheet): F
       headingBlock(ctx, `${t.id}-h`, settingTableTitle(t.title, system), 2),
       ...(band
         ? [
-            paragraphBlock(ctx, `${t.id}-band`, bandSentence(band, system), {
+            paragraphBlock(ctx, `${t.id}-band`, bandSentence(band, system, ev), {
               fontSize: 7.5,
               marginBottom: 3,
             }),

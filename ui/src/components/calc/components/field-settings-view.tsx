@@ -72,7 +72,7 @@ export function FieldSettingsView({
             </Title>
             {band ? (
               <Text size="sm" mb={6} data-testid="setting-band">
-                {bandSentence(band, unitSystem)}
+                {bandSentence(band, unitSystem, banded)}
               </Text>
             ) : null}
             {narrowed.map((line) => (
