@@ -3,7 +3,6 @@ import {
   getSheetType,
   bandedTolerance,
   settingPrecision,
-  toSI,
   toleranceText,
   type FieldSetting,
   type FieldTolerance,
@@ -14,6 +13,7 @@ import { groupFieldSettings, type DiscStackSetup } from './field-card-groups.js'
 import { qty } from './format.js';
 import { Caution, rotorOf, type BrakeRotor } from './parts/caution.js';
 import { SettingTable } from './parts/field-settings.js';
+import { afterSettingLines } from './parts/after-setting.js';
 
 import { Heading, Table } from './parts/table.js';
 import type { PrintableSheet, PrintUnitSystem } from './printable-sheet.js';
@@ -34,7 +34,7 @@ const Box = (props: { h?: number }) => (
 );
 
 /**
- * The tolerance and, below it, the values it accepts, rounded inward to the reading: the target is
+ * The values a tolerance accepts, rounded inward to the reading, then the tolerance: the target is
  * printed to the step a fitter sets by (221.5 mm for 221.25 mm), so "± 0.5 mm" read around the
  * printed figure would accept 222.0 mm, which the record judges out.
  */
@@ -45,7 +45,7 @@ function toleranceCell(
 ): string {
   const text = toleranceText(tolerance, f.dimension, system);
   const range = acceptedRange(f.value, tolerance, f.key, f.dimension, system);
-  return range ? `${text} (${range.text})` : text;
+  return range ? `${range.text} (${text})` : text;
 }
 
 /** ' (60° to 75°)': the values a back-off tolerance accepts, or nothing for a one-sided one. */
@@ -74,7 +74,7 @@ function SettingsWithBoxes(props: {
       columns={[
         { title: 'Setting', flex: 3 },
         { title: 'Target', flex: 1, align: 'right' },
-        { title: 'Tolerance (accepted)', flex: 2 },
+        { title: 'Accepted (tolerance)', flex: 2 },
         { title: 'Measured', flex: 0.9 },
         { title: 'Initials', width: 44 },
       ]}
@@ -139,38 +139,6 @@ function DiscStack(props: {
       </View>
     </View>
   );
-}
-
-/** 1.25 × rated load: the static test load of a crane hoist (common practice, from memory). */
-const STATIC_TEST_FACTOR = 1.25;
-
-/** The hoist's static test load from the rated load on the sheet, or null for other drives. */
-export function staticTestLoad(sheet: PrintableSheet): string | null {
-  if (sheet.sheetType.id !== 'hoist-shoe-brake') return null;
-  const rated = sheet.inputs.find((i) => i.field.key === 'load')?.value;
-  if (!rated || typeof rated !== 'object') return null;
-  try {
-    const kg = toSI(rated.value, rated.unit, 'mass') * STATIC_TEST_FACTOR;
-    return qty(kg, 'mass', sheet.unitSystem);
-  } catch {
-    return null;
-  }
-}
-
-/** The checks after setting, in the words of the brake at hand (drum or disc, hoist or not). */
-export function afterSettingLines(sheet: PrintableSheet): string[] {
-  const rotor = rotorOf(sheet.sheetType.id);
-  const rubbing = rotor === 'disc' ? 'no pad drags on the disc' : 'no shoe drags on the drum';
-  const test = staticTestLoad(sheet);
-  return [
-    `Released: ${rubbing} — check the clearance on both sides. After a few minutes running, stop the drive and measure the ${rotor} surface temperature with a surface thermometer; never touch it.`,
-    'Set and release the brake at least five times, then measure the spring length, the reserve stroke and the clearance again.',
-    test
-      ? `Static test: each brake on its own holds the test load of ${test} (1.25 × rated load, common practice from memory; the governing standard names the value) lifted just clear of the ground.`
-      : 'Dynamic test: the brake stops the drive from rated speed with the rated load within the stopping distance on the sheet, or the test the governing standard names.',
-    'Guards refitted, tools removed, limit switches and brake monitoring working.',
-    'After running in (first shift, or the first few hundred operations): re-check reserve stroke, spring length and disc-spring preload.',
-  ];
 }
 
 /** The push rod line of the card's caution: it is no handle and no lifting point. */

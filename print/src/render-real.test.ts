@@ -136,11 +136,12 @@ describe.each(TYPES)('%s, real evaluation', (sheetTypeId) => {
       const range = acceptedRange(f.value, held, f.key, f.dimension, sheet.unitSystem);
       if (!range) continue;
       ranges += 1;
-      expect(flat).toContain(`(${range.text})`);
+      // In a settings table the range comes first; beside a stack's back-off, after the tolerance.
+      expect([`${range.text} (`, `(${range.text})`].some((t) => flat.includes(t))).toBe(true);
     }
     expect(ranges).toBeGreaterThan(0);
     // Demo hoist: 221.25 mm ± 0.5 mm, so not "221.0 to 222.0" around the printed 221.5 mm.
-    if (sheetTypeId === 'hoist-shoe-brake') expect(flat).toContain('(220.8 to 221.7 mm)');
+    if (sheetTypeId === 'hoist-shoe-brake') expect(flat).toContain('220.8 to 221.7 mm (± 0.5 mm)');
   });
 
   it("speaks of the brake's own parts on the card: pads and a disc, or lining and a drum", () => {

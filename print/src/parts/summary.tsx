@@ -72,7 +72,7 @@ const SUMMARY_COLUMNS: Column[] = [
 
 /** Utilisation is explained once, under the heading, in the words the table uses. */
 const UTILISATION_NOTE =
-  'Utilisation is value ÷ limit for an upper limit and limit ÷ value for a lower one; above 100 % fails.';
+  'Utilisation is value ÷ limit for an upper limit and limit ÷ value for a lower one; for a temperature it is the rise above ambient ÷ the allowed rise. Above 100 % fails.';
 
 /** Results against the acceptance criteria: one row per check with a worded verdict. */
 export function summaryBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlock[] {
