@@ -4,7 +4,11 @@ import { criterionIfSet } from '../criteria/lookup.js';
 import type { StackSetResult } from '../disc-springs/stack-derivation.js';
 import type { DiscStack } from '../disc-springs/stack.js';
 import { backOffTable, loadDeflectionChart } from './disc-spring-stack-chart.js';
-import { declaredBackOffTolerance, slotNote } from './disc-stack-band-checks.js';
+import {
+  declaredBackOffTolerance,
+  slotNote,
+  stackLengthTolerance,
+} from './disc-stack-band-checks.js';
 
 /** Default static-load limit for |σOM| at flat when the criteria set has none. */
 export const SIGMA_OM_FLAT_DEFAULT = {
@@ -25,6 +29,9 @@ export interface StackOutputInput {
   tolerance: number;
   required: number;
   r: StackSetResult;
+  /** The stack at θ − Δθ (short, nearer flat) and θ + Δθ (past): the ends the sheet checks. */
+  short: StackSetResult;
+  past: StackSetResult;
 }
 
 /** Results, chart, field settings, table and warnings of one stack (its checks: stackChecks). */
@@ -124,6 +131,7 @@ export function stackOutputs(x: StackOutputInput) {
       value: r.setLength,
       unit: 'm',
       dimension: 'length',
+      tolerance: stackLengthTolerance(r.setLength, x.short.setLength, x.past.setLength),
       note: 'Measure to confirm the setting.',
     },
   ];

@@ -125,6 +125,33 @@ describe('disc-spring stack sheet: working band and back-off tolerance', () => {
     expect(measured(58)).toBe('out');
   });
 
+  it('holds the stack-length tolerance to the lengths the back-off band leaves (± P·Δθ/360°)', () => {
+    // 2.5 mm lead over 15°: 0.104 mm each way, inside the usual ± 0.2 mm (common practice).
+    const e = evaluate(60, 15);
+    const length = e.fieldSettings.find((f) => f.key === 'a.setLength')!;
+    const band = settingTolerance(length, sheet.fieldCard)!.band;
+    expect(band).toMatchObject({ kind: 'absolute' });
+    if (band.kind !== 'absolute') return;
+    expect(band.minus).toBeCloseTo((LEAD * 15) / 360, 12);
+    expect(band.plus).toBeCloseTo((LEAD * 15) / 360, 12);
+    // A stack measured 0.2 mm short sits nearer flat than the band the sheet checks: judged out.
+    expect(
+      evaluateTolerance(
+        length.value,
+        length.value - 0.2e-3,
+        settingTolerance(length, sheet.fieldCard)!,
+        'length',
+      ).status,
+    ).toBe('out');
+    // A back-off band wider than ± 0.2 mm of length keeps the usual ± 0.2 mm.
+    const wide = evaluate(60, 45).fieldSettings.find((f) => f.key === 'a.setLength')!;
+    expect(settingTolerance(wide, sheet.fieldCard)!.band).toEqual({
+      kind: 'absolute',
+      minus: 0.2e-3,
+      plus: 0.2e-3,
+    });
+  });
+
   it('refuses a negative tolerance on its own field', () => {
     try {
       evaluate(60, -5);

@@ -129,6 +129,8 @@ export function evaluateDiscSpringStack(
       tolerance: c.tolerance,
       required: c.required,
       r: c.r,
+      short: c.short,
+      past: c.past,
     });
     out.results.push(...o.results);
     out.checks.push(

@@ -1,7 +1,7 @@
 import type { CheckResult } from '../core/types.js';
 import type { FieldTolerance } from '../field/tolerance-types.js';
 import { WORKING_BAND } from '../disc-springs/curve.js';
-import { BACK_OFF_ANGLE } from '../field/tolerances.js';
+import { BACK_OFF_ANGLE, STACK_SET_LENGTH } from '../field/tolerances.js';
 import { makeCheck } from './checks.js';
 
 /** Whole degrees of an angle in rad, as the band checks' labels print a tolerance. */
@@ -13,6 +13,27 @@ export function declaredBackOffTolerance(tolerance: number): FieldTolerance {
     ...BACK_OFF_ANGLE,
     band: { kind: 'absolute', minus: 0, plus: tolerance },
     source: 'declared input (sheet): back-off tolerance; one-sided: common practice',
+  };
+}
+
+/**
+ * The card's tolerance on a stack's measured length, held to the stack lengths at the ends of the
+ * back-off band the sheet checks (θ − Δθ to θ + Δθ). The usual ± 0.2 mm (common practice) is wider
+ * than a thread releases over the band (a 2.5 mm lead gives 0.10 mm over 15°), and a stack
+ * measured 0.2 mm short sits nearer flat than the sheet's working-band check (s/h0) allows.
+ * Lengths in m: at the set angle, at θ − Δθ (short, nearer flat) and at θ + Δθ (past).
+ */
+export function stackLengthTolerance(set: number, short: number, past: number): FieldTolerance {
+  const base = STACK_SET_LENGTH.band;
+  if (base.kind !== 'absolute') return STACK_SET_LENGTH;
+  const minus = Math.min(base.minus, Math.max(0, set - short));
+  const plus = Math.min(base.plus, Math.max(0, past - set));
+  if (minus === base.minus && plus === base.plus) return STACK_SET_LENGTH;
+  return {
+    ...STACK_SET_LENGTH,
+    band: { kind: 'absolute', minus, plus },
+    source:
+      'common practice ± 0.2 mm, held to the stack lengths at the ends of the back-off tolerance the sheet checks',
   };
 }
 

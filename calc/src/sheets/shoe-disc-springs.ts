@@ -7,6 +7,7 @@ import type { DiscStack } from '../disc-springs/stack.js';
 import { makeCheck } from './checks.js';
 import {
   declaredBackOffTolerance,
+  stackLengthTolerance,
   fmtDeg,
   slotNote,
   workingBandChecks,
@@ -118,6 +119,7 @@ export function evaluateShoeDiscSprings(
         value: r.setLength,
         unit: 'm',
         dimension: 'length',
+        tolerance: stackLengthTolerance(r.setLength, short.setLength, past.setLength),
       },
     );
     out.checks.push(
