@@ -84,7 +84,7 @@ describe('two server processes on one database', () => {
       signIn(b.url, 'checker2'),
     ]);
     const rev = await call(a.url, 'GET', `/api/revisions/${revisionId}`, { token: checker.token });
-    const body = { rowVersion: rev.body.rowVersion };
+    const body = { rowVersion: rev.body.rowVersion, note: 'Approved in the race test.' };
     const results = await Promise.all([
       call(a.url, 'POST', `/api/revisions/${revisionId}/approve`, { token: checker.token, body }),
       call(b.url, 'POST', `/api/revisions/${revisionId}/approve`, { token: checker2.token, body }),

@@ -172,6 +172,29 @@ describe('revisions: server-side evaluation, validation, justification, audit', 
     expect(withIt.body.evaluation.pass).toBe(false);
   });
 
+  it('approves a revision with failing checks only when the checker says why, naming the checks', async () => {
+    const sheet = await createSheet(ctx, reg);
+    await makeFailing(ctx, await getRevision(ctx, sheet.revisions[0].id));
+    const id = sheet.revisions[0].id;
+    await submit(ctx, id);
+    const rev = await getRevision(ctx, id, 'checker');
+    const failing = rev.evaluation.checks.filter((c: { pass: boolean }) => !c.pass);
+    expect(failing.length).toBeGreaterThan(0);
+    const bare = await ctx.request('POST', `/api/revisions/${id}/approve`, {
+      as: 'checker',
+      body: { rowVersion: rev.rowVersion, note: '   ' },
+    });
+    expect(bare.status, bare.text).toBe(400);
+    expect(bare.body.error.fields[0]).toMatchObject({ path: 'note' });
+    expect(bare.body.error.fields[0].message).toContain(failing[0].label);
+    expect((await getRevision(ctx, id, 'checker')).state).toBe('in_check');
+    const approved = await approve(ctx, id, 'checker', 'Maker confirms the margin in writing.');
+    expect(approved).toMatchObject({
+      state: 'approved',
+      approvalNote: 'Maker confirms the margin in writing.',
+    });
+  });
+
   it('approves with a comment open only when the checker says why; a resolved comment asks nothing', async () => {
     const sheet = await createSheet(ctx, reg);
     const id = sheet.revisions[0].id;

@@ -129,7 +129,8 @@ export async function workflowWorker(
         'POST',
         `/api/revisions/${id}/approve`,
         tokens.checker,
-        { rowVersion },
+        // A note, as approving a revision with failing checks asks for one.
+        { rowVersion, note: 'Approved under load.' },
         200,
       );
       if (res) acks.approved.push(id);

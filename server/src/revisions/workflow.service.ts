@@ -16,6 +16,7 @@ import { OutboxService } from '../outbox/outbox.service.js';
 import { ReviewsService } from '../reviews/reviews.service.js';
 import { coreVersion, fieldLabel, resolveInputsOf, settingBandsOf } from '../calc/calc-engine.js';
 import { evaluateCompleteOrReject } from '../calc/evaluate.js';
+import { approvalNoteReason, approvalNoteSummary, failingLabels } from './approval-note.js';
 import { approvedMail, returnedMail, submittedMail } from './notifications.js';
 import { canCheck, ownPart } from './revision-access.js';
 import { contentHash, newVerificationCode } from './revision-codes.js';
@@ -160,15 +161,13 @@ export class WorkflowService {
   async approve(user: AuthUser, id: string, input: ApproveRevisionInput): Promise<Revision> {
     await this.units.run(async (tx) => {
       const rev = await this.loadForCheck(user, id, input.rowVersion, tx);
-      // An open comment stays open on the approved record for good: answered first, or the
-      // checker says in the approval note why the revision is approved with it open.
+      // An open comment stays open on the approved record for good, and a failing check is
+      // signed as it is: either way the checker says in the approval note why it is approved.
       const open = await this.repo.openCommentCount(id, tx);
-      if (open > 0 && !input.note?.trim()) {
-        throw badRequest('Comments are still open: resolve them, or say why you approve.', [
-          {
-            path: 'note',
-            message: `required because ${open === 1 ? 'one comment is' : `${open} comments are`} still open: resolve ${open === 1 ? 'it' : 'them'} first, or say why this revision is approved with ${open === 1 ? 'it' : 'them'} open`,
-          },
+      const failing = failingLabels(rev.evaluation);
+      if ((open > 0 || failing.length > 0) && !input.note?.trim()) {
+        throw badRequest(approvalNoteSummary(open, failing), [
+          { path: 'note', message: approvalNoteReason(open, failing) },
         ]);
       }
       const now = new Date();

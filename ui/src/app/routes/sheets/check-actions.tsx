@@ -55,6 +55,9 @@ export function CheckActions({ revision, openComments }: CheckActionsProps) {
         onClose={close}
         revisionLabel={revision.label}
         openComments={openComments}
+        failingChecks={(revision.evaluation?.checks ?? [])
+          .filter((c) => !c.pass)
+          .map((c) => c.label)}
         justification={revision.justification}
         onApprove={(note) => approve.mutateAsync({ rowVersion: revision.rowVersion, note })}
       />

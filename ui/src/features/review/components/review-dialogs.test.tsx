@@ -125,6 +125,37 @@ describe('ApproveDialog', () => {
     expect(onApprove).toHaveBeenCalledWith('Both answered in the replies; nothing left to change.');
   });
 
+  it('with checks failing, names them and asks why before approving', async () => {
+    const onApprove = vi.fn().mockResolvedValue(undefined);
+    const { user } = renderWithProviders(
+      <ApproveDialog
+        opened
+        onClose={() => undefined}
+        revisionLabel="D"
+        openComments={0}
+        failingChecks={[
+          'Stopping distance at the load ≤ allowed',
+          'p·v when the brake sets ≤ limit',
+        ]}
+        onApprove={onApprove}
+      />,
+    );
+    const list = await screen.findByTestId('approve-failing-checks');
+    expect(list).toHaveTextContent('2 checks fail, and are signed failing:');
+    expect(list).toHaveTextContent('Stopping distance at the load ≤ allowed');
+    await user.click(screen.getByRole('button', { name: 'Approve' }));
+    expect(await screen.findByText('2 checks fail: say here why you approve.')).toBeInTheDocument();
+    expect(onApprove).not.toHaveBeenCalled();
+    await user.type(
+      screen.getByRole('textbox', { name: /Approval note \(required: why it is approved/ }),
+      'Temporary duty; the maker confirms the margin in writing.',
+    );
+    await user.click(screen.getByRole('button', { name: 'Approve' }));
+    expect(onApprove).toHaveBeenCalledWith(
+      'Temporary duty; the maker confirms the margin in writing.',
+    );
+  });
+
   it('with no comment open, the note is optional', async () => {
     const onApprove = vi.fn().mockResolvedValue(undefined);
     const { user } = renderWithProviders(
