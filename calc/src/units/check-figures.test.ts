@@ -26,6 +26,21 @@ describe('checkFigures', () => {
     });
   });
 
+  it('prints a deviation as a percentage, as its label gives the limit', () => {
+    const rate = {
+      label: 'Spring rate from the geometry agrees with the rate used (deviation ≤ 5 %)',
+      value: 0.007387081816853991,
+      limit: 0.05,
+      dimension: 'dimensionless' as const,
+    };
+    expect(checkFigures(rate, 'SI')).toEqual({ value: '0.739 %', limit: '5 %' });
+    expect(checkFigures({ ...rate, value: 0 }, 'US')).toEqual({ value: '0 %', limit: '5 %' });
+    // A ratio that is no deviation stays a ratio.
+    expect(
+      checkFigures({ ...rate, label: 'Thruster force ÷ force needed', value: 1.6187 }, 'SI').value,
+    ).toBe('1.619');
+  });
+
   it('prints a value that is not finite as a dash', () => {
     expect(checkFigures({ value: Number.NaN, limit: 1, dimension: 'force' }, 'SI').value).toBe('—');
   });

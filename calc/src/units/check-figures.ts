@@ -1,23 +1,38 @@
 import type { Dimension } from '../core/types.js';
 import { toDisplay, type UnitSystem } from './display.js';
+import { formatWithPrecision } from './precision.js';
 
 /** Significant figures a check's value and limit get when they would otherwise print alike. */
 const FINE = { digits: 6 };
 
+/** A deviation printed as a share: 0.739 %, 5 % (three figures, no trailing zeros). */
+const SHARE = { digits: 3, trim: true };
+
+/**
+ * Whether a check compares a deviation (a fraction, limit 0.05 = 5 %): those read as percentages,
+ * "0.739 % ≤ 5 %", where a fraction against a label in % ("0.007387 ≤ 0.05") does not.
+ */
+function isDeviation(c: { dimension: Dimension; label?: string }): boolean {
+  return c.dimension === 'dimensionless' && /deviation/i.test(c.label ?? '');
+}
+
 /**
  * A check's value and limit as text in a unit system, the way the printed sheet and the screen
- * both show them: to the dimension's printing precision, and with six figures when the two would
- * print alike but differ, so the verdict can always be read from the figures (2.098 against a
- * limit of 2.1 must not read "2.10 ≤ 2.10" and fail). A value that is not finite prints '—'.
+ * both show them: to the dimension's printing precision (a deviation as a percentage), and with
+ * six figures when the two would print alike but differ, so the verdict can always be read from
+ * the figures (2.098 against a limit of 2.1 must not read "2.10 ≤ 2.10" and fail). A value that
+ * is not finite prints '—'.
  */
 export function checkFigures(
-  c: { value: number; limit: number; dimension: Dimension },
+  c: { value: number; limit: number; dimension: Dimension; label?: string },
   system: UnitSystem,
 ): { value: string; limit: string } {
-  const show = (x: number, fine: boolean) =>
-    Number.isFinite(x)
-      ? toDisplay(x, c.dimension, system, undefined, fine ? FINE : undefined).text
-      : '—';
+  const share = isDeviation(c);
+  const show = (x: number, fine: boolean) => {
+    if (!Number.isFinite(x)) return '—';
+    if (share) return `${formatWithPrecision(x * 100, 1, '%', fine ? FINE : SHARE)} %`;
+    return toDisplay(x, c.dimension, system, undefined, fine ? FINE : undefined).text;
+  };
   const value = show(c.value, false);
   const limit = show(c.limit, false);
   if (value !== limit || c.value === c.limit) return { value, limit };

@@ -49,7 +49,12 @@ const CheckRow = memo(function CheckRow({
 }: CheckRowProps) {
   // The figures the printed sheet shows for this check, so screen and paper agree.
   const figures = checkFigures(
-    { value: check.value, limit: check.limit, dimension: check.dimension as Dimension },
+    {
+      value: check.value,
+      limit: check.limit,
+      dimension: check.dimension as Dimension,
+      label: check.label,
+    },
     unitSystem,
   );
   const relation = check.kind === 'max' ? '≤' : '≥';
