@@ -58,5 +58,13 @@
  * J_dr = 120 kg·m² and a 0.2 s release unit (was 0.3 s), so its normal stop shortens too.
  * With no number moved, powers print to four figures (23.76 kW, not 23.8 kW), so a checker can
  * work the motor torque again from the printed line.
+ * 1.5.0: a disc-spring stack's length on the field card keeps ± 0.2 mm only where the back-off
+ * band the sheet checks allows it: otherwise it is held to the stack lengths at θ − Δθ and θ + Δθ
+ * (± 0.104 mm for the demo holder's 2.5 mm lead over 15°), so a stack measured short of the
+ * working band is judged out. With no number moved: the spring setting table's title gives its
+ * range ("… from 771 to 1600 N") without saying the torque limits hold there (a torque check on
+ * the worn drum can fail in its first row; the band sentence says where every check passes); the
+ * set length of the main spring is L_set, as Shigley's L_s is the solid length beside it; and the
+ * end-type steps name no table in their labels (the reference gives Shigley's Table 10-1).
  */
-export const CORE_VERSION = '1.4.0';
+export const CORE_VERSION = '1.5.0';

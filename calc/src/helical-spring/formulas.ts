@@ -75,7 +75,7 @@ export const helicalRateFormula = defineFormula({
 
 export const totalCoilsFormula = defineFormula({
   id: 'total-coils',
-  label: 'Total coils (end type, Table 10-1)',
+  label: 'Total coils by end type',
   symbol: 'N_t',
   expression: 'N_a + n_e',
   symbols: { N_a: { text: 'N_a', ...R }, n_e: { text: 'N_e', ...R } },
@@ -85,7 +85,7 @@ export const totalCoilsFormula = defineFormula({
 
 export const solidLengthFormula = defineFormula({
   id: 'solid-length',
-  label: 'Solid length (end type, Table 10-1)',
+  label: 'Solid length by end type',
   symbol: 'L_s',
   expression: 'd * (N_t + s_e)',
   symbols: { d: { text: 'd', ...L }, N_t: { text: 'N_t', ...R }, s_e: { text: 'e_s', ...R } },

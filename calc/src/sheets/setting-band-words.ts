@@ -77,7 +77,7 @@ export function rowVerdict(failing: readonly string[] | undefined): string {
 
 /**
  * A setting table's title in the unit system: the shoe sheets title their table with its force
- * range in newtons ("… torque limits met from 771 to 1600 N"), which a US card prints in lbf like
+ * range in newtons ("Spring setting table (new lining) from 771 to 1600 N"), which a US card prints in lbf like
  * its rows. Any other title is returned as it is.
  */
 export function settingTableTitle(title: string, system: UnitSystem): string {

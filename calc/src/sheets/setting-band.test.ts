@@ -125,10 +125,10 @@ describe('setting band in words', () => {
 
 describe('setting table titles in the unit system', () => {
   it('gives the shoe table’s force range in lbf on a US sheet, as its rows', () => {
-    const t = 'Spring setting table (new lining): torque limits met from 771 to 1600 N';
+    const t = 'Spring setting table (new lining) from 771 to 1600 N';
     expect(settingTableTitle(t, 'SI')).toBe(t);
     expect(settingTableTitle(t, 'US')).toBe(
-      'Spring setting table (new lining): torque limits met from 173 to 360 lbf',
+      'Spring setting table (new lining) from 173 to 360 lbf',
     );
     expect(settingTableTitle('Clamp force setting table (new pads)', 'US')).toBe(
       'Clamp force setting table (new pads)',

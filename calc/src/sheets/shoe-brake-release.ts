@@ -156,7 +156,7 @@ export function shoeSettings(
     ],
     table: {
       id: 'spring-setting',
-      title: `Spring setting table (new lining): torque limits met from ${fmtN(lim.low)} to ${fmtN(lim.high)} N`,
+      title: `Spring setting table (new lining) from ${fmtN(lim.low)} to ${fmtN(lim.high)} N`,
       columns: [
         { key: 'springForce', label: 'Spring force', unit: 'N', dimension: 'force' },
         { key: 'springLength', label: 'Spring length', unit: 'm', dimension: 'length' },

@@ -7,7 +7,7 @@ import type { Force, Length, Stiffness } from '../units/quantities.js';
 export const springLengthFormula = defineFormula({
   id: 'spring-length',
   label: 'Set (installed) length of the main spring',
-  symbol: 'L_s',
+  symbol: 'L_set',
   expression: 'L_0 - F_s / k',
   symbols: {
     L_0: { text: 'L_0', dimension: 'length' },
