@@ -21,7 +21,7 @@ describe('field records', () => {
   const suite = sheetsSuite();
   let revisionId: string;
   let draftRevisionId: string;
-  let targets: { settingKey: string; value: number; tolerance: unknown }[];
+  let targets: { settingKey: string; value: number; tolerance: unknown; inService?: unknown }[];
 
   beforeEach(async () => {
     const sheet = await createSheet(suite.ctx, suite.reg);
@@ -76,6 +76,41 @@ describe('field records', () => {
     });
     expect(created.status, created.text).toBe(201);
     expect(created.body.measurements[0].asLeftVerdict.status).toBe('out');
+  });
+
+  it('judges a reserve stroke as found against the in-service minimum, as left against the setting', async () => {
+    const reserve = targets.find((t) => t.settingKey === 'reserveStroke')!;
+    const minimum = targets.find((t) => t.settingKey === 'minReserveStroke')!;
+    expect(reserve.inService).toMatchObject({
+      value: minimum.value,
+      tolerance: { band: { kind: 'atLeast' } },
+    });
+    // Found at 16 mm on an inspection (set to 20 mm, minimum 5 mm): lining wear, not a fault.
+    const worn = 0.016;
+    const created = await suite.ctx.request('POST', '/api/field-records', {
+      as: 'technician',
+      body: body({
+        kind: 'periodic-inspection',
+        measurements: [{ settingKey: 'reserveStroke', asFound: worn, asLeft: worn }],
+      }),
+    });
+    expect(created.status, created.text).toBe(201);
+    const m = created.body.measurements[0];
+    expect(m.asFoundVerdict.status).toBe('in');
+    // Left at 16 mm, it is not what the card sets: judged against the setting's tolerance.
+    expect(m.asLeftVerdict.status).toBe('out');
+    // Found below the minimum: out.
+    const below = await suite.ctx.request('POST', '/api/field-records', {
+      as: 'technician',
+      body: body({
+        kind: 'periodic-inspection',
+        measurements: [
+          { settingKey: 'reserveStroke', asFound: minimum.value * 0.8, asLeft: reserve.value },
+        ],
+      }),
+    });
+    expect(below.status, below.text).toBe(201);
+    expect(below.body.measurements[0].asFoundVerdict.status).toBe('out');
   });
 
   it('a technician never sees a draft revision, nor makes a record against one', async () => {

@@ -95,6 +95,7 @@ export function fieldTargets(sheetType: string, evaluation: unknown): FieldTarge
   const card = getSheetType(sheetType)?.fieldCard;
   return settings.map((s: FieldSetting) => {
     const p = card?.settings[s.key];
+    const inService = inServiceLimit(s.key, settings);
     return {
       settingKey: s.key,
       label: s.label,
@@ -107,8 +108,34 @@ export function fieldTargets(sheetType: string, evaluation: unknown): FieldTarge
       ...(s.note ? { note: s.note } : {}),
       // Held inside the band where every check of the sheet passes (calc's bandedTolerance).
       tolerance: bandedTolerance(s, card, frozen),
+      ...(inService ? { inService } : {}),
     };
   });
+}
+
+/** Settings that wear moves in service, and the setting that gives the limit it may reach. */
+const IN_SERVICE_MINIMUM: Readonly<Record<string, string>> = {
+  // Lining wear uses up the reserve stroke; the sheet's minimum is where re-adjustment is due.
+  reserveStroke: 'minReserveStroke',
+};
+
+/**
+ * The in-service limit of a setting, where the sheet gives one: a reserve stroke found at 16 mm on
+ * an inspection is wear, not a fault, while it stays above the minimum (5 mm on the demo hoist).
+ */
+function inServiceLimit(key: string, settings: readonly FieldSetting[]): FieldTarget['inService'] {
+  const limitKey = IN_SERVICE_MINIMUM[key];
+  const limit = limitKey ? settings.find((f) => f.key === limitKey) : undefined;
+  if (!limit) return undefined;
+  return {
+    value: limit.value,
+    label: limit.label,
+    tolerance: {
+      band: { kind: 'atLeast' },
+      source: `in service: ${limit.label.toLowerCase()} (the sheet's minimum; re-adjust below it)`,
+      confidence: 'common practice',
+    },
+  };
 }
 
 /** A stored measurement with its target and the verdicts on as found and as left. */
@@ -117,10 +144,13 @@ export function judgeMeasurement(
   targets: ReadonlyMap<string, FieldTarget>,
 ): FieldMeasurement {
   const t = targets.get(m.settingKey);
-  const judge = (v: number | null) =>
-    v === null || !t?.tolerance
+  const judge = (
+    v: number | null,
+    basis: { value: number; tolerance: FieldTarget['tolerance'] } | undefined = t,
+  ) =>
+    v === null || !t || !basis?.tolerance
       ? null
-      : evaluateTolerance(t.value, v, t.tolerance, t.dimension as Dimension);
+      : evaluateTolerance(basis.value, v, basis.tolerance, t.dimension as Dimension);
   return {
     ...m,
     label: t?.label ?? m.settingKey,
@@ -128,7 +158,8 @@ export function judgeMeasurement(
     unit: t?.unit ?? '',
     dimension: t?.dimension ?? '',
     tolerance: t?.tolerance ?? null,
-    asFoundVerdict: judge(m.asFound),
+    // As found against the in-service limit where there is one: wear is not a setting error.
+    asFoundVerdict: judge(m.asFound, t?.inService ?? t),
     asLeftVerdict: judge(m.asLeft),
   };
 }

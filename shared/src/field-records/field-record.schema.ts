@@ -153,6 +153,14 @@ export const fieldTargetSchema = z.object({
   note: z.string().optional(),
   /** Null for a value the card prints but nobody measures (e.g. a derived wear allowance). */
   tolerance: fieldToleranceSchema.nullable(),
+  /**
+   * Where the value may drift to in service before work is due (lining wear uses up the reserve
+   * stroke down to the sheet's minimum): an as-found reading is judged against this, the setting's
+   * tolerance applies to the value as left.
+   */
+  inService: z
+    .object({ value: z.number(), tolerance: fieldToleranceSchema, label: z.string() })
+    .optional(),
 });
 export type FieldTarget = z.infer<typeof fieldTargetSchema>;
 

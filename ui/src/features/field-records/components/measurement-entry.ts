@@ -41,11 +41,28 @@ export function readSI(value: InputValue | undefined, dimension: string): ReadVa
 
 /** In or out of the target's tolerance; null without a value or a tolerance. */
 export function verdictFor(target: FieldTarget, value: ReadValue): ToleranceVerdict | null {
-  if (value.kind !== 'value' || !target.tolerance) return null;
+  return judged(target, target, value);
+}
+
+/**
+ * An as-found reading against the in-service limit where the target has one (the reserve stroke
+ * down to the sheet's minimum: wear, not a setting error), else against the setting's tolerance.
+ * The server judges the stored record the same way.
+ */
+export function asFoundVerdictFor(target: FieldTarget, value: ReadValue): ToleranceVerdict | null {
+  return judged(target, target.inService ?? target, value);
+}
+
+function judged(
+  target: FieldTarget,
+  basis: { value: number; tolerance: FieldTarget['tolerance'] },
+  value: ReadValue,
+): ToleranceVerdict | null {
+  if (value.kind !== 'value' || !basis.tolerance) return null;
   return evaluateTolerance(
-    target.value,
+    basis.value,
     value.si,
-    target.tolerance as FieldTolerance,
+    basis.tolerance as FieldTolerance,
     target.dimension as Dimension,
   );
 }

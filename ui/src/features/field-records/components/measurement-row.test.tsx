@@ -65,4 +65,47 @@ describe('a measured value on the record form', () => {
     renderRow({ ...spring, value: 0.22125 }, undefined);
     expect(screen.getByText(/^Target/)).toHaveTextContent('accepted 220.8 to 221.7 mm');
   });
+
+  it("judges a reserve stroke as found against the in-service minimum, in the fitter's words", () => {
+    const reserve: FieldTarget = {
+      settingKey: 'reserveStroke',
+      label: 'Reserve stroke to set (new lining)',
+      value: 0.02,
+      unit: 'm',
+      dimension: 'length',
+      group: 'thruster',
+      tolerance: {
+        band: { kind: 'absolute', minus: 0, plus: 0.003 },
+        source: 'common practice',
+        confidence: 'common practice',
+      },
+      inService: {
+        value: 0.005,
+        label: 'Re-adjust before the reserve stroke falls below',
+        tolerance: {
+          band: { kind: 'atLeast' },
+          source: 'in service',
+          confidence: 'common practice',
+        },
+      },
+    };
+    const row = (asFound: number) =>
+      renderWithProviders(
+        <MeasurementRow
+          target={reserve}
+          draft={{ asFound: { value: asFound, unit: 'mm' }, asLeft: undefined, reason: '' }}
+          withAsFound
+          errors={{}}
+          onChange={() => undefined}
+        />,
+      );
+    // 16 mm found, 20 mm set: lining wear, not a fault.
+    const { unmount } = row(16);
+    expect(screen.getByText(/^Serviceable/)).toHaveTextContent(
+      'Serviceable: 11.0 mm above the 5.0 mm minimum',
+    );
+    unmount();
+    row(4);
+    expect(screen.getByText(/^Below the/)).toHaveTextContent('Below the 5.0 mm minimum: re-adjust');
+  });
 });

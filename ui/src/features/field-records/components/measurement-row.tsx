@@ -14,7 +14,7 @@ import {
 } from '@holdfast/calc';
 import { UnitField } from '../../../components/calc/components/unit-field';
 import { defaultUnit } from '../../../components/calc/utils/units';
-import { readSI, verdictFor, type MeasurementDraft } from './measurement-entry';
+import { asFoundVerdictFor, readSI, verdictFor, type MeasurementDraft } from './measurement-entry';
 
 /** A field setting in its display unit, to the step a fitter can measure (calc's precision table). */
 function settingText(target: FieldTarget, valueSI: number): string {
@@ -59,6 +59,32 @@ function VerdictBadge({ target, value }: { target: FieldTarget; value: InputValu
     <Badge color={verdict.status === 'in' ? 'pass' : 'fail'} size="lg">
       {verdict.status === 'in' ? 'In tolerance' : 'Out of tolerance'} (
       {deviationText(target, verdict)})
+    </Badge>
+  );
+}
+
+/**
+ * An as-found reading of a setting that wear moves: judged against its in-service limit, in the
+ * fitter's words ("Serviceable: 11.0 mm above the 5.0 mm minimum" or "Below the minimum: re-adjust").
+ */
+function AsFoundBadge({ target, value }: { target: FieldTarget; value: InputValue | undefined }) {
+  if (!target.inService) return <VerdictBadge target={target} value={value} />;
+  const verdict = asFoundVerdictFor(target, readSI(value, target.dimension));
+  if (!verdict) return null;
+  const dim = target.dimension as Dimension;
+  const limit = settingText(target, target.inService.value);
+  const margin = toDisplay(
+    Math.abs(verdict.deviationSI),
+    dim,
+    'SI',
+    undefined,
+    readingPrecision(target.settingKey, dim),
+  ).text;
+  return (
+    <Badge color={verdict.status === 'in' ? 'pass' : 'fail'} size="lg">
+      {verdict.status === 'in'
+        ? `Serviceable: ${margin} above the ${limit} minimum`
+        : `Below the ${limit} minimum: re-adjust`}
     </Badge>
   );
 }
@@ -109,7 +135,7 @@ export function MeasurementRow({
               onChange={(v) => onChange({ ...draft, asFound: v })}
             />
             <Group>
-              <VerdictBadge target={target} value={draft.asFound} />
+              <AsFoundBadge target={target} value={draft.asFound} />
             </Group>
           </Stack>
         )}
