@@ -247,6 +247,12 @@ export interface FieldCardPlacement {
   role?: 'backOff' | 'preload';
   /** The band the measured value must lie in, with its source; absent for a derived value. */
   tolerance?: FieldTolerance;
+  /**
+   * The field setting whose value is this one's lowest in service (the reserve stroke's minimum
+   * before re-adjustment): wear moves the value between visits, so a reading as found is judged
+   * against it, and the tolerance applies to the value as left.
+   */
+  inServiceMinimum?: string;
 }
 
 /** The field setting card of a sheet type, declared with the sheet (never guessed from labels). */

@@ -129,6 +129,12 @@ describe('field-card tolerance declarations', () => {
     }
   });
 
+  it('a stack preload carries no tolerance: nobody measures it on site', () => {
+    for (const sheet of sheetTypes)
+      for (const [key, p] of Object.entries(sheet.fieldCard.settings))
+        if (p.role === 'preload') expect(p.tolerance, `${sheet.id} ${key}`).toBeUndefined();
+  });
+
   it('the values a fitter measures declare a tolerance on every sheet that produces them', () => {
     const measured = [
       'springLength',
@@ -137,7 +143,6 @@ describe('field-card tolerance declarations', () => {
       'workingStroke',
       'reserveStroke',
       'holderBackOff',
-      'holderPreload',
       'holderSetLength',
       'a.backOffAngle',
       'a.setLength',

@@ -61,12 +61,6 @@ export const BACK_OFF_ANGLE: FieldTolerance = {
   rule: 'Tighten the stack flat, then back off only. Never tighten to align a slot: back off on to the next one.',
 };
 
-/** Disc-spring stack preload after back-off: ±10 % (the stack curve is steep near flat). */
-export const STACK_PRELOAD: FieldTolerance = {
-  band: { kind: 'relative', minus: 0.1, plus: 0.1 },
-  ...COMMON,
-};
-
 /** Disc-spring stack set length: ±0.2 mm. */
 export const STACK_SET_LENGTH: FieldTolerance = {
   band: { kind: 'absolute', minus: 0.2 * MM, plus: 0.2 * MM },

@@ -19,7 +19,9 @@ function stack(
   const s = { group: 'discStack', stack: name } as const;
   return {
     [keys.backOff]: { ...s, role: 'backOff', tolerance: T.BACK_OFF_ANGLE },
-    [keys.preload]: { ...s, role: 'preload', tolerance: T.STACK_PRELOAD },
+    // No tolerance: a preload follows from the back-off and nobody measures it on site, so the
+    // card gives it as "about" and the record form asks for the stack length instead.
+    [keys.preload]: { ...s, role: 'preload' },
     [keys.setLength]: { ...s, tolerance: T.STACK_SET_LENGTH },
     ...Object.fromEntries(keys.others.map((k) => [k, s])),
   };
@@ -35,7 +37,8 @@ export const SHOE_FIELD_CARD: FieldCardLayout = {
     springForce: tol(spring, T.SPRING_FORCE),
     shoeClearance: tol(clearance, T.SHOE_CLEARANCE),
     workingStroke: tol(thruster, T.WORKING_STROKE),
-    reserveStroke: tol(thruster, T.RESERVE_STROKE),
+    // Lining wear uses up the reserve: found on an inspection, it is judged against the minimum.
+    reserveStroke: { ...tol(thruster, T.RESERVE_STROKE), inServiceMinimum: 'minReserveStroke' },
     minReserveStroke: thruster,
     wearToReadjust: thruster,
     wearTorqueLost: thruster,

@@ -95,7 +95,7 @@ export function fieldTargets(sheetType: string, evaluation: unknown): FieldTarge
   const card = getSheetType(sheetType)?.fieldCard;
   return settings.map((s: FieldSetting) => {
     const p = card?.settings[s.key];
-    const inService = inServiceLimit(s.key, settings);
+    const inService = inServiceLimit(p?.inServiceMinimum, settings);
     return {
       settingKey: s.key,
       label: s.label,
@@ -113,18 +113,14 @@ export function fieldTargets(sheetType: string, evaluation: unknown): FieldTarge
   });
 }
 
-/** Settings that wear moves in service, and the setting that gives the limit it may reach. */
-const IN_SERVICE_MINIMUM: Readonly<Record<string, string>> = {
-  // Lining wear uses up the reserve stroke; the sheet's minimum is where re-adjustment is due.
-  reserveStroke: 'minReserveStroke',
-};
-
 /**
  * The in-service limit of a setting, where the sheet gives one: a reserve stroke found at 16 mm on
  * an inspection is wear, not a fault, while it stays above the minimum (5 mm on the demo hoist).
  */
-function inServiceLimit(key: string, settings: readonly FieldSetting[]): FieldTarget['inService'] {
-  const limitKey = IN_SERVICE_MINIMUM[key];
+function inServiceLimit(
+  limitKey: string | undefined,
+  settings: readonly FieldSetting[],
+): FieldTarget['inService'] {
   const limit = limitKey ? settings.find((f) => f.key === limitKey) : undefined;
   if (!limit) return undefined;
   return {
