@@ -1,5 +1,5 @@
 import type { ChartData, Dimension } from '@holdfast/calc';
-import { presentSI, type UnitSystem } from './units';
+import { presentPrinted, type UnitSystem } from './units';
 import { toDisplay } from '@holdfast/calc';
 
 export interface DisplayChart {
@@ -60,7 +60,8 @@ export function toDisplayChart(chart: ChartData, system: UnitSystem): DisplayCha
     seriesNames: names,
     referenceLines: (chart.referenceLines ?? []).map((l) => ({
       axis: l.axis,
-      label: `${l.label}: ${presentSI(l.value, (l.axis === 'x' ? chart.xDimension : chart.yDimension) as Dimension, system).text}`,
+      // To the printed sheet's precision: 'Re-adjust: 0.60 mm', not 'Re-adjust: 0.6000 mm'.
+      label: `${l.label}: ${presentPrinted(l.value, (l.axis === 'x' ? chart.xDimension : chart.yDimension) as Dimension, system).text}`,
       value: l.axis === 'x' ? x.convert(l.value) : y.convert(l.value),
     })),
     markers: (chart.markers ?? []).map((m) => ({
