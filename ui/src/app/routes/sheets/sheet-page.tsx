@@ -114,9 +114,11 @@ export function Component() {
               Audit trail
             </Button>
             {canStartRevision ? (
+              // Outlined in the app's colour: the light variant read as greyed out, like a
+              // disabled button, beside the plain ones.
               <Button
                 size="sm"
-                variant="light"
+                variant="outline"
                 leftSection={<IconCopyPlus size={16} aria-hidden />}
                 onClick={() => setNewOpen(true)}
               >
