@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { isoDay, isoDayTime } from './dates';
+import { isoDay, isoDayTime, parseIsoDayTime } from './dates';
 
 describe('isoDay', () => {
   it('gives the UTC day of a timestamp as ISO 8601, as the printouts do', () => {
@@ -20,5 +20,26 @@ describe('isoDayTime', () => {
     expect(isoDayTime(local, true)).toBe('2026-03-12 07:05:09');
     expect(isoDayTime(local.toISOString())).toBe('2026-03-12 07:05');
     expect(isoDayTime('not a date')).toBe('');
+  });
+});
+
+describe('parseIsoDayTime', () => {
+  it('reads a moment as isoDayTime writes it, in the reader’s clock', () => {
+    const typed = parseIsoDayTime('2026-12-04 21:59');
+    expect(typed?.getTime()).toBe(new Date(2026, 11, 4, 21, 59).getTime());
+    expect(isoDayTime(typed!)).toBe('2026-12-04 21:59');
+    expect(parseIsoDayTime(' 2026-12-04T21:59 ')?.getTime()).toBe(typed?.getTime());
+  });
+
+  it('refuses a month-first or day-first date and a day or hour that does not exist', () => {
+    for (const text of [
+      '12/04/2026, 09:59 PM',
+      '04.12.2026 21:59',
+      '2026-02-30 10:00',
+      '2026-12-04 25:00',
+      '2026-12-04',
+      '',
+    ])
+      expect(parseIsoDayTime(text)).toBeNull();
   });
 });

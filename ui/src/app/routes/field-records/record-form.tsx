@@ -40,6 +40,7 @@ import {
   storeFormDraft,
 } from '../../../features/field-records/offline/form-draft';
 import { useCurrentUser } from '../../../lib/session';
+import { isoDayTime, parseIsoDayTime } from '../../../lib/dates';
 import { refusedFieldErrors } from '../../../features/field-records/components/refused-fields';
 import { isApiRequestError } from '../../../lib/api-client';
 import {
@@ -53,11 +54,7 @@ import classes from './record-form.module.css';
 
 export const handle: RouteHandle = { title: 'Field record', caution: true };
 
-function localNow(): string {
-  const d = new Date();
-  d.setSeconds(0, 0);
-  return new Date(d.getTime() - d.getTimezoneOffset() * 60000).toISOString().slice(0, 16);
-}
+const localNow = () => isoDayTime(new Date());
 
 function RecordForm({ form }: { form: FieldForm }) {
   const user = useCurrentUser();
@@ -68,7 +65,9 @@ function RecordForm({ form }: { form: FieldForm }) {
   const [kept] = useState(() => loadFormDraft(user.id, form.revisionId));
   const [id, setId] = useState(() => kept?.id ?? crypto.randomUUID());
   const [kind, setKind] = useState<FieldRecordKind>(kept?.kind ?? 'periodic-inspection');
-  const [performedAt, setPerformedAt] = useState(() => kept?.performedAt || localNow());
+  const [performedAt, setPerformedAt] = useState(
+    () => kept?.performedAt.replace('T', ' ') || localNow(),
+  );
   const [drafts, setDrafts] = useState<Record<string, MeasurementDraft>>(kept?.drafts ?? {});
   const [checks, setChecks] = useState<Record<string, CheckDraft>>(kept?.checks ?? {});
   const [findings, setFindings] = useState(kept?.findings ?? '');
@@ -116,11 +115,11 @@ function RecordForm({ form }: { form: FieldForm }) {
     const m = buildMeasurements(measured, drafts);
     const c = buildChecks(form, checks);
     const all = { ...m.errors, ...c.errors };
-    const when = new Date(performedAt);
-    if (Number.isNaN(when.getTime())) all.performedAt = 'Enter the date and time of the work';
+    const when = parseIsoDayTime(performedAt);
+    if (!when) all.performedAt = 'Enter the date and time of the work as YYYY-MM-DD HH:mm';
     const hours = readHours(meterHours);
     if (hours === undefined) all.meterHours = 'Enter the hours as a number, 0 or more';
-    if (Object.keys(all).length > 0 || !form.positionId) return { errors: all };
+    if (!when || Object.keys(all).length > 0 || !form.positionId) return { errors: all };
     const payload: CreateFieldRecordInput = {
       id,
       positionId: form.positionId,
@@ -201,12 +200,17 @@ function RecordForm({ form }: { form: FieldForm }) {
         value={kind}
         onChange={(e) => setKind(e.currentTarget.value as FieldRecordKind)}
       />
+      {/* Typed as ISO, not the browser's date-time box, which writes 12/04/2026, 09:59 PM in
+          one browser and 04.12.2026 in the next, where the app writes every date year first. */}
       <TextInput
-        type="datetime-local"
         label="Done at"
+        description="Date and time by your clock, as YYYY-MM-DD HH:mm"
         value={performedAt}
         error={shown.performedAt}
         onChange={(e) => setPerformedAt(e.currentTarget.value)}
+        classNames={{ input: 'hf-num' }}
+        autoComplete="off"
+        spellCheck={false}
       />
       <NumberField
         id="meter-hours"

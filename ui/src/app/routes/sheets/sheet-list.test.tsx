@@ -77,3 +77,22 @@ describe('sheet list: equipment filter', () => {
     expect(await screen.findByRole('option', { name: tag })).toBeInTheDocument();
   });
 });
+
+describe('sheet list: what each role is offered', () => {
+  it('tells engineers they can start a sheet and lets them pick out their own', async () => {
+    await renderAt('/sheets', makeRegister([]))();
+    expect(screen.getByText(/start a new one/)).toBeInTheDocument();
+    expect(screen.getByText('Owner')).toBeInTheDocument();
+  });
+
+  it('offers fitters and viewers neither: they start no sheets and own none', async () => {
+    for (const user of [testUsers.technician, testUsers.viewer]) {
+      await renderAt('/sheets', makeRegister([]), user)();
+      expect(screen.getByText(/Filter and sort to find one/)).toBeInTheDocument();
+      expect(screen.queryByText(/start a new one/)).toBeNull();
+      expect(screen.queryByText('Owner')).toBeNull();
+      expect(screen.queryByRole('radio', { name: 'Me' })).toBeNull();
+      cleanup();
+    }
+  });
+});

@@ -4,7 +4,6 @@ import {
   Group,
   Pagination,
   Paper,
-  SegmentedControl,
   Select,
   Skeleton,
   Stack,
@@ -24,7 +23,7 @@ import {
 import { Page } from '../../../components/layouts/page';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import type { RouteHandle } from '../../../lib/route-handle';
-import { useCurrentUser } from '../../../lib/session';
+import { hasRole, useCurrentUser } from '../../../lib/session';
 import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
 import { useRegister } from '../../../features/register/api/get-register';
 import { sheetsQueryOptions, useSheets } from '../../../features/sheets/api/get-sheets';
@@ -36,6 +35,7 @@ import { fitWidth } from '../../../lib/fit-width';
 import { positionGroups } from './position-groups';
 import { suggestedSheetType } from '../../../features/sheets/utils/suggested-sheet-type';
 import { useListOutputs } from './use-list-outputs';
+import { OwnerFilter } from './owner-filter';
 
 export const handle: RouteHandle = { title: 'Sheets', wide: true };
 
@@ -116,7 +116,8 @@ export function Component() {
     () => sites.map((s) => ({ value: s.id, label: `${s.code} — ${s.name}` })),
     [sites],
   );
-  const canCreate = user.role === 'engineer' || user.role === 'checker';
+  // Sheets are started and owned by engineers and checkers only (the server's rule).
+  const canCreate = hasRole(user, 'engineer', 'checker');
   const positionsById = useMemo(
     () =>
       new Map(sites.flatMap((s) => s.machines.flatMap((m) => m.positions.map((p) => [p.id, p])))),
@@ -132,7 +133,11 @@ export function Component() {
   return (
     <Page
       title="Sheets"
-      description="Every calculation sheet, by document number. Filter, sort, or start a new one."
+      description={
+        canCreate
+          ? 'Every calculation sheet, by document number. Filter, sort, or start a new one.'
+          : 'Every calculation sheet, by document number. Filter and sort to find one.'
+      }
       actions={
         <Group gap="xs">
           <Button
@@ -221,21 +226,12 @@ export function Component() {
             value={params.sheetType ?? null}
             onChange={(v) => set({ sheetType: v ?? undefined })}
           />
-          <Stack gap={2}>
-            <Text size="sm" fw={500} id="owner-filter">
-              Owner
-            </Text>
-            <SegmentedControl
-              aria-labelledby="owner-filter"
-              size="sm"
-              value={params.ownerId === user.id ? 'me' : 'any'}
-              onChange={(v) => set({ ownerId: v === 'me' ? user.id : undefined })}
-              data={[
-                { value: 'any', label: 'Anyone' },
-                { value: 'me', label: 'Me' },
-              ]}
+          {canCreate ? (
+            <OwnerFilter
+              mine={params.ownerId === user.id}
+              onChange={(mine) => set({ ownerId: mine ? user.id : undefined })}
             />
-          </Stack>
+          ) : null}
         </Group>
       </Paper>
       <Paper p={0}>

@@ -8,7 +8,7 @@ import type { RevisionSummary, SheetDetail, User } from '@holdfast/shared';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import { warmUpSheetType } from '../../../components/calc/utils/sheet-types';
 import type { RouteHandle } from '../../../lib/route-handle';
-import { hasRole, useCurrentUser } from '../../../lib/session';
+import { hasRole, sessionStore, useCurrentUser } from '../../../lib/session';
 import { revisionQueryOptions } from '../../../features/revisions/api/get-revision';
 import { sheetQueryOptions, useSheet } from '../../../features/sheets/api/get-sheet';
 import { NewRevisionDialog } from '../../../features/sheets/components/new-revision-dialog';
@@ -22,8 +22,10 @@ export const handle: RouteHandle = { caution: true, wide: true, compactNav: true
 export function clientLoader(queryClient: QueryClient) {
   return async ({ params }: LoaderFunctionArgs) => {
     const sheet = await queryClient.ensureQueryData(sheetQueryOptions(params.sheetId!));
-    const revisionId = params.revisionId ?? sheet.latest.id;
-    void queryClient.prefetchQuery(revisionQueryOptions(revisionId));
+    const user = sessionStore.getState().user;
+    // Only what this user may read: a viewer's or fitter's request for a draft is refused (403).
+    const revisionId = user ? readableRevisionId(sheet, user, params.revisionId) : undefined;
+    if (revisionId) void queryClient.prefetchQuery(revisionQueryOptions(revisionId));
     warmUpSheetType(sheet.sheetType);
     return null;
   };
@@ -41,6 +43,21 @@ export function visibleRevisions(sheet: SheetDetail, user: User): RevisionSummar
 }
 
 const readsDrafts = (user: User) => hasRole(user, 'engineer', 'checker');
+
+/** The revision the page opens on (the one asked for, else the latest the user may read). */
+function shownRevisionId(sheet: SheetDetail, user: User, requested?: string): string | undefined {
+  return requested ?? (readsDrafts(user) ? sheet.latest.id : sheet.approved?.id);
+}
+
+/** The revision the page shows, when the server lets this user read it; else nothing to fetch. */
+export function readableRevisionId(
+  sheet: SheetDetail,
+  user: User,
+  requested?: string,
+): string | undefined {
+  const id = shownRevisionId(sheet, user, requested);
+  return visibleRevisions(sheet, user).some((r) => r.id === id) ? id : undefined;
+}
 
 export function Component() {
   const { sheetId = '', revisionId } = useParams();
@@ -66,7 +83,7 @@ export function Component() {
 
   const sheet = query.data;
   const revisions = visibleRevisions(sheet, user);
-  const selectedId = revisionId ?? (readsDrafts(user) ? sheet.latest.id : sheet.approved?.id);
+  const selectedId = shownRevisionId(sheet, user, revisionId);
   const selected = revisions.find((r) => r.id === selectedId);
   const index = revisions.findIndex((r) => r.id === selectedId);
   const previous = index > 0 ? revisions[index - 1] : undefined;
@@ -94,7 +111,7 @@ export function Component() {
                 Compare with {previous.label}
               </Button>
             ) : null}
-            {historyInline ? null : (
+            {historyInline || revisions.length === 0 ? null : (
               <Button
                 variant="default"
                 size="sm"
@@ -114,9 +131,11 @@ export function Component() {
               Audit trail
             </Button>
             {canStartRevision ? (
+              // Outlined in the app's colour: the light variant read as greyed out, like a
+              // disabled button, beside the plain ones.
               <Button
                 size="sm"
-                variant="light"
+                variant="outline"
                 leftSection={<IconCopyPlus size={16} aria-hidden />}
                 onClick={() => setNewOpen(true)}
               >
@@ -156,7 +175,7 @@ export function Component() {
                     .
                   </>
                 ) : (
-                  'This sheet has no approved revision yet. Only engineers and checkers see revisions before approval.'
+                  'Drafts are visible to engineers and checkers only; this sheet has no approved revision yet.'
                 )}
               </Text>
             </Paper>

@@ -4,6 +4,7 @@ import {
   Button,
   Center,
   Group,
+  Input,
   Loader,
   Paper,
   Stack,
@@ -21,6 +22,7 @@ import type { RouteHandle } from '../../../lib/route-handle';
 import { useVerification } from '../../../features/verify/api/get-verification';
 import { stateLabel } from '../../../lib/state-label';
 import { isoDay } from '../../../lib/dates';
+import { sentence } from '../../../lib/sentence';
 
 export const handle: RouteHandle = { title: 'Check a printout' };
 
@@ -95,7 +97,7 @@ export function Component() {
   const [error, setError] = useState<string | null>(null);
   const submit = () => {
     const p = verificationCodeSchema.safeParse(text);
-    if (!p.success) return setError(p.error.issues[0]?.message ?? 'not a code');
+    if (!p.success) return setError(sentence(p.error.issues[0]?.message ?? 'not a code'));
     setError(null);
     navigate(`/verify/${p.data}`);
   };
@@ -111,22 +113,27 @@ export function Component() {
             Every page of a Holdfast printout carries a verification code. Enter it to see whether
             that revision is still the approved one in force.
           </Text>
-          <Group align="flex-end" gap="xs" wrap="nowrap">
-            <TextInput
-              label="Verification code"
-              value={text}
-              onChange={(e) => setText(e.currentTarget.value.toUpperCase())}
-              onKeyDown={(e) => e.key === 'Enter' && submit()}
-              error={error}
-              ff="monospace"
-              style={{ flex: 1 }}
-              maxLength={12}
-            />
-            <Button onClick={submit}>Check</Button>
-          </Group>
+          {/* The label sits above the row, so the button lines up with the box, not with the
+              box and its error line together. */}
+          <Stack gap={4}>
+            <Input.Label htmlFor="verification-code">Verification code</Input.Label>
+            <Group align="flex-start" gap="xs" wrap="nowrap">
+              <TextInput
+                id="verification-code"
+                value={text}
+                onChange={(e) => setText(e.currentTarget.value.toUpperCase())}
+                onKeyDown={(e) => e.key === 'Enter' && submit()}
+                error={error}
+                classNames={{ input: 'hf-num' }}
+                style={{ flex: 1 }}
+                maxLength={12}
+              />
+              <Button onClick={submit}>Check</Button>
+            </Group>
+          </Stack>
           {raw && parsed.success ? <Result code={parsed.data} /> : null}
           {raw && !parsed.success ? (
-            <Alert color="fail">{parsed.error.issues[0]?.message}</Alert>
+            <Alert color="fail">{sentence(parsed.error.issues[0]?.message ?? 'not a code')}</Alert>
           ) : null}
           <SafetyCaution />
         </Stack>

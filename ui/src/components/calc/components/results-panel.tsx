@@ -1,22 +1,10 @@
-import { memo, useMemo, useState, type ReactNode } from 'react';
-import {
-  Alert,
-  Badge,
-  Box,
-  Group,
-  List,
-  Paper,
-  Skeleton,
-  Spoiler,
-  Stack,
-  Text,
-  Title,
-} from '@mantine/core';
+import { memo, useMemo, type ReactNode } from 'react';
+import { Alert, Badge, Box, Group, Paper, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { IconAlertTriangle, IconBolt } from '@tabler/icons-react';
 import type { CheckDriver, CriteriaSet, SectionDefinition, SheetEvaluation } from '@holdfast/calc';
 import { CheckDriversButton } from './check-drivers-button';
 import { CriteriaUsed } from './criteria-used';
-import { notesFirst } from '../utils/notes-order';
+import { CalculationNotes } from './calculation-notes';
 import { EvaluationShown, ResultsTabs } from './results-tabs';
 import { Verdict } from './verdict';
 import type { UnitSystem } from '../utils/units';
@@ -201,47 +189,3 @@ const FailingRow = memo(function FailingRow(props: {
     </Group>
   );
 });
-
-/** The core's notes on the inputs; a new evaluation with the same notes does not render them again. */
-const CalculationNotes = memo(
-  function CalculationNotes({ warnings }: { warnings: readonly string[] }) {
-    const [open, setOpen] = useState(false);
-    const ordered = useMemo(() => notesFirst(warnings), [warnings]);
-    if (warnings.length === 0) return null;
-    return (
-      <Alert
-        color="amber"
-        variant="outline"
-        mb="sm"
-        p="xs"
-        title={`Notes from the calculation (${warnings.length})`}
-      >
-        <Spoiler
-          maxHeight={44}
-          showLabel="Show all"
-          hideLabel="Show less"
-          fz="sm"
-          expanded={open}
-          onExpandedChange={setOpen}
-        >
-          {/* Collapsed, the last visible line fades out instead of ending cut through. */}
-          <List
-            size="xs"
-            spacing={2}
-            style={
-              open
-                ? undefined
-                : { maskImage: 'linear-gradient(to bottom, #000 22px, transparent 44px)' }
-            }
-          >
-            {ordered.map((w) => (
-              <List.Item key={w}>{w}</List.Item>
-            ))}
-          </List>
-        </Spoiler>
-      </Alert>
-    );
-  },
-  (a, b) =>
-    a.warnings.length === b.warnings.length && a.warnings.every((w, k) => w === b.warnings[k]),
-);

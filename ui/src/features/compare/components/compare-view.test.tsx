@@ -55,3 +55,57 @@ describe('comparing two revisions', () => {
     expect(stops).not.toHaveTextContent('1/h');
   });
 });
+
+describe('comparing results and checks', () => {
+  const state = (pass: boolean, utilisation: number) => ({ pass, utilisation });
+  const moved = {
+    ...data,
+    inputs: [],
+    results: [
+      {
+        key: 'brakingForce',
+        label: 'Braking force',
+        unit: 'N',
+        dimension: 'force',
+        from: 1007.4,
+        to: 1107.9,
+        delta: 100.5,
+        deltaPct: 9.98,
+      },
+      {
+        key: 'pressure',
+        label: 'Lining pressure',
+        unit: 'Pa',
+        dimension: 'pressure',
+        from: 84240,
+        to: 92660,
+        delta: 8420,
+        deltaPct: 9.99,
+      },
+    ],
+    checks: [
+      { id: 'added', label: 'Added check', from: null, to: state(true, 0.5) },
+      { id: 'dropped', label: 'Dropped check', from: state(true, 0.5), to: null },
+      { id: 'flipped', label: 'Flipped check', from: state(true, 0.9), to: state(false, 1.1) },
+      { id: 'same', label: 'Same check', from: state(true, 0.5), to: state(true, 0.6) },
+    ],
+  } as unknown as Compare;
+
+  it('gives results to the printed precision, as the Results view does', () => {
+    renderWithProviders(<CompareView data={moved} />, { user: testUsers.engineer });
+    const table = screen.getByRole('table', { name: 'Results moved' });
+    expect(within(table).getByText('1010 N')).toBeInTheDocument();
+    expect(within(table).getByText('0.0842 MPa')).toBeInTheDocument();
+    expect(within(table).queryByText('1007 N')).toBeNull();
+  });
+
+  it('marks a check that is new as new, not as a changed verdict', () => {
+    renderWithProviders(<CompareView data={moved} />, { user: testUsers.engineer });
+    const row = (label: string) => screen.getByText(label).closest('tr')!;
+    expect(row('Added check')).toHaveTextContent('· new');
+    expect(row('Added check')).not.toHaveTextContent('verdict changed');
+    expect(row('Dropped check')).toHaveTextContent('· no longer checked');
+    expect(row('Flipped check')).toHaveTextContent('· verdict changed');
+    expect(row('Same check')).not.toHaveTextContent('·');
+  });
+});

@@ -3,12 +3,28 @@ import { IconArrowRight } from '@tabler/icons-react';
 import type { Compare } from '@holdfast/shared';
 import { formatNumber, type FieldDefinition } from '@holdfast/calc';
 import { useCurrentUser } from '../../../lib/session';
-import { formatChange, formatSI } from '../../../components/calc/utils/format-si';
+import { asDimension, formatChange, formatSI } from '../../../components/calc/utils/format-si';
 import type { UnitSystem } from '../../../components/calc/utils/units';
 import { showStoredValue as show } from '../../../components/calc/utils/stored-value';
-import { isQuantity, unitLabel } from '../../../components/calc/utils/units';
+import { isQuantity, presentPrinted, unitLabel } from '../../../components/calc/utils/units';
 
 type MovedResult = Compare['results'][number];
+type ComparedCheck = Compare['checks'][number];
+
+/** A result as the Results view and the printed sheet give it (1010 N, not 1007 N). */
+function resultText(valueSI: number, r: MovedResult, system: UnitSystem): string {
+  const d = asDimension(r.dimension);
+  return d
+    ? presentPrinted(valueSI, d, system).text
+    : formatSI(valueSI, r.dimension, system, r.unit);
+}
+
+/** What happened to a check between the two revisions, if anything worth marking. */
+function checkChange(c: ComparedCheck): string | null {
+  if (!c.from && c.to) return 'new';
+  if (c.from && !c.to) return 'no longer checked';
+  return c.from && c.to && c.from.pass !== c.to.pass ? 'verdict changed' : null;
+}
 
 /**
  * The change in the result's own unit, and in percent where a percent means something (not for
@@ -119,15 +135,15 @@ export function CompareView({
           </Table.Thead>
           <Table.Tbody>
             {data.checks.map((c) => {
-              const flipped = c.from?.pass !== c.to?.pass;
+              const change = checkChange(c);
               return (
-                <Table.Tr key={c.id} bg={flipped ? 'amber.0' : undefined}>
+                <Table.Tr key={c.id} bg={change ? 'amber.0' : undefined} data-check-change={change}>
                   <Table.Td>
                     {c.label}
-                    {flipped ? (
+                    {change ? (
                       <Text span size="xs" fw={600} c="amber.9">
                         {' '}
-                        · verdict changed
+                        · {change}
                       </Text>
                     ) : null}
                   </Table.Td>
@@ -180,10 +196,10 @@ export function CompareView({
                 <Table.Tr key={r.key}>
                   <Table.Td>{r.label}</Table.Td>
                   <Table.Td ff="monospace" ta="right" style={{ whiteSpace: 'nowrap' }}>
-                    {r.from === null ? '—' : formatSI(r.from, r.dimension, system, r.unit)}
+                    {r.from === null ? '—' : resultText(r.from, r, system)}
                   </Table.Td>
                   <Table.Td ff="monospace" ta="right" style={{ whiteSpace: 'nowrap' }} fw={600}>
-                    {r.to === null ? '—' : formatSI(r.to, r.dimension, system, r.unit)}
+                    {r.to === null ? '—' : resultText(r.to, r, system)}
                   </Table.Td>
                   <Table.Td
                     ff="monospace"

@@ -2,12 +2,8 @@ import { Paper, Text, Title } from '@mantine/core';
 import { LineChart } from '@mantine/charts';
 import { formatNumber, wearLineAt, type WearSeries } from '@holdfast/calc';
 import { isoDay } from '../../../lib/dates';
-import { dateOf, mmPerMonth } from './wear-series';
+import { chartDay as day, chartDayText as dateText, dateOf, mmPerMonth } from './wear-series';
 
-const DAY_S = 86400;
-/** Whole days since 1970 of a series time in seconds: the chart's x axis. */
-const day = (s: number) => Math.round(s / DAY_S);
-const dateText = (dayNumber: number) => isoDay(dateOf(dayNumber * DAY_S));
 /**
  * The wear rate to two significant figures and its standard error to one: readings are taken to
  * 0.1-0.5 mm, so further digits of either say nothing.

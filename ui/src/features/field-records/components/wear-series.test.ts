@@ -1,6 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import type { FieldForm } from '@holdfast/shared';
-import { hasStrokeSeries, LINING_KEYS, liningChartTitle } from './wear-series';
+import { isoDay } from '../../../lib/dates';
+import {
+  chartDay,
+  chartDayText,
+  hasStrokeSeries,
+  LINING_KEYS,
+  liningChartTitle,
+} from './wear-series';
 
 // As the field-form API labels them per rotor (server/src/calc/field-targets.ts).
 const drum: FieldForm['checks'] = [
@@ -48,5 +55,15 @@ describe('hasStrokeSeries', () => {
     expect(hasStrokeSeries(caliper, [reading('airGap')])).toBe(false);
     expect(hasStrokeSeries(undefined, [])).toBe(false);
     expect(hasStrokeSeries(caliper, [reading('reserveStroke')])).toBe(true);
+  });
+});
+
+describe('chart days', () => {
+  it('put a reading on the day the timeline gives it, however late in the day it was taken', () => {
+    for (const at of ['2026-10-10T00:00:00Z', '2026-10-10T13:00:00Z', '2026-10-10T21:59:00Z']) {
+      const seconds = Date.parse(at) / 1000;
+      expect(chartDayText(chartDay(seconds))).toBe(isoDay(at));
+      expect(chartDayText(chartDay(seconds))).toBe('2026-10-10');
+    }
   });
 });

@@ -1,4 +1,5 @@
 import type { FieldCheckKey } from '@holdfast/shared';
+import { isoDay } from '../../../lib/dates';
 
 /** The measurement the reserve-stroke trend is fitted to (the field card's key). */
 export const RESERVE_KEY = 'reserveStroke';
@@ -13,6 +14,14 @@ export const LINING_KEYS = [
 const DAY_S = 86400;
 /** A time of a wear series or its fit (seconds since 1970) as a date. */
 export const dateOf = (s: number) => new Date(s * 1000);
+/**
+ * The chart's x value of a series time: whole UTC days since 1970, the day `isoDay` names, so a
+ * reading sits on the day the timeline and "Last inspected" give it (rounding put an afternoon
+ * reading on the next day).
+ */
+export const chartDay = (s: number) => Math.floor(s / DAY_S);
+/** The date an x value of the chart stands for, as `isoDay` writes it. */
+export const chartDayText = (dayNumber: number) => isoDay(dateOf(dayNumber * DAY_S));
 /** Wear rate in mm per 30 days, the unit the chart and text state it in. */
 export const mmPerMonth = (rate: number) => rate * 1000 * 30 * DAY_S;
 

@@ -9,10 +9,16 @@ import {
   type SheetTypeId,
 } from '@holdfast/shared';
 import { errorMessage, isApiRequestError } from '../../../lib/api-client';
+import { sentence } from '../../../lib/sentence';
 import { sheetTypeTitle } from '../../../components/calc/utils/sheet-types';
 import { OpenSheetWarning } from '../../register/components/open-sheet-warning';
 import { useCreateSheet } from '../api/create-sheet';
 import { SheetStartPicker, type StartKind } from './sheet-start-picker';
+
+/** An empty title is a missing one: say so, rather than ask for 3 characters of nothing. */
+function titleMessage(title: string, message: string): string {
+  return title.trim() === '' ? 'Required: enter a title' : sentence(message);
+}
 
 export interface PositionGroup {
   group: string;
@@ -66,7 +72,7 @@ export function CreateSheetDialog({
 
   const submit = () => {
     if (startKind === 'copy' && !copyFrom) {
-      setErrors({ 'start.revisionId': 'choose the approved sheet to copy' });
+      setErrors({ 'start.revisionId': 'Choose the approved sheet to copy' });
       return;
     }
     const parsed = createSheetSchema.safeParse({
@@ -78,7 +84,12 @@ export function CreateSheetDialog({
     if (!parsed.success) {
       const map: Record<string, string> = {};
       for (const issue of toFieldIssues(parsed.error))
-        map[issue.path] ??= issue.path === 'positionId' ? 'choose a brake position' : issue.message;
+        map[issue.path] ??=
+          issue.path === 'positionId'
+            ? 'Choose a brake position'
+            : issue.path === 'title'
+              ? titleMessage(title, issue.message)
+              : sentence(issue.message);
       setErrors(map);
       return;
     }

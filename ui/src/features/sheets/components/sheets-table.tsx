@@ -43,7 +43,9 @@ function SortHeader({
 export function SheetsTable({ items, sort, order, onSort, selected, onToggle }: SheetsTableProps) {
   const head = { sort, order, onSort };
   return (
-    <Table.ScrollContainer minWidth={860}>
+    // Below 860 px the table scrolls inside its card; the scrollbar stays in sight (Mantine's
+    // default shows it only on hover), so the columns past the edge are seen to be there.
+    <Table.ScrollContainer minWidth={860} scrollAreaProps={{ type: 'auto' }}>
       <Table highlightOnHover verticalSpacing="xs" fz="sm" aria-label="Calculation sheets">
         <Table.Thead>
           <Table.Tr>
@@ -85,7 +87,8 @@ export function SheetsTable({ items, sort, order, onSort, selected, onToggle }: 
                 </Anchor>
               </Table.Td>
               <Table.Td>{s.title}</Table.Td>
-              <Table.Td>
+              {/* Codes such as LC-1 are read whole: never broken at their hyphen. */}
+              <Table.Td style={{ whiteSpace: 'nowrap' }}>
                 <Text size="sm">{s.position.tag}</Text>
                 <Text size="xs" c="dimmed">
                   {s.site.code} · {s.machine.tag}
@@ -100,7 +103,7 @@ export function SheetsTable({ items, sort, order, onSort, selected, onToggle }: 
                   <StateBadge state={s.latest.state} size="xs" />
                 </Group>
               </Table.Td>
-              <Table.Td>
+              <Table.Td style={{ whiteSpace: 'nowrap' }}>
                 {s.approved ? (
                   `Rev. ${s.approved.label}`
                 ) : (
