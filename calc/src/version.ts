@@ -65,6 +65,7 @@
  * range ("… from 771 to 1600 N") without saying the torque limits hold there (a torque check on
  * the worn drum can fail in its first row; the band sentence says where every check passes); the
  * set length of the main spring is L_set, as Shigley's L_s is the solid length beside it; and the
- * end-type steps name no table in their labels (the reference gives Shigley's Table 10-1).
+ * end-type steps name no table in their labels (the reference gives Shigley's Table 10-1); the
+ * lining data's source names the handbook's edition (Tribology Handbook, 2nd ed.).
  */
 export const CORE_VERSION = '1.5.0';

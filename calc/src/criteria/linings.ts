@@ -20,7 +20,7 @@ export interface LiningMaterial {
   source: string;
 }
 
-const SOURCE = 'published: Tribology Handbook (Neale, ed.), B8, Table 8.10';
+const SOURCE = 'published: Tribology Handbook (Neale, ed.), 2nd ed., B8, Table 8.10';
 const C = (t: number) => t + 273.15;
 const kPa = 1e3;
 const MPa = 1e6;

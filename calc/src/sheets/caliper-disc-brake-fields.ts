@@ -205,7 +205,7 @@ export const CALIPER_FIELDS = withBounds(
       'Pad material (limits)',
       'resin-bonded-pad',
       LININGS.map((l) => ({ value: l.id, label: l.label })),
-      "Limits from the Tribology Handbook (Neale, ed.), B8, Table 8.10; the pad maker's data governs.",
+      "Limits from the Tribology Handbook (Neale, ed.), 2nd ed., B8, Table 8.10; the pad maker's data governs.",
     ),
     qty(L, 'padArea', 'Friction area of one pad', 'A_pad', 'area', 200, 'cm^2', 'in^2', {
       min: 0,

@@ -126,7 +126,7 @@ export const LINING_FIELDS = [
     'Lining material (limits)',
     'non-asbestos-rigid',
     LININGS.map((l) => ({ value: l.id, label: l.label })),
-    "Pressure and temperature limits from the Tribology Handbook (Neale, ed.), B8, Table 8.10; the lining maker's data governs.",
+    "Pressure and temperature limits from the Tribology Handbook (Neale, ed.), 2nd ed., B8, Table 8.10; the lining maker's data governs.",
   ),
   num(L, 'muNominal', 'Friction coefficient, nominal', 'μ_nom', 0.38, {
     min: 0,
