@@ -66,6 +66,7 @@
  * the worn drum can fail in its first row; the band sentence says where every check passes); the
  * set length of the main spring is L_set, as Shigley's L_s is the solid length beside it; and the
  * end-type steps name no table in their labels (the reference gives Shigley's Table 10-1); the
- * lining data's source names the handbook's edition (Tribology Handbook, 2nd ed.).
+ * lining data's source names the handbook's edition (Tribology Handbook, 2nd ed.); the temperature
+ * chart draws the mean steady temperature its hour of duty tends to (the check's own value).
  */
 export const CORE_VERSION = '1.5.0';

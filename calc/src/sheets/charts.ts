@@ -136,7 +136,8 @@ export function frictionBandChart(
 
 /**
  * Temperature of the heat mass (drum, or a caliper's disc) over one hour of duty (stops evenly
- * spaced, exponential cooling between), against the friction material's limits.
+ * spaced, exponential cooling between), against the friction material's limits and the mean
+ * steady temperature it tends to.
  */
 export function temperatureChart(
   ambient: number,
@@ -165,6 +166,13 @@ export function temperatureChart(
       },
     ],
     referenceLines: [
+      // Where the hour's curve is heading (mean of the saw-tooth after many hours): the chart ends
+      // below it, and the steady-temperature check reads this value, not the curve's end.
+      {
+        label: 'Mean steady temperature (long run)',
+        axis: 'y',
+        value: ambient + rise * stopsPerSecond * tau,
+      },
       { label: `${friction} max operating temperature`, axis: 'y', value: maxOperating },
       { label: `${friction} max temperature`, axis: 'y', value: maxTemperature },
     ],

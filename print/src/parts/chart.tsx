@@ -181,7 +181,8 @@ export function Chart(props: {
                 y={M.top + 7 + 8 * xOrder.indexOf(r.label)}
                 textAnchor={sx(r.v) > M.left + pw * 0.7 ? 'end' : 'start'}
               >
-                {r.label}
+                {/* An arrow to its own line: a long label reaches across a nearer line. */}
+                {sx(r.v) > M.left + pw * 0.7 ? `${r.label} →` : `← ${r.label}`}
               </Text>
             </G>
           ),
