@@ -144,6 +144,17 @@ describe.each(TYPES)('%s, real evaluation', (sheetTypeId) => {
     if (sheetTypeId === 'hoist-shoe-brake') expect(flat).toContain('220.8 to 221.7 mm (± 0.5 mm)');
   });
 
+  it('marks an input the sheet holds but does not use (the clearance with no lift stop)', () => {
+    const flat = pdf.text.replace(/\s+/g, ' ');
+    if (sheetTypeId === 'hoist-shoe-brake' || sheetTypeId === 'travel-shoe-brake') {
+      // The cell wraps: its second line comes after the row's other cells in the text.
+      expect(flat).toContain('Shoe clearance when released (per shoe) — not used');
+      expect(flat).toContain('(Thruster has a lift stop: No)');
+    }
+    // An input the sheet uses is never marked.
+    expect(flat).not.toMatch(/Rated load[^—]*— not used/);
+  });
+
   it("speaks of the brake's own parts on the card: pads and a disc, or lining and a drum", () => {
     const text = card.text.replace(/\s+/g, ' ');
     if (sheetTypeId === 'caliper-disc-brake') {

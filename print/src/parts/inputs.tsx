@@ -1,6 +1,21 @@
 import { headingBlock, tableBlocks, type BlockContext } from '../blocks.js';
 import type { FlowBlock } from '../flow.js';
-import type { PrintableSheet } from '../printable-sheet.js';
+import type { PrintableInput, PrintableSheet } from '../printable-sheet.js';
+
+/**
+ * Words for an input the sheet holds but does not use: one that belongs to a flag left off (the
+ * clearance with no lift stop, where it follows from the stroke; a stack the sheet leaves out).
+ * A checker reading 0.8 mm among the inputs must not think the sheet worked with it.
+ */
+function unusedWords(i: PrintableInput, sheet: PrintableSheet): string | null {
+  const flagKey = i.field.requiredIf;
+  if (!flagKey) return null;
+  const flag = sheet.inputs.find((x) => x.field.key === flagKey);
+  if (!flag || flag.value !== false) return null;
+  // The flag's words without their explanation: 'Thruster has a lift stop: No'.
+  const flagWords = flag.field.label.replace(/\s*\(.*\)\s*$/, '');
+  return `not used (${flagWords}: No)`;
+}
 
 /** Inputs grouped by section, as typed and in the sheet's unit system. */
 export function inputsBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlock[] {
@@ -34,7 +49,7 @@ export function inputsBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBloc
           },
         ],
         rows: g.items.map((i) => [
-          i.field.label,
+          unusedWords(i, sheet) ? `${i.field.label} — ${unusedWords(i, sheet)}` : i.field.label,
           i.field.symbol,
           i.entered,
           // Only quantities change with the unit system; the rest would just repeat.
