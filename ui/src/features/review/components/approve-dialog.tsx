@@ -21,7 +21,7 @@ function requiredBecause(openComments: number, failing: number): string | null {
   const comments = `${count(openComments, 'One comment is', 'comments are')} still open`;
   const checks = count(failing, 'one check fails', 'checks fail');
   if (openComments > 0 && failing > 0)
-    return `${comments} and ${checks}: say here why you approve.`;
+    return `${comments} and ${checks}: resolve the ${openComments === 1 ? 'comment' : 'comments'} first, or say here why you approve.`;
   if (openComments > 0)
     return `${comments}: resolve ${openComments === 1 ? 'it' : 'them'} first, or say here why you approve.`;
   if (failing > 0)
