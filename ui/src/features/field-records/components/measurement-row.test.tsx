@@ -108,4 +108,9 @@ describe('a measured value on the record form', () => {
     row(4);
     expect(screen.getByText(/^Below the/)).toHaveTextContent('Below the 5.0 mm minimum: re-adjust');
   });
+
+  it('says what is wrong with a reading as it is typed, before any save', () => {
+    renderRow(spring, { value: -1.2, unit: 'mm' });
+    expect(screen.getByText('A reading cannot be negative')).toBeInTheDocument();
+  });
 });

@@ -110,6 +110,11 @@ export function MeasurementRow({
   const unit = defaultUnit(dim, 'SI');
   const left = verdictFor(target, readSI(draft.asLeft, target.dimension));
   const key = target.settingKey;
+  // What is wrong with a value shows as it is typed, as in the sheet editor; the save adds none.
+  const live = (v: InputValue | undefined) => {
+    const read = readSI(v, target.dimension);
+    return read.kind === 'invalid' ? read.message : undefined;
+  };
   return (
     <Paper withBorder p="sm" radius="md" data-setting={key}>
       <Stack gap="xs">
@@ -131,7 +136,7 @@ export function MeasurementRow({
               dimension={dim}
               value={draft.asFound}
               fallbackUnit={unit}
-              error={errors[`${key}.asFound`]}
+              error={errors[`${key}.asFound`] ?? live(draft.asFound)}
               onChange={(v) => onChange({ ...draft, asFound: v })}
             />
             <Group>
@@ -146,7 +151,7 @@ export function MeasurementRow({
             dimension={dim}
             value={draft.asLeft}
             fallbackUnit={unit}
-            error={errors[`${key}.asLeft`]}
+            error={errors[`${key}.asLeft`] ?? live(draft.asLeft)}
             onChange={(v) => onChange({ ...draft, asLeft: v })}
           />
           <Group>
