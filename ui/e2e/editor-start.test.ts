@@ -69,6 +69,13 @@ describe.skipIf(skipReason !== null)('starting a sheet honestly', () => {
     await refusal.getByRole('button', { name: 'Back to the inputs' }).click();
 
     await page.getByRole('button', { name: /^I have checked all/ }).click();
+    // It asks first: each value compared with this brake's data.
+    const ask = page.getByRole('dialog', { name: /^Confirm \d+ values$/ });
+    await expect(ask.getByRole('button', { name: /^Confirm all/ }).isDisabled()).resolves.toBe(
+      true,
+    );
+    await ask.getByRole('checkbox', { name: /compared all \d+ with this brake/ }).check();
+    await ask.getByRole('button', { name: /^Confirm all/ }).click();
     await expect.poll(() => marked.count()).toBe(0);
     await page.locator('[data-save-status="saved"]').waitFor({ timeout: 15000 });
     await page.getByRole('button', { name: 'Send for check' }).click();

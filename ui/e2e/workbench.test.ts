@@ -33,7 +33,12 @@ async function sendForCheck(page: Page) {
   // so the count below is not taken before the page has loaded.
   await page.getByRole('button', { name: 'Send for check' }).waitFor();
   const confirmAll = page.getByRole('button', { name: /^I have checked all/ });
-  if (await confirmAll.count()) await confirmAll.click();
+  if (await confirmAll.count()) {
+    await confirmAll.click();
+    const ask = page.getByRole('dialog', { name: /^Confirm \d+ values?$/ });
+    await ask.getByRole('checkbox', { name: /compared all \d+ with this brake/ }).check();
+    await ask.getByRole('button', { name: /^Confirm all/ }).click();
+  }
   await waitSaved(page);
   await page.getByRole('button', { name: 'Send for check' }).click();
   const dialog = page.getByRole('dialog', { name: 'Send for check' });
