@@ -41,6 +41,26 @@ describe('checkFigures', () => {
     ).toBe('1.619');
   });
 
+  it('in SI, gives value and limit in the unit the derivation gives the larger of them', () => {
+    // A caliper's torques print as kN·m in its steps: the summary says the same.
+    expect(checkFigures({ value: 13860, limit: 9971, dimension: 'torque' }, 'SI')).toEqual({
+      value: '13.86 kN·m',
+      limit: '9.971 kN·m',
+    });
+    // A 4 m allowed stop prints in m, and the stop against it too.
+    expect(checkFigures({ value: 0.8162, limit: 4, dimension: 'length' }, 'SI')).toEqual({
+      value: '0.8162 m',
+      limit: '4.000 m',
+    });
+    expect(checkFigures({ value: 0.2344, limit: 0.25, dimension: 'length' }, 'SI').value).toBe(
+      '234.4 mm',
+    );
+    // A speed keeps its display unit (rpm), where the steps work in rad/s.
+    expect(
+      checkFigures({ value: 129.25, limit: 230.38, dimension: 'angularSpeed' }, 'SI').value,
+    ).toBe('1234 rpm');
+  });
+
   it('prints a value that is not finite as a dash', () => {
     expect(checkFigures({ value: Number.NaN, limit: 1, dimension: 'force' }, 'SI').value).toBe('—');
   });

@@ -1,9 +1,23 @@
 import type { Dimension } from '../core/types.js';
 import { toDisplay, type UnitSystem } from './display.js';
+import { formatInUnit, pickPrintUnit, printUnitsOf } from './format.js';
 import { formatWithPrecision } from './precision.js';
 
 /** Significant figures a check's value and limit get when they would otherwise print alike. */
 const FINE = { digits: 6 };
+
+/**
+ * Dimensions whose derivation units are a ladder of one unit (N, kN; N·m, kN·m; mm, m; W, kW;
+ * J, kJ, MJ): in SI a check prints its value and limit in the unit the derivation gives the larger
+ * of them, so the summary and the steps agree ("13.86 kN·m", not "13860 N·m" on page 1 and
+ * "13.86 kN·m" in the derivation). Speeds in rpm and the rest keep their display unit.
+ */
+const LADDERED: ReadonlySet<Dimension> = new Set(['force', 'torque', 'length', 'power', 'energy']);
+
+function derivationUnit(c: { value: number; limit: number; dimension: Dimension }) {
+  const larger = Math.max(0, ...[c.value, c.limit].filter(Number.isFinite).map(Math.abs));
+  return pickPrintUnit(printUnitsOf(c.dimension), larger);
+}
 
 /** A deviation printed as a share: 0.739 %, 5 % (three figures, no trailing zeros). */
 const SHARE = { digits: 3, trim: true };
@@ -28,9 +42,11 @@ export function checkFigures(
   system: UnitSystem,
 ): { value: string; limit: string } {
   const share = isDeviation(c);
+  const unit = system === 'SI' && LADDERED.has(c.dimension) ? derivationUnit(c) : undefined;
   const show = (x: number, fine: boolean) => {
     if (!Number.isFinite(x)) return '—';
     if (share) return `${formatWithPrecision(x * 100, 1, '%', fine ? FINE : SHARE)} %`;
+    if (unit) return formatInUnit(x, unit, fine ? FINE.digits : undefined);
     return toDisplay(x, c.dimension, system, undefined, fine ? FINE : undefined).text;
   };
   const value = show(c.value, false);
