@@ -1,6 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { renderFieldCardPdf, renderSheetPdf } from './render.js';
-import { isMinorCheck } from './parts/summary.js';
+import { isMinorCheck, sourceMark } from './parts/summary.js';
+import { collectReferences } from './parts/references.js';
 import { criteriaFor, realPrintable } from './testing/real-sheet.js';
 import { ensurePoppler, inspectPdf, type PdfFacts } from './testing/poppler.js';
 import {
@@ -142,6 +143,21 @@ describe.each(TYPES)('%s, real evaluation', (sheetTypeId) => {
     expect(ranges).toBeGreaterThan(0);
     // Demo hoist: 221.25 mm ± 0.5 mm, so not "221.0 to 222.0" around the printed 221.5 mm.
     if (sheetTypeId === 'hoist-shoe-brake') expect(flat).toContain('220.8 to 221.7 mm (± 0.5 mm)');
+  });
+
+  it("gives each summary check its source's number under References", () => {
+    const refs = collectReferences(sheet);
+    const flat = pdf.text.replace(/\s+/g, ' ');
+    const shown = sheet.evaluation!.checks.filter((c) => !isMinorCheck(c));
+    expect(shown.length).toBeGreaterThan(0);
+    for (const c of shown) {
+      const n = refs.indexOf(c.source.trim()) + 1;
+      expect(n, c.id).toBeGreaterThan(0);
+      expect(flat).toContain(`[${n}] ${refs[n - 1]}`);
+    }
+    // Each row's label ends with that number.
+    for (const c of shown)
+      expect(sourceMark(c, sheet)).toBe(` [${refs.indexOf(c.source.trim()) + 1}]`);
   });
 
   it('marks an input the sheet holds but does not use (the clearance with no lift stop)', () => {

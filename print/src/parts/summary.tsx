@@ -5,6 +5,7 @@ import type { FlowBlock } from '../flow.js';
 import { pct } from '../format.js';
 import type { PrintableSheet } from '../printable-sheet.js';
 import { colours } from '../theme.js';
+import { collectReferences } from './references.js';
 import { Verdict, type Column } from './table.js';
 
 /** Value and limit as printed (calc's checkFigures, the same the screen shows). */
@@ -30,10 +31,19 @@ export function isMinorCheck(c: CheckResult): boolean {
   return c.pass && c.limit !== 0 && c.utilisation <= MINOR_UTILISATION;
 }
 
+/**
+ * A check's source as its number in the references, e.g. ' [55]': a checker reads on page 1 what
+ * each verdict rests on (a standard, a handbook table, common practice, the maker's data).
+ */
+export function sourceMark(c: CheckResult, sheet: PrintableSheet): string {
+  const n = collectReferences(sheet).indexOf(c.source.trim());
+  return n < 0 ? '' : ` [${n + 1}]`;
+}
+
 function checkRow(c: CheckResult, sheet: PrintableSheet, verdictHeight: number) {
   const [value] = valueAndLimit(c, sheet);
   return [
-    c.label,
+    c.label + sourceMark(c, sheet),
     value,
     limitText(c, sheet),
     pct(c.utilisation),
@@ -72,7 +82,7 @@ const SUMMARY_COLUMNS: Column[] = [
 
 /** Utilisation is explained once, under the heading, in the words the table uses. */
 const UTILISATION_NOTE =
-  'Utilisation is value ÷ limit for an upper limit and limit ÷ value for a lower one; for a temperature it is the rise above ambient ÷ the allowed rise. Above 100 % fails.';
+  'Utilisation is value ÷ limit for an upper limit and limit ÷ value for a lower one; for a temperature it is the rise above ambient ÷ the allowed rise. Above 100 % fails. [n] after a check is its source under References.';
 
 /** Results against the acceptance criteria: one row per check with a worded verdict. */
 export function summaryBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlock[] {
