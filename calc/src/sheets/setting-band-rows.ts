@@ -26,7 +26,8 @@ const LINEAR_TOLERANCE = 1e-9;
  * the table's band, and the band put in where the table's equal steps miss it (fewer than two of
  * its rows pass every check): the band's low end and high end (as the band sentence prints them,
  * rounded inward) and the set value, each as a row of its own marked for what it is, so a fitter
- * never reads a table of settings that all fail beside a set value that passes. The rows are read
+ * never reads a table of settings that all fail beside a set value that passes. Where the rows
+ * show the band, the set value alone is put in, so the card always has the row it is set to. The rows are read
  * off the table's straight lines (every column of a setting table is linear in the setting: torque
  * and length in spring force). Nothing is added where a column is not linear, where a check
  * already fails at the set value, or where a point lies outside the table.
@@ -45,14 +46,18 @@ export function settingTableRows(
   const key = table.columns[0]?.key;
   const failsAtSet = ev.checks.some((c) => !c.pass);
   if (!band || failsAtSet || rows.length < 2 || key === undefined) return rows;
-  if (rows.filter((r) => r.failing?.length === 0).length >= MIN_PASSING_ROWS) return rows;
   const line = straightLines(table, key);
   if (!line) return rows;
-  const points: { x: number; mark: BandMark }[] = [
-    { x: bandEndValue(band.low, 'low', system), mark: 'low end' },
-    { x: band.set, mark: 'as set' },
-    { x: bandEndValue(band.high, 'high', system), mark: 'high end' },
-  ];
+  // With the band shown by the table's own rows, the set value alone is put in (a fitter looks
+  // for the row of the setting on the card); else the band's ends too.
+  const shown = rows.filter((r) => r.failing?.length === 0).length >= MIN_PASSING_ROWS;
+  const points: { x: number; mark: BandMark }[] = shown
+    ? [{ x: band.set, mark: 'as set' }]
+    : [
+        { x: bandEndValue(band.low, 'low', system), mark: 'low end' },
+        { x: band.set, mark: 'as set' },
+        { x: bandEndValue(band.high, 'high', system), mark: 'high end' },
+      ];
   for (const { x, mark } of points) {
     if ((mark === 'low end' && x > band.set) || (mark === 'high end' && x < band.set)) continue;
     if (!(x >= line.x0 * (1 - LINEAR_TOLERANCE) && x <= line.x1 * (1 + LINEAR_TOLERANCE))) continue;
