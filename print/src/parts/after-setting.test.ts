@@ -14,6 +14,10 @@ describe('the checks after setting, as the card prints them', () => {
     );
     // The demo lining's limit and the steady bulk temperature the sheet works out.
     expect(text).toMatch(/above the lining's limit of 225 °C \(the sheet expects about \d+ °C/);
+    // The demo's 3 mm minimum lining and 400 mm drum less 4 mm of wear.
+    expect(text).toContain(
+      'Wear limits for later visits: linings at least 3.00 mm thick (replace both shoes below it); drum diameter at least 396.0 mm.',
+    );
   });
 
   it('a caliper: pads, a disc and an air gap; no spring length, reserve stroke or preload', () => {

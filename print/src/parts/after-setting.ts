@@ -6,6 +6,35 @@ import { rotorOf } from './caution.js';
 /** 1.25 × rated load: the static test load of a crane hoist (common practice, from memory). */
 const STATIC_TEST_FACTOR = 1.25;
 
+/** An input of the sheet in SI, or null where the sheet has none (or it does not read). */
+function inputSI(sheet: PrintableSheet, key: string, dimension: 'length' | 'mass'): number | null {
+  const v = sheet.inputs.find((i) => i.field.key === key)?.value;
+  if (!v || typeof v !== 'object') return null;
+  try {
+    return toSI(v.value, v.unit, dimension);
+  } catch {
+    return null;
+  }
+}
+
+/**
+ * The wear limits a fitter checks on later visits, from the sheet's own inputs: the lining's
+ * minimum thickness and the drum's smallest diameter (as drawn less the wear allowance).
+ */
+function wearLimitsLine(sheet: PrintableSheet): string | null {
+  const lining = inputSI(sheet, 'liningMinThickness', 'length');
+  const drum = inputSI(sheet, 'drumDiameter', 'length');
+  const allowance = inputSI(sheet, 'drumWearAllowance', 'length');
+  const parts: string[] = [];
+  if (lining !== null)
+    parts.push(
+      `linings at least ${qty(lining, 'length', sheet.unitSystem)} thick (replace both shoes below it)`,
+    );
+  if (drum !== null && allowance !== null)
+    parts.push(`drum diameter at least ${qty(drum - allowance, 'length', sheet.unitSystem)}`);
+  return parts.length ? `Wear limits for later visits: ${parts.join('; ')}.` : null;
+}
+
 /** The hoist's static test load from the rated load on the sheet, or null for other drives. */
 export function staticTestLoad(sheet: PrintableSheet): string | null {
   if (sheet.sheetType.id !== 'hoist-shoe-brake') return null;
@@ -93,6 +122,8 @@ export function afterSettingLines(sheet: PrintableSheet): string[] {
     );
   }
   lines.push('Guards refitted, tools removed, limit switches and brake monitoring working.');
+  const wear = wearLimitsLine(sheet);
+  if (wear) lines.push(wear);
   if (again.length > 0)
     lines.push(
       `After running in (first shift, or the first few hundred operations): re-check ${listed(again)}.`,
