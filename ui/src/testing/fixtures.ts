@@ -1,5 +1,12 @@
 import type { SheetEvaluation } from '@holdfast/calc';
-import type { FieldTarget, Position, Register, Session, User } from '@holdfast/shared';
+import type {
+  FieldTarget,
+  Position,
+  Register,
+  RevisionSummary,
+  Session,
+  User,
+} from '@holdfast/shared';
 
 export function makeUser(overrides: Partial<User> = {}): User {
   return {
@@ -135,5 +142,21 @@ export function springTarget(value: number, label = 'Spring length'): FieldTarge
       source: 'common practice',
       confidence: 'common practice',
     },
+  };
+}
+
+/** A revision of a sheet as its page lists it, by label (its id follows from the label). */
+export function revisionSummary(label: string, state: RevisionSummary['state']): RevisionSummary {
+  return {
+    id: `00000000-0000-4000-8000-00000000000${label.charCodeAt(0) - 64}`,
+    label,
+    state,
+    author: { id: testUsers.engineer.id, displayName: 'Erin Vale', initials: 'EV' },
+    checker: null,
+    changeNote: '',
+    createdAt: '2026-12-01T08:00:00.000Z',
+    submittedAt: null,
+    approvedAt: null,
+    returnedAt: null,
   };
 }

@@ -1,24 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { screen } from '@testing-library/react';
-import type { RevisionSummary, SheetDetail } from '@holdfast/shared';
+import type { SheetDetail } from '@holdfast/shared';
 import { createTestQueryClient, renderRoutes } from '../../../testing/render';
 import { mockFetch } from '../../../testing/mock-fetch';
-import { testUsers } from '../../../testing/fixtures';
+import { revisionSummary, testUsers } from '../../../testing/fixtures';
 import { clientLoader, Component as SheetPage, readableRevisionId } from './sheet-page';
 
 const person = { id: testUsers.engineer.id, displayName: 'Erin Vale', initials: 'EV' };
-const draft: RevisionSummary = {
-  id: '00000000-0000-4000-8000-00000000000a',
-  label: 'A',
-  state: 'draft',
-  author: person,
-  checker: null,
-  changeNote: '',
-  createdAt: '2026-12-01T08:00:00.000Z',
-  submittedAt: null,
-  approvedAt: null,
-  returnedAt: null,
-};
+const draft = revisionSummary('A', 'draft');
 const sheet: SheetDetail = {
   id: '00000000-0000-4000-8000-0000000000f1',
   documentNumber: 'HF-NRW-0003',
