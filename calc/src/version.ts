@@ -68,5 +68,9 @@
  * end-type steps name no table in their labels (the reference gives Shigley's Table 10-1); the
  * lining data's source names the handbook's edition (Tribology Handbook, 2nd ed.); the temperature
  * chart draws the mean steady temperature its hour of duty tends to (the check's own value).
+ * Also in 1.5.0, with no number moved: the hoist's redundancy checks of each brake alone stopping
+ * the load are left out where they repeat the sheet's own stop figure for figure (η_bd = 1: the
+ * sheet's stop is worked out with this brake alone), with a note saying so; one failure was
+ * counted twice. The demo hoist has 45 checks (was 47).
  */
 export const CORE_VERSION = '1.5.0';

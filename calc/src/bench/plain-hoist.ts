@@ -276,8 +276,7 @@ export function plainHoist(x: PlainHoistInputs): PlainHoistResults {
   const checks: PlainHoistResults['checks'] = {
     'holding-brakes-installed': minU(2, 2),
     'each-brake-holds-alone': minU(Mlow, Mhoist),
-    'each-brake-stops-alone': minU(Mlow, ML),
-    'each-brake-stopping-distance': maxU(sStop, x.maxStoppingDistance),
+    // Each brake alone stopping the load is the sheet's own stop here (η_bd = 1): checked once.
     'torque-nominal': minU(Mnom, Mreq),
     'torque-min-friction': minU(Mmin, Mreq),
     'torque-worn-min-friction': minU(MwMin, Mreq),

@@ -92,6 +92,40 @@ export function hoistRedundancy(r: HoistRedundancyInput): {
   return { checks, warnings };
 }
 
+/** Each brake's stop checks of the redundancy, and the sheet's own stop checks they repeat. */
+const SAME_STOP: readonly [each: string, own: string][] = [
+  ['each-brake-stops-alone', 'stops-load'],
+  ['each-brake-stopping-distance', 'stopping-distance'],
+];
+
+/**
+ * The redundancy's checks less those the sheet's own stop already makes with the same figures:
+ * the sheet works its stop out with this brake alone (its lowest torque in service), so with
+ * η_bd = 1 "each brake alone stops the load" is that stop, and printing it twice counted one
+ * failure as two. Kept where the figures differ (η_bd below 1 on the sheet's stop).
+ */
+export function withoutRepeatedStops(
+  each: readonly CheckResult[],
+  own: readonly CheckResult[],
+): { checks: CheckResult[]; notes: string[] } {
+  const repeated = new Set<string>();
+  for (const [eachId, ownId] of SAME_STOP) {
+    const a = each.find((c) => c.id === eachId);
+    const b = own.find((c) => c.id === ownId);
+    if (a && b && sameFigure(a.value, b.value) && sameFigure(a.limit, b.limit))
+      repeated.add(eachId);
+  }
+  if (repeated.size === 0) return { checks: [...each], notes: [] };
+  return {
+    checks: each.filter((c) => !repeated.has(c.id)),
+    notes: [
+      'Each holding brake alone stops the lowering load: the stop on this sheet is worked out with this brake alone (its lowest torque in service, no gear-loss credit), so its checks stand for each brake alone and are not printed twice.',
+    ],
+  };
+}
+
+const sameFigure = (a: number, b: number) => Math.abs(a - b) <= 1e-9 * Math.max(1, Math.abs(b));
+
 /**
  * The tests the sheet asks for before the brake goes into service, printed with the values of
  * this hoist: the load test (static and dynamic, each brake alone when there are two) and the

@@ -29,6 +29,7 @@ import { evaluateShoeBrake, validateShoeInputs } from './shoe-brake-evaluate.js'
 import {
   HOIST_SERVICE_FIELDS,
   hoistRedundancy,
+  withoutRepeatedStops,
   hoistTestRequirements,
 } from './hoist-redundancy.js';
 
@@ -271,9 +272,11 @@ export function evaluateHoistShoeBrake(
     stoppingDistanceLimit: v.maxStoppingDistance,
     driveTrainRating: v.maxBrakeTorque,
   });
-  out.checks.unshift(...red.checks);
+  const each = withoutRepeatedStops(red.checks, out.checks);
+  out.checks.unshift(...each.checks);
   out.warnings.push(
     ...red.warnings,
+    ...each.notes,
     ...hoistTestRequirements({ ratedLoad: v.load, requiredTorque: Mreq, brakesInstalled }),
   );
   publishSteps(out, d, [

@@ -141,10 +141,21 @@ describe('holding-brake redundancy on the hoist sheet', () => {
     const e = hoist.evaluate(demoInputs(hoist), crane);
     expect(check(e, 'holding-brakes-installed')!.pass).toBe(true);
     expect(check(e, 'each-brake-holds-alone')!.pass).toBe(true);
-    expect(check(e, 'each-brake-stops-alone')!.pass).toBe(true);
+    // With η_bd = 1 each brake's stop is the sheet's own stop (one brake, lowest torque): once.
+    expect(check(e, 'each-brake-stops-alone')).toBeUndefined();
+    expect(check(e, 'each-brake-stopping-distance')).toBeUndefined();
+    expect(check(e, 'stops-load')!.pass).toBe(true);
+    expect(e.warnings.join(' ')).toMatch(/its checks stand for each brake alone/);
     expect(check(e, 'brakes-together-drive-train')).toBeUndefined();
     expect(check(e, 'torque-max-friction')!.pass).toBe(true);
     expect(e.warnings.join(' ')).toMatch(/1910\.179\(f\)\(2\)\(vi\).*§4898\(h\)/);
+  });
+
+  it("keeps each brake's own stop checks where the sheet's stop credits gear losses (η_bd below 1)", () => {
+    const e = hoist.evaluate({ ...demoInputs(hoist), backDrivingEfficiency: 0.9 }, crane);
+    expect(check(e, 'each-brake-stops-alone')).toBeDefined();
+    expect(check(e, 'each-brake-stopping-distance')).toBeDefined();
+    expect(e.warnings.join(' ')).not.toMatch(/its checks stand for each brake alone/);
   });
 
   it('hot metal on one holding brake fails the redundancy check', () => {
