@@ -71,6 +71,9 @@
  * Also in 1.5.0, with no number moved: the hoist's redundancy checks of each brake alone stopping
  * the load are left out where they repeat the sheet's own stop figure for figure (η_bd = 1: the
  * sheet's stop is worked out with this brake alone), with a note saying so; one failure was
- * counted twice. The demo hoist has 45 checks (was 47).
+ * counted twice. The demo hoist has 45 checks (was 47). With no lift stop, the card's working
+ * stroke and clearance take their tolerance from the reserve stroke's through the stroke chain
+ * (−3 mm / +0 and −0.12 mm / +0 on the demo, was ± 10 % and −0.1 / +0.2 mm, which accepted a
+ * reserve below its target and refused the clearance a reserve of 23 mm gives).
  */
 export const CORE_VERSION = '1.5.0';

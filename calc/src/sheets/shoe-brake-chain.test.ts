@@ -279,3 +279,28 @@ describe('spring relaxation in service', () => {
     );
   });
 });
+
+describe('the stroke chain on the card, no lift stop', () => {
+  const setting = (e: ReturnType<typeof hoist.evaluate>, key: string) =>
+    e.fieldSettings.find((f) => f.key === key)!;
+
+  it('a reserve set anywhere in its tolerance leaves the clearance and working stroke inside theirs', () => {
+    const base = hoist.evaluate(demoInputs(hoist), crane);
+    for (const key of ['shoeClearance', 'workingStroke']) {
+      const f = setting(base, key);
+      const band = f.tolerance!.band;
+      if (band.kind !== 'absolute') throw new Error('absolute band expected');
+      // Reserve at the top of its −0 / +3 mm: the chain's values at the low end of theirs.
+      const high = hoist.evaluate(
+        { ...demoInputs(hoist), reserveStroke: { value: 23, unit: 'mm' } },
+        crane,
+      );
+      expect(nearlyEqual(setting(high, key).value, f.value - band.minus, 1e-9), key).toBe(true);
+      expect(band.plus, key).toBe(0);
+    }
+    // Demo: 50 mm nominal stroke, r_t 25: 1.20 mm at 20 mm reserve, 1.08 mm at 23 mm.
+    const clearance = setting(base, 'shoeClearance').tolerance!.band;
+    expect(clearance).toMatchObject({ kind: 'absolute' });
+    if (clearance.kind === 'absolute') expect(clearance.minus * 1000).toBeCloseTo(0.12, 12);
+  });
+});

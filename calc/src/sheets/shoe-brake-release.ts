@@ -8,6 +8,8 @@ import { makeCheck } from './checks.js';
 import type { ShoeInputs } from './shoe-brake-fields.js';
 import type { ShoeTorques } from './shoe-brake-torque.js';
 import type { ShoeChain } from './shoe-brake-chain.js';
+import { RESERVE_STROKE } from '../field/tolerances.js';
+import type { FieldTolerance } from '../field/tolerance-types.js';
 
 const REF_STROKE = "stroke budget (common practice; the thruster maker's data governs)";
 
@@ -184,15 +186,23 @@ export function shoeSettings(
         dimension: 'force',
         note: 'Follows from the spring length: set the length, not the force.',
       },
-      m(
-        'shoeClearance',
-        'Shoe clearance when released (each side, equal)',
-        chain.clearance,
-        chain.derivedClearance
-          ? 'No lift stop: follows from the stroke and reserve. ' + derived
-          : 'Set at the lift stop.',
-      ),
-      m('workingStroke', 'Thruster working stroke', rel.workingStroke, derived),
+      {
+        ...m(
+          'shoeClearance',
+          'Shoe clearance when released (each side, equal)',
+          chain.clearance,
+          chain.derivedClearance
+            ? 'No lift stop: follows from the stroke and reserve. ' + derived
+            : 'Set at the lift stop.',
+        ),
+        ...(chain.derivedClearance
+          ? { tolerance: throughStrokeChain(1 / v.thrusterTravelRatio, 'shoe clearance') }
+          : {}),
+      },
+      {
+        ...m('workingStroke', 'Thruster working stroke', rel.workingStroke, derived),
+        ...(chain.derivedClearance ? { tolerance: throughStrokeChain(1, 'working stroke') } : {}),
+      },
       m('reserveStroke', 'Reserve stroke to set (new lining)', v.reserveStroke),
       m('minReserveStroke', 'Re-adjust before the reserve stroke falls below', v.minReserveStroke),
       m(
@@ -213,6 +223,25 @@ export function shoeSettings(
 }
 
 const fmtN = (n: number) => String(Math.round(n));
+
+/**
+ * The tolerance of a value the stroke chain derives from the reserve stroke, with no lift stop:
+ * the released rod runs to its end stop, so the working stroke is what the reserve leaves
+ * (s_n − s_r) and the clearance that divided by the travel ratio. A reserve set anywhere in its
+ * −0 / +3 mm leaves the working stroke 0 to 3 mm short and the clearance 0 to 3/r_t mm small: the
+ * card's own ± 10 % stroke and −0.1 / +0.2 mm clearance would let a fitter accept a reserve that
+ * breaks its "never less" rule, and judge a clearance out that the reserve's band gives.
+ * `perReserve`: how much the value moves per unit of reserve stroke (1, or 1/r_t).
+ */
+function throughStrokeChain(perReserve: number, what: string): FieldTolerance {
+  const r = RESERVE_STROKE.band;
+  const [minus, plus] = r.kind === 'absolute' ? [r.plus, r.minus] : [0, 0];
+  return {
+    band: { kind: 'absolute', minus: minus * perReserve, plus: plus * perReserve },
+    source: `${what} follows from the reserve stroke's tolerance through the stroke chain (no lift stop): common practice`,
+    confidence: 'common practice',
+  };
+}
 
 /** What bounds the setting table besides the adjustable range. */
 export interface SettingBandLimits {
