@@ -74,6 +74,9 @@
  * counted twice. The demo hoist has 45 checks (was 47). With no lift stop, the card's working
  * stroke and clearance take their tolerance from the reserve stroke's through the stroke chain
  * (−3 mm / +0 and −0.12 mm / +0 on the demo, was ± 10 % and −0.1 / +0.2 mm, which accepted a
- * reserve below its target and refused the clearance a reserve of 23 mm gives).
+ * reserve below its target and refused the clearance a reserve of 23 mm gives). Field settings
+ * that wear moves carry their in-service limit (`inService`): the reserve stroke down to its
+ * minimum, and with no lift stop the working stroke and clearance up to their values there; a
+ * reading as found is judged against it.
  */
 export const CORE_VERSION = '1.5.0';

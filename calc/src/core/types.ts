@@ -144,6 +144,12 @@ export interface FieldSetting {
    * replaces the one its field card declares; absent: the card's (see `settingTolerance`).
    */
   tolerance?: FieldTolerance;
+  /**
+   * How far lining wear may move the value between visits before work is due: the reserve stroke
+   * down to its minimum; with no lift stop, the working stroke and the clearance up to what they
+   * are at that minimum. A reading as found is judged against it; the tolerance applies as left.
+   */
+  inService?: { kind: 'atLeast' | 'atMost'; value: number; label: string };
 }
 
 /** One input as the core used it: what was entered, and its value in SI. */
@@ -247,12 +253,6 @@ export interface FieldCardPlacement {
   role?: 'backOff' | 'preload';
   /** The band the measured value must lie in, with its source; absent for a derived value. */
   tolerance?: FieldTolerance;
-  /**
-   * The field setting whose value is this one's lowest in service (the reserve stroke's minimum
-   * before re-adjustment): wear moves the value between visits, so a reading as found is judged
-   * against it, and the tolerance applies to the value as left.
-   */
-  inServiceMinimum?: string;
 }
 
 /** The field setting card of a sheet type, declared with the sheet (never guessed from labels). */

@@ -37,8 +37,7 @@ export const SHOE_FIELD_CARD: FieldCardLayout = {
     springForce: tol(spring, T.SPRING_FORCE),
     shoeClearance: tol(clearance, T.SHOE_CLEARANCE),
     workingStroke: tol(thruster, T.WORKING_STROKE),
-    // Lining wear uses up the reserve: found on an inspection, it is judged against the minimum.
-    reserveStroke: { ...tol(thruster, T.RESERVE_STROKE), inServiceMinimum: 'minReserveStroke' },
+    reserveStroke: tol(thruster, T.RESERVE_STROKE),
     minReserveStroke: thruster,
     wearToReadjust: thruster,
     wearTorqueLost: thruster,

@@ -303,4 +303,20 @@ describe('the stroke chain on the card, no lift stop', () => {
     expect(clearance).toMatchObject({ kind: 'absolute' });
     if (clearance.kind === 'absolute') expect(clearance.minus * 1000).toBeCloseTo(0.12, 12);
   });
+
+  it('gives the in-service limits wear moves the chain to: the reserve down to its minimum', () => {
+    const e = hoist.evaluate(demoInputs(hoist), crane);
+    // Demo: 50 mm nominal stroke, reserve 20 mm set and 5 mm minimum, r_t 25.
+    expect(setting(e, 'reserveStroke').inService).toMatchObject({ kind: 'atLeast' });
+    expect(setting(e, 'reserveStroke').inService!.value * 1000).toBeCloseTo(5, 12);
+    expect(setting(e, 'workingStroke').inService).toMatchObject({ kind: 'atMost' });
+    expect(setting(e, 'workingStroke').inService!.value * 1000).toBeCloseTo(45, 9);
+    expect(setting(e, 'shoeClearance').inService!.value * 1000).toBeCloseTo(1.8, 9);
+    // With a lift stop the clearance is set and does not follow the reserve.
+    const stop = hoist.evaluate(
+      { ...demoInputs(hoist), liftStop: true, clearance: { value: 0.8, unit: 'mm' } },
+      crane,
+    );
+    expect(setting(stop, 'shoeClearance').inService).toBeUndefined();
+  });
 });

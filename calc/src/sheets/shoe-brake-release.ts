@@ -151,6 +151,38 @@ export function shoeSettings(
     ...(note === undefined ? {} : { note }),
   });
   const derived = 'Derived, not set: check only.';
+  // Lining wear uses the reserve up to its minimum between visits. With no lift stop the rod runs
+  // to its end stop, so the working stroke and the clearance grow by what the reserve loses.
+  const wornBy = v.reserveStroke - v.minReserveStroke;
+  const inServiceOf = (key: string): Pick<FieldSetting, 'inService'> => {
+    const atMinimum = 'when the reserve stroke reaches its minimum (re-adjust then)';
+    if (key === 'reserveStroke')
+      return {
+        inService: {
+          kind: 'atLeast',
+          value: v.minReserveStroke,
+          label: 'the minimum reserve stroke (re-adjust below it)',
+        },
+      };
+    if (!chain.derivedClearance) return {};
+    if (key === 'workingStroke')
+      return {
+        inService: {
+          kind: 'atMost',
+          value: rel.workingStroke + wornBy,
+          label: `the working stroke ${atMinimum}`,
+        },
+      };
+    if (key === 'shoeClearance')
+      return {
+        inService: {
+          kind: 'atMost',
+          value: chain.clearance + wornBy / v.thrusterTravelRatio,
+          label: `the clearance ${atMinimum}`,
+        },
+      };
+    return {};
+  };
   return {
     checks: [
       range('spring-setting-max', 'upper', v.springForceMax, 'max'),
@@ -187,6 +219,7 @@ export function shoeSettings(
         note: 'Follows from the spring length: set the length, not the force.',
       },
       {
+        ...inServiceOf('shoeClearance'),
         ...m(
           'shoeClearance',
           'Shoe clearance when released (each side, equal)',
@@ -200,10 +233,14 @@ export function shoeSettings(
           : {}),
       },
       {
+        ...inServiceOf('workingStroke'),
         ...m('workingStroke', 'Thruster working stroke', rel.workingStroke, derived),
         ...(chain.derivedClearance ? { tolerance: throughStrokeChain(1, 'working stroke') } : {}),
       },
-      m('reserveStroke', 'Reserve stroke to set (new lining)', v.reserveStroke),
+      {
+        ...m('reserveStroke', 'Reserve stroke to set (new lining)', v.reserveStroke),
+        ...inServiceOf('reserveStroke'),
+      },
       m('minReserveStroke', 'Re-adjust before the reserve stroke falls below', v.minReserveStroke),
       m(
         'wearToReadjust',

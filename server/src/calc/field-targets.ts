@@ -95,7 +95,7 @@ export function fieldTargets(sheetType: string, evaluation: unknown): FieldTarge
   const card = getSheetType(sheetType)?.fieldCard;
   return settings.map((s: FieldSetting) => {
     const p = card?.settings[s.key];
-    const inService = inServiceLimit(p?.inServiceMinimum, settings);
+    const inService = inServiceLimit(s);
     return {
       settingKey: s.key,
       label: s.label,
@@ -114,21 +114,18 @@ export function fieldTargets(sheetType: string, evaluation: unknown): FieldTarge
 }
 
 /**
- * The in-service limit of a setting, where the sheet gives one: a reserve stroke found at 16 mm on
- * an inspection is wear, not a fault, while it stays above the minimum (5 mm on the demo hoist).
+ * The in-service limit of a setting, where the sheet gives one (calc's `inService`): a reserve
+ * stroke found at 16 mm on an inspection is wear, not a fault, while it stays above the minimum
+ * (5 mm on the demo hoist); with no lift stop the clearance grows as the reserve shrinks.
  */
-function inServiceLimit(
-  limitKey: string | undefined,
-  settings: readonly FieldSetting[],
-): FieldTarget['inService'] {
-  const limit = limitKey ? settings.find((f) => f.key === limitKey) : undefined;
-  if (!limit) return undefined;
+function inServiceLimit(s: FieldSetting): FieldTarget['inService'] {
+  if (!s.inService) return undefined;
   return {
-    value: limit.value,
-    label: limit.label,
+    value: s.inService.value,
+    label: s.inService.label,
     tolerance: {
-      band: { kind: 'atLeast' },
-      source: `in service: ${limit.label.toLowerCase()} (the sheet's minimum; re-adjust below it)`,
+      band: { kind: s.inService.kind },
+      source: `in service: up to ${s.inService.label}`,
       confidence: 'common practice',
     },
   };

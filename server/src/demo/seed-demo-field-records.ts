@@ -56,7 +56,8 @@ export async function seedDemoFieldRecords(
     daysAgo,
     kind: i === 0 ? 'commissioning' : 'periodic-inspection',
     // Inspections find the reserve stroke and leave it (no re-adjustment yet): as left empty.
-    // Shoe clearance as set on the card's 1.2 mm and found within its −0.1/+0.2 mm band.
+    // Shoe clearance set to the card's 1.2 mm; found a little wider, as the reserve shrinks (no
+    // lift stop), well inside its in-service maximum.
     found: i === 0 ? {} : { ...reserve(stroke), [CLEARANCE]: 1.25 * MM },
     left: i === 0 ? { ...reserve(stroke), [CLEARANCE]: 1.2 * MM } : {},
     lining: [a * MM, b * MM],

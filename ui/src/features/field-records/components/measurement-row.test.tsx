@@ -113,4 +113,40 @@ describe('a measured value on the record form', () => {
     renderRow(spring, { value: -1.2, unit: 'mm' });
     expect(screen.getByText('A reading cannot be negative')).toBeInTheDocument();
   });
+
+  it('judges a clearance that grows with wear against its in-service maximum', () => {
+    const clearance: FieldTarget = {
+      ...springTarget(0.0012, 'Shoe clearance when released (each side, equal)'),
+      settingKey: 'shoeClearance',
+      group: 'clearance',
+      inService: {
+        value: 0.0018,
+        label: 'the clearance when the reserve stroke reaches its minimum',
+        tolerance: {
+          band: { kind: 'atMost' },
+          source: 'in service',
+          confidence: 'common practice',
+        },
+      },
+    };
+    const row = (asFound: number) =>
+      renderWithProviders(
+        <MeasurementRow
+          target={clearance}
+          draft={{ asFound: { value: asFound, unit: 'mm' }, asLeft: undefined, reason: '' }}
+          withAsFound
+          errors={{}}
+          onChange={() => undefined}
+        />,
+      );
+    const { unmount } = row(1.25);
+    expect(screen.getByText(/^Serviceable/)).toHaveTextContent(
+      'Serviceable: 0.55 mm below the 1.80 mm in-service maximum',
+    );
+    unmount();
+    row(1.9);
+    expect(screen.getByText(/^Above the/)).toHaveTextContent(
+      'Above the 1.80 mm in-service maximum: re-adjust',
+    );
+  });
 });

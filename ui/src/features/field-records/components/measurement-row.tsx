@@ -65,7 +65,8 @@ function VerdictBadge({ target, value }: { target: FieldTarget; value: InputValu
 
 /**
  * An as-found reading of a setting that wear moves: judged against its in-service limit, in the
- * fitter's words ("Serviceable: 11.0 mm above the 5.0 mm minimum" or "Below the minimum: re-adjust").
+ * fitter's words ("Serviceable: 11.0 mm above the 5.0 mm minimum", "Below the 5.0 mm minimum:
+ * re-adjust"; for a clearance that grows, "… below the 1.80 mm in-service maximum").
  */
 function AsFoundBadge({ target, value }: { target: FieldTarget; value: InputValue | undefined }) {
   if (!target.inService) return <VerdictBadge target={target} value={value} />;
@@ -80,11 +81,14 @@ function AsFoundBadge({ target, value }: { target: FieldTarget; value: InputValu
     undefined,
     readingPrecision(target.settingKey, dim),
   ).text;
+  // A reserve stroke wears down to its minimum; with no lift stop the clearance grows to a maximum.
+  const least = target.inService.tolerance.band.kind === 'atLeast';
+  const bound = least ? `${limit} minimum` : `${limit} in-service maximum`;
   return (
     <Badge color={verdict.status === 'in' ? 'pass' : 'fail'} size="lg">
       {verdict.status === 'in'
-        ? `Serviceable: ${margin} above the ${limit} minimum`
-        : `Below the ${limit} minimum: re-adjust`}
+        ? `Serviceable: ${margin} ${least ? 'above' : 'below'} the ${bound}`
+        : `${least ? 'Below' : 'Above'} the ${bound}: re-adjust`}
     </Badge>
   );
 }
