@@ -94,9 +94,12 @@ export const ResultsPanel = memo(function ResultsPanel(props: ResultsPanelProps)
           </Badge>
         ) : null}
         {shown ? (
-          <Text size="xs" c="dimmed">
-            {shown.checks.length - failing} of {shown.checks.length} checks pass · core{' '}
-            {shown.coreVersion}
+          <Text size="xs" c="dimmed" data-testid="check-count">
+            {/* While an input is not valid the count is the last valid inputs', and says so. */}
+            {evaluation
+              ? `${shown.checks.length - failing} of ${shown.checks.length} checks pass`
+              : `with the last valid inputs ${shown.checks.length - failing} of ${shown.checks.length} checks passed`}{' '}
+            · core {shown.coreVersion}
           </Text>
         ) : null}
       </Group>

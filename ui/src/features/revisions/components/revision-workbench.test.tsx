@@ -55,6 +55,10 @@ describe('RevisionWorkbench', () => {
     expect(screen.getByText(/“parsecs” is not a unit for this field/)).toBeInTheDocument();
     expect(screen.getByText('Some inputs need attention')).toBeInTheDocument();
     expect(screen.getByText(/from the last valid inputs/)).toBeInTheDocument();
+    // The count says whose it is: not "n of n checks pass" beside an input that is not valid.
+    expect(screen.getByTestId('check-count')).toHaveTextContent(
+      /^with the last valid inputs \d+ of \d+ checks passed/,
+    );
     expect(torqueCheck()).toHaveTextContent('640.0 N·m');
   });
 
