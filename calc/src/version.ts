@@ -77,6 +77,8 @@
  * reserve below its target and refused the clearance a reserve of 23 mm gives). Field settings
  * that wear moves carry their in-service limit (`inService`): the reserve stroke down to its
  * minimum, and with no lift stop the working stroke and clearance up to their values there; a
- * reading as found is judged against it.
+ * reading as found is judged against it. The hoist's load and torque test notes give their
+ * figures in US units too (27550 lb, 133 lbf·ft beside 12500 kg, 180 N·m), rounded the same safe
+ * way, as a note is one text for both unit systems.
  */
 export const CORE_VERSION = '1.5.0';

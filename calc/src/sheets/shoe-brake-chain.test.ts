@@ -222,6 +222,10 @@ describe('main spring, thruster extremes and test requirements', () => {
     expect(w).toMatch(/1910\.179\(k\)\(2\)/);
     expect(w).toMatch(/each holding brake alone/);
     expect(w).toMatch(/Static torque test after the linings have bedded in: .*apply 180 N·m/);
+    // The same figures in US units for a sheet printed in them: 12 500 kg = 27 557.8 lb, down to
+    // 27 550 lb; 179.35 N·m = 132.28 lbf·ft, up to 133 lbf·ft (the required torque, not less).
+    expect(w).toMatch(/at most 12500 kg \(27550 lb;/);
+    expect(w).toMatch(/apply 180 N·m \(133 lbf·ft;/);
   });
 
   it('never prints a test load above 125 % nor a test torque below the required torque', () => {
@@ -233,6 +237,9 @@ describe('main spring, thruster extremes and test requirements', () => {
     });
     expect(load).toMatch(/at most 12500 kg/);
     expect(torque).toMatch(/apply 101 N·m/);
+    // 12 506.25 kg = 27 571.6 lb: down to 27 570 lb; 100.2 N·m = 73.90 lbf·ft: up to 74.
+    expect(load).toMatch(/\(27570 lb;/);
+    expect(torque).toMatch(/\(74 lbf·ft;/);
   });
 });
 
