@@ -39,7 +39,9 @@ export function SettingTable(props: {
   const columns = settingColumns(table, system);
   const extra = props.extra ?? [];
   return (
-    <View>
+    // Kept whole: a table split over the page went on without its title or column heads, and a
+    // fitter read bare numbers at the top of page 2.
+    <View wrap={false}>
       <Heading level={2}>{settingTableTitle(table.title, system)}</Heading>
       {band && (
         <Text style={{ fontSize: 7.5, marginBottom: 3 }}>{bandSentence(band, system, ev)}</Text>
