@@ -8,9 +8,12 @@ import {
   acceptedRange,
   bandedTolerance,
   getSheetType,
+  settingTableTitle,
   settingTolerance,
+  toDisplay,
   toleranceBeyondBand,
   toleranceText,
+  type Dimension,
 } from '@holdfast/calc';
 
 // The same renderers over real calc evaluations of every sheet type's default inputs.
@@ -169,6 +172,24 @@ describe.each(TYPES)('%s, real evaluation', (sheetTypeId) => {
     }
     // An input the sheet uses is never marked.
     expect(flat).not.toMatch(/Rated load[^—]*— not used/);
+  });
+
+  it('keeps each setting table of the card on one page, its title with its last row', () => {
+    const ev = sheet.evaluation!;
+    for (const t of ev.tables) {
+      const title = settingTableTitle(t.title, sheet.unitSystem).slice(0, 30);
+      const page = card.pageText.findIndex((p) => p.replace(/\s+/g, ' ').includes(title));
+      expect(page, t.id).toBeGreaterThanOrEqual(0);
+      // The table's last setting, as its first column prints it, is on the title's page.
+      const last = t.rows[t.rows.length - 1]!;
+      const key = t.columns[0]!.key;
+      const shown = toDisplay(
+        last[key]!,
+        t.columns[0]!.dimension as Dimension,
+        sheet.unitSystem,
+      ).number;
+      expect(card.pageText[page], `${t.id} last row ${shown}`).toContain(shown);
+    }
   });
 
   it("speaks of the brake's own parts on the card: pads and a disc, or lining and a drum", () => {
