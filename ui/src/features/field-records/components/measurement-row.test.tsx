@@ -68,44 +68,23 @@ describe('a measured value on the record form', () => {
 
   it("judges a reserve stroke as found against the in-service minimum, in the fitter's words", () => {
     const reserve: FieldTarget = {
+      ...springTarget(0.02, 'Reserve stroke to set (new lining)'),
       settingKey: 'reserveStroke',
-      label: 'Reserve stroke to set (new lining)',
-      value: 0.02,
-      unit: 'm',
-      dimension: 'length',
       group: 'thruster',
       tolerance: {
         band: { kind: 'absolute', minus: 0, plus: 0.003 },
         source: 'common practice',
         confidence: 'common practice',
       },
-      inService: {
-        value: 0.005,
-        label: 'Re-adjust before the reserve stroke falls below',
-        tolerance: {
-          band: { kind: 'atLeast' },
-          source: 'in service',
-          confidence: 'common practice',
-        },
-      },
+      inService: inService(0.005, 'atLeast'),
     };
-    const row = (asFound: number) =>
-      renderWithProviders(
-        <MeasurementRow
-          target={reserve}
-          draft={{ asFound: { value: asFound, unit: 'mm' }, asLeft: undefined, reason: '' }}
-          withAsFound
-          errors={{}}
-          onChange={() => undefined}
-        />,
-      );
     // 16 mm found, 20 mm set: lining wear, not a fault.
-    const { unmount } = row(16);
+    const found = renderFound(reserve, 16);
     expect(screen.getByText(/^Serviceable/)).toHaveTextContent(
       'Serviceable: 11.0 mm above the 5.0 mm minimum',
     );
-    unmount();
-    row(4);
+    found.unmount();
+    renderFound(reserve, 4);
     expect(screen.getByText(/^Below the/)).toHaveTextContent('Below the 5.0 mm minimum: re-adjust');
   });
 
@@ -119,34 +98,38 @@ describe('a measured value on the record form', () => {
       ...springTarget(0.0012, 'Shoe clearance when released (each side, equal)'),
       settingKey: 'shoeClearance',
       group: 'clearance',
-      inService: {
-        value: 0.0018,
-        label: 'the clearance when the reserve stroke reaches its minimum',
-        tolerance: {
-          band: { kind: 'atMost' },
-          source: 'in service',
-          confidence: 'common practice',
-        },
-      },
+      inService: inService(0.0018, 'atMost'),
     };
-    const row = (asFound: number) =>
-      renderWithProviders(
-        <MeasurementRow
-          target={clearance}
-          draft={{ asFound: { value: asFound, unit: 'mm' }, asLeft: undefined, reason: '' }}
-          withAsFound
-          errors={{}}
-          onChange={() => undefined}
-        />,
-      );
-    const { unmount } = row(1.25);
+    const found = renderFound(clearance, 1.25);
     expect(screen.getByText(/^Serviceable/)).toHaveTextContent(
       'Serviceable: 0.55 mm below the 1.80 mm in-service maximum',
     );
-    unmount();
-    row(1.9);
+    found.unmount();
+    renderFound(clearance, 1.9);
     expect(screen.getByText(/^Above the/)).toHaveTextContent(
       'Above the 1.80 mm in-service maximum: re-adjust',
     );
   });
 });
+
+/** An in-service limit of a target, as the field form carries it. */
+function inService(value: number, kind: 'atLeast' | 'atMost'): FieldTarget['inService'] {
+  return {
+    value,
+    label: 'in service',
+    tolerance: { band: { kind }, source: 'in service', confidence: 'common practice' },
+  };
+}
+
+/** The row of `target` with an as-found reading in mm typed in, on an inspection. */
+function renderFound(target: FieldTarget, mm: number) {
+  return renderWithProviders(
+    <MeasurementRow
+      target={target}
+      draft={{ asFound: { value: mm, unit: 'mm' }, asLeft: undefined, reason: '' }}
+      withAsFound
+      errors={{}}
+      onChange={() => undefined}
+    />,
+  );
+}
