@@ -3,6 +3,7 @@ import { holdingBrakeRedundancy, type RedundancyBrake } from '../duty/redundancy
 import * as q from '../units/quantities.js';
 import { flag } from './field-builders.js';
 import { makeCheck } from './checks.js';
+import { toDisplay } from '../units/display.js';
 
 /** Service inputs that decide how many holding brakes the hoisting unit needs. */
 export const HOIST_SERVICE_FIELDS = [
@@ -126,10 +127,6 @@ export function withoutRepeatedStops(
 
 const sameFigure = (a: number, b: number) => Math.abs(a - b) <= 1e-9 * Math.max(1, Math.abs(b));
 
-/** One pound (avoirdupois) in kg and one pound-force foot in N·m (exact by definition). */
-const LB = 0.45359237;
-const LBF_FT = 0.45359237 * 9.80665 * 0.3048;
-
 /**
  * The tests the sheet asks for before the brake goes into service, printed with the values of
  * this hoist: the load test (static and dynamic, each brake alone when there are two) and the
@@ -146,8 +143,8 @@ export function hoistTestRequirements(r: {
   const testTorque = Math.ceil(r.requiredTorque);
   // The same figures in US customary units, rounded the same way, for a sheet printed in them
   // (a note is one text for both unit systems).
-  const testLoadLb = Math.floor((1.25 * r.ratedLoad) / LB / 10) * 10;
-  const testTorqueLbfFt = Math.ceil(r.requiredTorque / LBF_FT);
+  const testLoadLb = Math.floor(toDisplay(1.25 * r.ratedLoad, 'mass', 'US', 'lb').value / 10) * 10;
+  const testTorqueLbfFt = Math.ceil(toDisplay(r.requiredTorque, 'torque', 'US', 'lbf ft').value);
   const each = r.brakesInstalled > 1 ? ' with each holding brake alone (the other held open)' : '';
   return [
     `Load test before service: test load not more than 125 % of the rated load, here at most ${testLoad} kg (${testLoadLb} lb; 29 CFR 1910.179(k)(2), from memory; ASME B30.2 states the same limit, from memory). Static: hold the test load clear of the ground${each}. Dynamic: stop the rated load lowering at full speed${each} (common practice).`,

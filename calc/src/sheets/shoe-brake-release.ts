@@ -153,36 +153,21 @@ export function shoeSettings(
   const derived = 'Derived, not set: check only.';
   // Lining wear uses the reserve up to its minimum between visits. With no lift stop the rod runs
   // to its end stop, so the working stroke and the clearance grow by what the reserve loses.
+  // A value the stroke chain derives from the reserve (no lift stop): its tolerance follows from
+  // the reserve's, and it grows by what the reserve loses down to its minimum. `perReserve`: how
+  // far it moves per unit of reserve stroke (1 for the working stroke, 1/r_t for the clearance).
   const wornBy = v.reserveStroke - v.minReserveStroke;
-  const inServiceOf = (key: string): Pick<FieldSetting, 'inService'> => {
-    const atMinimum = 'when the reserve stroke reaches its minimum (re-adjust then)';
-    if (key === 'reserveStroke')
-      return {
-        inService: {
-          kind: 'atLeast',
-          value: v.minReserveStroke,
-          label: 'the minimum reserve stroke (re-adjust below it)',
-        },
-      };
-    if (!chain.derivedClearance) return {};
-    if (key === 'workingStroke')
-      return {
-        inService: {
-          kind: 'atMost',
-          value: rel.workingStroke + wornBy,
-          label: `the working stroke ${atMinimum}`,
-        },
-      };
-    if (key === 'shoeClearance')
-      return {
-        inService: {
-          kind: 'atMost',
-          value: chain.clearance + wornBy / v.thrusterTravelRatio,
-          label: `the clearance ${atMinimum}`,
-        },
-      };
-    return {};
-  };
+  const fromReserve = (value: number, perReserve: number, what: string) =>
+    chain.derivedClearance
+      ? {
+          tolerance: throughStrokeChain(perReserve, what),
+          inService: {
+            kind: 'atMost' as const,
+            value: value + wornBy * perReserve,
+            label: `the ${what} when the reserve stroke reaches its minimum (re-adjust then)`,
+          },
+        }
+      : {};
   return {
     checks: [
       range('spring-setting-max', 'upper', v.springForceMax, 'max'),
@@ -219,7 +204,6 @@ export function shoeSettings(
         note: 'Follows from the spring length: set the length, not the force.',
       },
       {
-        ...inServiceOf('shoeClearance'),
         ...m(
           'shoeClearance',
           'Shoe clearance when released (each side, equal)',
@@ -228,18 +212,19 @@ export function shoeSettings(
             ? 'No lift stop: follows from the stroke and reserve. ' + derived
             : 'Set at the lift stop.',
         ),
-        ...(chain.derivedClearance
-          ? { tolerance: throughStrokeChain(1 / v.thrusterTravelRatio, 'shoe clearance') }
-          : {}),
+        ...fromReserve(chain.clearance, 1 / v.thrusterTravelRatio, 'clearance'),
       },
       {
-        ...inServiceOf('workingStroke'),
         ...m('workingStroke', 'Thruster working stroke', rel.workingStroke, derived),
-        ...(chain.derivedClearance ? { tolerance: throughStrokeChain(1, 'working stroke') } : {}),
+        ...fromReserve(rel.workingStroke, 1, 'working stroke'),
       },
       {
         ...m('reserveStroke', 'Reserve stroke to set (new lining)', v.reserveStroke),
-        ...inServiceOf('reserveStroke'),
+        inService: {
+          kind: 'atLeast',
+          value: v.minReserveStroke,
+          label: 'the minimum reserve stroke (re-adjust below it)',
+        },
       },
       m('minReserveStroke', 'Re-adjust before the reserve stroke falls below', v.minReserveStroke),
       m(

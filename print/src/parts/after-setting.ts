@@ -38,14 +38,8 @@ function wearLimitsLine(sheet: PrintableSheet): string | null {
 /** The hoist's static test load from the rated load on the sheet, or null for other drives. */
 export function staticTestLoad(sheet: PrintableSheet): string | null {
   if (sheet.sheetType.id !== 'hoist-shoe-brake') return null;
-  const rated = sheet.inputs.find((i) => i.field.key === 'load')?.value;
-  if (!rated || typeof rated !== 'object') return null;
-  try {
-    const kg = toSI(rated.value, rated.unit, 'mass') * STATIC_TEST_FACTOR;
-    return qty(kg, 'mass', sheet.unitSystem);
-  } catch {
-    return null;
-  }
+  const rated = inputSI(sheet, 'load', 'mass');
+  return rated === null ? null : qty(rated * STATIC_TEST_FACTOR, 'mass', sheet.unitSystem);
 }
 
 /**

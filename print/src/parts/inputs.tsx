@@ -17,6 +17,11 @@ function unusedWords(i: PrintableInput, sheet: PrintableSheet): string | null {
   return `not used (${flagWords}: No)`;
 }
 
+function labelOf(i: PrintableInput, sheet: PrintableSheet): string {
+  const unused = unusedWords(i, sheet);
+  return unused ? `${i.field.label} — ${unused}` : i.field.label;
+}
+
 /** Inputs grouped by section, as typed and in the sheet's unit system. */
 export function inputsBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBlock[] {
   const sections = sheet.sections.filter((sec) =>
@@ -49,7 +54,7 @@ export function inputsBlocks(ctx: BlockContext, sheet: PrintableSheet): FlowBloc
           },
         ],
         rows: g.items.map((i) => [
-          unusedWords(i, sheet) ? `${i.field.label} — ${unusedWords(i, sheet)}` : i.field.label,
+          labelOf(i, sheet),
           i.field.symbol,
           i.entered,
           // Only quantities change with the unit system; the rest would just repeat.

@@ -36,8 +36,19 @@ export function isMinorCheck(c: CheckResult): boolean {
  * each verdict rests on (a standard, a handbook table, common practice, the maker's data).
  */
 export function sourceMark(c: CheckResult, sheet: PrintableSheet): string {
-  const n = collectReferences(sheet).indexOf(c.source.trim());
-  return n < 0 ? '' : ` [${n + 1}]`;
+  const n = referenceNumbers(sheet).get(c.source.trim());
+  return n === undefined ? '' : ` [${n}]`;
+}
+
+/** Each reference's number, worked out once per sheet (every summary row asks). */
+const numbered = new WeakMap<PrintableSheet, Map<string, number>>();
+function referenceNumbers(sheet: PrintableSheet): Map<string, number> {
+  let m = numbered.get(sheet);
+  if (!m) {
+    m = new Map(collectReferences(sheet).map((r, i) => [r, i + 1]));
+    numbered.set(sheet, m);
+  }
+  return m;
 }
 
 function checkRow(c: CheckResult, sheet: PrintableSheet, verdictHeight: number) {

@@ -125,7 +125,7 @@ function inServiceLimit(s: FieldSetting): FieldTarget['inService'] {
     label: s.inService.label,
     tolerance: {
       band: { kind: s.inService.kind },
-      source: `in service: up to ${s.inService.label}`,
+      source: `in service: ${s.inService.label}`,
       confidence: 'common practice',
     },
   };
