@@ -43,7 +43,7 @@ function toleranceCell(
   tolerance: FieldTolerance | undefined,
   system: PrintUnitSystem,
 ): string {
-  const text = toleranceText(tolerance, f.dimension, system);
+  const text = toleranceText(tolerance, f.dimension, system, f.key);
   const range = acceptedRange(f.value, tolerance, f.key, f.dimension, system);
   return range ? `${range.text} (${text})` : text;
 }
@@ -110,7 +110,7 @@ function DiscStack(props: {
       </Text>
       {backOffTol && stack.backOff && (
         <Text>
-          Tolerance {toleranceText(backOffTol, stack.backOff.dimension, system)}
+          Tolerance {toleranceText(backOffTol, stack.backOff.dimension, system, stack.backOff.key)}
           {acceptedEnds(stack.backOff, backOffTol, system)}
           {backOffTol.rule ? `. ${backOffTol.rule}` : ''} ({backOffTol.source})
         </Text>

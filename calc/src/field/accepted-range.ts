@@ -1,6 +1,8 @@
 import type { Dimension } from '../core/types.js';
 import { toDisplay, withUnit, type UnitSystem } from '../units/display.js';
+import { toSI } from '../units/conversion.js';
 import { readingPrecision } from '../units/precision.js';
+import { lastPlace, numberOf } from '../units/printed-number.js';
 import { toleranceBounds } from './evaluate-tolerance.js';
 import type { FieldTolerance } from './tolerance-types.js';
 
@@ -43,10 +45,8 @@ export function acceptedRange(
     if (!outside) return shown;
     const step = lastPlace(shown.number, precision.digits);
     const inward = side === 'lower' ? printed + step : printed - step;
-    // Back to SI through the printed unit's factor: the same toDisplay prints it exactly.
-    const perUnit = toDisplay(1, dimension, system).value - toDisplay(0, dimension, system).value;
-    const zero = toDisplay(0, dimension, system).value;
-    return toDisplay((inward - zero) / perUnit, dimension, system, undefined, precision);
+    // Back to SI in the printed unit: the same toDisplay prints it exactly.
+    return toDisplay(toSI(inward, shown.unit, dimension), dimension, system, undefined, precision);
   };
   const lo = end(lower, 'lower');
   const hi = end(upper, 'upper');
@@ -57,14 +57,4 @@ export function acceptedRange(
     upper: hi.number,
     text: withUnit(`${lo.number} to ${hi.number}`, lo.label),
   };
-}
-
-const numberOf = (printed: string) => Number(printed.replace('−', '-'));
-
-/** The value of a printed number's last digit: 0.1 for '220.8', 10 for '1120' at 3 figures. */
-function lastPlace(printed: string, digits: number): number {
-  const dot = printed.indexOf('.');
-  if (dot >= 0) return 10 ** -(printed.length - dot - 1);
-  const integerDigits = printed.replace(/^[−-]/, '').length;
-  return 10 ** Math.max(0, integerDigits - digits);
 }

@@ -131,9 +131,9 @@ export function toleranceBeyondBand(
     };
     const of = f.key === table.columns[0]?.key ? '' : `a ${what(table)} of `;
     out.push(
-      `${f.label} ${toleranceText(declared, f.dimension, system)} would span ${of}` +
+      `${f.label} ${toleranceText(declared, f.dimension, system, f.key)} would span ${of}` +
         `${span(declared, s.toInput, 'force')}, past the band: the field card and the records hold it to ` +
-        `${toleranceText(held, f.dimension, system)} (${span(held, (v) => v, f.dimension)}).`,
+        `${toleranceText(held, f.dimension, system, f.key)} (${span(held, (v) => v, f.dimension)}).`,
     );
   }
   return out;

@@ -70,7 +70,7 @@ export function FieldRecordDocument(props: {
           rows={r.measurements.map((m) => [
             m.label,
             targetText(m, system),
-            toleranceText(m.tolerance, m.dimension as Dimension, system),
+            toleranceText(m.tolerance, m.dimension as Dimension, system, m.settingKey),
             reading(m.asFound, m.settingKey, m.dimension),
             reading(m.asLeft, m.settingKey, m.dimension),
             verdict(m.asLeftWithin),

@@ -127,7 +127,7 @@ export function MeasurementRow({
           <Text size="sm" c="dimmed">
             Target {settingText(target, target.value)}, tolerance{' '}
             {target.tolerance
-              ? `${toleranceText(target.tolerance, dim)} (${target.tolerance.source})${acceptedText(target)}`
+              ? `${toleranceText(target.tolerance, dim, 'SI', key)} (${target.tolerance.source})${acceptedText(target)}`
               : 'none declared'}
           </Text>
           {target.tolerance?.rule && <Text size="sm">{target.tolerance.rule}</Text>}

@@ -46,7 +46,9 @@ export function RecordValues({ measurements }: { measurements: readonly FieldMea
                 {shown(m, m.target, 'target')}
               </Table.Td>
               <Table.Td style={{ whiteSpace: 'nowrap' }}>
-                {m.tolerance ? toleranceText(m.tolerance, m.dimension as Dimension) : '—'}
+                {m.tolerance
+                  ? toleranceText(m.tolerance, m.dimension as Dimension, 'SI', m.settingKey)
+                  : '—'}
               </Table.Td>
               <Table.Td ta="right" style={{ whiteSpace: 'nowrap' }}>
                 {shown(m, m.asFound, 'reading')}
